@@ -1,0 +1,54 @@
+/**
+ * The architecture rule: src/chem is the pure computation core. It imports nothing from React,
+ * Dexie, zustand, recharts, Node built-ins, or the app's UI, state and storage code.
+ * tests/arch/architecture.test.ts proves that a deliberate violation fails this check.
+ * @type {import('dependency-cruiser').IConfiguration}
+ */
+module.exports = {
+  forbidden: [
+    {
+      name: 'chem-is-pure',
+      severity: 'error',
+      comment: 'src/chem must stay free of UI, state, storage and Node code (see DEVELOPERS.md).',
+      from: { path: '^src/chem/' },
+      to: {
+        path: [
+          '^src/(app|features|components|stores|persistence|cli)/',
+          'node_modules/(react|react-dom|dexie|dexie-react-hooks|zustand|recharts)/',
+        ],
+      },
+    },
+    {
+      name: 'chem-no-node-builtins',
+      severity: 'error',
+      from: { path: '^src/chem/' },
+      to: { dependencyTypes: ['core'] },
+    },
+    {
+      name: 'one-way-flow',
+      severity: 'error',
+      comment: 'Imports flow core ← persistence ← stores ← features ← app; nothing below imports app/.',
+      from: { path: '^src/(persistence|stores|features|components|chem)/' },
+      to: { path: '^src/app/' },
+    },
+    {
+      name: 'storage-below-ui',
+      severity: 'error',
+      from: { path: '^src/persistence/' },
+      to: { path: '^src/(features|components|stores)/' },
+    },
+    {
+      name: 'no-circular',
+      severity: 'error',
+      from: {},
+      to: { circular: true },
+    },
+  ],
+  options: {
+    doNotFollow: { path: 'node_modules' },
+    tsPreCompilationDeps: true,
+    tsConfig: { fileName: 'tsconfig.json' },
+    enhancedResolveOptions: { exportsFields: ['exports'], conditionNames: ['import', 'require', 'node', 'default', 'types'] },
+    exclude: { path: '\\.d\\.ts$' },
+  },
+};

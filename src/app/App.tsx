@@ -1,0 +1,97 @@
+import { useEffect, useState } from 'react';
+import { AREAS, areaFromHash, useNavigationStore, type AreaId } from '@/stores/navigation-store';
+import { CautionNote, CautionsDialog } from '@/components/Cautions';
+import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
+import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
+import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
+import type { ProjectRecord } from '@/persistence/records';
+
+function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
+  switch (area) {
+    case 'compound':
+      return (
+        <>
+          <CompoundPanel project={project} />
+          <ReferenceLatticeTable />
+        </>
+      );
+    default:
+      return (
+        <section className="panel">
+          <h2>{AREAS.find((a) => a.id === area)?.label}</h2>
+          <p>This area is being built.</p>
+        </section>
+      );
+  }
+}
+
+/** The workbench shell: header, area navigation, cautions, and the open project's area. */
+export function App() {
+  const area = useNavigationStore((s) => s.area);
+  const goTo = useNavigationStore((s) => s.goTo);
+  const { project, loading } = useCurrentProject();
+  const [cautionsOpen, setCautionsOpen] = useState(false);
+
+  useEffect(() => {
+    const onHash = () => goTo(areaFromHash(window.location.hash));
+    window.addEventListener('hashchange', onHash);
+    return () => window.removeEventListener('hashchange', onHash);
+  }, [goTo]);
+
+  return (
+    <div className="shell">
+      <a className="skip-link" href="#main">
+        Skip to content
+      </a>
+      <header className="topbar">
+        <div className="brand">
+          <span className="brand-mark" aria-hidden="true" />
+          <span className="brand-name">Saltsmith</span>
+          <span className="brand-tag">salt-selection workbench</span>
+        </div>
+        <div className="topbar-project" aria-live="polite">
+          {project ? (
+            <>
+              <span className="muted">Project:</span> <strong>{project.name}</strong>
+            </>
+          ) : null}
+        </div>
+        <button type="button" className="caution-button" onClick={() => setCautionsOpen(true)}>
+          Cautions
+        </button>
+      </header>
+      <nav className="areas" aria-label="Workbench areas">
+        <ul>
+          {AREAS.map((a) => (
+            <li key={a.id}>
+              <a
+                href={`#/${a.id}`}
+                aria-current={a.id === area ? 'page' : undefined}
+                onClick={(e) => {
+                  e.preventDefault();
+                  goTo(a.id);
+                }}
+              >
+                {a.label}
+              </a>
+            </li>
+          ))}
+        </ul>
+      </nav>
+      <main id="main" className="content" tabIndex={-1}>
+        {loading || !project ? (
+          <p className="loading" role="status">
+            Opening your project…
+          </p>
+        ) : (
+          <AreaContent area={area} project={project} />
+        )}
+      </main>
+      <footer className="footer">
+        <CautionNote />
+        <span className="muted">Saltsmith {__APP_VERSION__} · data stays in this browser</span>
+      </footer>
+      <CautionsDialog open={cautionsOpen} onClose={() => setCautionsOpen(false)} />
+    </div>
+  );
+}

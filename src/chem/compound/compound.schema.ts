@@ -1,0 +1,48 @@
+import { z } from 'zod';
+
+/**
+ * The compound a formulator screens: the drug as a weak base or acid, with the data the screening
+ * models use. Validated with zod at every trust boundary (form input, stored records, files, CLI).
+ * Units live in field names: mg/mL, °C, mg, g/cm³.
+ */
+export const pkaOriginSchema = z.enum(['measured', 'literature', 'predicted']);
+export type PkaOrigin = z.infer<typeof pkaOriginSchema>;
+
+export const pkaEntrySchema = z.object({
+  /** pKa at 25 °C in water; for a base, the pKa of its conjugate acid BH⁺. */
+  value: z.number().min(-10, 'pKa must be at least −10').max(20, 'pKa must be at most 20'),
+  origin: pkaOriginSchema,
+});
+export type PkaEntry = z.infer<typeof pkaEntrySchema>;
+
+const positiveOrNull = (what: string, max: number) =>
+  z
+    .number()
+    .positive(`${what} must be greater than zero`)
+    .max(max, `${what} must be at most ${max}`)
+    .nullable();
+
+export const compoundSchema = z.object({
+  name: z.string().trim().min(1, 'Give the compound a name').max(120),
+  /** OpenSMILES of the neutral free form; empty when the formula alone is given. */
+  smiles: z.string().max(2000),
+  /** Molecular formula of the neutral free form (Hill order or any order), e.g. C17H22N2O2. */
+  formula: z.string().max(200),
+  kind: z.enum(['base', 'acid']),
+  pKas: z.array(pkaEntrySchema).min(1, 'Give at least one pKa').max(4),
+  /** Charge of the salt-forming drug ion: +1/+2 for a base, −1/−2 for an acid. */
+  ionCharge: z.number().int().min(-3).max(3).refine((charge) => charge !== 0, 'The drug ion cannot be neutral'),
+  /** Intrinsic solubility S₀ of the free form, mg/mL, when measured. */
+  intrinsicSolubilityMgPerMl: positiveOrNull('Intrinsic solubility', 1e4),
+  /** Melting point of the free form, °C. */
+  meltingPointC: z.number().min(-100).max(600).nullable(),
+  /** log P (octanol/water) of the neutral form. */
+  logP: z.number().min(-10).max(15).nullable(),
+  logPOrigin: z.enum(['measured', 'computed', 'literature']).nullable(),
+  /** Highest single therapeutic dose, mg (as free form). */
+  doseMg: positiveOrNull('Dose', 1e5),
+  /** Measured true density of the free form, g/cm³. */
+  densityGPerCm3: positiveOrNull('Density', 30),
+  notes: z.string().max(5000),
+});
+export type Compound = z.infer<typeof compoundSchema>;

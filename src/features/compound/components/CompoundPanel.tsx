@@ -1,0 +1,171 @@
+import { useEffect, useRef, useState, type ChangeEvent } from 'react';
+import type { ProjectRecord } from '@/persistence/records';
+import { projectsRepo } from '@/persistence/projects-repo';
+import {
+  compoundFromDraft,
+  draftFromCompound,
+  type CompoundDraft,
+  type FieldErrors,
+} from '../compound-form-model';
+
+/** Autosave delay after the last keystroke, ms. */
+const SAVE_DELAY_MS = 250;
+
+interface FieldProps {
+  id: keyof CompoundDraft;
+  label: string;
+  unit?: string;
+  hint?: string;
+  draft: CompoundDraft;
+  errors: FieldErrors;
+  onChange: (id: keyof CompoundDraft, value: string) => void;
+  wide?: boolean;
+  inputMode?: 'decimal' | 'text';
+}
+
+function Field({ id, label, unit, hint, draft, errors, onChange, wide, inputMode }: FieldProps) {
+  const error = errors[id];
+  const inputId = `compound-${id}`;
+  return (
+    <div className={`field${wide ? ' field-wide' : ''}`}>
+      <label htmlFor={inputId}>
+        {label}
+        {unit ? <span className="unit"> ({unit})</span> : null}
+      </label>
+      <input
+        id={inputId}
+        name={id}
+        value={draft[id]}
+        inputMode={inputMode}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined}
+        onChange={(e: ChangeEvent<HTMLInputElement>) => onChange(id, e.target.value)}
+      />
+      {error ? (
+        <p className="field-error" id={`${inputId}-error`} role="alert">
+          {error}
+        </p>
+      ) : hint ? (
+        <p className="field-hint" id={`${inputId}-hint`}>
+          {hint}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+export type SaveState = 'saved' | 'pending' | 'invalid' | 'error';
+
+/**
+ * The compound definition, saved as the user types. An invalid draft is never stored: the last valid
+ * compound stays in the database and the fields say what is wrong.
+ */
+export function CompoundPanel({ project }: { project: ProjectRecord }) {
+  const [draft, setDraft] = useState<CompoundDraft>(() => draftFromCompound(project.compound));
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [saveState, setSaveState] = useState<SaveState>('saved');
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const projectId = project.id;
+
+  // A different project opened: start from its stored compound.
+  useEffect(() => {
+    setDraft(draftFromCompound(project.compound));
+    setErrors({});
+    setSaveState('saved');
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [projectId]);
+
+  useEffect(() => () => {
+    if (timer.current) clearTimeout(timer.current);
+  }, []);
+
+  const change = (id: keyof CompoundDraft, value: string) => {
+    const next = { ...draft, [id]: value } as CompoundDraft;
+    setDraft(next);
+    const result = compoundFromDraft(next, project.compound);
+    if (timer.current) clearTimeout(timer.current);
+    if (!result.ok) {
+      setErrors(result.errors);
+      setSaveState('invalid');
+      return;
+    }
+    setErrors({});
+    setSaveState('pending');
+    timer.current = setTimeout(() => {
+      projectsRepo
+        .updateCompound(projectId, result.compound)
+        .then(() => setSaveState('saved'))
+        .catch(() => setSaveState('error'));
+    }, SAVE_DELAY_MS);
+  };
+
+  const common = { draft, errors, onChange: change };
+  return (
+    <section aria-labelledby="compound-title" className="panel">
+      <header className="panel-head">
+        <h2 id="compound-title">Compound</h2>
+        <SaveBadge state={saveState} />
+      </header>
+      {project.isDemo ? (
+        <p className="demo-banner" role="note">
+          Demo project: <strong>Demorazine is fictional</strong> and every number in it is invented for
+          demonstration. Create a project for your own compound under Projects.
+        </p>
+      ) : null}
+      <form className="form-grid" onSubmit={(e) => e.preventDefault()} aria-label="Compound definition">
+        <Field id="name" label="Name" {...common} />
+        <div className="field">
+          <label htmlFor="compound-kind">Ionisable as</label>
+          <select
+            id="compound-kind"
+            value={draft.kind}
+            onChange={(e) => change('kind', e.target.value)}
+          >
+            <option value="base">Weak base (forms a cation)</option>
+            <option value="acid">Weak acid (forms an anion)</option>
+          </select>
+        </div>
+        <Field id="smiles" label="Structure (SMILES)" wide hint="Neutral free form, OpenSMILES" {...common} />
+        <Field id="formula" label="Molecular formula" hint="Neutral free form, e.g. C18H20ClN3O" {...common} />
+        <Field
+          id="pKas"
+          label={draft.kind === 'base' ? 'pKa of the conjugate acid(s)' : 'pKa(s)'}
+          hint="25 °C, water; several values separated by commas"
+          {...common}
+        />
+        <div className="field">
+          <label htmlFor="compound-pKaOrigin">pKa origin</label>
+          <select
+            id="compound-pKaOrigin"
+            value={draft.pKaOrigin}
+            onChange={(e) => change('pKaOrigin', e.target.value)}
+          >
+            <option value="measured">Measured</option>
+            <option value="literature">Literature</option>
+            <option value="predicted">Predicted</option>
+          </select>
+        </div>
+        <Field id="ionCharge" label="Charge of the salt-forming ion" hint="e.g. +1, or +2 for a dibasic drug" {...common} />
+        <Field id="intrinsicSolubilityMgPerMl" label="Intrinsic solubility S₀" unit="mg/mL" inputMode="decimal" {...common} />
+        <Field id="meltingPointC" label="Melting point" unit="°C" inputMode="decimal" {...common} />
+        <Field id="logP" label="log P" unit="octanol/water" inputMode="decimal" {...common} />
+        <Field id="doseMg" label="Highest single dose" unit="mg, as free form" inputMode="decimal" {...common} />
+        <Field id="notes" label="Notes" wide {...common} />
+      </form>
+    </section>
+  );
+}
+
+function SaveBadge({ state }: { state: SaveState }) {
+  const text: Record<SaveState, string> = {
+    saved: 'All changes saved',
+    pending: 'Saving…',
+    invalid: 'Not saved: fix the marked field',
+    error: 'Could not save — your last saved values are kept',
+  };
+  return (
+    <span className={`save-badge save-${state}`} role="status" aria-live="polite">
+      {text[state]}
+    </span>
+  );
+}

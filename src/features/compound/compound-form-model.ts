@@ -1,0 +1,98 @@
+import { compoundSchema, type Compound } from '@/chem/compound/compound.schema';
+
+/** The compound form's draft: every field as the text the user typed. */
+export interface CompoundDraft {
+  name: string;
+  smiles: string;
+  formula: string;
+  kind: 'base' | 'acid';
+  pKas: string;
+  pKaOrigin: 'measured' | 'literature' | 'predicted';
+  ionCharge: string;
+  intrinsicSolubilityMgPerMl: string;
+  meltingPointC: string;
+  logP: string;
+  doseMg: string;
+  notes: string;
+}
+
+export function draftFromCompound(c: Compound): CompoundDraft {
+  const num = (x: number | null) => (x === null ? '' : String(x));
+  return {
+    name: c.name,
+    smiles: c.smiles,
+    formula: c.formula,
+    kind: c.kind,
+    pKas: c.pKas.map((p) => p.value).join(', '),
+    pKaOrigin: c.pKas[0]?.origin ?? 'measured',
+    ionCharge: String(c.ionCharge),
+    intrinsicSolubilityMgPerMl: num(c.intrinsicSolubilityMgPerMl),
+    meltingPointC: num(c.meltingPointC),
+    logP: num(c.logP),
+    doseMg: num(c.doseMg),
+    notes: c.notes,
+  };
+}
+
+export type FieldErrors = Partial<Record<keyof CompoundDraft, string>>;
+
+/** Parse a decimal typed by a person: accepts a comma as decimal mark; '' is null. */
+function parseOptionalNumber(text: string): number | null | typeof NaN {
+  const t = text.trim().replace(',', '.');
+  if (t === '') return null;
+  const x = Number(t);
+  return Number.isFinite(x) ? x : NaN;
+}
+
+/**
+ * Turn a draft into a valid compound, or into messages keyed by field. Nothing half-valid comes out:
+ * either every field passes or the caller keeps the previous good compound.
+ */
+export function compoundFromDraft(
+  draft: CompoundDraft,
+  previous: Compound,
+): { ok: true; compound: Compound } | { ok: false; errors: FieldErrors } {
+  const errors: FieldErrors = {};
+  const numberField = (key: keyof CompoundDraft, label: string): number | null => {
+    const x = parseOptionalNumber(draft[key]);
+    if (Number.isNaN(x)) {
+      errors[key] = `${label} must be a number`;
+      return null;
+    }
+    return x as number | null;
+  };
+  const pKaTexts = draft.pKas
+    .split(/[;\s]+|,\s+/)
+    .map((s) => s.trim())
+    .filter(Boolean);
+  const pKaValues = pKaTexts.map((s) => Number(s.replace(',', '.')));
+  if (pKaTexts.length === 0) errors.pKas = 'Give at least one pKa';
+  else if (pKaValues.some((x) => !Number.isFinite(x))) errors.pKas = 'pKa values must be numbers, separated by commas';
+
+  const ionCharge = Number(draft.ionCharge);
+  const candidate = {
+    ...previous,
+    name: draft.name,
+    smiles: draft.smiles.trim(),
+    formula: draft.formula.trim(),
+    kind: draft.kind,
+    pKas: pKaValues.map((value) => ({ value, origin: draft.pKaOrigin })),
+    ionCharge,
+    intrinsicSolubilityMgPerMl: numberField('intrinsicSolubilityMgPerMl', 'Intrinsic solubility'),
+    meltingPointC: numberField('meltingPointC', 'Melting point'),
+    logP: numberField('logP', 'log P'),
+    doseMg: numberField('doseMg', 'Dose'),
+    notes: draft.notes,
+  };
+  if (draft.kind === 'base' && ionCharge < 0) errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';
+  if (draft.kind === 'acid' && ionCharge > 0) errors.ionCharge = 'An acid forms an anion: charge must be −1, −2 or −3';
+  const parsed = compoundSchema.safeParse(candidate);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const key = String(issue.path[0] ?? 'name') as keyof CompoundDraft;
+      errors[key] ??= issue.message;
+    }
+  }
+  if (Object.keys(errors).length > 0) return { ok: false, errors };
+  return { ok: true, compound: parsed.data! };
+}

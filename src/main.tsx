@@ -1,0 +1,14 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from '@/app/App';
+import { registerServiceWorker } from '@/app/register-sw';
+import '@/app/app.css';
+
+const root = document.getElementById('root');
+if (!root) throw new Error('Saltsmith: #root element missing from index.html');
+createRoot(root).render(
+  <StrictMode>
+    <App />
+  </StrictMode>,
+);
+registerServiceWorker();

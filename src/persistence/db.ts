@@ -1,0 +1,51 @@
+import Dexie, { type Table } from 'dexie';
+import type {
+  CandidateRecord,
+  CustomIonRecord,
+  MeasurementRecord,
+  ProjectRecord,
+  SettingRecord,
+} from './records';
+
+/** Name of the IndexedDB database. Kept in one place (see DEVELOPERS.md, "Storage"). */
+export const DB_NAME = 'saltsmith';
+
+/**
+ * The one Dexie database of the workbench. This file is the only place the schema is declared.
+ * A released `version(n)` is never edited: add `version(n + 1)` with an `upgrade()` instead.
+ */
+export class SaltsmithDb extends Dexie {
+  projects!: Table<ProjectRecord, string>;
+  candidates!: Table<CandidateRecord, string>;
+  measurements!: Table<MeasurementRecord, string>;
+  customIons!: Table<CustomIonRecord, string>;
+  settings!: Table<SettingRecord, string>;
+
+  constructor(name = DB_NAME) {
+    super(name);
+    this.version(1).stores({
+      projects: 'id, updatedAt, archived',
+      candidates: 'id, projectId, ionId, [projectId+ionId]',
+      measurements: 'id, projectId, candidateId, kind',
+      customIons: 'id, projectId, overridesIonId',
+      settings: 'key',
+    });
+  }
+}
+
+let instance: SaltsmithDb | null = null;
+
+/** The shared database handle (created on first use). */
+export function getDb(): SaltsmithDb {
+  instance ??= new SaltsmithDb();
+  return instance;
+}
+
+/** Close and forget the shared handle; tests use this to start from an empty database. */
+export async function resetDbForTests(): Promise<void> {
+  if (instance) {
+    instance.close();
+    await Dexie.delete(instance.name);
+    instance = null;
+  }
+}

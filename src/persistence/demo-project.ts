@@ -1,0 +1,29 @@
+import type { Compound } from '@/chem/compound/compound.schema';
+
+/**
+ * The demo scenario. Everything here is INVENTED for demonstration: "Demorazine" is a fictional weakly
+ * basic compound; its pKa, solubility, melting point, log P and dose are made-up numbers chosen to look
+ * like a typical poorly soluble base. They are not data about any real substance and are never used as
+ * expected values in tests. The same scenario is kept as fixtures/demo/demorazine.json.
+ */
+export const DEMO_PROJECT_NAME = 'Demorazine (fictional demo)';
+
+export const DEMO_COMPOUND: Compound = {
+  name: 'Demorazine (fictional)',
+  smiles: 'CN1CCN(CC1)c1ccc(cc1)C(=O)Nc1ccc(Cl)cc1',
+  formula: 'C18H20ClN3O',
+  kind: 'base',
+  pKas: [{ value: 7.8, origin: 'measured' }],
+  ionCharge: 1,
+  intrinsicSolubilityMgPerMl: 0.015,
+  meltingPointC: 184,
+  logP: 3.3,
+  logPOrigin: 'measured',
+  doseMg: 200,
+  densityGPerCm3: null,
+  notes:
+    'Fictional compound for the demo project. Every number here is invented; replace it with your own compound.',
+};
+
+/** Counter-ion ids shortlisted in the demo project (bundled library ids). */
+export const DEMO_SHORTLIST = ['chloride', 'mesylate', 'sulfate', 'maleate', 'tosylate'];

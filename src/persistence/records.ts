@@ -1,0 +1,102 @@
+import { z } from 'zod';
+import { compoundSchema } from '@/chem/compound/compound.schema';
+
+/**
+ * Stored record shapes. Every record carries `schemaVersion` so that a later version of Saltsmith
+ * can upgrade it (see db.ts). Records are validated with zod when they are written and when they
+ * come in from a file.
+ */
+export const RECORD_SCHEMA_VERSION = 1;
+
+export const projectSettingsSchema = z.object({
+  /**
+   * Chloride in the gastric medium, mol/L. Default 0.12 M: USP "Simulated Gastric Fluid, TS" (2.0 g NaCl
+   * and 7.0 mL hydrochloric acid per litre, pH ≈ 1.2) gives 0.034 M from NaCl plus ≈0.084 M from HCl
+   * (composition from memory of the USP Reagents/Test Solutions text; editable per project).
+   */
+  gastricChlorideM: z.number().min(0).max(5).default(0.12),
+  /** Microenvironment pH of the intended formulation (for the disproportionation flag). */
+  microenvironmentPh: z.number().min(0).max(14).default(7),
+  /** Temperature of the screening, °C. */
+  temperatureC: z.number().min(0).max(100).default(37),
+  /** Extra screening settings owned by later features (weights, bands); each validated by its owner. */
+  extra: z.record(z.string(), z.unknown()).default({}),
+});
+export type ProjectSettings = z.infer<typeof projectSettingsSchema>;
+
+export const projectRecordSchema = z.object({
+  id: z.string().min(1),
+  schemaVersion: z.number().int(),
+  name: z.string().min(1).max(120),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  archived: z.boolean(),
+  /** True for the bundled fictional demo project. */
+  isDemo: z.boolean(),
+  compound: compoundSchema,
+  settings: projectSettingsSchema,
+});
+export type ProjectRecord = z.infer<typeof projectRecordSchema>;
+
+export const candidateRecordSchema = z.object({
+  id: z.string().min(1),
+  schemaVersion: z.number().int(),
+  projectId: z.string().min(1),
+  /** Library id of the counter-ion (bundled or custom). */
+  ionId: z.string().min(1),
+  /** Drug ions per counter-ion in the salt, e.g. 2:1 for a hemisulfate is drug 2, counter-ion 1. */
+  drugPerSalt: z.number().int().min(1).max(4),
+  counterIonPerSalt: z.number().int().min(1).max(4),
+  /** Water molecules per formula unit when a hydrate is recorded. */
+  hydrateWater: z.number().min(0).max(20),
+  addedAt: z.string(),
+  order: z.number(),
+});
+export type CandidateRecord = z.infer<typeof candidateRecordSchema>;
+
+export const measurementKindSchema = z.enum([
+  'solubility',
+  'melting-point',
+  'solution-enthalpy',
+  'mass-gain-80rh',
+  'crystallinity',
+  'note',
+]);
+export type MeasurementKind = z.infer<typeof measurementKindSchema>;
+
+export const measurementRecordSchema = z.object({
+  id: z.string().min(1),
+  schemaVersion: z.number().int(),
+  projectId: z.string().min(1),
+  candidateId: z.string().min(1),
+  kind: measurementKindSchema,
+  /** The measured number in the unit named by `unit` (mg/mL, °C, kJ/mol, %), null for text-only kinds. */
+  value: z.number().finite().nullable(),
+  unit: z.string().max(20),
+  /** Conditions: pH, temperature (K), medium. */
+  ph: z.number().min(0).max(14).nullable(),
+  temperatureK: z.number().positive().max(600).nullable(),
+  medium: z.string().max(200),
+  text: z.string().max(5000),
+  recordedAt: z.string(),
+});
+export type MeasurementRecord = z.infer<typeof measurementRecordSchema>;
+
+export const customIonRecordSchema = z.object({
+  id: z.string().min(1),
+  schemaVersion: z.number().int(),
+  /** Null for an ion available to every project; a project id for a per-project override. */
+  projectId: z.string().nullable(),
+  /** When this record overrides a bundled ion, the bundled ion's id. */
+  overridesIonId: z.string().nullable(),
+  /** The ion's data, validated by the library's own schema (src/chem) before it is stored. */
+  ion: z.record(z.string(), z.unknown()),
+  updatedAt: z.string(),
+});
+export type CustomIonRecord = z.infer<typeof customIonRecordSchema>;
+
+export const settingRecordSchema = z.object({
+  key: z.string().min(1),
+  value: z.unknown(),
+});
+export type SettingRecord = z.infer<typeof settingRecordSchema>;

@@ -1,0 +1,60 @@
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+/** The served production build (set by run-browser-tests.mjs). */
+export const BASE_URL = process.env.SALTSMITH_URL ?? 'http://127.0.0.1:4173/';
+
+/** Chromium flags that keep it off a network this machine does not have (TOOLCHAIN.md). */
+export const CHROMIUM_ARGS = [
+  '--headless=new',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export interface Session {
+  context: BrowserContext;
+  page: Page;
+  /** Console errors and uncaught page errors seen so far. */
+  errors: string[];
+  close: () => Promise<void>;
+}
+
+/** Open a persistent browser profile (so IndexedDB survives reloads) with one page watched for errors. */
+export async function openSession(opts: { viewport?: { width: number; height: number } } = {}): Promise<Session> {
+  const userDataDir = mkdtempSync(join(tmpdir(), 'saltsmith-e2e-'));
+  const context = await chromium.launchPersistentContext(userDataDir, {
+    executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: CHROMIUM_ARGS,
+    viewport: opts.viewport ?? { width: 1280, height: 800 },
+    acceptDownloads: true,
+  });
+  const errors: string[] = [];
+  const watch = (page: Page) => {
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
+    page.on('pageerror', (e) => errors.push(String(e)));
+  };
+  context.on('page', watch);
+  const page = context.pages()[0] ?? (await context.newPage());
+  watch(page);
+  return {
+    context,
+    page,
+    errors,
+    close: async () => {
+      await context.close();
+      rmSync(userDataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+export type { Browser };

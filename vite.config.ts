@@ -1,0 +1,61 @@
+/// <reference types="vitest/config" />
+import { defineConfig } from 'vite';
+import react from '@vitejs/plugin-react';
+import { VitePWA } from 'vite-plugin-pwa';
+import { fileURLToPath, URL } from 'node:url';
+import { readFileSync } from 'node:fs';
+
+const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 'utf8')) as {
+  version: string;
+};
+
+const projectRoot = fileURLToPath(new URL('.', import.meta.url));
+
+export default defineConfig({
+  // index.html lives in src/ so the top level keeps only the designed entries.
+  root: 'src',
+  publicDir: '../public',
+  define: {
+    __APP_VERSION__: JSON.stringify(pkg.version),
+  },
+  resolve: {
+    alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
+  },
+  plugins: [
+    react(),
+    VitePWA({
+      registerType: 'autoUpdate',
+      injectRegister: false,
+      manifest: false,
+      workbox: {
+        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest,json}'],
+        globIgnores: ['**/resources*.json'],
+        maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+        navigateFallback: 'index.html',
+      },
+    }),
+  ],
+  worker: { format: 'es' },
+  build: { target: 'es2022', outDir: '../dist', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
+  test: {
+    root: projectRoot,
+    globals: false,
+    setupFiles: ['tests/setup-tests.ts'],
+    testTimeout: 20000,
+    projects: [
+      {
+        extends: true,
+        test: { name: 'core', environment: 'node', include: ['tests/chem/**/*.test.ts', 'tests/cli/**/*.test.ts', 'tests/arch/**/*.test.ts'] },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'ui',
+          environment: 'jsdom',
+          include: ['tests/**/*.test.{ts,tsx}'],
+          exclude: ['tests/chem/**', 'tests/cli/**', 'tests/arch/**', 'tests/e2e/**'],
+        },
+      },
+    ],
+  },
+});
