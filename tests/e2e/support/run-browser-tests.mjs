@@ -10,15 +10,18 @@ if (!chromium) {
   process.exit(1);
 }
 
+// SALTSMITH_OUT_DIR builds and serves somewhere other than dist/ (parallel runs on one checkout).
+const outDir = process.env.SALTSMITH_OUT_DIR;
+const outArgs = outDir ? ['--outDir', outDir] : [];
 if (!process.env.SALTSMITH_SKIP_BUILD) {
-  const build = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], {
+  const build = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', ...outArgs], {
     stdio: 'inherit',
   });
   if (build.status !== 0) process.exit(build.status ?? 1);
 }
 
 const port = await freePort();
-const server = await startPreview(port);
+const server = await startPreview(port, outArgs);
 let status = 1;
 try {
   const run = spawnSync(

@@ -15,10 +15,10 @@ export function freePort() {
 }
 
 /** Serve dist/ on 127.0.0.1:port; resolves once the server answers. */
-export async function startPreview(port) {
+export async function startPreview(port, extraArgs = []) {
   const child = spawn(
     process.execPath,
-    ['node_modules/vite/bin/vite.js', 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
+    ['node_modules/vite/bin/vite.js', 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort', ...extraArgs],
     { stdio: ['ignore', 'pipe', 'pipe'], detached: false },
   );
   let log = '';
