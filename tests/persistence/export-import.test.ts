@@ -45,7 +45,7 @@ async function content(projectId: string) {
     measurements: b.measurements
       .map(({ id: _i, projectId: _p, candidateId, schemaVersion: _s, ...rest }) => ({ ...rest, candidate: byCandidate.get(candidateId) }))
       .sort((x, y) => (x.recordedAt + x.kind).localeCompare(y.recordedAt + y.kind)),
-    customIons: b.customIons.map(({ ion, overridesIonId, projectId }) => ({ ion, overridesIonId, scoped: projectId !== null })),
+    customIons: b.customIons.map((i) => ({ ion: i.ion, overridesIonId: i.overridesIonId, scoped: i.projectId !== null })),
   };
 }
 
