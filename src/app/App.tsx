@@ -4,6 +4,7 @@ import { CautionNote, CautionsDialog } from '@/components/Cautions';
 import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
 import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
+import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
 import type { ProjectRecord } from '@/persistence/records';
 
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
@@ -79,7 +80,9 @@ export function App() {
         </ul>
       </nav>
       <main id="main" className="content" tabIndex={-1}>
-        {loading || !project ? (
+        {area === 'projects' || (!loading && !project) ? (
+          <ProjectsArea currentProjectId={project?.id ?? null} />
+        ) : loading || !project ? (
           <p className="loading" role="status">
             Opening your project…
           </p>

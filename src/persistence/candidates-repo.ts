@@ -2,6 +2,22 @@ import { getDb } from './db';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, candidateRecordSchema, type CandidateRecord } from './records';
 
+/**
+ * The smallest charge-balanced salt formula for a drug ion and a counter-ion: drug ions × |z_drug| =
+ * counter-ions × |z_counter| (electroneutrality). A monobasic drug (+1) with sulfate (−2) gives 2:1,
+ * the hemisulfate; with chloride (−1) 1:1.
+ */
+export function saltStoichiometry(
+  drugCharge: number,
+  counterIonCharge: number,
+): { drugPerSalt: number; counterIonPerSalt: number } {
+  const a = Math.abs(Math.round(drugCharge)) || 1;
+  const b = Math.abs(Math.round(counterIonCharge)) || 1;
+  const gcd = (x: number, y: number): number => (y === 0 ? x : gcd(y, x % y));
+  const lcm = (a * b) / gcd(a, b);
+  return { drugPerSalt: lcm / a, counterIonPerSalt: lcm / b };
+}
+
 /** Salt candidates (the shortlist) of a project. */
 export const candidatesRepo = {
   listForProject: async (projectId: string): Promise<CandidateRecord[]> =>
@@ -45,6 +61,13 @@ export const candidatesRepo = {
       if (!current) throw new Error(`No candidate with id ${id}`);
       await db.candidates.put(candidateRecordSchema.parse({ ...current, ...patch }));
     });
+  },
+
+  /** The shortlisted counter-ion ids of every project, for the project overview (projectId → count). */
+  countByProject: async (): Promise<Map<string, number>> => {
+    const counts = new Map<string, number>();
+    await getDb().candidates.each((c) => counts.set(c.projectId, (counts.get(c.projectId) ?? 0) + 1));
+    return counts;
   },
 
   /** Remove a candidate and its measurements. */

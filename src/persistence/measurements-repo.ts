@@ -28,5 +28,22 @@ export const measurementsRepo = {
     return record;
   },
 
+  /** Replace a measurement's fields after validation; an invalid edit throws and nothing changes. */
+  update: async (id: string, patch: Partial<NewMeasurement>): Promise<void> => {
+    const db = getDb();
+    await db.transaction('rw', db.measurements, async () => {
+      const current = await db.measurements.get(id);
+      if (!current) throw new Error(`No measurement with id ${id}`);
+      await db.measurements.put(measurementRecordSchema.parse({ ...current, ...patch }));
+    });
+  },
+
+  /** Count of measurements per project (projectId → count), for the project overview. */
+  countByProject: async (): Promise<Map<string, number>> => {
+    const counts = new Map<string, number>();
+    await getDb().measurements.each((m) => counts.set(m.projectId, (counts.get(m.projectId) ?? 0) + 1));
+    return counts;
+  },
+
   remove: (id: string): Promise<void> => getDb().measurements.delete(id),
 };

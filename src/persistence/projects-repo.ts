@@ -1,14 +1,56 @@
 import { compoundSchema, type Compound } from '@/chem/compound/compound.schema';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
-import { DEMO_COMPOUND, DEMO_PROJECT_NAME } from './demo-project';
+import { DEMO_COMPOUND, DEMO_PROJECT_NAME, DEMO_SHORTLIST } from './demo-project';
 import {
   RECORD_SCHEMA_VERSION,
+  candidateRecordSchema,
   projectRecordSchema,
   projectSettingsSchema,
+  type CandidateRecord,
+  type CustomIonRecord,
+  type MeasurementRecord,
   type ProjectRecord,
   type ProjectSettings,
 } from './records';
+import { saltStoichiometry } from './candidates-repo';
+
+/** Everything that belongs to one project: what a delete removes and an undo puts back. */
+export interface ProjectBundle {
+  project: ProjectRecord;
+  candidates: CandidateRecord[];
+  measurements: MeasurementRecord[];
+  customIons: CustomIonRecord[];
+}
+
+/**
+ * Charges of the demo shortlist's counter-ions in their usual salt-forming state (chloride, mesylate,
+ * tosylate and hydrogen maleate −1; sulfate −2 as in a hemisulfate). Used only to seed the fictional
+ * demo project's shortlist with charge-balanced stoichiometries.
+ */
+const DEMO_ION_CHARGES: Record<string, number> = {
+  chloride: -1,
+  mesylate: -1,
+  sulfate: -2,
+  maleate: -1,
+  tosylate: -1,
+};
+
+function demoCandidates(projectId: string): CandidateRecord[] {
+  const now = nowIso();
+  return DEMO_SHORTLIST.map((ionId, order) =>
+    candidateRecordSchema.parse({
+      id: newId('cand'),
+      schemaVersion: RECORD_SCHEMA_VERSION,
+      projectId,
+      ionId,
+      ...saltStoichiometry(DEMO_COMPOUND.ionCharge, DEMO_ION_CHARGES[ionId] ?? -1),
+      hydrateWater: 0,
+      addedAt: now,
+      order,
+    }),
+  );
+}
 
 /** Settings key that records the demo project was created once (so deleting it is respected). */
 const DEMO_SEEDED_KEY = 'demoSeeded';
@@ -82,24 +124,120 @@ export const projectsRepo = {
    */
   ensureDemo: async (): Promise<string | null> => {
     const db = getDb();
-    return db.transaction('rw', [db.projects, db.settings], async () => {
+    return db.transaction('rw', [db.projects, db.settings, db.candidates], async () => {
       const seeded = await db.settings.get(DEMO_SEEDED_KEY);
       if (seeded) return null;
       const record = build(DEMO_PROJECT_NAME, DEMO_COMPOUND, true);
       await db.projects.add(record);
+      await db.candidates.bulkAdd(demoCandidates(record.id));
       await db.settings.put({ key: DEMO_SEEDED_KEY, value: true });
       return record.id;
     });
   },
 
-  /** Put back a fresh demo project (the old demo, if any, is replaced). */
+  /** Put back a fresh demo project with its shortlist (the old demo, if any, is replaced). */
   resetDemo: async (): Promise<string> => {
     const db = getDb();
-    const old = await db.projects.filter((p) => p.isDemo).toArray();
-    for (const p of old) await projectsRepo.remove(p.id);
-    const record = build(DEMO_PROJECT_NAME, DEMO_COMPOUND, true);
-    await db.projects.add(record);
-    await db.settings.put({ key: DEMO_SEEDED_KEY, value: true });
-    return record.id;
+    return db.transaction(
+      'rw',
+      [db.projects, db.candidates, db.measurements, db.customIons, db.settings],
+      async () => {
+        const old = await db.projects.filter((p) => p.isDemo).toArray();
+        for (const p of old) await projectsRepo.remove(p.id);
+        const record = build(DEMO_PROJECT_NAME, DEMO_COMPOUND, true);
+        await db.projects.add(record);
+        await db.candidates.bulkAdd(demoCandidates(record.id));
+        await db.settings.put({ key: DEMO_SEEDED_KEY, value: true });
+        return record.id;
+      },
+    );
+  },
+
+  /** Everything stored for one project (undefined when there is no such project). */
+  bundle: async (id: string): Promise<ProjectBundle | undefined> => {
+    const db = getDb();
+    return db.transaction('r', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
+      const project = await db.projects.get(id);
+      if (!project) return undefined;
+      return {
+        project,
+        candidates: await db.candidates.where('projectId').equals(id).toArray(),
+        measurements: await db.measurements.where('projectId').equals(id).toArray(),
+        customIons: await db.customIons.where('projectId').equals(id).toArray(),
+      };
+    });
+  },
+
+  /** Delete a project and return what was deleted, so that the caller can offer an undo. */
+  removeWithUndo: async (id: string): Promise<ProjectBundle | undefined> => {
+    const db = getDb();
+    return db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
+      const bundle = await projectsRepo.bundle(id);
+      if (bundle) await projectsRepo.remove(id);
+      return bundle;
+    });
+  },
+
+  /** Put a deleted project back exactly as it was (the undo of {@link projectsRepo.removeWithUndo}). */
+  restore: async (bundle: ProjectBundle): Promise<void> => {
+    const db = getDb();
+    await db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
+      await db.projects.put(projectRecordSchema.parse(bundle.project));
+      await db.candidates.bulkPut(bundle.candidates);
+      await db.measurements.bulkPut(bundle.measurements);
+      await db.customIons.bulkPut(bundle.customIons);
+    });
+  },
+
+  /**
+   * Copy a project with its shortlist, measurements and per-project ions under a new name. The copy is
+   * never a demo project (resetting the demo leaves it alone). Returns the new project.
+   */
+  duplicate: async (id: string, name?: string): Promise<ProjectRecord> => {
+    const db = getDb();
+    return db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
+      const source = await projectsRepo.bundle(id);
+      if (!source) throw new Error(`No project with id ${id}`);
+      const now = nowIso();
+      const project = projectRecordSchema.parse({
+        ...source.project,
+        id: newId('prj'),
+        name: (name?.trim() || `${source.project.name} (copy)`).slice(0, 120),
+        createdAt: now,
+        updatedAt: now,
+        archived: false,
+        isDemo: false,
+      });
+      const candidateIds = new Map<string, string>();
+      const candidates = source.candidates.map((c) => {
+        const copyId = newId('cand');
+        candidateIds.set(c.id, copyId);
+        return { ...c, id: copyId, projectId: project.id };
+      });
+      const measurements = source.measurements.flatMap((m) => {
+        const candidateId = candidateIds.get(m.candidateId);
+        return candidateId ? [{ ...m, id: newId('meas'), projectId: project.id, candidateId }] : [];
+      });
+      const customIons = source.customIons.map((ion) => ({ ...ion, id: newId('ion'), projectId: project.id }));
+      await db.projects.add(project);
+      await db.candidates.bulkAdd(candidates);
+      await db.measurements.bulkAdd(measurements);
+      await db.customIons.bulkAdd(customIons);
+      return project;
+    });
+  },
+
+  /** Store a project's extra settings block (e.g. `screening`), validated by its owner beforehand. */
+  updateExtraSettings: async (id: string, key: string, value: unknown): Promise<void> => {
+    const db = getDb();
+    await db.transaction('rw', db.projects, async () => {
+      const current = await db.projects.get(id);
+      if (!current) throw new Error(`No project with id ${id}`);
+      const settings = projectSettingsSchema.parse({
+        ...current.settings,
+        extra: { ...current.settings.extra, [key]: value },
+      });
+      await db.projects.update(id, { settings, updatedAt: nowIso() });
+    });
   },
 };
