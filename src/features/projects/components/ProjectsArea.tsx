@@ -4,6 +4,7 @@ import { useNavigationStore } from '@/stores/navigation-store';
 import { useProjectList } from '../hooks/use-project-list';
 import { NewProjectForm } from './NewProjectForm';
 import { ProjectCard, type ProjectCardActions } from './ProjectCard';
+import { ProjectFilesPanel } from '@/features/project-files/components/ProjectFilesPanel';
 import '../projects.css';
 
 /** How long the "Undo" offer stays after a delete, ms. */
@@ -143,6 +144,11 @@ export function ProjectsArea({ currentProjectId }: { currentProjectId: string | 
         onCreated={(id) => {
           open(id);
         }}
+      />
+      <ProjectFilesPanel
+        projects={(list ?? []).map((s) => s.project)}
+        currentProjectId={currentProjectId}
+        onImported={(outcome) => open(outcome.projectId)}
       />
     </div>
   );
