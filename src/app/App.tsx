@@ -5,6 +5,8 @@ import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
 import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
+import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
+import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
 import type { ProjectRecord } from '@/persistence/records';
 
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
@@ -44,6 +46,7 @@ export function App() {
       <a className="skip-link" href="#main">
         Skip to content
       </a>
+      <StorageErrorBanner />
       <header className="topbar">
         <div className="brand">
           <span className="brand-mark" aria-hidden="true" />
@@ -57,6 +60,7 @@ export function App() {
             </>
           ) : null}
         </div>
+        <OfflineStatus />
         <button type="button" className="caution-button" onClick={() => setCautionsOpen(true)}>
           Cautions
         </button>
