@@ -5,6 +5,7 @@ import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
 import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
+import { BenchWorkspace } from '@/features/bench/components/BenchWorkspace';
 import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
 import type { ProjectRecord } from '@/persistence/records';
@@ -18,6 +19,8 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
           <ReferenceLatticeTable />
         </>
       );
+    case 'bench':
+      return <BenchWorkspace project={project} />;
     default:
       return (
         <section className="panel">

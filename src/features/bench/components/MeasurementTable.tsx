@@ -1,0 +1,80 @@
+import type { ReactNode } from 'react';
+import { measurementsRepo } from '@/persistence/measurements-repo';
+import type { MeasurementRecord } from '@/persistence/records';
+import { CELSIUS_ZERO_K, MEASUREMENT_KINDS } from '../bench-form-model';
+
+const fmt = (x: number) => (Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 1 ? x.toPrecision(3) : x.toPrecision(2));
+
+function conditions(m: MeasurementRecord): string {
+  const parts: string[] = [];
+  if (m.medium) parts.push(m.medium);
+  if (m.ph !== null) parts.push(`pH ${m.ph}`);
+  if (m.temperatureK !== null) parts.push(`${(m.temperatureK - CELSIUS_ZERO_K).toFixed(1)} °C`);
+  return parts.join(', ') || '—';
+}
+
+/** One candidate's measurements, each with the workbench's prediction beside it. */
+export function MeasurementTable({
+  measurements,
+  caption,
+  predictionFor,
+}: {
+  measurements: MeasurementRecord[];
+  caption: string;
+  predictionFor: (m: MeasurementRecord) => ReactNode;
+}) {
+  if (measurements.length === 0) return <p className="muted">Nothing measured yet for this candidate.</p>;
+  return (
+    <div className="table-scroll">
+      <table className="data-table bench-table">
+        <caption className="sr-only">{caption}</caption>
+        <thead>
+          <tr>
+            <th scope="col">Measured</th>
+            <th scope="col">Value</th>
+            <th scope="col">Conditions</th>
+            <th scope="col">Prediction (estimate)</th>
+            <th scope="col">Notes</th>
+            <th scope="col">
+              <span className="sr-only">Actions</span>
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {measurements.map((m) => {
+            const spec = MEASUREMENT_KINDS[m.kind];
+            return (
+              <tr key={m.id}>
+                <th scope="row">{spec.label}</th>
+                <td>
+                  {m.value === null ? '—' : (
+                    <>
+                      {fmt(m.value)} <span className="unit">{m.unit}</span>
+                    </>
+                  )}
+                  <span className="mark-measured" title="measured">
+                    {' '}
+                    measured
+                  </span>
+                </td>
+                <td>{conditions(m)}</td>
+                <td className="prediction">{predictionFor(m)}</td>
+                <td className="notes-cell">{m.text || '—'}</td>
+                <td>
+                  <button
+                    type="button"
+                    className="danger small"
+                    aria-label={`Delete ${spec.label.toLowerCase()} ${m.value ?? ''} ${m.unit}`.trim()}
+                    onClick={() => void measurementsRepo.remove(m.id)}
+                  >
+                    Delete
+                  </button>
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

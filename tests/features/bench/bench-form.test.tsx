@@ -1,0 +1,104 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { resetDbForTests } from '@/persistence/db';
+import { projectsRepo } from '@/persistence/projects-repo';
+import { measurementsRepo } from '@/persistence/measurements-repo';
+import { candidatesRepo } from '@/persistence/candidates-repo';
+import { DEMO_COMPOUND } from '@/persistence/demo-project';
+import type { ProjectRecord } from '@/persistence/records';
+import { BenchArea } from '@/features/bench/components/BenchArea';
+import { emptyDraft, measurementFromDraft, crystallinityOf } from '@/features/bench/bench-form-model';
+
+const ids = { projectId: 'p', candidateId: 'c' };
+
+describe('measurement form model', () => {
+  it('requires a positive solubility, a medium and a pH in 0–14', () => {
+    const r = measurementFromDraft({ ...emptyDraft('solubility'), value: '0', medium: ' ', ph: '15' }, ids);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors.value).toBe('Solubility must be greater than zero');
+    expect(r.errors.medium).toMatch(/Name the medium/);
+    expect(r.errors.ph).toBe('pH must be at most 14');
+  });
+
+  it('rejects text where a number belongs and a temperature above 100 °C', () => {
+    const r = measurementFromDraft({ ...emptyDraft('solution-enthalpy'), value: 'warm', temperatureC: '120' }, ids);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors.value).toBe('ΔH_sol must be a number');
+    expect(r.errors.temperatureC).toBe('Temperature must be at most 100 °C');
+  });
+
+  it('stores temperatures in kelvin (T/K = t/°C + 273.15, SI Brochure 2019) and accepts a decimal comma', () => {
+    const r = measurementFromDraft({ ...emptyDraft('solubility'), value: '1,25', ph: '1.2', temperatureC: '37' }, ids);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.measurement.value).toBe(1.25);
+    expect(r.measurement.unit).toBe('mg/mL');
+    expect(r.measurement.temperatureK).toBeCloseTo(310.15, 10);
+  });
+
+  it('keeps the crystallinity class readable from the stored text', () => {
+    const r = measurementFromDraft({ ...emptyDraft('crystallinity'), crystallinity: 'amorphous', text: 'XRPD halo' }, ids);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.measurement.value).toBeNull();
+    expect(crystallinityOf(r.measurement.text)).toBe('amorphous');
+  });
+
+  it('asks for the text of a note', () => {
+    const r = measurementFromDraft(emptyDraft('note'), ids);
+    expect(r.ok).toBe(false);
+  });
+});
+
+describe('Bench data area', () => {
+  let project: ProjectRecord;
+  beforeEach(async () => {
+    await resetDbForTests();
+    project = await projectsRepo.create('Bench test', { ...DEMO_COMPOUND, name: 'Bench test' });
+    await candidatesRepo.add(project.id, 'chloride');
+    await candidatesRepo.add(project.id, 'mesylate');
+  });
+
+  it('shows field messages for a bad entry and stores nothing, then stores a good one', async () => {
+    const user = userEvent.setup();
+    render(<BenchArea project={project} extras={{ predictionFor: () => 'predicted' }} />);
+    const form = await screen.findByRole('form', { name: /New measurement for Chloride/ });
+    await user.type(within(form).getByLabelText(/^Solubility/), '-3');
+    await user.type(within(form).getByLabelText('pH at equilibrium'), 'acid');
+    await user.click(within(form).getByRole('button', { name: 'Save measurement' }));
+    expect(within(form).getByText('Solubility must be at least 0 mg/mL')).toBeInTheDocument();
+    expect(within(form).getByText('pH must be a number')).toBeInTheDocument();
+    expect(await measurementsRepo.listForProject(project.id)).toHaveLength(0);
+
+    const value = within(form).getByLabelText(/^Solubility/);
+    await user.clear(value);
+    await user.type(value, '2.5');
+    const ph = within(form).getByLabelText('pH at equilibrium');
+    await user.clear(ph);
+    await user.type(ph, '1.2');
+    await user.click(within(form).getByRole('button', { name: 'Save measurement' }));
+    expect(await screen.findByText(/Saved: solubility/)).toBeInTheDocument();
+    const table = await screen.findByRole('table', { name: /Measurements for Chloride/ });
+    expect(within(table).getByText('2.50')).toBeInTheDocument();
+    expect(within(table).getByText('predicted')).toBeInTheDocument();
+    const stored = await measurementsRepo.listForProject(project.id);
+    expect(stored).toHaveLength(1);
+    expect(stored[0]).toMatchObject({ kind: 'solubility', value: 2.5, ph: 1.2, medium: 'water' });
+  });
+
+  it('switches candidate and kind: a mass gain at 80 % RH for the mesylate', async () => {
+    const user = userEvent.setup();
+    render(<BenchArea project={project} extras={{ predictionFor: () => null }} />);
+    await user.click(await screen.findByRole('button', { name: /Mesylate/ }));
+    const form = await screen.findByRole('form', { name: /New measurement for Mesylate/ });
+    await user.selectOptions(within(form).getByLabelText('What was measured'), 'mass-gain-80rh');
+    await user.type(within(form).getByLabelText(/Mass gain after 24 h/), '3.1');
+    await user.click(within(form).getByRole('button', { name: 'Save measurement' }));
+    expect(await screen.findByText(/Saved: mass gain/)).toBeInTheDocument();
+    const stored = await measurementsRepo.listForProject(project.id);
+    expect(stored[0]).toMatchObject({ kind: 'mass-gain-80rh', value: 3.1, unit: '%' });
+  });
+});
