@@ -23,15 +23,23 @@ export default defineConfig({
   },
   plugins: [
     react(),
+    // Offline (README "Offline"): precache the whole app so it opens and works with no network after
+    // one visit. The manifest is public/manifest.webmanifest (our own); registration is in
+    // src/app/register-sw.ts. Every .js is precached: openchemlib's lazy chunk (structure parsing)
+    // and the Monte Carlo worker included. openchemlib's ~1.35 MB predictor resources JSON is left
+    // out: no predictor needing it runs in the app.
     VitePWA({
       registerType: 'autoUpdate',
       injectRegister: false,
       manifest: false,
       workbox: {
-        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest,json}'],
+        globPatterns: ['**/*.{js,mjs,css,html,svg,png,webmanifest,json,wasm}'],
         globIgnores: ['**/resources*.json'],
         maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
         navigateFallback: 'index.html',
+        cleanupOutdatedCaches: true,
+        clientsClaim: true,
+        skipWaiting: true,
       },
     }),
   ],

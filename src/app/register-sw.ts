@@ -1,12 +1,21 @@
 /**
- * Register the service worker that vite-plugin-pwa generates, so the workbench opens with no network
- * after one visit. Skipped in development, where there is no generated worker.
+ * Register the service worker that vite-plugin-pwa generates (workbox, `generateSW`), so the workbench
+ * opens and works with no network after one visit: the app shell, every JavaScript chunk (the
+ * structure-parsing library's lazy chunk and the Monte Carlo worker included), styles, icons and the
+ * manifest are precached. Skipped in development, where no worker is generated.
+ *
+ * With `registerType: 'autoUpdate'` a new build's worker takes over at once (skipWaiting +
+ * clientsClaim) and old precaches are removed; data lives in IndexedDB, which updates do not touch.
  */
 export function registerServiceWorker(): void {
-  if (import.meta.env.DEV || !('serviceWorker' in navigator)) return;
-  window.addEventListener('load', () => {
-    navigator.serviceWorker.register('/sw.js', { scope: '/' }).catch((err: unknown) => {
-      console.warn('Saltsmith: offline support unavailable:', err);
-    });
-  });
+  if (import.meta.env.DEV || typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
+  const register = () => {
+    navigator.serviceWorker
+      .register(`${import.meta.env.BASE_URL}sw.js`, { scope: import.meta.env.BASE_URL })
+      .catch((err: unknown) => {
+        console.warn('Saltsmith: offline support unavailable:', err);
+      });
+  };
+  if (document.readyState === 'complete') register();
+  else window.addEventListener('load', register, { once: true });
 }

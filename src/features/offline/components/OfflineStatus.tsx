@@ -1,5 +1,6 @@
 import { useOnlineStatus } from '../hooks/use-online-status';
 import { useStoragePersistence } from '../hooks/use-storage-persistence';
+import { useOfflineReady } from '../hooks/use-offline-ready';
 import type { PersistenceAnswer } from '@/persistence/storage-status';
 import '../offline.css';
 
@@ -26,6 +27,7 @@ function formatMb(bytes: number): string {
 export function OfflineStatus() {
   const online = useOnlineStatus();
   const { answer, usage } = useStoragePersistence();
+  const offlineReady = useOfflineReady();
   const keep = answer ? KEEP_TEXT[answer] : null;
   const usageText = usage ? ` Using ${formatMb(usage.usageBytes)} of ${formatMb(usage.quotaBytes)} available.` : '';
   return (
@@ -42,6 +44,15 @@ export function OfflineStatus() {
         <span className="link-status-dot" aria-hidden="true" />
         {online ? 'Online' : 'Offline — working from this browser'}
       </span>
+      {offlineReady ? (
+        <span
+          className="link-status-item is-ready"
+          title="This browser holds a copy of the whole app: it opens and works with no network."
+          data-testid="offline-ready"
+        >
+          Works offline
+        </span>
+      ) : null}
       {keep ? (
         <span
           className={`link-status-item keep-${answer}`}
