@@ -1,0 +1,16 @@
+/**
+ * Screening: the decision models that turn a compound and its candidate counter-ions into a ranked,
+ * explained shortlist (SCIENCE brief §4–5). Every module is pure; see each file for its sources.
+ */
+export * from './speciation';
+export * from './delta-pka';
+export * from './mass-cost';
+export * from './ph-solubility-closed-form';
+export * from './activity';
+export * from './salt-equilibrium';
+export * from './ph-profile';
+export * from './dose-number';
+export * from './disproportionation';
+export * from './hygroscopicity';
+export * from './van-t-hoff';
+export * from './intrinsic-solubility';

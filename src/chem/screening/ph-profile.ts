@@ -1,0 +1,186 @@
+import { brentRoot } from '../numerics/root-finding';
+import { ChemInputError, requireFiniteInRange } from '../result';
+import {
+  checkSaltInput,
+  log10FreeFormSolubilityM,
+  solveSaltSolubility,
+  type SaltEquilibriumInput,
+} from './salt-equilibrium';
+import { requireAscendingPkas, type Protolyte } from './speciation';
+
+/** The drug's acid–base description used by every screening model. */
+export interface DrugAcidBase {
+  kind: 'base' | 'acid';
+  /** pKa values at 25 °C, strictly ascending (for a base, of its conjugate acids). */
+  pKas: readonly number[];
+  /** Charge of the salt-forming drug ion (+1/+2 for a base, −1/−2 for an acid). */
+  ionCharge: number;
+}
+
+/**
+ * The drug as a protolyte: a base with n basic sites is fully protonated at charge +n; an acid with
+ * n acidic protons is neutral when fully protonated. (A zwitterionic drug needs both and is not
+ * covered: state it as a base or an acid by the group that forms the salt.)
+ */
+export function drugProtolyte(d: DrugAcidBase): Protolyte {
+  requireAscendingPkas('pKas', d.pKas);
+  if (d.pKas.length < 1) throw new ChemInputError('pKas', 'no pKa given', 'one to four pKa values');
+  const sign = d.kind === 'base' ? 1 : -1;
+  if (!Number.isInteger(d.ionCharge) || d.ionCharge * sign < 1 || Math.abs(d.ionCharge) > d.pKas.length) {
+    throw new ChemInputError(
+      'ionCharge',
+      `${d.ionCharge} does not fit a ${d.kind} with ${d.pKas.length} pKa value(s)`,
+      `${d.kind === 'base' ? '+1' : '−1'} up to ${sign * d.pKas.length}`,
+    );
+  }
+  return { pKas: d.pKas, mostProtonatedCharge: d.kind === 'base' ? d.pKas.length : 0 };
+}
+
+export interface ProfileSalt {
+  counterIon: Protolyte;
+  counterIonCharge: number;
+  drugPerSalt: number;
+  counterIonPerSalt: number;
+  log10Ksp: number;
+}
+
+export interface ProfileOptions {
+  /** pH range, default 1.0–8.0, step 0.1. */
+  phFrom?: number;
+  phTo?: number;
+  phStep?: number;
+  /** Counter-ion already in the medium, mol/L (e.g. gastric chloride). */
+  commonIonM?: number;
+  activity?: SaltEquilibriumInput['activity'];
+}
+
+export interface ProfilePoint {
+  pH: number;
+  /** Total dissolved drug, mol/L. */
+  solubilityM: number;
+  /** Free-form-limited branch, mol/L. */
+  freeFormLimitedM: number;
+  /** Salt-limited branch, mol/L (null for the free form alone or when the salt never limits). */
+  saltLimitedM: number | null;
+  /** The solid in equilibrium at this pH. */
+  solid: 'salt' | 'free-form';
+}
+
+export interface PhProfile {
+  points: ProfilePoint[];
+  /** pH where both solids coexist; null when the branches do not cross within pH 0–14. */
+  phMax: number | null;
+  assumptions: string[];
+}
+
+const ASSUMPTIONS = [
+  'pH held by the medium (buffered); activities equal concentrations unless the Davies option is on',
+  'total dissolved counter-ion = (counter-ions per formula unit) × (formula units dissolved) + the medium’s own',
+  'pKa values at 25 °C used as given; no self-association, no micelles, no complexation',
+  'the less soluble solid (salt or free form) is the one in equilibrium at each pH',
+];
+
+function saltInput(d: Protolyte, drugIonCharge: number, salt: ProfileSalt, pH: number, o: ProfileOptions): SaltEquilibriumInput {
+  return {
+    drug: d,
+    drugIonCharge,
+    drugPerSalt: salt.drugPerSalt,
+    counterIon: salt.counterIon,
+    counterIonCharge: salt.counterIonCharge,
+    counterIonPerSalt: salt.counterIonPerSalt,
+    log10Ksp: salt.log10Ksp,
+    pH,
+    commonIonM: o.commonIonM ?? 0,
+    activity: o.activity,
+  };
+}
+
+/** Solubility (mol/L, total drug) of the free form, or of the salt–free-form system, at one pH. */
+export function solubilityAtPh(
+  drug: DrugAcidBase,
+  log10IntrinsicM: number,
+  salt: ProfileSalt | null,
+  pH: number,
+  o: ProfileOptions = {},
+): ProfilePoint {
+  const p = drugProtolyte(drug);
+  return pointAt(p, drug.ionCharge, log10IntrinsicM, salt, pH, o);
+}
+
+function pointAt(
+  p: Protolyte,
+  ionCharge: number,
+  log10IntrinsicM: number,
+  salt: ProfileSalt | null,
+  pH: number,
+  o: ProfileOptions,
+): ProfilePoint {
+  requireFiniteInRange('pH', pH, 0, 14);
+  const free = 10 ** log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
+  if (!salt) return { pH, solubilityM: free, freeFormLimitedM: free, saltLimitedM: null, solid: 'free-form' };
+  const r = solveSaltSolubility(saltInput(p, ionCharge, salt, pH, o), true);
+  const saltM = r.unbounded ? null : r.drugTotalM;
+  if (saltM !== null && saltM < free) return { pH, solubilityM: saltM, freeFormLimitedM: free, saltLimitedM: saltM, solid: 'salt' };
+  return { pH, solubilityM: free, freeFormLimitedM: free, saltLimitedM: saltM, solid: 'free-form' };
+}
+
+/**
+ * pH_max: where the salt-limited and free-form-limited solubilities are equal, found by scanning
+ * pH 0–14 for a sign change of log S_salt − log S_free and refining it with Brent's method.
+ * Returns the crossing nearest the drug's salt-forming pKa when there is more than one.
+ */
+export function numericalPhMax(
+  drug: DrugAcidBase,
+  log10IntrinsicM: number,
+  salt: ProfileSalt,
+  o: ProfileOptions = {},
+): number | null {
+  const p = drugProtolyte(drug);
+  checkSaltInput(saltInput(p, drug.ionCharge, salt, 7, o));
+  const h = (pH: number) => {
+    const r = solveSaltSolubility(saltInput(p, drug.ionCharge, salt, pH, o), true);
+    const logSalt = Math.log10(r.drugTotalM);
+    return logSalt - log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
+  };
+  const crossings: number[] = [];
+  const step = 0.25;
+  let prevPh = 0;
+  let prev = h(0);
+  for (let pH = step; pH <= 14 + 1e-9; pH += step) {
+    const cur = h(pH);
+    if (prev === 0) crossings.push(prevPh);
+    else if (prev * cur < 0) crossings.push(brentRoot(h, prevPh, pH, 1e-12).root);
+    prev = cur;
+    prevPh = pH;
+  }
+  if (crossings.length === 0) return null;
+  const ref = p.pKas[p.mostProtonatedCharge - drug.ionCharge] ?? p.pKas[0]!;
+  return crossings.reduce((best, x) => (Math.abs(x - ref) < Math.abs(best - ref) ? x : best));
+}
+
+/** Solubility against pH, default 1.0–8.0 in steps of 0.1, with pH_max and the stated assumptions. */
+export function phSolubilityProfile(
+  drug: DrugAcidBase,
+  log10IntrinsicM: number,
+  salt: ProfileSalt | null,
+  o: ProfileOptions = {},
+): PhProfile {
+  const from = requireFiniteInRange('phFrom', o.phFrom ?? 1, 0, 14);
+  const to = requireFiniteInRange('phTo', o.phTo ?? 8, 0, 14);
+  const step = requireFiniteInRange('phStep', o.phStep ?? 0.1, 0.001, 14);
+  if (!(to >= from)) throw new ChemInputError('phTo', `${to} is below phFrom ${from}`, 'phTo ≥ phFrom');
+  requireFiniteInRange('log10IntrinsicSolubility', log10IntrinsicM, -20, 2, 'log₁₀ mol/L');
+  const p = drugProtolyte(drug);
+  if (salt) checkSaltInput(saltInput(p, drug.ionCharge, salt, from, o));
+  const n = Math.round((to - from) / step);
+  const points: ProfilePoint[] = [];
+  for (let k = 0; k <= n; k++) {
+    const pH = Math.min(to, from + k * step);
+    points.push(pointAt(p, drug.ionCharge, log10IntrinsicM, salt, Number(pH.toFixed(10)), o));
+  }
+  return {
+    points,
+    phMax: salt ? numericalPhMax(drug, log10IntrinsicM, salt, o) : null,
+    assumptions: ASSUMPTIONS,
+  };
+}

@@ -1,0 +1,73 @@
+import { ChemInputError, requireFiniteInRange } from '../result';
+
+/**
+ * Acid–base speciation of a protolyte (a molecule with one or more dissociable protons) at a fixed
+ * pH, from its macroscopic pKa values (Henderson–Hasselbalch generalised to a polyprotic ladder;
+ * any analytical chemistry text, e.g. Harris, "Quantitative Chemical Analysis", ch. 10–11).
+ *
+ * Assumptions: concentration pKa values (activity effects folded into the pKa), 25 °C values used at
+ * the screening temperature unless the caller shifts them, no micro-speciation (tautomers and
+ * zwitterion/neutral microspecies are lumped by net charge).
+ */
+export interface Protolyte {
+  /** Macroscopic pKa values, strictly ascending. */
+  pKas: readonly number[];
+  /** Net charge of the fully protonated form (0 for a neutral acid HₙA, +n for a base with n sites). */
+  mostProtonatedCharge: number;
+}
+
+/** Throw a ChemInputError unless the pKa list is finite, within −10..20 and strictly ascending. */
+export function requireAscendingPkas(field: string, pKas: readonly number[]): readonly number[] {
+  pKas.forEach((p, i) => requireFiniteInRange(`${field}[${i}]`, p, -10, 20));
+  for (let i = 1; i < pKas.length; i++) {
+    if (!(pKas[i]! > pKas[i - 1]!)) {
+      throw new ChemInputError(
+        field,
+        `pKa values out of order (${pKas.join(', ')})`,
+        'pKa values in strictly ascending order, lowest (most acidic step) first',
+      );
+    }
+  }
+  return pKas;
+}
+
+/**
+ * log₁₀ of the mole fraction of every species, index i = protons lost from the fully protonated
+ * form (charge = mostProtonatedCharge − i). Computed in log space so that no fraction underflows to
+ * zero and no log of zero appears downstream.
+ */
+export function log10SpeciesFractions(p: Protolyte, pH: number): number[] {
+  const logs: number[] = [0];
+  let acc = 0;
+  for (const pKa of p.pKas) {
+    acc += pH - pKa;
+    logs.push(acc);
+  }
+  const max = Math.max(...logs);
+  let sum = 0;
+  for (const l of logs) sum += 10 ** (l - max);
+  const logSum = max + Math.log10(sum);
+  return logs.map((l) => l - logSum);
+}
+
+/** log₁₀ of the fraction of the protolyte carrying net charge `charge` (−Infinity never: throws instead). */
+export function log10ChargeFraction(p: Protolyte, pH: number, charge: number): number {
+  const i = p.mostProtonatedCharge - charge;
+  if (!Number.isInteger(i) || i < 0 || i > p.pKas.length) {
+    throw new ChemInputError(
+      'charge',
+      `no species of charge ${charge} for a protolyte with ${p.pKas.length} pKa value(s) whose fully protonated form has charge ${p.mostProtonatedCharge}`,
+      `a charge from ${p.mostProtonatedCharge - p.pKas.length} to ${p.mostProtonatedCharge}`,
+    );
+  }
+  return log10SpeciesFractions(p, pH)[i]!;
+}
+
+/**
+ * The pKa linking the species of charge `lowerCharge` with the species of charge `lowerCharge + 1`
+ * (the proton whose transfer makes or breaks the salt). Undefined when no such step exists.
+ */
+export function linkingPka(p: Protolyte, lowerCharge: number): number | undefined {
+  const i = p.mostProtonatedCharge - lowerCharge - 1;
+  return i >= 0 && i < p.pKas.length ? p.pKas[i] : undefined;
+}
