@@ -1,0 +1,90 @@
+import { describe, expect, it } from 'vitest';
+import { render, screen } from '@testing-library/react';
+import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
+import { WhiskerBars, niceTicks } from '@/components/charts/WhiskerBars';
+import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
+
+/*
+ * Sodium chloride's cycle as the drawing input: ΔH_L = 787 kJ/mol (CRC Handbook, "Lattice Energies"
+ * table, from memory), ΔH_hyd(Na⁺) = −406 and ΔH_hyd(Cl⁻) = −378 kJ/mol (conventional absolute scale,
+ * Smith 1977, J. Chem. Educ. 54, 540, from memory). These test the picture, not the models.
+ */
+const nacl = {
+  saltLabel: 'NaCl (1:1)',
+  cationLabel: 'Na⁺',
+  anionLabel: 'Cl⁻',
+  cationsPerFormula: 1,
+  anionsPerFormula: 1,
+  lattice: { value: 787, uncertainty: 20 },
+  cationHydration: { value: -406, uncertainty: 10 },
+  anionHydration: { value: -378, uncertainty: 10 },
+  solution: { value: 787 - 406 - 378, uncertainty: 25 },
+};
+
+describe('energy-level diagram', () => {
+  it('draws levels to scale: equal kJ/mol give equal heights', () => {
+    const { container } = render(<EnergyLevelDiagram cycle={nacl} />);
+    const levels = [...container.querySelectorAll('line[stroke-width="2.5"]')].map((l) => Number(l.getAttribute('y1')));
+    expect(levels).toHaveLength(4);
+    const [solid, gas, half, aq] = levels as [number, number, number, number];
+    // SVG y grows downward: the lattice step goes up (smaller y), hydration steps go down.
+    expect(gas).toBeLessThan(solid);
+    expect(half).toBeGreaterThan(gas);
+    const perKJ = (solid - gas) / 787;
+    expect((half - gas) / perKJ).toBeCloseTo(406, 6);
+    expect((aq - half) / perKJ).toBeCloseTo(378, 6);
+    expect((solid - aq) / perKJ).toBeCloseTo(787 - 406 - 378, 6);
+  });
+
+  it('states every step with its uncertainty in the text alternative', () => {
+    render(<EnergyLevelDiagram cycle={nacl} />);
+    const caption = screen.getByText(/net ΔH_sol/);
+    expect(caption.textContent).toContain('ΔH_L = 787 ± 20 kJ/mol');
+    expect(caption.textContent).toContain('−406 ± 10 kJ/mol');
+    expect(caption.textContent).toContain('net ΔH_sol = 3 ± 25 kJ/mol');
+  });
+});
+
+describe('whisker bars', () => {
+  it('draws a whisker of ±u around each value and a caption', () => {
+    const { container } = render(
+      <WhiskerBars
+        title="t"
+        caption="Estimated ΔH_sol per candidate"
+        unit="kJ/mol"
+        domain={[-100, 100]}
+        rows={[{ id: 'a', label: 'A', value: 10, uncertainty: 20 }]}
+        width={500}
+      />,
+    );
+    expect(screen.getByText('Estimated ΔH_sol per candidate')).toBeInTheDocument();
+    const whisker = container.querySelector('g[stroke-width="1.4"] line')!;
+    const x1 = Number(whisker.getAttribute('x1'));
+    const x2 = Number(whisker.getAttribute('x2'));
+    const zero = container.querySelector('line[stroke-width="1.5"]')!;
+    const x0 = Number(zero.getAttribute('x1'));
+    // −10 and +30 around 0: the whisker's left end sits 10/30 as far from zero as its right end.
+    expect((x0 - x1) / (x2 - x0)).toBeCloseTo(10 / 30, 6);
+  });
+
+  it('picks round ticks', () => {
+    expect(niceTicks(0, 1, 5)).toEqual([0, 0.2, 0.4, 0.6, 0.8, 1]);
+    expect(niceTicks(-37, 112, 5)).toEqual([0, 50, 100]);
+  });
+});
+
+describe('pH–solubility chart', () => {
+  it('summarises each curve in words: pH_max and the lowest solubility in pH 1.2–6.8', () => {
+    render(
+      <PhSolubilityChart
+        doseLineMgPerMl={0.8}
+        series={[
+          { id: 'free', label: 'free base', kind: 'free-form', points: [1, 2, 7, 8].map((pH) => ({ pH, solubilityMgPerMl: 10 ** (7 - pH) * 0.01 })) },
+          { id: 's', label: 'salt', kind: 'salt', estimated: true, phMax: 5.5, points: [1, 2, 7].map((pH) => ({ pH, solubilityMgPerMl: 3 })) },
+        ]}
+      />,
+    );
+    expect(screen.getByText(/free base: lowest in pH 1.2–6.8 .* at pH 2.0/)).toBeInTheDocument();
+    expect(screen.getByText(/salt \(estimated\): pH_max 5.50/)).toBeInTheDocument();
+  });
+});
