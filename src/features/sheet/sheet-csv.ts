@@ -1,0 +1,84 @@
+import Papa from 'papaparse';
+import { CAUTION_LINES } from '@/components/Cautions';
+import { neutralizeCsvText } from './csv-safety';
+import type { SheetColumn, SheetModel } from './sheet.types';
+
+/** Rounds to 6 significant digits so float noise (0.30000000000000004) never reaches a file. */
+export function csvNumber(x: number): number {
+  if (!Number.isFinite(x)) throw new RangeError(`not a finite number: ${x}`);
+  return x === 0 ? 0 : Number(x.toPrecision(6));
+}
+
+const withUnit = (label: string, unit: string | null) => (unit ? `${label} (${unit})` : label);
+
+/** The CSV header row: every heading carries its unit; numeric columns add uncertainty and origin. */
+export function csvHeader(columns: readonly SheetColumn[]): string[] {
+  const head = ['Rank', 'Candidate'];
+  for (const c of columns) {
+    head.push(withUnit(c.label, c.unit));
+    if (c.kind === 'number') head.push(withUnit(`${c.label} uncertainty (1 sigma)`, c.unit), `${c.label} origin`);
+  }
+  head.push('Flags', 'Reasons');
+  return head;
+}
+
+type CsvValue = string | number | null;
+
+/** The table as rows of typed values (numbers as numbers, text neutralised), header first. */
+export function sheetCsvRows(model: SheetModel): CsvValue[][] {
+  const rows: CsvValue[][] = [csvHeader(model.columns).map(neutralizeCsvText)];
+  for (const r of model.rows) {
+    const line: CsvValue[] = [r.rank, neutralizeCsvText(r.label)];
+    for (const c of model.columns) {
+      const cell = r.cells[c.key];
+      const v = cell?.value ?? null;
+      line.push(typeof v === 'number' ? csvNumber(v) : v === null ? null : neutralizeCsvText(v));
+      if (c.kind === 'number') {
+        const u = cell?.uncertainty;
+        line.push(typeof u === 'number' && Number.isFinite(u) ? csvNumber(u) : null);
+        line.push(cell?.origin ?? null);
+      }
+    }
+    line.push(neutralizeCsvText(r.flags.join('; ')), neutralizeCsvText(r.reasons.join('; ')));
+    rows.push(line);
+  }
+  return rows;
+}
+
+/**
+ * The lines after the table, separated from it by one empty line: where the numbers come from and the
+ * cautions (SCIENCE.md §6) — an exported ranking always travels with them.
+ */
+export function csvFooter(model: SheetModel): string[] {
+  return [
+    `Comparison of ${model.compound.name} (project ${model.projectName}), made ${model.generatedAt} with Saltsmith ${model.appVersion}. Origin: estimated = model estimate, measured = bench data, input = entered by the user.`,
+    ...CAUTION_LINES.map((l) => `Caution: ${l}`),
+  ].map(neutralizeCsvText);
+}
+
+/**
+ * The comparison as CSV (RFC 4180: comma separated, CRLF line ends, fields holding quotes, commas
+ * or line breaks quoted, quotes doubled). The first line is the header (units in every heading), then
+ * one line per candidate, then an empty line and the footer ({@link csvFooter}). Every text field is
+ * quoted and formula-like text neutralised (OWASP CSV Injection); numbers are written bare so a
+ * spreadsheet reads them as numbers; missing values are empty.
+ */
+export function sheetToCsv(model: SheetModel): string {
+  const data: CsvValue[][] = [...sheetCsvRows(model), [''], ...csvFooter(model).map((l) => [l])];
+  return Papa.unparse(data.map((row) => row.map((v) => (v === null ? '' : v))), {
+    newline: '\r\n',
+    quotes: (value: unknown) => typeof value === 'string' && value !== '',
+    escapeFormulae: false,
+  });
+}
+
+/** A file name for the CSV download. */
+export function sheetCsvFileName(projectName: string, isoDateTime: string): string {
+  const safe =
+    projectName
+      .normalize('NFKD')
+      .replace(/[^\w.-]+/g, '-')
+      .replace(/^[-.]+|[-.]+$/g, '')
+      .slice(0, 60) || 'comparison';
+  return `${safe}-comparison-${isoDateTime.slice(0, 10)}.csv`;
+}

@@ -1,0 +1,68 @@
+/**
+ * The comparison sheet's data, built once from a screening result and rendered two ways: the
+ * printable sheet and the CSV. Keeping one model guarantees the two carry the same numbers.
+ */
+
+/** Where a number came from: a model estimate, a bench measurement, or the user's own input. */
+export type ValueOrigin = 'estimated' | 'measured' | 'input';
+
+export interface SheetColumn {
+  key: string;
+  /** Column heading without unit, e.g. "pH_max". */
+  label: string;
+  /** Unit shown in the heading, or null for dimensionless numbers and text. */
+  unit: string | null;
+  /** Numeric columns get an uncertainty column and an origin column in the CSV. */
+  kind: 'number' | 'text';
+  /** One-line explanation for the sheet's legend. */
+  hint?: string;
+}
+
+export interface SheetCell {
+  /** A finite number, a text, or null when not available. */
+  value: number | string | null;
+  /** Standard uncertainty (1σ) in the column's unit, when known. */
+  uncertainty?: number | null;
+  origin?: ValueOrigin | null;
+}
+
+export interface SheetRow {
+  id: string;
+  rank: number;
+  /** The candidate's name, e.g. "Demorazine mesylate (1:1)" — user-controlled text, never markup. */
+  label: string;
+  cells: Record<string, SheetCell>;
+  /** Short warnings (e.g. "disproportionation risk"). */
+  flags: string[];
+  /** Why the candidate sits where it does, in words. */
+  reasons: string[];
+}
+
+export interface SheetSetting {
+  label: string;
+  value: string | number;
+  unit?: string;
+}
+
+export interface SheetConfidenceRow {
+  label: string;
+  n: number;
+  meanAbsPercentError: number;
+  maxAbsPercentError: number;
+  signedBiasPercent: number;
+}
+
+export interface SheetModel {
+  projectName: string;
+  compound: { name: string; facts: SheetSetting[] };
+  /** ISO date-time the sheet was made. */
+  generatedAt: string;
+  appVersion: string;
+  settings: SheetSetting[];
+  weights: SheetSetting[];
+  columns: SheetColumn[];
+  rows: SheetRow[];
+  confidence: SheetConfidenceRow[];
+  /** Extra remarks (assumptions, model limits). */
+  notes: string[];
+}
