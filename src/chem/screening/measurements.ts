@@ -1,0 +1,131 @@
+import { ChemInputError } from '../result';
+import { hygroscopicityClass, type HygroscopicityClass } from './hygroscopicity';
+import { vantHoffFit, type VanTHoffFit } from './van-t-hoff';
+
+/**
+ * Measured data for one candidate, as plain data (the app stores it as `MeasurementRecord`; the
+ * core accepts this structural subset so that it does not import persistence code).
+ *
+ * Units: solubility 'mg/mL' (mass of the salt per mL, the usual way a salt's solubility is
+ * reported), 'mg/mL free form' (free-form equivalents) or 'mol/L' (formula units); melting point
+ * '°C'; solution enthalpy 'kJ/mol' (per formula unit); mass gain '%'; crystallinity '%'.
+ * `temperatureK` in K; `ph` the equilibrium pH when measured (null: unknown).
+ */
+export type MeasurementKind = 'solubility' | 'melting-point' | 'solution-enthalpy' | 'mass-gain-80rh' | 'crystallinity' | 'note';
+
+export interface MeasurementInput {
+  kind: MeasurementKind;
+  value: number | null;
+  unit: string;
+  ph: number | null;
+  temperatureK: number | null;
+  medium: string;
+  text: string;
+}
+
+export interface MeasuredSolubility {
+  /** Formula units dissolved, mol/L. */
+  formulaUnitsM: number;
+  ph: number | null;
+  temperatureK: number | null;
+  medium: string;
+}
+
+export interface InterpretedMeasurements {
+  /** Solubility closest to the screening temperature (for K_sp), if any. */
+  solubility: MeasuredSolubility | null;
+  allSolubilities: MeasuredSolubility[];
+  /** van 't Hoff fit when ≥ 3 solubilities at ≥ 2 temperatures exist; otherwise null with a reason. */
+  vantHoff: VanTHoffFit | null;
+  vantHoffNote: string | null;
+  meltingPointC: number | null;
+  /** Calorimetric ΔH_sol per formula unit, kJ/mol. */
+  solutionEnthalpyKJ: number | null;
+  massGainPercent: number | null;
+  hygroscopicity: HygroscopicityClass | null;
+  crystallinityPercent: number | null;
+  notes: string[];
+}
+
+const LIQUEFIED = /deliquesc|liquef|turned liquid/i;
+
+function toFormulaUnitsM(m: MeasurementInput, saltMolarMassGPerMol: number, freeFormMolarMassGPerMol: number, drugPerSalt: number): number {
+  const v = m.value;
+  if (v === null || !(Number.isFinite(v) && v > 0)) {
+    throw new ChemInputError('measurement.value', `a solubility must be greater than zero, got ${String(v)}`, 'a solubility > 0');
+  }
+  const unit = m.unit.trim().toLowerCase();
+  if (unit === 'mol/l' || unit === 'm') return v;
+  if (unit === 'mg/ml free form' || unit === 'mg/ml (free form)') return v / freeFormMolarMassGPerMol / drugPerSalt;
+  if (unit === 'mg/ml' || unit === 'g/l') return v / saltMolarMassGPerMol;
+  if (unit === 'µg/ml' || unit === 'ug/ml') return v / 1000 / saltMolarMassGPerMol;
+  throw new ChemInputError('measurement.unit', `unknown solubility unit '${m.unit}'`, "'mg/mL' (as salt), 'mg/mL free form', 'µg/mL' or 'mol/L'");
+}
+
+/**
+ * Read a candidate's measurements: the latest value of each kind wins (input order = record order),
+ * solubilities are converted to mol/L of formula units, a van 't Hoff fit is attempted when the
+ * data allow it, and the mass gain is classed by Ph. Eur. 5.11.
+ */
+export function interpretMeasurements(
+  list: readonly MeasurementInput[],
+  ctx: { saltMolarMassGPerMol: number; freeFormMolarMassGPerMol: number; drugPerSalt: number; temperatureK: number },
+): InterpretedMeasurements {
+  const out: InterpretedMeasurements = {
+    solubility: null,
+    allSolubilities: [],
+    vantHoff: null,
+    vantHoffNote: null,
+    meltingPointC: null,
+    solutionEnthalpyKJ: null,
+    massGainPercent: null,
+    hygroscopicity: null,
+    crystallinityPercent: null,
+    notes: [],
+  };
+  let liquefied = false;
+  for (const m of list) {
+    switch (m.kind) {
+      case 'solubility':
+        out.allSolubilities.push({
+          formulaUnitsM: toFormulaUnitsM(m, ctx.saltMolarMassGPerMol, ctx.freeFormMolarMassGPerMol, ctx.drugPerSalt),
+          ph: m.ph,
+          temperatureK: m.temperatureK,
+          medium: m.medium,
+        });
+        break;
+      case 'melting-point':
+        if (m.value !== null) out.meltingPointC = m.value;
+        break;
+      case 'solution-enthalpy':
+        if (m.value !== null) out.solutionEnthalpyKJ = m.value;
+        break;
+      case 'mass-gain-80rh':
+        if (m.value !== null) out.massGainPercent = m.value;
+        if (LIQUEFIED.test(m.text)) liquefied = true;
+        break;
+      case 'crystallinity':
+        if (m.value !== null) out.crystallinityPercent = m.value;
+        if (m.text) out.notes.push(`crystallinity: ${m.text}`);
+        break;
+      case 'note':
+        if (m.text) out.notes.push(m.text);
+        break;
+    }
+  }
+  if (out.massGainPercent !== null || liquefied) out.hygroscopicity = hygroscopicityClass(out.massGainPercent ?? 0, liquefied);
+  if (out.allSolubilities.length > 0) {
+    const T = ctx.temperatureK;
+    out.solubility = out.allSolubilities.reduce((best, s) =>
+      Math.abs((s.temperatureK ?? T) - T) < Math.abs((best.temperatureK ?? T) - T) ? s : best,
+    );
+    const withT = out.allSolubilities.filter((s) => s.temperatureK !== null);
+    const temps = new Set(withT.map((s) => s.temperatureK));
+    if (withT.length >= 3 && temps.size >= 2) {
+      out.vantHoff = vantHoffFit(withT.map((s) => ({ temperatureK: s.temperatureK!, solubility: s.formulaUnitsM })));
+    } else if (withT.length > 0) {
+      out.vantHoffNote = `van ’t Hoff fit needs at least three solubilities at two or more temperatures (have ${withT.length} at ${temps.size})`;
+    }
+  }
+  return out;
+}

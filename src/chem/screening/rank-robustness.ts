@@ -1,0 +1,103 @@
+import { createSeededRandom } from '../numerics/prng';
+import { ChemInputError } from '../result';
+import { DEFAULT_DELTA_PKA_BANDS, saltFormationVerdict, type DeltaPkaBands } from './delta-pka';
+import { criterionScores, weightedScore, type CriterionInputs } from './ranking';
+import type { ScreeningWeights } from './settings';
+
+/**
+ * Rank robustness: Monte Carlo over the uncertainties of the screen's estimates, giving each
+ * candidate's probability of staying in the top three (and its median rank). Reproducible: a seeded
+ * generator (mulberry32), no clock, no Math.random.
+ *
+ * What is drawn each iteration (normal, 1σ as each estimate states it):
+ * - one shared shift of the drug's pKa (σ by the pKa's origin) — moves every ΔpKa and pH_max together;
+ * - one shared shift of log S₀ (measured or GSE) — moves free-form-limited dose numbers, and the
+ *   salt-limited ones whose K_sp is anchored on S₀;
+ * - per candidate, an independent shift of its salt-limited log solubility (the K_sp estimate's own
+ *   spread, or the measurement's) — moves its salt-limited dose numbers and its pH_max.
+ * Linearised propagation (our simplification): a dose number moves by −Δlog S on the branch that
+ * limits it at the worst pH; pH_max moves by Δ(pKa) + Δ(log S₀) − Δ(log s_salt) for a base and by
+ * Δ(pKa) − Δ(log S₀) + Δ(log s_salt) for an acid. Criteria without an uncertainty (mass cost, acceptability, measured hygroscopicity) stay fixed.
+ */
+export interface RobustnessRow {
+  id: string;
+  criteria: CriterionInputs;
+  error?: string | null;
+  deltaPka: number | null;
+  worstSolid: 'salt' | 'free-form' | null;
+  gastricSolid: 'salt' | 'free-form' | null;
+  /** Independent 1σ of the salt-limited log₁₀ solubility, decades. */
+  saltLog10Sigma: number;
+  /** True when the salt-limited solubility is anchored on S₀ (estimated K_sp). */
+  saltAnchoredOnIntrinsic: boolean;
+}
+
+export interface RobustnessShared {
+  drugKind: 'base' | 'acid';
+  drugPkaSigma: number;
+  log10IntrinsicSigma: number;
+  bands?: DeltaPkaBands;
+}
+
+export interface RobustnessResult {
+  id: string;
+  /** Share of iterations in which the candidate ranked 1–3. */
+  pTop3: number;
+  /** Share of iterations in which it ranked first. */
+  pFirst: number;
+  medianRank: number;
+}
+
+export function rankRobustness(
+  rows: readonly RobustnessRow[],
+  weights: ScreeningWeights,
+  shared: RobustnessShared,
+  opts: { iterations?: number; seed?: number } = {},
+): RobustnessResult[] {
+  const iterations = opts.iterations ?? 1000;
+  if (!Number.isInteger(iterations) || iterations < 1 || iterations > 1e6) {
+    throw new ChemInputError('iterations', `${iterations} is not allowed`, 'an integer from 1 to 1 000 000');
+  }
+  const rng = createSeededRandom(opts.seed ?? 1);
+  const bands = shared.bands ?? DEFAULT_DELTA_PKA_BANDS;
+  const live = rows.filter((r) => !r.error);
+  const n = live.length;
+  const top3 = new Float64Array(n);
+  const first = new Float64Array(n);
+  const ranks: number[][] = live.map(() => []);
+  const scores = new Float64Array(n);
+  const order = Array.from({ length: n }, (_, i) => i);
+  const sign = shared.drugKind === 'base' ? 1 : -1;
+  for (let it = 0; it < iterations; it++) {
+    const dPka = rng.normal() * shared.drugPkaSigma;
+    const dS0 = rng.normal() * shared.log10IntrinsicSigma;
+    for (let i = 0; i < n; i++) {
+      const r = live[i]!;
+      const ds = rng.normal() * r.saltLog10Sigma;
+      const saltShift = ds + (r.saltAnchoredOnIntrinsic ? dS0 : 0);
+      const c = r.criteria;
+      const shiftFor = (solid: 'salt' | 'free-form' | null) => (solid === 'salt' ? saltShift : solid === 'free-form' ? dS0 : 0);
+      // margin = pH_max − micro-pH for a base, micro-pH − pH_max for an acid.
+      const dMargin = sign * dPka + dS0 - saltShift;
+      const perturbed: CriterionInputs = {
+        ...c,
+        saltProbability: r.deltaPka === null ? c.saltProbability : saltFormationVerdict(r.deltaPka + sign * dPka, bands).saltProbability,
+        log10WorstDoseNumber: c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - shiftFor(r.worstSolid),
+        log10GastricDoseNumber: c.log10GastricDoseNumber === null ? null : c.log10GastricDoseNumber - shiftFor(r.gastricSolid),
+        phMaxMarginPh: c.phMaxMarginPh === null ? null : c.phMaxMarginPh + dMargin,
+      };
+      scores[i] = weightedScore(criterionScores(perturbed), weights);
+    }
+    order.sort((a, b) => scores[b]! - scores[a]! || a - b);
+    for (let k = 0; k < n; k++) {
+      const i = order[k]!;
+      if (k < 3) top3[i]! += 1;
+      if (k === 0) first[i]! += 1;
+      ranks[i]!.push(k + 1);
+    }
+  }
+  return live.map((r, i) => {
+    const sorted = ranks[i]!.sort((a, b) => a - b);
+    return { id: r.id, pTop3: top3[i]! / iterations, pFirst: first[i]! / iterations, medianRank: sorted[Math.floor((sorted.length - 1) / 2)]! };
+  });
+}

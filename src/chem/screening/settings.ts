@@ -1,0 +1,78 @@
+import { z } from 'zod';
+
+/**
+ * Screening settings, validated with zod (the app keeps them in the project's `settings.extra.screening`).
+ * Defaults and their basis:
+ * - weights: equal 1 for the main criteria, 0.5 for mass cost and hygroscopicity (our own default;
+ *   the user edits them);
+ * - ΔpKa bands: Cruz-Cabeza 2012 (−1, 4) and the common-practice minimum 2 (Stahl & Wermuth 2002);
+ * - gastric medium: pH 1.2 with 0.12 M chloride (USP simulated gastric fluid composition, from memory;
+ *   the project setting `gastricChlorideM` overrides it);
+ * - microenvironment pH 7 (project setting), 37 °C (ICH M9 temperature);
+ * - salt anchor 2 decades above S₀ (see ksp-estimate.ts, common practice);
+ * - pKa uncertainty by origin for the rank-robustness draw: measured 0.1, literature 0.3, predicted
+ *   0.7 pKa units (our assumption; predicted pKa values are commonly quoted at ±0.5–1 unit).
+ */
+export const screeningWeightsSchema = z.object({
+  saltFormation: z.number().min(0).max(10).default(1),
+  solubility: z.number().min(0).max(10).default(1),
+  gastric: z.number().min(0).max(10).default(1),
+  disproportionation: z.number().min(0).max(10).default(1),
+  massCost: z.number().min(0).max(10).default(0.5),
+  acceptability: z.number().min(0).max(10).default(1),
+  hygroscopicity: z.number().min(0).max(10).default(0.5),
+});
+export type ScreeningWeights = z.infer<typeof screeningWeightsSchema>;
+export type CriterionKey = keyof ScreeningWeights;
+export const CRITERIA: readonly CriterionKey[] = [
+  'saltFormation',
+  'solubility',
+  'gastric',
+  'disproportionation',
+  'massCost',
+  'acceptability',
+  'hygroscopicity',
+];
+
+export const mediumSchema = z.object({
+  id: z.string().min(1).max(60),
+  label: z.string().min(1).max(120),
+  pH: z.number().min(0).max(14),
+  /** Counter-ions present, by library id, mol/L (e.g. { chloride: 0.12 }). */
+  ions: z.record(z.string(), z.number().min(0).max(20)).default({}),
+  /** Ionic strength of the medium, mol/L, for the Davies option. */
+  ionicStrengthM: z.number().min(0).max(5).default(0),
+});
+export type ScreeningMedium = z.infer<typeof mediumSchema>;
+
+export const screeningSettingsSchema = z.object({
+  weights: screeningWeightsSchema.default(screeningWeightsSchema.parse({})),
+  deltaPkaBands: z
+    .object({
+      cocrystalBelow: z.number().min(-10).max(10).default(-1),
+      saltAbove: z.number().min(-10).max(15).default(4),
+      stableSaltMin: z.number().min(-10).max(15).default(2),
+    })
+    .refine((b) => b.cocrystalBelow < b.saltAbove, 'the cocrystal band must lie below the salt band')
+    .default({ cocrystalBelow: -1, saltAbove: 4, stableSaltMin: 2 }),
+  gastricPh: z.number().min(0).max(14).default(1.2),
+  gastricChlorideM: z.number().min(0).max(5).default(0.12),
+  /** Extra media the user defines (buffers with their counter-ions). */
+  media: z.array(mediumSchema).max(20).default([]),
+  microenvironmentPh: z.number().min(0).max(14).default(7),
+  temperatureK: z.number().min(273.15).max(373.15).default(310.15),
+  activityModel: z.enum(['ideal', 'davies']).default('ideal'),
+  /** Ionic strength of the dissolution media for the Davies option, mol/L. */
+  backgroundIonicStrengthM: z.number().min(0).max(5).default(0.1),
+  phGrid: z
+    .object({ from: z.number().min(0).max(14).default(1), to: z.number().min(0).max(14).default(8), step: z.number().min(0.01).max(2).default(0.1) })
+    .default({ from: 1, to: 8, step: 0.1 }),
+  saltAnchorLog10: z.number().min(0).max(6).default(2),
+  pkaSigmaByOrigin: z
+    .object({ measured: z.number().min(0).max(3).default(0.1), literature: z.number().min(0).max(3).default(0.3), predicted: z.number().min(0).max(3).default(0.7) })
+    .default({ measured: 0.1, literature: 0.3, predicted: 0.7 }),
+});
+export type ScreeningSettings = z.infer<typeof screeningSettingsSchema>;
+
+/** Settings with every default filled in. */
+export const defaultScreeningSettings = (): ScreeningSettings => screeningSettingsSchema.parse({});
