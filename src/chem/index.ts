@@ -6,3 +6,4 @@ export * from './constants/physical';
 export * from './result';
 export * from './models/kapustinskii/kapustinskii';
 export * from './data/skeleton-radii';
+export * from './screening';
