@@ -4,6 +4,7 @@
  */
 export * from './constants/physical';
 export * from './result';
-export * from './models/kapustinskii/kapustinskii';
-export * from './data/skeleton-radii';
+export * from './thermo';
+export * from './compound';
+export * from './library';
 export * from './screening';

@@ -1,0 +1,176 @@
+import { ChemInputError } from '../result';
+import { ATOMIC_WEIGHTS_G_PER_MOL, ELEMENT_SYMBOLS } from './atomic-weights';
+
+/** Element symbol → number of atoms. */
+export type ElementCounts = Record<string, number>;
+
+export interface ParsedFormula {
+  /** Atom counts, every count a positive integer. */
+  elements: ElementCounts;
+  /** Net charge written after the formula (`+`, `2-`, `^2-`, `(2+)`), 0 when none. */
+  charge: number;
+  /** The formula in Hill order, without charge (C, H, then the rest alphabetically). */
+  hill: string;
+}
+
+const ACCEPTED =
+  'element symbols with counts, optional parentheses and a hydrate part, e.g. C18H20ClN3O, Ca(C2H3O2)2, C4H4O4·H2O; a charge as a trailing + or - (±1) or ^2- / (2-)';
+
+/**
+ * Parse a molecular formula as people write it: `C18H20ClN3O`, `Ca(OH)2`, `C9H8O4·2H2O`,
+ * `CH3SO3-`, `C4H12N2^2+`. Element symbols must be real; elements without a bundled standard atomic
+ * weight are refused with a message naming them (no mass is guessed).
+ * @throws ChemInputError naming `field` on any unreadable part.
+ */
+export function parseFormula(text: string, field = 'formula'): ParsedFormula {
+  if (typeof text !== 'string') throw new ChemInputError(field, 'a formula is text', ACCEPTED);
+  let t = text.replace(/\s+/g, '');
+  if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
+  if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
+
+  // Charge suffix: ^2-, (2-), 2-, +, −, ⁺ ⁻ (superscripts).
+  t = t
+    .replace(/[⁺]/g, '+')
+    .replace(/[⁻−–]/g, '-')
+    .replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)));
+  // A charge of 2 or more is written `^2-` or `(2-)`; a bare trailing sign is ±1 and any digits before
+  // it belong to the formula (`CH3SO3-` is CH3SO3 with charge −1).
+  let charge = 0;
+  const marked = /(?:\^(\d*)([+-])|\((\d*)([+-])\))$/.exec(t);
+  if (marked) {
+    const digits = marked[1] ?? marked[3] ?? '';
+    const sign = (marked[2] ?? marked[4]) === '-' ? -1 : 1;
+    charge = sign * (digits === '' ? 1 : Number(digits));
+    t = t.slice(0, t.length - marked[0].length);
+  } else if (/[+-]$/.test(t)) {
+    charge = t.endsWith('-') ? -1 : 1;
+    t = t.slice(0, -1);
+  }
+  if (Math.abs(charge) > 6) throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
+
+  const elements: ElementCounts = {};
+  const parts = t.split(/[·.*•]/);
+  for (const part of parts) {
+    if (part === '') throw new ChemInputError(field, 'an empty part around a hydrate dot', ACCEPTED);
+    const lead = /^(\d+)(.*)$/.exec(part);
+    const multiplier = lead ? Number(lead[1]) : 1;
+    const body = lead ? lead[2]! : part;
+    const counts = parseGroup(body, field);
+    for (const [el, n] of Object.entries(counts)) elements[el] = (elements[el] ?? 0) + n * multiplier;
+  }
+  for (const [el, n] of Object.entries(elements)) {
+    if (n === 0) Reflect.deleteProperty(elements, el);
+  }
+  if (Object.keys(elements).length === 0) throw new ChemInputError(field, 'no atoms found', ACCEPTED);
+  return { elements, charge, hill: hillFormula(elements) };
+}
+
+function parseGroup(body: string, field: string): ElementCounts {
+  const stack: ElementCounts[] = [{}];
+  let i = 0;
+  const readCount = (): number => {
+    const m = /^\d+/.exec(body.slice(i));
+    if (!m) return 1;
+    i += m[0].length;
+    const n = Number(m[0]);
+    if (n > 10000) throw new ChemInputError(field, `count ${n} is too large`, ACCEPTED);
+    return n;
+  };
+  while (i < body.length) {
+    const c = body[i]!;
+    if (c === '(' || c === '[') {
+      stack.push({});
+      i++;
+    } else if (c === ')' || c === ']') {
+      if (stack.length < 2) throw new ChemInputError(field, `unmatched '${c}'`, ACCEPTED);
+      i++;
+      const n = readCount();
+      const inner = stack.pop()!;
+      const outer = stack[stack.length - 1]!;
+      for (const [el, k] of Object.entries(inner)) outer[el] = (outer[el] ?? 0) + k * n;
+    } else if (/[A-Z]/.test(c)) {
+      const m = /^[A-Z][a-z]?/.exec(body.slice(i))!;
+      let sym = m[0];
+      // Prefer a two-letter symbol only when it is a real element (e.g. "Co" vs "C"+"o" is invalid anyway).
+      if (sym.length === 2 && !ELEMENT_SYMBOLS.has(sym)) sym = sym[0]!;
+      if (!ELEMENT_SYMBOLS.has(sym)) {
+        throw new ChemInputError(field, `unknown element '${m[0]}'`, ACCEPTED);
+      }
+      if (ATOMIC_WEIGHTS_G_PER_MOL[sym] === undefined) {
+        throw new ChemInputError(
+          field,
+          `element ${sym} has no bundled standard atomic weight`,
+          `elements ${Object.keys(ATOMIC_WEIGHTS_G_PER_MOL).join(' ')}`,
+        );
+      }
+      i += sym.length;
+      const n = readCount();
+      const top = stack[stack.length - 1]!;
+      top[sym] = (top[sym] ?? 0) + n;
+    } else {
+      throw new ChemInputError(field, `unexpected '${c}' at position ${i + 1}`, ACCEPTED);
+    }
+  }
+  if (stack.length !== 1) throw new ChemInputError(field, "unmatched '('", ACCEPTED);
+  return stack[0]!;
+}
+
+/** Hill order: C first, then H, then the rest alphabetically; with no carbon, all alphabetically. */
+export function hillFormula(elements: ElementCounts): string {
+  const syms = Object.keys(elements).filter((s) => (elements[s] ?? 0) > 0);
+  const hasC = syms.includes('C');
+  const ordered = hasC
+    ? ['C', ...(syms.includes('H') ? ['H'] : []), ...syms.filter((s) => s !== 'C' && s !== 'H').sort()]
+    : [...syms].sort();
+  return ordered.map((s) => (elements[s] === 1 ? s : `${s}${elements[s]}`)).join('');
+}
+
+/**
+ * Molar mass from atom counts, g/mol, with IUPAC 2021 abridged standard atomic weights
+ * ({@link ATOMIC_WEIGHTS_G_PER_MOL}). The mass of electrons gained or lost by an ion (5.5e-4 g/mol per
+ * charge) is ignored, as pharmacopoeias and openchemlib do.
+ */
+export function molarMassGPerMol(elements: ElementCounts): number {
+  let m = 0;
+  for (const [el, n] of Object.entries(elements)) {
+    const w = ATOMIC_WEIGHTS_G_PER_MOL[el];
+    if (w === undefined) throw new ChemInputError('formula', `element ${el} has no bundled atomic weight`, 'supported elements');
+    m += w * n;
+  }
+  return m;
+}
+
+/** Molar mass of a formula written as text, g/mol. @throws ChemInputError */
+export function formulaMolarMassGPerMol(formula: string, field = 'formula'): number {
+  return molarMassGPerMol(parseFormula(formula, field).elements);
+}
+
+/** Add (n > 0) or remove (n < 0) hydrogen atoms, as protonation and deprotonation do. */
+export function withHydrogens(elements: ElementCounts, n: number, field = 'formula'): ElementCounts {
+  const h = (elements.H ?? 0) + n;
+  if (h < 0) {
+    throw new ChemInputError(
+      field,
+      `cannot remove ${-n} hydrogen atom(s) from a formula with ${elements.H ?? 0}`,
+      'a formula with enough acidic hydrogen atoms for the charge',
+    );
+  }
+  const { H: _dropped, ...rest } = elements;
+  return h === 0 ? rest : { ...rest, H: h };
+}
+
+/** True when two atom-count maps describe the same formula. */
+export function sameElements(a: ElementCounts, b: ElementCounts): boolean {
+  const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
+  for (const k of keys) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
+  return true;
+}
+
+const SUPERSCRIPT = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+/** A formula with its charge as superscript text, e.g. `CH3O3S⁻`, `SO4²⁻`, `Ca²⁺`. */
+export function formatIonFormula(hill: string, charge: number): string {
+  if (charge === 0) return hill;
+  const mag = Math.abs(charge);
+  const digits = mag === 1 ? '' : String(mag).split('').map((d) => SUPERSCRIPT[Number(d)]).join('');
+  return `${hill}${digits}${charge > 0 ? '⁺' : '⁻'}`;
+}
