@@ -1,11 +1,13 @@
 import { writeLine, type CliCommand, type CliIo } from './io';
 import { latticeCommand } from './commands/lattice';
+import { ionsCommand } from './commands/ions';
 
 /**
  * The commands of `saltsmith`. Add one line per command; each lives in commands/<name>.ts.
  */
 const COMMANDS: Record<string, CliCommand> = {
   lattice: latticeCommand,
+  ions: ionsCommand,
 };
 
 const CAUTION =
