@@ -1,27 +1,29 @@
-import { kapustinskiiLatticeEnergyKJ, SKELETON_RADII_A } from '@/chem';
+import { estimateSaltThermo, getThermoIon, type ThermoIon } from '@/chem';
 
-type IonKey = keyof typeof SKELETON_RADII_A;
-const CATIONS: IonKey[] = ['Na+', 'K+'];
-const ANIONS: IonKey[] = ['Cl-', 'Br-'];
+const CATIONS = ['sodium', 'potassium'];
+const ANIONS = ['chloride', 'bromide'];
+
+const ion = (id: string): ThermoIon => {
+  const i = getThermoIon(id);
+  if (!i) throw new Error(`bundled ion ${id} missing`);
+  return i;
+};
 
 /**
- * A first computed result: Kapustinskii lattice enthalpies of simple salts, with the radii and their
- * source, so a newcomer can see the engine at work on salts whose values they know.
+ * A first computed result: Kapustinskii lattice enthalpies of simple salts from the thermochemistry engine,
+ * with the radii it used and their cited source, so a newcomer can see the engine at work on salts whose
+ * values they know.
  */
 export function ReferenceLatticeTable() {
   const rows = CATIONS.flatMap((c) =>
     ANIONS.map((a) => {
-      const cat = SKELETON_RADII_A[c];
-      const an = SKELETON_RADII_A[a];
-      const e = kapustinskiiLatticeEnergyKJ({
-        cationCharge: cat.charge,
-        anionCharge: an.charge,
-        cationRadiusA: cat.radiusA,
-        anionRadiusA: an.radiusA,
-      });
-      return { salt: `${c.replace('+', '')}${a.replace('-', '')}`, c, a, e };
+      const cat = ion(c);
+      const an = ion(a);
+      const r = estimateSaltThermo({ cation: cat, anion: an, cationsPerFormula: 1, anionsPerFormula: 1, method: 'kapustinskii' });
+      return { salt: `${cat.formula ?? cat.label}${an.formula ?? an.label}`, cat, an, e: r.latticeEnthalpyKJ };
     }),
   );
+  const radiusSource = ion('sodium').radiusA?.sources[0] ?? '';
   return (
     <section className="panel" aria-labelledby="ref-lattice-title">
       <h2 id="ref-lattice-title">Engine check: Kapustinskii lattice enthalpies</h2>
@@ -39,11 +41,11 @@ export function ReferenceLatticeTable() {
           </tr>
         </thead>
         <tbody>
-          {rows.map(({ salt, c, a, e }) => (
+          {rows.map(({ salt, cat, an, e }) => (
             <tr key={salt}>
               <th scope="row">{salt}</th>
-              <td>{SKELETON_RADII_A[c].radiusA.toFixed(2)}</td>
-              <td>{SKELETON_RADII_A[a].radiusA.toFixed(2)}</td>
+              <td>{cat.radiusA?.value.toFixed(2)}</td>
+              <td>{an.radiusA?.value.toFixed(2)}</td>
               <td>
                 {e.value.toFixed(0)} ± {e.uncertainty.toFixed(0)}
               </td>
@@ -51,7 +53,10 @@ export function ReferenceLatticeTable() {
           ))}
         </tbody>
       </table>
-      <p className="source">Radii: {SKELETON_RADII_A['Na+'].source}. Method: {kapustinskiiLatticeEnergyKJ.name.replace('LatticeEnergyKJ', '')} (Kapustinskii 1956; CRC Handbook form).</p>
+      <p className="source">
+        Radii: {radiusSource}. Method: Kapustinskii 1956 (CRC Handbook form, K = 1214 kJ·Å/mol); uncertainty is
+        the method’s RMS error on the bundled reference salts.
+      </p>
     </section>
   );
 }

@@ -1,0 +1,211 @@
+import { SRC } from './thermo-sources';
+
+/**
+ * Published reference data the thermochemistry engine is checked and calibrated against. Every row names
+ * its source; values recalled rather than read from a table at writing time say "from memory" (no copy of
+ * the NBS tables or the CRC Handbook was available offline). fixtures/reference/*.csv hold the same rows
+ * for people and other tools; tests/chem/thermo/reference-fixtures.test.ts keeps the two in step.
+ *
+ * Units: kJ/mol, g/cm³, Å.
+ */
+
+const FM = ' — from memory';
+
+/** ΔfH° of crystalline salts, kJ/mol, 298.15 K (Wagman et al. 1982, NBS tables). */
+export const SOLID_FORMATION_KJ: Readonly<Record<string, number>> = {
+  LiF: -615.97, LiCl: -408.61, LiBr: -351.21, LiI: -270.41,
+  NaF: -573.65, NaCl: -411.15, NaBr: -361.06, NaI: -287.78,
+  KF: -567.27, KCl: -436.75, KBr: -393.8, KI: -327.9,
+  RbF: -557.7, RbCl: -435.35, RbBr: -394.59, RbI: -333.8,
+  CsF: -553.5, CsCl: -443.04, CsBr: -405.81, CsI: -346.6,
+  MgF2: -1123.4, MgCl2: -641.32, MgBr2: -524.3, MgI2: -364.0,
+  CaF2: -1219.6, CaCl2: -795.8, CaBr2: -682.8, CaI2: -533.5,
+  SrF2: -1216.3, SrCl2: -828.9, SrBr2: -717.6, SrI2: -558.1,
+  BaF2: -1207.1, BaCl2: -858.6, BaBr2: -757.3, BaI2: -602.1,
+  ZnCl2: -415.05,
+  NaNO3: -467.85, KNO3: -494.63, NH4Cl: -314.43, NH4Br: -270.83, NH4I: -201.42, NH4NO3: -365.56,
+  LiOH: -484.93, NaOH: -425.61, KOH: -424.76,
+  NaClO4: -383.3, KClO4: -432.75, NH4ClO4: -295.31,
+  Na2SO4: -1387.08, K2SO4: -1437.79, MgSO4: -1284.9, CaSO4: -1434.11, BaSO4: -1473.2,
+  Na2CO3: -1130.68, K2CO3: -1151.02, CaCO3: -1206.92,
+  KH2PO4: -1568.33, NaCH3COO: -708.81, KCH3COO: -723.33,
+};
+
+/** ΔfH° of aqueous ions at infinite dilution, kJ/mol, 298.15 K (Wagman et al. 1982; H⁺(aq) = 0). */
+export const AQUEOUS_ION_FORMATION_KJ: Readonly<Record<string, number>> = {
+  lithium: -278.49, sodium: -240.12, potassium: -252.38, rubidium: -251.17, caesium: -258.28,
+  ammonium: -132.51, magnesium: -466.85, calcium: -542.83, strontium: -545.8, barium: -537.64, zinc: -153.89,
+  fluoride: -332.63, chloride: -167.16, bromide: -121.55, iodide: -55.19, hydroxide: -229.99,
+  nitrate: -207.36, sulfate: -909.27, carbonate: -677.14, perchlorate: -129.33,
+  'dihydrogen-phosphate': -1296.29, acetate: -486.01,
+};
+
+/** Enthalpy of atomisation of the elements = ΔfH° of the gaseous atom, kJ/mol, 298.15 K (Wagman et al. 1982). */
+export const ATOM_FORMATION_KJ: Readonly<Record<string, number>> = {
+  Li: 159.37, Na: 107.32, K: 89.0, Rb: 80.88, Cs: 76.06, Mg: 147.7, Ca: 178.2, Sr: 164.4, Ba: 180.0,
+  F: 79.38, Cl: 121.68, Br: 111.88, I: 106.84,
+};
+
+/**
+ * Ionisation energies (sum of the first z), kJ/mol, and electron affinities, kJ/mol — CRC Handbook
+ * "Ionization Energies of Atoms and Atomic Ions" and "Electron Affinities" (NIST values), at 0 K. The
+ * (5/2)RT corrections that turn them into 298 K enthalpies cancel around a neutral salt's cycle (one
+ * electron out per electron in), so they are left out; see the Born–Haber test.
+ */
+export const IONISATION_ENERGY_SUM_KJ: Readonly<Record<string, number>> = {
+  Li: 520.2, Na: 495.8, K: 418.8, Rb: 403.0, Cs: 375.7,
+  Mg: 737.7 + 1450.7, Ca: 589.8 + 1145.4, Sr: 549.5 + 1064.2, Ba: 502.9 + 965.2,
+};
+export const ELECTRON_AFFINITY_KJ: Readonly<Record<string, number>> = { F: 328.2, Cl: 348.6, Br: 324.5, I: 295.2 };
+
+export const CYCLE_DATA_SOURCE = `${SRC.nbs1982}; ionisation energies and electron affinities: CRC Handbook (NIST)${FM}`;
+
+/** How a reference salt's formula-unit volume is known. */
+export type VolumeSource =
+  | { kind: 'cell'; structure: 'rock-salt' | 'caesium-chloride' | 'fluorite'; edgeA: number; source: string }
+  | { kind: 'cell-volume'; cellVolumeA3: number; z: number; structure?: 'rutile'; source: string }
+  | { kind: 'density'; densityGPerCm3: number; source: string };
+
+/** A salt of the lattice reference set. */
+export interface LatticeReferenceSalt {
+  id: string;
+  formula: string;
+  cation: string;
+  anion: string;
+  p: number;
+  q: number;
+  group: 'alkali-halide' | 'alkaline-earth-halide' | 'polyatomic';
+  /** How the reference ΔH_L is obtained. */
+  route: 'born-haber' | 'solution-cycle';
+  volume: VolumeSource;
+  /** Metal and halogen symbols for the Born–Haber route. */
+  metal?: string;
+  halogen?: string;
+}
+
+const rs = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'rock-salt', edgeA, source: SRC.wyckoff + FM });
+const cc = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'caesium-chloride', edgeA, source: SRC.wyckoff + FM });
+const fl = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'fluorite', edgeA, source: SRC.wyckoff + FM });
+const rho = (densityGPerCm3: number): VolumeSource => ({ kind: 'density', densityGPerCm3, source: SRC.crcDensity + FM });
+
+const ALKALI: [string, string][] = [['Li', 'lithium'], ['Na', 'sodium'], ['K', 'potassium'], ['Rb', 'rubidium'], ['Cs', 'caesium']];
+const EARTH: [string, string][] = [['Mg', 'magnesium'], ['Ca', 'calcium'], ['Sr', 'strontium'], ['Ba', 'barium']];
+const HAL: [string, string][] = [['F', 'fluoride'], ['Cl', 'chloride'], ['Br', 'bromide'], ['I', 'iodide']];
+
+const ALKALI_VOLUME: Record<string, VolumeSource> = {
+  LiF: rs(4.027), LiCl: rs(5.13), LiBr: rs(5.501), LiI: rs(6.0),
+  NaF: rs(4.634), NaCl: rs(5.64), NaBr: rs(5.977), NaI: rs(6.473),
+  KF: rs(5.347), KCl: rs(6.293), KBr: rs(6.6), KI: rs(7.066),
+  RbF: rs(5.64), RbCl: rs(6.581), RbBr: rs(6.885), RbI: rs(7.342),
+  CsF: rs(6.008), CsCl: cc(4.123), CsBr: cc(4.286), CsI: cc(4.567),
+};
+const EARTH_VOLUME: Record<string, VolumeSource> = {
+  MgF2: { kind: 'cell-volume', cellVolumeA3: 4.62 * 4.62 * 3.05, z: 2, structure: 'rutile', source: `${SRC.wyckoff} (rutile type, a 4.62, c 3.05 Å)${FM}` },
+  MgCl2: rho(2.32), MgBr2: rho(3.72), MgI2: rho(4.43),
+  CaF2: fl(5.463), CaCl2: rho(2.15), CaBr2: rho(3.38), CaI2: rho(3.96),
+  SrF2: fl(5.8), SrCl2: rho(3.05), SrBr2: rho(4.22), SrI2: rho(4.55),
+  BaF2: fl(6.2), BaCl2: rho(3.86), BaBr2: rho(4.78), BaI2: rho(5.15),
+};
+
+/** Reference salts: 20 alkali halides, 16 alkaline-earth halides (Born–Haber), 22 salts of polyatomic ions. */
+export const LATTICE_REFERENCE_SALTS: readonly LatticeReferenceSalt[] = [
+  ...ALKALI.flatMap(([m, mid]) =>
+    HAL.map(([x, xid]) => ({
+      id: `${m}${x}`, formula: `${m}${x}`, cation: mid, anion: xid, p: 1, q: 1, group: 'alkali-halide' as const,
+      route: 'born-haber' as const, volume: ALKALI_VOLUME[`${m}${x}`]!, metal: m, halogen: x,
+    })),
+  ),
+  ...EARTH.flatMap(([m, mid]) =>
+    HAL.map(([x, xid]) => ({
+      id: `${m}${x}2`, formula: `${m}${x}2`, cation: mid, anion: xid, p: 1, q: 2, group: 'alkaline-earth-halide' as const,
+      route: 'born-haber' as const, volume: EARTH_VOLUME[`${m}${x}2`]!, metal: m, halogen: x,
+    })),
+  ),
+  ...(
+    [
+      ['NaNO3', 'sodium', 'nitrate', 1, 1, 2.26],
+      ['KNO3', 'potassium', 'nitrate', 1, 1, 2.11],
+      ['NH4NO3', 'ammonium', 'nitrate', 1, 1, 1.72],
+      ['NH4Cl', 'ammonium', 'chloride', 1, 1, 1.53],
+      ['NH4Br', 'ammonium', 'bromide', 1, 1, 2.43],
+      ['NH4I', 'ammonium', 'iodide', 1, 1, 2.51],
+      ['LiOH', 'lithium', 'hydroxide', 1, 1, 1.46],
+      ['NaOH', 'sodium', 'hydroxide', 1, 1, 2.13],
+      ['KOH', 'potassium', 'hydroxide', 1, 1, 2.04],
+      ['NaClO4', 'sodium', 'perchlorate', 1, 1, 2.5],
+      ['KClO4', 'potassium', 'perchlorate', 1, 1, 2.52],
+      ['NH4ClO4', 'ammonium', 'perchlorate', 1, 1, 1.95],
+      ['Na2SO4', 'sodium', 'sulfate', 2, 1, 2.66],
+      ['K2SO4', 'potassium', 'sulfate', 2, 1, 2.66],
+      ['MgSO4', 'magnesium', 'sulfate', 1, 1, 2.66],
+      ['CaSO4', 'calcium', 'sulfate', 1, 1, 2.96],
+      ['BaSO4', 'barium', 'sulfate', 1, 1, 4.5],
+      ['Na2CO3', 'sodium', 'carbonate', 2, 1, 2.54],
+      ['K2CO3', 'potassium', 'carbonate', 2, 1, 2.29],
+      ['CaCO3', 'calcium', 'carbonate', 1, 1, 2.71],
+      ['KH2PO4', 'potassium', 'dihydrogen-phosphate', 1, 1, 2.34],
+      ['NaCH3COO', 'sodium', 'acetate', 1, 1, 1.528],
+      ['KCH3COO', 'potassium', 'acetate', 1, 1, 1.57],
+    ] as const
+  ).map(([f, c, a, p, q, d]) => ({
+    id: f, formula: f, cation: c, anion: a, p, q, group: 'polyatomic' as const, route: 'solution-cycle' as const,
+    volume: rho(d),
+  })),
+];
+
+/** Formula (without charge) of each reference salt's ions, for molar masses. */
+export const REFERENCE_SALT_SOURCES = {
+  bornHaber: `Born–Haber cycle: ${CYCLE_DATA_SOURCE}`,
+  solutionCycle: `Solution cycle ΔH_L = ΔH_sol − Σν·ΔH_hyd: ΔH_sol from ${SRC.nbs1982}${FM}; ΔH_hyd from ${SRC.marcus1991}${FM}`,
+};
+
+/**
+ * Salts of small organic ions with a published density, used to calibrate the packing coefficient that
+ * turns a Zhao–Abraham–Zissimos van der Waals volume into a volume in the crystal. Organic ion given by
+ * formula, charge and ring counts; the partner is a bundled inorganic ion with a Jenkins volume.
+ */
+export interface PackingCalibrationSalt {
+  id: string;
+  name: string;
+  organicFormula: string;
+  organicCharge: number;
+  rings: { aromatic: number; nonAromatic: number };
+  partner: string;
+  /** Organic ions and partner ions per formula unit. */
+  organicPerFormula: number;
+  partnerPerFormula: number;
+  densityGPerCm3: number;
+  source: string;
+}
+
+export const PACKING_CALIBRATION_SALTS: readonly PackingCalibrationSalt[] = [
+  { id: 'sodium-acetate', name: 'sodium acetate', organicFormula: 'C2H3O2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.528, source: SRC.crcOrganicDensity + FM },
+  { id: 'potassium-acetate', name: 'potassium acetate', organicFormula: 'C2H3O2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'potassium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.57, source: SRC.crcOrganicDensity + FM },
+  { id: 'sodium-formate', name: 'sodium formate', organicFormula: 'CHO2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.92, source: SRC.crcOrganicDensity + FM },
+  { id: 'sodium-benzoate', name: 'sodium benzoate', organicFormula: 'C7H5O2', organicCharge: -1, rings: { aromatic: 1, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.44, source: SRC.crcOrganicDensity + FM },
+  { id: 'potassium-hydrogen-phthalate', name: 'potassium hydrogen phthalate', organicFormula: 'C8H5O4', organicCharge: -1, rings: { aromatic: 1, nonAromatic: 0 }, partner: 'potassium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.636, source: SRC.crcOrganicDensity + FM },
+  { id: 'sodium-oxalate', name: 'sodium oxalate', organicFormula: 'C2O4', organicCharge: -2, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 2, densityGPerCm3: 2.34, source: SRC.crcDensity + FM },
+  { id: 'tetramethylammonium-chloride', name: 'tetramethylammonium chloride', organicFormula: 'C4H12N', organicCharge: 1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'chloride', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.169, source: SRC.crcOrganicDensity + FM },
+  { id: 'tetramethylammonium-bromide', name: 'tetramethylammonium bromide', organicFormula: 'C4H12N', organicCharge: 1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'bromide', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.56, source: SRC.crcOrganicDensity + FM },
+  { id: 'tetraethylammonium-bromide', name: 'tetraethylammonium bromide', organicFormula: 'C8H20N', organicCharge: 1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'bromide', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.397, source: SRC.crcOrganicDensity + FM },
+];
+
+/**
+ * Alkali salts whose published density gives the volume of a polyatomic anion with no Jenkins volume at
+ * hand: V(anion) = (M/(ρ·N_A) − p·V(cation)) / q, averaged over the listed salts.
+ */
+export const ANION_VOLUME_SALTS: readonly { anion: string; salts: { formula: string; cation: string; p: number; q: number; densityGPerCm3: number }[] }[] = [
+  { anion: 'hydroxide', salts: [{ formula: 'LiOH', cation: 'lithium', p: 1, q: 1, densityGPerCm3: 1.46 }, { formula: 'NaOH', cation: 'sodium', p: 1, q: 1, densityGPerCm3: 2.13 }, { formula: 'KOH', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.04 }] },
+  { anion: 'hydrogen-sulfate', salts: [{ formula: 'KHSO4', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.245 }] },
+  { anion: 'phosphate', salts: [{ formula: 'Na3PO4', cation: 'sodium', p: 3, q: 1, densityGPerCm3: 2.536 }] },
+  { anion: 'hydrogen-phosphate', salts: [{ formula: 'Na2HPO4', cation: 'sodium', p: 2, q: 1, densityGPerCm3: 1.7 }] },
+  { anion: 'dihydrogen-phosphate', salts: [{ formula: 'KH2PO4', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.34 }] },
+  { anion: 'acetate', salts: [{ formula: 'NaCH3COO', cation: 'sodium', p: 1, q: 1, densityGPerCm3: 1.528 }, { formula: 'KCH3COO', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 1.57 }] },
+];
+export const ANION_VOLUME_SOURCE = `derived here from densities (${SRC.crcDensity}${FM}) minus cation volumes (${SRC.jenkinsVolumes}${FM})`;
+
+/** Salts with an enthalpy of solution at infinite dilution computed from the NBS ΔfH° (Hess's law). */
+export const SOLUTION_REFERENCE_SALTS: readonly { formula: string; cation: string; anion: string; p: number; q: number }[] = [
+  ...LATTICE_REFERENCE_SALTS.map((s) => ({ formula: s.formula, cation: s.cation, anion: s.anion, p: s.p, q: s.q })),
+  { formula: 'ZnCl2', cation: 'zinc', anion: 'chloride', p: 1, q: 2 },
+];

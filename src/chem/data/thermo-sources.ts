@@ -1,0 +1,37 @@
+/**
+ * Citations shared by the thermochemistry data files. Each data row names one of these; a row whose value
+ * was recalled rather than read from the source carries `fromMemory: true` and says so in its text.
+ */
+export const SRC = {
+  shannon1976:
+    'R. D. Shannon, Acta Cryst. A32 (1976) 751–767, Table 1, effective ionic radii ("IR"), CN VI',
+  goldschmidt:
+    'V. M. Goldschmidt radii as used by H. D. B. Jenkins & H. K. Roobottom, "Lattice Energies", CRC Handbook of Chemistry and Physics (metal ions for Kapustinskii)',
+  thermoRadii:
+    'Thermochemical radii: H. K. Roobottom, H. D. B. Jenkins, J. Passmore, L. Glasser, J. Chem. Educ. 76 (1999) 1570, Table; H. D. B. Jenkins, K. P. Thakur, J. Chem. Educ. 56 (1979) 576; as in CRC "Lattice Energies" Table 2',
+  jenkinsVolumes:
+    'Ion volumes: H. D. B. Jenkins, H. K. Roobottom, J. Passmore, L. Glasser, Inorg. Chem. 38 (1999) 3609, Table 1',
+  marcus1991:
+    'Y. Marcus, J. Chem. Soc. Faraday Trans. 87 (1991) 2995, Table (standard molar enthalpies of hydration, ΔH_hyd(H⁺) = −1103 kJ/mol scale)',
+  marcus1994: 'Y. Marcus, Biophys. Chem. 51 (1994) 111, Table (hydration of ions)',
+  smith1977: 'D. W. Smith, J. Chem. Educ. 54 (1977) 540',
+  pauling1960:
+    'L. Pauling, The Nature of the Chemical Bond, 3rd ed. (1960): Born exponents He 5, Ne 7, Ar 9, Kr 10, Xe 12',
+  nbs1982:
+    'D. D. Wagman et al., "The NBS tables of chemical thermodynamic properties", J. Phys. Chem. Ref. Data 11 (1982) Suppl. 2 (ΔfH° at 298.15 K)',
+  crcLattice:
+    'H. D. B. Jenkins & H. K. Roobottom, "Lattice Energies", CRC Handbook of Chemistry and Physics, Table 1',
+  crcDensity: 'CRC Handbook of Chemistry and Physics, "Physical Constants of Inorganic Compounds" (density)',
+  wyckoff: 'R. W. G. Wyckoff, Crystal Structures, 2nd ed., vol. 1 (1963) (cubic cell edges at room temperature)',
+  crcOrganicDensity: 'CRC Handbook of Chemistry and Physics, "Physical Constants of Organic Compounds" (density)',
+  iupacWeights: 'IUPAC Commission on Isotopic Abundances and Atomic Weights, conventional atomic weights (2013)',
+  zhao2003:
+    'Y. H. Zhao, M. H. Abraham, A. M. Zissimos, J. Org. Chem. 68 (2003) 7368–7373, eq. 4 (V_vdW = Σ atoms − 5.92 N_B − 14.7 R_A − 3.8 R_NR)',
+  bondi1964: 'A. Bondi, J. Phys. Chem. 68 (1964) 441–451 (van der Waals radii)',
+  kitaigorodskii:
+    'A. I. Kitaigorodskii, Molecular Crystals and Molecules (Academic Press, 1973): packing coefficients 0.65–0.77',
+  latimer1939: 'W. M. Latimer, K. S. Pitzer, C. M. Slansky, J. Chem. Phys. 7 (1939) 108 (effective-radius Born hydration)',
+  born1920: 'M. Born, Z. Phys. 1 (1920) 45 (Born solvation energy)',
+  waterDielectric:
+    'Water at 298.15 K: ε_r = 78.36, dε_r/dT = −0.361 K⁻¹ (D. G. Archer & P. Wang, J. Phys. Chem. Ref. Data 19 (1990) 371) — from memory',
+} as const;

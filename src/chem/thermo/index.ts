@@ -1,0 +1,22 @@
+/**
+ * Thermochemistry engine: lattice, hydration and solution enthalpies with sourced ion data and measured
+ * uncertainty (SCIENCE.md §1–3). Everything here is pure and deterministic.
+ */
+export type * from './thermo.types';
+export { getThermoIon, findThermoIon, listThermoIonIds, derivedAnionVolumes, KAPUSTINSKII_RADIUS_SET } from './ions';
+export {
+  kapustinskiiLatticeEnergyKJ, kapustinskiiPotentialKJ, stoichiometryFromCharges, KAPUSTINSKII_K_KJ_A_PER_MOL,
+  KAPUSTINSKII_K_ALT_KJ_A_PER_MOL, KAPUSTINSKII_RHO_A, type KapustinskiiInput,
+} from './models/kapustinskii/kapustinskii';
+export { bornMayerPotentialKJ, bornLandePotentialKJ, MADELUNG_CONSTANTS, BORN_MAYER_RHO_A, nearestDistanceFromVolumeA } from './models/born-mayer/born-mayer';
+export { vbtPotentialKJ, volumeFromDensityNm3, volumeFromCellNm3, ionicStrengthFactor, VBT_CONSTANTS } from './models/vbt/vbt';
+export { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
+export { parseFormula as parseIonFormula, molarMassGPerMol as ionFormulaMassGPerMol } from './models/ion-volume/formula';
+export { vanDerWaalsVolumeA3, radiusFromVolumeA, organicIonFromFormula, packingCalibration, type PackingCalibration, type RingCounts } from './models/ion-volume/ion-volume';
+export { organicIonFromSmiles } from './models/ion-volume/from-smiles';
+export { bornHydrationEnthalpyKJ, bornEnthalpyFactor, fitBornOffsets, hydrationEnthalpyKJ, type BornOffsetFit } from './models/hydration/hydration';
+export { solveCycle, bornHaberCycle, solutionCycle, type BornHaberInput, type SolutionCycleInput } from './models/cycle/cycle';
+export { latticeFromSolutionEnthalpy } from './models/solution/solution';
+export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
+export { validationReport, kapustinskiiVariants } from './validation/report';
+export { referenceLatticeEnthalpyKJ, referenceSolutionEnthalpyKJ, referenceVolumeNm3 } from './validation/reference';

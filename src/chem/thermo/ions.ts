@@ -1,0 +1,123 @@
+import { AVOGADRO_PER_MOL } from '../constants/physical';
+import { THERMO_IONS, type SourcedValue, type ThermoIonRecord } from '../data/thermo-ions';
+import { ANION_VOLUME_SALTS, ANION_VOLUME_SOURCE } from '../data/thermo-reference';
+import type { Estimate } from '../result';
+import { molarMassGPerMol, parseFormula } from './models/ion-volume/formula';
+import { organicIonFromFormula, radiusFromVolumeA } from './models/ion-volume/ion-volume';
+import type { ThermoIon } from './thermo.types';
+
+/**
+ * Which radii Kapustinskii's equation uses for metal ions. The validation compares Goldschmidt radii
+ * (the CRC section's choice) with Shannon CN VI radii, each with K = 1214 and 1202.5; the pairing chosen
+ * here is the one with the lower mean |error| on the bundled halides, and a test asserts that it still is
+ * (tests/chem/thermo/validation.test.ts).
+ */
+export const KAPUSTINSKII_RADIUS_SET: 'goldschmidt' | 'shannon' = 'shannon';
+
+/** Radius uncertainty attached to tabulated radii, as a fraction (0.01 Å on ~1 Å): the tables' stated rounding — common practice. */
+const TABLE_RADIUS_REL_U = 0.01;
+
+const est = (v: SourcedValue, method: string, relU: number, absU = 0): Estimate => ({
+  value: v.value,
+  uncertainty: Math.max(Math.abs(v.value) * relU, absU),
+  method,
+  sources: [v.source],
+});
+
+let derivedVolumes: Map<string, Estimate> | undefined;
+
+/**
+ * Volumes of polyatomic anions with no Jenkins value at hand, derived from densities of their alkali salts:
+ * V = (M/(ρN_A) − p·V₊)/q, averaged; uncertainty the spread between salts, at least 10 % (common practice
+ * for ion-volume additivity; Jenkins et al. 1999 quote similar scatter).
+ */
+export function derivedAnionVolumes(): Map<string, Estimate> {
+  if (derivedVolumes) return derivedVolumes;
+  const map = new Map<string, Estimate>();
+  for (const { anion, salts } of ANION_VOLUME_SALTS) {
+    const vs = salts.map((s) => {
+      const cat = THERMO_IONS.find((i) => i.id === s.cation)!;
+      const vm = (molarMassGPerMol(parseFormula(s.formula)) / (s.densityGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
+      return (vm - s.p * cat.volumeNm3!.value) / s.q;
+    });
+    const mean = vs.reduce((a, b) => a + b, 0) / vs.length;
+    const spread = vs.length > 1 ? Math.max(...vs) - Math.min(...vs) : 0;
+    map.set(anion, {
+      value: mean,
+      uncertainty: Math.max(0.1 * mean, spread / 2),
+      method: 'derived-from-density',
+      sources: [`${ANION_VOLUME_SOURCE}: ${salts.map((s) => s.formula).join(', ')}`],
+    });
+  }
+  derivedVolumes = map;
+  return map;
+}
+
+function recordToIon(r: ThermoIonRecord): ThermoIon {
+  const sources = new Set<string>();
+  const crystal = r.shannonRadiusA ? est(r.shannonRadiusA, 'shannon-cn6', TABLE_RADIUS_REL_U) : undefined;
+  let radius: Estimate | undefined;
+  if (r.shape === 'monatomic') {
+    const src = KAPUSTINSKII_RADIUS_SET === 'goldschmidt' ? (r.goldschmidtRadiusA ?? r.shannonRadiusA) : r.shannonRadiusA;
+    if (src) radius = est(src, KAPUSTINSKII_RADIUS_SET === 'goldschmidt' && r.goldschmidtRadiusA ? 'goldschmidt' : 'shannon-cn6', TABLE_RADIUS_REL_U);
+  } else if (r.thermochemicalRadiusA) {
+    radius = est(r.thermochemicalRadiusA, 'thermochemical-radius', TABLE_RADIUS_REL_U * 3);
+  }
+  let volume: Estimate | undefined = r.volumeNm3 ? est(r.volumeNm3, 'jenkins-volume', 0.05) : derivedAnionVolumes().get(r.id);
+  let estimatedSize = false;
+  if (!radius && volume) {
+    const rv = radiusFromVolumeA(volume.value);
+    radius = { value: rv, uncertainty: (rv * volume.uncertainty) / volume.value / 3, method: 'radius-from-volume', sources: volume.sources };
+  }
+  if (!radius && !volume && r.shape !== 'monatomic') {
+    // No published size: estimate from the formula like a drug ion (e.g. tetraethylammonium).
+    const guess = organicIonFromFormula(r.formula, r.charge, { aromatic: 0, nonAromatic: 0 });
+    radius = guess.radiusA;
+    volume = guess.volumeNm3;
+    estimatedSize = true;
+  }
+  const hyd = r.hydrationEnthalpyKJ ? est(r.hydrationEnthalpyKJ, 'published', 0, 0) : undefined;
+  for (const e of [radius, crystal, volume, hyd]) e?.sources.forEach((s) => sources.add(s));
+  return {
+    id: r.id,
+    label: r.label,
+    charge: r.charge,
+    shape: r.shape,
+    ...(radius ? { radiusA: radius } : {}),
+    ...(crystal ? { crystalRadiusA: crystal } : {}),
+    ...(volume ? { volumeNm3: volume } : {}),
+    ...(hyd ? { hydrationEnthalpyKJ: hyd } : {}),
+    ...(r.bornExponent ? { bornExponent: r.bornExponent } : {}),
+    formula: r.formula,
+    molarMassGPerMol: molarMassGPerMol(r.formula),
+    ...(estimatedSize ? { estimatedSize } : {}),
+    sources: [...sources],
+  };
+}
+
+const cache = new Map<string, ThermoIon>();
+
+/** A bundled reference ion by its shared id (`sodium`, `sulfate`, …) or undefined. */
+export function getThermoIon(id: string): ThermoIon | undefined {
+  const hit = cache.get(id);
+  if (hit) return hit;
+  const r = THERMO_IONS.find((i) => i.id === id);
+  if (!r) return undefined;
+  const ion = recordToIon(r);
+  cache.set(id, ion);
+  return ion;
+}
+
+/** Ids of every bundled ion. */
+export function listThermoIonIds(): string[] {
+  return THERMO_IONS.map((i) => i.id);
+}
+
+/** Find a bundled ion by id or by a typed symbol (`Na+`, `SO4 2-`, `SO4--`), case-sensitive for symbols. */
+export function findThermoIon(idOrSymbol: string): ThermoIon | undefined {
+  const byId = getThermoIon(idOrSymbol.trim().toLowerCase());
+  if (byId) return byId;
+  const key = idOrSymbol.replace(/\s+/g, '');
+  const r = THERMO_IONS.find((i) => i.symbols.includes(key));
+  return r ? getThermoIon(r.id) : undefined;
+}

@@ -1,0 +1,108 @@
+import { ChemInputError, requireFiniteInRange, type Estimate } from '../../../result';
+
+/**
+ * Kapustinskii's constant in the form the CRC Handbook of Chemistry and Physics, "Lattice Energies"
+ * (H. D. B. Jenkins and H. K. Roobottom), uses: U_POT = 121.4·ν·|z₊z₋|/(r₊ + r₋)·(1 − 0.0345/(r₊ + r₋))
+ * kJ/mol with radii in nm, i.e. 1214 kJ·Å·mol⁻¹ with radii in Å (half the rock-salt Madelung constant
+ * times the molar Coulomb constant: 0.87378 × 1389.35 = 1214.0).
+ * Original: A. F. Kapustinskii, Q. Rev. Chem. Soc. 10 (1956) 283–294.
+ */
+export const KAPUSTINSKII_K_KJ_A_PER_MOL = 1214;
+
+/**
+ * The other constant found in textbooks, 1202.5 kJ·Å·mol⁻¹ (1.079 × 10⁻⁴ J·m·mol⁻¹) — from memory of
+ * textbook quotations of Kapustinskii 1956. The validation compares both; see `kapustinskiiVariants`.
+ */
+export const KAPUSTINSKII_K_ALT_KJ_A_PER_MOL = 1202.5;
+
+/** Repulsion range ρ in Kapustinskii's equation, Å (Kapustinskii 1956; CRC form, 0.0345 nm). */
+export const KAPUSTINSKII_RHO_A = 0.345;
+
+export interface KapustinskiiInput {
+  /** Cation charge number z₊ (positive integer). */
+  cationCharge: number;
+  /** Anion charge number z₋ (negative integer). */
+  anionCharge: number;
+  /** Cation radius, Å. */
+  cationRadiusA: number;
+  /** Anion radius, Å. */
+  anionRadiusA: number;
+  /** Ions per formula unit ν; defaults to the count implied by the charges (e.g. 3 for MX₂). */
+  ionsPerFormulaUnit?: number;
+  /** Kapustinskii constant, kJ·Å·mol⁻¹ (default {@link KAPUSTINSKII_K_KJ_A_PER_MOL}). */
+  constantKJA?: number;
+}
+
+/** Greatest common divisor of two positive integers. */
+function gcd(a: number, b: number): number {
+  return b === 0 ? a : gcd(b, a % b);
+}
+
+/**
+ * Formula-unit stoichiometry of a salt from its ion charges: p cations and q anions with
+ * p·z₊ = q·|z₋| in lowest terms.
+ */
+export function stoichiometryFromCharges(cationCharge: number, anionCharge: number) {
+  const zc = Math.round(cationCharge);
+  const za = Math.round(Math.abs(anionCharge));
+  if (zc <= 0 || za <= 0) {
+    throw new ChemInputError('charge', 'charges must be non-zero', 'cation +1…+4, anion −1…−4');
+  }
+  const g = gcd(zc, za);
+  return { cations: za / g, anions: zc / g };
+}
+
+/** Validate a pair of ion charges; returns them. */
+export function requireIonCharges(cationCharge: number, anionCharge: number): { zc: number; za: number } {
+  const zc = requireFiniteInRange('cationCharge', cationCharge, 1, 4);
+  const za = requireFiniteInRange('anionCharge', anionCharge, -4, -1);
+  if (!Number.isInteger(zc) || !Number.isInteger(za)) {
+    throw new ChemInputError('charge', 'charges must be whole numbers', 'integers, cation +1…+4, anion −1…−4');
+  }
+  return { zc, za };
+}
+
+/**
+ * Lattice potential energy U_POT by Kapustinskii's equation, kJ/mol (dissociation sign convention: positive,
+ * MX(s) → M⁺(g) + X⁻(g)), as a plain number.
+ *
+ * U_POT = K·ν·|z₊z₋| / (r₊ + r₋) · (1 − ρ/(r₊ + r₋)), K = 1214 kJ·Å·mol⁻¹, ρ = 0.345 Å.
+ * Valid for ionic solids of near-spherical ions; radii 0.1–10 Å.
+ */
+export function kapustinskiiPotentialKJ(input: KapustinskiiInput): number {
+  const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
+  const rc = requireFiniteInRange('cationRadiusA', input.cationRadiusA, 0.1, 10, 'Å');
+  const ra = requireFiniteInRange('anionRadiusA', input.anionRadiusA, 0.1, 10, 'Å');
+  const stoich = stoichiometryFromCharges(zc, za);
+  const nu = requireFiniteInRange('ionsPerFormulaUnit', input.ionsPerFormulaUnit ?? stoich.cations + stoich.anions, 2, 20);
+  const k = requireFiniteInRange('constantKJA', input.constantKJA ?? KAPUSTINSKII_K_KJ_A_PER_MOL, 1000, 1500, 'kJ·Å/mol');
+  const d = rc + ra;
+  return ((k * nu * Math.abs(zc * za)) / d) * (1 - KAPUSTINSKII_RHO_A / d);
+}
+
+export const KAPUSTINSKII_SOURCES = [
+  'A. F. Kapustinskii, Q. Rev. Chem. Soc. 10 (1956) 283',
+  'H. D. B. Jenkins, H. K. Roobottom, "Lattice Energies", CRC Handbook of Chemistry and Physics',
+];
+
+/**
+ * Kapustinskii lattice potential energy as an {@link Estimate}, kJ/mol (dissociation, > 0). The
+ * uncertainty here is the bare model's measured RMS error on the bundled reference salts — use
+ * `estimateSaltThermo` for the calibrated, group-aware figure; this function keeps the skeleton's API.
+ */
+export function kapustinskiiLatticeEnergyKJ(input: KapustinskiiInput): Estimate {
+  const value = kapustinskiiPotentialKJ(input);
+  return {
+    value,
+    uncertainty: KAPUSTINSKII_SIMPLE_RMS_FRACTION * value,
+    method: 'kapustinskii',
+    sources: KAPUSTINSKII_SOURCES,
+  };
+}
+
+/**
+ * RMS relative error of Kapustinskii (Goldschmidt/thermochemical radii, K = 1214) on the bundled alkali and
+ * alkaline-earth halides, as measured by `validationReport()`; a test keeps this figure equal to the
+ * measured one (tests/chem/thermo/validation.test.ts).
+ */
+export const KAPUSTINSKII_SIMPLE_RMS_FRACTION = 0.04;
