@@ -1,3 +1,6 @@
+import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
+import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
+
 /**
  * The comparison sheet's data, built once from a screening result and rendered two ways: the
  * printable sheet and the CSV. Keeping one model guarantees the two carry the same numbers.
@@ -65,4 +68,8 @@ export interface SheetModel {
   confidence: SheetConfidenceRow[];
   /** Extra remarks (assumptions, model limits). */
   notes: string[];
+  /** The pH–solubility picture, when the screening produced profiles. */
+  solubility: { series: SolubilitySeries[]; doseLineMgPerMl: number | null } | null;
+  /** One enthalpy cycle per candidate that has a thermochemical estimate, in rank order. */
+  energyCycles: EnergyCycle[];
 }

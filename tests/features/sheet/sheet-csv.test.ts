@@ -46,6 +46,8 @@ function model(label = 'Demorazine mesylate (1:1)'): SheetModel {
     ],
     confidence: [],
     notes: [],
+    solubility: null,
+    energyCycles: [],
   };
 }
 

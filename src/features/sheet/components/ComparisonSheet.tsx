@@ -1,0 +1,214 @@
+import { CAUTION_LINES } from '@/components/Cautions';
+import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
+import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
+import { ORIGIN_MARK, cellText, formatValue } from '../sheet-format';
+import type { SheetModel, SheetSetting } from '../sheet.types';
+import '../sheet.css';
+
+const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeStyle: 'short' });
+
+function SettingsTable({ caption, items }: { caption: string; items: SheetSetting[] }) {
+  return (
+    <table className="sheet-settings">
+      <caption>{caption}</caption>
+      <tbody>
+        {items.length === 0 ? (
+          <tr>
+            <td colSpan={2}>none recorded</td>
+          </tr>
+        ) : (
+          items.map((s) => (
+            <tr key={s.label}>
+              <th scope="row">{s.label}</th>
+              <td>
+                {typeof s.value === 'number' ? formatValue(s.value) : s.value}
+                {s.unit ? ` ${s.unit}` : ''}
+              </td>
+            </tr>
+          ))
+        )}
+      </tbody>
+    </table>
+  );
+}
+
+/**
+ * The comparison sheet for a formulation meeting: compound, date and version, every setting and
+ * weight, the ranked table (units in headings, ±1σ uncertainties, origin marks, flags and reasons),
+ * the pH–solubility and energy pictures, the model-confidence summary and the cautions. Laid out for
+ * the screen and, through sheet.css's print rules, for A4 or Letter paper. All text from the user
+ * (names, notes) is rendered as text, never as markup.
+ */
+export function ComparisonSheet({ model }: { model: SheetModel }) {
+  const made = new Date(model.generatedAt);
+  return (
+    <article className="comparison-sheet" aria-labelledby="sheet-title">
+      <header className="sheet-head">
+        <p className="sheet-kind">Saltsmith · salt comparison sheet</p>
+        <h1 id="sheet-title" data-testid="sheet-compound">
+          {model.compound.name}
+        </h1>
+        <p className="sheet-meta">
+          Project <strong>{model.projectName}</strong> · made {Number.isNaN(made.getTime()) ? model.generatedAt : dateFormat.format(made)} ·
+          Saltsmith {model.appVersion}
+        </p>
+      </header>
+
+      <aside className="sheet-caution" aria-label="Cautions">
+        <strong>Screening estimates only.</strong> {CAUTION_LINES[0]} Experiments, the regulatory guidance in force
+        and your lab’s safety rules decide. See the full cautions at the end of this sheet.
+      </aside>
+
+      <section className="sheet-block sheet-inputs" aria-label="Compound and settings">
+        <SettingsTable caption="Compound" items={model.compound.facts} />
+        <SettingsTable caption="Screening settings" items={model.settings} />
+        <SettingsTable caption="Ranking weights" items={model.weights} />
+      </section>
+
+      <section className="sheet-block" aria-labelledby="sheet-ranking">
+        <h2 id="sheet-ranking">Ranked candidates</h2>
+        {model.rows.length === 0 ? (
+          <p>No candidates are shortlisted in this project.</p>
+        ) : (
+          <table className="sheet-ranking">
+            <thead>
+              <tr>
+                <th scope="col">Rank</th>
+                <th scope="col">Candidate</th>
+                {model.columns.map((c) => (
+                  <th scope="col" key={c.key} title={c.hint}>
+                    {c.label}
+                    {c.unit ? <span className="sheet-unit">{` (${c.unit})`}</span> : null}
+                  </th>
+                ))}
+                <th scope="col">Flags</th>
+                <th scope="col">Reasons</th>
+              </tr>
+            </thead>
+            <tbody>
+              {model.rows.map((r) => (
+                <tr key={r.id} data-candidate-id={r.id}>
+                  <td className="num">{r.rank}</td>
+                  <th scope="row" className="sheet-candidate">
+                    {r.label}
+                  </th>
+                  {model.columns.map((c) => {
+                    const cell = r.cells[c.key];
+                    const origin = cell?.origin ? ORIGIN_MARK[cell.origin] : null;
+                    return (
+                      <td
+                        key={c.key}
+                        className={c.kind === 'number' ? 'num' : undefined}
+                        data-col={c.key}
+                        data-value={typeof cell?.value === 'number' ? String(cell.value) : undefined}
+                      >
+                        {cellText(cell)}
+                        {origin && cell?.value !== null ? (
+                          <>
+                            {' '}
+                            <abbr className={`sheet-origin origin-${cell?.origin}`} title={origin.words}>
+                              {origin.mark}
+                            </abbr>
+                          </>
+                        ) : null}
+                      </td>
+                    );
+                  })}
+                  <td className="sheet-flags">{r.flags.length ? r.flags.join('; ') : '—'}</td>
+                  <td className="sheet-reasons">
+                    {r.reasons.length ? (
+                      <ul>
+                        {r.reasons.map((x) => (
+                          <li key={x}>{x}</li>
+                        ))}
+                      </ul>
+                    ) : (
+                      '—'
+                    )}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+        <p className="sheet-legend">
+          Marks: {Object.values(ORIGIN_MARK).map((o) => `“${o.mark}” ${o.words}`).join(', ')}. “±” is one standard
+          uncertainty (1σ). Lattice enthalpy is the dissociation enthalpy (&gt; 0); hydration enthalpies are negative;
+          ΔH_sol = ΔH_L + Σ ΔH_hyd, a small difference of large numbers — compare candidates with each other rather than
+          trusting one value alone.
+        </p>
+      </section>
+
+      {model.solubility && model.solubility.series.length ? (
+        <section className="sheet-block sheet-figure" aria-labelledby="sheet-solubility">
+          <h2 id="sheet-solubility">Solubility against pH</h2>
+          <PhSolubilityChart series={model.solubility.series} doseLineMgPerMl={model.solubility.doseLineMgPerMl} width={640} height={320} />
+        </section>
+      ) : null}
+
+      {model.energyCycles.length ? (
+        <section className="sheet-block" aria-labelledby="sheet-energy">
+          <h2 id="sheet-energy">Enthalpy of dissolving, per candidate</h2>
+          <div className="sheet-energy-grid">
+            {model.energyCycles.map((c) => (
+              <div className="sheet-figure" key={c.saltLabel}>
+                <h3>{c.saltLabel}</h3>
+                <EnergyLevelDiagram cycle={c} width={310} height={240} />
+              </div>
+            ))}
+          </div>
+        </section>
+      ) : null}
+
+      <section className="sheet-block" aria-labelledby="sheet-confidence">
+        <h2 id="sheet-confidence">How far to trust the models</h2>
+        {model.confidence.length ? (
+          <table className="sheet-confidence">
+            <thead>
+              <tr>
+                <th scope="col">Model, against published data</th>
+                <th scope="col">n</th>
+                <th scope="col">Mean |error| (%)</th>
+                <th scope="col">Largest |error| (%)</th>
+                <th scope="col">Signed bias (%)</th>
+              </tr>
+            </thead>
+            <tbody>
+              {model.confidence.map((m) => (
+                <tr key={m.label}>
+                  <th scope="row">{m.label}</th>
+                  <td className="num">{m.n}</td>
+                  <td className="num">{formatValue(m.meanAbsPercentError)}</td>
+                  <td className="num">{formatValue(m.maxAbsPercentError)}</td>
+                  <td className="num">{formatValue(m.signedBiasPercent)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ) : (
+          <p>No model check is available in this build.</p>
+        )}
+      </section>
+
+      {model.notes.length ? (
+        <section className="sheet-block" aria-labelledby="sheet-notes">
+          <h2 id="sheet-notes">Assumptions and notes</h2>
+          <ul>
+            {model.notes.map((n) => (
+              <li key={n}>{n}</li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+
+      <section className="sheet-block sheet-cautions" aria-labelledby="sheet-cautions-title" data-testid="sheet-cautions">
+        <h2 id="sheet-cautions-title">Before you act on this ranking</h2>
+        <ul>
+          {CAUTION_LINES.map((l) => (
+            <li key={l}>{l}</li>
+          ))}
+        </ul>
+      </section>
+    </article>
+  );
+}
