@@ -6,6 +6,7 @@ import { ReferenceLatticeTable } from '@/features/reference-lattice/components/R
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
 import { BenchWorkspace } from '@/features/bench/components/BenchWorkspace';
+import { ModelCheckArea } from '@/features/confidence/components/ModelCheckArea';
 import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
 import type { ProjectRecord } from '@/persistence/records';
@@ -21,6 +22,8 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
       );
     case 'bench':
       return <BenchWorkspace project={project} />;
+    case 'confidence':
+      return <ModelCheckArea />;
     default:
       return (
         <section className="panel">

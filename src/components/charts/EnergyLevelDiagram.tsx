@@ -1,5 +1,6 @@
 import { kjWithUncertainty } from './chart-format';
 import { niceTicks } from './WhiskerBars';
+import './charts.css';
 
 export interface EnergyValue {
   value: number;

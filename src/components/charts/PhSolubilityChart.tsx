@@ -10,6 +10,7 @@ import {
   YAxis,
 } from 'recharts';
 import { SERIES_COLOURS, SERIES_DASHES, sig } from './chart-format';
+import './charts.css';
 
 export interface SolubilitySeries {
   id: string;

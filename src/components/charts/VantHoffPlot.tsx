@@ -1,5 +1,6 @@
 import { CartesianGrid, ComposedChart, Line, Scatter, XAxis, YAxis, Tooltip } from 'recharts';
 import { sig } from './chart-format';
+import './charts.css';
 
 export interface VantHoffData {
   points: { temperatureK: number; solubility: number }[];

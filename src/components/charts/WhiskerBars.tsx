@@ -1,4 +1,5 @@
 import { sig } from './chart-format';
+import './charts.css';
 
 export interface WhiskerRow {
   id: string;

@@ -1,0 +1,52 @@
+import { useId } from 'react';
+import { CRITERIA, type ScreeningWeights } from '@/chem';
+import { CRITERION_TEXT } from '../criteria';
+
+/** One slider per criterion; the ranking re-orders while a slider moves. */
+export function WeightSliders({
+  weights,
+  onChange,
+  onReset,
+}: {
+  weights: ScreeningWeights;
+  onChange: (w: ScreeningWeights) => void;
+  onReset: () => void;
+}) {
+  const uid = useId();
+  const total = CRITERIA.reduce((s, k) => s + weights[k], 0);
+  return (
+    <fieldset className="weights">
+      <legend>Weights</legend>
+      <p className="field-hint">
+        Each criterion scores 0–1; the score is the weighted mean. Drag to see the order change. {total === 0 ? 'All weights are zero: nothing is ranked by merit.' : ''}
+      </p>
+      {CRITERIA.map((k) => {
+        const id = `${uid}-${k}`;
+        const share = total > 0 ? (weights[k] / total) * 100 : 0;
+        return (
+          <div className="weight-row" key={k}>
+            <label htmlFor={id} title={CRITERION_TEXT[k].means}>
+              {CRITERION_TEXT[k].label}
+            </label>
+            <input
+              id={id}
+              type="range"
+              min={0}
+              max={3}
+              step={0.1}
+              value={weights[k]}
+              aria-valuetext={`${weights[k].toFixed(1)}, ${share.toFixed(0)} % of the score`}
+              onChange={(e) => onChange({ ...weights, [k]: Number(e.target.value) })}
+            />
+            <output htmlFor={id} className="weight-value">
+              {weights[k].toFixed(1)} <span className="muted">({share.toFixed(0)} %)</span>
+            </output>
+          </div>
+        );
+      })}
+      <button type="button" onClick={onReset}>
+        Default weights
+      </button>
+    </fieldset>
+  );
+}

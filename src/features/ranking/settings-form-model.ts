@@ -1,0 +1,80 @@
+import { screeningSettingsSchema, type ScreeningSettings } from '@/chem';
+import { projectSettingsSchema, type ProjectSettings } from '@/persistence/records';
+
+/** The screening-conditions form as typed. */
+export interface ConditionsDraft {
+  gastricChlorideM: string;
+  gastricPh: string;
+  microenvironmentPh: string;
+  temperatureC: string;
+  cocrystalBelow: string;
+  saltAbove: string;
+  stableSaltMin: string;
+  activityModel: 'ideal' | 'davies';
+}
+export type ConditionsErrors = Partial<Record<keyof ConditionsDraft, string>>;
+
+export function conditionsDraftOf(project: ProjectSettings, s: ScreeningSettings): ConditionsDraft {
+  return {
+    gastricChlorideM: String(project.gastricChlorideM),
+    gastricPh: String(s.gastricPh),
+    microenvironmentPh: String(project.microenvironmentPh),
+    temperatureC: String(project.temperatureC),
+    cocrystalBelow: String(s.deltaPkaBands.cocrystalBelow),
+    saltAbove: String(s.deltaPkaBands.saltAbove),
+    stableSaltMin: String(s.deltaPkaBands.stableSaltMin),
+    activityModel: s.activityModel,
+  };
+}
+
+const RANGES: Record<Exclude<keyof ConditionsDraft, 'activityModel'>, { label: string; min: number; max: number; unit?: string }> = {
+  gastricChlorideM: { label: 'Chloride in gastric medium', min: 0, max: 5, unit: 'mol/L' },
+  gastricPh: { label: 'Gastric pH', min: 0, max: 14 },
+  microenvironmentPh: { label: 'Microenvironment pH', min: 0, max: 14 },
+  temperatureC: { label: 'Temperature', min: 0, max: 100, unit: '°C' },
+  cocrystalBelow: { label: 'Cocrystal below ΔpKa', min: -10, max: 10 },
+  saltAbove: { label: 'Salt above ΔpKa', min: -10, max: 15 },
+  stableSaltMin: { label: 'Stable salt from ΔpKa', min: -10, max: 15 },
+};
+
+/**
+ * Validate the conditions form into the project's own settings and the screening block, or into
+ * field messages. Nothing half-valid comes out.
+ */
+export function conditionsFromDraft(
+  draft: ConditionsDraft,
+  project: ProjectSettings,
+  current: ScreeningSettings,
+): { ok: true; projectSettings: ProjectSettings; screening: ScreeningSettings } | { ok: false; errors: ConditionsErrors } {
+  const errors: ConditionsErrors = {};
+  const num: Partial<Record<keyof typeof RANGES, number>> = {};
+  for (const [key, r] of Object.entries(RANGES) as [keyof typeof RANGES, (typeof RANGES)[keyof typeof RANGES]][]) {
+    const t = draft[key].trim().replace(',', '.').replace('−', '-');
+    const x = t === '' ? Number.NaN : Number(t);
+    if (!Number.isFinite(x)) errors[key] = `${r.label} must be a number`;
+    else if (x < r.min || x > r.max) errors[key] = `${r.label} must be from ${r.min} to ${r.max}${r.unit ? ' ' + r.unit : ''}`;
+    else num[key] = x;
+  }
+  if (num.cocrystalBelow !== undefined && num.saltAbove !== undefined && num.cocrystalBelow >= num.saltAbove) {
+    errors.saltAbove = 'The salt band must start above the cocrystal band';
+  }
+  if (Object.keys(errors).length > 0) return { ok: false, errors };
+  const projectSettings = projectSettingsSchema.parse({
+    ...project,
+    gastricChlorideM: num.gastricChlorideM,
+    microenvironmentPh: num.microenvironmentPh,
+    temperatureC: num.temperatureC,
+  });
+  const screening = screeningSettingsSchema.parse({
+    ...current,
+    gastricPh: num.gastricPh,
+    gastricChlorideM: num.gastricChlorideM,
+    microenvironmentPh: num.microenvironmentPh,
+    temperatureK: num.temperatureC! + 273.15,
+    activityModel: draft.activityModel,
+    deltaPkaBands: { cocrystalBelow: num.cocrystalBelow, saltAbove: num.saltAbove, stableSaltMin: num.stableSaltMin },
+  });
+  return { ok: true, projectSettings, screening };
+}
+
+export const CONDITION_FIELDS = RANGES;

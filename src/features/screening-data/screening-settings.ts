@@ -1,0 +1,39 @@
+import { screeningSettingsSchema, type ScreeningSettings } from '@/chem';
+import type { ProjectRecord } from '@/persistence/records';
+
+/** 0 °C in kelvin (definition of the Celsius scale, SI Brochure, 9th ed., 2019). */
+const CELSIUS_ZERO_K = 273.15;
+
+/** Key of the screening block in `project.settings.extra`. */
+export const SCREENING_SETTINGS_KEY = 'screening';
+
+/**
+ * The screening settings of a project. Three values live in the project's own settings record
+ * (gastric chloride, microenvironment pH, temperature in °C) and win over the screening block; the
+ * rest (weights, ΔpKa bands, media, gastric pH, …) live in `settings.extra.screening`. A stored block
+ * that no longer validates falls back to the defaults field by field, never to a half-read object.
+ */
+export function screeningSettingsOf(project: ProjectRecord): ScreeningSettings {
+  const stored = project.settings.extra[SCREENING_SETTINGS_KEY];
+  const block = stored && typeof stored === 'object' ? (stored as Record<string, unknown>) : {};
+  const top = {
+    gastricChlorideM: project.settings.gastricChlorideM,
+    microenvironmentPh: project.settings.microenvironmentPh,
+    temperatureK: project.settings.temperatureC + CELSIUS_ZERO_K,
+  };
+  const full = screeningSettingsSchema.safeParse({ ...block, ...top });
+  if (full.success) return full.data;
+  // Keep the valid fields of the stored block, drop the rest.
+  const keep: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(block)) {
+    const trial = screeningSettingsSchema.safeParse({ [key]: value, ...top });
+    if (trial.success) keep[key] = value;
+  }
+  return screeningSettingsSchema.parse({ ...keep, ...top });
+}
+
+/** The part of the screening settings stored in `settings.extra.screening` (the rest is top-level). */
+export function screeningBlockOf(s: ScreeningSettings): Omit<ScreeningSettings, 'gastricChlorideM' | 'microenvironmentPh' | 'temperatureK'> {
+  const { gastricChlorideM: _g, microenvironmentPh: _m, temperatureK: _t, ...rest } = s;
+  return rest;
+}

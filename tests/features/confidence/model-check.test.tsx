@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { validationReport } from '@/chem';
+import { ModelCheckArea } from '@/features/confidence/components/ModelCheckArea';
+
+describe('Model check area', () => {
+  it('lists every model of the engine’s validation report with its n and errors', () => {
+    const report = validationReport();
+    render(<ModelCheckArea />);
+    const table = screen.getByRole('table', { name: /Validation of each model/ });
+    const body = within(table).getAllByRole('row').slice(1);
+    expect(body).toHaveLength(report.length);
+    const first = report[0]!;
+    const row = body[0]!;
+    expect(within(row).getByText(`${first.meanAbsPercentError.toFixed(1)} %`, { selector: 'td' })).toBeInTheDocument();
+    expect(within(row).getByText(String(first.n), { selector: 'td' })).toBeInTheDocument();
+    // the chart has one labelled figure with the same number of model/group pairs
+    expect(screen.getByRole('img', { name: new RegExp(`${report.length} model/group pairs`) })).toBeInTheDocument();
+  });
+
+  it('opens the reference values of a model, each with its source', async () => {
+    const user = userEvent.setup();
+    const report = validationReport();
+    render(<ModelCheckArea />);
+    const buttons = screen.getAllByRole('button', { name: /Show \d+ values/ });
+    await user.click(buttons[0]!);
+    const inner = screen.getByRole('table', { name: /Reference values for/ });
+    expect(within(inner).getAllByRole('row')).toHaveLength(report[0]!.rows.length + 1);
+    expect(within(inner).getAllByText(report[0]!.rows[0]!.source, { selector: 'td' }).length).toBeGreaterThan(0);
+  });
+});
