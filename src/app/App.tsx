@@ -7,6 +7,7 @@ import { useCurrentProject } from '@/features/projects/hooks/use-current-project
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
 import { BenchWorkspace } from '@/features/bench/components/BenchWorkspace';
 import { ModelCheckArea } from '@/features/confidence/components/ModelCheckArea';
+import { CounterIonsPanel } from '@/features/counter-ions/components/CounterIonsPanel';
 import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
 import type { ProjectRecord } from '@/persistence/records';
@@ -24,6 +25,8 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
       return <BenchWorkspace project={project} />;
     case 'confidence':
       return <ModelCheckArea />;
+    case 'library':
+      return <CounterIonsPanel project={project} />;
     default:
       return (
         <section className="panel">

@@ -1,10 +1,11 @@
+import { counterIonEditSchema, counterIonSchema, type CounterIon, type CounterIonEdit } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, customIonRecordSchema, type CustomIonRecord } from './records';
 
 /**
- * In-house counter-ions and per-project edits of bundled ions. The ion payload is validated by the
- * library schema in src/chem before it reaches this repository.
+ * In-house counter-ions and per-project edits of bundled ions. Ion payloads are validated with the
+ * library's zod schemas (src/chem/library) before they are stored: nothing half-valid reaches IndexedDB.
  */
 export const customIonsRepo = {
   listAll: (): Promise<CustomIonRecord[]> => getDb().customIons.toArray(),
@@ -20,6 +21,43 @@ export const customIonsRepo = {
     });
     await getDb().customIons.put(record);
     return record;
+  },
+
+  /** A fresh id for an in-house ion (also used as its library id). */
+  newInHouseId: (): string => newId('inhouse'),
+
+  /** Store an in-house ion for every project (projectId null) or for one project. */
+  saveInHouse: async (ion: CounterIon, projectId: string | null = null): Promise<CustomIonRecord> => {
+    const valid = counterIonSchema.parse(ion);
+    return customIonsRepo.save({ id: valid.id, projectId, overridesIonId: null, ion: valid as unknown as Record<string, unknown> });
+  },
+
+  /**
+   * Record this project's edits of a bundled ion (replacing earlier edits of the same ion); the bundled
+   * value itself is never changed.
+   */
+  saveEdit: async (projectId: string, ionId: string, edit: CounterIonEdit): Promise<CustomIonRecord> => {
+    const db = getDb();
+    return db.transaction('rw', db.customIons, async () => {
+      const existing = await db.customIons.where('overridesIonId').equals(ionId).filter((r) => r.projectId === projectId).first();
+      const merged = counterIonEditSchema.parse(edit);
+      const record = customIonRecordSchema.parse({
+        id: existing?.id ?? newId('ionedit'),
+        schemaVersion: RECORD_SCHEMA_VERSION,
+        projectId,
+        overridesIonId: ionId,
+        ion: merged,
+        updatedAt: nowIso(),
+      });
+      await db.customIons.put(record);
+      return record;
+    });
+  },
+
+  /** Drop this project's edits of a bundled ion: the bundled values apply again. */
+  restoreBundled: async (projectId: string, ionId: string): Promise<void> => {
+    const db = getDb();
+    await db.customIons.where('overridesIonId').equals(ionId).filter((r) => r.projectId === projectId).delete();
   },
 
   remove: (id: string): Promise<void> => getDb().customIons.delete(id),

@@ -1,0 +1,173 @@
+import { useState } from 'react';
+import { formatIonFormula, stoichiometryKey, type LibraryIon } from '@/chem';
+import { candidatesRepo } from '@/persistence/candidates-repo';
+import type { ProjectRecord } from '@/persistence/records';
+import { bestVerdictFor, verdictFor } from '../counter-ion-verdict';
+import { IonEditForm } from './IonEditForm';
+
+const fmtCharge = (c: number) => (c > 0 ? `+${c}` : `−${-c}`);
+
+/** One library row, with its details (sources, stoichiometries, edits) below when open. */
+export function CounterIonRow({
+  ion,
+  project,
+  onShortlist,
+  open,
+  onToggle,
+}: {
+  ion: LibraryIon;
+  project: ProjectRecord;
+  onShortlist: boolean;
+  open: boolean;
+  onToggle: () => void;
+}) {
+  const [stoichIndex, setStoichIndex] = useState(0);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const verdict = bestVerdictFor(project, ion);
+  const charges = [...new Set(ion.stoichiometries.map((s) => s.ionCharge))];
+  const detailsId = `ion-details-${ion.id}`;
+  const chosen = ion.stoichiometries[stoichIndex] ?? ion.stoichiometries[0]!;
+
+  const add = async () => {
+    setBusy(true);
+    setError(null);
+    try {
+      await candidatesRepo.add(project.id, ion.id, { drugPerSalt: chosen.drugPerSalt, counterIonPerSalt: chosen.counterIonPerSalt });
+    } catch (err) {
+      setError(err instanceof Error ? err.message : 'Could not add to the shortlist');
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <>
+      <tr className={`ion-row origin-${ion.origin}`}>
+        <th scope="row">
+          <button type="button" className="ion-name" aria-expanded={open} aria-controls={detailsId} onClick={onToggle}>
+            {ion.name}
+          </button>
+          {ion.origin !== 'bundled' ? (
+            <span className={`ion-badge ion-badge-${ion.origin}`}>{ion.origin === 'in-house' ? 'in-house' : 'edited for this project'}</span>
+          ) : null}
+        </th>
+        <td>{formatIonFormula(ion.formula, ion.charge)}</td>
+        <td>{charges.map(fmtCharge).join(', ')}</td>
+        <td>{ion.pKas.length ? ion.pKas.map((p) => p.value.toFixed(2)).join(', ') : <span className="muted">not sourced</span>}</td>
+        <td>{ion.acceptabilityClass ?? '–'}</td>
+        <td>
+          {verdict ? (
+            <span className={`ion-verdict verdict-${verdict.band}`} title={verdict.reason}>
+              {verdict.deltaPka.toFixed(1)} · {verdict.label}
+            </span>
+          ) : (
+            <span className="muted">{ion.pKas.length ? 'does not pair' : 'no pKa'}</span>
+          )}
+        </td>
+        <td>{ion.molarMassGPerMol.toFixed(2)}</td>
+        <td className="ion-shortlist">
+          {onShortlist ? (
+            <span className="ion-on-list">On shortlist</span>
+          ) : (
+            <span className="button-row">
+              {ion.stoichiometries.length > 1 ? (
+                <select
+                  aria-label={`Salt form of ${ion.name}`}
+                  value={stoichIndex}
+                  onChange={(e) => setStoichIndex(Number(e.target.value))}
+                >
+                  {ion.stoichiometries.map((s, i) => (
+                    <option key={s.label} value={i}>
+                      {s.label}
+                    </option>
+                  ))}
+                </select>
+              ) : null}
+              <button type="button" onClick={add} disabled={busy} aria-label={`Add ${ion.name} (${chosen.label}) to the shortlist`}>
+                Add to shortlist
+              </button>
+            </span>
+          )}
+          {error ? (
+            <span className="field-error" role="alert">
+              {error}
+            </span>
+          ) : null}
+        </td>
+      </tr>
+      {open ? (
+        <tr className="ion-details-row">
+          <td colSpan={8} id={detailsId}>
+            <IonDetails ion={ion} project={project} />
+          </td>
+        </tr>
+      ) : null}
+    </>
+  );
+}
+
+function IonDetails({ ion, project }: { ion: LibraryIon; project: ProjectRecord }) {
+  return (
+    <div className="ion-details">
+      <div>
+        <h3>{ion.name}</h3>
+        {ion.synonyms.length ? <p className="muted">Also: {ion.synonyms.join(', ')}</p> : null}
+        <p>
+          Made from {ion.parent.name || 'its parent'} ({ion.parent.formula}, {ion.parent.molarMassGPerMol.toFixed(2)} g/mol)
+          {ion.ionSmiles ? (
+            <>
+              {' '}
+              · ion SMILES <code>{ion.ionSmiles}</code>
+            </>
+          ) : null}
+        </p>
+        {ion.tradeNote ? <p className="ion-note">{ion.tradeNote}</p> : null}
+        <table className="data-table ion-stoich-table" aria-label={`Salt forms of ${ion.name}`}>
+          <thead>
+            <tr>
+              <th scope="col">Salt form</th>
+              <th scope="col">drug : ion</th>
+              <th scope="col">Ion</th>
+              <th scope="col">M ion (g/mol)</th>
+              <th scope="col">ΔpKa</th>
+            </tr>
+          </thead>
+          <tbody>
+            {ion.stoichiometries.map((s) => {
+              const v = verdictFor(project, ion, s);
+              return (
+                <tr key={s.label}>
+                  <td>{s.label}</td>
+                  <td>{stoichiometryKey(s)}</td>
+                  <td>{formatIonFormula(s.ionFormula, s.ionCharge)}</td>
+                  <td>{s.ionMolarMassGPerMol.toFixed(2)}</td>
+                  <td>{v ? `${v.deltaPka.toFixed(1)} (${v.label})` : '–'}</td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+      <div>
+        <h4>Sources</h4>
+        <ul className="ion-sources">
+          {ion.pKas.map((p, i) => (
+            <li key={i}>
+              pKa {p.value.toFixed(2)}: {p.source}
+            </li>
+          ))}
+          <li>Class: {ion.classSource}</li>
+          {Object.entries(ion.sources)
+            .filter(([k]) => k !== 'pKas' && k !== 'acceptabilityClass')
+            .map(([k, v]) => (
+              <li key={k}>
+                {k}: {v}
+              </li>
+            ))}
+        </ul>
+        {ion.origin !== 'in-house' ? <IonEditForm ion={ion} projectId={project.id} /> : null}
+      </div>
+    </div>
+  );
+}

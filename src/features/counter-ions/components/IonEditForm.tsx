@@ -1,0 +1,105 @@
+import { useState, type FormEvent } from 'react';
+import type { AcceptabilityClass, CounterIonEdit, LibraryIon } from '@/chem';
+import { customIonsRepo } from '@/persistence/custom-ions-repo';
+
+const sameNumbers = (a: number[], b: number[]) => a.length === b.length && a.every((x, i) => Math.abs(x - b[i]!) < 1e-9);
+
+/**
+ * Edit a bundled ion's pKa values, class or note for this project only. The bundled values stay in the
+ * library and come back with "Restore bundled values".
+ */
+export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: string }) {
+  const base = ion.original ?? ion;
+  const [pkas, setPkas] = useState(ion.pKas.map((p) => p.value).join(', '));
+  const [cls, setCls] = useState<string>(ion.acceptabilityClass === null ? '' : String(ion.acceptabilityClass));
+  const [note, setNote] = useState(ion.tradeNote);
+  const [error, setError] = useState<string | null>(null);
+  const [status, setStatus] = useState<string | null>(null);
+  const idp = `ion-edit-${ion.id}`;
+
+  const save = async (e: FormEvent) => {
+    e.preventDefault();
+    setStatus(null);
+    const texts = pkas.split(/[;\s]+|,\s*/).map((s) => s.trim()).filter(Boolean);
+    const values = texts.map((t) => Number(t));
+    if (values.some((v) => !Number.isFinite(v) || v < -10 || v > 20)) {
+      setError('pKa values must be numbers from −10 to 20, separated by commas');
+      return;
+    }
+    setError(null);
+    const edit: CounterIonEdit = {};
+    const sorted = [...values].sort((a, b) => a - b);
+    if (!sameNumbers(sorted, base.pKas.map((p) => p.value))) edit.pKas = sorted;
+    const clsValue = cls === '' ? null : (Number(cls) as AcceptabilityClass);
+    if (clsValue !== base.acceptabilityClass) edit.acceptabilityClass = clsValue;
+    if (note !== base.tradeNote) edit.tradeNote = note;
+    if (Object.keys(edit).length === 0) {
+      await customIonsRepo.restoreBundled(projectId, ion.id);
+      setStatus('Same as the bundled values: nothing to keep as an edit.');
+      return;
+    }
+    await customIonsRepo.saveEdit(projectId, ion.id, edit);
+    setStatus('Saved for this project. The bundled values are kept.');
+  };
+
+  const restore = async () => {
+    await customIonsRepo.restoreBundled(projectId, ion.id);
+    setPkas(base.pKas.map((p) => p.value).join(', '));
+    setCls(base.acceptabilityClass === null ? '' : String(base.acceptabilityClass));
+    setNote(base.tradeNote);
+    setStatus('Bundled values restored.');
+  };
+
+  return (
+    <form className="ion-edit" aria-label={`Edit ${ion.name} for this project`} onSubmit={save}>
+      <h4>Your values for this project</h4>
+      {ion.origin === 'edited' ? (
+        <p className="ion-original">
+          Bundled: pKa {base.pKas.map((p) => p.value.toFixed(2)).join(', ') || 'none'}; class {base.acceptabilityClass ?? 'none'}. Edited:{' '}
+          {ion.editedFields.join(', ')}.
+        </p>
+      ) : null}
+      <div className="field">
+        <label htmlFor={`${idp}-pkas`}>pKa values</label>
+        <input
+          id={`${idp}-pkas`}
+          value={pkas}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${idp}-error` : undefined}
+          onChange={(e) => setPkas(e.target.value)}
+        />
+        {error ? (
+          <p className="field-error" id={`${idp}-error`} role="alert">
+            {error}
+          </p>
+        ) : null}
+      </div>
+      <div className="field">
+        <label htmlFor={`${idp}-class`}>Acceptability class</label>
+        <select id={`${idp}-class`} value={cls} onChange={(e) => setCls(e.target.value)}>
+          <option value="">None</option>
+          <option value="1">1</option>
+          <option value="2">2</option>
+          <option value="3">3</option>
+        </select>
+      </div>
+      <div className="field">
+        <label htmlFor={`${idp}-note`}>Note</label>
+        <textarea id={`${idp}-note`} rows={2} value={note} onChange={(e) => setNote(e.target.value)} />
+      </div>
+      <div className="button-row">
+        <button type="submit">Save for this project</button>
+        {ion.origin === 'edited' ? (
+          <button type="button" onClick={restore}>
+            Restore bundled values
+          </button>
+        ) : null}
+        {status ? (
+          <span role="status" className="muted">
+            {status}
+          </span>
+        ) : null}
+      </div>
+    </form>
+  );
+}
