@@ -1,6 +1,7 @@
 import { writeLine, type CliCommand, type CliIo } from './io';
 import { latticeCommand } from './commands/lattice';
 import { ionsCommand } from './commands/ions';
+import { evalCommand } from './commands/eval';
 
 /**
  * The commands of `saltsmith`. Add one line per command; each lives in commands/<name>.ts.
@@ -8,6 +9,7 @@ import { ionsCommand } from './commands/ions';
 const COMMANDS: Record<string, CliCommand> = {
   lattice: latticeCommand,
   ions: ionsCommand,
+  eval: evalCommand,
 };
 
 const CAUTION =
