@@ -20,3 +20,6 @@ export * from './settings';
 export * from './ranking';
 export * from './rank-robustness';
 export * from '../numerics';
+export * from './thermo-link';
+export * from './screen-compound';
+export * from './library-candidates';

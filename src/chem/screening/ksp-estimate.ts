@@ -17,16 +17,21 @@ import { requireFiniteInRange, type Estimate } from '../result';
  *    Assuming the entropy of solution is about the same for the candidates (our assumption; it fails
  *    for small, highly charged ions such as sulfate whose hydration entropy is strongly negative),
  *    Δlog₁₀ K_sp ≈ −ΔΔH_sol/(RT ln 10), shared over the m + n ions of the formula unit:
- *    Δlog₁₀ s_D ≈ −(ΔH_sol − ΔH_ref)/((m + n)·RT·ln 10), with ΔH_ref the median over the candidates.
- *    The candidate's own ΔH_sol uncertainty carries into σ without credit for error cancellation.
- *    The shift is capped at ±3 decades (our assumption: beyond that the model is not trusted).
+ *    Δlog₁₀ s_D ≈ −(ΔH_sol − m·ΔH_ref)/((m + n)·RT·ln 10), with ΔH_ref the median per drug ion over
+ *    the candidates. ΔH_sol is a small difference of large numbers and its uncertainty is often tens
+ *    of kJ/mol, i.e. several decades here, so the shift is not applied at face value: it is combined
+ *    with the anchor's own spread as two normal estimates of the same deviation (prior N(0, 1 decade)
+ *    from the anchor, "measurement" N(shift, σ_shift) from the thermochemistry; the standard
+ *    normal–normal update, e.g. Gelman et al., "Bayesian Data Analysis", 3rd ed., §2.5):
+ *    applied shift = shift·τ²/(τ² + σ²), σ_post = τσ/√(τ² + σ²). A precise ΔH_sol moves the
+ *    estimate; an imprecise one leaves it at the anchor and says so. The candidate's own ΔH_sol
+ *    uncertainty is used without credit for error cancellation (conservative).
  *
  * K_sp then follows from s (formula units per litre) for the fully ionised salt in pure water:
  * K_sp = (m·s)^m·(n·s)^n.
  */
 export const SALT_TO_FREE_FORM_LOG10_ANCHOR = 2;
 export const SALT_TO_FREE_FORM_LOG10_SIGMA = 1;
-export const THERMO_SHIFT_CAP_DECADES = 3;
 
 export interface KspEstimateInput {
   /** log₁₀ S₀ of the free form, mol/L, with its uncertainty (measured: small; GSE: ~0.6). */
@@ -47,9 +52,11 @@ export interface KspEstimate {
   log10Ksp: Estimate;
   /** Salt-limited drug solubility (fully ionised, no common ion), log₁₀ mol/L; uncertainty in decades. */
   log10SaltLimitedDrugM: Estimate;
-  /** The thermochemical shift applied, decades (0 without thermochemistry). */
+  /** The thermochemical shift applied after the normal–normal update, decades (0 without thermochemistry). */
   thermoShiftDecades: number;
-  capped: boolean;
+  /** The raw thermochemical shift before the update, decades, and its 1σ (null without thermochemistry). */
+  rawThermoShiftDecades: number | null;
+  rawThermoShiftSigma: number | null;
 }
 
 /** log₁₀ K_sp of D_m X_n from its solubility s (formula units, mol/L) in pure water, fully ionised. */
@@ -63,27 +70,29 @@ export function estimateKsp(i: KspEstimateInput): KspEstimate {
   const n = i.counterIonPerSalt;
   const anchor = i.anchorLog10 ?? SALT_TO_FREE_FORM_LOG10_ANCHOR;
   const perDecade = GAS_CONSTANT_KJ_PER_MOL_K * T * Math.LN10;
+  const tau = SALT_TO_FREE_FORM_LOG10_SIGMA;
   let shift = 0;
-  let shiftSigma = 0;
-  let capped = false;
+  let sigmaDeviation = tau;
+  let raw: number | null = null;
+  let rawSigma: number | null = null;
   const notes: string[] = [
-    `anchor: salt-limited solubility ${anchor} decades above S₀ (common practice, σ ${SALT_TO_FREE_FORM_LOG10_SIGMA} decade)`,
+    `anchor: salt-limited solubility ${anchor} decades above S₀ (common practice, σ ${tau} decade)`,
   ];
   const dH = i.solutionEnthalpyKJ;
   if (dH && i.referenceSolutionEnthalpyPerDrugKJ !== undefined && i.referenceSolutionEnthalpyPerDrugKJ !== null) {
-    const perDrug = dH.value / m;
-    const raw = -(perDrug - i.referenceSolutionEnthalpyPerDrugKJ) * m / ((m + n) * perDecade);
-    shift = Math.max(-THERMO_SHIFT_CAP_DECADES, Math.min(THERMO_SHIFT_CAP_DECADES, raw));
-    capped = shift !== raw;
-    shiftSigma = dH.uncertainty / ((m + n) * perDecade);
+    raw = -(dH.value - m * i.referenceSolutionEnthalpyPerDrugKJ) / ((m + n) * perDecade);
+    rawSigma = Math.max(dH.uncertainty, 1e-9) / ((m + n) * perDecade);
+    const w = (tau * tau) / (tau * tau + rawSigma * rawSigma);
+    shift = raw * w;
+    sigmaDeviation = (tau * rawSigma) / Math.sqrt(tau * tau + rawSigma * rawSigma);
     notes.push(
-      `thermochemical shift ${shift >= 0 ? '+' : ''}${shift.toFixed(2)} decades from ΔH_sol ${dH.value.toFixed(0)} ± ${dH.uncertainty.toFixed(0)} kJ/mol relative to the candidates’ median${capped ? ' (capped at ±3 decades)' : ''}; equal entropies of solution assumed`,
+      `thermochemistry: ΔH_sol ${dH.value.toFixed(0)} ± ${dH.uncertainty.toFixed(0)} kJ/mol vs the candidates’ median suggests ${raw >= 0 ? '+' : ''}${raw.toFixed(1)} ± ${rawSigma.toFixed(1)} decades; applied ${shift >= 0 ? '+' : ''}${shift.toFixed(2)} (weight ${(w * 100).toFixed(0)} %, equal entropies of solution assumed)`,
     );
   } else {
     notes.push('no thermochemistry available: anchor only');
   }
   const logSD = i.log10IntrinsicM.value + anchor + shift;
-  const sigmaSD = Math.sqrt(i.log10IntrinsicM.uncertainty ** 2 + SALT_TO_FREE_FORM_LOG10_SIGMA ** 2 + shiftSigma ** 2);
+  const sigmaSD = Math.sqrt(i.log10IntrinsicM.uncertainty ** 2 + sigmaDeviation ** 2);
   const logS = logSD - Math.log10(m);
   const sources = [
     'Saltsmith screening estimate (salt-to-free-form anchor, common practice)',
@@ -100,6 +109,7 @@ export function estimateKsp(i: KspEstimateInput): KspEstimate {
     },
     log10SaltLimitedDrugM: { value: logSD, uncertainty: sigmaSD, method: dH ? 'ksp-estimate-anchor-thermo' : 'ksp-estimate-anchor', sources, notes },
     thermoShiftDecades: shift,
-    capped,
+    rawThermoShiftDecades: raw,
+    rawThermoShiftSigma: rawSigma,
   };
 }

@@ -1,0 +1,61 @@
+import type { CounterIon } from '../library/counter-ion.types';
+import type { ThermoIon } from '../thermo';
+import type { ScreeningCandidate } from './screen-compound';
+import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from './thermo-link';
+
+/**
+ * Candidates for a screen from library counter-ions: every listed stoichiometry of an ion of the
+ * opposite charge, re-balanced for the drug ion's charge (a dibasic drug takes two chlorides), with
+ * the thermochemistry engine's ΔH_sol attached when the drug ion's formula is known.
+ */
+export function candidatesFromLibrary(
+  ions: readonly CounterIon[],
+  drug: { kind: 'base' | 'acid'; ionCharge: number; thermo?: ThermoDrugIon | null },
+  opts: { firstStoichiometryOnly?: boolean } = {},
+): ScreeningCandidate[] {
+  const want = drug.kind === 'base' ? 'anion' : 'cation';
+  let dIon: ThermoIon | null = null;
+  if (drug.thermo) {
+    try {
+      dIon = drugThermoIon(drug.thermo);
+    } catch {
+      dIon = null;
+    }
+  }
+  const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
+  const out: ScreeningCandidate[] = [];
+  for (const ion of ions) {
+    if (ion.kind !== want) continue;
+    const seen = new Set<string>();
+    const list = opts.firstStoichiometryOnly ? ion.stoichiometries.slice(0, 1) : ion.stoichiometries;
+    for (const st of list) {
+      const z = Math.abs(drug.ionCharge);
+      const q = Math.abs(st.ionCharge);
+      const g = gcd(z, q);
+      const m = q / g;
+      const n = z / g;
+      if (m > 4 || n > 4) continue;
+      const key = `${m}:${n}:${st.ionCharge}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      const label = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : `${m}:${n}`;
+      const thermo = dIon
+        ? candidateSolutionEnthalpyKJ(dIon, { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings }, {
+            drugPerSalt: m,
+            counterIonPerSalt: n,
+            ionCharge: st.ionCharge,
+            ionFormula: st.ionFormula,
+          }).solutionEnthalpyKJ
+        : null;
+      out.push({
+        id: `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`,
+        counterIon: ion,
+        stoichiometry: { label, drugPerSalt: m, counterIonPerSalt: n, ionCharge: st.ionCharge, ionMolarMassGPerMol: st.ionMolarMassGPerMol, pKaIndex: st.pKaIndex },
+        hydrateWater: 0,
+        measurements: [],
+        solutionEnthalpyKJ: thermo,
+      });
+    }
+  }
+  return out;
+}
