@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import OCL from 'openchemlib';
+import * as OCL from 'openchemlib';
 import { ChemInputError } from '@/chem/result';
 import {
   ATOMIC_WEIGHTS_G_PER_MOL,

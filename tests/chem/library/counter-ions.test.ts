@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import OCL from 'openchemlib';
+import * as OCL from 'openchemlib';
 import { COUNTER_IONS, getCounterIon, counterIonSchema, COUNTER_ION_ROWS } from '@/chem/library';
 
 /**
@@ -149,5 +149,18 @@ describe('acceptability classes against the handbook', () => {
     const ion = getCounterIon(id)!;
     expect(ion.acceptabilityClass).toBe(cls);
     expect(ion.classSource).toMatch(/Stahl.*Wermuth.*2002.*from memory/);
+  });
+});
+
+describe('links to the thermochemistry data', () => {
+  it('every thermoId names an ion the thermochemistry engine bundles, with the same charge', async () => {
+    const { getThermoIon } = await import('@/chem/thermo');
+    const linked = COUNTER_IONS.filter((i) => i.thermoId);
+    expect(linked.length).toBeGreaterThan(20);
+    for (const ion of linked) {
+      const t = getThermoIon(ion.thermoId!);
+      expect(t, ion.id).toBeDefined();
+      expect(t!.charge, ion.id).toBe(ion.charge);
+    }
   });
 });
