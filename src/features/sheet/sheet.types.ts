@@ -31,7 +31,8 @@ export interface SheetCell {
 
 export interface SheetRow {
   id: string;
-  rank: number;
+  /** 1 for the best; null for a candidate that could not be screened (listed last, with the reason). */
+  rank: number | null;
   /** The candidate's name, e.g. "Demorazine mesylate (1:1)" — user-controlled text, never markup. */
   label: string;
   cells: Record<string, SheetCell>;

@@ -88,7 +88,7 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
             <tbody>
               {model.rows.map((r) => (
                 <tr key={r.id} data-candidate-id={r.id}>
-                  <td className="num">{r.rank}</td>
+                  <td className="num">{r.rank ?? '—'}</td>
                   <th scope="row" className="sheet-candidate">
                     {r.label}
                   </th>
