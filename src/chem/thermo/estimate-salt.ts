@@ -110,13 +110,20 @@ export function estimateSaltThermo(req: SaltThermoRequest): SaltThermoResult {
       throw new ChemInputError('cation/anion', 'no lattice method applies: give ions with radii or volumes, or a formula-unit volume or density', 'bundled ions, formula or SMILES ions, formulaUnitVolumeNm3 or densityGPerCm3');
     }
     const group = groupOf(req);
+    const errors: unknown[] = [];
     const ranked = methods
-      .map((m) => {
-        const r = latticeEnthalpyEstimate({ ...req, temperatureK: req.temperatureK }, m);
-        return { m, r, rel: r.estimate.uncertainty / r.estimate.value };
+      .flatMap((m) => {
+        try {
+          const r = latticeEnthalpyEstimate(req, m);
+          return [{ m, r, rel: r.estimate.uncertainty / r.estimate.value }];
+        } catch (err) {
+          errors.push(err);
+          return [];
+        }
       })
       .sort((a, b) => a.rel - b.rel);
-    const best = ranked[0]!;
+    const best = ranked[0];
+    if (!best) throw errors[0];
     chosen = best.r;
     reason = `auto: ${best.m} has the lowest calibrated uncertainty (${(best.rel * 100).toFixed(1)} %) among the methods these inputs allow (${ranked.map((r) => `${r.m} ${(r.rel * 100).toFixed(1)} %`).join(', ')}), measured on the bundled ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts`;
   } else {

@@ -12,8 +12,10 @@ export function parseFormula(formula: string): Record<string, number> {
   if (typeof formula !== 'string' || formula.trim() === '') {
     throw new ChemInputError('formula', 'empty formula', FORMULA_ACCEPTED);
   }
-  let s = formula.replace(/\s+/g, '').replace(/[⁺⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+$/u, '');
-  s = s.replace(/\^?\d*[+-]+$/, '');
+  // A written charge is dropped: "SO4 2-", "SO4^2-", "SO4--", "NH4+", "SO₄²⁻". Digits before a sign count as
+  // the charge only after a space or "^" ("SO42-" would read as 42 oxygens, so write "SO4 2-").
+  let s = formula.trim().replace(/[⁺⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+$/u, '');
+  s = s.replace(/(?:\s+|\^)\d*[+-]+$/, '').replace(/[+-]+$/, '').replace(/\s+/g, '');
   if (s.length === 0 || s.length > 200) throw new ChemInputError('formula', `cannot read "${formula}"`, FORMULA_ACCEPTED);
   let i = 0;
   const readCount = (): number => {

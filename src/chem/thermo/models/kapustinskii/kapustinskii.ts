@@ -67,12 +67,12 @@ export function requireIonCharges(cationCharge: number, anionCharge: number): { 
  * MX(s) → M⁺(g) + X⁻(g)), as a plain number.
  *
  * U_POT = K·ν·|z₊z₋| / (r₊ + r₋) · (1 − ρ/(r₊ + r₋)), K = 1214 kJ·Å·mol⁻¹, ρ = 0.345 Å.
- * Valid for ionic solids of near-spherical ions; radii 0.1–10 Å.
+ * Valid for ionic solids of near-spherical ions; radii 0.35–10 Å (so r₊ + r₋ > 2ρ, where the repulsion term keeps its meaning).
  */
 export function kapustinskiiPotentialKJ(input: KapustinskiiInput): number {
   const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
-  const rc = requireFiniteInRange('cationRadiusA', input.cationRadiusA, 0.1, 10, 'Å');
-  const ra = requireFiniteInRange('anionRadiusA', input.anionRadiusA, 0.1, 10, 'Å');
+  const rc = requireFiniteInRange('cationRadiusA', input.cationRadiusA, 0.35, 10, 'Å');
+  const ra = requireFiniteInRange('anionRadiusA', input.anionRadiusA, 0.35, 10, 'Å');
   const stoich = stoichiometryFromCharges(zc, za);
   const nu = requireFiniteInRange('ionsPerFormulaUnit', input.ionsPerFormulaUnit ?? stoich.cations + stoich.anions, 2, 20);
   const k = requireFiniteInRange('constantKJA', input.constantKJA ?? KAPUSTINSKII_K_KJ_A_PER_MOL, 1000, 1500, 'kJ·Å/mol');

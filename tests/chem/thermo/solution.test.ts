@@ -1,0 +1,25 @@
+import { describe, expect, it } from 'vitest';
+import { referenceSolutionEnthalpyKJ } from '@/chem';
+import { SOLUTION_REFERENCE_SALTS } from '@/chem/data/thermo-reference';
+
+/**
+ * The reference ΔH_sol values are computed from NBS ΔfH° (Wagman et al. 1982). Here they are checked against
+ * an independent table: CRC Handbook of Chemistry and Physics, "Enthalpy of Solution of Electrolytes"
+ * (infinite dilution, 25 °C), values in kJ/mol — from memory of that table.
+ */
+const CRC_SOLUTION_KJ: Record<string, number> = {
+  LiCl: -37.03, LiBr: -48.83, LiI: -63.3, NaCl: 3.88, NaBr: -0.6, NaI: -7.53, KF: -17.73, KCl: 17.22, KBr: 19.87,
+  KI: 20.33, CsCl: 17.78, NaOH: -44.51, KOH: -57.61, NaNO3: 20.5, KNO3: 34.89, NH4Cl: 14.78, NH4NO3: 25.69,
+  KClO4: 51.04, Na2SO4: -2.42, K2SO4: 23.8, MgSO4: -91.21, CaCl2: -81.33, BaCl2: -13.22, MgCl2: -160.0,
+  NaCH3COO: -17.32, Na2CO3: -26.7, K2CO3: -30.92, KH2PO4: 19.6,
+};
+
+describe('reference enthalpies of solution (NBS ΔfH°) against the CRC enthalpy-of-solution table', () => {
+  const rows = SOLUTION_REFERENCE_SALTS.filter((s) => CRC_SOLUTION_KJ[s.formula] !== undefined);
+  it('covers at least 15 salts', () => {
+    expect(rows.length).toBeGreaterThanOrEqual(15);
+  });
+  it.each(rows.map((s) => [s.formula, s] as const))('%s within 1.5 kJ/mol', (_f, s) => {
+    expect(Math.abs(referenceSolutionEnthalpyKJ(s) - CRC_SOLUTION_KJ[s.formula]!)).toBeLessThan(1.5);
+  });
+});

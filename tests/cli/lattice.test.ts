@@ -1,0 +1,45 @@
+import { PassThrough } from 'node:stream';
+import { describe, expect, it } from 'vitest';
+import { main } from '@/cli/main';
+
+async function run(argv: string[]) {
+  const stdout = new PassThrough();
+  const stderr = new PassThrough();
+  let out = '';
+  let err = '';
+  stdout.on('data', (d) => (out += String(d)));
+  stderr.on('data', (d) => (err += String(d)));
+  const code = await main(argv, { stdin: new PassThrough(), stdout, stderr });
+  return { code, out, err };
+}
+
+describe('saltsmith lattice', () => {
+  it('answers one salt by ion symbols, human-readable, with the sign convention and a caution', async () => {
+    const { code, out } = await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-']);
+    expect(code).toBe(0);
+    expect(out).toMatch(/ΔH_L \(dissociation, > 0\)\s+\d+ ± \d+ kJ\/mol/);
+    expect(out).toMatch(/ΔH_sol/);
+    expect(out).toMatch(/Screening estimate/);
+  });
+
+  it('accepts ids, a method and --json; works out the 1:2 stoichiometry', async () => {
+    const { code, out } = await run(['lattice', '--cation', 'calcium', '--anion', 'chloride', '--method', 'kapustinskii', '--json']);
+    expect(code).toBe(0);
+    const j = JSON.parse(out);
+    expect(j.anionsPerFormula).toBe(2);
+    expect(j.methodChosen).toBe('kapustinskii');
+    // CaCl₂: Born–Haber 2255 kJ/mol (Wagman 1982 ΔfH° + CRC IE/EA) within 8 %.
+    expect(Math.abs(j.latticeEnthalpyKJ.value / 2255 - 1)).toBeLessThan(0.08);
+  });
+
+  it('rejects unknown ions and methods with usage errors, and bad numbers with a field name', async () => {
+    expect((await run(['lattice', '--cation', 'Qq+', '--anion', 'Cl-'])).code).toBe(2);
+    expect((await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--method', 'magic'])).code).toBe(2);
+    const bad = await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--density', 'heavy']);
+    expect(bad.code).toBe(1);
+    expect(bad.err).toMatch(/density/);
+    const swapped = await run(['lattice', '--cation', 'Cl-', '--anion', 'Na+']);
+    expect(swapped.code).toBe(1);
+    expect(swapped.err).toMatch(/cation/);
+  });
+});
