@@ -38,7 +38,7 @@ export function candidatesFromLibrary(
       const key = `${m}:${n}:${st.ionCharge}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      const label = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : `${m}:${n}`;
+      const label = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : `${ion.name.toLowerCase()} (${m}:${n})`;
       const thermo = dIon
         ? candidateSolutionEnthalpyKJ(dIon, { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings }, {
             drugPerSalt: m,

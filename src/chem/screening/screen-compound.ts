@@ -329,7 +329,7 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
   const rows: ScreenRow[] = prepared.map((p) => {
     const cand = p.cand;
     const st = cand.stoichiometry;
-    const label = `${cand.counterIon.name}${st.label ? ` ${st.label}` : ` (${st.drugPerSalt}:${st.counterIonPerSalt})`}`;
+    const label = st.label ? st.label : `${cand.counterIon.name.toLowerCase()} (${st.drugPerSalt}:${st.counterIonPerSalt})`;
     if ('error' in p) return errorRow(cand, label, p.error);
     try {
       return candidateRow(p, label);
@@ -341,7 +341,8 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
   function candidateRow(p: Prepared, label: string): ScreenRow {
     const { cand, protolyte, saltM, measured, dH, dHOrigin } = p;
     const st = cand.stoichiometry;
-    const name = cand.counterIon.name.toLowerCase();
+    /** The salt's trade name without its ratio, e.g. 'hydrochloride', for the reasons in words. */
+    const name = label.replace(/\s*\([^)]*\)\s*$/, '') || cand.counterIon.name.toLowerCase();
     const reasons: Reason[] = [];
     const flags: ScreenFlag[] = [];
 
@@ -554,7 +555,8 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
       ...freeProfile.assumptions,
       `temperature ${(T - 273.15).toFixed(0)} °C for the estimates; pKa values at 25 °C`,
       'K_sp without a measured salt solubility is an estimate (salt-limited solubility ~10² × S₀, shifted by relative ΔH_sol); treat its pH_max and dose numbers as screening figures',
-      'dose numbers use the solubility of the less soluble solid at each pH, in free-form equivalents, 250 mL (ICH M9)',
+      'dose numbers use the equilibrium solubility of the less soluble solid at each pH, in free-form equivalents, 250 mL (ICH M9); transient supersaturation from a dissolving salt is not modelled',
+      'in gastric medium only the candidate’s own counter-ion is counted as a common ion; conversion of other salts to the hydrochloride is not modelled',
     ],
     cautions: SCREENING_CAUTIONS,
   };

@@ -1,0 +1,86 @@
+import { describe, expect, it } from 'vitest';
+import { PassThrough } from 'node:stream';
+import Papa from 'papaparse';
+import { screenCommand } from '@/cli/commands/screen';
+import { evaluateRequest } from '@/cli/commands/eval';
+import { phMaxBase } from '@/chem';
+
+async function run(args: string[]) {
+  const stdout = new PassThrough();
+  const stderr = new PassThrough();
+  let out = '';
+  let err = '';
+  stdout.on('data', (d) => (out += String(d)));
+  stderr.on('data', (d) => (err += String(d)));
+  const code = await screenCommand.run(args, { stdin: new PassThrough(), stdout, stderr });
+  return { code, out, err };
+}
+
+// A test compound given by formula and made-up properties; assertions check structure and identities,
+// not these inputs.
+const BASE = ['--formula', 'C17H20N2O2', '--pka', '8', '--s0', '0.02', '--dose', '100', '--iterations', '200'];
+
+describe('saltsmith screen', () => {
+  it('writes a ranked CSV with pH_max, dose numbers at pH 1.2 and 6.8, flags, reasons and the cautions', async () => {
+    const { code, out } = await run([...BASE, '--ions', 'chloride,mesylate,sulfate']);
+    expect(code).toBe(0);
+    const lines = out.trim().split('\n');
+    const cautions = lines.filter((l) => l.startsWith('#'));
+    expect(cautions.join(' ')).toMatch(/do not establish a salt form/);
+    const parsed = Papa.parse<Record<string, string>>(lines.filter((l) => !l.startsWith('#')).join('\n'), { header: true });
+    expect(parsed.errors).toHaveLength(0);
+    const rows = parsed.data;
+    expect(rows.map((r) => r.rank)).toStrictEqual(['1', '2', '3']);
+    for (const k of ['ph_max', 'dose_number_ph_1_2', 'dose_number_ph_6_8', 'gastric_dose_number', 'flags', 'reasons', 'p_top3']) expect(Object.keys(rows[0]!)).toContain(k);
+    expect(rows.every((r) => !/NaN|Infinity/.test(Object.values(r).join(',')))).toBe(true);
+    const hcl = rows.find((r) => r.counter_ion === 'chloride')!;
+    expect(hcl.reasons).toMatch(/hydrochloride/);
+  });
+
+  it('writes JSON with the same rows and the cautions', async () => {
+    const { code, out } = await run([...BASE, '--ions', 'chloride,mesylate', '--format', 'json']);
+    expect(code).toBe(0);
+    const doc = JSON.parse(out);
+    expect(doc.format).toBe('saltsmith-screen');
+    expect(doc.rows).toHaveLength(2);
+    expect(doc.cautions.join(' ')).toMatch(/safety data sheet/);
+  });
+
+  it('is reproducible with a seed', async () => {
+    const a = await run([...BASE, '--ions', 'chloride,mesylate,tosylate,besylate', '--seed', '5']);
+    const b = await run([...BASE, '--ions', 'chloride,mesylate,tosylate,besylate', '--seed', '5']);
+    expect(a.out).toBe(b.out);
+  });
+
+  it('refuses bad input with a message and exit status 1', async () => {
+    const outOfOrder = await run(['--formula', 'C17H20N2O2', '--pka', '8,3', '--s0', '0.02', '--dose', '100']);
+    expect(outOfOrder.code).toBe(1);
+    expect(outOfOrder.err).toMatch(/out of order/);
+    const zeroDose = await run(['--formula', 'C17H20N2O2', '--pka', '8', '--s0', '0.02', '--dose', '0']);
+    expect(zeroDose.code).toBe(1);
+    expect(zeroDose.err).toMatch(/dose/i);
+    const noS0 = await run(['--formula', 'C17H20N2O2', '--pka', '8', '--dose', '100']);
+    expect(noS0.code).toBe(1);
+    expect(noS0.err).toMatch(/melting point/);
+    const badIon = await run([...BASE, '--ions', 'unobtainium']);
+    expect(badIon.code).toBe(1);
+    const coldT = await run([...BASE, '--temperature-c', '-300']);
+    expect(coldT.code).toBe(1);
+  });
+});
+
+describe('saltsmith eval: "kind":"ph-solubility"', () => {
+  it('returns the profile and pH_max, with the 1:1 closed form beside it (Bogardus & Blackwood 1979)', async () => {
+    const r = (await evaluateRequest({
+      kind: 'ph-solubility',
+      drug: { kind: 'base', pKas: [8], log10IntrinsicM: -5 },
+      salt: { counterIon: 'chloride', log10Ksp: -3 },
+    })) as { points: unknown[]; phMax: number; phMaxClosedForm1to1: number };
+    expect(r.points).toHaveLength(71);
+    expect(r.phMaxClosedForm1to1).toBeCloseTo(phMaxBase(8, 1e-5, 1e-3), 12);
+    expect(Math.abs(r.phMax - r.phMaxClosedForm1to1)).toBeLessThan(1e-3);
+  });
+  it('rejects a pH outside 0–14', async () => {
+    await expect(evaluateRequest({ kind: 'ph-solubility', drug: { kind: 'base', pKas: [8], log10IntrinsicM: -5 }, phFrom: -2 })).rejects.toThrow(/pH|phFrom/);
+  });
+});
