@@ -2,6 +2,7 @@ import { writeLine, type CliCommand, type CliIo } from './io';
 import { latticeCommand } from './commands/lattice';
 import { ionsCommand } from './commands/ions';
 import { evalCommand } from './commands/eval';
+import { screenCommand } from './commands/screen';
 
 /**
  * The commands of `saltsmith`. Add one line per command; each lives in commands/<name>.ts.
@@ -10,6 +11,7 @@ const COMMANDS: Record<string, CliCommand> = {
   lattice: latticeCommand,
   ions: ionsCommand,
   eval: evalCommand,
+  screen: screenCommand,
 };
 
 const CAUTION =
