@@ -156,7 +156,7 @@ export const LATTICE_REFERENCE_SALTS: readonly LatticeReferenceSalt[] = [
 /** Formula (without charge) of each reference salt's ions, for molar masses. */
 export const REFERENCE_SALT_SOURCES = {
   bornHaber: `Born–Haber cycle: ${CYCLE_DATA_SOURCE}`,
-  solutionCycle: `Solution cycle ΔH_L = ΔH_sol − Σν·ΔH_hyd: ΔH_sol from ${SRC.nbs1982}${FM}; ΔH_hyd from ${SRC.marcus1991}${FM}`,
+  solutionCycle: `Solution cycle ΔH_L = ΔH_sol − Σν·ΔH_hyd: ΔH_sol from ${SRC.nbs1982}${FM}; ΔH_hyd from ${SRC.marcusHydration}${FM}`,
 };
 
 /**

@@ -11,8 +11,8 @@ export const SRC = {
     'Thermochemical radii: H. K. Roobottom, H. D. B. Jenkins, J. Passmore, L. Glasser, J. Chem. Educ. 76 (1999) 1570, Table; H. D. B. Jenkins, K. P. Thakur, J. Chem. Educ. 56 (1979) 576; as in CRC "Lattice Energies" Table 2',
   jenkinsVolumes:
     'Ion volumes: H. D. B. Jenkins, H. K. Roobottom, J. Passmore, L. Glasser, Inorg. Chem. 38 (1999) 3609, Table 1',
-  marcus1991:
-    'Y. Marcus, J. Chem. Soc. Faraday Trans. 87 (1991) 2995, Table (standard molar enthalpies of hydration, ΔH_hyd(H⁺) = −1103 kJ/mol scale)',
+  marcusHydration:
+    'Y. Marcus, J. Chem. Soc. Faraday Trans. 1 83 (1987) 339 ("Thermodynamics of solvation of ions. Part 3. The enthalpy of hydration at 298.15 K"), absolute scale; the 1991 Part 5 (Faraday Trans. 87, 2995) gives the matching Gibbs energies',
   marcus1994: 'Y. Marcus, Biophys. Chem. 51 (1994) 111, Table (hydration of ions)',
   smith1977: 'D. W. Smith, J. Chem. Educ. 54 (1977) 540',
   pauling1960:

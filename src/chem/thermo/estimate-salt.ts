@@ -9,7 +9,7 @@ import { latticeStats, publishedHydrationClosure, type LatticeVariant } from './
 
 /** The sign convention every result states. */
 export const SIGN_CONVENTION =
-  'ΔH_L is the lattice dissociation enthalpy, > 0 for MₚXq(s) → p Mᶻ⁺(g) + q Xᶻ⁻(g) (the lattice formation enthalpy is the same number with a minus sign); ΔH_hyd < 0 for one gaseous ion → aqueous ion, absolute scale of Marcus 1991 (ΔH_hyd(H⁺) = −1103 kJ/mol); ΔH_sol = ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− at infinite dilution, 298.15 K, kJ/mol per formula unit.';
+  'ΔH_L is the lattice dissociation enthalpy, > 0 for MₚXq(s) → p Mᶻ⁺(g) + q Xᶻ⁻(g) (the lattice formation enthalpy is the same number with a minus sign); ΔH_hyd < 0 for one gaseous ion → aqueous ion, absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); ΔH_sol = ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− at infinite dilution, 298.15 K, kJ/mol per formula unit.';
 
 const METHOD_SOURCES: Record<LatticeMethod, string[]> = {
   kapustinskii: KAPUSTINSKII_SOURCES,

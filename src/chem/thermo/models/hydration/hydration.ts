@@ -93,7 +93,7 @@ function fitSet(): { ion: ThermoIon; published: number; r: number; source: strin
 
 /**
  * Fit the effective-radius offsets δ₊ and δ₋ (r_eff = r + δ) of the Born enthalpy to the bundled published
- * hydration enthalpies (Marcus 1991), separately for cations and anions, by least squares on relative error —
+ * hydration enthalpies (Marcus 1987), separately for cations and anions, by least squares on relative error —
  * the approach of Latimer, Pitzer & Slansky 1939 (who used +0.85 Å and +0.10 Å on Pauling radii).
  * Then check the fitted model on organic ions whose size is estimated from their formula (tetramethyl- and
  * tetraethylammonium, acetate), whose published values were not used in the fit.
@@ -140,8 +140,14 @@ export function fitBornOffsets(): BornOffsetFit {
   return fitCache;
 }
 
-/** Uncertainty of a published single-ion value: the closure of the solution cycle, see `publishedHydrationUncertaintyKJ`. */
-export const PUBLISHED_HYDRATION_SOURCES = [SRC.marcus1991];
+/**
+ * Relative uncertainty floor for published hydration enthalpies of polyatomic ions, which the halide
+ * closure test cannot check — common practice, not a measured figure.
+ */
+export const POLYATOMIC_PUBLISHED_REL_U = 0.03;
+
+/** Uncertainty of a published single-ion value: the closure of the solution cycle (`publishedHydrationClosure`). */
+export const PUBLISHED_HYDRATION_SOURCES = [SRC.marcusHydration];
 
 /**
  * Hydration enthalpy of one ion, kJ/mol (< 0): the published value where the ion has one; otherwise the
@@ -159,12 +165,17 @@ export function hydrationEnthalpyKJ(
   if (!Number.isInteger(z) || z === 0 || Math.abs(z) > 4) throw new ChemInputError('charge', `charge ${z} is not a non-zero whole number`, 'whole numbers −4…−1 or +1…+4');
   if (ion.hydrationEnthalpyKJ && !opts.forceBorn) {
     const pub = ion.hydrationEnthalpyKJ;
+    const closure = (opts.perIonPublishedUncertaintyKJ ?? 0) * Math.abs(z);
+    const polyFloor = ion.shape === 'monatomic' ? 0 : POLYATOMIC_PUBLISHED_REL_U * Math.abs(pub.value);
+    const notes = ['absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); sums over a neutral salt do not depend on it'];
+    if (closure > 0) notes.push(`uncertainty at least ${closure.toFixed(1)} kJ/mol: the RMS closure of the solution cycle on the bundled halides, per ion`);
+    if (polyFloor > 0) notes.push(`polyatomic ion: at least ${(POLYATOMIC_PUBLISHED_REL_U * 100).toFixed(0)} % (common practice; the halide closure does not test it)`);
     return {
       value: pub.value,
-      uncertainty: Math.max(pub.uncertainty, (opts.perIonPublishedUncertaintyKJ ?? 0) * Math.abs(z)),
+      uncertainty: Math.max(pub.uncertainty, closure, polyFloor),
       method: 'published',
       sources: pub.sources,
-      notes: ['absolute scale of Marcus 1991 (ΔH_hyd(H⁺) = −1103 kJ/mol); sums over a neutral salt do not depend on it'],
+      notes,
     };
   }
   const r = bornRadiusA(ion);
@@ -184,7 +195,7 @@ export function hydrationEnthalpyKJ(
     value,
     uncertainty: Math.abs(value) * rel,
     method: 'born-fitted',
-    sources: [SRC.born1920, SRC.latimer1939, SRC.waterDielectric, `offsets fitted on ${SRC.marcus1991}`],
+    sources: [SRC.born1920, SRC.latimer1939, SRC.waterDielectric, `offsets fitted on ${SRC.marcusHydration}`],
     notes,
   };
 }
