@@ -41,15 +41,24 @@ export interface SaltFormationVerdict {
   reason: string;
 }
 
+/**
+ * Probability of a salt for a ΔpKa: the linear trend 17·ΔpKa + 28 % (Cruz-Cabeza 2012, coefficients
+ * from memory) clamped to 0–1, at least 95 % above the salt band and at most 5 % below the cocrystal
+ * band ("almost always"). Allocation-free, for the Monte Carlo.
+ */
+export function saltProbabilityFor(dpKa: number, bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS): number {
+  const linear = (17 * dpKa + 28) / 100;
+  const clamped = linear < 0 ? 0 : linear > 1 ? 1 : linear;
+  if (dpKa > bands.saltAbove) return Math.max(clamped, 0.95);
+  if (dpKa < bands.cocrystalBelow) return Math.min(clamped, 0.05);
+  return clamped;
+}
+
 /** The verdict for one ΔpKa, with the bands named in words. */
 export function saltFormationVerdict(dpKa: number, bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS): SaltFormationVerdict {
   requireFiniteInRange('deltaPka', dpKa, -30, 30);
   const band: SaltFormationBand = dpKa > bands.saltAbove ? 'salt' : dpKa < bands.cocrystalBelow ? 'cocrystal' : 'uncertain';
-  const linear = (17 * dpKa + 28) / 100;
-  const clamped = Math.min(Math.max(linear, 0), 1);
-  // "almost always": at least 95 % salts above the salt band, at most 5 % below the cocrystal band.
-  const saltProbability =
-    band === 'salt' ? Math.max(clamped, 0.95) : band === 'cocrystal' ? Math.min(clamped, 0.05) : clamped;
+  const saltProbability = saltProbabilityFor(dpKa, bands);
   const meets = dpKa >= bands.stableSaltMin;
   const d = dpKa.toFixed(1);
   const reason =

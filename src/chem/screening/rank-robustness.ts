@@ -1,6 +1,6 @@
 import { createSeededRandom } from '../numerics/prng';
 import { ChemInputError } from '../result';
-import { DEFAULT_DELTA_PKA_BANDS, saltFormationVerdict, type DeltaPkaBands } from './delta-pka';
+import { DEFAULT_DELTA_PKA_BANDS, saltProbabilityFor, type DeltaPkaBands } from './delta-pka';
 import { criterionScores, weightedScore, type CriterionInputs } from './ranking';
 import type { ScreeningWeights } from './settings';
 
@@ -64,7 +64,7 @@ export function rankRobustness(
   const n = live.length;
   const top3 = new Float64Array(n);
   const first = new Float64Array(n);
-  const ranks: number[][] = live.map(() => []);
+  const rankCounts = live.map(() => new Uint32Array(n + 1));
   const scores = new Float64Array(n);
   const order = Array.from({ length: n }, (_, i) => i);
   const sign = shared.drugKind === 'base' ? 1 : -1;
@@ -81,7 +81,7 @@ export function rankRobustness(
       const dMargin = sign * dPka + dS0 - saltShift;
       const perturbed: CriterionInputs = {
         ...c,
-        saltProbability: r.deltaPka === null ? c.saltProbability : saltFormationVerdict(r.deltaPka + sign * dPka, bands).saltProbability,
+        saltProbability: r.deltaPka === null ? c.saltProbability : saltProbabilityFor(r.deltaPka + sign * dPka, bands),
         log10WorstDoseNumber: c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - shiftFor(r.worstSolid),
         log10GastricDoseNumber: c.log10GastricDoseNumber === null ? null : c.log10GastricDoseNumber - shiftFor(r.gastricSolid),
         phMaxMarginPh: c.phMaxMarginPh === null ? null : c.phMaxMarginPh + dMargin,
@@ -93,11 +93,21 @@ export function rankRobustness(
       const i = order[k]!;
       if (k < 3) top3[i]! += 1;
       if (k === 0) first[i]! += 1;
-      ranks[i]!.push(k + 1);
+      rankCounts[i]![k + 1]! += 1;
     }
   }
+  const half = iterations / 2;
   return live.map((r, i) => {
-    const sorted = ranks[i]!.sort((a, b) => a - b);
-    return { id: r.id, pTop3: top3[i]! / iterations, pFirst: first[i]! / iterations, medianRank: sorted[Math.floor((sorted.length - 1) / 2)]! };
+    let cum = 0;
+    let medianRank = n;
+    const counts = rankCounts[i]!;
+    for (let k = 1; k <= n; k++) {
+      cum += counts[k]!;
+      if (cum >= half) {
+        medianRank = k;
+        break;
+      }
+    }
+    return { id: r.id, pTop3: top3[i]! / iterations, pFirst: first[i]! / iterations, medianRank };
   });
 }
