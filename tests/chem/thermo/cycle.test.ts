@@ -34,7 +34,7 @@ describe('Born–Haber cycle', () => {
 describe('solution cycle', () => {
   it('backs KCl’s lattice enthalpy out of its measured ΔH_sol (+17.2 kJ/mol) within 1 % of the Born–Haber 717 kJ/mol', () => {
     // ΔH_sol(KCl) = 17.22 kJ/mol (CRC "Enthalpy of solution of electrolytes" — from memory);
-    // hydration: Marcus 1991 K⁺ −334, Cl⁻ −367; Born–Haber 717.6 kJ/mol (Wagman 1982 + CRC IE/EA).
+    // hydration: Marcus 1987 K⁺ −334, Cl⁻ −367; Born–Haber 717.6 kJ/mol (Wagman 1982 + CRC IE/EA).
     const k = getThermoIon('potassium')!;
     const cl = getThermoIon('chloride')!;
     const h = latticeFromSolutionEnthalpy({ solutionEnthalpyKJ: 17.22, solutionUncertaintyKJ: 0.1, cationHydration: hydrationEnthalpyKJ(k), anionHydration: hydrationEnthalpyKJ(cl), cationsPerFormula: 1, anionsPerFormula: 1 });

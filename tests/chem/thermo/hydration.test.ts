@@ -19,13 +19,13 @@ describe('Born hydration enthalpy', () => {
 });
 
 describe('hydrationEnthalpyKJ', () => {
-  it('returns the published value with its source for a bundled ion (Marcus 1991: Na⁺ −416 kJ/mol)', () => {
+  it('returns the published value with its source for a bundled ion (Marcus 1987: Na⁺ −416 kJ/mol)', () => {
     const h = hydrationEnthalpyKJ(getThermoIon('sodium')!);
     expect(h.method).toBe('published');
     expect(h.value).toBe(-416);
     expect(h.sources.join(' ')).toMatch(/Marcus/);
   });
-  it('the fitted Born value for Cl⁻ is within 10 % of Marcus 1991 (−367 kJ/mol)', () => {
+  it('the fitted Born value for Cl⁻ is within 10 % of Marcus 1987 (−367 kJ/mol)', () => {
     const h = hydrationEnthalpyKJ(getThermoIon('chloride')!, { forceBorn: true });
     expect(h.method).toBe('born-fitted');
     expect(Math.abs(h.value / -367 - 1)).toBeLessThan(0.1);

@@ -45,7 +45,7 @@ export function solutionValidation(): SolutionValidation {
 /** The four Kapustinskii radius/constant pairings on the halides (and polyatomic salts), for the cited choice. */
 export function kapustinskiiVariants(): ModelValidation[] {
   const v = latticeValidation();
-  const names: LatticeVariant[] = ['kapustinskii', 'kapustinskii-1202', 'kapustinskii-shannon', 'kapustinskii-shannon-1202'];
+  const names: LatticeVariant[] = ['kapustinskii-goldschmidt', 'kapustinskii-goldschmidt-1202', 'kapustinskii-shannon', 'kapustinskii-shannon-1202'];
   return names.flatMap((n) => ['halides', 'polyatomic'].map((g) => v.get(`${n}/${g}`)!).filter(Boolean));
 }
 

@@ -1,6 +1,6 @@
 import { LATTICE_REFERENCE_SALTS, SOLUTION_REFERENCE_SALTS, type LatticeReferenceSalt } from '../../data/thermo-reference';
 import { THERMO_IONS } from '../../data/thermo-ions';
-import { getThermoIon } from '../ions';
+import { getThermoIon, KAPUSTINSKII_RADIUS_SET } from '../ions';
 import { KAPUSTINSKII_K_ALT_KJ_A_PER_MOL, KAPUSTINSKII_K_KJ_A_PER_MOL } from '../models/kapustinskii/kapustinskii';
 import { fitBornOffsets } from '../models/hydration/hydration';
 import { rawLattice } from '../lattice';
@@ -35,11 +35,21 @@ function structureOf(s: LatticeReferenceSalt): string | undefined {
   return s.volume.kind === 'cell' ? s.volume.structure : undefined;
 }
 
-export type LatticeVariant = 'kapustinskii' | 'kapustinskii-1202' | 'kapustinskii-shannon' | 'kapustinskii-shannon-1202' | 'born-mayer' | 'born-lande' | 'vbt' | 'vbt-ion-volumes';
+export type LatticeVariant =
+  | 'kapustinskii'
+  | 'kapustinskii-goldschmidt'
+  | 'kapustinskii-goldschmidt-1202'
+  | 'kapustinskii-shannon'
+  | 'kapustinskii-shannon-1202'
+  | 'born-mayer'
+  | 'born-lande'
+  | 'vbt'
+  | 'vbt-ion-volumes';
 
 export const LATTICE_VARIANT_LABELS: Record<LatticeVariant, string> = {
-  kapustinskii: 'Kapustinskii, K = 1214, Goldschmidt + thermochemical radii',
-  'kapustinskii-1202': 'Kapustinskii, K = 1202.5, Goldschmidt + thermochemical radii',
+  kapustinskii: `Kapustinskii as the engine runs it (K = 1214, ${KAPUSTINSKII_RADIUS_SET === 'shannon' ? 'Shannon CN VI' : 'Goldschmidt'} + thermochemical radii)`,
+  'kapustinskii-goldschmidt': 'Kapustinskii, K = 1214, Goldschmidt + thermochemical radii',
+  'kapustinskii-goldschmidt-1202': 'Kapustinskii, K = 1202.5, Goldschmidt + thermochemical radii',
   'kapustinskii-shannon': 'Kapustinskii, K = 1214, Shannon CN VI + thermochemical radii',
   'kapustinskii-shannon-1202': 'Kapustinskii, K = 1202.5, Shannon CN VI + thermochemical radii',
   'born-mayer': 'Born–Mayer, r₀ from the measured cell',
@@ -51,18 +61,21 @@ export const LATTICE_VARIANT_LABELS: Record<LatticeVariant, string> = {
 /** One variant's estimate for one reference salt, or undefined if the variant does not apply. */
 export function variantEstimateKJ(variant: LatticeVariant, s: LatticeReferenceSalt): number | undefined {
   const req = baseRequest(s);
-  const shannonRadii = () => {
+  const tableRadii = (set: 'shannon' | 'goldschmidt') => {
     const c = THERMO_IONS.find((i) => i.id === s.cation)!;
     const a = THERMO_IONS.find((i) => i.id === s.anion)!;
-    const rc = c.shape === 'monatomic' ? c.shannonRadiusA?.value : req.cation.radiusA?.value;
-    const ra = a.shape === 'monatomic' ? a.shannonRadiusA?.value : req.anion.radiusA?.value;
+    const pick = (r: typeof c, fallback: number | undefined) =>
+      r.shape === 'monatomic' ? (set === 'shannon' ? r.shannonRadiusA?.value : (r.goldschmidtRadiusA ?? r.shannonRadiusA)?.value) : fallback;
+    const rc = pick(c, req.cation.radiusA?.value);
+    const ra = pick(a, req.anion.radiusA?.value);
     return rc !== undefined && ra !== undefined ? { cation: rc, anion: ra } : undefined;
   };
   const method: LatticeMethod = variant.startsWith('kapustinskii') ? 'kapustinskii' : variant.startsWith('vbt') ? 'vbt' : (variant as LatticeMethod);
   const k = variant.endsWith('1202') ? KAPUSTINSKII_K_ALT_KJ_A_PER_MOL : KAPUSTINSKII_K_KJ_A_PER_MOL;
   if (method === 'kapustinskii') {
-    const radii = variant.includes('shannon') ? shannonRadii() : undefined;
-    if (variant.includes('shannon') && !radii) return undefined;
+    const set = variant.includes('shannon') ? 'shannon' : variant.includes('goldschmidt') ? 'goldschmidt' : undefined;
+    const radii = set ? tableRadii(set) : undefined;
+    if (set && !radii) return undefined;
     return rawLattice(req, 'kapustinskii', { kapustinskiiK: k, ...(radii ? { kapustinskiiRadii: radii } : {}) }).enthalpyKJ;
   }
   if (method === 'born-mayer' || method === 'born-lande') {
@@ -77,6 +90,7 @@ export function variantEstimateKJ(variant: LatticeVariant, s: LatticeReferenceSa
 }
 
 let latticeCache: Map<string, ModelValidation> | undefined;
+let closureCache: ReturnType<typeof computeClosure> | undefined;
 
 /** Validation of every lattice variant per group ('alkali-halide', 'alkaline-earth-halide', 'halides' = both, 'polyatomic', 'all'). */
 export function latticeValidation(): Map<string, ModelValidation> {
@@ -128,6 +142,11 @@ export function hydrationValidation(): ModelValidation[] {
 
 /** Closure of the solution cycle on the Born–Haber halides: ΔH_sol(NBS) − ΔH_L(Born–Haber) − Σν·ΔH_hyd(Marcus), kJ/mol. */
 export function publishedHydrationClosure(): { rmsKJ: number; perIonKJ: number; rows: { formula: string; closureKJ: number }[] } {
+  closureCache ??= computeClosure();
+  return closureCache;
+}
+
+function computeClosure(): { rmsKJ: number; perIonKJ: number; rows: { formula: string; closureKJ: number }[] } {
   const rows = LATTICE_REFERENCE_SALTS.filter((s) => s.route === 'born-haber').map((s) => {
     const h = (id: string) => THERMO_IONS.find((i) => i.id === id)!.hydrationEnthalpyKJ!.value;
     const closure = referenceSolutionEnthalpyKJ(s) - referenceLatticeEnthalpyKJ(s).value - s.p * h(s.cation) - s.q * h(s.anion);
