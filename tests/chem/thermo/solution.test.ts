@@ -23,3 +23,17 @@ describe('reference enthalpies of solution (NBS ΔfH°) against the CRC enthalpy
     expect(Math.abs(referenceSolutionEnthalpyKJ(s) - CRC_SOLUTION_KJ[s.formula]!)).toBeLessThan(1.5);
   });
 });
+
+describe('the drug-ion pipeline on salts whose organic ion is sized from its formula', () => {
+  it('sodium and potassium acetate: NBS ΔH_sol lies within the stated 2σ band', async () => {
+    // Wagman et al. 1982: ΔH_sol(NaCH₃COO) = −17.3, ΔH_sol(KCH₃COO) = −15.1 kJ/mol (from ΔfH°; CRC solution table −17.32).
+    const { estimateSaltThermo, getThermoIon, organicIonFromFormula } = await import('@/chem');
+    const acetate = organicIonFromFormula('C2H3O2', -1, { aromatic: 0, nonAromatic: 0 });
+    for (const [cation, ref] of [['sodium', -17.3], ['potassium', -15.1]] as const) {
+      const r = estimateSaltThermo({ cation: getThermoIon(cation)!, anion: acetate, cationsPerFormula: 1, anionsPerFormula: 1 });
+      expect(Math.abs(r.solutionEnthalpyKJ.value - ref)).toBeLessThanOrEqual(2 * r.solutionEnthalpyKJ.uncertainty);
+      // the organic ion's hydration carries the wide, organic-ion uncertainty
+      expect(r.anionHydrationKJ.uncertainty / Math.abs(r.anionHydrationKJ.value)).toBeGreaterThan(0.2);
+    }
+  });
+});
