@@ -1,4 +1,4 @@
-import { compoundSchema, type Compound } from '@/chem/compound/compound.schema';
+import { ChemInputError, compoundSchema, parseFormula, type Compound } from '@/chem';
 
 /** The compound form's draft: every field as the text the user typed. */
 export interface CompoundDraft {
@@ -12,6 +12,7 @@ export interface CompoundDraft {
   intrinsicSolubilityMgPerMl: string;
   meltingPointC: string;
   logP: string;
+  logPOrigin: '' | 'measured' | 'computed' | 'literature';
   doseMg: string;
   notes: string;
 }
@@ -29,6 +30,7 @@ export function draftFromCompound(c: Compound): CompoundDraft {
     intrinsicSolubilityMgPerMl: num(c.intrinsicSolubilityMgPerMl),
     meltingPointC: num(c.meltingPointC),
     logP: num(c.logP),
+    logPOrigin: c.logPOrigin ?? '',
     doseMg: num(c.doseMg),
     notes: c.notes,
   };
@@ -81,9 +83,22 @@ export function compoundFromDraft(
     intrinsicSolubilityMgPerMl: numberField('intrinsicSolubilityMgPerMl', 'Intrinsic solubility'),
     meltingPointC: numberField('meltingPointC', 'Melting point'),
     logP: numberField('logP', 'log P'),
+    logPOrigin: draft.logPOrigin === '' ? null : draft.logPOrigin,
     doseMg: numberField('doseMg', 'Dose'),
     notes: draft.notes,
   };
+  const formulaText = draft.formula.trim();
+  if (formulaText !== '') {
+    try {
+      const f = parseFormula(formulaText, 'formula');
+      if (f.charge !== 0) errors.formula = 'Give the neutral free form, without a charge';
+    } catch (err) {
+      errors.formula = err instanceof ChemInputError ? err.message.replace(/^formula: /, '') : 'Cannot read this formula';
+    }
+  } else if (draft.smiles.trim() === '') {
+    errors.formula = 'Give a SMILES or a molecular formula';
+  }
+  if (candidate.logP !== null && candidate.logPOrigin === null) candidate.logPOrigin = 'measured';
   if (draft.kind === 'base' && ionCharge < 0) errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';
   if (draft.kind === 'acid' && ionCharge > 0) errors.ionCharge = 'An acid forms an anion: charge must be −1, −2 or −3';
   const parsed = compoundSchema.safeParse(candidate);

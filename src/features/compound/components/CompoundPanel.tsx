@@ -7,6 +7,9 @@ import {
   type CompoundDraft,
   type FieldErrors,
 } from '../compound-form-model';
+import { useStructureCheck } from '../hooks/use-structure-check';
+import { StructureCard } from './StructureCard';
+import '../compound.css';
 
 /** Autosave delay after the last keystroke, ms. */
 const SAVE_DELAY_MS = 250;
@@ -66,6 +69,7 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
   const [saveState, setSaveState] = useState<SaveState>('saved');
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const projectId = project.id;
+  const structure = useStructureCheck(project.compound.smiles);
 
   // A different project opened: start from its stored compound.
   useEffect(() => {
@@ -92,11 +96,45 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     setErrors({});
     setSaveState('pending');
     timer.current = setTimeout(() => {
-      projectsRepo
-        .updateCompound(projectId, result.compound)
-        .then(() => setSaveState('saved'))
-        .catch(() => setSaveState('error'));
+      void (async () => {
+        // A changed SMILES must parse before anything is stored; a bad one keeps the old compound.
+        const smiles = result.compound.smiles;
+        // The stored SMILES was accepted before; only a changed one needs openchemlib's verdict.
+        if (smiles !== '' && smiles !== project.compound.smiles && smiles !== structure.good?.smiles) {
+          const checked = await structure.check(smiles);
+          if (checked.ok === 'stale') return;
+          if (checked.ok === false) {
+            setErrors((e) => ({ ...e, smiles: checked.message }));
+            setSaveState('invalid');
+            return;
+          }
+        } else if (smiles === '' && structure.good) {
+          await structure.check('');
+        }
+        try {
+          await projectsRepo.updateCompound(projectId, result.compound);
+          setSaveState('saved');
+        } catch {
+          setSaveState('error');
+        }
+      })();
     }, SAVE_DELAY_MS);
+  };
+
+  const applyComputedLogP = (value: number) => {
+    const next = { ...draft, logP: String(value), logPOrigin: 'computed' as const };
+    setDraft(next);
+    const result = compoundFromDraft(next, project.compound);
+    if (!result.ok) {
+      setErrors(result.errors);
+      setSaveState('invalid');
+      return;
+    }
+    setSaveState('pending');
+    projectsRepo
+      .updateCompound(projectId, result.compound)
+      .then(() => setSaveState('saved'))
+      .catch(() => setSaveState('error'));
   };
 
   const common = { draft, errors, onChange: change };
@@ -149,9 +187,28 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
         <Field id="intrinsicSolubilityMgPerMl" label="Intrinsic solubility S₀" unit="mg/mL" inputMode="decimal" {...common} />
         <Field id="meltingPointC" label="Melting point" unit="°C" inputMode="decimal" {...common} />
         <Field id="logP" label="log P" unit="octanol/water" inputMode="decimal" {...common} />
+        <div className="field">
+          <label htmlFor="compound-logPOrigin">log P origin</label>
+          <select
+            id="compound-logPOrigin"
+            value={draft.logPOrigin}
+            onChange={(e) => change('logPOrigin', e.target.value)}
+          >
+            <option value="">Not given</option>
+            <option value="measured">Measured</option>
+            <option value="literature">Literature</option>
+            <option value="computed">Computed (openchemlib)</option>
+          </select>
+        </div>
         <Field id="doseMg" label="Highest single dose" unit="mg, as free form" inputMode="decimal" {...common} />
         <Field id="notes" label="Notes" wide {...common} />
       </form>
+      <StructureCard
+        compound={project.compound}
+        structure={structure.good}
+        status={structure.status}
+        onUseLogP={applyComputedLogP}
+      />
     </section>
   );
 }

@@ -1,0 +1,124 @@
+import { useMemo } from 'react';
+import { drugIon, formatIonFormula, organicIonFromFormula, type Compound } from '@/chem';
+import type { GoodStructure, StructureStatus } from '../hooks/use-structure-check';
+
+const fmtU = (v: number, u: number, digits: number) => `${v.toFixed(digits)} ± ${u.toFixed(digits)}`;
+
+/**
+ * The compound's structure picture, formula and molar mass, and the salt-forming drug ion derived from
+ * it: formula, mass, ring counts, additive volume and thermochemical radius (thermochemistry engine).
+ */
+export function StructureCard({
+  compound,
+  structure,
+  status,
+  onUseLogP,
+}: {
+  compound: Compound;
+  structure: GoodStructure | null;
+  status: StructureStatus;
+  onUseLogP: (value: number) => void;
+}) {
+  const parsed = structure && structure.smiles === compound.smiles.trim() ? structure.parsed : undefined;
+  const derived = useMemo(() => {
+    try {
+      const ion = drugIon(compound, parsed);
+      let thermo: ReturnType<typeof organicIonFromFormula> | null = null;
+      let thermoError: string | null = null;
+      try {
+        thermo = organicIonFromFormula(ion.formula, ion.charge, ion.rings);
+      } catch (err) {
+        thermoError = err instanceof Error ? err.message : String(err);
+      }
+      return { ion, thermo, thermoError, error: null as string | null };
+    } catch (err) {
+      return { ion: null, thermo: null, thermoError: null, error: err instanceof Error ? err.message : String(err) };
+    }
+  }, [compound, parsed]);
+
+  const svgUrl = parsed ? `data:image/svg+xml;charset=utf-8,${encodeURIComponent(parsed.svg)}` : null;
+  const ion = derived.ion;
+
+  return (
+    <section className="structure-card" aria-labelledby="structure-title">
+      <h3 id="structure-title">Structure and drug ion</h3>
+      <div className="structure-grid">
+        <figure className="structure-figure">
+          {svgUrl ? (
+            <img src={svgUrl} alt={`Structure of ${compound.name}`} width={320} height={220} />
+          ) : compound.smiles.trim() && (status === 'loading' || status === 'idle') ? (
+            <p className="structure-placeholder" role="status">
+              Drawing the structure (loading the chemistry library)…
+            </p>
+          ) : (
+            <p className="structure-placeholder">{compound.smiles.trim() ? 'No picture: the stored SMILES cannot be read.' : 'No structure: formula only.'}</p>
+          )}
+          {parsed ? <figcaption className="muted">Drawn by openchemlib from the stored SMILES.</figcaption> : null}
+        </figure>
+        {ion ? (
+          <dl className="structure-data">
+            <dt>Free form</dt>
+            <dd>
+              {ion.freeFormFormula}, {ion.freeFormMolarMassGPerMol.toFixed(2)} g/mol
+            </dd>
+            <dt>Salt-forming drug ion</dt>
+            <dd>
+              {formatIonFormula(ion.formula, ion.charge)}, {ion.molarMassGPerMol.toFixed(2)} g/mol (
+              {compound.kind === 'base' ? `free base + ${ion.charge} H⁺` : `free acid − ${-ion.charge} H⁺`})
+            </dd>
+            <dt>Rings</dt>
+            <dd>
+              {ion.ringsKnown
+                ? `${ion.rings.aromatic} aromatic, ${ion.rings.nonAromatic} non-aromatic`
+                : 'unknown (formula only): the volume below assumes none — enter a SMILES for a better estimate'}
+            </dd>
+            {derived.thermo?.volumeNm3 ? (
+              <>
+                <dt>Ion volume (crystal)</dt>
+                <dd>
+                  {fmtU(derived.thermo.volumeNm3.value, derived.thermo.volumeNm3.uncertainty, 3)} nm³{' '}
+                  <span className="muted">({derived.thermo.volumeNm3.method})</span>
+                </dd>
+              </>
+            ) : null}
+            {derived.thermo?.radiusA ? (
+              <>
+                <dt>Thermochemical radius</dt>
+                <dd>{fmtU(derived.thermo.radiusA.value, derived.thermo.radiusA.uncertainty, 2)} Å</dd>
+              </>
+            ) : null}
+            {derived.thermoError ? (
+              <>
+                <dt>Ion volume</dt>
+                <dd className="field-error">{derived.thermoError}</dd>
+              </>
+            ) : null}
+            {parsed?.logP ? (
+              <>
+                <dt>log P, computed</dt>
+                <dd>
+                  {fmtU(parsed.logP.value, parsed.logP.uncertainty, 1)} <span className="muted">(openchemlib increments; an estimate)</span>{' '}
+                  <button type="button" onClick={() => onUseLogP(Math.round(parsed.logP!.value * 100) / 100)}>
+                    Use as log P
+                  </button>
+                </dd>
+              </>
+            ) : null}
+          </dl>
+        ) : (
+          <p className="field-error">{derived.error}</p>
+        )}
+      </div>
+      {[...(parsed?.notes ?? []), ...(ion?.notes ?? [])].map((n) => (
+        <p key={n} className="structure-note" role="note">
+          {n}
+        </p>
+      ))}
+      <p className="source">
+        Molar masses: IUPAC 2021 standard atomic weights.
+        {derived.thermo?.volumeNm3 ? ` Volume: ${derived.thermo.volumeNm3.sources.join('; ')}.` : ''}
+        {derived.thermo?.radiusA ? ` Radius: ${derived.thermo.radiusA.sources.join('; ')}.` : ''}
+      </p>
+    </section>
+  );
+}
