@@ -21,21 +21,21 @@ const MAX_CHART_SALTS = 7;
 
 /** The ranked table's columns, in the order of the sheet and the CSV. */
 export const SHEET_COLUMNS: readonly SheetColumn[] = [
-  { key: 'score', label: 'Score', unit: '0–1', kind: 'number', hint: 'weighted mean of the criterion scores (ranking weights above)' },
-  { key: 'deltaPka', label: 'ΔpKa', unit: null, kind: 'number', hint: 'pKa(protonated base) − pKa(acid)' },
-  { key: 'saltProbability', label: 'P(salt)', unit: '0–1', kind: 'number', hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend' },
-  { key: 'activeFraction', label: 'Active fraction', unit: '%', kind: 'number', hint: 'drug mass / salt mass' },
-  { key: 'saltMassPerDose', label: 'Salt per dose', unit: 'mg', kind: 'number' },
-  { key: 'log10Ksp', label: 'log₁₀ K_sp', unit: 'K_sp in (mol/L)^ν', kind: 'number' },
-  { key: 'phMax', label: 'pH_max', unit: null, kind: 'number' },
-  { key: 'worstDoseNumber', label: 'Worst D₀ in pH 1.2–6.8', unit: null, kind: 'number', hint: 'ICH M9 dose number at the least favourable pH' },
-  { key: 'worstPh', label: 'at pH', unit: null, kind: 'number' },
-  { key: 'gastricDoseNumber', label: 'Gastric D₀', unit: null, kind: 'number', hint: 'dose number in the gastric medium with its chloride' },
-  { key: 'solubilityClass', label: 'ICH M9 solubility', unit: null, kind: 'text' },
-  { key: 'phMaxMargin', label: 'pH_max − microenvironment pH', unit: 'pH units', kind: 'number' },
-  { key: 'latticeEnthalpy', label: 'ΔH_L', unit: 'kJ/mol', kind: 'number', hint: 'lattice dissociation enthalpy, > 0' },
-  { key: 'solutionEnthalpy', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number', hint: 'enthalpy of solution, estimate or calorimetric' },
-  { key: 'hygroscopicity', label: 'Moisture uptake', unit: null, kind: 'text', hint: 'Ph. Eur. 5.11 class from a measured mass gain' },
+  { key: 'score', label: 'Score', unit: '0–1', kind: 'number', hint: 'weighted mean of the criterion scores (ranking weights above)', group: 'formation' },
+  { key: 'deltaPka', label: 'ΔpKa', unit: null, kind: 'number', hint: 'pKa(protonated base) − pKa(acid)', group: 'formation' },
+  { key: 'saltProbability', label: 'P(salt)', unit: '0–1', kind: 'number', hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend', group: 'formation' },
+  { key: 'activeFraction', label: 'Active fraction', unit: '%', kind: 'number', hint: 'drug mass / salt mass', group: 'formation' },
+  { key: 'saltMassPerDose', label: 'Salt per dose', unit: 'mg', kind: 'number', group: 'formation' },
+  { key: 'log10Ksp', label: 'log₁₀ K_sp', unit: 'K_sp in (mol/L)^ν', kind: 'number', group: 'solubility' },
+  { key: 'phMax', label: 'pH_max', unit: null, kind: 'number', group: 'solubility' },
+  { key: 'worstDoseNumber', label: 'Worst D₀ in pH 1.2–6.8', unit: null, kind: 'number', hint: 'ICH M9 dose number at the least favourable pH', group: 'solubility' },
+  { key: 'worstPh', label: 'at pH', unit: null, kind: 'number', group: 'solubility' },
+  { key: 'gastricDoseNumber', label: 'Gastric D₀', unit: null, kind: 'number', hint: 'dose number in the gastric medium with its chloride', group: 'solubility' },
+  { key: 'solubilityClass', label: 'ICH M9 solubility', unit: null, kind: 'text', group: 'solubility' },
+  { key: 'phMaxMargin', label: 'pH_max − microenvironment pH', unit: 'pH units', kind: 'number', group: 'solubility' },
+  { key: 'latticeEnthalpy', label: 'ΔH_L', unit: 'kJ/mol', kind: 'number', hint: 'lattice dissociation enthalpy, > 0', group: 'energetics' },
+  { key: 'solutionEnthalpy', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number', hint: 'enthalpy of solution, estimate or calorimetric', group: 'energetics' },
+  { key: 'hygroscopicity', label: 'Moisture uptake', unit: null, kind: 'text', hint: 'Ph. Eur. 5.11 class from a measured mass gain', group: 'formation' },
 ];
 
 const num = (value: number | null | undefined, origin: ValueOrigin | null, uncertainty?: number | null): SheetCell =>
@@ -160,7 +160,7 @@ export function buildSheetModel({ project, screening, validation, generatedAt, a
   for (const rr of ranked) {
     const row = byId.get(rr.id);
     if (!row) continue;
-    const reasons = row.reasons.map((r) => `${REASON_WORD[r.kind] ?? r.kind}: ${r.text}`);
+    const reasons = row.reasons.map((r) => `${REASON_WORD[r.kind] ?? r.kind}: ${r.text.replace(/^(keeps|drops|watch|note|measured):\s*/, '')}`);
     if (row.error) reasons.unshift(`not screened: ${row.error}`);
     const energetics = screening.energetics[row.id];
     if (energetics && !energetics.thermo && energetics.reason) reasons.push(`no enthalpy estimate: ${energetics.reason}`);

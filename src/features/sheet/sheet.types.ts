@@ -9,6 +9,9 @@ import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 /** Where a number came from: a model estimate, a bench measurement, or the user's own input. */
 export type ValueOrigin = 'estimated' | 'measured' | 'input';
 
+/** The sheet splits the wide table into three narrower ones that fit a portrait page. */
+export type SheetColumnGroup = 'formation' | 'solubility' | 'energetics';
+
 export interface SheetColumn {
   key: string;
   /** Column heading without unit, e.g. "pH_max". */
@@ -19,6 +22,8 @@ export interface SheetColumn {
   kind: 'number' | 'text';
   /** One-line explanation for the sheet's legend. */
   hint?: string;
+  /** Which of the sheet's tables shows the column (the CSV shows all in one table). */
+  group: SheetColumnGroup;
 }
 
 export interface SheetCell {

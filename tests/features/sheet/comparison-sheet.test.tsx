@@ -20,11 +20,12 @@ function model(): SheetModel {
     settings: [{ label: 'Gastric chloride', value: 0.12, unit: 'mol/L' }],
     weights: [{ label: 'Solubility', value: 2 }],
     columns: [
-      { key: 'phMax', label: 'pH_max', unit: null, kind: 'number' },
-      { key: 'solH', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number' },
+      { key: 'score', label: 'Score', unit: '0–1', kind: 'number', group: 'formation' },
+      { key: 'phMax', label: 'pH_max', unit: null, kind: 'number', group: 'solubility' },
+      { key: 'solH', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number', group: 'energetics' },
     ],
     rows: [
-      { id: 'r1', rank: 1, label: HYPERLINK, cells: { phMax: { value: 4.56, uncertainty: 0.31, origin: 'estimated' }, solH: { value: 12.5, origin: 'measured' } }, flags: ['disproportionation risk'], reasons: ['low mass cost'] },
+      { id: 'r1', rank: 1, label: HYPERLINK, cells: { score: { value: 0.8 }, phMax: { value: 4.56, uncertainty: 0.31, origin: 'estimated' }, solH: { value: 12.5, origin: 'measured' } }, flags: ['disproportionation risk'], reasons: ['low mass cost'] },
       { id: 'r2', rank: 2, label: IMG, cells: { phMax: { value: null }, solH: { value: -30, uncertainty: 40, origin: 'estimated' } }, flags: [], reasons: [] },
     ],
     confidence: [{ label: 'Kapustinskii, alkali halides', n: 20, meanAbsPercentError: 2.345, maxAbsPercentError: 6.1, signedBiasPercent: -1.2 }],
@@ -42,12 +43,21 @@ describe('comparison sheet', () => {
     expect(screen.getByRole('table', { name: 'Screening settings' })).toHaveTextContent('Gastric chloride0.12 mol/L');
     expect(screen.getByRole('table', { name: 'Ranking weights' })).toHaveTextContent('Solubility2');
     expect(screen.getByRole('columnheader', { name: /^ΔH_sol ?\(kJ\/mol\)$/ })).toBeInTheDocument();
-    const first = screen.getByRole('rowheader', { name: HYPERLINK }).closest('tr') as HTMLElement;
+    const solubility = screen.getByRole('table', { name: /^Solubility across/ });
+    const energetics = screen.getByRole('table', { name: /^Enthalpies/ });
+    const formation = screen.getByRole('table', { name: /^Salt formation/ });
+    const rowOf = (table: HTMLElement, name: string) => within(table).getByRole('rowheader', { name }).closest('tr') as HTMLElement;
+    const first = rowOf(solubility, HYPERLINK);
     expect(within(first).getByText(/4\.56 ± 0\.31/)).toBeInTheDocument();
     expect(within(first).getByTitle('model estimate')).toBeInTheDocument();
-    expect(within(first).getByTitle('measured on the bench')).toBeInTheDocument();
-    expect(first).toHaveTextContent('disproportionation risk');
+    expect(within(rowOf(energetics, HYPERLINK)).getByTitle('measured on the bench')).toBeInTheDocument();
+    expect(rowOf(formation, HYPERLINK)).toHaveTextContent('disproportionation risk');
     expect(first.querySelector('[data-col="phMax"]')?.getAttribute('data-value')).toBe('4.56');
+    // Every candidate appears in every table, in rank order.
+    for (const t of [formation, solubility, energetics]) {
+      expect(within(t).getAllByRole('rowheader').map((h) => h.textContent)).toEqual([HYPERLINK, IMG]);
+    }
+    expect(screen.getByText('low mass cost')).toBeInTheDocument();
     const cautions = screen.getByTestId('sheet-cautions');
     for (const line of CAUTION_LINES) expect(cautions).toHaveTextContent(line);
     expect(screen.getByRole('complementary', { name: 'Cautions' })).toHaveTextContent('Screening estimates only.');
@@ -56,7 +66,7 @@ describe('comparison sheet', () => {
   it('renders hostile names as inert text (no element is created from them)', () => {
     const { container } = render(<ComparisonSheet model={model()} />);
     expect(container.querySelector('img')).toBeNull();
-    expect(screen.getByRole('rowheader', { name: IMG })).toBeInTheDocument();
+    expect(screen.getAllByRole('rowheader', { name: IMG })).toHaveLength(3);
   });
 
   it('offers print and CSV download, and closes on Escape', async () => {

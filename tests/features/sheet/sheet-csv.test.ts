@@ -18,9 +18,9 @@ function model(label = 'Demorazine mesylate (1:1)'): SheetModel {
     settings: [],
     weights: [],
     columns: [
-      { key: 'dpka', label: 'ΔpKa', unit: null, kind: 'number' },
-      { key: 'solH', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number' },
-      { key: 'verdict', label: 'Verdict', unit: null, kind: 'text' },
+      { key: 'dpka', label: 'ΔpKa', unit: null, kind: 'number', group: 'formation' },
+      { key: 'solH', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number', group: 'energetics' },
+      { key: 'verdict', label: 'Verdict', unit: null, kind: 'text', group: 'formation' },
     ],
     rows: [
       {
@@ -52,7 +52,7 @@ function model(label = 'Demorazine mesylate (1:1)'): SheetModel {
 }
 
 function parse(csv: string): unknown[][] {
-  const out = Papa.parse<unknown[]>(csv, { dynamicTyping: true, skipEmptyLines: false });
+  const out = Papa.parse<unknown[]>(csv, { dynamicTyping: true, skipEmptyLines: false, delimiter: ',', newline: '\r\n' });
   expect(out.errors).toEqual([]);
   return out.data;
 }

@@ -2,7 +2,7 @@ import { CAUTION_LINES } from '@/components/Cautions';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
 import { ORIGIN_MARK, cellText, formatValue } from '../sheet-format';
-import type { SheetModel, SheetSetting } from '../sheet.types';
+import type { SheetColumnGroup, SheetModel, SheetSetting } from '../sheet.types';
 import '../sheet.css';
 
 const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeStyle: 'short' });
@@ -27,6 +27,68 @@ function SettingsTable({ caption, items }: { caption: string; items: SheetSettin
             </tr>
           ))
         )}
+      </tbody>
+    </table>
+  );
+}
+
+const GROUPS: { id: SheetColumnGroup; caption: string }[] = [
+  { id: 'formation', caption: 'Salt formation, tablet mass and moisture' },
+  { id: 'solubility', caption: 'Solubility across pH 1.2–6.8 and in gastric fluid (ICH M9 dose numbers)' },
+  { id: 'energetics', caption: 'Enthalpies of the dissolution cycle (compare between candidates)' },
+];
+
+function RankedTable({ model, group, caption, withFlags }: { model: SheetModel; group: SheetColumnGroup; caption: string; withFlags: boolean }) {
+  const columns = model.columns.filter((c) => c.group === group);
+  if (columns.length === 0 && !withFlags) return null;
+  return (
+    <table className={`sheet-ranking sheet-ranking-${group}`}>
+      <caption>{caption}</caption>
+      <thead>
+        <tr>
+          <th scope="col">Rank</th>
+          <th scope="col">Candidate</th>
+          {columns.map((c) => (
+            <th scope="col" key={c.key} title={c.hint}>
+              {c.label}
+              {c.unit ? <span className="sheet-unit">{` (${c.unit})`}</span> : null}
+            </th>
+          ))}
+          {withFlags ? <th scope="col">Flags</th> : null}
+        </tr>
+      </thead>
+      <tbody>
+        {model.rows.map((r) => (
+          <tr key={r.id} data-candidate-id={r.id}>
+            <td className="num">{r.rank ?? '—'}</td>
+            <th scope="row" className="sheet-candidate">
+              {r.label}
+            </th>
+            {columns.map((c) => {
+              const cell = r.cells[c.key];
+              const origin = cell?.origin ? ORIGIN_MARK[cell.origin] : null;
+              return (
+                <td
+                  key={c.key}
+                  className={c.kind === 'number' ? 'num' : undefined}
+                  data-col={c.key}
+                  data-value={typeof cell?.value === 'number' ? String(cell.value) : undefined}
+                >
+                  {cellText(cell)}
+                  {origin && cell?.value !== null ? (
+                    <>
+                      {' '}
+                      <abbr className={`sheet-origin origin-${cell?.origin}`} title={origin.words}>
+                        {origin.mark}
+                      </abbr>
+                    </>
+                  ) : null}
+                </td>
+              );
+            })}
+            {withFlags ? <td className="sheet-flags">{r.flags.length ? r.flags.join('; ') : '—'}</td> : null}
+          </tr>
+        ))}
       </tbody>
     </table>
   );
@@ -70,67 +132,28 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
         {model.rows.length === 0 ? (
           <p>No candidates are shortlisted in this project.</p>
         ) : (
-          <table className="sheet-ranking">
-            <thead>
-              <tr>
-                <th scope="col">Rank</th>
-                <th scope="col">Candidate</th>
-                {model.columns.map((c) => (
-                  <th scope="col" key={c.key} title={c.hint}>
-                    {c.label}
-                    {c.unit ? <span className="sheet-unit">{` (${c.unit})`}</span> : null}
-                  </th>
-                ))}
-                <th scope="col">Flags</th>
-                <th scope="col">Reasons</th>
-              </tr>
-            </thead>
-            <tbody>
-              {model.rows.map((r) => (
-                <tr key={r.id} data-candidate-id={r.id}>
-                  <td className="num">{r.rank ?? '—'}</td>
-                  <th scope="row" className="sheet-candidate">
-                    {r.label}
-                  </th>
-                  {model.columns.map((c) => {
-                    const cell = r.cells[c.key];
-                    const origin = cell?.origin ? ORIGIN_MARK[cell.origin] : null;
-                    return (
-                      <td
-                        key={c.key}
-                        className={c.kind === 'number' ? 'num' : undefined}
-                        data-col={c.key}
-                        data-value={typeof cell?.value === 'number' ? String(cell.value) : undefined}
-                      >
-                        {cellText(cell)}
-                        {origin && cell?.value !== null ? (
-                          <>
-                            {' '}
-                            <abbr className={`sheet-origin origin-${cell?.origin}`} title={origin.words}>
-                              {origin.mark}
-                            </abbr>
-                          </>
-                        ) : null}
-                      </td>
-                    );
-                  })}
-                  <td className="sheet-flags">{r.flags.length ? r.flags.join('; ') : '—'}</td>
-                  <td className="sheet-reasons">
-                    {r.reasons.length ? (
-                      <ul>
-                        {r.reasons.map((x) => (
-                          <li key={x}>{x}</li>
-                        ))}
-                      </ul>
-                    ) : (
-                      '—'
-                    )}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          GROUPS.map((g) => <RankedTable key={g.id} model={model} group={g.id} caption={g.caption} withFlags={g.id === 'formation'} />)
         )}
+        {model.rows.some((r) => r.reasons.length) ? (
+          <div className="sheet-reasons-block">
+            <h3>Why each candidate sits where it does</h3>
+            <ol className="sheet-reasons">
+              {model.rows.map((r) => (
+                <li key={r.id} value={r.rank ?? undefined} className={r.rank === null ? 'unranked' : undefined}>
+                  <strong>{r.label}</strong>
+                  {r.rank === null ? ' (not ranked)' : ''}
+                  {r.reasons.length ? (
+                    <ul>
+                      {r.reasons.map((x) => (
+                        <li key={x}>{x}</li>
+                      ))}
+                    </ul>
+                  ) : null}
+                </li>
+              ))}
+            </ol>
+          </div>
+        ) : null}
         <p className="sheet-legend">
           Marks: {Object.values(ORIGIN_MARK).map((o) => `“${o.mark}” ${o.words}`).join(', ')}. “±” is one standard
           uncertainty (1σ). Lattice enthalpy is the dissociation enthalpy (&gt; 0); hydration enthalpies are negative;
@@ -153,7 +176,7 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
             {model.energyCycles.map((c) => (
               <div className="sheet-figure" key={c.saltLabel}>
                 <h3>{c.saltLabel}</h3>
-                <EnergyLevelDiagram cycle={c} width={310} height={240} />
+                <EnergyLevelDiagram cycle={c} width={350} height={250} />
               </div>
             ))}
           </div>
