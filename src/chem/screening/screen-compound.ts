@@ -113,6 +113,11 @@ export interface MediumResult {
   solubilityMgPerMl: number;
   doseNumber: number | null;
   solid: 'salt' | 'free-form';
+  /**
+   * Set when another salt, less soluble in this medium, would form and limit solubility — for a base in
+   * gastric chloride, the hydrochloride (its label). Null otherwise.
+   */
+  convertsTo: string | null;
 }
 
 export interface ScreenRow {
@@ -158,6 +163,15 @@ export interface FreeFormResult {
   doseNumbers: DoseNumberAt[];
   worst: DoseNumberAt | null;
   solubilityClass: 'high' | 'low' | null;
+  flags: ScreenFlag[];
+}
+
+interface KspChoice {
+  log10Ksp: Estimate;
+  kspOrigin: 'measured' | 'estimated';
+  saltSigma: number;
+  anchored: boolean;
+  reasons: Reason[];
   flags: ScreenFlag[];
 }
 
@@ -326,58 +340,16 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     prepared.flatMap((p) => ('error' in p || !p.dH ? [] : [p.dH.value / p.cand.stoichiometry.drugPerSalt])),
   );
 
-  const rows: ScreenRow[] = prepared.map((p) => {
-    const cand = p.cand;
-    const st = cand.stoichiometry;
-    const label = st.label ? st.label : `${cand.counterIon.name.toLowerCase()} (${st.drugPerSalt}:${st.counterIonPerSalt})`;
-    if ('error' in p) return errorRow(cand, label, p.error);
-    try {
-      return candidateRow(p, label);
-    } catch (err) {
-      return errorRow(cand, label, err instanceof Error ? err.message : String(err));
-    }
-  });
-
-  function candidateRow(p: Prepared, label: string): ScreenRow {
+  /** K_sp of one prepared candidate: measured when a salt solubility exists, else the labelled estimate. */
+  function kspOf(p: Prepared): KspChoice {
     const { cand, protolyte, saltM, measured, dH, dHOrigin } = p;
     const st = cand.stoichiometry;
-    /** The salt's trade name without its ratio, e.g. 'hydrochloride', for the reasons in words. */
-    const name = label.replace(/\s*\([^)]*\)\s*$/, '') || cand.counterIon.name.toLowerCase();
-    const reasons: Reason[] = [];
-    const flags: ScreenFlag[] = [];
-
-    // Salt formation.
-    const dpKa = saltDeltaPka(drugP, c.ionCharge, protolyte, st.ionCharge);
-    const verdict = dpKa === null ? null : saltFormationVerdict(dpKa, settings.deltaPkaBands);
-    const drugLink = drugP.pKas[drugP.mostProtonatedCharge - c.ionCharge + (c.kind === 'base' ? 0 : -1)];
-    const each = drugLink === undefined ? [] : protolyte.pKas.map((x) => (c.kind === 'base' ? drugLink - x : x - drugLink));
-    if (verdict) {
-      reasons.push({ kind: verdict.band === 'cocrystal' ? 'drops' : verdict.band === 'salt' ? 'keeps' : 'watch', criterion: 'saltFormation', text: verdict.reason });
-      if (!verdict.meetsStableSaltRule) {
-        reasons.push({ kind: 'watch', criterion: 'saltFormation', text: `ΔpKa below the common-practice minimum of ${settings.deltaPkaBands.stableSaltMin} for a stable salt` });
-      }
-      if (verdict.band === 'cocrystal') flags.push({ id: 'cocrystal-risk', text: `ΔpKa ${dpKa!.toFixed(1)}: a cocrystal is more likely than a salt`, rule: 'Cruz-Cabeza 2012, CrystEngComm 14, 6362: ΔpKa < −1' });
-    } else {
-      reasons.push({ kind: 'note', criterion: 'saltFormation', text: 'ΔpKa rule not applicable (no transferable proton on one side, e.g. a quaternary ion)' });
-    }
-
-    // Mass cost.
-    const f = activeFraction({
-      freeFormMolarMassGPerMol: freeM,
-      drugIonMolarMassGPerMol: input.drugIon.molarMassGPerMol,
-      counterIonMolarMassGPerMol: st.ionMolarMassGPerMol ?? cand.counterIon.molarMassGPerMol,
-      drugPerSalt: st.drugPerSalt,
-      counterIonPerSalt: st.counterIonPerSalt,
-      hydrateWater: cand.hydrateWater ?? 0,
-    });
-    const massPerDose = dose === null ? null : saltMassPerDoseMg(dose, f);
-    if (f < 0.7) reasons.push({ kind: 'watch', criterion: 'massCost', text: `heavy counter-ion: active fraction ${(f * 100).toFixed(0)} %${massPerDose ? `, ${fmt(massPerDose)} mg of salt per dose` : ''}` });
-
-    // K_sp.
     let log10Ksp: Estimate;
     let kspOrigin: 'measured' | 'estimated';
     let saltSigma: number;
     let anchored: boolean;
+    const reasons: Reason[] = [];
+    const flags: ScreenFlag[] = [];
     const ms = measured?.solubility ?? null;
     if (ms) {
       const logK =
@@ -427,6 +399,80 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
       if (dHOrigin?.startsWith('measured')) reasons.push({ kind: 'measured', criterion: 'solubility', text: `ΔH_sol ${dHOrigin} used in place of the thermochemistry estimate` });
     }
 
+    return { log10Ksp, kspOrigin, saltSigma, anchored, reasons, flags };
+  }
+
+  const ksps = new Map<string, KspChoice>();
+  for (const p of prepared) if (!('error' in p)) {
+    try {
+      ksps.set(p.cand.id, kspOf(p));
+    } catch {
+      /* the row reports the error when it recomputes */
+    }
+  }
+  // For a base, gastric chloride can turn any salt into the hydrochloride when that is less soluble
+  // (Serajuddin 2007, Adv. Drug Deliv. Rev. 59, 603, on the common-ion effect in gastric fluid).
+  // Checked when a 1:1 hydrochloride is among the candidates, with its own (measured or estimated) K_sp.
+  const hcl = c.kind === 'base' && c.ionCharge === 1
+    ? prepared.find((p): p is Prepared => !('error' in p) && p.cand.counterIon.id === 'chloride' && p.cand.stoichiometry.ionCharge === -1 && ksps.has(p.cand.id))
+    : undefined;
+  const hclSalt: ProfileSalt | null = hcl
+    ? { counterIon: hcl.protolyte, counterIonCharge: -1, drugPerSalt: hcl.cand.stoichiometry.drugPerSalt, counterIonPerSalt: hcl.cand.stoichiometry.counterIonPerSalt, log10Ksp: ksps.get(hcl.cand.id)!.log10Ksp.value }
+    : null;
+
+  const rows: ScreenRow[] = prepared.map((p) => {
+    const cand = p.cand;
+    const st = cand.stoichiometry;
+    const label = st.label ? st.label : `${cand.counterIon.name.toLowerCase()} (${st.drugPerSalt}:${st.counterIonPerSalt})`;
+    if ('error' in p) return errorRow(cand, label, p.error);
+    try {
+      return candidateRow(p, label);
+    } catch (err) {
+      return errorRow(cand, label, err instanceof Error ? err.message : String(err));
+    }
+  });
+
+  function candidateRow(p: Prepared, label: string): ScreenRow {
+    const { cand, protolyte, saltM, measured } = p;
+    const st = cand.stoichiometry;
+    /** The salt's trade name without its ratio, e.g. 'hydrochloride', for the reasons in words. */
+    const name = label.replace(/\s*\([^)]*\)\s*$/, '') || cand.counterIon.name.toLowerCase();
+    const reasons: Reason[] = [];
+    const flags: ScreenFlag[] = [];
+
+    // Salt formation.
+    const dpKa = saltDeltaPka(drugP, c.ionCharge, protolyte, st.ionCharge);
+    const verdict = dpKa === null ? null : saltFormationVerdict(dpKa, settings.deltaPkaBands);
+    const drugLink = drugP.pKas[drugP.mostProtonatedCharge - c.ionCharge + (c.kind === 'base' ? 0 : -1)];
+    const each = drugLink === undefined ? [] : protolyte.pKas.map((x) => (c.kind === 'base' ? drugLink - x : x - drugLink));
+    if (verdict) {
+      reasons.push({ kind: verdict.band === 'cocrystal' ? 'drops' : verdict.band === 'salt' ? 'keeps' : 'watch', criterion: 'saltFormation', text: verdict.reason });
+      if (!verdict.meetsStableSaltRule) {
+        reasons.push({ kind: 'watch', criterion: 'saltFormation', text: `ΔpKa below the common-practice minimum of ${settings.deltaPkaBands.stableSaltMin} for a stable salt` });
+      }
+      if (verdict.band === 'cocrystal') flags.push({ id: 'cocrystal-risk', text: `ΔpKa ${dpKa!.toFixed(1)}: a cocrystal is more likely than a salt`, rule: 'Cruz-Cabeza 2012, CrystEngComm 14, 6362: ΔpKa < −1' });
+    } else {
+      reasons.push({ kind: 'note', criterion: 'saltFormation', text: 'ΔpKa rule not applicable (no transferable proton on one side, e.g. a quaternary ion)' });
+    }
+
+    // Mass cost.
+    const f = activeFraction({
+      freeFormMolarMassGPerMol: freeM,
+      drugIonMolarMassGPerMol: input.drugIon.molarMassGPerMol,
+      counterIonMolarMassGPerMol: st.ionMolarMassGPerMol ?? cand.counterIon.molarMassGPerMol,
+      drugPerSalt: st.drugPerSalt,
+      counterIonPerSalt: st.counterIonPerSalt,
+      hydrateWater: cand.hydrateWater ?? 0,
+    });
+    const massPerDose = dose === null ? null : saltMassPerDoseMg(dose, f);
+    if (f < 0.7) reasons.push({ kind: 'watch', criterion: 'massCost', text: `heavy counter-ion: active fraction ${(f * 100).toFixed(0)} %${massPerDose ? `, ${fmt(massPerDose)} mg of salt per dose` : ''}` });
+
+    // K_sp (computed once per candidate before the rows, see kspOf).
+    const k = ksps.get(cand.id) ?? kspOf(p);
+    const { log10Ksp, kspOrigin, saltSigma, anchored } = k;
+    reasons.push(...k.reasons);
+    flags.push(...k.flags);
+
     // Profile and pH_max.
     const salt: ProfileSalt = {
       counterIon: protolyte,
@@ -459,13 +505,29 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
       const commonIonM = m.ions[cand.counterIon.id] ?? 0;
       const mActivity: ProfileOptions['activity'] = activity?.model === 'davies' ? { ...activity, backgroundIonicStrengthM: m.ionicStrengthM } : activity;
       const pt = solubilityAtPh(drug, logS0.value, salt, m.pH, { activity: mActivity, commonIonM });
-      const mg = toMg(pt.solubilityM);
-      return { id: m.id, label: m.label, pH: m.pH, commonIonM, solubilityMgPerMl: mg, doseNumber: dose === null ? null : doseNumber(dose, mg), solid: pt.solid };
+      let solM = pt.solubilityM;
+      let convertsTo: string | null = null;
+      const chlorideM = m.ions.chloride ?? 0;
+      if (hclSalt && hcl && hcl.cand.id !== cand.id && cand.counterIon.id !== 'chloride' && chlorideM > 0) {
+        const h = solubilityAtPh(drug, logS0.value, hclSalt, m.pH, { activity: mActivity, commonIonM: chlorideM });
+        if (h.solid === 'salt' && h.solubilityM < solM) {
+          solM = h.solubilityM;
+          convertsTo = hcl.cand.stoichiometry.label ?? 'hydrochloride';
+        }
+      }
+      const mg = toMg(solM);
+      return { id: m.id, label: m.label, pH: m.pH, commonIonM, solubilityMgPerMl: mg, doseNumber: dose === null ? null : doseNumber(dose, mg), solid: convertsTo ? 'salt' : pt.solid, convertsTo };
     });
     const gastric = mediaResults[0] ?? null;
     if (gastric && gastric.doseNumber !== null) {
       const ci = gastric.commonIonM > 0 ? ` (common ion: ${gastric.commonIonM.toFixed(3)} M ${cand.counterIon.id})` : '';
-      if (gastric.doseNumber > 1) {
+      if (gastric.convertsTo) {
+        reasons.push({
+          kind: gastric.doseNumber > 1 ? 'drops' : 'watch',
+          criterion: 'gastric',
+          text: `${gastric.doseNumber > 1 ? 'drops' : 'watch'}: in gastric chloride ${name} can convert to the less soluble ${gastric.convertsTo.replace(/\s*\([^)]*\)\s*$/, '')} (D₀ ${fmt(gastric.doseNumber)})`,
+        });
+      } else if (gastric.doseNumber > 1) {
         reasons.push({ kind: 'drops', criterion: 'gastric', text: `drops: ${name}'s solubility in gastric medium${ci} falls below the dose (D₀ ${fmt(gastric.doseNumber)})` });
       } else if (gastric.commonIonM > 0) {
         reasons.push({ kind: 'keeps', criterion: 'gastric', text: `keeps: dose dissolves in gastric medium despite the common ion${ci}` });
@@ -556,7 +618,9 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
       `temperature ${(T - 273.15).toFixed(0)} °C for the estimates; pKa values at 25 °C`,
       'K_sp without a measured salt solubility is an estimate (salt-limited solubility ~10² × S₀, shifted by relative ΔH_sol); treat its pH_max and dose numbers as screening figures',
       'dose numbers use the equilibrium solubility of the less soluble solid at each pH, in free-form equivalents, 250 mL (ICH M9); transient supersaturation from a dissolving salt is not modelled',
-      'in gastric medium only the candidate’s own counter-ion is counted as a common ion; conversion of other salts to the hydrochloride is not modelled',
+      hclSalt
+        ? 'in gastric medium a base’s salts are also checked against conversion to the hydrochloride (with its own K_sp and the medium’s chloride)'
+        : 'in gastric medium only the candidate’s own counter-ion is counted as a common ion (no 1:1 hydrochloride in the screen to check conversion against)',
     ],
     cautions: SCREENING_CAUTIONS,
   };

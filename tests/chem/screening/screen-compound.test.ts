@@ -93,6 +93,16 @@ describe('screenCompound', () => {
     expect(none.rows[0]!.gastric!.solubilityMgPerMl).toBeCloseTo(noChloride.solubilityMgPerMl, 9);
   });
 
+  it('in gastric chloride a more soluble salt of a base is limited by the hydrochloride (conversion; Serajuddin 2007)', () => {
+    const sol = (v: number) => [{ kind: 'solubility' as const, value: v, unit: 'mg/mL', ph: null, temperatureK: 310.15, medium: 'water', text: '' }];
+    const r = screenCompound({ compound, drugIon: di, candidates: [candidate('chloride', { measurements: sol(1) }), candidate('mesylate', { measurements: sol(100) })] });
+    const [hcl, mes] = r.rows;
+    expect(mes!.gastric!.convertsTo).toMatch(/hydrochloride/);
+    expect(mes!.gastric!.solubilityMgPerMl).toBeCloseTo(hcl!.gastric!.solubilityMgPerMl, 9);
+    expect(hcl!.gastric!.convertsTo).toBeNull();
+    expect(mes!.reasons.some((x) => x.criterion === 'gastric' && /convert to the less soluble hydrochloride/.test(x.text))).toBe(true);
+  });
+
   it('measured mass gain at 80 % RH sets the Ph. Eur. class and says it was measured', () => {
     const m = { kind: 'mass-gain-80rh' as const, value: 3.1, unit: '%', ph: null, temperatureK: 298.15, medium: '', text: '' };
     const row = screenCompound({ compound, drugIon: di, candidates: [candidate('mesylate', { measurements: [m] })] }).rows[0]!;
