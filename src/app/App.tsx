@@ -1,16 +1,23 @@
-import { useEffect, useState } from 'react';
+import { lazy, useEffect, useState } from 'react';
 import { AREAS, areaFromHash, useNavigationStore, type AreaId } from '@/stores/navigation-store';
 import { CautionNote, CautionsDialog } from '@/components/Cautions';
 import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
 import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
-import { BenchWorkspace } from '@/features/bench/components/BenchWorkspace';
-import { ModelCheckArea } from '@/features/confidence/components/ModelCheckArea';
+import { AreaBoundary } from '@/app/AreaBoundary';
 import { CounterIonsPanel } from '@/features/counter-ions/components/CounterIonsPanel';
 import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
+import { OpenSheetButton } from '@/features/sheet/components/OpenSheetButton';
+import { SheetOverlay } from '@/features/sheet/components/SheetOverlay';
 import type { ProjectRecord } from '@/persistence/records';
+
+// Areas with charts and heavy computation load on demand, so the first screen does not wait for them.
+const RankingArea = lazy(() => import('@/features/ranking/components/RankingArea').then((m) => ({ default: m.RankingArea })));
+const EnergeticsArea = lazy(() => import('@/features/energetics/components/EnergeticsArea').then((m) => ({ default: m.EnergeticsArea })));
+const BenchWorkspace = lazy(() => import('@/features/bench/components/BenchWorkspace').then((m) => ({ default: m.BenchWorkspace })));
+const ModelCheckArea = lazy(() => import('@/features/confidence/components/ModelCheckArea').then((m) => ({ default: m.ModelCheckArea })));
 
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
   switch (area) {
@@ -22,9 +29,29 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
         </>
       );
     case 'bench':
-      return <BenchWorkspace project={project} />;
+      return (
+        <AreaBoundary>
+          <BenchWorkspace project={project} />
+        </AreaBoundary>
+      );
     case 'confidence':
-      return <ModelCheckArea />;
+      return (
+        <AreaBoundary>
+          <ModelCheckArea />
+        </AreaBoundary>
+      );
+    case 'ranking':
+      return (
+        <AreaBoundary>
+          <RankingArea project={project} />
+        </AreaBoundary>
+      );
+    case 'energetics':
+      return (
+        <AreaBoundary>
+          <EnergeticsArea project={project} />
+        </AreaBoundary>
+      );
     case 'library':
       return <CounterIonsPanel project={project} />;
     default:
@@ -70,6 +97,7 @@ export function App() {
           ) : null}
         </div>
         <OfflineStatus />
+        {project ? <OpenSheetButton className="sheet-open-button" /> : null}
         <button type="button" className="caution-button" onClick={() => setCautionsOpen(true)}>
           Cautions
         </button>
@@ -108,6 +136,7 @@ export function App() {
         <span className="muted">Saltsmith {__APP_VERSION__} · data stays in this browser</span>
       </footer>
       <CautionsDialog open={cautionsOpen} onClose={() => setCautionsOpen(false)} />
+      <SheetOverlay project={project} />
     </div>
   );
 }

@@ -23,6 +23,15 @@ export interface SolubilitySeries {
   estimated?: boolean;
 }
 
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+/** Tick label of a log axis: plain numbers from 0.001 to 1000, powers of ten beyond. */
+export function logTick(v: number): string {
+  const k = Math.round(Math.log10(v));
+  if (k >= -3 && k <= 3) return String(Number(v.toPrecision(2)));
+  return `10${String(k).split('').map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+}
+
 /** ICH M9 (2019) pH range for the solubility class: 1.2–6.8. */
 const BAND: [number, number] = [1.2, 6.8];
 
@@ -46,8 +55,11 @@ export function PhSolubilityChart({
 }) {
   const all = series.flatMap((s) => s.points.map((p) => p.solubilityMgPerMl)).filter((x) => x > 0 && Number.isFinite(x));
   if (doseLineMgPerMl && doseLineMgPerMl > 0) all.push(doseLineMgPerMl);
+  const salts = series.filter((s) => s.kind === 'salt').flatMap((s) => s.points.map((p) => p.solubilityMgPerMl)).filter((x) => x > 0 && Number.isFinite(x));
   const lo = all.length ? 10 ** Math.floor(Math.log10(Math.min(...all))) : 1e-3;
-  const hi = all.length ? 10 ** Math.ceil(Math.log10(Math.max(...all))) : 1e3;
+  // The free form's curve climbs without bound at low pH (for a base); keep the axis about the salts.
+  const top = Math.max(...(salts.length ? salts : all), doseLineMgPerMl ?? 0) * 1000;
+  const hi = all.length ? 10 ** Math.ceil(Math.log10(Math.min(Math.max(...all), top))) : 1e3;
   const ticks: number[] = [];
   for (let t = lo; t <= hi * 1.0001; t *= 10) ticks.push(t);
   const summary = series.map((s) => {
@@ -75,7 +87,7 @@ export function PhSolubilityChart({
             domain={[lo, hi]}
             ticks={ticks}
             allowDataOverflow
-            tickFormatter={(v: number) => sig(v, 2)}
+            tickFormatter={logTick}
             label={{ value: 'solubility, mg/mL (log)', angle: -90, position: 'insideLeft', offset: 2, dy: 70 }}
             width={70}
           />
@@ -96,8 +108,7 @@ export function PhSolubilityChart({
                 x={s.phMax}
                 stroke={SERIES_COLOURS[i % SERIES_COLOURS.length]}
                 strokeDasharray="2 3"
-                label={{ value: 'pH_max', position: 'top', fontSize: 10, fill: SERIES_COLOURS[i % SERIES_COLOURS.length] }}
-              />
+                />
             ) : null,
           )}
           {series.map((s, i) => (
@@ -117,7 +128,7 @@ export function PhSolubilityChart({
       </div>
       <figcaption>
         {title}. Shaded: pH 1.2–6.8 (ICH M9); red dashed line: highest dose dissolved in 250 mL — a curve below it
-        means dose number above 1 at that pH.
+        means dose number above 1 at that pH; thin dotted vertical lines: each salt’s pH_max, in its curve’s colour.
         <ul className="chart-summary">
           {summary.map((line) => (
             <li key={line}>{line}</li>

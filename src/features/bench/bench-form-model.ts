@@ -23,7 +23,7 @@ export const MEASUREMENT_KINDS: Record<
   MeasurementKind,
   { label: string; unit: string; valueLabel?: string; min?: number; max?: number; conditions: ('medium' | 'ph' | 'temperatureC')[] }
 > = {
-  solubility: { label: 'Solubility', unit: 'mg/mL', valueLabel: 'Solubility', min: 0, max: 1000, conditions: ['medium', 'ph', 'temperatureC'] },
+  solubility: { label: 'Solubility', unit: 'mg/mL', valueLabel: 'Solubility (as salt)', min: 0, max: 1000, conditions: ['medium', 'ph', 'temperatureC'] },
   'melting-point': { label: 'Melting point', unit: '°C', valueLabel: 'Melting point (onset)', min: -50, max: 500, conditions: [] },
   'solution-enthalpy': {
     label: 'Enthalpy of solution (calorimetry)',
@@ -98,7 +98,7 @@ export function measurementFromDraft(
 
   let value: number | null = null;
   if (spec.valueLabel) {
-    value = number('value', spec.valueLabel, spec.unit, spec.min ?? -1e6, spec.max ?? 1e6, true);
+    value = number('value', spec.valueLabel.replace(/ \(.*\)$/, ''), spec.unit, spec.min ?? -1e6, spec.max ?? 1e6, true);
     if (draft.kind === 'solubility' && value === 0) errors.value = 'Solubility must be greater than zero';
   }
   const ph = spec.conditions.includes('ph') ? number('ph', 'pH', '', 0, 14, draft.kind === 'solubility') : null;

@@ -42,7 +42,7 @@ describe('Projects area', () => {
   it('shows field messages in the form and stores nothing invalid', async () => {
     const user = userEvent.setup();
     render(<App />);
-    await screen.findByRole('heading', { name: /Demorazine/ });
+    await screen.findByRole('heading', { name: /Demorazine/ }, { timeout: 8000 });
     await user.click(screen.getByRole('button', { name: 'Create project' }));
     expect(screen.getByText('Give the project a name')).toBeInTheDocument();
     expect(screen.getByText(/Give a SMILES string or a molecular formula/)).toBeInTheDocument();
@@ -52,7 +52,7 @@ describe('Projects area', () => {
   it('creates, renames, duplicates, archives and deletes with undo', async () => {
     const user = userEvent.setup();
     render(<App />);
-    await screen.findByRole('heading', { name: /Demorazine/ });
+    await screen.findByRole('heading', { name: /Demorazine/ }, { timeout: 8000 });
     await user.type(screen.getByLabelText('Project name'), 'Amine 1');
     await user.type(screen.getByLabelText('Structure (SMILES)'), 'CCN(CC)CC');
     await user.type(screen.getByLabelText('pKa of the conjugate acid'), '10.7');

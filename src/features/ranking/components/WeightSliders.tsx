@@ -44,9 +44,11 @@ export function WeightSliders({
           </div>
         );
       })}
-      <button type="button" onClick={onReset}>
-        Default weights
-      </button>
+      <div className="button-row">
+        <button type="button" onClick={onReset}>
+          Default weights
+        </button>
+      </div>
     </fieldset>
   );
 }

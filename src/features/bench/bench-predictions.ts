@@ -1,0 +1,113 @@
+import { hygroscopicityClass, latticeFromSolutionEnthalpy, vantHoffFit, type Estimate, type VanTHoffFit } from '@/chem';
+import type { ProjectScreening } from '@/features/screening-data/compute-screening';
+import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
+import type { MeasurementRecord } from '@/persistence/records';
+import { CELSIUS_ZERO_K } from './bench-form-model';
+
+/** A prediction set beside a measurement, in words, with its basis. */
+export interface Prediction {
+  text: string;
+  /** 'estimate' for a model value; 'classification' when the measurement is classed against a standard. */
+  kind: 'estimate' | 'classification' | 'none';
+  basis: string;
+}
+
+const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 1 ? x.toPrecision(3) : x.toPrecision(2));
+
+/**
+ * What the workbench predicts for a measurement of a candidate: the salt's solubility at the
+ * measured pH (as salt, from the screen's profile and K_sp, with its ±1σ range), its ΔH_sol from the
+ * thermochemical cycle, the Ph. Eur. 5.11 class of a mass gain. No model exists for melting points
+ * or crystallinity here, and the text says so.
+ */
+export function predictionFor(m: MeasurementRecord, data: ProjectScreening | undefined): Prediction {
+  if (!data) return { text: 'screen not available', kind: 'none', basis: '' };
+  const row = data.screen.rows.find((r) => r.id === m.candidateId);
+  if (!row || row.error) return { text: row?.error ? `not screened: ${row.error}` : 'not screened', kind: 'none', basis: '' };
+  switch (m.kind) {
+    case 'solubility': {
+      if (m.ph === null) return { text: 'record the equilibrium pH to compare with the pH profile', kind: 'none', basis: '' };
+      const nearest = row.profile.reduce((a, b) => (Math.abs(b.pH - m.ph!) < Math.abs(a.pH - m.ph!) ? b : a), row.profile[0]!);
+      if (!nearest || Math.abs(nearest.pH - m.ph) > 0.06) return { text: `pH ${m.ph} is outside the computed range`, kind: 'none', basis: '' };
+      // The profile is in free-form equivalents; the bench records mass of salt per mL.
+      const toSalt = row.saltMolarMassGPerMol / (row.drugPerSalt * data.drugIon.freeFormMolarMassGPerMol);
+      const s = nearest.solubilityMgPerMl * toSalt;
+      const u = uncertaintiesOf(row, data.screen.robustnessShared);
+      const sigma = nearest.solid === 'salt' ? u.saltLogSigma : u.freeLogSigma;
+      const tNote =
+        m.temperatureK !== null && Math.abs(m.temperatureK - data.settings.temperatureK) > 2
+          ? `; predicted at ${(data.settings.temperatureK - CELSIUS_ZERO_K).toFixed(0)} °C`
+          : '';
+      return {
+        text: `≈ ${fmt(s)} mg/mL as salt at pH ${nearest.pH.toFixed(1)} (±1σ ${fmt(s / 10 ** sigma)}–${fmt(s * 10 ** sigma)}), ${nearest.solid === 'salt' ? 'salt' : 'free form'} limits${tNote}`,
+        kind: 'estimate',
+        basis: row.kspOrigin === 'measured' ? 'K_sp from a measured solubility of this salt (this one or another)' : 'estimated K_sp',
+      };
+    }
+    case 'solution-enthalpy': {
+      const t = data.energetics[m.candidateId]?.thermo;
+      if (!t) return { text: `no cycle estimate (${data.energetics[m.candidateId]?.reason ?? 'not estimated'})`, kind: 'none', basis: '' };
+      return {
+        text: `ΔH_sol ≈ ${t.solutionEnthalpyKJ.value.toFixed(0).replace('-', '−')} ± ${t.solutionEnthalpyKJ.uncertainty.toFixed(0)} kJ/mol (infinite dilution, 25 °C)`,
+        kind: 'estimate',
+        basis: `Hess cycle, ${t.methodChosen} lattice`,
+      };
+    }
+    case 'mass-gain-80rh': {
+      if (m.value === null) return { text: '—', kind: 'none', basis: '' };
+      const liquefied = /deliquesc|liquef/i.test(m.text);
+      const cls = hygroscopicityClass(m.value, liquefied);
+      const note = data.counterIons[m.candidateId]?.tradeNote;
+      return { text: `Ph. Eur. 5.11 class: ${cls}${note ? `. Library note: ${note}` : ''}`, kind: 'classification', basis: 'European Pharmacopoeia 5.11' };
+    }
+    case 'melting-point':
+      return { text: 'no melting-point model in the workbench', kind: 'none', basis: '' };
+    default:
+      return { text: '—', kind: 'none', basis: '' };
+  }
+}
+
+/** The lattice enthalpy backed out of the latest calorimetric ΔH_sol of a candidate (THERMO's cycle solver). */
+export function backedOutLattice(
+  candidateId: string,
+  measurements: readonly MeasurementRecord[],
+  data: ProjectScreening | undefined,
+): { measuredKJ: number; lattice: Estimate; estimate: Estimate } | { error: string } | null {
+  const last = [...measurements].reverse().find((m) => m.candidateId === candidateId && m.kind === 'solution-enthalpy' && m.value !== null);
+  if (!last) return null;
+  const e = data?.energetics[candidateId];
+  if (!e?.thermo) return { error: `no hydration estimates for this salt (${e?.reason ?? 'not screened'})` };
+  try {
+    const lattice = latticeFromSolutionEnthalpy({
+      solutionEnthalpyKJ: last.value!,
+      // Calorimetric repeatability taken as 2 kJ/mol (our assumption, as in the screening core).
+      solutionUncertaintyKJ: 2,
+      cationHydration: e.thermo.cationHydrationKJ,
+      anionHydration: e.thermo.anionHydrationKJ,
+      cationsPerFormula: e.cationsPerFormula,
+      anionsPerFormula: e.anionsPerFormula,
+    });
+    return { measuredKJ: last.value!, lattice, estimate: e.thermo.latticeEnthalpyKJ };
+  } catch (err) {
+    return { error: err instanceof Error ? err.message : String(err) };
+  }
+}
+
+/** The van 't Hoff fit of a candidate's measured solubilities (same medium), or why there is none. */
+export function vantHoffOf(
+  candidateId: string,
+  measurements: readonly MeasurementRecord[],
+): { points: { temperatureK: number; solubility: number }[]; fit: VanTHoffFit | null; reason: string | null; medium: string } | null {
+  const sol = measurements.filter((m) => m.candidateId === candidateId && m.kind === 'solubility' && m.value !== null && m.value > 0 && m.temperatureK !== null);
+  if (sol.length === 0) return null;
+  // Use the medium with the most temperatures.
+  const byMedium = new Map<string, MeasurementRecord[]>();
+  for (const m of sol) byMedium.set(m.medium, [...(byMedium.get(m.medium) ?? []), m]);
+  const [medium, list] = [...byMedium].sort((a, b) => b[1].length - a[1].length)[0]!;
+  const points = list.map((m) => ({ temperatureK: m.temperatureK!, solubility: m.value! }));
+  try {
+    return { points, fit: vantHoffFit(points), reason: null, medium };
+  } catch (err) {
+    return { points, fit: null, reason: err instanceof Error ? err.message.replace(/^[^:]*: /, '') : String(err), medium };
+  }
+}

@@ -1,0 +1,33 @@
+import type { Estimate, SaltThermoResult } from '@/chem';
+import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
+import type { CandidateEnergetics } from '@/features/screening-data/compute-screening';
+
+/**
+ * The energy picture's numbers for one salt: hydration of all p cations and q anions of a formula
+ * unit (identical ions' errors taken as fully correlated, so σ scales with p and q), and ΔH_sol as
+ * the engine carried it through the cycle.
+ */
+export function energyCycleOf(e: CandidateEnergetics & { thermo: SaltThermoResult }, saltLabel: string): EnergyCycle {
+  const t = e.thermo;
+  return {
+    saltLabel,
+    cationLabel: e.cationLabel,
+    anionLabel: e.anionLabel,
+    cationsPerFormula: e.cationsPerFormula,
+    anionsPerFormula: e.anionsPerFormula,
+    lattice: { value: t.latticeEnthalpyKJ.value, uncertainty: t.latticeEnthalpyKJ.uncertainty },
+    cationHydration: { value: e.cationsPerFormula * t.cationHydrationKJ.value, uncertainty: e.cationsPerFormula * t.cationHydrationKJ.uncertainty },
+    anionHydration: { value: e.anionsPerFormula * t.anionHydrationKJ.value, uncertainty: e.anionsPerFormula * t.anionHydrationKJ.uncertainty },
+    solution: { value: t.solutionEnthalpyKJ.value, uncertainty: t.solutionEnthalpyKJ.uncertainty },
+  };
+}
+
+/** How small ΔH_sol is next to the two terms it is the difference of (the reason its error is large). */
+export function cancellationNote(cycle: EnergyCycle): string {
+  const hyd = cycle.cationHydration.value + cycle.anionHydration.value;
+  const ratio = Math.abs(cycle.solution.value) / cycle.lattice.value;
+  return `ΔH_sol is the difference of ΔH_L ≈ ${cycle.lattice.value.toFixed(0)} kJ/mol and Σ hydration ≈ ${hyd.toFixed(0)} kJ/mol: |ΔH_sol| is ${(ratio * 100).toFixed(0)} % of ΔH_L, so a 3 % error in each term alone moves it by about ${(0.03 * Math.hypot(cycle.lattice.value, hyd)).toFixed(0)} kJ/mol. Compare candidates of one drug ion with each other: part of the drug ion’s error is common to all of them.`;
+}
+
+/** Sources behind an estimate, de-duplicated. */
+export const sourcesOf = (...es: (Estimate | undefined)[]) => [...new Set(es.flatMap((e) => e?.sources ?? []))];

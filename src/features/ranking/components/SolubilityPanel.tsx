@@ -1,0 +1,62 @@
+import { PhSolubilityChart, type SolubilitySeries } from '@/components/charts/PhSolubilityChart';
+import type { ProjectScreening } from '@/features/screening-data/compute-screening';
+import { useRankingViewStore } from '@/stores/ranking-view-store';
+import type { DisplayRow } from '../ranking-rows';
+
+/** ICH M9 (2019): the highest dose must dissolve in 250 mL. */
+const VOLUME_ML = 250;
+
+/** pH–solubility curves of the free form and the chosen salts, with the choice of salts beside it. */
+export function SolubilityPanel({ data, rows, doseMg }: { data: ProjectScreening; rows: DisplayRow[]; doseMg: number | null }) {
+  const chartIds = useRankingViewStore((s) => s.chartIds);
+  const toggle = useRankingViewStore((s) => s.toggleChart);
+  const ranked = rows.filter((r) => r.rank !== null).sort((a, b) => a.rank! - b.rank!);
+  const top = ranked.slice(0, 3).map((r) => r.id);
+  const chosen = chartIds ?? top;
+  const series: SolubilitySeries[] = [
+    {
+      id: 'free-form',
+      label: `free ${data.screen.drugKind}`,
+      kind: 'free-form',
+      points: data.screen.freeForm.profile,
+      estimated: data.screen.freeForm.intrinsicOrigin !== 'measured',
+    },
+    ...ranked
+      .filter((r) => chosen.includes(r.id))
+      .map((r) => ({
+        id: r.id,
+        label: r.label,
+        kind: 'salt' as const,
+        points: r.row.profile,
+        phMax: r.row.phMax,
+        estimated: r.row.kspOrigin !== 'measured',
+      })),
+  ];
+  return (
+    <section className="panel" aria-labelledby="solubility-title">
+      <h2 id="solubility-title">Solubility against pH</h2>
+      <div className="solubility-layout">
+        <PhSolubilityChart
+          series={series}
+          doseLineMgPerMl={doseMg ? doseMg / VOLUME_ML : null}
+          title={`Solubility (free-form equivalents) of ${data.screen.compoundName} and its salts`}
+        />
+        <fieldset className="chart-picks">
+          <legend>Salts on the chart</legend>
+          {ranked.map((r) => (
+            <label key={r.id} className="inline-check">
+              <input type="checkbox" checked={chosen.includes(r.id)} onChange={() => toggle(r.id, top)} />
+              {r.rank}. {r.label}
+            </label>
+          ))}
+        </fieldset>
+      </div>
+      <p className="muted">
+        Free form: {data.screen.freeForm.intrinsicOrigin === 'measured' ? 'measured S₀' : 'S₀ from the General Solubility Equation (estimate)'}, log₁₀ S₀ ={' '}
+        {data.screen.freeForm.log10IntrinsicM.value.toFixed(2)} ± {data.screen.freeForm.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L). Salt curves
+        without a measured salt solubility rest on an estimated K_sp (±1σ about one decade) — read their position relative to each other, not as
+        predictions of a measured value.
+      </p>
+    </section>
+  );
+}

@@ -1,0 +1,52 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { screeningWeightsSchema, type ScreeningWeights } from '@/chem';
+import { projectsRepo } from '@/persistence/projects-repo';
+import type { ProjectRecord } from '@/persistence/records';
+import { SCREENING_SETTINGS_KEY, screeningBlockOf, screeningSettingsOf } from '@/features/screening-data/screening-settings';
+
+/** Save this long after the last slider movement, ms. */
+const SAVE_DELAY_MS = 400;
+
+/**
+ * The ranking weights: local while a slider moves (the ranking follows at once), saved with the
+ * project shortly after it stops. A change from another tab is taken over when nothing is pending.
+ */
+export function useWeights(project: ProjectRecord): {
+  weights: ScreeningWeights;
+  setWeights: (w: ScreeningWeights) => void;
+  saving: boolean;
+} {
+  const stored = screeningSettingsOf(project).weights;
+  const storedKey = JSON.stringify(stored);
+  const [weights, setLocal] = useState<ScreeningWeights>(stored);
+  const [saving, setSaving] = useState(false);
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const projectRef = useRef(project);
+  projectRef.current = project;
+
+  useEffect(() => {
+    if (!timer.current) setLocal(JSON.parse(storedKey) as ScreeningWeights);
+  }, [storedKey, project.id]);
+
+  useEffect(
+    () => () => {
+      if (timer.current) clearTimeout(timer.current);
+    },
+    [],
+  );
+
+  const setWeights = useCallback((w: ScreeningWeights) => {
+    const valid = screeningWeightsSchema.parse(w);
+    setLocal(valid);
+    setSaving(true);
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(() => {
+      timer.current = null;
+      const p = projectRef.current;
+      const block = screeningBlockOf({ ...screeningSettingsOf(p), weights: valid });
+      void projectsRepo.updateExtraSettings(p.id, SCREENING_SETTINGS_KEY, block).finally(() => setSaving(false));
+    }, SAVE_DELAY_MS);
+  }, []);
+
+  return { weights, setWeights, saving };
+}

@@ -1,0 +1,134 @@
+import type { RankedRow, ScreenRow } from '@/chem';
+import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
+import type { ProjectScreening } from '@/features/screening-data/compute-screening';
+import { candidateLabel } from '@/features/screening-data/candidate-label';
+import type { RankingSortKey } from '@/stores/ranking-view-store';
+
+/** A number as the ranking shows it: value, 1σ (or a ±1σ range), and whether a measurement backs it. */
+export interface ShownNumber {
+  value: number;
+  /** Symmetric 1σ in the same unit, when additive. */
+  sigma?: number;
+  /** A ±1σ range for quantities whose error is multiplicative (dose numbers). */
+  range?: [number, number];
+  origin: 'estimated' | 'measured';
+  /** Why the origin is what it is (e.g. "K_sp from the measured solubility"). */
+  basis: string;
+}
+
+export interface DisplayRow {
+  id: string;
+  label: string;
+  ionName: string;
+  rank: number | null;
+  score: number | null;
+  contributions: RankedRow['contributions'];
+  row: ScreenRow;
+  deltaPka: number | null;
+  phMax: ShownNumber | null;
+  worstDose: (ShownNumber & { pH: number; solid: string }) | null;
+  gastricDose: (ShownNumber & { solid: string }) | null;
+  solutionEnthalpy: ShownNumber | null;
+  activeFraction: number;
+  saltMassPerDoseMg: number | null;
+  acceptabilityClass: 1 | 2 | 3 | null;
+}
+
+const doseRange = (d: number, logSigma: number): [number, number] => [d / 10 ** logSigma, d * 10 ** logSigma];
+
+/** Build what the table shows from the screen and the current weighting. */
+export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]): DisplayRow[] {
+  const rows = new Map(data.screen.rows.map((r) => [r.id, r]));
+  const shared = data.screen.robustnessShared;
+  return ranked.flatMap((k) => {
+    const row = rows.get(k.id);
+    if (!row) return [];
+    const ionName = data.ionNames[row.id] ?? row.counterIonName;
+    const label = candidateLabel({ ionId: row.counterIonId, drugPerSalt: row.drugPerSalt, counterIonPerSalt: row.counterIonPerSalt }, ionName);
+    const u = uncertaintiesOf(row, shared);
+    const kspMeasured = row.kspOrigin === 'measured';
+    const kspBasis = kspMeasured ? 'K_sp from the measured salt solubility' : 'K_sp estimated (no measured salt solubility)';
+    const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
+    const energetics = data.energetics[row.id];
+    const measuredDH = row.measured?.solutionEnthalpyKJ ?? null;
+    const vh = row.measured?.vantHoff?.solutionEnthalpyKJ ?? null;
+    const solutionEnthalpy: ShownNumber | null =
+      measuredDH !== null
+        ? { value: measuredDH, origin: 'measured', basis: 'measured by solution calorimetry' }
+        : vh
+          ? { value: vh.value, sigma: vh.uncertainty, origin: 'measured', basis: 'apparent ΔH_sol from the van ’t Hoff fit of measured solubilities' }
+          : energetics?.thermo
+            ? {
+                value: energetics.thermo.solutionEnthalpyKJ.value,
+                sigma: energetics.thermo.solutionEnthalpyKJ.uncertainty,
+                origin: 'estimated',
+                basis: `Hess cycle: ${energetics.thermo.methodChosen} lattice + hydration (${energetics.thermo.methodReason})`,
+              }
+            : null;
+    return [
+      {
+        id: row.id,
+        label,
+        ionName,
+        rank: k.rank,
+        score: k.score,
+        contributions: k.contributions,
+        row,
+        deltaPka: row.deltaPka,
+        phMax: row.phMax === null ? null : { value: row.phMax, sigma: u.phMaxSigma, origin: kspMeasured ? 'measured' : 'estimated', basis: kspBasis },
+        worstDose:
+          row.worst && row.worst.doseNumber !== null
+            ? {
+                value: row.worst.doseNumber,
+                range: doseRange(row.worst.doseNumber, logSigmaFor(row.worst.solid)),
+                origin: row.worst.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+                basis: `${row.worst.solid === 'salt' ? 'salt' : 'free form'} limits at pH ${row.worst.pH}; ${row.worst.solid === 'salt' ? kspBasis : 'free-form solubility from S₀'}`,
+                pH: row.worst.pH,
+                solid: row.worst.solid,
+              }
+            : null,
+        gastricDose:
+          row.gastric && row.gastric.doseNumber !== null
+            ? {
+                value: row.gastric.doseNumber,
+                range: doseRange(row.gastric.doseNumber, logSigmaFor(row.gastric.solid)),
+                origin: row.gastric.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+                basis: `${row.gastric.label}${row.gastric.commonIonM > 0 ? `; common ion ${row.gastric.commonIonM.toFixed(3)} M` : ''}`,
+                solid: row.gastric.solid,
+              }
+            : null,
+        solutionEnthalpy,
+        activeFraction: row.activeFraction,
+        saltMassPerDoseMg: row.saltMassPerDoseMg,
+        acceptabilityClass: data.counterIons[row.id]?.acceptabilityClass ?? null,
+      },
+    ];
+  });
+}
+
+const SORT_VALUE: Record<RankingSortKey, (r: DisplayRow) => number | string | null> = {
+  rank: (r) => r.rank,
+  name: (r) => r.label.toLowerCase(),
+  deltaPka: (r) => r.deltaPka,
+  phMax: (r) => r.phMax?.value ?? null,
+  worstDoseNumber: (r) => r.worstDose?.value ?? null,
+  gastricDoseNumber: (r) => r.gastricDose?.value ?? null,
+  solutionEnthalpy: (r) => r.solutionEnthalpy?.value ?? null,
+  activeFraction: (r) => r.activeFraction,
+};
+
+/** Sort display rows; rows without a value go last whatever the direction. */
+export function sortRows(rows: readonly DisplayRow[], key: RankingSortKey, dir: 'asc' | 'desc'): DisplayRow[] {
+  const get = SORT_VALUE[key];
+  const sign = dir === 'asc' ? 1 : -1;
+  return rows
+    .map((r, i) => ({ r, i, v: get(r) }))
+    .sort((a, b) => {
+      if (a.v === null && b.v === null) return a.i - b.i;
+      if (a.v === null) return 1;
+      if (b.v === null) return -1;
+      const c = typeof a.v === 'string' ? a.v.localeCompare(String(b.v)) : (a.v as number) - (b.v as number);
+      return c * sign || a.i - b.i;
+    })
+    .map((x) => x.r);
+}
