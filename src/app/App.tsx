@@ -11,8 +11,6 @@ import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
 import { OpenSheetButton } from '@/features/sheet/components/OpenSheetButton';
 import { SheetOverlay } from '@/features/sheet/components/SheetOverlay';
-import { OpenSheetButton } from '@/features/sheet/components/OpenSheetButton';
-import { SheetOverlay } from '@/features/sheet/components/SheetOverlay';
 import type { ProjectRecord } from '@/persistence/records';
 
 // Areas with charts and heavy computation load on demand, so the first screen does not wait for them.
@@ -100,7 +98,6 @@ export function App() {
         </div>
         <OfflineStatus />
         {project ? <OpenSheetButton className="sheet-open-button" /> : null}
-        {project ? <OpenSheetButton className="sheet-open-button" /> : null}
         <button type="button" className="caution-button" onClick={() => setCautionsOpen(true)}>
           Cautions
         </button>
@@ -139,7 +136,6 @@ export function App() {
         <span className="muted">Saltsmith {__APP_VERSION__} · data stays in this browser</span>
       </footer>
       <CautionsDialog open={cautionsOpen} onClose={() => setCautionsOpen(false)} />
-      <SheetOverlay project={project} />
       <SheetOverlay project={project} />
     </div>
   );
