@@ -20,3 +20,4 @@ export { latticeFromSolutionEnthalpy } from './models/solution/solution';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
 export { validationReport, kapustinskiiVariants } from './validation/report';
 export { referenceLatticeEnthalpyKJ, referenceSolutionEnthalpyKJ, referenceVolumeNm3 } from './validation/reference';
+export { LATTICE_REFERENCE_SALTS, SOLUTION_REFERENCE_SALTS, type LatticeReferenceSalt } from '../data/thermo-reference';

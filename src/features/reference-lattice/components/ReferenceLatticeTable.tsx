@@ -1,4 +1,4 @@
-import { estimateSaltThermo, getThermoIon, type ThermoIon } from '@/chem';
+import { estimateSaltThermo, getThermoIon, LATTICE_REFERENCE_SALTS, referenceLatticeEnthalpyKJ, type ThermoIon } from '@/chem';
 
 const CATIONS = ['sodium', 'potassium'];
 const ANIONS = ['chloride', 'bromide'];
@@ -20,7 +20,9 @@ export function ReferenceLatticeTable() {
       const cat = ion(c);
       const an = ion(a);
       const r = estimateSaltThermo({ cation: cat, anion: an, cationsPerFormula: 1, anionsPerFormula: 1, method: 'kapustinskii' });
-      return { salt: `${cat.formula ?? cat.label}${an.formula ?? an.label}`, cat, an, e: r.latticeEnthalpyKJ };
+      const refSalt = LATTICE_REFERENCE_SALTS.find((s) => s.cation === c && s.anion === a);
+      const ref = refSalt ? referenceLatticeEnthalpyKJ(refSalt) : undefined;
+      return { salt: `${cat.formula ?? cat.label}${an.formula ?? an.label}`, cat, an, e: r.latticeEnthalpyKJ, ref };
     }),
   );
   const radiusSource = ion('sodium').radiusA?.sources[0] ?? '';
@@ -38,10 +40,11 @@ export function ReferenceLatticeTable() {
             <th scope="col">r₊ (Å)</th>
             <th scope="col">r₋ (Å)</th>
             <th scope="col">ΔH<sub>L</sub> (kJ/mol)</th>
+            <th scope="col">Born–Haber (kJ/mol)</th>
           </tr>
         </thead>
         <tbody>
-          {rows.map(({ salt, cat, an, e }) => (
+          {rows.map(({ salt, cat, an, e, ref }) => (
             <tr key={salt}>
               <th scope="row">{salt}</th>
               <td>{cat.radiusA?.value.toFixed(2)}</td>
@@ -49,13 +52,15 @@ export function ReferenceLatticeTable() {
               <td>
                 {e.value.toFixed(0)} ± {e.uncertainty.toFixed(0)}
               </td>
+              <td>{ref ? ref.value.toFixed(0) : '—'}</td>
             </tr>
           ))}
         </tbody>
       </table>
       <p className="source">
         Radii: {radiusSource}. Method: Kapustinskii 1956 (CRC Handbook form, K = 1214 kJ·Å/mol); uncertainty is
-        the method’s RMS error on the bundled reference salts.
+        the method’s RMS error on the bundled reference salts. Born–Haber: from ΔfH° (Wagman et al. 1982, NBS
+        tables) and ionisation energies / electron affinities (CRC Handbook) — entered from memory.
       </p>
     </section>
   );
