@@ -44,7 +44,7 @@ describe('mass/charge-balance solver: properties (fast-check)', () => {
         const p = phSolubilityProfile(
           { kind: 'base', pKas: [pKa], ionCharge: 1 },
           -20,
-          { counterIon: { pKas: [-6], mostProtonatedCharge: 0 }, counterIonCharge: -1, drugPerSalt: 1, counterIonPerSalt: 1, log10Ksp: logKsp },
+          { counterIon: { pKas: [-10], mostProtonatedCharge: 0 }, counterIonCharge: -1, drugPerSalt: 1, counterIonPerSalt: 1, log10Ksp: logKsp }, // pKa −10: ionised to 1e-10 over pH 1–8 (a pKa −6 acid is 3e-7 protonated at pH 0.5 and the branch rises by that much)
           { phStep: 0.5 },
         );
         const branch = p.points.map((q) => q.saltLimitedM!);
