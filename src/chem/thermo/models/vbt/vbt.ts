@@ -19,8 +19,12 @@ export const VBT_CONSTANTS = {
   general: { alphaKJNm: 138.7, betaKJ: 27.6 },
 } as const;
 
-/** Glasser's constant A for U_POT > 5000 kJ/mol, kJ·mol⁻¹·nm (L. Glasser, Inorg. Chem. 34 (1995) 4935) — from memory. */
-export const GLASSER_A_KJ_NM = 121.4;
+/**
+ * Electrostatic conversion factor A for U_POT = A·I·(2I/V_m)^(1/3), kJ·mol⁻¹·nm, for 5000 < U_POT ≤ 70 000
+ * kJ/mol ("estimates within ±7 %"): L. Glasser, H. D. B. Jenkins, J. Am. Chem. Soc. 122 (2000) 632, abstract
+ * (read 2026-12-01: A = 121.39).
+ */
+export const GLASSER_A_KJ_NM = 121.39;
 
 export const VBT_SOURCES = [
   'H. D. B. Jenkins, H. K. Roobottom, J. Passmore, L. Glasser, Inorg. Chem. 38 (1999) 3609',
