@@ -25,6 +25,7 @@ export function WhiskerBars({
   domain,
   format = (x: number) => sig(x),
   width = 640,
+  labelWidth = 190,
 }: {
   rows: WhiskerRow[];
   unit: string;
@@ -33,9 +34,12 @@ export function WhiskerBars({
   domain?: [number, number];
   format?: (x: number) => string;
   width?: number;
+  /** Width of the label column, px (labels longer than fits are shortened with an ellipsis). */
+  labelWidth?: number;
 }) {
   const rowH = 26;
-  const labelW = 190;
+  const labelW = labelWidth;
+  const maxChars = Math.floor(labelW / 6.6);
   const valueW = 130;
   const plotW = Math.max(120, width - labelW - valueW - 16);
   const top = 22;
@@ -74,7 +78,8 @@ export function WhiskerBars({
           return (
             <g key={r.id}>
               <text x={labelW - 8} y={y + rowH / 2 + 4} fontSize="12" textAnchor="end" fill="#1d3a4a">
-                {r.label.length > 28 ? `${r.label.slice(0, 27)}…` : r.label}
+                {r.label.length > maxChars ? `${r.label.slice(0, maxChars - 1)}…` : r.label}
+                <title>{r.label}</title>
               </text>
               <rect x={x0} y={y + 6} width={Math.max(1, x1 - x0)} height={rowH - 12} fill={r.value < 0 ? '#7fb3ae' : '#e0a46b'} />
               {u > 0 ? (

@@ -16,7 +16,7 @@ describe('Model check area', () => {
     expect(within(row).getByText(`${first.meanAbsPercentError.toFixed(1)} %`, { selector: 'td' })).toBeInTheDocument();
     expect(within(row).getByText(String(first.n), { selector: 'td' })).toBeInTheDocument();
     // the chart has one labelled figure with the same number of model/group pairs
-    expect(screen.getByRole('img', { name: new RegExp(`${report.length} model/group pairs`) })).toBeInTheDocument();
+    expect(screen.getByRole('img', { name: new RegExp(`${report.length} model/set pairs in the table`) })).toBeInTheDocument();
   });
 
   it('opens the reference values of a model, each with its source', async () => {

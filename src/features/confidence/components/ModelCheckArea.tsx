@@ -38,6 +38,9 @@ export function ModelCheckArea() {
   }
   const models = report.rows;
   const key = (m: ModelValidation) => `${m.model}/${m.group}`;
+  // The chart shows each model once, on its widest reference set; the table below has every set.
+  const charted = models.filter((m) => m.group === 'all' || !models.some((o) => o.model === m.model && o.group === 'all'));
+  const shortLabel = (m: ModelValidation) => `${m.label.split(' (')[0]}${m.group === 'all' ? '' : ` · ${m.group}`}`;
   return (
     <div className="confidence-area">
       <section className="panel" aria-labelledby="confidence-title">
@@ -50,13 +53,16 @@ export function ModelCheckArea() {
         </p>
         <WhiskerBars
           title="Mean and largest absolute error per model"
-          caption={`Bars: mean absolute % error over n reference values; diamonds: the largest single error. ${models.length} model/group pairs.`}
+          caption={`Bars: mean absolute % error over n reference values; diamonds: the largest single error. ${charted.length} models, each on its widest reference set (${models.length} model/set pairs in the table). ${charted
+            .map((m) => `${shortLabel(m)}: ${pct(m.meanAbsPercentError)} mean, ${pct(m.maxAbsPercentError)} max, n ${m.n}`)
+            .join('; ')}.`}
           unit="% error"
-          domain={[0, Math.min(60, Math.max(5, ...models.map((m) => m.maxAbsPercentError)))]}
+          domain={[0, Math.min(60, Math.max(5, ...charted.map((m) => m.maxAbsPercentError)))]}
+          labelWidth={300}
           format={(x) => x.toFixed(1)}
-          rows={models.map((m) => ({
+          rows={charted.map((m) => ({
             id: key(m),
-            label: `${m.label.split(';')[0]} · ${m.group}`,
+            label: shortLabel(m),
             value: m.meanAbsPercentError,
             marker: { value: m.maxAbsPercentError, label: `largest error ${pct(m.maxAbsPercentError)}` },
             note: `(n ${m.n})`,
@@ -84,13 +90,14 @@ export function ModelCheckArea() {
               </tr>
             </thead>
             <tbody>
-              {models.map((m) => {
+              {models.map((m, i) => {
                 const k = key(m);
                 const extra = solutionExtras(m);
+                const sameAsAbove = i > 0 && models[i - 1]!.label === m.label;
                 return [
-                  <tr key={k}>
+                  <tr key={k} className={sameAsAbove ? 'continued' : 'first-of-model'}>
                     <th scope="row">
-                      {m.label}
+                      {sameAsAbove ? <span className="sr-only">{m.label}</span> : m.label}
                       {extra ? <div className="muted small-note">{extra}</div> : null}
                     </th>
                     <td>{m.group}</td>

@@ -19,6 +19,11 @@ function labelOf(data: ProjectScreening, id: string): string {
   return candidateLabel({ ionId: row.counterIonId, drugPerSalt: row.drugPerSalt, counterIonPerSalt: row.counterIonPerSalt }, data.ionNames[id]);
 }
 
+/** Drug ions per formula unit of a candidate's salt (1 when unknown). */
+function drugsPerFormula(data: ProjectScreening, id: string): number {
+  return data.screen.rows.find((r) => r.id === id)?.drugPerSalt ?? 1;
+}
+
 /** The Energetics area: each salt's enthalpy cycle to scale, and all candidates side by side. */
 export function EnergeticsArea({ project }: { project: ProjectRecord }) {
   const screening = useProjectScreening(project);
@@ -90,22 +95,30 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
       </section>
       {withThermo.length > 0 ? (
         <section className="panel" aria-labelledby="compare-title">
-          <h2 id="compare-title">All candidates: enthalpy of solution</h2>
+          <h2 id="compare-title">All candidates side by side</h2>
+          <p className="muted">
+            ΔH<sub>sol</sub> is compared per drug ion (per formula unit ÷ drug ions in it), so that a 2:1 salt stands beside 1:1 salts on the
+            same footing.
+          </p>
           <WhiskerBars
-            title="Estimated enthalpy of solution per formula unit"
-            caption={`Bars: estimated ΔH_sol (kJ/mol per formula unit) with ±1σ whiskers; diamonds: ΔH_sol measured by calorimetry where recorded. ${withThermo
-              .map((e) => `${labelOf(data, e.candidateId)} ${kj(e.thermo.solutionEnthalpyKJ.value)} ± ${e.thermo.solutionEnthalpyKJ.uncertainty.toFixed(0)}`)
+            title="Estimated enthalpy of solution per drug ion"
+            caption={`Bars: estimated ΔH_sol per drug ion (kJ/mol) with ±1σ whiskers; diamonds: ΔH_sol measured by calorimetry where recorded. ${withThermo
+              .map((e) => {
+                const m = drugsPerFormula(data, e.candidateId);
+                return `${labelOf(data, e.candidateId)} ${kj(e.thermo.solutionEnthalpyKJ.value / m)} ± ${(e.thermo.solutionEnthalpyKJ.uncertainty / m).toFixed(0)}`;
+              })
               .join('; ')}.`}
-            unit="ΔH_sol, kJ/mol (negative: dissolving releases heat)"
+            unit="ΔH_sol per drug ion, kJ/mol (negative: dissolving releases heat)"
             format={(x) => kj(x)}
             rows={withThermo.map((e) => {
+              const n = drugsPerFormula(data, e.candidateId);
               const m = measuredDH.get(e.candidateId);
               return {
                 id: e.candidateId,
                 label: labelOf(data, e.candidateId),
-                value: e.thermo.solutionEnthalpyKJ.value,
-                uncertainty: e.thermo.solutionEnthalpyKJ.uncertainty,
-                ...(m !== undefined ? { marker: { value: m, label: `measured ${kj(m)} kJ/mol` } } : {}),
+                value: e.thermo.solutionEnthalpyKJ.value / n,
+                uncertainty: e.thermo.solutionEnthalpyKJ.uncertainty / n,
+                ...(m !== undefined ? { marker: { value: m / n, label: `measured ${kj(m / n)} kJ/mol per drug ion` } } : {}),
               };
             })}
             width={760}
