@@ -64,6 +64,15 @@ describe('organic ions', () => {
     expect(p.formula).toBe('C4H12N2');
     expect(p.charge).toBe(2);
   });
+  it('a charged SMILES and its neutral parent with the charge give the same ion (trimethylammonium)', async () => {
+    const charged = await organicIonFromSmiles('C[NH+](C)C', 1);
+    const parent = await organicIonFromSmiles('CN(C)C', 1);
+    expect(charged.formula).toBe('C3H10N');
+    expect(parent.formula).toBe('C3H10N');
+  });
+  it('refuses a multi-component SMILES (a whole salt) with a field message', async () => {
+    await expect(organicIonFromSmiles('[Na+].CC(=O)[O-]', -1)).rejects.toThrow(/smiles: .*several components/);
+  });
   it('bad SMILES or a charge clash give a ChemInputError', async () => {
     await expect(organicIonFromSmiles('C1CC', 1)).rejects.toBeInstanceOf(ChemInputError);
     await expect(organicIonFromSmiles('', 1)).rejects.toBeInstanceOf(ChemInputError);

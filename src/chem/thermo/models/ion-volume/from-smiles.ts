@@ -19,6 +19,9 @@ export async function organicIonFromSmiles(
   if (typeof smiles !== 'string' || smiles.trim() === '' || smiles.length > 500) {
     throw new ChemInputError('smiles', 'empty or too long', SMILES_ACCEPTED);
   }
+  if (smiles.includes('.')) {
+    throw new ChemInputError('smiles', `"${smiles}" has several components; give one ion (the drug ion or the counter-ion) per SMILES`, SMILES_ACCEPTED);
+  }
   const { Molecule } = await import('openchemlib');
   let mol;
   try {
