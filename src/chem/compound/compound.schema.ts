@@ -43,6 +43,10 @@ export const compoundSchema = z.object({
   doseMg: positiveOrNull('Dose', 1e5),
   /** Measured true density of the free form, g/cm³. */
   densityGPerCm3: positiveOrNull('Density', 30),
+  /** Unit-cell volume of the free form's crystal structure, Å³ (optional; added after version 1 records). */
+  cellVolumeA3: positiveOrNull('Cell volume', 1e6).optional(),
+  /** Formula units (molecules) per unit cell, Z, for `cellVolumeA3`. */
+  formulaUnitsPerCell: z.number().int('Z must be a whole number').min(1, 'Z must be at least 1').max(64, 'Z must be at most 64').nullable().optional(),
   notes: z.string().max(5000),
 });
 export type Compound = z.infer<typeof compoundSchema>;

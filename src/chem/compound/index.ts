@@ -4,3 +4,4 @@ export * from './atomic-weights';
 export * from './formula';
 export * from './structure';
 export * from './drug-ion';
+export * from './free-form-volume';

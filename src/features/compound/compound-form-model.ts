@@ -14,6 +14,9 @@ export interface CompoundDraft {
   logP: string;
   logPOrigin: '' | 'measured' | 'computed' | 'literature';
   doseMg: string;
+  densityGPerCm3: string;
+  cellVolumeA3: string;
+  formulaUnitsPerCell: string;
   notes: string;
 }
 
@@ -32,6 +35,9 @@ export function draftFromCompound(c: Compound): CompoundDraft {
     logP: num(c.logP),
     logPOrigin: c.logPOrigin ?? '',
     doseMg: num(c.doseMg),
+    densityGPerCm3: num(c.densityGPerCm3),
+    cellVolumeA3: num(c.cellVolumeA3 ?? null),
+    formulaUnitsPerCell: num(c.formulaUnitsPerCell ?? null),
     notes: c.notes,
   };
 }
@@ -85,6 +91,9 @@ export function compoundFromDraft(
     logP: numberField('logP', 'log P'),
     logPOrigin: draft.logPOrigin === '' ? null : draft.logPOrigin,
     doseMg: numberField('doseMg', 'Dose'),
+    densityGPerCm3: numberField('densityGPerCm3', 'Density'),
+    cellVolumeA3: numberField('cellVolumeA3', 'Cell volume'),
+    formulaUnitsPerCell: numberField('formulaUnitsPerCell', 'Z'),
     notes: draft.notes,
   };
   const formulaText = draft.formula.trim();
@@ -97,6 +106,10 @@ export function compoundFromDraft(
     }
   } else if (draft.smiles.trim() === '') {
     errors.formula = 'Give a SMILES or a molecular formula';
+  }
+  if ((candidate.cellVolumeA3 === null) !== (candidate.formulaUnitsPerCell === null)) {
+    const missing = candidate.cellVolumeA3 === null ? 'cellVolumeA3' : 'formulaUnitsPerCell';
+    errors[missing] ??= 'Give both the cell volume and Z, or neither';
   }
   if (candidate.logP !== null && candidate.logPOrigin === null) candidate.logPOrigin = 'measured';
   if (draft.kind === 'base' && ionCharge < 0) errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';

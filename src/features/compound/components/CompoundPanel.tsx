@@ -201,6 +201,9 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
           </select>
         </div>
         <Field id="doseMg" label="Highest single dose" unit="mg, as free form" inputMode="decimal" {...common} />
+        <Field id="densityGPerCm3" label="Density of the free form" unit="g/cm³, measured" inputMode="decimal" {...common} />
+        <Field id="cellVolumeA3" label="Unit-cell volume" unit="Å³, free-form crystal" inputMode="decimal" {...common} />
+        <Field id="formulaUnitsPerCell" label="Molecules per cell (Z)" inputMode="decimal" {...common} />
         <Field id="notes" label="Notes" wide {...common} />
       </form>
       <StructureCard

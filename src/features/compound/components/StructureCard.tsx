@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { drugIon, formatIonFormula, organicIonFromFormula, type Compound } from '@/chem';
+import { drugIon, formatIonFormula, freeFormVolumeNm3, organicIonFromFormula, type Compound } from '@/chem';
 import type { GoodStructure, StructureStatus } from '../hooks/use-structure-check';
 
 const fmtU = (v: number, u: number, digits: number) => `${v.toFixed(digits)} ± ${u.toFixed(digits)}`;
@@ -30,9 +30,15 @@ export function StructureCard({
       } catch (err) {
         thermoError = err instanceof Error ? err.message : String(err);
       }
-      return { ion, thermo, thermoError, error: null as string | null };
+      let measuredVolume: ReturnType<typeof freeFormVolumeNm3> = null;
+      try {
+        measuredVolume = freeFormVolumeNm3({ molarMassGPerMol: ion.freeFormMolarMassGPerMol, ...compound });
+      } catch {
+        measuredVolume = null;
+      }
+      return { ion, thermo, thermoError, measuredVolume, error: null as string | null };
     } catch (err) {
-      return { ion: null, thermo: null, thermoError: null, error: err instanceof Error ? err.message : String(err) };
+      return { ion: null, thermo: null, thermoError: null, measuredVolume: null, error: err instanceof Error ? err.message : String(err) };
     }
   }, [compound, parsed]);
 
@@ -72,6 +78,15 @@ export function StructureCard({
                 ? `${ion.rings.aromatic} aromatic, ${ion.rings.nonAromatic} non-aromatic`
                 : 'unknown (formula only): the volume below assumes none — enter a SMILES for a better estimate'}
             </dd>
+            {derived.measuredVolume ? (
+              <>
+                <dt>Free-form volume per molecule</dt>
+                <dd>
+                  {fmtU(derived.measuredVolume.value, derived.measuredVolume.uncertainty, 3)} nm³{' '}
+                  <span className="muted">(from the {derived.measuredVolume.method === 'cell' ? 'crystal cell, V/Z' : 'measured density, M/(ρ·N_A)'})</span>
+                </dd>
+              </>
+            ) : null}
             {derived.thermo?.volumeNm3 ? (
               <>
                 <dt>Ion volume (crystal)</dt>

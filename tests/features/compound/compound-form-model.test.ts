@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { compoundFromDraft, draftFromCompound } from '@/features/compound/compound-form-model';
+import { DEMO_COMPOUND } from '@/persistence/demo-project';
+
+describe('compound form model', () => {
+  const draft = draftFromCompound(DEMO_COMPOUND);
+
+  it('round-trips the stored compound', () => {
+    const r = compoundFromDraft(draft, DEMO_COMPOUND);
+    expect(r.ok && r.compound.formula).toBe(DEMO_COMPOUND.formula);
+  });
+
+  it('refuses a formula with an unknown element, a charged formula, and no structure at all', () => {
+    const bad = compoundFromDraft({ ...draft, formula: 'C18H20Xy' }, DEMO_COMPOUND);
+    expect(!bad.ok && bad.errors.formula).toMatch(/unknown element 'Xy'/);
+    const charged = compoundFromDraft({ ...draft, formula: 'C18H21ClN3O+' }, DEMO_COMPOUND);
+    expect(!charged.ok && charged.errors.formula).toMatch(/neutral/);
+    const none = compoundFromDraft({ ...draft, formula: '', smiles: '' }, DEMO_COMPOUND);
+    expect(!none.ok && none.errors.formula).toMatch(/SMILES or a molecular formula/);
+  });
+
+  it('asks for the cell volume and Z together, and refuses negative volumes', () => {
+    const half = compoundFromDraft({ ...draft, cellVolumeA3: '1500' }, DEMO_COMPOUND);
+    expect(!half.ok && half.errors.formulaUnitsPerCell).toMatch(/both/);
+    const neg = compoundFromDraft({ ...draft, cellVolumeA3: '-5', formulaUnitsPerCell: '4' }, DEMO_COMPOUND);
+    expect(!neg.ok && neg.errors.cellVolumeA3).toMatch(/greater than zero/);
+    const ok = compoundFromDraft({ ...draft, cellVolumeA3: '1500', formulaUnitsPerCell: '4' }, DEMO_COMPOUND);
+    expect(ok.ok && ok.compound.formulaUnitsPerCell).toBe(4);
+  });
+});
