@@ -86,3 +86,8 @@ export function baseWithSaltSolubilityM(
   const salt = saltLimitedBaseSolubilityM(kspM2, pKa, pH, commonIonM);
   return salt < free ? { solubilityM: salt, solid: 'salt' } : { solubilityM: free, solid: 'free-form' };
 }
+
+/** pH_max of a 1:1 salt of a weak base or acid with a single salt-forming pKa (dispatches to the two forms above). */
+export function phMax(kind: 'base' | 'acid', pKa: number, intrinsicM: number, kspM2: number): number {
+  return kind === 'base' ? phMaxBase(pKa, intrinsicM, kspM2) : phMaxAcid(pKa, intrinsicM, kspM2);
+}

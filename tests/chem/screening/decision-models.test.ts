@@ -15,6 +15,11 @@ import {
   solubilityClass,
   vantHoffFit,
   WATER_MOLAR_MASS_G_PER_MOL,
+  debyeHuckelA,
+  daviesLog10Gamma,
+  phMax,
+  phMaxBase,
+  phMaxAcid,
 } from '@/chem/screening';
 import { ChemInputError } from '@/chem/result';
 import { GAS_CONSTANT_KJ_PER_MOL_K } from '@/chem/constants/physical';
@@ -181,5 +186,20 @@ describe('intrinsic solubility', () => {
     const x = idealSolubilityMoleFraction(25, 400, 300);
     expect(Math.log(x)).toBeCloseTo(-(25000 / 8.314462618) * (1 / 300 - 1 / 400), 9);
     expect(() => idealSolubilityMoleFraction(25, 400, -5)).toThrow(ChemInputError);
+  });
+});
+
+describe('activity and dispatch helpers', () => {
+  it('Debye–Hückel A at 25 °C is 0.509 within 1 % (Robinson & Stokes, "Electrolyte Solutions", from memory)', () => {
+    expect(Math.abs(debyeHuckelA(298.15) / 0.509 - 1)).toBeLessThan(0.01);
+  });
+  it('Davies: log γ = −A z² (√I/(1+√I) − 0.3 I), and γ → 1 as I → 0', () => {
+    const A = debyeHuckelA(298.15);
+    expect(daviesLog10Gamma(2, 0.1)).toBeCloseTo(-A * 4 * (Math.sqrt(0.1) / (1 + Math.sqrt(0.1)) - 0.03), 12);
+    expect(Math.abs(daviesLog10Gamma(1, 0))).toBe(0);
+  });
+  it('phMax dispatches to the base and acid forms', () => {
+    expect(phMax('base', 8, 1e-5, 1e-4)).toBe(phMaxBase(8, 1e-5, 1e-4));
+    expect(phMax('acid', 4, 1e-5, 1e-4)).toBe(phMaxAcid(4, 1e-5, 1e-4));
   });
 });
