@@ -18,6 +18,7 @@ export { bornHydrationEnthalpyKJ, bornEnthalpyFactor, fitBornOffsets, hydrationE
 export { solveCycle, bornHaberCycle, solutionCycle, type BornHaberInput, type SolutionCycleInput } from './models/cycle/cycle';
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
-export { validationReport, kapustinskiiVariants } from './validation/report';
+export { validationReport, kapustinskiiVariants, solutionValidation, type SolutionValidation } from './validation/report';
+export { latticeValidation, hydrationValidation, publishedHydrationClosure } from './validation/validation';
 export { referenceLatticeEnthalpyKJ, referenceSolutionEnthalpyKJ, referenceVolumeNm3 } from './validation/reference';
 export { LATTICE_REFERENCE_SALTS, SOLUTION_REFERENCE_SALTS, type LatticeReferenceSalt } from '../data/thermo-reference';
