@@ -11,6 +11,10 @@ export const SRC_AQION =
 export const SRC_FROMM =
   'J. R. Fromm, "Ionization Constants of Aqueous Polyprotic Acids" (http://www.3rd1000.com/chem301/p00406.htm, read 2026-12-01)';
 
+/** Read 2026-12-01: NBS potentiometric pK of benzoic acid in water at 25.0 °C. */
+export const SRC_NBS_BENZOIC =
+  'J. Res. Natl. Bur. Stand. 71A (1967) 379–384, Table 1: benzoic acid in water at 25.0 °C, pK 4.210 (https://pmc.ncbi.nlm.nih.gov/articles/PMC6624721/table/T1, read 2026-12-01)';
+
 export const SRC_CRC_ORGANIC =
   'CRC Handbook of Chemistry and Physics, 97th ed. (W. M. Haynes, ed., 2016), "Dissociation Constants of Organic Acids and Bases", 25 °C (from memory)';
 

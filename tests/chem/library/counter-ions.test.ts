@@ -127,6 +127,11 @@ describe('pKa values against the tables they cite', () => {
     expect(citric[1]).toBeCloseTo(4.757, 2);
   });
 
+  it('benzoic acid matches the NBS measurement within 0.01', () => {
+    // J. Res. Natl. Bur. Stand. 71A (1967) 379, Table 1: pK 4.210 in water at 25.0 °C (read 2026-12-01).
+    expect(getCounterIon('benzoate')!.pKas[0]!.value).toBeCloseTo(4.21, 2);
+  });
+
   it('amine and amino-acid values sit where the CRC Handbook puts them (from memory, ±0.1)', () => {
     // CRC Handbook 97th ed., "Dissociation Constants of Organic Acids and Bases" and "Properties of
     // Amino Acids" — recalled, not read this session: a transcription check, not an independent one.
