@@ -52,6 +52,18 @@ describe('saltsmith screen', () => {
     expect(a.out).toBe(b.out);
   });
 
+  it('reads a compound from --input JSON (the fictional demo file) and leaves cocrystal-band stoichiometries out, saying so', async () => {
+    const { code, out } = await run(['--input', 'fixtures/screening/demorazine-screen-input.json', '--format', 'json', '--iterations', '100']);
+    expect(code).toBe(0);
+    const doc = JSON.parse(out);
+    expect(doc.compound).toMatch(/fictional/);
+    // ΔpKa rule (Cruz-Cabeza 2012): a stoichiometry below −1 is left out and listed.
+    expect(doc.skippedCocrystalBand.length).toBeGreaterThan(0);
+    for (const s of doc.skippedCocrystalBand) expect(s.deltaPka).toBeLessThan(-1);
+    const kept = await run(['--input', 'fixtures/screening/demorazine-screen-input.json', '--format', 'json', '--iterations', '100', '--keep-cocrystal-band']);
+    expect(JSON.parse(kept.out).rows.length).toBe(doc.rows.length + doc.skippedCocrystalBand.length);
+  });
+
   it('refuses bad input with a message and exit status 1', async () => {
     const outOfOrder = await run(['--formula', 'C17H20N2O2', '--pka', '8,3', '--s0', '0.02', '--dose', '100']);
     expect(outOfOrder.code).toBe(1);

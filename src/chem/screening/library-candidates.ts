@@ -1,18 +1,24 @@
 import type { CounterIon } from '../library/counter-ion.types';
 import type { ThermoIon } from '../thermo';
-import type { ScreeningCandidate } from './screen-compound';
+import { DEFAULT_DELTA_PKA_BANDS, saltDeltaPka, type DeltaPkaBands } from './delta-pka';
+import { drugProtolyte } from './ph-profile';
+import { counterIonProtolyte, type ScreeningCandidate } from './screen-compound';
 import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from './thermo-link';
 
 /**
  * Candidates for a screen from library counter-ions: every listed stoichiometry of an ion of the
  * opposite charge, re-balanced for the drug ion's charge (a dibasic drug takes two chlorides), with
  * the thermochemistry engine's ΔH_sol attached when the drug ion's formula is known.
+ * When the drug's pKa values are given, stoichiometries whose ΔpKa falls in the cocrystal band
+ * (Cruz-Cabeza 2012: < −1 by default) are left out and listed in `skipped` (unless `keepCocrystalBand`).
  */
 export function candidatesFromLibrary(
   ions: readonly CounterIon[],
-  drug: { kind: 'base' | 'acid'; ionCharge: number; thermo?: ThermoDrugIon | null },
-  opts: { firstStoichiometryOnly?: boolean } = {},
+  drug: { kind: 'base' | 'acid'; ionCharge: number; pKas?: readonly number[]; thermo?: ThermoDrugIon | null },
+  opts: { firstStoichiometryOnly?: boolean; keepCocrystalBand?: boolean; bands?: DeltaPkaBands; skipped?: { id: string; label: string; deltaPka: number }[] } = {},
 ): ScreeningCandidate[] {
+  const bands = opts.bands ?? DEFAULT_DELTA_PKA_BANDS;
+  const drugP = drug.pKas && drug.pKas.length > 0 ? drugProtolyte({ kind: drug.kind, pKas: drug.pKas, ionCharge: drug.ionCharge }) : null;
   const want = drug.kind === 'base' ? 'anion' : 'cation';
   let dIon: ThermoIon | null = null;
   if (drug.thermo) {
@@ -39,6 +45,20 @@ export function candidatesFromLibrary(
       if (seen.has(key)) continue;
       seen.add(key);
       const label = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : `${ion.name.toLowerCase()} (${m}:${n})`;
+      const stoich = { label, drugPerSalt: m, counterIonPerSalt: n, ionCharge: st.ionCharge, ionMolarMassGPerMol: st.ionMolarMassGPerMol, pKaIndex: st.pKaIndex };
+      const id = `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`;
+      if (drugP && !opts.keepCocrystalBand) {
+        let d: number | null = null;
+        try {
+          d = saltDeltaPka(drugP, drug.ionCharge, counterIonProtolyte(ion, stoich), st.ionCharge);
+        } catch {
+          d = null;
+        }
+        if (d !== null && d < bands.cocrystalBelow) {
+          opts.skipped?.push({ id, label, deltaPka: d });
+          continue;
+        }
+      }
       const thermo = dIon
         ? candidateSolutionEnthalpyKJ(dIon, { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings }, {
             drugPerSalt: m,
@@ -48,9 +68,9 @@ export function candidatesFromLibrary(
           }).solutionEnthalpyKJ
         : null;
       out.push({
-        id: `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`,
+        id,
         counterIon: ion,
-        stoichiometry: { label, drugPerSalt: m, counterIonPerSalt: n, ionCharge: st.ionCharge, ionMolarMassGPerMol: st.ionMolarMassGPerMol, pKaIndex: st.pKaIndex },
+        stoichiometry: stoich,
         hydrateWater: 0,
         measurements: [],
         solutionEnthalpyKJ: thermo,

@@ -32,7 +32,8 @@ import { describeError, registerEvalKind } from './eval';
 const USAGE = `saltsmith screen (--smiles S | --formula F) --pka 7.8[,3.1] [--kind base|acid] [--charge 1]
                   (--s0 mg/mL | --mp °C --logp X) [--dose mg] [--ions chloride,mesylate] [--input compound.json]
                   [--format csv|json] [--out file] [--iterations 1000] [--seed 1]
-                  [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]`;
+                  [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
+                  [--keep-cocrystal-band]`;
 
 const fileSchema = z
   .object({
@@ -103,7 +104,7 @@ export const screenCommand: CliCommand = {
   summary: 'screen a compound against counter-ions; ranked table as CSV or JSON',
   usage: USAGE,
   run: async (args, io) => {
-    const { flags } = parseFlags(args, ['help']);
+    const { flags } = parseFlags(args, ['help', 'keep-cocrystal-band']);
     if (flags.help) {
       writeLine(io.stdout, USAGE);
       return 0;
@@ -160,7 +161,12 @@ export const screenCommand: CliCommand = {
         settingsIn.temperatureK = tc + 273.15;
       }
       const settings = screeningSettingsSchema.parse(settingsIn);
-      const candidates = candidatesFromLibrary(ions, { kind, ionCharge, thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings } });
+      const skipped: { id: string; label: string; deltaPka: number }[] = [];
+      const candidates = candidatesFromLibrary(
+        ions,
+        { kind, ionCharge, pKas: pKas.map((p) => p.value), thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings } },
+        { skipped, keepCocrystalBand: flags['keep-cocrystal-band'] === true, bands: settings.deltaPkaBands },
+      );
       const res = screenCompound({ compound, drugIon: di, candidates, settings });
       const iterations = num('iterations', flags.iterations) ?? 1000;
       const seed = num('seed', flags.seed) ?? 1;
@@ -180,6 +186,7 @@ export const screenCommand: CliCommand = {
             intrinsicSolubility: { log10M: res.freeForm.log10IntrinsicM, origin: res.freeForm.intrinsicOrigin },
             freeForm: { worst: res.freeForm.worst, solubilityClass: res.freeForm.solubilityClass, flags: res.freeForm.flags },
             robustness: { iterations, seed },
+            skippedCocrystalBand: skipped,
             units: { solubility: 'mg/mL free-form equivalents', doseNumber: 'dose / 250 mL / solubility', ksp: 'log10, (mol/L)^(m+n)' },
             assumptions: res.assumptions,
             rows: table,
@@ -190,7 +197,10 @@ export const screenCommand: CliCommand = {
         );
       } else if (format === 'csv') {
         const csv = Papa.unparse(table.map((row) => Object.fromEntries(Object.entries(row).map(([k, v]) => [k, safeCell(v)]))), { newline: '\n' });
-        text = `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# K_sp without a measured salt solubility is an estimate; see ksp_origin and log10_ksp_sd.`;
+        const skippedLine = skipped.length
+          ? `\n# Left out (ΔpKa in the cocrystal band, Cruz-Cabeza 2012; --keep-cocrystal-band keeps them): ${skipped.map((x) => `${x.label} ΔpKa ${x.deltaPka.toFixed(1)}`).join('; ')}`
+          : '';
+        text = `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# K_sp without a measured salt solubility is an estimate; see ksp_origin and log10_ksp_sd.${skippedLine}`;
       } else throw new ChemInputError('--format', `"${format}"`, 'csv or json');
       if (typeof flags.out === 'string') {
         await writeFile(flags.out, text + '\n', 'utf8');
