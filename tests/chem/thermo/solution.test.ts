@@ -37,3 +37,19 @@ describe('the drug-ion pipeline on salts whose organic ion is sized from its for
     }
   });
 });
+
+describe('relative ΔH_sol between counter-ions of one ion', () => {
+  it('the shared ion’s hydration cancels and the measured pair factor credits only the observed cancellation', async () => {
+    const { estimateSaltThermo, getThermoIon, relativePairFactor, relativeSolutionEnthalpyKJ } = await import('@/chem');
+    const pf = relativePairFactor();
+    expect(pf.pairs).toBeGreaterThanOrEqual(50);
+    expect(pf.factor).toBeGreaterThan(0.05);
+    const na = getThermoIon('sodium')!;
+    const cl = estimateSaltThermo({ cation: na, anion: getThermoIon('chloride')!, cationsPerFormula: 1, anionsPerFormula: 1 });
+    const so4 = estimateSaltThermo({ cation: na, anion: getThermoIon('sulfate')!, cationsPerFormula: 2, anionsPerFormula: 1 });
+    const d = relativeSolutionEnthalpyKJ({ result: so4, drugPerFormula: 2, counterPerFormula: 1, drugIs: 'cation' }, { result: cl, drugPerFormula: 1, counterPerFormula: 1, drugIs: 'cation' }, pf.factor);
+    // Per Na⁺: ΔH_sol(Na₂SO₄)/2 − ΔH_sol(NaCl); NBS (Wagman 1982): −2.42/2 − 3.87 = −5.1 kJ/mol.
+    expect(d.value).toBeCloseTo(so4.solutionEnthalpyKJ.value / 2 - cl.solutionEnthalpyKJ.value, 9);
+    expect(Math.abs(d.value - -5.1)).toBeLessThanOrEqual(2.5 * d.uncertainty);
+  });
+});

@@ -3,6 +3,7 @@ import { getThermoIon } from '../ions';
 import { estimateSaltThermo } from '../estimate-salt';
 import type { ModelValidation, ValidationRow } from '../thermo.types';
 import { referenceSolutionEnthalpyKJ, SOLUTION_REFERENCE_SOURCE } from './reference';
+import { relativeSolutionEnthalpyKJ } from '../models/solution/relative';
 import { hydrationValidation, latticeValidation, summarise, type LatticeVariant } from './validation';
 
 export interface SolutionValidation extends ModelValidation {
@@ -40,6 +41,38 @@ export function solutionValidation(): SolutionValidation {
     coverage2Sigma: covered / rows.length,
   };
   return solutionCache;
+}
+
+let pairCache: { factor: number; pairs: number } | undefined;
+
+/**
+ * Measured pair factor for {@link relativeSolutionEnthalpyKJ}: over all pairs of NBS reference salts that
+ * share their cation (the stand-in for a drug ion), the RMS of the error of the per-cation ΔH_sol difference
+ * divided by the RMS of its quadrature uncertainty (shared-ion hydration removed). Below 1 means errors
+ * partly cancel between counter-ions of one ion.
+ */
+export function relativePairFactor(): { factor: number; pairs: number } {
+  if (pairCache) return pairCache;
+  const rows = SOLUTION_REFERENCE_SALTS.map((s) => {
+    const result = estimateSaltThermo({ cation: getThermoIon(s.cation)!, anion: getThermoIon(s.anion)!, cationsPerFormula: s.p, anionsPerFormula: s.q });
+    return { s, result, ref: referenceSolutionEnthalpyKJ(s) / s.p };
+  });
+  let sumErr2 = 0;
+  let sumU2 = 0;
+  let pairs = 0;
+  for (let i = 0; i < rows.length; i++) {
+    for (let j = i + 1; j < rows.length; j++) {
+      const a = rows[i]!;
+      const b = rows[j]!;
+      if (a.s.cation !== b.s.cation) continue;
+      const d = relativeSolutionEnthalpyKJ({ result: a.result, drugPerFormula: a.s.p, counterPerFormula: a.s.q, drugIs: 'cation' }, { result: b.result, drugPerFormula: b.s.p, counterPerFormula: b.s.q, drugIs: 'cation' }, 1);
+      sumErr2 += (d.value - (a.ref - b.ref)) ** 2;
+      sumU2 += d.uncertainty ** 2;
+      pairs++;
+    }
+  }
+  pairCache = { factor: Math.sqrt(sumErr2 / sumU2), pairs };
+  return pairCache;
 }
 
 /** The four Kapustinskii radius/constant pairings on the halides (and polyatomic salts), for the cited choice. */
