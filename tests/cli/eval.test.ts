@@ -43,6 +43,9 @@ describe('saltsmith eval', () => {
     // NaCl: Born–Haber 787 kJ/mol (Wagman 1982 ΔfH° + CRC IE/EA) within the stated 2σ.
     expect(Math.abs(nacl.latticeEnthalpyKJ.value - 787)).toBeLessThan(2 * nacl.latticeEnthalpyKJ.uncertainty);
     expect(lines[1]!.cationsPerFormula).toBe(2);
+    // {"formula":"SO4","charge":-2} is the bundled sulfate, with Marcus's published hydration enthalpy
+    expect(lines[1]!.anion.id).toBe('sulfate');
+    expect(lines[1]!.anionHydrationKJ.method).toBe('published');
     expect(lines[2]!.methodChosen).toBe('born-mayer');
     // CaF₂: Born–Haber 2635 kJ/mol (same sources) within 6 %.
     expect(Math.abs(lines[2]!.latticeEnthalpyKJ.value / 2635 - 1)).toBeLessThan(0.06);

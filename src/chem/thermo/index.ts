@@ -3,7 +3,7 @@
  * uncertainty (SCIENCE.md §1–3). Everything here is pure and deterministic.
  */
 export type * from './thermo.types';
-export { getThermoIon, findThermoIon, listThermoIonIds, derivedAnionVolumes, KAPUSTINSKII_RADIUS_SET } from './ions';
+export { getThermoIon, findThermoIon, findThermoIonByFormula, listThermoIonIds, derivedAnionVolumes, KAPUSTINSKII_RADIUS_SET } from './ions';
 export {
   kapustinskiiLatticeEnergyKJ, kapustinskiiPotentialKJ, stoichiometryFromCharges, KAPUSTINSKII_K_KJ_A_PER_MOL,
   KAPUSTINSKII_K_ALT_KJ_A_PER_MOL, KAPUSTINSKII_RHO_A, type KapustinskiiInput,

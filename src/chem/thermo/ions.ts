@@ -123,3 +123,21 @@ export function findThermoIon(idOrSymbol: string): ThermoIon | undefined {
   const r = THERMO_IONS.find((i) => i.symbols.includes(key));
   return r ? getThermoIon(r.id) : undefined;
 }
+
+/**
+ * The bundled ion with this formula (same element counts, charge written or not) and charge, if any — so a
+ * request that spells out `SO4` with charge −2 gets the published sizes and hydration enthalpy of sulfate
+ * rather than an additive estimate.
+ */
+export function findThermoIonByFormula(formula: string, charge: number): ThermoIon | undefined {
+  let counts: Record<string, number>;
+  try {
+    counts = parseFormula(formula);
+  } catch {
+    return undefined;
+  }
+  const key = (c: Record<string, number>) => Object.entries(c).sort(([a], [b]) => a.localeCompare(b)).map(([e, n]) => `${e}${n}`).join('');
+  const want = key(counts);
+  const r = THERMO_IONS.find((i) => i.charge === charge && key(parseFormula(i.formula)) === want);
+  return r ? getThermoIon(r.id) : undefined;
+}

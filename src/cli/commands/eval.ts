@@ -1,7 +1,7 @@
 import { createInterface } from 'node:readline';
 import { z } from 'zod';
 import {
-  ChemInputError, estimateSaltThermo, findThermoIon, getCounterIon, organicIonFromFormula, organicIonFromSmiles,
+  ChemInputError, estimateSaltThermo, findThermoIon, findThermoIonByFormula, getCounterIon, organicIonFromFormula, organicIonFromSmiles,
   stoichiometryFromCharges, type ThermoIon,
 } from '@/chem';
 import { writeLine, type CliCommand } from '../io';
@@ -38,7 +38,10 @@ export function evalKinds(): string[] {
 const ringsSchema = z.object({ aromatic: z.number().int().min(0).max(50), nonAromatic: z.number().int().min(0).max(50) }).strict();
 const chargeSchema = z.number().int().min(-4).max(4).refine((z_) => z_ !== 0, 'charge must not be zero');
 
-/** An ion: a bundled id or symbol, a library counter-ion id, a formula with charge, or a SMILES with charge. */
+/**
+ * An ion: a bundled id or symbol, a library counter-ion id, a formula with charge (a bundled ion with the same
+ * formula and charge is used when no ring counts are given), or a SMILES with charge.
+ */
 export const ionSpecSchema = z.union([
   z.string().min(1).max(80),
   z.object({ formula: z.string().min(1).max(200), charge: chargeSchema, rings: ringsSchema.optional(), label: z.string().max(80).optional() }).strict(),
@@ -86,6 +89,8 @@ export async function resolveIon(spec: IonSpec, role: 'cation' | 'anion', packin
     throw new ChemInputError(role, `unknown ion "${spec}"`, 'a bundled ion id or symbol (sodium, Na+, SO4 2-), a counter-ion library id (mesylate), {"formula","charge"} or {"smiles","charge"}');
   }
   if ('formula' in spec) {
+    const bundled = findThermoIonByFormula(spec.formula, spec.charge);
+    if (bundled && !spec.rings) return bundled;
     return organicIonFromFormula(spec.formula, spec.charge, spec.rings ?? { aromatic: 0, nonAromatic: 0 }, { ...opts, ...(spec.label ? { label: spec.label } : {}) });
   }
   return organicIonFromSmiles(spec.smiles, spec.charge, { ...opts, ...(spec.label ? { label: spec.label } : {}) });
