@@ -66,6 +66,20 @@ describe('Compound area: structure', () => {
     expect((await projectsRepo.get(project.id))!.compound.smiles).toBe(procaine.smiles);
   });
 
+  it('a new valid SMILES replaces the picture and the formula follows it', async () => {
+    const user = userEvent.setup();
+    const project = await projectsRepo.create('New structure test', procaine);
+    render(<LivePanel id={project.id} />);
+    await screen.findByRole('img', { name: 'Structure of Procaine base' }, { timeout: 10000 });
+    const field = screen.getByLabelText('Structure (SMILES)');
+    // Lidocaine base: C14H22N2O, 234.34 g/mol (pharmacopoeial monograph; from memory).
+    await user.clear(field);
+    await user.type(field, 'CCN(CC)CC(=O)Nc1c(C)cccc1C');
+    expect(await screen.findByText(/C14H22N2O, 234\.34 g\/mol/, {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(screen.getByLabelText('Molecular formula')).toHaveValue('C14H22N2O');
+    expect((await projectsRepo.get(project.id))!.compound.formula).toBe('C14H22N2O');
+  });
+
   it('a formula with an unknown element is refused at the field', async () => {
     const user = userEvent.setup();
     const project = await projectsRepo.create('Formula test', { ...procaine, smiles: '', formula: 'C13H20N2O2' });

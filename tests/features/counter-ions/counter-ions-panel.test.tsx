@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { render, screen, within } from '@testing-library/react';
+import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { CounterIonsPanel } from '@/features/counter-ions/components/CounterIonsPanel';
 import { useCounterIonsViewStore } from '@/features/counter-ions/counter-ions-store';
@@ -100,5 +100,21 @@ describe('Counter-ions area', () => {
     expect(await screen.findByText(/Bundled: pKa 4\.76/)).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Restore bundled values' }));
     expect(await within(table).findByRole('rowheader', { name: 'Acetate' })).toBeInTheDocument();
+  });
+});
+
+describe('Counter-ions area: removing an in-house ion', () => {
+  it('asks once more, then removes it from the library', async () => {
+    const { user, table } = await setup();
+    await user.click(screen.getByText('Add an in-house counter-ion'));
+    await user.type(screen.getByLabelText('Ion name'), 'Temporary acid');
+    await user.type(screen.getByLabelText('Ion formula'), 'C2H3O2');
+    await user.type(screen.getByLabelText('pKa values of the parent'), '4.8');
+    await user.click(screen.getByRole('button', { name: 'Save in-house ion' }));
+    await user.click(await within(table).findByRole('button', { name: 'Temporary acid' }));
+    await user.click(screen.getByRole('button', { name: 'Remove…' }));
+    await user.click(screen.getByRole('button', { name: 'Remove in-house ion' }));
+    await waitFor(() => expect(within(table).queryByRole('rowheader', { name: /Temporary acid/ })).toBeNull());
+    expect(await customIonsRepo.listAll()).toEqual([]);
   });
 });

@@ -99,8 +99,10 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
       void (async () => {
         // A changed SMILES must parse before anything is stored; a bad one keeps the old compound.
         const smiles = result.compound.smiles;
+        let compound = result.compound;
         // The stored SMILES was accepted before; only a changed one needs openchemlib's verdict.
         if (smiles !== '' && smiles !== project.compound.smiles && smiles !== structure.good?.smiles) {
+          const previousFormula = structure.good?.parsed.formula;
           const checked = await structure.check(smiles);
           if (checked.ok === 'stale') return;
           if (checked.ok === false) {
@@ -108,11 +110,17 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
             setSaveState('invalid');
             return;
           }
+          // The formula follows a new structure unless the user typed a different one themselves.
+          const parsed = checked.structure?.parsed;
+          if (parsed && parsed.netCharge === 0 && (compound.formula === '' || compound.formula === previousFormula)) {
+            compound = { ...compound, formula: parsed.formula };
+            setDraft((d) => (d.smiles.trim() === smiles ? { ...d, formula: parsed.formula } : d));
+          }
         } else if (smiles === '' && structure.good) {
           await structure.check('');
         }
         try {
-          await projectsRepo.updateCompound(projectId, result.compound);
+          await projectsRepo.updateCompound(projectId, compound);
           setSaveState('saved');
         } catch {
           setSaveState('error');

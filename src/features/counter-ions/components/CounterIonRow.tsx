@@ -3,6 +3,7 @@ import { formatIonFormula, stoichiometryKey, type LibraryIon } from '@/chem';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import type { ProjectRecord } from '@/persistence/records';
 import { bestVerdictFor, verdictFor } from '../counter-ion-verdict';
+import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { IonEditForm } from './IonEditForm';
 
 const fmtCharge = (c: number) => (c > 0 ? `+${c}` : `−${-c}`);
@@ -166,8 +167,34 @@ function IonDetails({ ion, project }: { ion: LibraryIon; project: ProjectRecord 
               </li>
             ))}
         </ul>
-        {ion.origin !== 'in-house' ? <IonEditForm ion={ion} projectId={project.id} /> : null}
+        {ion.origin !== 'in-house' ? <IonEditForm ion={ion} projectId={project.id} /> : <DeleteInHouseIon ion={ion} />}
       </div>
+    </div>
+  );
+}
+
+/** Remove an in-house ion from every project's library (asks once more first). */
+function DeleteInHouseIon({ ion }: { ion: LibraryIon }) {
+  const [asking, setAsking] = useState(false);
+  if (!ion.recordId) return null;
+  const recordId = ion.recordId;
+  return (
+    <div className="button-row">
+      {asking ? (
+        <>
+          <span>Remove “{ion.name}” from the library of every project? Shortlist entries that use it stay but lose its data.</span>
+          <button type="button" className="danger" onClick={() => void customIonsRepo.remove(recordId)}>
+            Remove in-house ion
+          </button>
+          <button type="button" onClick={() => setAsking(false)}>
+            Keep it
+          </button>
+        </>
+      ) : (
+        <button type="button" className="danger" onClick={() => setAsking(true)}>
+          Remove…
+        </button>
+      )}
     </div>
   );
 }
