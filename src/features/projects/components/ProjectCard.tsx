@@ -125,7 +125,7 @@ export function ProjectCard({
           type="button"
           className="primary"
           onClick={() => actions.open(project.id)}
-          aria-label={`Open ${project.name}`}
+          aria-label={isOpen ? `Go to compound: ${project.name}` : `Open ${project.name}`}
         >
           {isOpen ? 'Go to compound' : 'Open'}
         </button>
