@@ -36,23 +36,22 @@ export function OfflineStatus() {
         className={`link-status-item ${online ? 'is-online' : 'is-offline'}`}
         role="status"
         title={
-          online
+          (online
             ? 'Connected. Saltsmith does not need the network: everything runs and is stored in this browser.'
-            : 'No network. Saltsmith keeps working from the copy stored in this browser.'
+            : 'No network. Saltsmith keeps working from the copy stored in this browser.') +
+          (offlineReady ? ' This browser holds a copy of the whole app: it opens and works with no network.' : '')
         }
       >
         <span className="link-status-dot" aria-hidden="true" />
         {online ? 'Online' : 'Offline — working from this browser'}
+        {offlineReady && online ? (
+          <span className="link-status-ready" data-testid="offline-ready">
+            {' '}
+            · ready offline
+          </span>
+        ) : null}
+        {offlineReady && !online ? <span hidden data-testid="offline-ready" /> : null}
       </span>
-      {offlineReady ? (
-        <span
-          className="link-status-item is-ready"
-          title="This browser holds a copy of the whole app: it opens and works with no network."
-          data-testid="offline-ready"
-        >
-          Works offline
-        </span>
-      ) : null}
       {keep ? (
         <span
           className={`link-status-item keep-${answer}`}
