@@ -16,8 +16,15 @@ import type { ThermoIon } from './thermo.types';
  */
 export const KAPUSTINSKII_RADIUS_SET: 'goldschmidt' | 'shannon' = 'shannon';
 
-/** Radius uncertainty attached to tabulated radii, as a fraction (0.01 Å on ~1 Å): the tables' stated rounding — common practice. */
+/** Radius uncertainty attached to tabulated crystal radii, as a fraction (0.01 Å on ~1 Å, the tables' last digit) — common practice. */
 const TABLE_RADIUS_REL_U = 0.01;
+/** The same for thermochemical radii of polyatomic ions, which are fitted values — common practice (3 %). */
+const THERMOCHEMICAL_RADIUS_REL_U = 0.03;
+/**
+ * Relative uncertainty attached to a tabulated Jenkins ion volume — common practice (5 %). It feeds the
+ * quoted ion data only; lattice uncertainties come from the measured errors of the whole method.
+ */
+const ION_VOLUME_REL_U = 0.05;
 
 const est = (v: SourcedValue, method: string, relU: number, absU = 0): Estimate => ({
   value: v.value,
@@ -63,9 +70,9 @@ function recordToIon(r: ThermoIonRecord): ThermoIon {
     const src = KAPUSTINSKII_RADIUS_SET === 'goldschmidt' ? (r.goldschmidtRadiusA ?? r.shannonRadiusA) : r.shannonRadiusA;
     if (src) radius = est(src, KAPUSTINSKII_RADIUS_SET === 'goldschmidt' && r.goldschmidtRadiusA ? 'goldschmidt' : 'shannon-cn6', TABLE_RADIUS_REL_U);
   } else if (r.thermochemicalRadiusA) {
-    radius = est(r.thermochemicalRadiusA, 'thermochemical-radius', TABLE_RADIUS_REL_U * 3);
+    radius = est(r.thermochemicalRadiusA, 'thermochemical-radius', THERMOCHEMICAL_RADIUS_REL_U);
   }
-  let volume: Estimate | undefined = r.volumeNm3 ? est(r.volumeNm3, 'jenkins-volume', 0.05) : derivedAnionVolumes().get(r.id);
+  let volume: Estimate | undefined = r.volumeNm3 ? est(r.volumeNm3, 'jenkins-volume', ION_VOLUME_REL_U) : derivedAnionVolumes().get(r.id);
   let estimatedSize = false;
   if (!radius && volume) {
     const rv = radiusFromVolumeA(volume.value);
