@@ -32,6 +32,15 @@ describe('saltsmith lattice', () => {
     expect(Math.abs(j.latticeEnthalpyKJ.value / 2255 - 1)).toBeLessThan(0.08);
   });
 
+  it('runs Born–Mayer with --structure and --volume (CaF₂)', async () => {
+    // V_m = a³/4 with a = 5.463 Å (Wyckoff 1963); Born–Haber 2635 kJ/mol (Wagman 1982 ΔfH° + CRC IE/EA).
+    const { code, out } = await run(['lattice', '--cation', 'Ca2+', '--anion', 'F-', '--method', 'born-mayer', '--structure', 'fluorite', '--volume', String(5.463 ** 3 / 4 / 1000), '--json']);
+    expect(code).toBe(0);
+    const j = JSON.parse(out);
+    expect(j.methodChosen).toBe('born-mayer');
+    expect(Math.abs(j.latticeEnthalpyKJ.value / 2635 - 1)).toBeLessThan(0.06);
+  });
+
   it('rejects unknown ions and methods with usage errors, and bad numbers with a field name', async () => {
     expect((await run(['lattice', '--cation', 'Qq+', '--anion', 'Cl-'])).code).toBe(2);
     expect((await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--method', 'magic'])).code).toBe(2);
