@@ -89,12 +89,12 @@ describe('project files in Chromium', () => {
     page.once('dialog', (d) => void d.accept());
     await page.getByRole('button', { name: `Delete ${projectName}` }).click();
     await page.getByRole('button', { name: `Delete ${projectName}` }).waitFor({ state: 'detached' }).catch(() => undefined);
-    await expect.poll(async () => page.getByRole('button', { name: `Open ${projectName}` }).count()).toBe(0);
+    await expect.poll(async () => page.getByRole('heading', { name: projectName, exact: true }).count()).toBe(0);
 
     await page.getByLabel('Import a project file').setInputFiles({ name: first.name, mimeType: 'application/json', buffer: Buffer.from(first.text) });
     await page.getByRole('button', { name: 'Import as a new project' }).click();
     await page.goto(`${BASE_URL}#/projects`);
-    await page.getByRole('button', { name: `Open ${projectName}` }).waitFor();
+    await page.getByRole('heading', { name: projectName, exact: true }).waitFor();
     await page.getByRole('region', { name: 'Project files' }).getByLabel('Project', { exact: true }).selectOption({ label: projectName });
     const second = await exportOpenProject(page);
     expect(comparable(second.text)).toStrictEqual(comparable(first.text));
