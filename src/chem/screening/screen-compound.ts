@@ -10,7 +10,7 @@ import { drugProtolyte, phSolubilityProfile, solubilityAtPh, type DrugAcidBase, 
 import type { CriterionInputs } from './ranking';
 import type { RobustnessRow, RobustnessShared } from './rank-robustness';
 import { log10KspFromSaltSolubility } from './salt-equilibrium';
-import { screeningSettingsSchema, type ScreeningMedium, type ScreeningSettings } from './settings';
+import { parseScreeningSettings, type ScreeningMedium, type ScreeningSettings } from './settings';
 import { requireAscendingPkas, type Protolyte } from './speciation';
 
 /**
@@ -254,7 +254,7 @@ function mediaFor(settings: ScreeningSettings): (ScreeningMedium & { gastric: bo
 
 /** Run the screen. Throws ChemInputError for bad compound data; a bad candidate gets a row with `error`. */
 export function screenCompound(input: ScreenCompoundInput): ScreenResult {
-  const settings = screeningSettingsSchema.parse(input.settings ?? {});
+  const settings = parseScreeningSettings(input.settings);
   const c = input.compound;
   const drug: DrugAcidBase = { kind: c.kind, pKas: c.pKas.map((p) => p.value), ionCharge: c.ionCharge };
   const drugP = drugProtolyte(drug);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ChemInputError } from '../result';
 
 /**
  * Screening settings, validated with zod (the app keeps them in the project's `settings.extra.screening`).
@@ -76,3 +77,15 @@ export type ScreeningSettings = z.infer<typeof screeningSettingsSchema>;
 
 /** Settings with every default filled in. */
 export const defaultScreeningSettings = (): ScreeningSettings => screeningSettingsSchema.parse({});
+
+/**
+ * Validate settings, turning a zod failure into a ChemInputError that names the first bad field
+ * (e.g. `temperatureK` below 273.15 K), so callers see one error type for bad input.
+ */
+export function parseScreeningSettings(input: unknown): ScreeningSettings {
+  const r = screeningSettingsSchema.safeParse(input ?? {});
+  if (r.success) return r.data;
+  const issue = r.error.issues[0]!;
+  const field = `settings.${issue.path.map(String).join('.') || 'root'}`;
+  throw new ChemInputError(field, issue.message, 'see screeningSettingsSchema (settings.ts) for each field’s range');
+}

@@ -14,7 +14,7 @@ import {
   rankCandidates,
   rankRobustness,
   screenCompound,
-  screeningSettingsSchema,
+  parseScreeningSettings,
   SCREENING_CAUTIONS,
   counterIonProtolyte,
   type ScreenResult,
@@ -160,7 +160,7 @@ export const screenCommand: CliCommand = {
         if (tc < -273.15) throw new ChemInputError('--temperature-c', `${tc} °C is below absolute zero`, 'a temperature above −273.15 °C');
         settingsIn.temperatureK = tc + 273.15;
       }
-      const settings = screeningSettingsSchema.parse(settingsIn);
+      const settings = parseScreeningSettings(settingsIn);
       const skipped: { id: string; label: string; deltaPka: number }[] = [];
       const candidates = candidatesFromLibrary(
         ions,
