@@ -22,6 +22,8 @@ export interface VanTHoffFit {
   /** Intercept of ln S against 1/T (the apparent ΔS_sol/R for S in mole-fraction units). */
   interceptLnS: number;
   slopeK: number;
+  /** Mean of 1/T over the points, K⁻¹ (the line pivots about it). */
+  meanInverseTemperaturePerK: number;
   rSquared: number;
   n: number;
   degreesOfFreedom: number;
@@ -61,9 +63,30 @@ export function vantHoffFit(points: readonly SolubilityAtTemperature[]): VanTHof
     standardErrorKJ: se,
     interceptLnS: fit.intercept,
     slopeK: fit.slope,
+    meanInverseTemperaturePerK: points.reduce((a, p) => a + 1 / p.temperatureK, 0) / points.length,
     rSquared: fit.rSquared,
     n: fit.n,
     degreesOfFreedom: fit.degreesOfFreedom,
     residualsLnS: fit.residuals,
   };
+}
+
+/**
+ * Points of the fitted line ln S = intercept + slope/T for plotting beside the measurements, with the
+ * line's own ±1 standard error band from the slope's standard error (intercept error ignored: the
+ * band shows how well the slope, i.e. ΔH, is determined).
+ */
+export function vantHoffLine(
+  fit: VanTHoffFit,
+  temperaturesK: readonly number[],
+): { temperatureK: number; inverseTemperaturePerK: number; lnS: number; lnSLow: number; lnSHigh: number }[] {
+  const se = fit.standardErrorKJ / GAS_CONSTANT_KJ_PER_MOL_K;
+  const meanInvT = fit.meanInverseTemperaturePerK;
+  return temperaturesK.map((t) => {
+    requireFiniteInRange('temperatureK', t, 1e-6, 1000, 'K');
+    const x = 1 / t;
+    const lnS = fit.interceptLnS + fit.slopeK * x;
+    const half = Math.abs(se * (x - meanInvT));
+    return { temperatureK: t, inverseTemperaturePerK: x, lnS, lnSLow: lnS - half, lnSHigh: lnS + half };
+  });
 }

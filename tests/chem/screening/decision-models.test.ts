@@ -14,6 +14,7 @@ import {
   sensibleStoichiometries,
   solubilityClass,
   vantHoffFit,
+  vantHoffLine,
   WATER_MOLAR_MASS_G_PER_MOL,
   debyeHuckelA,
   daviesLog10Gamma,
@@ -167,6 +168,12 @@ describe('van ’t Hoff fit', () => {
     const f = vantHoffFit(pts);
     expect(f.standardErrorKJ).toBeGreaterThan(0.05);
     expect(Math.abs(f.solutionEnthalpyKJ.value - dH)).toBeLessThan(3 * f.standardErrorKJ);
+  });
+  it('the plotted line passes through exact data and its band has zero width for a perfect fit', () => {
+    const pts = [288.15, 298.15, 310.15].map((T) => ({ temperatureK: T, solubility: Math.exp(-30 / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 5) }));
+    const line = vantHoffLine(vantHoffFit(pts), [288.15, 310.15]);
+    expect(line[0]!.lnS).toBeCloseTo(Math.log(pts[0]!.solubility), 9);
+    expect(line[1]!.lnSHigh - line[1]!.lnSLow).toBeLessThan(1e-9);
   });
   it('rejects fewer than three points and a single temperature', () => {
     expect(() => vantHoffFit([{ temperatureK: 298, solubility: 1 }, { temperatureK: 310, solubility: 2 }])).toThrow(ChemInputError);
