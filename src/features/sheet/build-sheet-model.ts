@@ -8,6 +8,7 @@ import {
 import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
 import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 import type { ProjectScreening } from '@/features/screening-data/compute-screening';
+import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
 import { CRITERION_TEXT } from '@/features/ranking/criteria';
 import type { ProjectRecord } from '@/persistence/records';
 import type { SheetCell, SheetColumn, SheetModel, SheetRow, SheetSetting, ValueOrigin } from './sheet.types';
@@ -58,7 +59,8 @@ function rowCells(row: ScreenRow, score: number | null, screening: ProjectScreen
     activeFraction: num(row.activeFraction * 100, 'input'),
     saltMassPerDose: num(row.saltMassPerDoseMg, 'input'),
     log10Ksp: est(row.log10Ksp, kspOrigin ?? 'estimated'),
-    phMax: num(row.phMax, kspOrigin),
+    // The same 1σ the Ranking area shows (linearised as the rank-robustness draw perturbs pH_max).
+    phMax: num(row.phMax, kspOrigin, uncertaintiesOf(row, screening.screen.robustnessShared).phMaxSigma),
     worstDoseNumber: num(row.worst?.doseNumber ?? null, kspOrigin),
     worstPh: num(row.worst?.pH ?? null, null),
     gastricDoseNumber: num(row.gastric?.doseNumber ?? null, kspOrigin),

@@ -1,0 +1,89 @@
+import { describe, expect, it } from 'vitest';
+import Papa from 'papaparse';
+import { CRITERIA, defaultScreeningSettings, validationReport } from '@/chem';
+import { computeProjectScreening } from '@/features/screening-data/compute-screening';
+import { buildSheetModel } from '@/features/sheet/build-sheet-model';
+import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
+import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
+import { projectSettingsSchema, type CandidateRecord, type ProjectRecord } from '@/persistence/records';
+
+// The fictional demo compound (invented numbers) only drives the pipeline here: the assertions check
+// structure and consistency between sheet and CSV, never a model's value.
+const project: ProjectRecord = {
+  id: 'prj_sheet',
+  schemaVersion: 1,
+  name: 'Sheet test project',
+  createdAt: '2026-12-01T00:00:00.000Z',
+  updatedAt: '2026-12-01T00:00:00.000Z',
+  archived: false,
+  isDemo: false,
+  compound: DEMO_COMPOUND,
+  settings: projectSettingsSchema.parse({}),
+};
+const candidates: CandidateRecord[] = [...DEMO_SHORTLIST, 'ion_deleted-in-house'].map((ionId, order) => ({
+  id: `cand_${order}`,
+  schemaVersion: 1,
+  projectId: project.id,
+  ionId,
+  drugPerSalt: ionId === 'sulfate' ? 2 : 1,
+  counterIonPerSalt: 1,
+  hydrateWater: 0,
+  addedAt: '2026-12-01T00:00:00.000Z',
+  order,
+}));
+
+async function model() {
+  const screening = await computeProjectScreening({ project, candidates, measurements: [], customIons: [] });
+  return buildSheetModel({ project, screening, validation: validationReport(), generatedAt: '2026-12-01T12:00:00.000Z', appVersion: 'test' });
+}
+
+describe('sheet model from a real screening', () => {
+  it('lists every shortlisted candidate once, ranked by score, the unscreenable one last with its reason', async () => {
+    const m = await model();
+    expect(m.rows.map((r) => r.id).sort()).toEqual(candidates.map((c) => c.id).sort());
+    const ranked = m.rows.filter((r) => r.rank !== null);
+    expect(ranked.map((r) => r.rank)).toEqual(ranked.map((_, i) => i + 1));
+    const scores = ranked.map((r) => r.cells.score?.value as number);
+    for (let i = 1; i < scores.length; i++) expect(scores[i]).toBeLessThanOrEqual(scores[i - 1] as number);
+    const last = m.rows[m.rows.length - 1];
+    expect(last?.rank).toBeNull();
+    expect(last?.reasons.join(' ')).toMatch(/not in the counter-ion library/);
+  });
+
+  it('carries uncertainties and origins, and only finite numbers', async () => {
+    const m = await model();
+    for (const r of m.rows) {
+      for (const cell of Object.values(r.cells)) {
+        if (typeof cell.value === 'number') expect(Number.isFinite(cell.value)).toBe(true);
+        if (cell.uncertainty != null) expect(cell.uncertainty).toBeGreaterThan(0);
+      }
+    }
+    const first = m.rows[0];
+    expect(first?.cells.phMax?.uncertainty).toBeGreaterThan(0);
+    expect(first?.cells.solutionEnthalpy?.origin).toBe('estimated');
+    expect(first?.cells.solutionEnthalpy?.uncertainty).toBeGreaterThan(0);
+    expect(m.energyCycles.length).toBeGreaterThan(0);
+    expect(m.solubility?.series[0]?.kind).toBe('free-form');
+    expect(m.confidence.length).toBeGreaterThan(0);
+    // The project has no stored weights, so the sheet shows the screening defaults, in criterion order.
+    const defaults = defaultScreeningSettings().weights;
+    expect(m.weights.map((w) => w.value)).toEqual(CRITERIA.map((k) => defaults[k]));
+  });
+
+  it('writes the same numbers to the CSV, column by column', async () => {
+    const m = await model();
+    const parsed = Papa.parse<unknown[]>(sheetToCsv(m), { dynamicTyping: true, delimiter: ',', newline: '\r\n' });
+    expect(parsed.errors).toEqual([]);
+    const header = parsed.data[0] as string[];
+    expect(header).toEqual(csvHeader(m.columns));
+    m.rows.forEach((r, i) => {
+      const line = parsed.data[i + 1] as unknown[];
+      expect(line[1]).toBe(r.label);
+      for (const c of m.columns) {
+        const v = r.cells[c.key]?.value ?? null;
+        const col = header.indexOf(c.unit ? `${c.label} (${c.unit})` : c.label);
+        expect(line[col]).toBe(typeof v === 'number' ? csvNumber(v) : v);
+      }
+    });
+  });
+});
