@@ -2,7 +2,7 @@ import { useEffect, useId, useRef, useState } from 'react';
 import type { ScreeningSettings } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
 import type { ProjectRecord } from '@/persistence/records';
-import { SCREENING_SETTINGS_KEY, screeningBlockOf } from '@/features/screening-data/screening-settings';
+import { SCREENING_SETTINGS_KEY } from '@/features/screening-data/screening-settings';
 import {
   CONDITION_FIELDS,
   conditionsDraftOf,
@@ -36,15 +36,22 @@ export function ScreeningConditions({ project, settings }: { project: ProjectRec
     setState('saved');
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [project.id]);
-  useEffect(() => () => {
-    if (timer.current) clearTimeout(timer.current);
-  }, []);
+  const pending = useRef<(() => void) | null>(null);
+  // Closing the area must not lose an edit still waiting for its save: save it now.
+  useEffect(
+    () => () => {
+      if (timer.current) clearTimeout(timer.current);
+      pending.current?.();
+    },
+    [],
+  );
 
   const change = (key: keyof ConditionsDraft, value: string) => {
     const next = { ...draft, [key]: value } as ConditionsDraft;
     setDraft(next);
     const r = conditionsFromDraft(next, project.settings, settings);
     if (timer.current) clearTimeout(timer.current);
+    pending.current = null;
     if (!r.ok) {
       setErrors(r.errors);
       setState('invalid');
@@ -52,13 +59,31 @@ export function ScreeningConditions({ project, settings }: { project: ProjectRec
     }
     setErrors({});
     setState('pending');
-    timer.current = setTimeout(() => {
+    const save = () => {
+      pending.current = null;
       void (async () => {
-        await projectsRepo.updateSettings(project.id, { ...r.projectSettings, extra: project.settings.extra });
-        await projectsRepo.updateExtraSettings(project.id, SCREENING_SETTINGS_KEY, screeningBlockOf(r.screening));
+        // Write only the fields this form owns, on top of what is stored now (weights may have moved).
+        const current = await projectsRepo.get(project.id);
+        if (!current) return;
+        const stored = current.settings.extra[SCREENING_SETTINGS_KEY];
+        const block = {
+          ...(stored && typeof stored === 'object' ? stored : {}),
+          gastricPh: r.screening.gastricPh,
+          activityModel: r.screening.activityModel,
+          deltaPkaBands: r.screening.deltaPkaBands,
+        };
+        await projectsRepo.updateSettings(project.id, {
+          ...current.settings,
+          gastricChlorideM: r.projectSettings.gastricChlorideM,
+          microenvironmentPh: r.projectSettings.microenvironmentPh,
+          temperatureC: r.projectSettings.temperatureC,
+          extra: { ...current.settings.extra, [SCREENING_SETTINGS_KEY]: block },
+        });
         setState('saved');
       })();
-    }, SAVE_DELAY_MS);
+    };
+    pending.current = save;
+    timer.current = setTimeout(save, SAVE_DELAY_MS);
   };
 
   const field = (key: Exclude<keyof ConditionsDraft, 'activityModel'>) => {

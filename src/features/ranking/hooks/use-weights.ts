@@ -28,9 +28,14 @@ export function useWeights(project: ProjectRecord): {
     if (!timer.current) setLocal(JSON.parse(storedKey) as ScreeningWeights);
   }, [storedKey, project.id]);
 
+  const pending = useRef<(() => void) | null>(null);
+
+  // Leaving the area (unmount) must not lose a change that is still waiting to be saved: save it now.
   useEffect(
     () => () => {
       if (timer.current) clearTimeout(timer.current);
+      timer.current = null;
+      pending.current?.();
     },
     [],
   );
@@ -40,11 +45,16 @@ export function useWeights(project: ProjectRecord): {
     setLocal(valid);
     setSaving(true);
     if (timer.current) clearTimeout(timer.current);
-    timer.current = setTimeout(() => {
-      timer.current = null;
+    const save = () => {
+      pending.current = null;
       const p = projectRef.current;
       const block = screeningBlockOf({ ...screeningSettingsOf(p), weights: valid });
       void projectsRepo.updateExtraSettings(p.id, SCREENING_SETTINGS_KEY, block).finally(() => setSaving(false));
+    };
+    pending.current = save;
+    timer.current = setTimeout(() => {
+      timer.current = null;
+      save();
     }, SAVE_DELAY_MS);
   }, []);
 
