@@ -92,7 +92,7 @@ export interface Reason {
 }
 
 export interface ScreenFlag {
-  id: 'likely-poorly-soluble' | 'disproportionation' | 'cocrystal-risk' | 'estimated-ksp';
+  id: 'likely-poorly-soluble' | 'salt-poorly-soluble' | 'disproportionation' | 'cocrystal-risk' | 'estimated-ksp';
   text: string;
   /** The rule that raised it, with its source. */
   rule: string;
@@ -498,6 +498,23 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
       }
     } else {
       reasons.push({ kind: 'note', criterion: 'solubility', text: 'no dose given: dose numbers not computed' });
+    }
+
+    // The salt's own solubility, where the salt is the solid (below pH_max): a salt that cannot carry the
+    // dose even there is poorly soluble in itself — unlike the free-form limit above pH_max, which every
+    // salt of this drug shares and so does not tell one salt from another.
+    const saltBranch = profile.points.filter((pt) => pt.solid === 'salt');
+    if (dose !== null && saltBranch.length > 0) {
+      const lowest = saltBranch.reduce((a, b) => (b.solubilityM < a.solubilityM ? b : a));
+      const mg = toMg(lowest.solubilityM);
+      const d0 = doseNumber(dose, mg);
+      if (d0 > 1) {
+        flags.push({
+          id: 'salt-poorly-soluble',
+          text: `salt poorly soluble in itself: ${fmt(mg)} mg/mL at pH ${fmt(lowest.pH)} where the salt is the solid (D₀ ${fmt(d0)})`,
+          rule: 'salt-limited solubility below the highest dose in 250 mL (the ICH M9 (2019) volume) on the salt branch, below pH_max — a screening rule of our own (common practice)',
+        });
+      }
     }
 
     // Media: gastric (chloride, sodium) and user buffers, with the common-ion effect.

@@ -74,6 +74,20 @@ describe('screenCompound', () => {
     expect(p.solubilityM).toBeCloseTo(5 / row.saltMolarMassGPerMol, 10);
   });
 
+  it('flags a salt poorly soluble in itself only when its own (salt-branch) solubility cannot carry the dose', () => {
+    // Dose 100 mg in 250 mL needs 0.4 mg/mL (ICH M9 (2019) volume). A measured 0.05 mg/mL salt falls
+    // below it where the salt is the solid; a measured 20 mg/mL salt does not.
+    const at = (mg: number) => ({ kind: 'solubility' as const, value: mg, unit: 'mg/mL', ph: 3, temperatureK: 310.15, medium: 'buffer', text: '' });
+    const r = screenCompound({
+      compound,
+      drugIon: di,
+      candidates: [candidate('mesylate', { measurements: [at(0.05)] }), candidate('chloride', { measurements: [at(20)] })],
+    });
+    const flagged = (id: string) => r.rows.find((row) => row.id === id)!.flags.some((f) => f.id === 'salt-poorly-soluble');
+    expect(flagged('mesylate')).toBe(true);
+    expect(flagged('chloride')).toBe(false);
+  });
+
   it('an unmeasured K_sp is labelled an estimate with its spread', () => {
     const r = screenCompound({ compound, drugIon: di, candidates: [candidate('mesylate')] });
     const row = r.rows[0]!;
