@@ -1,8 +1,10 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { ChemInputError, parseStructure, type ParsedStructure } from '@/chem';
 
-/** Delay before the stored structure is parsed, ms: lets the first screen paint and settle first. */
-const DEFER_FIRST_PARSE_MS = 400;
+/** Longest wait for an idle moment before the stored structure is parsed, ms. */
+const IDLE_TIMEOUT_MS = 2000;
+/** Where the browser has no idle callback: delay before the stored structure is parsed, ms. */
+const FALLBACK_DELAY_MS = 1500;
 
 export interface GoodStructure {
   smiles: string;
@@ -47,12 +49,19 @@ export function useStructureCheck(initialSmiles: string) {
   }, []);
 
   // The stored structure, drawn on open (and when another project opens). The ~1 MB chemistry library
-  // is fetched only after the first screen has settled, and not at all if the area closes before.
+  // is fetched when the browser is idle after the first screen, and not at all if the area closes before.
   useEffect(() => {
-    const t = setTimeout(() => void check(initialSmiles), DEFER_FIRST_PARSE_MS);
-    return () => {
-      clearTimeout(t);
+    const run = () => void check(initialSmiles);
+    const w = globalThis as {
+      requestIdleCallback?: (cb: () => void, opts?: { timeout: number }) => number;
+      cancelIdleCallback?: (handle: number) => void;
     };
+    if (typeof w.requestIdleCallback === 'function') {
+      const handle = w.requestIdleCallback(run, { timeout: IDLE_TIMEOUT_MS });
+      return () => w.cancelIdleCallback?.(handle);
+    }
+    const t = setTimeout(run, FALLBACK_DELAY_MS);
+    return () => clearTimeout(t);
   }, [initialSmiles, check]);
 
   return { good, status, check };
