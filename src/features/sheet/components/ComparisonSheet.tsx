@@ -5,6 +5,9 @@ import { ORIGIN_MARK, cellText, formatValue } from '../sheet-format';
 import type { SheetColumnGroup, SheetModel, SheetSetting } from '../sheet.types';
 import '../sheet.css';
 
+/** A percentage to one decimal, typographic minus. */
+const pct = (x: number) => (Number.isFinite(x) ? x.toFixed(1).replace(/^-/, '\u2212') : '—');
+
 const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeStyle: 'short' });
 
 function SettingsTable({ caption, items }: { caption: string; items: SheetSetting[] }) {
@@ -201,9 +204,9 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
                 <tr key={m.label}>
                   <th scope="row">{m.label}</th>
                   <td className="num">{m.n}</td>
-                  <td className="num">{formatValue(m.meanAbsPercentError)}</td>
-                  <td className="num">{formatValue(m.maxAbsPercentError)}</td>
-                  <td className="num">{formatValue(m.signedBiasPercent)}</td>
+                  <td className="num">{pct(m.meanAbsPercentError)}</td>
+                  <td className="num">{pct(m.maxAbsPercentError)}</td>
+                  <td className="num">{pct(m.signedBiasPercent)}</td>
                 </tr>
               ))}
             </tbody>

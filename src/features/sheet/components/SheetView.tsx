@@ -53,6 +53,7 @@ export function SheetView({
         >
           Download CSV
         </button>
+        <span className="sheet-toolbar-note">Both carry the cautions: estimates screen, they do not establish a salt form.</span>
         <button type="button" onClick={onClose}>
           Back to the workbench
         </button>
