@@ -61,3 +61,28 @@ describe('offline after one visit (service worker precache)', () => {
     expect(s.errors.filter((e) => !/ERR_INTERNET_DISCONNECTED/.test(e))).toEqual([]);
   });
 });
+
+describe('storage failures are shown, not swallowed', () => {
+  it('says so plainly when another tab takes the database away', async () => {
+    const { page } = s;
+    await page.goto(BASE_URL);
+    await page.getByRole('navigation', { name: 'Workbench areas' }).waitFor();
+    await page.getByText('Demorazine is fictional').waitFor();
+    // Another connection asks for a newer schema version, as a newer Saltsmith in a second tab would
+    // (W3C Indexed Database API: the open connection receives "versionchange").
+    await page.evaluate(
+      () =>
+        new Promise<void>((res, rej) => {
+          const req = indexedDB.open('saltsmith', 9999);
+          req.onsuccess = () => {
+            req.result.close();
+            res();
+          };
+          req.onerror = () => rej(req.error);
+        }),
+    );
+    const banner = page.getByRole('alert').filter({ hasText: 'Storage problem' });
+    await banner.waitFor();
+    await expect(banner.textContent()).resolves.toMatch(/Reload this tab/);
+  });
+});
