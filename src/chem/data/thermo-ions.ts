@@ -1,5 +1,5 @@
 import type { IonShape } from '../thermo/thermo.types';
-import { SRC } from './thermo-sources';
+import { CHECKED, SRC } from './thermo-sources';
 
 /** A number read (or recalled) from a published table, with its citation. */
 export interface SourcedValue {
@@ -34,9 +34,20 @@ const mem = (value: number, source: string): SourcedValue => ({
   fromMemory: true,
 });
 
+/** A value entered from memory and since compared with a published copy of its table (see CHECKED). */
+const chk = (value: number, source: string, check: string): SourcedValue => ({
+  value,
+  source: `${source}; ${check}`,
+  fromMemory: false,
+});
+
 /**
  * Bundled ions. Every value cites its table; all were entered from memory of those tables (no copy of
- * the tables was available offline when this file was written) and are marked so. The tests compare the
+ * the tables was available offline when this file was written) and are marked so, except the Shannon CN VI
+ * radii, which were compared on 2026-12-01 with a published copy of Shannon's table (all 16 agree to the
+ * 0.01 Å that copy gives; Al³⁺ 0.535 Å appears there as 54 pm) and cite that copy (`chk`). The Goldschmidt
+ * and thermochemical radii, Jenkins volumes and Marcus hydration enthalpies could not be found in a readable
+ * copy and stay "from memory". The tests compare the
  * data with independent published quantities (lattice and solution enthalpies from the NBS tables), which
  * catches gross slips but not a 1 % transcription error — check a value against its source before
  * publishing a number that depends on it.
@@ -53,58 +64,58 @@ export const THERMO_IONS: readonly ThermoIonRecord[] = [
   // ---- alkali metal cations ----
   {
     id: 'lithium', label: 'Li⁺', symbols: ['Li+', 'Li'], charge: 1, shape: 'monatomic', formula: 'Li',
-    shannonRadiusA: mem(0.76, SRC.shannon1976), goldschmidtRadiusA: mem(0.78, SRC.goldschmidt),
+    shannonRadiusA: chk(0.76, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(0.78, SRC.goldschmidt),
     volumeNm3: mem(0.00199, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-531, SRC.marcusHydration), bornExponent: 5,
   },
   {
     id: 'sodium', label: 'Na⁺', symbols: ['Na+', 'Na'], charge: 1, shape: 'monatomic', formula: 'Na',
-    shannonRadiusA: mem(1.02, SRC.shannon1976), goldschmidtRadiusA: mem(0.98, SRC.goldschmidt),
+    shannonRadiusA: chk(1.02, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(0.98, SRC.goldschmidt),
     volumeNm3: mem(0.00394, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-416, SRC.marcusHydration), bornExponent: 7,
   },
   {
     id: 'potassium', label: 'K⁺', symbols: ['K+', 'K'], charge: 1, shape: 'monatomic', formula: 'K',
-    shannonRadiusA: mem(1.38, SRC.shannon1976), goldschmidtRadiusA: mem(1.33, SRC.goldschmidt),
+    shannonRadiusA: chk(1.38, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.33, SRC.goldschmidt),
     volumeNm3: mem(0.00986, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-334, SRC.marcusHydration), bornExponent: 9,
   },
   {
     id: 'rubidium', label: 'Rb⁺', symbols: ['Rb+', 'Rb'], charge: 1, shape: 'monatomic', formula: 'Rb',
-    shannonRadiusA: mem(1.52, SRC.shannon1976), goldschmidtRadiusA: mem(1.49, SRC.goldschmidt),
+    shannonRadiusA: chk(1.52, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.49, SRC.goldschmidt),
     volumeNm3: mem(0.01386, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-308, SRC.marcusHydration), bornExponent: 10,
   },
   {
     id: 'caesium', label: 'Cs⁺', symbols: ['Cs+', 'Cs'], charge: 1, shape: 'monatomic', formula: 'Cs',
-    shannonRadiusA: mem(1.67, SRC.shannon1976), goldschmidtRadiusA: mem(1.65, SRC.goldschmidt),
+    shannonRadiusA: chk(1.67, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.65, SRC.goldschmidt),
     volumeNm3: mem(0.01882, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-283, SRC.marcusHydration), bornExponent: 12,
   },
   // ---- alkaline-earth and other metal cations ----
   {
     id: 'magnesium', label: 'Mg²⁺', symbols: ['Mg2+', 'Mg++', 'Mg'], charge: 2, shape: 'monatomic', formula: 'Mg',
-    shannonRadiusA: mem(0.72, SRC.shannon1976), goldschmidtRadiusA: mem(0.78, SRC.goldschmidt),
+    shannonRadiusA: chk(0.72, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(0.78, SRC.goldschmidt),
     volumeNm3: mem(0.00199, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-1949, SRC.marcusHydration), bornExponent: 7,
   },
   {
     id: 'calcium', label: 'Ca²⁺', symbols: ['Ca2+', 'Ca++', 'Ca'], charge: 2, shape: 'monatomic', formula: 'Ca',
-    shannonRadiusA: mem(1.0, SRC.shannon1976), goldschmidtRadiusA: mem(1.06, SRC.goldschmidt),
+    shannonRadiusA: chk(1.0, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.06, SRC.goldschmidt),
     volumeNm3: mem(0.00499, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-1602, SRC.marcusHydration), bornExponent: 9,
   },
   {
     id: 'strontium', label: 'Sr²⁺', symbols: ['Sr2+', 'Sr++', 'Sr'], charge: 2, shape: 'monatomic', formula: 'Sr',
-    shannonRadiusA: mem(1.18, SRC.shannon1976), goldschmidtRadiusA: mem(1.27, SRC.goldschmidt),
+    shannonRadiusA: chk(1.18, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.27, SRC.goldschmidt),
     volumeNm3: mem(0.00858, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-1470, SRC.marcusHydration), bornExponent: 10,
   },
   {
     id: 'barium', label: 'Ba²⁺', symbols: ['Ba2+', 'Ba++', 'Ba'], charge: 2, shape: 'monatomic', formula: 'Ba',
-    shannonRadiusA: mem(1.35, SRC.shannon1976), goldschmidtRadiusA: mem(1.43, SRC.goldschmidt),
+    shannonRadiusA: chk(1.35, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.43, SRC.goldschmidt),
     volumeNm3: mem(0.01225, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-1332, SRC.marcusHydration), bornExponent: 12,
   },
   {
     id: 'zinc', label: 'Zn²⁺', symbols: ['Zn2+', 'Zn++', 'Zn'], charge: 2, shape: 'monatomic', formula: 'Zn',
-    shannonRadiusA: mem(0.74, SRC.shannon1976), goldschmidtRadiusA: mem(0.83, SRC.goldschmidt),
+    shannonRadiusA: chk(0.74, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(0.83, SRC.goldschmidt),
     hydrationEnthalpyKJ: mem(-2070, SRC.marcusHydration), bornExponent: 9,
   },
   {
     id: 'aluminium', label: 'Al³⁺', symbols: ['Al3+', 'Al+++', 'Al'], charge: 3, shape: 'monatomic', formula: 'Al',
-    shannonRadiusA: mem(0.535, SRC.shannon1976), goldschmidtRadiusA: mem(0.57, SRC.goldschmidt),
+    shannonRadiusA: chk(0.535, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(0.57, SRC.goldschmidt),
     hydrationEnthalpyKJ: mem(-4715, SRC.marcusHydration), bornExponent: 7,
   },
   // ---- polyatomic cations ----
@@ -125,27 +136,27 @@ export const THERMO_IONS: readonly ThermoIonRecord[] = [
   // ---- halides and oxide ----
   {
     id: 'fluoride', label: 'F⁻', symbols: ['F-', 'F'], charge: -1, shape: 'monatomic', formula: 'F',
-    shannonRadiusA: mem(1.33, SRC.shannon1976), goldschmidtRadiusA: mem(1.33, SRC.goldschmidt),
+    shannonRadiusA: chk(1.33, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.33, SRC.goldschmidt),
     volumeNm3: mem(0.025, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-510, SRC.marcusHydration), bornExponent: 7,
   },
   {
     id: 'chloride', label: 'Cl⁻', symbols: ['Cl-', 'Cl'], charge: -1, shape: 'monatomic', formula: 'Cl',
-    shannonRadiusA: mem(1.81, SRC.shannon1976), goldschmidtRadiusA: mem(1.81, SRC.goldschmidt),
+    shannonRadiusA: chk(1.81, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.81, SRC.goldschmidt),
     volumeNm3: mem(0.047, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-367, SRC.marcusHydration), bornExponent: 9,
   },
   {
     id: 'bromide', label: 'Br⁻', symbols: ['Br-', 'Br'], charge: -1, shape: 'monatomic', formula: 'Br',
-    shannonRadiusA: mem(1.96, SRC.shannon1976), goldschmidtRadiusA: mem(1.96, SRC.goldschmidt),
+    shannonRadiusA: chk(1.96, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.96, SRC.goldschmidt),
     volumeNm3: mem(0.056, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-336, SRC.marcusHydration), bornExponent: 10,
   },
   {
     id: 'iodide', label: 'I⁻', symbols: ['I-', 'I'], charge: -1, shape: 'monatomic', formula: 'I',
-    shannonRadiusA: mem(2.2, SRC.shannon1976), goldschmidtRadiusA: mem(2.2, SRC.goldschmidt),
+    shannonRadiusA: chk(2.2, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(2.2, SRC.goldschmidt),
     volumeNm3: mem(0.072, SRC.jenkinsVolumes), hydrationEnthalpyKJ: mem(-291, SRC.marcusHydration), bornExponent: 12,
   },
   {
     id: 'oxide', label: 'O²⁻', symbols: ['O2-', 'O--', 'O'], charge: -2, shape: 'monatomic', formula: 'O',
-    shannonRadiusA: mem(1.4, SRC.shannon1976), goldschmidtRadiusA: mem(1.32, SRC.goldschmidt),
+    shannonRadiusA: chk(1.4, SRC.shannon1976, CHECKED.shannon), goldschmidtRadiusA: mem(1.32, SRC.goldschmidt),
     bornExponent: 7,
   },
   // ---- polyatomic anions ----

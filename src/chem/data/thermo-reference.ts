@@ -1,4 +1,4 @@
-import { SRC } from './thermo-sources';
+import { CHECKED, SRC } from './thermo-sources';
 
 /**
  * Published reference data the thermochemistry engine is checked and calibrated against. Every row names
@@ -6,12 +6,24 @@ import { SRC } from './thermo-sources';
  * the NBS tables or the CRC Handbook was available offline). fixtures/reference/*.csv hold the same rows
  * for people and other tools; tests/chem/thermo/reference-fixtures.test.ts keeps the two in step.
  *
+ * On 2026-12-01 the ΔfH° values, ionisation energies and electron affinities were compared with published
+ * copies of their tables; {@link FORMATION_ENTHALPY_CHECKS} names, per species, the copy that agrees.
+ * Species without an entry there remain "from memory" — see {@link formationEnthalpySource}.
+ *
  * Units: kJ/mol, g/cm³, Å.
  */
 
 const FM = ' — from memory';
 
-/** ΔfH° of crystalline salts, kJ/mol, 298.15 K (Wagman et al. 1982, NBS tables). */
+/**
+ * ΔfH° of crystalline salts, kJ/mol, 298.15 K (Wagman et al. 1982, NBS tables). 48 agree with the CRC
+ * Handbook table (CHECKED.crcThermo) to its 0.1 kJ/mol; NaCl and Na2SO4 also with the NBS values in
+ * reaktoro's data; NaOH, CaCl2 and BaCl2 with Thomsen's NBS-based data in reaktoro (the CRC table gives the
+ * CODATA values −425.8, −795.4 and −855.0 there). KCH3COO was corrected from −723.33 (from memory) to −723.0
+ * (CRC table) on 2026-12-01. Still from memory (the CRC table, which adopts CODATA key values for these,
+ * gives the number in brackets): NaF (−576.6), KCl (−436.5), MgF2 (−1124.2), CaF2 (−1228.0), LiOH (−487.5),
+ * KOH (−424.6), CaSO4 (−1434.5), CaCO3 (−1207.6).
+ */
 export const SOLID_FORMATION_KJ: Readonly<Record<string, number>> = {
   LiF: -615.97, LiCl: -408.61, LiBr: -351.21, LiI: -270.41,
   NaF: -573.65, NaCl: -411.15, NaBr: -361.06, NaI: -287.78,
@@ -28,10 +40,15 @@ export const SOLID_FORMATION_KJ: Readonly<Record<string, number>> = {
   NaClO4: -383.3, KClO4: -432.75, NH4ClO4: -295.31,
   Na2SO4: -1387.08, K2SO4: -1437.79, MgSO4: -1284.9, CaSO4: -1434.11, BaSO4: -1473.2,
   Na2CO3: -1130.68, K2CO3: -1151.02, CaCO3: -1206.92,
-  KH2PO4: -1568.33, NaCH3COO: -708.81, KCH3COO: -723.33,
+  KH2PO4: -1568.33, NaCH3COO: -708.81, KCH3COO: -723.0,
 };
 
-/** ΔfH° of aqueous ions at infinite dilution, kJ/mol, 298.15 K (Wagman et al. 1982; H⁺(aq) = 0). */
+/**
+ * ΔfH° of aqueous ions at infinite dilution, kJ/mol, 298.15 K (Wagman et al. 1982; H⁺(aq) = 0). Na⁺, K⁺,
+ * NH₄⁺, Cl⁻, SO₄²⁻, NO₃⁻, OH⁻ and CO₃²⁻ agree with reaktoro's NBS-cited data (CHECKED.nbsReaktoro1997);
+ * Mg²⁺, Ca²⁺, Sr²⁺ and Ba²⁺ with Thomsen's data in reaktoro (CHECKED.thomsenReaktoro). The other ten are
+ * from memory.
+ */
 export const AQUEOUS_ION_FORMATION_KJ: Readonly<Record<string, number>> = {
   lithium: -278.49, sodium: -240.12, potassium: -252.38, rubidium: -251.17, caesium: -258.28,
   ammonium: -132.51, magnesium: -466.85, calcium: -542.83, strontium: -545.8, barium: -537.64, zinc: -153.89,
@@ -40,7 +57,13 @@ export const AQUEOUS_ION_FORMATION_KJ: Readonly<Record<string, number>> = {
   'dihydrogen-phosphate': -1296.29, acetate: -486.01,
 };
 
-/** Enthalpy of atomisation of the elements = ΔfH° of the gaseous atom, kJ/mol, 298.15 K (Wagman et al. 1982). */
+/**
+ * Enthalpy of atomisation of the elements = ΔfH° of the gaseous atom, kJ/mol, 298.15 K (Wagman et al. 1982).
+ * K, Rb, Sr, Ba, F, Br and I agree with the CRC table (CHECKED.crcThermo); F 79.38 and K 89.0 are the CODATA
+ * key values that table gives (from memory, the NBS tables have F 78.99 and K 89.24 — a 0.4 kJ/mol
+ * difference that does not matter for lattice enthalpies of 600–2900 kJ/mol). Li, Na, Cs, Mg, Ca and Cl are
+ * NBS values from memory; the CRC table gives the CODATA values 159.3, 107.5, 76.5, 147.1, 177.8, 121.3.
+ */
 export const ATOM_FORMATION_KJ: Readonly<Record<string, number>> = {
   Li: 159.37, Na: 107.32, K: 89.0, Rb: 80.88, Cs: 76.06, Mg: 147.7, Ca: 178.2, Sr: 164.4, Ba: 180.0,
   F: 79.38, Cl: 121.68, Br: 111.88, I: 106.84,
@@ -48,7 +71,9 @@ export const ATOM_FORMATION_KJ: Readonly<Record<string, number>> = {
 
 /**
  * Ionisation energies (sum of the first z), kJ/mol, and electron affinities, kJ/mol — CRC Handbook
- * "Ionization Energies of Atoms and Atomic Ions" and "Electron Affinities" (NIST values), at 0 K. The
+ * "Ionization Energies of Atoms and Atomic Ions" and "Electron Affinities" (NIST values), at 0 K. All 18
+ * values agree to 0.1 kJ/mol with the eV table in iRASPA/RASPA3 (CHECKED.ieEa) converted at 96.485 kJ/mol
+ * per eV (e.g. Na 5.139076 eV → 495.85, Cl 3.612724 eV → 348.57). The
  * (5/2)RT corrections that turn them into 298 K enthalpies cancel around a neutral salt's cycle (one
  * electron out per electron in), so they are left out; see the Born–Haber test.
  */
@@ -58,7 +83,44 @@ export const IONISATION_ENERGY_SUM_KJ: Readonly<Record<string, number>> = {
 };
 export const ELECTRON_AFFINITY_KJ: Readonly<Record<string, number>> = { F: 328.2, Cl: 348.6, Br: 324.5, I: 295.2 };
 
-export const CYCLE_DATA_SOURCE = `${SRC.nbs1982}; ionisation energies and electron affinities: CRC Handbook (NIST)${FM}`;
+export const CYCLE_DATA_SOURCE = `${SRC.nbs1982} (ΔfH°; per-species checks in FORMATION_ENTHALPY_CHECKS, the rest from memory); ionisation energies and electron affinities: CRC Handbook (NIST), ${CHECKED.ieEa}`;
+
+/** State of a species in the formation-enthalpy tables: crystal, aqueous ion, gaseous atom. */
+export type FormationState = 'cr' | 'aq' | 'g';
+
+const CRC_CR = ['LiF', 'LiCl', 'LiBr', 'LiI', 'NaBr', 'NaI', 'KF', 'KBr', 'KI', 'RbF', 'RbCl', 'RbBr', 'RbI', 'CsF', 'CsCl', 'CsBr', 'CsI',
+  'MgBr2', 'MgI2', 'CaBr2', 'CaI2', 'SrF2', 'SrBr2', 'SrI2', 'BaF2', 'BaBr2', 'BaI2', 'ZnCl2', 'NaNO3', 'KNO3', 'NH4Cl', 'NH4Br', 'NH4I',
+  'NH4NO3', 'NaClO4', 'KClO4', 'NH4ClO4', 'K2SO4', 'BaSO4', 'K2CO3', 'KH2PO4', 'NaCH3COO'];
+
+/**
+ * Per species (`formula|state`, aqueous ions by ion id): the published copy a ΔfH° value was compared with on
+ * 2026-12-01 and agrees with (to the precision of that copy). Species not listed are from memory.
+ */
+export const FORMATION_ENTHALPY_CHECKS: Readonly<Record<string, string>> = {
+  ...Object.fromEntries(CRC_CR.map((f) => [`${f}|cr`, CHECKED.crcThermo])),
+  'NaCl|cr': `${CHECKED.nbsReaktoro1997}; ${CHECKED.crcThermo}`,
+  'Na2SO4|cr': `${CHECKED.nbsReaktoro1997}; ${CHECKED.crcThermo}`,
+  'MgCl2|cr': `${CHECKED.thomsenReaktoro}; ${CHECKED.crcThermo}`,
+  'MgSO4|cr': `${CHECKED.thomsenReaktoro}; ${CHECKED.crcThermo}`,
+  'Na2CO3|cr': `${CHECKED.thomsenReaktoro}; ${CHECKED.crcThermo}`,
+  'SrCl2|cr': `${CHECKED.thomsenReaktoro}; ${CHECKED.crcThermo}`,
+  'NaOH|cr': CHECKED.thomsenReaktoro,
+  'CaCl2|cr': CHECKED.thomsenReaktoro,
+  'BaCl2|cr': CHECKED.thomsenReaktoro,
+  'KCH3COO|cr': `corrected 2026-12-01 from −723.33 (from memory) to the CRC value; ${CHECKED.crcThermo}`,
+  ...Object.fromEntries(['sodium', 'potassium', 'ammonium', 'chloride', 'sulfate', 'nitrate', 'hydroxide', 'carbonate'].map((i) => [`${i}|aq`, CHECKED.nbsReaktoro1997])),
+  ...Object.fromEntries(['magnesium', 'calcium', 'strontium', 'barium'].map((i) => [`${i}|aq`, CHECKED.thomsenReaktoro])),
+  ...Object.fromEntries(['Rb', 'Sr', 'Ba', 'Br', 'I'].map((e) => [`${e}|g`, CHECKED.crcThermo])),
+  'F|g': `CODATA key value (J. D. Cox, D. D. Wagman, V. A. Medvedev, CODATA Key Values for Thermodynamics, 1989) as given in the CRC table; ${CHECKED.crcThermo}`,
+  'K|g': `CODATA key value (J. D. Cox, D. D. Wagman, V. A. Medvedev, CODATA Key Values for Thermodynamics, 1989) as given in the CRC table; ${CHECKED.crcThermo}`,
+};
+
+/** The source of one ΔfH° value: the NBS tables plus the copy it was checked against, or "from memory". */
+export function formationEnthalpySource(species: string, state: FormationState): string {
+  const check = FORMATION_ENTHALPY_CHECKS[`${species}|${state}`];
+  if (!check) return `${SRC.nbs1982}${FM}`;
+  return check.startsWith('CODATA') ? check : `${SRC.nbs1982}; ${check}`;
+}
 
 /** How a reference salt's formula-unit volume is known. */
 export type VolumeSource =
@@ -83,7 +145,7 @@ export interface LatticeReferenceSalt {
   halogen?: string;
 }
 
-const rs = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'rock-salt', edgeA, source: SRC.wyckoff + FM });
+const rs = (edgeA: number, check?: string): VolumeSource => ({ kind: 'cell', structure: 'rock-salt', edgeA, source: check ? `${SRC.wyckoff}; ${check}` : SRC.wyckoff + FM });
 const cc = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'caesium-chloride', edgeA, source: SRC.wyckoff + FM });
 const fl = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'fluorite', edgeA, source: SRC.wyckoff + FM });
 const rho = (densityGPerCm3: number): VolumeSource => ({ kind: 'density', densityGPerCm3, source: SRC.crcDensity + FM });
@@ -94,7 +156,7 @@ const HAL: [string, string][] = [['F', 'fluoride'], ['Cl', 'chloride'], ['Br', '
 
 const ALKALI_VOLUME: Record<string, VolumeSource> = {
   LiF: rs(4.027), LiCl: rs(5.13), LiBr: rs(5.501), LiI: rs(6.0),
-  NaF: rs(4.634), NaCl: rs(5.64), NaBr: rs(5.977), NaI: rs(6.473),
+  NaF: rs(4.634), NaCl: rs(5.64, CHECKED.naclCell), NaBr: rs(5.977), NaI: rs(6.473),
   KF: rs(5.347), KCl: rs(6.293), KBr: rs(6.6), KI: rs(7.066),
   RbF: rs(5.64), RbCl: rs(6.581), RbBr: rs(6.885), RbI: rs(7.342),
   CsF: rs(6.008), CsCl: cc(4.123), CsBr: cc(4.286), CsI: cc(4.567),

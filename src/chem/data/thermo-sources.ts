@@ -26,7 +26,7 @@ export const SRC = {
   crcOrganicDensity: 'CRC Handbook of Chemistry and Physics, "Physical Constants of Organic Compounds" (density)',
   iupacWeights: 'IUPAC Commission on Isotopic Abundances and Atomic Weights, conventional atomic weights (2013)',
   zhao2003:
-    'Y. H. Zhao, M. H. Abraham, A. M. Zissimos, J. Org. Chem. 68 (2003) 7368–7373, eq. 4 (V_vdW = Σ atoms − 5.92 N_B − 14.7 R_A − 3.8 R_NR)',
+    'Y. H. Zhao, M. H. Abraham, A. M. Zissimos, J. Org. Chem. 68 (2003) 7368–7373, eq. 4 (V_vdW = Σ atoms − 5.92 N_B − 14.7 R_A − 3.8 R_NR; the three corrections checked 2026-12-01 against mordred-descriptor/mordred mordred/VdwVolumeABC.py, which implements the paper)',
   bondi1964: 'A. Bondi, J. Phys. Chem. 68 (1964) 441–451 (van der Waals radii)',
   kitaigorodskii:
     'A. I. Kitaigorodskii, Molecular Crystals and Molecules (Academic Press, 1973): packing coefficients 0.65–0.77',
@@ -34,4 +34,27 @@ export const SRC = {
   born1920: 'M. Born, Z. Phys. 1 (1920) 45 (Born solvation energy)',
   waterDielectric:
     'Water at 298.15 K: ε_r = 78.36, dε_r/dT = −0.361 K⁻¹ (D. G. Archer & P. Wang, J. Phys. Chem. Ref. Data 19 (1990) 371) — from memory',
+} as const;
+
+/**
+ * Secondary sources read on 2026-12-01 to check values first entered from memory (public repositories that
+ * reproduce the primary table; each names the repository, the file and the primary it cites). A value whose
+ * source string carries one of these was compared with that file and agrees to the precision the file gives.
+ */
+export const CHECKED = {
+  shannon:
+    'checked 2026-12-01 against Anthonyrr98/Future-Style-Periodic-Table radii.js (Shannon effective ionic radii, CN VI, in pm, "from Radii for All Species", i.e. Shannon 1976)',
+  nbsReaktoro1997:
+    'checked 2026-12-01 against reaktoro/reaktoro embedded/databases/reaktoro/ExtendedUNIQUAC.v1997.yaml (Hr, cited there to the NIST/NBS tables of chemical thermodynamic properties)',
+  thomsenReaktoro:
+    'agrees with reaktoro/reaktoro embedded/databases/reaktoro/ExtendedUNIQUAC.v2023.yaml and ExtendedUNIQUAC/GarciaThesis2005.yaml (Hr of K. Thomsen\'s extended-UNIQUAC standard-state data; those rows name no primary, checked 2026-12-01)',
+  crcThermo:
+    'checked 2026-12-01 against CalebBell/chemicals "chemicals/Heat Capacity/CRC Standard Thermodynamic Properties of Chemical Substances.tsv" (CRC Handbook table, 0.1 kJ/mol)',
+  ieEa:
+    'checked 2026-12-01 against iRASPA/RASPA3 src/raspakit/charge_equilibration_wilmer_snurr.ixx (ionisation energies and electron affinities in eV from C. E. Wilmer & R. Q. Snurr, Chem. Eng. J. 171 (2011) 775, which tabulates the NIST values; converted with 1 eV = 96.485 kJ/mol)',
+  bondi:
+    'checked 2026-12-01 against gromacs/gromacs share/top/vdwradii.dat (H, C, N, O, F, P, S, Cl; the file cites Bondi 1964) and exciting/exciting tools/ase/ase/data/vdw.py (ASE table; Si, Se, Br, I marked as Bondi 1964)',
+  zhaoMordred:
+    'checked 2026-12-01 against mordred-descriptor/mordred mordred/VdwVolumeABC.py (Zhao, Abraham & Zissimos 2003 as implemented there: atom contributions (4/3)πr³ of the same radii)',
+  naclCell: 'a = 5.6402 Å read 2026-12-01 at http://www.ilpi.com/inorganic/structures/nacl/index.html (NaCl structure page)',
 } as const;
