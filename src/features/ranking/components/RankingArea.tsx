@@ -1,4 +1,4 @@
-import { useEffect, useMemo } from 'react';
+import { memo, useCallback, useDeferredValue, useEffect, useMemo } from 'react';
 import { rankCandidates, screeningWeightsSchema } from '@/chem';
 import { CAUTION_LINES } from '@/components/Cautions';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
@@ -6,9 +6,9 @@ import type { ProjectRecord } from '@/persistence/records';
 import { useProjectScreening } from '@/features/screening-data/use-screening';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import { useRobustness, ROBUSTNESS_ITERATIONS } from '../hooks/use-robustness';
+import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '../hooks/use-robustness';
 import { useWeights } from '../hooks/use-weights';
-import { displayRows } from '../ranking-rows';
+import { displayRows, type DisplayRow } from '../ranking-rows';
 import { RankingTable } from './RankingTable';
 import { ScreeningConditions } from './ScreeningConditions';
 import { SolubilityPanel } from './SolubilityPanel';
@@ -29,6 +29,54 @@ export function RankingCautions() {
   );
 }
 
+/** Rank robustness: the Monte Carlo's probabilities as bars, with its progress while it runs. */
+const RobustnessPanel = memo(function RobustnessPanelView({ robustness, rows }: { robustness: RobustnessState; rows: DisplayRow[] }) {
+  return (
+    <section className="panel" aria-labelledby="robustness-title">
+        <header className="panel-head">
+          <h2 id="robustness-title">How firm is the order?</h2>
+          {robustness.status === 'running' ? (
+            <span className="progress-wrap">
+              <label htmlFor="robustness-progress">Monte Carlo</label>{' '}
+              <progress id="robustness-progress" max={1} value={robustness.progress} />
+            </span>
+          ) : null}
+        </header>
+        <p className="muted">
+          Probability that each candidate stays in the top three when the estimates move within their stated uncertainties (pKa, S₀,
+          each salt’s K_sp), {ROBUSTNESS_ITERATIONS} draws with a fixed seed, computed in the background with the current weights.
+        </p>
+        {robustness.status === 'error' ? <p role="alert">Robustness could not be computed: {robustness.error}</p> : null}
+        {robustness.results ? (
+          <div className={robustness.status === 'running' ? 'stale' : undefined}>
+            <WhiskerBars
+              title="Probability of staying in the top three"
+              caption={rows
+                .filter((r) => r.rank !== null)
+                .map((r) => {
+                  const x = robustness.results!.find((q) => q.id === r.id);
+                  return x ? `${r.label}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first` : '';
+                })
+                .filter(Boolean)
+                .join('; ')}
+              unit="% of draws in the top three"
+              domain={[0, 100]}
+              format={(x) => `${x.toFixed(0)}`}
+              rows={rows
+                .filter((r) => r.rank !== null)
+                .map((r) => {
+                  const x = robustness.results!.find((q) => q.id === r.id);
+                  return { id: r.id, label: `${r.rank}. ${r.label}`, value: (x?.pTop3 ?? 0) * 100, note: x ? `(first ${(x.pFirst * 100).toFixed(0)} %)` : '' };
+                })}
+            />
+          </div>
+        ) : robustness.status === 'running' ? (
+          <p className="loading">Drawing…</p>
+        ) : null}
+      </section>
+  );
+});
+
 /** The Ranking area: the weighted, explained shortlist with its robustness and pH–solubility picture. */
 export function RankingArea({ project }: { project: ProjectRecord }) {
   const screening = useProjectScreening(project);
@@ -42,7 +90,17 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, weights) : []), [data, weights]);
   const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
   const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
-  const robustness = useRobustness(robustRows, weights, data?.screen.robustnessShared);
+  // The table follows the slider at once; the pictures below follow at lower priority.
+  const deferredWeights = useDeferredValue(weights);
+  const deferredRows = useDeferredValue(rows);
+  const robustness = useRobustness(robustRows, deferredWeights, data?.screen.robustnessShared);
+  const onFocus = useCallback(
+    (id: string) => {
+      focus(id);
+      goTo('energetics');
+    },
+    [focus, goTo],
+  );
 
   const candidateCount = screening.candidates?.length;
   if (candidateCount === 0) {
@@ -117,13 +175,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
                 onChange={setWeights}
                 onReset={() => setWeights(screeningWeightsSchema.parse({}))}
               />
-              <RankingTable
-                rows={rows}
-                onFocus={(id) => {
-                  focus(id);
-                  goTo('energetics');
-                }}
-              />
+              <RankingTable rows={rows} onFocus={onFocus} />
             </div>
           </>
         ) : null}
@@ -131,49 +183,8 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
       {data ? (
         <>
           <ScreeningConditions project={project} settings={data.settings} />
-          <section className="panel" aria-labelledby="robustness-title">
-            <header className="panel-head">
-              <h2 id="robustness-title">How firm is the order?</h2>
-              {robustness.status === 'running' ? (
-                <span className="progress-wrap">
-                  <label htmlFor="robustness-progress">Monte Carlo</label>{' '}
-                  <progress id="robustness-progress" max={1} value={robustness.progress} />
-                </span>
-              ) : null}
-            </header>
-            <p className="muted">
-              Probability that each candidate stays in the top three when the estimates move within their stated uncertainties (pKa, S₀,
-              each salt’s K_sp), {ROBUSTNESS_ITERATIONS} draws with a fixed seed, computed in the background with the current weights.
-            </p>
-            {robustness.status === 'error' ? <p role="alert">Robustness could not be computed: {robustness.error}</p> : null}
-            {robustness.results ? (
-              <div className={robustness.status === 'running' ? 'stale' : undefined}>
-                <WhiskerBars
-                  title="Probability of staying in the top three"
-                  caption={rows
-                    .filter((r) => r.rank !== null)
-                    .map((r) => {
-                      const x = robustness.results!.find((q) => q.id === r.id);
-                      return x ? `${r.label}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first` : '';
-                    })
-                    .filter(Boolean)
-                    .join('; ')}
-                  unit="% of draws in the top three"
-                  domain={[0, 100]}
-                  format={(x) => `${x.toFixed(0)}`}
-                  rows={rows
-                    .filter((r) => r.rank !== null)
-                    .map((r) => {
-                      const x = robustness.results!.find((q) => q.id === r.id);
-                      return { id: r.id, label: `${r.rank}. ${r.label}`, value: (x?.pTop3 ?? 0) * 100, note: x ? `(first ${(x.pFirst * 100).toFixed(0)} %)` : '' };
-                    })}
-                />
-              </div>
-            ) : robustness.status === 'running' ? (
-              <p className="loading">Drawing…</p>
-            ) : null}
-          </section>
-          <SolubilityPanel data={data} rows={rows} doseMg={project.compound.doseMg} />
+          <RobustnessPanel robustness={robustness} rows={deferredRows} />
+          <SolubilityPanel data={data} rows={deferredRows} doseMg={project.compound.doseMg} />
           <section className="panel" aria-labelledby="assumptions-title">
             <h2 id="assumptions-title">Assumptions of this screen</h2>
             <ul>

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { CRITERIA } from '@/chem';
 import { sig } from '@/components/charts/chart-format';
 import { useRankingViewStore, type RankingSortKey } from '@/stores/ranking-view-store';
@@ -69,6 +70,93 @@ function Dose({ d }: { d: (ShownNumber & { pH?: number }) | null }) {
   );
 }
 
+/** Cells that depend on the screen only, not on the weights: re-rendered only when the screen changes. */
+const sameScreenRow = (a: { r: DisplayRow }, b: { r: DisplayRow }) => a.r.row === b.r.row && a.r.label === b.r.label;
+
+const CandidateCell = memo(function CandidateCellView({ r, onFocus }: { r: DisplayRow; onFocus?: (id: string) => void }) {
+  return (
+    <th scope="row" className="cand-cell">
+      {onFocus ? (
+        <button type="button" className="link-button" onClick={() => onFocus(r.id)} title="Open its energy picture">
+          {r.label}
+        </button>
+      ) : (
+        r.label
+      )}
+      <div className="muted small-note">
+        {r.acceptabilityClass ? `class ${r.acceptabilityClass}` : 'no class'}
+        {r.row.hydrateWater ? ` · ${r.row.hydrateWater} H₂O` : ''}
+      </div>
+    </th>
+  );
+}, (a, b) => sameScreenRow(a, b) && a.onFocus === b.onFocus);
+
+const FixedCells = memo(function FixedCellsView({ r }: { r: DisplayRow }) {
+  return (
+    <>
+      <td>
+        {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
+        {r.row.saltFormation ? <div className="muted small-note">{r.row.saltFormation.band}</div> : null}
+      </td>
+      <td>
+        {r.phMax ? (
+          <>
+            {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span> <Origin n={r.phMax} />
+          </>
+        ) : (
+          <span className="muted">none in 0–14</span>
+        )}
+      </td>
+      <td>
+        <Dose d={r.worstDose} />
+      </td>
+      <td>
+        <Dose d={r.gastricDose} />
+      </td>
+      <td>
+        {r.solutionEnthalpy ? (
+          <>
+            {minus(r.solutionEnthalpy.value.toFixed(0))}
+            {r.solutionEnthalpy.sigma !== undefined ? <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span> : null}{' '}
+            <Origin n={r.solutionEnthalpy} />
+          </>
+        ) : (
+          <span className="muted">—</span>
+        )}
+      </td>
+      <td>
+        {(r.activeFraction * 100).toFixed(0)} %
+        {r.saltMassPerDoseMg !== null ? <div className="muted small-note">{sig(r.saltMassPerDoseMg)} mg salt/dose</div> : null}
+      </td>
+      <td className="reasons-cell">
+        {r.row.error ? <p className="field-error">Not screened: {r.row.error}</p> : null}
+        {r.row.flags.filter((f) => f.id !== 'estimated-ksp').map((f) => (
+          <span key={f.id} className={`flag flag-${f.id}`} title={f.rule}>
+            {f.text}
+          </span>
+        ))}
+        {r.row.reasons.length ? (
+          <details>
+            <summary>Why ({r.row.reasons.length})</summary>
+            <ul className="reasons">
+              {r.row.reasons.map((x, i) => (
+                <li key={i} className={`reason reason-${x.kind}`}>
+                  {x.text}
+                </li>
+              ))}
+              {r.row.flags.map((f) => (
+                <li key={`rule-${f.id}`} className="reason reason-note">
+                  Rule behind “{f.text}”: {f.rule}
+                </li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
+      </td>
+    </>
+  );
+}, sameScreenRow);
+
 /** The ranked shortlist: sortable, each number with unit, uncertainty and origin, reasons in words. */
 export function RankingTable({ rows, onFocus }: { rows: DisplayRow[]; onFocus?: (id: string) => void }) {
   const sortKey = useRankingViewStore((s) => s.sortKey);
@@ -98,81 +186,11 @@ export function RankingTable({ rows, onFocus }: { rows: DisplayRow[]; onFocus?: 
           {sorted.map((r) => (
             <tr key={r.id} className={r.row.error ? 'row-error' : undefined}>
               <td className="rank-cell">{r.rank ?? '—'}</td>
-              <th scope="row" className="cand-cell">
-                {onFocus ? (
-                  <button type="button" className="link-button" onClick={() => onFocus(r.id)} title="Open its energy picture">
-                    {r.label}
-                  </button>
-                ) : (
-                  r.label
-                )}
-                <div className="muted small-note">
-                  {r.acceptabilityClass ? `class ${r.acceptabilityClass}` : 'no class'}
-                  {r.row.hydrateWater ? ` · ${r.row.hydrateWater} H₂O` : ''}
-                </div>
-              </th>
+              <CandidateCell r={r} onFocus={onFocus} />
               <td>
                 <ScoreBar row={r} />
               </td>
-              <td>
-                {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
-                {r.row.saltFormation ? <div className="muted small-note">{r.row.saltFormation.band}</div> : null}
-              </td>
-              <td>
-                {r.phMax ? (
-                  <>
-                    {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span> <Origin n={r.phMax} />
-                  </>
-                ) : (
-                  <span className="muted">none in 0–14</span>
-                )}
-              </td>
-              <td>
-                <Dose d={r.worstDose} />
-              </td>
-              <td>
-                <Dose d={r.gastricDose} />
-              </td>
-              <td>
-                {r.solutionEnthalpy ? (
-                  <>
-                    {minus(r.solutionEnthalpy.value.toFixed(0))}
-                    {r.solutionEnthalpy.sigma !== undefined ? <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span> : null}{' '}
-                    <Origin n={r.solutionEnthalpy} />
-                  </>
-                ) : (
-                  <span className="muted">—</span>
-                )}
-              </td>
-              <td>
-                {(r.activeFraction * 100).toFixed(0)} %
-                {r.saltMassPerDoseMg !== null ? <div className="muted small-note">{sig(r.saltMassPerDoseMg)} mg salt/dose</div> : null}
-              </td>
-              <td className="reasons-cell">
-                {r.row.error ? <p className="field-error">Not screened: {r.row.error}</p> : null}
-                {r.row.flags.filter((f) => f.id !== 'estimated-ksp').map((f) => (
-                  <span key={f.id} className={`flag flag-${f.id}`} title={f.rule}>
-                    {f.text}
-                  </span>
-                ))}
-                {r.row.reasons.length ? (
-                  <details>
-                    <summary>Why ({r.row.reasons.length})</summary>
-                    <ul className="reasons">
-                      {r.row.reasons.map((x, i) => (
-                        <li key={i} className={`reason reason-${x.kind}`}>
-                          {x.text}
-                        </li>
-                      ))}
-                      {r.row.flags.map((f) => (
-                        <li key={`rule-${f.id}`} className="reason reason-note">
-                          Rule behind “{f.text}”: {f.rule}
-                        </li>
-                      ))}
-                    </ul>
-                  </details>
-                ) : null}
-              </td>
+              <FixedCells r={r} />
             </tr>
           ))}
         </tbody>

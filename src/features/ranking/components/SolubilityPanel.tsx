@@ -1,3 +1,4 @@
+import { memo, useMemo } from 'react';
 import { PhSolubilityChart, type SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 import type { ProjectScreening } from '@/features/screening-data/compute-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
@@ -13,34 +14,14 @@ export function SolubilityPanel({ data, rows, doseMg }: { data: ProjectScreening
   const ranked = rows.filter((r) => r.rank !== null).sort((a, b) => a.rank! - b.rank!);
   const top = ranked.slice(0, 3).map((r) => r.id);
   const chosen = chartIds ?? top;
-  const series: SolubilitySeries[] = [
-    {
-      id: 'free-form',
-      label: `free ${data.screen.drugKind}`,
-      kind: 'free-form',
-      points: data.screen.freeForm.profile,
-      estimated: data.screen.freeForm.intrinsicOrigin !== 'measured',
-    },
-    ...ranked
-      .filter((r) => chosen.includes(r.id))
-      .map((r) => ({
-        id: r.id,
-        label: r.label,
-        kind: 'salt' as const,
-        points: r.row.profile,
-        phMax: r.row.phMax,
-        estimated: r.row.kspOrigin !== 'measured',
-      })),
-  ];
+  const chosenKey = ranked.filter((r) => chosen.includes(r.id)).map((r) => r.id).join('|');
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const series = useMemo(() => seriesOf(data, ranked.filter((r) => chosen.includes(r.id))), [data, chosenKey]);
   return (
     <section className="panel" aria-labelledby="solubility-title">
       <h2 id="solubility-title">Solubility against pH</h2>
       <div className="solubility-layout">
-        <PhSolubilityChart
-          series={series}
-          doseLineMgPerMl={doseMg ? doseMg / VOLUME_ML : null}
-          title={`Solubility (free-form equivalents) of ${data.screen.compoundName} and its salts`}
-        />
+        <MemoChart series={series} doseMg={doseMg} title={`Solubility (free-form equivalents) of ${data.screen.compoundName} and its salts`} />
         <fieldset className="chart-picks">
           <legend>Salts on the chart</legend>
           {ranked.map((r) => (
@@ -51,12 +32,42 @@ export function SolubilityPanel({ data, rows, doseMg }: { data: ProjectScreening
           ))}
         </fieldset>
       </div>
+      <FreeFormNote data={data} />
+    </section>
+  );
+}
+
+const MemoChart = memo(function MemoChartView({ series, doseMg, title }: { series: SolubilitySeries[]; doseMg: number | null; title: string }) {
+  return <PhSolubilityChart series={series} doseLineMgPerMl={doseMg ? doseMg / VOLUME_ML : null} title={title} />;
+});
+
+function seriesOf(data: ProjectScreening, chosen: DisplayRow[]): SolubilitySeries[] {
+  return [
+    {
+      id: 'free-form',
+      label: `free ${data.screen.drugKind}`,
+      kind: 'free-form',
+      points: data.screen.freeForm.profile,
+      estimated: data.screen.freeForm.intrinsicOrigin !== 'measured',
+    },
+    ...chosen.map((r) => ({
+        id: r.id,
+        label: r.label,
+        kind: 'salt' as const,
+        points: r.row.profile,
+        phMax: r.row.phMax,
+        estimated: r.row.kspOrigin !== 'measured',
+      })),
+  ];
+}
+
+function FreeFormNote({ data }: { data: ProjectScreening }) {
+  return (
       <p className="muted">
         Free form: {data.screen.freeForm.intrinsicOrigin === 'measured' ? 'measured S₀' : 'S₀ from the General Solubility Equation (estimate)'}, log₁₀ S₀ ={' '}
         {data.screen.freeForm.log10IntrinsicM.value.toFixed(2)} ± {data.screen.freeForm.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L). Salt curves
         without a measured salt solubility rest on an estimated K_sp (±1σ about one decade) — read their position relative to each other, not as
         predictions of a measured value.
       </p>
-    </section>
   );
 }

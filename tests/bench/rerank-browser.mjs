@@ -1,0 +1,81 @@
+// Benchmark (not part of `npm test`): time from a weight-slider movement to the re-ranked table on
+// screen, in Chromium on the production build, with 60 shortlisted candidates.
+//
+//   node tests/bench/rerank-browser.mjs            (builds into /tmp/saltsmith-bench-dist first)
+//   SALTSMITH_SKIP_BUILD=1 SALTSMITH_OUT_DIR=… node tests/bench/rerank-browser.mjs
+//
+// The 60 candidates are written straight into the browser's IndexedDB (records shaped as
+// src/persistence/records.ts describes) for the fictional demo project; the demo's numbers are a
+// workload here, not data.
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium } from 'playwright-core';
+import { findChromium } from '../e2e/support/chromium.mjs';
+import { freePort, startPreview } from '../e2e/support/server.mjs';
+
+const outDir = process.env.SALTSMITH_OUT_DIR ?? '/tmp/saltsmith-bench-dist';
+if (!process.env.SALTSMITH_SKIP_BUILD) {
+  const b = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--outDir', outDir, '--emptyOutDir'], { stdio: 'inherit' });
+  if (b.status !== 0) process.exit(b.status ?? 1);
+}
+const server = await startPreview(await freePort(), ['--outDir', outDir]);
+const profile = mkdtempSync(join(tmpdir(), 'saltsmith-bench-'));
+const ctx = await chromium.launchPersistentContext(profile, {
+  executablePath: findChromium(),
+  headless: true,
+  args: ['--headless=new', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  viewport: { width: 1280, height: 800 },
+});
+try {
+  const page = ctx.pages()[0] ?? (await ctx.newPage());
+  await page.goto(server.url);
+  await page.getByText('Demorazine is fictional').waitFor();
+  const ions = ['fluoride', 'chloride', 'bromide', 'iodide', 'nitrate', 'sulfate', 'hydrogen-sulfate', 'phosphate', 'mesylate', 'esylate', 'besylate', 'tosylate', 'napsylate', 'edisylate', 'isethionate', 'camsylate', 'acetate', 'lactate', 'succinate', 'fumarate', 'maleate', 'tartrate', 'citrate', 'malate', 'oxalate', 'benzoate', 'salicylate', 'gluconate', 'glycolate', 'hippurate', 'adipate', 'aspartate', 'glutamate', 'perchlorate', 'carbonate'];
+  await page.evaluate(async (ionIds) => {
+    const db = await new Promise((res, rej) => { const r = indexedDB.open('saltsmith'); r.onsuccess = () => res(r.result); r.onerror = () => rej(r.error); });
+    const tx = db.transaction(['projects', 'candidates'], 'readwrite');
+    const projects = await new Promise((res) => { const r = tx.objectStore('projects').getAll(); r.onsuccess = () => res(r.result); });
+    const demo = projects.find((p) => p.isDemo);
+    const store = tx.objectStore('candidates');
+    await new Promise((res) => { const r = store.clear(); r.onsuccess = res; });
+    for (let i = 0; i < 60; i++) {
+      const ionId = ionIds[i % ionIds.length];
+      store.put({ id: `bench_${i}`, schemaVersion: 1, projectId: demo.id, ionId, drugPerSalt: 1, counterIonPerSalt: 1, hydrateWater: Math.floor(i / ionIds.length), addedAt: new Date().toISOString(), order: i });
+    }
+    await new Promise((res) => { tx.oncomplete = res; });
+    db.close();
+  }, ions);
+  await page.goto(`${server.url}#/ranking`);
+  await page.reload();
+  await page.getByText(/\d+ candidates ranked/).waitFor({ timeout: 60_000 });
+  const ranked = await page.getByRole('table', { name: /Ranked candidates/ }).locator('tbody tr').count();
+  // One slider movement = one input event; React commits synchronously for it, then the browser paints.
+  const times = await page.evaluate(async () => {
+    const slider = [...document.querySelectorAll('input[type=range]')].find((e) => e.labels?.[0]?.textContent === 'Tablet mass');
+    const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value').set;
+    const out = [];
+    const commit = [];
+    for (let i = 0; i < 60; i++) {
+      const t0 = performance.now();
+      setter.call(slider, String((i % 30) / 10));
+      slider.dispatchEvent(new Event('input', { bubbles: true }));
+      commit.push(performance.now() - t0);
+      await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+      out.push(performance.now() - t0);
+    }
+    commit.sort((a, b) => a - b);
+    console.log('commit median', commit[30]);
+    window.__commitMedian = commit[30];
+    return out;
+  });
+  times.sort((a, b) => a - b);
+  const commitMedianMs = await page.evaluate(() => window.__commitMedian);
+  console.log(JSON.stringify({ commitMedianMs: +commitMedianMs.toFixed(1) }));
+  console.log(JSON.stringify({ candidatesOnScreen: ranked, movements: times.length, medianMs: +times[30].toFixed(1), p95Ms: +times[56].toFixed(1), maxMs: +times[59].toFixed(1), note: 'input event → React commit → next frame, Chromium headless, 1280×800' }, null, 2));
+} finally {
+  await ctx.close();
+  rmSync(profile, { recursive: true, force: true });
+  server.stop();
+}
