@@ -48,7 +48,7 @@ function comparable(text: string) {
     measurements: f.measurements
       .map(({ id: _id, candidateId, ...rest }) => ({ ...rest, candidate: order.get(candidateId) }))
       .sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
-    customIons: f.customIons.map(({ id: _id, ...rest }) => rest),
+    customIons: f.customIons.map(({ id: _id, ...rest }) => rest).sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
   };
 }
 

@@ -45,7 +45,10 @@ async function content(projectId: string) {
     measurements: b.measurements
       .map(({ id: _i, projectId: _p, candidateId, schemaVersion: _s, ...rest }) => ({ ...rest, candidate: byCandidate.get(candidateId) }))
       .sort((x, y) => (x.recordedAt + x.kind).localeCompare(y.recordedAt + y.kind)),
-    customIons: b.customIons.map((i) => ({ ion: i.ion, overridesIonId: i.overridesIonId, scoped: i.projectId !== null })),
+    // Ids are random, so the database's order of ions is too: compare them as a sorted list.
+    customIons: b.customIons
+      .map((i) => ({ ion: i.ion, overridesIonId: i.overridesIonId, scoped: i.projectId !== null }))
+      .sort((x, y) => JSON.stringify(x).localeCompare(JSON.stringify(y))),
   };
 }
 
