@@ -51,4 +51,16 @@ describe('counter-ion library in Chromium (production build)', () => {
     await page.screenshot({ path: '/tmp/saltsmith-compound-e2e.png', fullPage: true });
     expect(s.errors).toEqual([]);
   });
+
+  it('works without the chemistry library: the first screen and saving never wait for it', async () => {
+    const { page } = s;
+    // Refuse the lazily loaded openchemlib chunk: the compound area must still open and save.
+    await page.route(/openchemlib-[^/]*\.js$/, (route) => route.abort());
+    await page.goto(BASE_URL);
+    await page.getByText('Demorazine is fictional').waitFor();
+    await page.getByText(/the chemistry library could not be loaded/).waitFor({ timeout: 15000 });
+    await page.getByText(/C18H20ClN3O, 329\.83 g\/mol/).waitFor();
+    await page.getByLabel('Name', { exact: true }).fill('Compound without pictures');
+    await page.getByText('All changes saved').waitFor();
+  });
 });

@@ -1,3 +1,4 @@
+import type * as OpenChemLib from 'openchemlib';
 import { ChemInputError, type Estimate } from '../result';
 import { molarMassGPerMol, parseFormula, type ElementCounts } from './formula';
 
@@ -23,6 +24,14 @@ export interface ParsedStructure {
   notes: string[];
 }
 
+/** The chemistry library (loaded on demand) could not be loaded: no verdict on the SMILES is possible. */
+export class StructureLibraryUnavailableError extends Error {
+  constructor(cause: unknown) {
+    super(`the chemistry library could not be loaded (${cause instanceof Error ? cause.message : String(cause)})`);
+    this.name = 'StructureLibraryUnavailableError';
+  }
+}
+
 const ACCEPTED = 'an OpenSMILES string of the neutral free form, e.g. CN1CCN(CC1)c1ccc(cc1)C(=O)N';
 
 /** openchemlib's logP increments have a typical error of about half a log unit (from memory; treat as ±0.5). */
@@ -38,7 +47,13 @@ export async function parseStructure(smiles: string, opts: { widthPx?: number; h
   const text = typeof smiles === 'string' ? smiles.trim() : '';
   if (text === '') throw new ChemInputError('smiles', 'the SMILES is empty', ACCEPTED);
   if (text.length > 2000) throw new ChemInputError('smiles', 'the SMILES is longer than 2000 characters', ACCEPTED);
-  const { Molecule, MoleculeProperties } = await import('openchemlib');
+  let ocl: typeof OpenChemLib;
+  try {
+    ocl = await import('openchemlib');
+  } catch (err) {
+    throw new StructureLibraryUnavailableError(err);
+  }
+  const { Molecule, MoleculeProperties } = ocl;
   let mol: InstanceType<typeof Molecule>;
   try {
     mol = Molecule.fromSmiles(text);

@@ -57,7 +57,13 @@ export function StructureCard({
               Drawing the structure (loading the chemistry library)…
             </p>
           ) : (
-            <p className="structure-placeholder">{compound.smiles.trim() ? 'No picture: the stored SMILES cannot be read.' : 'No structure: formula only.'}</p>
+            <p className="structure-placeholder">
+              {!compound.smiles.trim()
+                ? 'No structure: formula only.'
+                : status === 'unavailable'
+                  ? 'No picture: the chemistry library could not be loaded. Formula-based values below still hold.'
+                  : 'No picture: the stored SMILES cannot be read.'}
+            </p>
           )}
           {parsed ? <figcaption className="muted">Drawn by openchemlib from the stored SMILES.</figcaption> : null}
         </figure>

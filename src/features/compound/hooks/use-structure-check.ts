@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { ChemInputError, parseStructure, type ParsedStructure } from '@/chem';
+import { ChemInputError, StructureLibraryUnavailableError, parseStructure, type ParsedStructure } from '@/chem';
 
 /** Longest wait for an idle moment before the stored structure is parsed, ms. */
 const IDLE_TIMEOUT_MS = 2000;
@@ -11,7 +11,7 @@ export interface GoodStructure {
   parsed: ParsedStructure;
 }
 
-export type StructureStatus = 'idle' | 'loading' | 'ready' | 'error';
+export type StructureStatus = 'idle' | 'loading' | 'ready' | 'error' | 'unavailable';
 
 /**
  * Parses SMILES with openchemlib (loaded on first use) and keeps the last structure that parsed: a bad
@@ -41,6 +41,10 @@ export function useStructureCheck(initialSmiles: string) {
       return { ok: true, structure };
     } catch (err) {
       if (mine !== seq.current) return { ok: 'stale' };
+      if (err instanceof StructureLibraryUnavailableError) {
+        setStatus((s) => (s === 'ready' ? s : 'unavailable'));
+        return { ok: false, message: 'Cannot check the SMILES now: the chemistry library could not be loaded (reload the page to retry)' };
+      }
       setStatus((s) => (s === 'loading' ? 'error' : s));
       const message =
         err instanceof ChemInputError ? err.message.replace(/^smiles: /, '').replace(/ \(accepted: .*\)$/, '') : 'Cannot read this SMILES';
