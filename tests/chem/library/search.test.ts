@@ -132,3 +132,14 @@ describe('in-house ions and per-project edits', () => {
     expect(p2.ions.find((i) => i.id === 'acetate')!.origin).toBe('bundled');
   });
 });
+
+describe('counter-ion schema refuses impossible values', () => {
+  it('rejects a negative mass, a pKa outside −10…20 and a neutral ion', async () => {
+    const { counterIonSchema } = await import('@/chem/library');
+    const good = getCounterIon('tosylate')!;
+    expect(counterIonSchema.safeParse(good).success).toBe(true);
+    expect(counterIonSchema.safeParse({ ...good, molarMassGPerMol: -171 }).success).toBe(false);
+    expect(counterIonSchema.safeParse({ ...good, pKas: [{ value: 25, source: 'typo' }] }).success).toBe(false);
+    expect(counterIonSchema.safeParse({ ...good, charge: 0 }).success).toBe(false);
+  });
+});
