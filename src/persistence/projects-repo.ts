@@ -1,4 +1,5 @@
 import { compoundSchema, type Compound } from '@/chem/compound/compound.schema';
+import { getCounterIon } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
 import { DEMO_COMPOUND, DEMO_PROJECT_NAME, DEMO_SHORTLIST } from './demo-project';
@@ -24,17 +25,13 @@ export interface ProjectBundle {
 }
 
 /**
- * Charges of the demo shortlist's counter-ions in their usual salt-forming state (chloride, mesylate,
- * tosylate and hydrogen maleate −1; sulfate −2 as in a hemisulfate). Used only to seed the fictional
- * demo project's shortlist with charge-balanced stoichiometries.
+ * Charge of a demo counter-ion in its first listed salt form (the library's usual one: hydrochloride,
+ * hemisulfate, hydrogen maleate…), so that the demo shortlist is charge-balanced for the drug ion.
  */
-const DEMO_ION_CHARGES: Record<string, number> = {
-  chloride: -1,
-  mesylate: -1,
-  sulfate: -2,
-  maleate: -1,
-  tosylate: -1,
-};
+function demoIonCharge(ionId: string): number {
+  const ion = getCounterIon(ionId);
+  return ion?.stoichiometries[0]?.ionCharge ?? ion?.charge ?? -1;
+}
 
 function demoCandidates(projectId: string): CandidateRecord[] {
   const now = nowIso();
@@ -44,7 +41,7 @@ function demoCandidates(projectId: string): CandidateRecord[] {
       schemaVersion: RECORD_SCHEMA_VERSION,
       projectId,
       ionId,
-      ...saltStoichiometry(DEMO_COMPOUND.ionCharge, DEMO_ION_CHARGES[ionId] ?? -1),
+      ...saltStoichiometry(DEMO_COMPOUND.ionCharge, demoIonCharge(ionId)),
       hydrateWater: 0,
       addedAt: now,
       order,
