@@ -30,6 +30,8 @@ export interface CounterIonRow {
   thermoId?: string;
   tradeNote: string;
   tradeNoteSource: string;
+  /** Bundled as a reference for the thermochemistry models only (not a pharmaceutical counter-ion). */
+  referenceOnly?: boolean;
   /** True for ions whose other charge states are not reached by adding or removing protons (metals, quaternary). */
   fixedCharge?: boolean;
 }
@@ -75,6 +77,7 @@ export function buildCounterIon(row: CounterIonRow): CounterIon {
     acceptabilityClass: row.acceptabilityClass,
     classSource: row.classSource,
     ...(row.thermoId ? { thermoId: row.thermoId } : {}),
+    ...(row.referenceOnly ? { referenceOnly: true } : {}),
     tradeNote: row.tradeNote,
     sources: {
       formula: SRC_FORMULA,

@@ -37,6 +37,7 @@ export const counterIonSchema = z.object({
   acceptabilityClass: classSchema,
   classSource: z.string().max(500),
   thermoId: z.string().optional(),
+  referenceOnly: z.boolean().optional(),
   tradeNote: z.string().max(1000),
   sources: z.record(z.string(), z.string()),
 });

@@ -61,6 +61,8 @@ export interface CounterIon {
   classSource: string;
   /** Id of the matching ion in the thermochemistry data, when bundled there. */
   thermoId?: string;
+  /** True for ions bundled only as references for the lattice and hydration models, not used in medicines. */
+  referenceOnly?: boolean;
   /** Short note of the trade (hygroscopicity tendency, known problems), with its basis in `sources.tradeNote`. */
   tradeNote: string;
   /** Source of each field: formula, smiles, molarMass, pKas, class, tradeNote, … */

@@ -134,7 +134,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNote: 'The usual “phosphate” salt of a monobasic drug; often a hydrate.', tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'carbonate', name: 'Carbonate', synonyms: ['carbonic acid', 'CO3 2-'], kind: 'anion',
+    id: 'carbonate', name: 'Carbonate', synonyms: ['carbonic acid', 'CO3 2-'], kind: 'anion', referenceOnly: true,
     formula: 'CO3', charge: -2, ionSmiles: '[O-]C(=O)[O-]', rings: [0, 0],
     parent: { name: 'carbonic acid', formula: 'H2CO3', smiles: 'OC(=O)O' },
     pKas: [pk(6.361, SRC_FROMM), pk(10.329, SRC_FROMM)],
@@ -144,7 +144,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'perchlorate', name: 'Perchlorate', synonyms: ['perchloric acid', 'ClO4-'], kind: 'anion',
+    id: 'perchlorate', name: 'Perchlorate', synonyms: ['perchloric acid', 'ClO4-'], kind: 'anion', referenceOnly: true,
     formula: 'ClO4', charge: -1, ionSmiles: '[O-]Cl(=O)(=O)=O', rings: [0, 0],
     parent: { name: 'perchloric acid', formula: 'HClO4', smiles: 'OCl(=O)(=O)=O' },
     pKas: [pk(-10, SRC_STRONG_ACID)],
@@ -397,7 +397,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
   },
   // ── Metal cations (made from the hydroxide) ──────────────────────────────────────────────────
   {
-    id: 'lithium', name: 'Lithium', synonyms: ['lithium hydroxide', 'Li+'], kind: 'cation',
+    id: 'lithium', name: 'Lithium', synonyms: ['lithium hydroxide', 'Li+'], kind: 'cation', referenceOnly: true,
     formula: 'Li', charge: 1, ionSmiles: '[Li+]', rings: [0, 0], fixedCharge: true,
     parent: { name: 'lithium hydroxide', formula: 'LiOH', smiles: '[Li+].[OH-]' },
     pKas: hydroxide,
@@ -425,7 +425,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNote: 'Second choice after sodium; salts often more soluble and more hygroscopic.', tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'rubidium', name: 'Rubidium', synonyms: ['Rb+'], kind: 'cation',
+    id: 'rubidium', name: 'Rubidium', synonyms: ['Rb+'], kind: 'cation', referenceOnly: true,
     formula: 'Rb', charge: 1, ionSmiles: '[Rb+]', rings: [0, 0], fixedCharge: true,
     parent: { name: 'rubidium hydroxide', formula: 'RbOH', smiles: '[Rb+].[OH-]' },
     pKas: hydroxide,
@@ -434,7 +434,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNote: 'Reference ion for the lattice models; not a pharmaceutical counter-ion.', tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'caesium', name: 'Caesium', synonyms: ['cesium', 'Cs+'], kind: 'cation',
+    id: 'caesium', name: 'Caesium', synonyms: ['cesium', 'Cs+'], kind: 'cation', referenceOnly: true,
     formula: 'Cs', charge: 1, ionSmiles: '[Cs+]', rings: [0, 0], fixedCharge: true,
     parent: { name: 'caesium hydroxide', formula: 'CsOH', smiles: '[Cs+].[OH-]' },
     pKas: hydroxide,
@@ -461,7 +461,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNote: 'Divalent: 2:1 salts, usually less soluble and less hygroscopic than sodium salts.', tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'strontium', name: 'Strontium', synonyms: ['Sr2+'], kind: 'cation',
+    id: 'strontium', name: 'Strontium', synonyms: ['Sr2+'], kind: 'cation', referenceOnly: true,
     formula: 'Sr', charge: 2, ionSmiles: '[Sr+2]', rings: [0, 0], fixedCharge: true,
     parent: { name: 'strontium hydroxide', formula: 'Sr(OH)2', smiles: '[Sr+2].[OH-].[OH-]' },
     pKas: hydroxide,
@@ -470,7 +470,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNote: 'Reference ion for the lattice models; rare in medicines.', tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'barium', name: 'Barium', synonyms: ['Ba2+'], kind: 'cation',
+    id: 'barium', name: 'Barium', synonyms: ['Ba2+'], kind: 'cation', referenceOnly: true,
     formula: 'Ba', charge: 2, ionSmiles: '[Ba+2]', rings: [0, 0], fixedCharge: true,
     parent: { name: 'barium hydroxide', formula: 'Ba(OH)2', smiles: '[Ba+2].[OH-].[OH-]' },
     pKas: hydroxide,
@@ -507,7 +507,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNote: 'Volatile base: ammonia can be lost on drying or storage.', tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'tetramethylammonium', name: 'Tetramethylammonium', synonyms: ['TMA', 'N,N,N-trimethylmethanaminium'], kind: 'cation',
+    id: 'tetramethylammonium', name: 'Tetramethylammonium', synonyms: ['TMA', 'N,N,N-trimethylmethanaminium'], kind: 'cation', referenceOnly: true,
     formula: 'C4H12N', charge: 1, ionSmiles: 'C[N+](C)(C)C', rings: [0, 0], fixedCharge: true,
     parent: { name: 'tetramethylammonium hydroxide', formula: 'C4H13NO', smiles: 'C[N+](C)(C)C.[OH-]' },
     pKas: hydroxide,
@@ -517,7 +517,7 @@ export const COUNTER_ION_ROWS: readonly CounterIonRow[] = [
     tradeNoteSource: SRC_TRADE_MEMORY,
   },
   {
-    id: 'tetraethylammonium', name: 'Tetraethylammonium', synonyms: ['TEA+', 'N,N,N-triethylethanaminium'], kind: 'cation',
+    id: 'tetraethylammonium', name: 'Tetraethylammonium', synonyms: ['TEA+', 'N,N,N-triethylethanaminium'], kind: 'cation', referenceOnly: true,
     formula: 'C8H20N', charge: 1, ionSmiles: 'CC[N+](CC)(CC)CC', rings: [0, 0], fixedCharge: true,
     parent: { name: 'tetraethylammonium hydroxide', formula: 'C8H21NO', smiles: 'CC[N+](CC)(CC)CC.[OH-]' },
     pKas: hydroxide,

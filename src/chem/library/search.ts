@@ -70,6 +70,8 @@ export interface CounterIonFilters {
   charge?: number;
   /** Keep ions with a stoichiometry of this key ("1:1", "2:1", "1:2", "3:1"). */
   stoichiometry?: string;
+  /** False hides ions bundled only as thermochemistry references (default: shown). */
+  includeReferenceIons?: boolean;
   /** With `partner`: keep ions whose best ΔpKa (over their stoichiometries) is at least this. */
   minDeltaPka?: number;
   /** The compound ΔpKa is computed against; also drops ions of the wrong kind for it when `pairedOnly`. */
@@ -122,6 +124,7 @@ function matchScore(ion: CounterIon, q: string): number {
 
 function passes(ion: CounterIon, f: CounterIonFilters): boolean {
   if (f.kind && ion.kind !== f.kind) return false;
+  if (f.includeReferenceIons === false && ion.referenceOnly) return false;
   if (f.classes && f.classes.length > 0) {
     const cls = ion.acceptabilityClass ?? 'none';
     if (!f.classes.includes(cls)) return false;

@@ -60,7 +60,7 @@ export const ionsCommand: CliCommand = {
       const pkas = ion.pKas.length ? ion.pKas.map((p) => p.value.toFixed(2)).join(', ') : 'not sourced';
       writeLine(
         io.stdout,
-        `${pad(ion.name, 22)} ${pad(formatIonFormula(ion.formula, ion.charge), 16)} ${pad(charges(ion), 10)} ${pad(pkas, 24)} ${pad(
+        `${pad(ion.referenceOnly ? `${ion.name} (ref.)` : ion.name, 22)} ${pad(formatIonFormula(ion.formula, ion.charge), 16)} ${pad(charges(ion), 10)} ${pad(pkas, 24)} ${pad(
           ion.acceptabilityClass === null ? '–' : String(ion.acceptabilityClass),
           5,
         )} ${ion.molarMassGPerMol.toFixed(2).padStart(9)}`,
@@ -68,7 +68,8 @@ export const ionsCommand: CliCommand = {
     }
     writeLine(
       io.stdout,
-      `\n${ions.length} ion(s). pKa: parent acid, or conjugate acid of the parent base. Class: Stahl & Wermuth 2002 (from memory). ` +
+      `\n${ions.length} ion(s). (ref.) = reference ion for the thermochemistry models, not used in medicines. ` +
+        'pKa: parent acid, or conjugate acid of the parent base. Class: Stahl & Wermuth 2002 (from memory). ' +
         'Every value has its source in `saltsmith ions --json`.',
     );
     return 0;

@@ -14,6 +14,8 @@ interface CounterIonsViewState {
   stoichiometry: string;
   /** Minimum ΔpKa as typed ('' for no limit). */
   minDeltaPka: string;
+  /** Show the ions bundled only as thermochemistry references. */
+  showReference: boolean;
   /** The row whose details are open. */
   openId: string | null;
   setQuery: (query: string) => void;
@@ -23,6 +25,7 @@ interface CounterIonsViewState {
   setStoichiometry: (s: string) => void;
   setMinDeltaPka: (text: string) => void;
   toggleOpen: (id: string) => void;
+  setShowReference: (show: boolean) => void;
   reset: () => void;
 }
 
@@ -33,6 +36,7 @@ const initial = {
   charge: 0,
   stoichiometry: '',
   minDeltaPka: '',
+  showReference: false,
   openId: null as string | null,
 };
 
@@ -46,5 +50,6 @@ export const useCounterIonsViewStore = create<CounterIonsViewState>()((set) => (
   setStoichiometry: (stoichiometry) => set({ stoichiometry }),
   setMinDeltaPka: (minDeltaPka) => set({ minDeltaPka }),
   toggleOpen: (id) => set((s) => ({ openId: s.openId === id ? null : id })),
+  setShowReference: (showReference) => set({ showReference }),
   reset: () => set(initial),
 }));

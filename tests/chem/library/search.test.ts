@@ -143,3 +143,11 @@ describe('counter-ion schema refuses impossible values', () => {
     expect(counterIonSchema.safeParse({ ...good, charge: 0 }).success).toBe(false);
   });
 });
+
+describe('reference ions', () => {
+  it('are listed by default and hidden on request', () => {
+    expect(searchCounterIons(COUNTER_IONS, 'perchlorate').map((i) => i.id)).toEqual(['perchlorate']);
+    expect(searchCounterIons(COUNTER_IONS, 'perchlorate', { includeReferenceIons: false })).toEqual([]);
+    expect(searchCounterIons(COUNTER_IONS, '', { includeReferenceIons: false }).some((i) => i.id === 'chloride')).toBe(true);
+  });
+});

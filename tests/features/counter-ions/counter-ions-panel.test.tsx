@@ -118,3 +118,13 @@ describe('Counter-ions area: removing an in-house ion', () => {
     expect(await customIonsRepo.listAll()).toEqual([]);
   });
 });
+
+describe('Counter-ions area: reference ions', () => {
+  it('hides ions bundled only for the thermochemistry models unless asked', async () => {
+    const { user, table } = await setup();
+    expect(within(table).queryByRole('rowheader', { name: /^Perchlorate/ })).toBeNull();
+    await user.click(screen.getByLabelText(/Include reference ions/));
+    const header = await within(table).findByRole('rowheader', { name: /^Perchlorate/ });
+    expect(within(header).getByText('reference only')).toBeInTheDocument();
+  });
+});

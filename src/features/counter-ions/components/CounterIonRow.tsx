@@ -49,6 +49,7 @@ export function CounterIonRow({
           <button type="button" className="ion-name" aria-expanded={open} aria-controls={detailsId} onClick={onToggle}>
             {ion.name}
           </button>
+          {ion.referenceOnly ? <span className="ion-badge ion-badge-reference">reference only</span> : null}
           {ion.origin !== 'bundled' ? (
             <span className={`ion-badge ion-badge-${ion.origin}`}>{ion.origin === 'in-house' ? 'in-house' : 'edited for this project'}</span>
           ) : null}

@@ -34,6 +34,7 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
   const rows = useMemo(() => {
     const filters: CounterIonFilters = {
       partner: compound,
+      includeReferenceIons: view.showReference,
       ...(view.kind === 'paired' ? { kind: pairedKind } : view.kind === 'all' ? {} : { kind: view.kind }),
       ...(view.classes.length ? { classes: view.classes } : {}),
       ...(view.charge !== 0 ? { charge: view.charge } : {}),
@@ -41,7 +42,7 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
       ...(minDelta !== undefined && Number.isFinite(minDelta) ? { minDeltaPka: minDelta } : {}),
     };
     return searchCounterIons<LibraryIon>(ions, view.query, filters);
-  }, [ions, view.query, view.kind, view.classes, view.charge, view.stoichiometry, minDelta, compound, pairedKind]);
+  }, [ions, view.query, view.kind, view.classes, view.charge, view.stoichiometry, view.showReference, minDelta, compound, pairedKind]);
 
   const shortlisted = new Map((shortlist ?? []).map((c) => [c.ionId, c]));
   const pkaText = compound.pKas.map((p) => p.value).join(', ');
@@ -125,6 +126,12 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
               Minimum ΔpKa must be a number
             </p>
           ) : null}
+        </div>
+        <div className="field ion-reference">
+          <label>
+            <input type="checkbox" checked={view.showReference} onChange={(e) => view.setShowReference(e.target.checked)} /> Include
+            reference ions (model checks only, not for medicines)
+          </label>
         </div>
         <div className="field ion-reset">
           <button type="button" onClick={view.reset}>
