@@ -1,0 +1,68 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import { render, screen, within } from '@testing-library/react';
+import { resetDbForTests } from '@/persistence/db';
+import { projectsRepo } from '@/persistence/projects-repo';
+import { candidatesRepo } from '@/persistence/candidates-repo';
+import { measurementsRepo } from '@/persistence/measurements-repo';
+import { DEMO_COMPOUND } from '@/persistence/demo-project';
+import type { ProjectRecord } from '@/persistence/records';
+import { EnergeticsArea } from '@/features/energetics/components/EnergeticsArea';
+import { computeProjectScreening } from '@/features/screening-data/compute-screening';
+import { backedOutLattice } from '@/features/bench/bench-predictions';
+import { useRankingViewStore } from '@/stores/ranking-view-store';
+
+let project: ProjectRecord;
+beforeEach(async () => {
+  await resetDbForTests();
+  useRankingViewStore.setState({ focusCandidateId: null, chartIds: null });
+  // Formula only (no SMILES), so the structure parser is not loaded in jsdom.
+  project = await projectsRepo.create('Energetics test', { ...DEMO_COMPOUND, name: 'Energetics test', smiles: '' });
+  await candidatesRepo.add(project.id, 'chloride');
+  await candidatesRepo.add(project.id, 'sulfate', { drugPerSalt: 2, counterIonPerSalt: 1 });
+});
+
+describe('Energetics area', () => {
+  it('states the sign convention and each step of the cycle with its uncertainty', async () => {
+    render(<EnergeticsArea project={project} />);
+    expect(await screen.findByText(/Sign convention\./, {}, { timeout: 15000 })).toBeInTheDocument();
+    const table = screen.getByRole('table', { name: /Cycle of Chloride/ });
+    for (const step of ['ΔH_L', 'ΔH_hyd,+', 'ΔH_hyd,−', 'ΔH_sol']) expect(within(table).getByText(step, { exact: false })).toBeInTheDocument();
+    expect(within(table).getAllByText(/±/).length).toBeGreaterThanOrEqual(4);
+    // The weak point is said on screen, not hidden.
+    expect(screen.getAllByRole('note').some((n) => /difference of ΔH_L/.test(n.textContent ?? ''))).toBe(true);
+    expect(screen.getByRole('img', { name: /per drug ion/ })).toBeInTheDocument();
+  });
+});
+
+describe('lattice enthalpy backed out of a measured ΔH_sol', () => {
+  it('closes Hess’s cycle: ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− = ΔH_sol (measured)', async () => {
+    const [cand] = await candidatesRepo.listForProject(project.id);
+    await measurementsRepo.add({
+      projectId: project.id,
+      candidateId: cand!.id,
+      kind: 'solution-enthalpy',
+      value: 12.5,
+      unit: 'kJ/mol',
+      ph: null,
+      temperatureK: 298.15,
+      medium: '',
+      text: '',
+    });
+    const inputs = {
+      project,
+      candidates: await candidatesRepo.listForProject(project.id),
+      measurements: await measurementsRepo.listForProject(project.id),
+      customIons: [],
+    };
+    const data = await computeProjectScreening(inputs);
+    const r = backedOutLattice(cand!.id, inputs.measurements, data);
+    expect(r && !('error' in r)).toBe(true);
+    if (!r || 'error' in r) return;
+    const e = data.energetics[cand!.id]!;
+    const t = e.thermo!;
+    const closure = r.lattice.value + e.cationsPerFormula * t.cationHydrationKJ.value + e.anionsPerFormula * t.anionHydrationKJ.value - 12.5;
+    expect(Math.abs(closure)).toBeLessThan(1e-9);
+    // The measured value's stated spread and the hydration estimates' add in quadrature: never less than either.
+    expect(r.lattice.uncertainty).toBeGreaterThanOrEqual(t.cationHydrationKJ.uncertainty * e.cationsPerFormula - 1e-9);
+  });
+});
