@@ -112,6 +112,9 @@ export function compoundFromDraft(
     errors[missing] ??= 'Give both the cell volume and Z, or neither';
   }
   if (candidate.logP !== null && candidate.logPOrigin === null) candidate.logPOrigin = 'measured';
+  if (Number.isInteger(ionCharge) && pKaValues.length > 0 && Math.abs(ionCharge) > pKaValues.length) {
+    errors.ionCharge = `A charge of ${Math.abs(ionCharge)} needs ${Math.abs(ionCharge)} pKa values (one per ionised group)`;
+  }
   if (draft.kind === 'base' && ionCharge < 0) errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';
   if (draft.kind === 'acid' && ionCharge > 0) errors.ionCharge = 'An acid forms an anion: charge must be −1, −2 or −3';
   const parsed = compoundSchema.safeParse(candidate);

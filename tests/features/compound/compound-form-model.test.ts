@@ -27,4 +27,11 @@ describe('compound form model', () => {
     const ok = compoundFromDraft({ ...draft, cellVolumeA3: '1500', formulaUnitsPerCell: '4' }, DEMO_COMPOUND);
     expect(ok.ok && ok.compound.formulaUnitsPerCell).toBe(4);
   });
+
+  it('refuses a drug-ion charge larger than the number of ionisable groups', () => {
+    const r = compoundFromDraft({ ...draft, ionCharge: '2', pKas: '7.8' }, DEMO_COMPOUND);
+    expect(!r.ok && r.errors.ionCharge).toMatch(/needs 2 pKa values/);
+    const ok = compoundFromDraft({ ...draft, ionCharge: '2', pKas: '7.8, 3.1' }, DEMO_COMPOUND);
+    expect(ok.ok).toBe(true);
+  });
 });
