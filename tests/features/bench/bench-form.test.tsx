@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { render, screen, within } from '@testing-library/react';
+import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { resetDbForTests } from '@/persistence/db';
 import { projectsRepo } from '@/persistence/projects-repo';
@@ -100,5 +100,35 @@ describe('Bench data area', () => {
     expect(await screen.findByText(/Saved: mass gain/)).toBeInTheDocument();
     const stored = await measurementsRepo.listForProject(project.id);
     expect(stored[0]).toMatchObject({ kind: 'mass-gain-80rh', value: 3.1, unit: '%' });
+  });
+});
+
+describe('candidate salt form', () => {
+  it('validates the water of crystallisation (0–20, whole or half molecules)', async () => {
+    const { hydrateFromText } = await import('@/features/bench/components/CandidateForm');
+    expect(hydrateFromText('')).toEqual({ ok: true, value: 0 });
+    expect(hydrateFromText('0,5')).toEqual({ ok: true, value: 0.5 });
+    expect(hydrateFromText('1.3')).toMatchObject({ ok: false, error: expect.stringMatching(/half molecules/) });
+    expect(hydrateFromText('25')).toMatchObject({ ok: false, error: expect.stringMatching(/from 0 to 20/) });
+    expect(hydrateFromText('two')).toMatchObject({ ok: false, error: expect.stringMatching(/must be a number/) });
+  });
+
+  it('stores a hydrate and removes a candidate with its measurements after a confirmation', async () => {
+    await resetDbForTests();
+    const p = await projectsRepo.create('Hydrate test', { ...DEMO_COMPOUND, name: 'Hydrate test' });
+    const c = await candidatesRepo.add(p.id, 'chloride');
+    await candidatesRepo.add(p.id, 'tosylate');
+    await measurementsRepo.add({ projectId: p.id, candidateId: c.id, kind: 'note', value: null, unit: '', ph: null, temperatureK: null, medium: '', text: 'needles' });
+    const user = userEvent.setup();
+    render(<BenchArea project={p} extras={{ predictionFor: () => null }} />);
+    const water = await screen.findByLabelText(/Water of crystallisation/);
+    await user.clear(water);
+    await user.type(water, '1');
+    await waitFor(async () => expect((await candidatesRepo.listForProject(p.id))[0]?.hydrateWater).toBe(1));
+    await user.click(screen.getByRole('button', { name: 'Remove from shortlist…' }));
+    expect(screen.getByRole('group', { name: /Confirm removing Chloride/ })).toHaveTextContent(/and its 1 measurement\?/);
+    await user.click(screen.getByRole('button', { name: 'Remove' }));
+    await waitFor(async () => expect((await candidatesRepo.listForProject(p.id)).map((x) => x.ionId)).toEqual(['tosylate']));
+    expect(await measurementsRepo.listForProject(p.id)).toHaveLength(0);
   });
 });

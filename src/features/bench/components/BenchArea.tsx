@@ -2,6 +2,7 @@ import { useState, type ReactNode } from 'react';
 import type { MeasurementRecord, ProjectRecord } from '@/persistence/records';
 import { candidateLabel } from '@/features/screening-data/candidate-label';
 import { useBenchData } from '../hooks/use-bench-data';
+import { CandidateForm } from './CandidateForm';
 import { MeasurementForm } from './MeasurementForm';
 import { MeasurementTable } from './MeasurementTable';
 import '../bench.css';
@@ -77,6 +78,7 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
           </nav>
           <div className="bench-main">
             <h3>{label(current)}</h3>
+            <CandidateForm candidate={current} label={label(current)} measurementCount={mine.length} />
             <MeasurementForm projectId={project.id} candidateId={current.id} candidateLabel={label(current)} />
             <h4>Recorded for {label(current)}</h4>
             <MeasurementTable
