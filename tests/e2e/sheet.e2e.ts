@@ -187,6 +187,10 @@ describe('comparison sheet in Chromium', () => {
     expect(header).toContain('Salt per dose (mg)');
     expect(header).toContain('ΔH_sol (kJ/mol)');
     expect(header).toContain('ΔH_sol uncertainty (1 sigma) (kJ/mol)');
+    // Rank robustness comes from the Monte Carlo worker: every ranked demo candidate has a P(top 3).
+    const pCol = (header ?? []).indexOf('P(top 3) (%)');
+    expect(pCol).toBeGreaterThan(1);
+    for (const r of rows) expect(typeof r[pCol]).toBe('number');
 
     // Every numeric cell of the sheet (data-value) is the same number in the CSV, in the column with
     // the same heading (label and unit), to 6 significant digits.

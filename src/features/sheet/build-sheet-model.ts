@@ -23,6 +23,7 @@ const MAX_CHART_SALTS = 7;
 /** The ranked table's columns, in the order of the sheet and the CSV. */
 export const SHEET_COLUMNS: readonly SheetColumn[] = [
   { key: 'score', label: 'Score', unit: '0–1', kind: 'number', hint: 'weighted mean of the criterion scores (ranking weights above)', group: 'formation' },
+  { key: 'pTop3', label: 'P(top 3)', unit: '%', kind: 'number', hint: 'share of Monte Carlo draws in which the candidate ranks in the top three', group: 'formation' },
   { key: 'deltaPka', label: 'ΔpKa', unit: null, kind: 'number', hint: 'pKa(protonated base) − pKa(acid)', group: 'formation' },
   { key: 'saltProbability', label: 'P(salt)', unit: '0–1', kind: 'number', hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend', group: 'formation' },
   { key: 'activeFraction', label: 'Active fraction', unit: '%', kind: 'number', hint: 'drug mass / salt mass', group: 'formation' },
@@ -48,12 +49,18 @@ const est = (e: Estimate | null | undefined, origin: ValueOrigin = 'estimated'):
 
 const REASON_WORD: Record<string, string> = { keeps: 'for', drops: 'against', watch: 'watch', measured: 'measured', note: 'note' };
 
-function rowCells(row: ScreenRow, score: number | null, screening: ProjectScreening): Record<string, SheetCell> {
+function rowCells(
+  row: ScreenRow,
+  score: number | null,
+  screening: ProjectScreening,
+  pTop3: number | null,
+): Record<string, SheetCell> {
   const kspOrigin: ValueOrigin | null = row.kspOrigin ?? null;
   const thermo = screening.energetics[row.id]?.thermo ?? null;
   const measuredSol = row.measured?.solutionEnthalpyKJ ?? null;
   return {
     score: num(score, null),
+    pTop3: num(pTop3 === null ? null : pTop3 * 100, 'estimated'),
     deltaPka: num(row.deltaPka, 'input'),
     saltProbability: num(row.saltFormation?.saltProbability ?? null, 'estimated'),
     activeFraction: num(row.activeFraction * 100, 'input'),
@@ -140,6 +147,8 @@ export interface BuildSheetInput {
   validation: readonly ModelValidation[];
   generatedAt: string;
   appVersion: string;
+  /** Rank robustness from the workbench's Monte Carlo (same seed and draws as the Ranking area), or null. */
+  robustness?: { results: readonly { id: string; pTop3: number }[]; iterations: number; seed: number } | null;
 }
 
 /**
@@ -147,7 +156,8 @@ export interface BuildSheetInput {
  * `rankCandidates` the Ranking area uses), one row per shortlisted candidate — unscreenable ones
  * listed last with the reason — and the pictures and model check beside it.
  */
-export function buildSheetModel({ project, screening, validation, generatedAt, appVersion }: BuildSheetInput): SheetModel {
+export function buildSheetModel({ project, screening, validation, generatedAt, appVersion, robustness = null }: BuildSheetInput): SheetModel {
+  const pTop3Of = new Map((robustness?.results ?? []).map((r) => [r.id, r.pTop3]));
   const { screen } = screening;
   const weights = screening.settings.weights;
   const ranked = rankCandidates(
@@ -170,7 +180,7 @@ export function buildSheetModel({ project, screening, validation, generatedAt, a
       id: row.id,
       rank: rr.rank,
       label: labelOf(row),
-      cells: rowCells(row, rr.score, screening),
+      cells: rowCells(row, rr.score, screening, row.error ? null : (pTop3Of.get(row.id) ?? null)),
       flags: row.flags.map((f) => f.text),
       reasons,
     });
@@ -213,6 +223,11 @@ export function buildSheetModel({ project, screening, validation, generatedAt, a
     .filter((c): c is EnergyCycle => c !== null);
 
   const notes = [...screen.assumptions, ...screening.notes];
+  notes.push(
+    robustness
+      ? `P(top 3): share of ${robustness.iterations} Monte Carlo draws (seed ${robustness.seed}) in which the candidate ranks in the top three when pKa, S₀ and each K_sp move within their stated 1σ, with the weights above.`
+      : 'P(top 3) was not computed for this sheet (rank robustness unavailable).',
+  );
   if (chartRows.length < screen.rows.filter((r) => !r.error).length) {
     notes.push(`The solubility picture shows the ${MAX_CHART_SALTS} best-ranked salts; the table lists all.`);
   }

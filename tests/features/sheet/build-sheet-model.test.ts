@@ -70,6 +70,22 @@ describe('sheet model from a real screening', () => {
     expect(m.weights.map((w) => w.value)).toEqual(CRITERIA.map((k) => defaults[k]));
   });
 
+  it('shows rank robustness where it was computed, as a percentage, and says how', async () => {
+    const screening = await computeProjectScreening({ project, candidates, measurements: [], customIons: [] });
+    const m = buildSheetModel({
+      project,
+      screening,
+      validation: [],
+      generatedAt: '2026-12-01T12:00:00.000Z',
+      appVersion: 'test',
+      robustness: { results: [{ id: 'cand_0', pTop3: 0.25 }], iterations: 2000, seed: 7 },
+    });
+    expect(m.rows.find((r) => r.id === 'cand_0')?.cells.pTop3).toEqual({ value: 25, origin: 'estimated', uncertainty: null });
+    expect(m.rows.find((r) => r.id === 'cand_1')?.cells.pTop3?.value).toBeNull();
+    expect(m.notes.some((n) => n.includes('2000 Monte Carlo draws (seed 7)'))).toBe(true);
+    expect((await model()).notes.some((n) => n.startsWith('P(top 3) was not computed'))).toBe(true);
+  });
+
   it('writes the same numbers to the CSV, column by column', async () => {
     const m = await model();
     const parsed = Papa.parse<unknown[]>(sheetToCsv(m), { dynamicTyping: true, delimiter: ',', newline: '\r\n' });
