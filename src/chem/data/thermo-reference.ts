@@ -44,10 +44,10 @@ export const SOLID_FORMATION_KJ: Readonly<Record<string, number>> = {
 };
 
 /**
- * ΔfH° of aqueous ions at infinite dilution, kJ/mol, 298.15 K (Wagman et al. 1982; H⁺(aq) = 0). Na⁺, K⁺,
- * NH₄⁺, Cl⁻, SO₄²⁻, NO₃⁻, OH⁻ and CO₃²⁻ agree with reaktoro's NBS-cited data (CHECKED.nbsReaktoro1997);
- * Mg²⁺, Ca²⁺, Sr²⁺ and Ba²⁺ with Thomsen's data in reaktoro (CHECKED.thomsenReaktoro). The other ten are
- * from memory.
+ * ΔfH° of aqueous ions at infinite dilution, kJ/mol, 298.15 K (Wagman et al. 1982; H⁺(aq) = 0). All 22 agree
+ * with the CRC Handbook table of aqueous ions (CHECKED.crcAqueous) to its 0.1 kJ/mol; Na⁺, K⁺, NH₄⁺, Cl⁻,
+ * SO₄²⁻, NO₃⁻, OH⁻ and CO₃²⁻ also with reaktoro's NBS-cited data (CHECKED.nbsReaktoro1997), Mg²⁺, Ca²⁺, Sr²⁺
+ * and Ba²⁺ with Thomsen's data in reaktoro (CHECKED.thomsenReaktoro).
  */
 export const AQUEOUS_ION_FORMATION_KJ: Readonly<Record<string, number>> = {
   lithium: -278.49, sodium: -240.12, potassium: -252.38, rubidium: -251.17, caesium: -258.28,
@@ -108,8 +108,9 @@ export const FORMATION_ENTHALPY_CHECKS: Readonly<Record<string, string>> = {
   'CaCl2|cr': CHECKED.thomsenReaktoro,
   'BaCl2|cr': CHECKED.thomsenReaktoro,
   'KCH3COO|cr': `corrected 2026-12-01 from −723.33 (from memory) to the CRC value; ${CHECKED.crcThermo}`,
-  ...Object.fromEntries(['sodium', 'potassium', 'ammonium', 'chloride', 'sulfate', 'nitrate', 'hydroxide', 'carbonate'].map((i) => [`${i}|aq`, CHECKED.nbsReaktoro1997])),
-  ...Object.fromEntries(['magnesium', 'calcium', 'strontium', 'barium'].map((i) => [`${i}|aq`, CHECKED.thomsenReaktoro])),
+  ...Object.fromEntries(['sodium', 'potassium', 'ammonium', 'chloride', 'sulfate', 'nitrate', 'hydroxide', 'carbonate'].map((i) => [`${i}|aq`, `${CHECKED.nbsReaktoro1997}; ${CHECKED.crcAqueous}`])),
+  ...Object.fromEntries(['magnesium', 'calcium', 'strontium', 'barium'].map((i) => [`${i}|aq`, `${CHECKED.thomsenReaktoro}; ${CHECKED.crcAqueous}`])),
+  ...Object.fromEntries(['lithium', 'rubidium', 'caesium', 'zinc', 'fluoride', 'bromide', 'iodide', 'perchlorate', 'dihydrogen-phosphate', 'acetate'].map((i) => [`${i}|aq`, CHECKED.crcAqueous])),
   ...Object.fromEntries(['Rb', 'Sr', 'Ba', 'Br', 'I'].map((e) => [`${e}|g`, CHECKED.crcThermo])),
   'F|g': `CODATA key value (J. D. Cox, D. D. Wagman, V. A. Medvedev, CODATA Key Values for Thermodynamics, 1989) as given in the CRC table; ${CHECKED.crcThermo}`,
   'K|g': `CODATA key value (J. D. Cox, D. D. Wagman, V. A. Medvedev, CODATA Key Values for Thermodynamics, 1989) as given in the CRC table; ${CHECKED.crcThermo}`,
@@ -145,28 +146,58 @@ export interface LatticeReferenceSalt {
   halogen?: string;
 }
 
-const rs = (edgeA: number, check?: string): VolumeSource => ({ kind: 'cell', structure: 'rock-salt', edgeA, source: check ? `${SRC.wyckoff}; ${check}` : SRC.wyckoff + FM });
-const cc = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'caesium-chloride', edgeA, source: SRC.wyckoff + FM });
-const fl = (edgeA: number): VolumeSource => ({ kind: 'cell', structure: 'fluorite', edgeA, source: SRC.wyckoff + FM });
-const rho = (densityGPerCm3: number): VolumeSource => ({ kind: 'density', densityGPerCm3, source: SRC.crcDensity + FM });
+/**
+ * Source of a cubic cell edge. `check`: the edge was read in a published copy. `byDensity`: the recalled edge
+ * agrees within 0.1 % with the edge implied by the CRC density, a = (Z·M/(ρ·N_A))^(1/3) — a consistency check
+ * on a different measurement, not a reading of Wyckoff's table, so the value still says "from memory".
+ * Edges that differ more from the density-implied one (2026-12-01: LiCl −0.25 %, LiI −0.45 %, NaF −0.27 %,
+ * KF −0.59 %, KBr −0.11 %, RbF −6.1 %, RbCl −0.69 %, RbBr −0.15 %, RbI −0.13 %, CsBr −0.43 %, CsI −0.14 %,
+ * SrF2 −0.28 %) are left as recalled: densities of hygroscopic halides are often low.
+ */
+const cellSource = (check?: string, byDensity = false): string =>
+  check ? `${SRC.wyckoff}; ${check}` : `${SRC.wyckoff}${FM}${byDensity ? `; consistent within 0.1 % with the edge implied by the CRC density (${CHECKED.crcDensity})` : ''}`;
+const rs = (edgeA: number, check?: string, byDensity = false): VolumeSource => ({ kind: 'cell', structure: 'rock-salt', edgeA, source: cellSource(check, byDensity) });
+const cc = (edgeA: number, byDensity = false): VolumeSource => ({ kind: 'cell', structure: 'caesium-chloride', edgeA, source: cellSource(undefined, byDensity) });
+const fl = (edgeA: number, byDensity = false): VolumeSource => ({ kind: 'cell', structure: 'fluorite', edgeA, source: cellSource(undefined, byDensity) });
+const D = true;
+/** A CRC density checked against a published copy (CHECKED.crcDensity); `was` records a corrected recalled value. */
+const rhoC = (densityGPerCm3: number, was?: number): VolumeSource => ({
+  kind: 'density',
+  densityGPerCm3,
+  source: `${SRC.crcDensity}; ${CHECKED.crcDensity}${was === undefined ? '' : `; corrected 2026-12-01 from ${was} (from memory)`}`,
+});
+
+/**
+ * Densities (g/cm³) of the polyatomic reference salts, CRC Handbook "Physical Constants of Inorganic Compounds",
+ * all checked 2026-12-01 against CHECKED.crcDensity. Corrected then (recalled value → CRC): NaNO3 2.26 → 2.261,
+ * KNO3 2.11 → 2.105, NH4Cl 1.53 → 1.519, NH4Br 2.43 → 2.429, NH4I 2.51 → 2.514, KOH 2.04 → 2.044,
+ * NaClO4 2.50 → 2.52, Na2SO4 2.66 → 2.70, BaSO4 4.50 → 4.49, LiOH 1.46 → 1.45.
+ */
+const POLYATOMIC_DENSITY: Readonly<Record<string, [number, number?]>> = {
+  NaNO3: [2.261, 2.26], KNO3: [2.105, 2.11], NH4NO3: [1.72], NH4Cl: [1.519, 1.53], NH4Br: [2.429, 2.43], NH4I: [2.514, 2.51],
+  LiOH: [1.45, 1.46], NaOH: [2.13], KOH: [2.044, 2.04], NaClO4: [2.52, 2.5], KClO4: [2.52], NH4ClO4: [1.95],
+  Na2SO4: [2.7, 2.66], K2SO4: [2.66], MgSO4: [2.66], CaSO4: [2.96], BaSO4: [4.49, 4.5], Na2CO3: [2.54], K2CO3: [2.29],
+  CaCO3: [2.71], KH2PO4: [2.34], NaCH3COO: [1.528], KCH3COO: [1.57],
+};
+const polyDensity = (formula: string): number => POLYATOMIC_DENSITY[formula]![0];
 
 const ALKALI: [string, string][] = [['Li', 'lithium'], ['Na', 'sodium'], ['K', 'potassium'], ['Rb', 'rubidium'], ['Cs', 'caesium']];
 const EARTH: [string, string][] = [['Mg', 'magnesium'], ['Ca', 'calcium'], ['Sr', 'strontium'], ['Ba', 'barium']];
 const HAL: [string, string][] = [['F', 'fluoride'], ['Cl', 'chloride'], ['Br', 'bromide'], ['I', 'iodide']];
 
 const ALKALI_VOLUME: Record<string, VolumeSource> = {
-  LiF: rs(4.027), LiCl: rs(5.13), LiBr: rs(5.501), LiI: rs(6.0),
-  NaF: rs(4.634), NaCl: rs(5.64, CHECKED.naclCell), NaBr: rs(5.977), NaI: rs(6.473),
-  KF: rs(5.347), KCl: rs(6.293), KBr: rs(6.6), KI: rs(7.066),
+  LiF: rs(4.027, undefined, D), LiCl: rs(5.13), LiBr: rs(5.501, undefined, D), LiI: rs(6.0),
+  NaF: rs(4.634), NaCl: rs(5.64, CHECKED.naclCell), NaBr: rs(5.977, undefined, D), NaI: rs(6.473, undefined, D),
+  KF: rs(5.347), KCl: rs(6.293, undefined, D), KBr: rs(6.6), KI: rs(7.066, undefined, D),
   RbF: rs(5.64), RbCl: rs(6.581), RbBr: rs(6.885), RbI: rs(7.342),
-  CsF: rs(6.008), CsCl: cc(4.123), CsBr: cc(4.286), CsI: cc(4.567),
+  CsF: rs(6.008, undefined, D), CsCl: cc(4.123, D), CsBr: cc(4.286), CsI: cc(4.567),
 };
 const EARTH_VOLUME: Record<string, VolumeSource> = {
   MgF2: { kind: 'cell-volume', cellVolumeA3: 4.62 * 4.62 * 3.05, z: 2, structure: 'rutile', source: `${SRC.wyckoff} (rutile type, a 4.62, c 3.05 Å)${FM}` },
-  MgCl2: rho(2.32), MgBr2: rho(3.72), MgI2: rho(4.43),
-  CaF2: fl(5.463), CaCl2: rho(2.15), CaBr2: rho(3.38), CaI2: rho(3.96),
-  SrF2: fl(5.8), SrCl2: rho(3.05), SrBr2: rho(4.22), SrI2: rho(4.55),
-  BaF2: fl(6.2), BaCl2: rho(3.86), BaBr2: rho(4.78), BaI2: rho(5.15),
+  MgCl2: rhoC(2.325, 2.32), MgBr2: rhoC(3.72), MgI2: rhoC(4.43),
+  CaF2: fl(5.463, D), CaCl2: rhoC(2.15), CaBr2: rhoC(3.38), CaI2: rhoC(3.96),
+  SrF2: fl(5.8), SrCl2: rhoC(3.052, 3.05), SrBr2: rhoC(4.216, 4.22), SrI2: rhoC(4.55),
+  BaF2: fl(6.2, D), BaCl2: rhoC(3.9, 3.86), BaBr2: rhoC(4.781, 4.78), BaI2: rhoC(5.15),
 };
 
 /** Reference salts: 20 alkali halides, 16 alkaline-earth halides (Born–Haber), 22 salts of polyatomic ions. */
@@ -185,33 +216,33 @@ export const LATTICE_REFERENCE_SALTS: readonly LatticeReferenceSalt[] = [
   ),
   ...(
     [
-      ['NaNO3', 'sodium', 'nitrate', 1, 1, 2.26],
-      ['KNO3', 'potassium', 'nitrate', 1, 1, 2.11],
-      ['NH4NO3', 'ammonium', 'nitrate', 1, 1, 1.72],
-      ['NH4Cl', 'ammonium', 'chloride', 1, 1, 1.53],
-      ['NH4Br', 'ammonium', 'bromide', 1, 1, 2.43],
-      ['NH4I', 'ammonium', 'iodide', 1, 1, 2.51],
-      ['LiOH', 'lithium', 'hydroxide', 1, 1, 1.46],
-      ['NaOH', 'sodium', 'hydroxide', 1, 1, 2.13],
-      ['KOH', 'potassium', 'hydroxide', 1, 1, 2.04],
-      ['NaClO4', 'sodium', 'perchlorate', 1, 1, 2.5],
-      ['KClO4', 'potassium', 'perchlorate', 1, 1, 2.52],
-      ['NH4ClO4', 'ammonium', 'perchlorate', 1, 1, 1.95],
-      ['Na2SO4', 'sodium', 'sulfate', 2, 1, 2.66],
-      ['K2SO4', 'potassium', 'sulfate', 2, 1, 2.66],
-      ['MgSO4', 'magnesium', 'sulfate', 1, 1, 2.66],
-      ['CaSO4', 'calcium', 'sulfate', 1, 1, 2.96],
-      ['BaSO4', 'barium', 'sulfate', 1, 1, 4.5],
-      ['Na2CO3', 'sodium', 'carbonate', 2, 1, 2.54],
-      ['K2CO3', 'potassium', 'carbonate', 2, 1, 2.29],
-      ['CaCO3', 'calcium', 'carbonate', 1, 1, 2.71],
-      ['KH2PO4', 'potassium', 'dihydrogen-phosphate', 1, 1, 2.34],
-      ['NaCH3COO', 'sodium', 'acetate', 1, 1, 1.528],
-      ['KCH3COO', 'potassium', 'acetate', 1, 1, 1.57],
+      ['NaNO3', 'sodium', 'nitrate', 1, 1],
+      ['KNO3', 'potassium', 'nitrate', 1, 1],
+      ['NH4NO3', 'ammonium', 'nitrate', 1, 1],
+      ['NH4Cl', 'ammonium', 'chloride', 1, 1],
+      ['NH4Br', 'ammonium', 'bromide', 1, 1],
+      ['NH4I', 'ammonium', 'iodide', 1, 1],
+      ['LiOH', 'lithium', 'hydroxide', 1, 1],
+      ['NaOH', 'sodium', 'hydroxide', 1, 1],
+      ['KOH', 'potassium', 'hydroxide', 1, 1],
+      ['NaClO4', 'sodium', 'perchlorate', 1, 1],
+      ['KClO4', 'potassium', 'perchlorate', 1, 1],
+      ['NH4ClO4', 'ammonium', 'perchlorate', 1, 1],
+      ['Na2SO4', 'sodium', 'sulfate', 2, 1],
+      ['K2SO4', 'potassium', 'sulfate', 2, 1],
+      ['MgSO4', 'magnesium', 'sulfate', 1, 1],
+      ['CaSO4', 'calcium', 'sulfate', 1, 1],
+      ['BaSO4', 'barium', 'sulfate', 1, 1],
+      ['Na2CO3', 'sodium', 'carbonate', 2, 1],
+      ['K2CO3', 'potassium', 'carbonate', 2, 1],
+      ['CaCO3', 'calcium', 'carbonate', 1, 1],
+      ['KH2PO4', 'potassium', 'dihydrogen-phosphate', 1, 1],
+      ['NaCH3COO', 'sodium', 'acetate', 1, 1],
+      ['KCH3COO', 'potassium', 'acetate', 1, 1],
     ] as const
-  ).map(([f, c, a, p, q, d]) => ({
+  ).map(([f, c, a, p, q]) => ({
     id: f, formula: f, cation: c, anion: a, p, q, group: 'polyatomic' as const, route: 'solution-cycle' as const,
-    volume: rho(d),
+    volume: rhoC(polyDensity(f), POLYATOMIC_DENSITY[f]![1]),
   })),
 ];
 
@@ -241,12 +272,12 @@ export interface PackingCalibrationSalt {
 }
 
 export const PACKING_CALIBRATION_SALTS: readonly PackingCalibrationSalt[] = [
-  { id: 'sodium-acetate', name: 'sodium acetate', organicFormula: 'C2H3O2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.528, source: SRC.crcOrganicDensity + FM },
-  { id: 'potassium-acetate', name: 'potassium acetate', organicFormula: 'C2H3O2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'potassium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.57, source: SRC.crcOrganicDensity + FM },
-  { id: 'sodium-formate', name: 'sodium formate', organicFormula: 'CHO2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.92, source: SRC.crcOrganicDensity + FM },
+  { id: 'sodium-acetate', name: 'sodium acetate', organicFormula: 'C2H3O2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.528, source: `${SRC.crcOrganicDensity}; ${CHECKED.crcDensity}` },
+  { id: 'potassium-acetate', name: 'potassium acetate', organicFormula: 'C2H3O2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'potassium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.57, source: `${SRC.crcOrganicDensity}; ${CHECKED.crcDensity}` },
+  { id: 'sodium-formate', name: 'sodium formate', organicFormula: 'CHO2', organicCharge: -1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.92, source: `${SRC.crcOrganicDensity}; ${CHECKED.crcDensity}` },
   { id: 'sodium-benzoate', name: 'sodium benzoate', organicFormula: 'C7H5O2', organicCharge: -1, rings: { aromatic: 1, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.44, source: SRC.crcOrganicDensity + FM },
   { id: 'potassium-hydrogen-phthalate', name: 'potassium hydrogen phthalate', organicFormula: 'C8H5O4', organicCharge: -1, rings: { aromatic: 1, nonAromatic: 0 }, partner: 'potassium', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.636, source: SRC.crcOrganicDensity + FM },
-  { id: 'sodium-oxalate', name: 'sodium oxalate', organicFormula: 'C2O4', organicCharge: -2, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 2, densityGPerCm3: 2.34, source: SRC.crcDensity + FM },
+  { id: 'sodium-oxalate', name: 'sodium oxalate', organicFormula: 'C2O4', organicCharge: -2, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'sodium', organicPerFormula: 1, partnerPerFormula: 2, densityGPerCm3: 2.34, source: `${SRC.crcDensity}; ${CHECKED.crcDensity}` },
   { id: 'tetramethylammonium-chloride', name: 'tetramethylammonium chloride', organicFormula: 'C4H12N', organicCharge: 1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'chloride', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.169, source: SRC.crcOrganicDensity + FM },
   { id: 'tetramethylammonium-bromide', name: 'tetramethylammonium bromide', organicFormula: 'C4H12N', organicCharge: 1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'bromide', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.56, source: SRC.crcOrganicDensity + FM },
   { id: 'tetraethylammonium-bromide', name: 'tetraethylammonium bromide', organicFormula: 'C8H20N', organicCharge: 1, rings: { aromatic: 0, nonAromatic: 0 }, partner: 'bromide', organicPerFormula: 1, partnerPerFormula: 1, densityGPerCm3: 1.397, source: SRC.crcOrganicDensity + FM },
@@ -254,17 +285,18 @@ export const PACKING_CALIBRATION_SALTS: readonly PackingCalibrationSalt[] = [
 
 /**
  * Alkali salts whose published density gives the volume of a polyatomic anion with no Jenkins volume at
- * hand: V(anion) = (M/(ρ·N_A) − p·V(cation)) / q, averaged over the listed salts.
+ * hand: V(anion) = (M/(ρ·N_A) − p·V(cation)) / q, averaged over the listed salts. Densities: CRC Handbook,
+ * checked 2026-12-01 (CHECKED.crcDensity); KHSO4 2.245 → 2.32 and Na3PO4 2.536 → 2.54 corrected then.
  */
 export const ANION_VOLUME_SALTS: readonly { anion: string; salts: { formula: string; cation: string; p: number; q: number; densityGPerCm3: number }[] }[] = [
-  { anion: 'hydroxide', salts: [{ formula: 'LiOH', cation: 'lithium', p: 1, q: 1, densityGPerCm3: 1.46 }, { formula: 'NaOH', cation: 'sodium', p: 1, q: 1, densityGPerCm3: 2.13 }, { formula: 'KOH', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.04 }] },
-  { anion: 'hydrogen-sulfate', salts: [{ formula: 'KHSO4', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.245 }] },
-  { anion: 'phosphate', salts: [{ formula: 'Na3PO4', cation: 'sodium', p: 3, q: 1, densityGPerCm3: 2.536 }] },
+  { anion: 'hydroxide', salts: [{ formula: 'LiOH', cation: 'lithium', p: 1, q: 1, densityGPerCm3: polyDensity('LiOH') }, { formula: 'NaOH', cation: 'sodium', p: 1, q: 1, densityGPerCm3: polyDensity('NaOH') }, { formula: 'KOH', cation: 'potassium', p: 1, q: 1, densityGPerCm3: polyDensity('KOH') }] },
+  { anion: 'hydrogen-sulfate', salts: [{ formula: 'KHSO4', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.32 }] },
+  { anion: 'phosphate', salts: [{ formula: 'Na3PO4', cation: 'sodium', p: 3, q: 1, densityGPerCm3: 2.54 }] },
   { anion: 'hydrogen-phosphate', salts: [{ formula: 'Na2HPO4', cation: 'sodium', p: 2, q: 1, densityGPerCm3: 1.7 }] },
-  { anion: 'dihydrogen-phosphate', salts: [{ formula: 'KH2PO4', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 2.34 }] },
-  { anion: 'acetate', salts: [{ formula: 'NaCH3COO', cation: 'sodium', p: 1, q: 1, densityGPerCm3: 1.528 }, { formula: 'KCH3COO', cation: 'potassium', p: 1, q: 1, densityGPerCm3: 1.57 }] },
+  { anion: 'dihydrogen-phosphate', salts: [{ formula: 'KH2PO4', cation: 'potassium', p: 1, q: 1, densityGPerCm3: polyDensity('KH2PO4') }] },
+  { anion: 'acetate', salts: [{ formula: 'NaCH3COO', cation: 'sodium', p: 1, q: 1, densityGPerCm3: polyDensity('NaCH3COO') }, { formula: 'KCH3COO', cation: 'potassium', p: 1, q: 1, densityGPerCm3: polyDensity('KCH3COO') }] },
 ];
-export const ANION_VOLUME_SOURCE = `derived here from densities (${SRC.crcDensity}${FM}) minus cation volumes (${SRC.jenkinsVolumes}${FM})`;
+export const ANION_VOLUME_SOURCE = `derived here from densities (${SRC.crcDensity}; ${CHECKED.crcDensity}; KHSO4 corrected from 2.245 and Na3PO4 from 2.536 on 2026-12-01) minus cation volumes (${SRC.jenkinsVolumes}${FM})`;
 
 /** Salts with an enthalpy of solution at infinite dilution computed from the NBS ΔfH° (Hess's law). */
 export const SOLUTION_REFERENCE_SALTS: readonly { formula: string; cation: string; anion: string; p: number; q: number }[] = [

@@ -56,5 +56,9 @@ export const CHECKED = {
     'checked 2026-12-01 against gromacs/gromacs share/top/vdwradii.dat (H, C, N, O, F, P, S, Cl; the file cites Bondi 1964) and exciting/exciting tools/ase/ase/data/vdw.py (ASE table; Si, Se, Br, I marked as Bondi 1964)',
   zhaoMordred:
     'checked 2026-12-01 against mordred-descriptor/mordred mordred/VdwVolumeABC.py (Zhao, Abraham & Zissimos 2003 as implemented there: atom contributions (4/3)πr³ of the same radii)',
+  crcDensity:
+    'checked 2026-12-01 against CalebBell/chemicals "chemicals/Density/CRC Solid Inorganic Constant Densities.tsv" (molar volumes computed there from the CRC Handbook densities; ρ = M/V_m, agrees to the last digit given here)',
+  crcAqueous:
+    'checked 2026-12-01 against CalebBell/chemicals "chemicals/Electrolytes/CRC Thermodynamic Properties of Aqueous Ions.tsv" (CRC Handbook table, 0.1 kJ/mol)',
   naclCell: 'a = 5.6402 Å read 2026-12-01 at http://www.ilpi.com/inorganic/structures/nacl/index.html (NaCl structure page)',
 } as const;
