@@ -4,7 +4,10 @@ import { CHECKED, SRC } from './thermo-sources';
  * Element data for formula work: conventional atomic weights (g/mol) and Bondi van der Waals radii (Å)
  * with the corresponding sphere volumes (Å³) used as atom contributions by Zhao, Abraham & Zissimos.
  *
- * Atomic weights: IUPAC conventional values (2013 table), abridged to what salts of drugs need — from memory.
+ * Atomic weights: IUPAC conventional values (2013 table; J. Meija et al., Pure Appl. Chem. 88 (2016) 265),
+ * abridged to what salts of drugs need — entered from memory, all 24 checked 2026-12-01 against
+ * rafaqz/UnitfulMoles.jl src/ConventionalMoles.jl (cites that IUPAC report; I, Cs and Ba agree to the five
+ * figures it gives).
  * vdW volumes: Y. H. Zhao, M. H. Abraham, A. M. Zissimos, J. Org. Chem. 68 (2003) 7368, Table 1 (sphere
  * volumes of Bondi radii, A. Bondi, J. Phys. Chem. 68 (1964) 441) — the values quoted in the science brief,
  * checked here against (4/3)πr³ of the Bondi radius (tests/chem/thermo/ion-volume.test.ts).
