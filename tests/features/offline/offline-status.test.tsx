@@ -6,6 +6,7 @@ import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBa
 import { reportStorageError, useStorageProblemStore } from '@/features/offline/storage-problem-store';
 import { classifyStorageError } from '@/persistence/storage-status';
 import { resetDbForTests } from '@/persistence/db';
+import { SW_UPDATE_EVENT } from '@/features/offline/update-event';
 
 function stubStorage(storage: Partial<StorageManager> | undefined) {
   Object.defineProperty(navigator, 'storage', { value: storage, configurable: true });
@@ -38,6 +39,16 @@ describe('network and storage status', () => {
     stubStorage(undefined);
     render(<OfflineStatus />);
     expect(await screen.findByText('Keeping unknown')).toBeInTheDocument();
+  });
+
+  it('offers a reload when a newer version has taken over the page', () => {
+    stubStorage(undefined);
+    render(<OfflineStatus />);
+    expect(screen.queryByRole('button', { name: 'New version — reload' })).toBeNull();
+    act(() => {
+      window.dispatchEvent(new Event(SW_UPDATE_EVENT));
+    });
+    expect(screen.getByRole('button', { name: 'New version — reload' })).toBeInTheDocument();
   });
 
   it('follows the browser going offline and online', async () => {

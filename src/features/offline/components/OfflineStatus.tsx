@@ -1,6 +1,7 @@
 import { useOnlineStatus } from '../hooks/use-online-status';
 import { useStoragePersistence } from '../hooks/use-storage-persistence';
 import { useOfflineReady } from '../hooks/use-offline-ready';
+import { useUpdateReady } from '../hooks/use-update-ready';
 import type { PersistenceAnswer } from '@/persistence/storage-status';
 import '../offline.css';
 
@@ -28,6 +29,7 @@ export function OfflineStatus() {
   const online = useOnlineStatus();
   const { answer, usage } = useStoragePersistence();
   const offlineReady = useOfflineReady();
+  const updateReady = useUpdateReady();
   const keep = answer ? KEEP_TEXT[answer] : null;
   const usageText = usage ? ` Using ${formatMb(usage.usageBytes)} of ${formatMb(usage.quotaBytes)} available.` : '';
   return (
@@ -52,6 +54,11 @@ export function OfflineStatus() {
         ) : null}
         {offlineReady && !online ? <span hidden data-testid="offline-ready" /> : null}
       </span>
+      {updateReady ? (
+        <button type="button" className="link-status-item link-status-update" onClick={() => window.location.reload()}>
+          New version — reload
+        </button>
+      ) : null}
       {keep ? (
         <span
           className={`link-status-item keep-${answer}`}
