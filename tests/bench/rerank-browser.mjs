@@ -1,3 +1,4 @@
+/* global indexedDB, document, HTMLInputElement, requestAnimationFrame, window -- these run inside the page (page.evaluate) */
 // Benchmark (not part of `npm test`): time from a weight-slider movement to the re-ranked table on
 // screen, in Chromium on the production build, with 60 shortlisted candidates.
 //
