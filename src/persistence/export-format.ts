@@ -178,7 +178,7 @@ export function upgradeV1(raw: unknown): unknown {
   return {
     format: PROJECT_FILE_FORMAT,
     version: 2,
-    app: { name: 'Saltsmith', version: 'unknown (version-1 file)' },
+    app: { name: 'Saltsmith (format-1 file)', version: 'version not recorded' },
     createdAt: v1.exportedAt,
     project: {
       name: v1.name,
