@@ -33,7 +33,7 @@ export const SRC = {
   latimer1939: 'W. M. Latimer, K. S. Pitzer, C. M. Slansky, J. Chem. Phys. 7 (1939) 108 (effective-radius Born hydration)',
   born1920: 'M. Born, Z. Phys. 1 (1920) 45 (Born solvation energy)',
   waterDielectric:
-    'Water at 298.15 K: ε_r = 78.36, dε_r/dT = −0.361 K⁻¹ (D. G. Archer & P. Wang, J. Phys. Chem. Ref. Data 19 (1990) 371) — from memory',
+    'Water at 298.15 K: ε_r = 78.36, dε_r/dT = −0.361 K⁻¹ (D. G. Archer & P. Wang, J. Phys. Chem. Ref. Data 19 (1990) 371) — from memory; ε_r checked 2026-12-01 against CalebBell/chemicals "chemicals/Electrolytes/Permittivity (Dielectric Constant) of Liquids.tsv" (CRC fit for water, A = 249.21, B = −0.79069, C = 0.00072997: ε_r(298.15 K) = 78.36, dε_r/dT = −0.355 K⁻¹ — the slope differs by 1.6 %, which moves the Born bracket by 0.03 %)',
 } as const;
 
 /**
