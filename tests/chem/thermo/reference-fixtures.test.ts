@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { referenceLatticeEnthalpyKJ, referenceSolutionEnthalpyKJ, referenceVolumeNm3 } from '@/chem';
 import { THERMO_IONS } from '@/chem/data/thermo-ions';
 import {
+  formationEnthalpySource,
   ANION_VOLUME_SALTS, ANION_VOLUME_SOURCE, AQUEOUS_ION_FORMATION_KJ, ATOM_FORMATION_KJ, CYCLE_DATA_SOURCE, ELECTRON_AFFINITY_KJ, IONISATION_ENERGY_SUM_KJ,
   LATTICE_REFERENCE_SALTS, PACKING_CALIBRATION_SALTS, SOLID_FORMATION_KJ, SOLUTION_REFERENCE_SALTS,
 } from '@/chem/data/thermo-reference';
@@ -39,9 +40,9 @@ function tables(): Record<string, Record<string, unknown>[]> {
       solid_formation_enthalpy_kJ_per_mol: SOLID_FORMATION_KJ[s.formula], solution_enthalpy_kJ_per_mol: round(referenceSolutionEnthalpyKJ(s), 2), source: SOLUTION_REFERENCE_SOURCE,
     })),
     'formation-enthalpies.csv': [
-      ...Object.entries(SOLID_FORMATION_KJ).map(([k, v]) => ({ species: k, state: 'cr', enthalpy_kJ_per_mol: v, quantity: 'ΔfH°', source: `${SRC.nbs1982} — from memory` })),
-      ...Object.entries(AQUEOUS_ION_FORMATION_KJ).map(([k, v]) => ({ species: k, state: 'aq', enthalpy_kJ_per_mol: v, quantity: 'ΔfH°', source: `${SRC.nbs1982} — from memory` })),
-      ...Object.entries(ATOM_FORMATION_KJ).map(([k, v]) => ({ species: k, state: 'g', enthalpy_kJ_per_mol: v, quantity: 'ΔfH° (atomisation)', source: `${SRC.nbs1982} — from memory` })),
+      ...Object.entries(SOLID_FORMATION_KJ).map(([k, v]) => ({ species: k, state: 'cr', enthalpy_kJ_per_mol: v, quantity: 'ΔfH°', source: formationEnthalpySource(k, 'cr') })),
+      ...Object.entries(AQUEOUS_ION_FORMATION_KJ).map(([k, v]) => ({ species: k, state: 'aq', enthalpy_kJ_per_mol: v, quantity: 'ΔfH°', source: formationEnthalpySource(k, 'aq') })),
+      ...Object.entries(ATOM_FORMATION_KJ).map(([k, v]) => ({ species: k, state: 'g', enthalpy_kJ_per_mol: v, quantity: 'ΔfH° (atomisation)', source: formationEnthalpySource(k, 'g') })),
       ...Object.entries(IONISATION_ENERGY_SUM_KJ).map(([k, v]) => ({ species: k, state: 'g', enthalpy_kJ_per_mol: round(v, 1), quantity: 'sum of ionisation energies to the usual cation', source: CYCLE_DATA_SOURCE })),
       ...Object.entries(ELECTRON_AFFINITY_KJ).map(([k, v]) => ({ species: k, state: 'g', enthalpy_kJ_per_mol: v, quantity: 'electron affinity', source: CYCLE_DATA_SOURCE })),
     ],

@@ -22,7 +22,7 @@ export function referenceSolutionEnthalpyKJ(s: { formula: string; cation: string
   if (solid === undefined || c === undefined || a === undefined) throw new Error(`reference data: missing ΔfH° for ${s.formula}`);
   return s.p * c + s.q * a - solid;
 }
-export const SOLUTION_REFERENCE_SOURCE = `Hess's law from ΔfH° of the solid and the aqueous ions, ${SRC.nbs1982} — from memory`;
+export const SOLUTION_REFERENCE_SOURCE = `Hess's law from ΔfH° of the solid and the aqueous ions, ${SRC.nbs1982} — per-species check status in fixtures/reference/formation-enthalpies.csv (checked values name their copy; the rest are from memory)`;
 
 /** Reference lattice dissociation enthalpy of a reference salt, kJ/mol, with its source. */
 export function referenceLatticeEnthalpyKJ(s: LatticeReferenceSalt): { value: number; source: string } {
