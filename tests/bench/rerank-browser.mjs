@@ -63,6 +63,9 @@ try {
       setter.call(slider, String((i % 30) / 10));
       slider.dispatchEvent(new Event('input', { bubbles: true }));
       commit.push(performance.now() - t0);
+      const t1 = performance.now();
+      void document.body.offsetHeight; // force style + layout now, to time it apart from paint
+      (window.__layout ??= []).push(performance.now() - t1);
       await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
       out.push(performance.now() - t0);
     }
@@ -73,7 +76,8 @@ try {
   });
   times.sort((a, b) => a - b);
   const commitMedianMs = await page.evaluate(() => window.__commitMedian);
-  console.log(JSON.stringify({ commitMedianMs: +commitMedianMs.toFixed(1) }));
+  const layoutMedianMs = await page.evaluate(() => window.__layout.sort((a, b) => a - b)[30]);
+  console.log(JSON.stringify({ commitMedianMs: +commitMedianMs.toFixed(1), layoutMedianMs: +layoutMedianMs.toFixed(1) }));
   console.log(JSON.stringify({ candidatesOnScreen: ranked, movements: times.length, medianMs: +times[30].toFixed(1), p95Ms: +times[56].toFixed(1), maxMs: +times[59].toFixed(1), note: 'input event → React commit → next frame, Chromium headless, 1280×800' }, null, 2));
 } finally {
   await ctx.close();
