@@ -1,10 +1,32 @@
 import { useEffect, useRef, useState } from 'react';
 import { useLiveQuery } from 'dexie-react-hooks';
+import { ChemInputError } from '@/chem';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { measurementsRepo } from '@/persistence/measurements-repo';
 import type { CandidateRecord, CustomIonRecord, MeasurementRecord, ProjectRecord } from '@/persistence/records';
 import { computeProjectScreening, screeningInputsKey, type ProjectScreening } from './compute-screening';
+
+/** Names of the compound's fields as the Compound area labels them. */
+const FIELD_LABELS: Record<string, string> = {
+  intrinsicSolubilityMgPerMl: 'Intrinsic solubility S₀',
+  meltingPointC: 'Melting point',
+  logP: 'log P',
+  doseMg: 'Highest single dose',
+  smiles: 'Structure (SMILES)',
+  formula: 'Molecular formula',
+  ionCharge: 'Charge of the salt-forming ion',
+  pKas: 'pKa values',
+};
+
+/** A core error as a person reads it: the field's on-screen name instead of its code name. */
+export function readableError(err: unknown): string {
+  if (err instanceof ChemInputError) {
+    const label = FIELD_LABELS[err.field] ?? err.field;
+    return `${label}: ${err.message.slice(err.field.length + 2)}`;
+  }
+  return err instanceof Error ? err.message : String(err);
+}
 
 /** What the screening hook returns: a status, the result when ready, a message when not. */
 export interface ScreeningState {
@@ -40,7 +62,7 @@ export function useScreening(
         if (run === runRef.current) setState({ status: 'ready', result });
       })
       .catch((err: unknown) => {
-        if (run === runRef.current) setState({ status: 'error', error: err instanceof Error ? err.message : String(err) });
+        if (run === runRef.current) setState({ status: 'error', error: readableError(err) });
       });
     // `key` stands for every input the physics reads.
     // eslint-disable-next-line react-hooks/exhaustive-deps

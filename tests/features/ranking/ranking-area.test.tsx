@@ -91,6 +91,6 @@ describe('Ranking area (formula-only compound, so no structure parser is loaded)
     await projectsRepo.updateCompound(project.id, { ...project.compound, intrinsicSolubilityMgPerMl: null, meltingPointC: null });
     const fresh = (await projectsRepo.get(project.id))!;
     render(<RankingArea project={fresh} />);
-    expect(await screen.findByRole('alert', {}, { timeout: 15000 })).toHaveTextContent(/intrinsicSolubilityMgPerMl/);
+    expect(await screen.findByRole('alert', {}, { timeout: 15000 })).toHaveTextContent(/Intrinsic solubility S₀: no intrinsic solubility/);
   });
 });
