@@ -62,6 +62,22 @@ describe('offline after one visit (service worker precache)', () => {
   });
 });
 
+describe('what the service worker precaches', () => {
+  it('lists the structure-parsing chunk and the Monte Carlo worker, not the predictor resources', async () => {
+    const { page } = s;
+    const res = await page.request.get(new URL('sw.js', BASE_URL).toString());
+    expect(res.ok()).toBe(true);
+    const sw = await res.text();
+    const urls = [...sw.matchAll(/url:"([^"]+)"/g)].map((m) => m[1] ?? '');
+    expect(urls).toContain('index.html');
+    expect(urls).toContain('manifest.webmanifest');
+    expect(urls.some((u) => /assets\/openchemlib-[\w-]+\.js$/.test(u))).toBe(true);
+    expect(urls.some((u) => /assets\/robustness\.worker-[\w-]+\.js$/.test(u))).toBe(true);
+    expect(urls.some((u) => /resources-[\w-]+\.json$/.test(u))).toBe(false);
+    for (const icon of ['icon.svg', 'icon-192.png', 'icon-512.png', 'icon-maskable-512.png']) expect(urls).toContain(icon);
+  });
+});
+
 describe('storage failures are shown, not swallowed', () => {
   it('says so plainly when another tab takes the database away', async () => {
     const { page } = s;
