@@ -46,4 +46,9 @@ export const measurementsRepo = {
   },
 
   remove: (id: string): Promise<void> => getDb().measurements.delete(id),
+
+  /** Put a removed measurement back as it was (undo of a delete). */
+  restore: async (record: MeasurementRecord): Promise<void> => {
+    await getDb().measurements.put(measurementRecordSchema.parse(record));
+  },
 };

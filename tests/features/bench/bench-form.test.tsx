@@ -132,3 +132,18 @@ describe('candidate salt form', () => {
     expect(await measurementsRepo.listForProject(p.id)).toHaveLength(0);
   });
 });
+
+describe('deleting a measurement', () => {
+  it('offers an undo that puts the record back unchanged', async () => {
+    await resetDbForTests();
+    const p = await projectsRepo.create('Undo test', { ...DEMO_COMPOUND, name: 'Undo test' });
+    const c = await candidatesRepo.add(p.id, 'chloride');
+    const m = await measurementsRepo.add({ projectId: p.id, candidateId: c.id, kind: 'melting-point', value: 212, unit: '°C', ph: null, temperatureK: null, medium: '', text: 'DSC onset' });
+    const user = userEvent.setup();
+    render(<BenchArea project={p} extras={{ predictionFor: () => null }} />);
+    await user.click(await screen.findByRole('button', { name: /Delete melting point 212/ }));
+    await waitFor(async () => expect(await measurementsRepo.listForProject(p.id)).toHaveLength(0));
+    await user.click(await screen.findByRole('button', { name: 'Undo delete' }));
+    await waitFor(async () => expect(await measurementsRepo.listForProject(p.id)).toEqual([m]));
+  });
+});

@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { measurementsRepo } from '@/persistence/measurements-repo';
 import type { MeasurementRecord } from '@/persistence/records';
 import { CELSIUS_ZERO_K, MEASUREMENT_KINDS } from '../bench-form-model';
@@ -23,9 +23,38 @@ export function MeasurementTable({
   caption: string;
   predictionFor: (m: MeasurementRecord) => ReactNode;
 }) {
-  if (measurements.length === 0) return <p className="muted">Nothing measured yet for this candidate.</p>;
+  const [removed, setRemoved] = useState<MeasurementRecord | null>(null);
+  const undoBar = (
+    <div role="status" aria-live="polite" className="bench-undo">
+      {removed ? (
+        <>
+          Deleted {MEASUREMENT_KINDS[removed.kind].label.toLowerCase()}
+          {removed.value !== null ? ` ${fmt(removed.value)} ${removed.unit}` : ''}.{' '}
+          <button
+            type="button"
+            className="primary small"
+            onClick={() => {
+              void measurementsRepo.restore(removed);
+              setRemoved(null);
+            }}
+          >
+            Undo delete
+          </button>
+        </>
+      ) : null}
+    </div>
+  );
+  if (measurements.length === 0) {
+    return (
+      <>
+        {undoBar}
+        <p className="muted">Nothing measured yet for this candidate.</p>
+      </>
+    );
+  }
   return (
     <div className="table-scroll">
+      {undoBar}
       <table className="data-table bench-table">
         <caption className="sr-only">{caption}</caption>
         <thead>
@@ -65,7 +94,10 @@ export function MeasurementTable({
                     type="button"
                     className="danger small"
                     aria-label={`Delete ${spec.label.toLowerCase()} ${m.value ?? ''} ${m.unit}`.trim()}
-                    onClick={() => void measurementsRepo.remove(m.id)}
+                    onClick={() => {
+                      setRemoved(m);
+                      void measurementsRepo.remove(m.id);
+                    }}
                   >
                     Delete
                   </button>
