@@ -30,7 +30,7 @@ describe('Energetics area', () => {
     expect(within(table).getAllByText(/±/).length).toBeGreaterThanOrEqual(4);
     // The weak point is said on screen, not hidden.
     expect(screen.getAllByRole('note').some((n) => /difference of ΔH_L/.test(n.textContent ?? ''))).toBe(true);
-    expect(screen.getByRole('img', { name: /per drug ion/ })).toBeInTheDocument();
+    expect(screen.getAllByRole('img', { name: /per drug ion/ }).length).toBeGreaterThanOrEqual(2);
   });
 });
 
@@ -64,5 +64,21 @@ describe('lattice enthalpy backed out of a measured ΔH_sol', () => {
     expect(Math.abs(closure)).toBeLessThan(1e-9);
     // The measured value's stated spread and the hydration estimates' add in quadrature: never less than either.
     expect(r.lattice.uncertainty).toBeGreaterThanOrEqual(t.cationHydrationKJ.uncertainty * e.cationsPerFormula - 1e-9);
+  });
+});
+
+describe('relative enthalpies of solution', () => {
+  it('are differences from the median and drop the common drug-ion term from σ (σ² − σ_drug²)', async () => {
+    const { relativeSolutionEnthalpies } = await import('@/features/energetics/energetics-model');
+    // Inputs are arbitrary test numbers: the check is the arithmetic of the rule, not a model value.
+    const r = relativeSolutionEnthalpies([
+      { id: 'a', perDrugKJ: -10, perDrugSigmaKJ: 50, drugHydrationSigmaKJ: 30 },
+      { id: 'b', perDrugKJ: 5, perDrugSigmaKJ: 40, drugHydrationSigmaKJ: 30 },
+      { id: 'c', perDrugKJ: 20, perDrugSigmaKJ: 20, drugHydrationSigmaKJ: 30 },
+    ]);
+    expect(r.map((x) => x.valueKJ)).toEqual([-15, 0, 15]);
+    expect(r[0]!.sigmaKJ).toBeCloseTo(40, 10); // √(50² − 30²)
+    expect(r[1]!.sigmaKJ).toBeCloseTo(Math.sqrt(40 ** 2 - 30 ** 2), 10);
+    expect(r[2]!.sigmaKJ).toBe(0); // never negative variance
   });
 });

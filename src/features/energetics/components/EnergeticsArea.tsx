@@ -8,7 +8,7 @@ import { candidateLabel } from '@/features/screening-data/candidate-label';
 import type { CandidateEnergetics, ProjectScreening } from '@/features/screening-data/compute-screening';
 import { useProjectScreening } from '@/features/screening-data/use-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import { cancellationNote, energyCycleOf, sourcesOf } from '../energetics-model';
+import { cancellationNote, energyCycleOf, relativeSolutionEnthalpies, sourcesOf } from '../energetics-model';
 import '../energetics.css';
 
 const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
@@ -123,6 +123,7 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
             })}
             width={760}
           />
+          <RelativeBars data={data} items={withThermo} />
           <WhiskerBars
             title="Estimated lattice enthalpy per formula unit"
             caption={`Lattice dissociation enthalpy ΔH_L (> 0) with ±1σ whiskers: ${withThermo
@@ -148,6 +149,34 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
         </section>
       ) : null}
     </div>
+  );
+}
+
+/** ΔH_sol per drug ion relative to the median candidate, with the drug ion's common error taken out. */
+function RelativeBars({ data, items }: { data: ProjectScreening; items: (CandidateEnergetics & { thermo: SaltThermoResult })[] }) {
+  const drugIsCation = data.drugIon.charge > 0;
+  const rel = relativeSolutionEnthalpies(
+    items.map((e) => {
+      const m = drugsPerFormula(data, e.candidateId);
+      return {
+        id: e.candidateId,
+        perDrugKJ: e.thermo.solutionEnthalpyKJ.value / m,
+        perDrugSigmaKJ: e.thermo.solutionEnthalpyKJ.uncertainty / m,
+        drugHydrationSigmaKJ: (drugIsCation ? e.thermo.cationHydrationKJ : e.thermo.anionHydrationKJ).uncertainty,
+      };
+    }),
+  );
+  return (
+    <WhiskerBars
+      title="Enthalpy of solution per drug ion relative to the median candidate"
+      caption={`Relative ΔH_sol per drug ion (kJ/mol, median candidate = 0) with ±1σ whiskers from which the drug ion’s own hydration error is removed, as it is common to every candidate (assumption: that term fully shared, the others independent). ${rel
+        .map((r) => `${labelOf(data, r.id)} ${kj(r.valueKJ)} ± ${r.sigmaKJ.toFixed(0)}`)
+        .join('; ')}.`}
+      unit="ΔH_sol − median, kJ/mol per drug ion"
+      format={(x) => kj(x)}
+      rows={rel.map((r) => ({ id: r.id, label: labelOf(data, r.id), value: r.valueKJ, uncertainty: r.sigmaKJ }))}
+      width={760}
+    />
   );
 }
 
