@@ -14,7 +14,7 @@ if (!chromium) {
 const outDir = process.env.SALTSMITH_OUT_DIR;
 const outArgs = outDir ? ['--outDir', outDir] : [];
 if (!process.env.SALTSMITH_SKIP_BUILD) {
-  const build = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', ...outArgs], {
+  const build = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--bypass-lock', ...outArgs], {
     stdio: 'inherit',
   });
   if (build.status !== 0) process.exit(build.status ?? 1);

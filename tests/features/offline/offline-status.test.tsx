@@ -3,7 +3,7 @@ import { act, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
-import { reportStorageError, useStorageProblemStore } from '@/features/offline/storage-problem-store';
+import { reportStorageError, useStorageProblemStore } from '@/stores/storage-problem-store';
 import { classifyStorageError } from '@/persistence/storage-status';
 import { resetDbForTests } from '@/persistence/db';
 import { SW_UPDATE_EVENT } from '@/features/offline/update-event';

@@ -1,6 +1,7 @@
 import { useEffect, useRef, useState, type ChangeEvent } from 'react';
 import type { ProjectRecord } from '@/persistence/records';
 import { projectsRepo } from '@/persistence/projects-repo';
+import { reportStorageError } from '@/stores/storage-problem-store';
 import {
   compoundFromDraft,
   draftFromCompound,
@@ -122,7 +123,8 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
         try {
           await projectsRepo.updateCompound(projectId, compound);
           setSaveState('saved');
-        } catch {
+        } catch (err) {
+          reportStorageError(err);
           setSaveState('error');
         }
       })();
@@ -142,7 +144,11 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     projectsRepo
       .updateCompound(projectId, result.compound)
       .then(() => setSaveState('saved'))
-      .catch(() => setSaveState('error'));
+      .catch((err: unknown) => {
+        // Say why (quota full, database blocked) in the shared banner; the last saved values stay.
+        reportStorageError(err);
+        setSaveState('error');
+      });
   };
 
   const common = { draft, errors, onChange: change };

@@ -1,6 +1,6 @@
 import { useEffect } from 'react';
 import { watchDatabase } from '@/persistence/storage-status';
-import { reportStorageError, useStorageProblemStore } from '../storage-problem-store';
+import { reportStorageError, useStorageProblemStore } from '@/stores/storage-problem-store';
 import '../offline.css';
 
 /**
