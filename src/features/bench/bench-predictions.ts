@@ -7,8 +7,12 @@ import { CELSIUS_ZERO_K } from './bench-form-model';
 /** A prediction set beside a measurement, in words, with its basis. */
 export interface Prediction {
   text: string;
-  /** 'estimate' for a model value; 'classification' when the measurement is classed against a standard. */
-  kind: 'estimate' | 'classification' | 'none';
+  /**
+   * 'estimate' for a model value; 'from-measured' when the value rests on measured data (e.g. a K_sp
+   * taken from a measured solubility, so it cannot serve as an independent check); 'classification'
+   * when the measurement is classed against a standard.
+   */
+  kind: 'estimate' | 'from-measured' | 'classification' | 'none';
   basis: string;
 }
 
@@ -38,10 +42,13 @@ export function predictionFor(m: MeasurementRecord, data: ProjectScreening | und
         m.temperatureK !== null && Math.abs(m.temperatureK - data.settings.temperatureK) > 2
           ? `; predicted at ${(data.settings.temperatureK - CELSIUS_ZERO_K).toFixed(0)} °C`
           : '';
+      const fromMeasured = nearest.solid === 'salt' && row.kspOrigin === 'measured';
       return {
-        text: `≈ ${fmt(s)} mg/mL as salt at pH ${nearest.pH.toFixed(1)} (±1σ ${fmt(s / 10 ** sigma)}–${fmt(s * 10 ** sigma)}), ${nearest.solid === 'salt' ? 'salt' : 'free form'} limits${tNote}`,
-        kind: 'estimate',
-        basis: row.kspOrigin === 'measured' ? 'K_sp from a measured solubility of this salt (this one or another)' : 'estimated K_sp',
+        text: `≈ ${fmt(s)} mg/mL as salt at pH ${nearest.pH.toFixed(1)} (±1σ ${fmt(s / 10 ** sigma)}–${fmt(s * 10 ** sigma)}), ${nearest.solid === 'salt' ? 'salt' : 'free form'} limits${tNote}${
+          fromMeasured ? '; K_sp taken from a measured solubility of this salt, so not an independent check' : ''
+        }`,
+        kind: fromMeasured ? 'from-measured' : 'estimate',
+        basis: fromMeasured ? 'K_sp from a measured solubility of this salt' : nearest.solid === 'salt' ? 'estimated K_sp' : 'free-form solubility from S₀',
       };
     }
     case 'solution-enthalpy': {

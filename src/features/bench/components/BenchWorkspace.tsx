@@ -80,7 +80,12 @@ export function BenchWorkspace({ project }: { project: ProjectRecord }) {
           const p = predictionFor(m, data);
           return (
             <span title={p.basis}>
-              {p.text} {p.kind === 'estimate' ? <span className="origin origin-estimated">est.</span> : null}
+              {p.text}{' '}
+              {p.kind === 'estimate' ? (
+                <span className="origin origin-estimated">est.</span>
+              ) : p.kind === 'from-measured' ? (
+                <span className="origin origin-measured">from meas.</span>
+              ) : null}
             </span>
           );
         },
