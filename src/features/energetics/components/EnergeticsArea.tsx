@@ -222,7 +222,12 @@ function CycleDetails({ data, e, measured }: { data: ProjectScreening; e: Candid
                 {sym} <div className="muted small-note">{what}</div>
               </th>
               <td>
-                {kj(est.value)} ± {est.uncertainty.toFixed(0)} <span className="origin origin-estimated">est.</span>
+                {kj(est.value)} ± {est.uncertainty.toFixed(0)}{' '}
+                {est.method === 'published' ? (
+                  <span className="origin origin-published" title="published single-ion value (see Sources)">pub.</span>
+                ) : (
+                  <span className="origin origin-estimated">est.</span>
+                )}
               </td>
               <td className="method">{est.method}</td>
             </tr>
