@@ -18,14 +18,16 @@ export function WeightSliders({
     <fieldset className="weights">
       <legend>Weights</legend>
       <p className="field-hint">
-        Each criterion scores 0–1; the score is the weighted mean. Drag to see the order change. {total === 0 ? 'All weights are zero: nothing is ranked by merit.' : ''}
+        Each criterion scores 0–1; the score is the weighted mean (its bar in the table is split in these colours). Drag to see the order
+        change. {total === 0 ? 'All weights are zero: nothing is ranked by merit.' : ''}
       </p>
-      {CRITERIA.map((k) => {
+      {CRITERIA.map((k, i) => {
         const id = `${uid}-${k}`;
         const share = total > 0 ? (weights[k] / total) * 100 : 0;
         return (
           <div className="weight-row" key={k}>
             <label htmlFor={id} title={CRITERION_TEXT[k].means}>
+              <span className={`swatch part-${i}`} aria-hidden="true" />
               {CRITERION_TEXT[k].label}
             </label>
             <input
