@@ -8,7 +8,7 @@ import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '../hooks/use-robustness';
 import { useWeights } from '../hooks/use-weights';
-import { displayRows, type DisplayRow } from '../ranking-rows';
+import { displayRows } from '../ranking-rows';
 import { RankingTable } from './RankingTable';
 import { ScreeningConditions } from './ScreeningConditions';
 import { SolubilityPanel } from './SolubilityPanel';
@@ -30,7 +30,9 @@ export function RankingCautions() {
 }
 
 /** Rank robustness: the Monte Carlo's probabilities as bars, with its progress while it runs. */
-const RobustnessPanel = memo(function RobustnessPanelView({ robustness, rows }: { robustness: RobustnessState; rows: DisplayRow[] }) {
+const RobustnessPanel = memo(function RobustnessPanelView({ robustness, labels }: { robustness: RobustnessState; labels: Record<string, string> }) {
+  // Ordered by the probability itself, so the bars change only when a new Monte Carlo run arrives.
+  const results = [...(robustness.results ?? [])].sort((a, b) => b.pTop3 - a.pTop3 || b.pFirst - a.pFirst);
   return (
     <section className="panel" aria-labelledby="robustness-title">
         <header className="panel-head">
@@ -51,23 +53,18 @@ const RobustnessPanel = memo(function RobustnessPanelView({ robustness, rows }: 
           <div className={robustness.status === 'running' ? 'stale' : undefined}>
             <WhiskerBars
               title="Probability of staying in the top three"
-              caption={rows
-                .filter((r) => r.rank !== null)
-                .map((r) => {
-                  const x = robustness.results!.find((q) => q.id === r.id);
-                  return x ? `${r.label}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first` : '';
-                })
-                .filter(Boolean)
+              caption={results
+                .map((x) => `${labels[x.id] ?? x.id}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first`)
                 .join('; ')}
               unit="% of draws in the top three"
               domain={[0, 100]}
               format={(x) => `${x.toFixed(0)}`}
-              rows={rows
-                .filter((r) => r.rank !== null)
-                .map((r) => {
-                  const x = robustness.results!.find((q) => q.id === r.id);
-                  return { id: r.id, label: `${r.rank}. ${r.label}`, value: (x?.pTop3 ?? 0) * 100, note: x ? `(first ${(x.pFirst * 100).toFixed(0)} %)` : '' };
-                })}
+              rows={results.map((x) => ({
+                id: x.id,
+                label: labels[x.id] ?? x.id,
+                value: x.pTop3 * 100,
+                note: `(first ${(x.pFirst * 100).toFixed(0)} %)`,
+              }))}
             />
           </div>
         ) : robustness.status === 'running' ? (
@@ -92,7 +89,14 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
   // The table follows the slider at once; the pictures below follow at lower priority.
   const deferredWeights = useDeferredValue(weights);
-  const deferredRows = useDeferredValue(rows);
+  const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
+  const topKey = useDeferredValue(
+    rows
+      .filter((r) => r.rank !== null && r.rank <= 3)
+      .sort((a, b) => a.rank! - b.rank!)
+      .map((r) => r.id)
+      .join('|'),
+  );
   const robustness = useRobustness(robustRows, deferredWeights, data?.screen.robustnessShared);
   const onFocus = useCallback(
     (id: string) => {
@@ -183,8 +187,8 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
       {data ? (
         <>
           <ScreeningConditions project={project} settings={data.settings} />
-          <RobustnessPanel robustness={robustness} rows={deferredRows} />
-          <SolubilityPanel data={data} rows={deferredRows} doseMg={project.compound.doseMg} />
+          <RobustnessPanel robustness={robustness} labels={labels} />
+          <SolubilityPanel data={data} labels={labels} topKey={topKey} doseMg={project.compound.doseMg} />
           <section className="panel" aria-labelledby="assumptions-title">
             <h2 id="assumptions-title">Assumptions of this screen</h2>
             <ul>

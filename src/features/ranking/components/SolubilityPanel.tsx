@@ -2,21 +2,38 @@ import { memo, useMemo } from 'react';
 import { PhSolubilityChart, type SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 import type { ProjectScreening } from '@/features/screening-data/compute-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import type { DisplayRow } from '../ranking-rows';
+import type { ScreenRow } from '@/chem';
 
 /** ICH M9 (2019): the highest dose must dissolve in 250 mL. */
 const VOLUME_ML = 250;
 
-/** pH–solubility curves of the free form and the chosen salts, with the choice of salts beside it. */
-export function SolubilityPanel({ data, rows, doseMg }: { data: ProjectScreening; rows: DisplayRow[]; doseMg: number | null }) {
+/**
+ * pH–solubility curves of the free form and the chosen salts, with the choice of salts beside it.
+ * Re-renders only when the screen, the chosen salts or the top three change — not on every weight.
+ */
+export const SolubilityPanel = memo(function SolubilityPanelView({
+  data,
+  labels,
+  topKey,
+  doseMg,
+}: {
+  data: ProjectScreening;
+  labels: Record<string, string>;
+  /** Ids of the current top three, joined with '|'. */
+  topKey: string;
+  doseMg: number | null;
+}) {
   const chartIds = useRankingViewStore((s) => s.chartIds);
   const toggle = useRankingViewStore((s) => s.toggleChart);
-  const ranked = rows.filter((r) => r.rank !== null).sort((a, b) => a.rank! - b.rank!);
-  const top = ranked.slice(0, 3).map((r) => r.id);
+  const top = topKey ? topKey.split('|') : [];
   const chosen = chartIds ?? top;
-  const chosenKey = ranked.filter((r) => chosen.includes(r.id)).map((r) => r.id).join('|');
-  // eslint-disable-next-line react-hooks/exhaustive-deps
-  const series = useMemo(() => seriesOf(data, ranked.filter((r) => chosen.includes(r.id))), [data, chosenKey]);
+  const rows = data.screen.rows.filter((r) => !r.error);
+  const chosenKey = rows.filter((r) => chosen.includes(r.id)).map((r) => r.id).join('|');
+  const series = useMemo(
+    () => seriesOf(data, rows.filter((r) => chosenKey.split('|').includes(r.id)), labels),
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [data, chosenKey, labels],
+  );
   return (
     <section className="panel" aria-labelledby="solubility-title">
       <h2 id="solubility-title">Solubility against pH</h2>
@@ -24,10 +41,10 @@ export function SolubilityPanel({ data, rows, doseMg }: { data: ProjectScreening
         <MemoChart series={series} doseMg={doseMg} title={`Solubility (free-form equivalents) of ${data.screen.compoundName} and its salts`} />
         <fieldset className="chart-picks">
           <legend>Salts on the chart</legend>
-          {ranked.map((r) => (
+          {rows.map((r) => (
             <label key={r.id} className="inline-check">
               <input type="checkbox" checked={chosen.includes(r.id)} onChange={() => toggle(r.id, top)} />
-              {r.rank}. {r.label}
+              {labels[r.id] ?? r.label}
             </label>
           ))}
         </fieldset>
@@ -35,13 +52,13 @@ export function SolubilityPanel({ data, rows, doseMg }: { data: ProjectScreening
       <FreeFormNote data={data} />
     </section>
   );
-}
+});
 
 const MemoChart = memo(function MemoChartView({ series, doseMg, title }: { series: SolubilitySeries[]; doseMg: number | null; title: string }) {
   return <PhSolubilityChart series={series} doseLineMgPerMl={doseMg ? doseMg / VOLUME_ML : null} title={title} />;
 });
 
-function seriesOf(data: ProjectScreening, chosen: DisplayRow[]): SolubilitySeries[] {
+function seriesOf(data: ProjectScreening, chosen: ScreenRow[], labels: Record<string, string>): SolubilitySeries[] {
   return [
     {
       id: 'free-form',
@@ -51,13 +68,13 @@ function seriesOf(data: ProjectScreening, chosen: DisplayRow[]): SolubilitySerie
       estimated: data.screen.freeForm.intrinsicOrigin !== 'measured',
     },
     ...chosen.map((r) => ({
-        id: r.id,
-        label: r.label,
-        kind: 'salt' as const,
-        points: r.row.profile,
-        phMax: r.row.phMax,
-        estimated: r.row.kspOrigin !== 'measured',
-      })),
+      id: r.id,
+      label: labels[r.id] ?? r.label,
+      kind: 'salt' as const,
+      points: r.profile,
+      phMax: r.phMax,
+      estimated: r.kspOrigin !== 'measured',
+    })),
   ];
 }
 

@@ -46,7 +46,7 @@ export function useRobustness(
     }
     const runId = ++runRef.current;
     const req: RobustnessRequest = { runId, rows, weights, shared, iterations: ROBUSTNESS_ITERATIONS, seed: ROBUSTNESS_SEED, batches: BATCHES };
-    setState((s) => ({ ...s, status: 'running', progress: 0 }));
+    setState((s) => (s.status === 'running' && s.progress === 0 ? s : { ...s, status: 'running', progress: 0 }));
     let cancelled = false;
     const timer = setTimeout(() => {
       if (typeof Worker !== 'undefined') {
