@@ -87,7 +87,8 @@ export function CounterIonRow({
                 </select>
               ) : null}
               <button type="button" onClick={add} disabled={busy} aria-label={`Add ${ion.name} (${chosen.label}) to the shortlist`}>
-                Add to shortlist
+                {/* Visible text kept inside the accessible name (WCAG 2.5.3, label in name). */}
+                Add
               </button>
             </span>
           )}
