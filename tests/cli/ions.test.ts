@@ -22,7 +22,7 @@ describe('saltsmith ions', () => {
     expect(out).toMatch(/^name\s+formula\s+charge\s+pKa/);
     expect(out.trim().split('\n').length).toBe(COUNTER_IONS.length + 3);
     // Sulfuric acid pK2 1.99 (Fromm table, read 2026-12-01) shows in the sulfate row.
-    expect(out).toMatch(/Sulfate\s+O4S²⁻\s+-2\s+-3\.00, 1\.99\s+1/);
+    expect(out).toMatch(/Sulfate\s+SO4²⁻\s+-2\s+-3\.00, 1\.99\s+1/);
   });
 
   it('finds entries by name or formula with --search', async () => {

@@ -166,11 +166,39 @@ export function sameElements(a: ElementCounts, b: ElementCounts): boolean {
   return true;
 }
 
+/**
+ * The order a chemist writes a small inorganic ion in, for display only: carbon-free oxo-ions as
+ * acidic H, then the central atom, then O (HSO4, H2PO4, NO3, ClO4, CO3), hydroxide as OH and
+ * ammonium as NH4 — the usual formula order of IUPAC, Nomenclature of Inorganic Chemistry (Red Book,
+ * 2005), IR-4.4 (from memory). Formulas with carbon bonded to hydrogen, and anything else, stay in
+ * Hill order (the form stored and compared everywhere in the core).
+ */
+export function conventionalFormula(hill: string): string {
+  let elements: ElementCounts;
+  try {
+    elements = parseFormula(hill).elements;
+  } catch {
+    return hill;
+  }
+  const n = (el: string) => {
+    const k = elements[el] ?? 0;
+    return k === 0 ? '' : k === 1 ? el : `${el}${k}`;
+  };
+  const others = Object.keys(elements).filter((el) => el !== 'H' && el !== 'O');
+  const hasCH = elements.C !== undefined && elements.H !== undefined;
+  if (hasCH) return hill;
+  if (others.length === 0 && elements.O !== undefined) return `${n('O')}${n('H')}`;
+  if (others.length === 1 && elements.O === undefined && others[0] === 'N') return `${n('N')}${n('H')}`;
+  if (others.length === 1 && elements.O !== undefined) return `${n('H')}${n(others[0]!)}${n('O')}`;
+  return hill;
+}
+
 const SUPERSCRIPT = '⁰¹²³⁴⁵⁶⁷⁸⁹';
-/** A formula with its charge as superscript text, e.g. `CH3O3S⁻`, `SO4²⁻`, `Ca²⁺`. */
+/** A formula in display order with its charge as superscript text, e.g. `CH3O3S⁻`, `SO4²⁻`, `Ca²⁺`. */
 export function formatIonFormula(hill: string, charge: number): string {
-  if (charge === 0) return hill;
+  const shown = conventionalFormula(hill);
+  if (charge === 0) return shown;
   const mag = Math.abs(charge);
   const digits = mag === 1 ? '' : String(mag).split('').map((d) => SUPERSCRIPT[Number(d)]).join('');
-  return `${hill}${digits}${charge > 0 ? '⁺' : '⁻'}`;
+  return `${shown}${digits}${charge > 0 ? '⁺' : '⁻'}`;
 }

@@ -49,8 +49,19 @@ describe('molecular formulas', () => {
   });
 
   it('writes charges as superscripts', () => {
-    expect(formatIonFormula('O4S', -2)).toBe('O4S²⁻');
+    expect(formatIonFormula('O4S', -2)).toBe('SO4²⁻');
     expect(formatIonFormula('Na', 1)).toBe('Na⁺');
+  });
+
+  it('shows small inorganic ions in the usual order (IUPAC Red Book 2005, IR-4.4) and organic ones in Hill order', () => {
+    expect(formatIonFormula('HO4S', -1)).toBe('HSO4⁻');
+    expect(formatIonFormula('H2O4P', -1)).toBe('H2PO4⁻');
+    expect(formatIonFormula('NO3', -1)).toBe('NO3⁻');
+    expect(formatIonFormula('ClO4', -1)).toBe('ClO4⁻');
+    expect(formatIonFormula('HO', -1)).toBe('OH⁻');
+    expect(formatIonFormula('H4N', 1)).toBe('NH4⁺');
+    expect(formatIonFormula('CO3', -2)).toBe('CO3²⁻');
+    expect(formatIonFormula('CH3O3S', -1)).toBe('CH3O3S⁻');
   });
 });
 
