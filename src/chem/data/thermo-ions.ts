@@ -49,7 +49,7 @@ const chk = (value: number, source: string, check: string): SourcedValue => ({
  * and thermochemical radii, Jenkins volumes and Marcus hydration enthalpies could not be found in a readable
  * copy and stay "from memory". The tests compare the
  * data with independent published quantities (lattice and solution enthalpies from the NBS tables), which
- * catches gross slips but not a 1 % transcription error — check a value against its source before
+ * catches gross slips but not a 1 % copying error — check a value against its source before
  * publishing a number that depends on it.
  *
  * Hydration enthalpies are absolute on Marcus's scale; the proton's conventional value behind the scale is

@@ -18,7 +18,7 @@ export const SRC_NBS_BENZOIC =
 /**
  * Read 2026-12-01: the CRC Handbook table "Dissociation Constants of Organic Acids and Bases" (compounds in
  * Hill order; columns Mol. form., Name, Step, t/°C, pKa; ref. 7 of that edition is the Merck Index 12th ed.,
- * 1996), in the row-by-row transcription eladnoor/milo-lab data/thermodynamics/pKa.csv (commit d6af94c6);
+ * 1996), in the row-by-row copy eladnoor/milo-lab data/thermodynamics/pKa.csv (commit d6af94c6);
  * its opening rows match the copy of the same table at https://docslib.org/download/1794433. Where the
  * table gives a temperature other than 25 °C the row's source says so.
  */

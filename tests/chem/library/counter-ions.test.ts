@@ -134,7 +134,7 @@ describe('pKa values against the tables they cite', () => {
   });
 
   it('tromethamine sits where Bates & Hetzer 1961 put it (from memory, ±0.1)', () => {
-    // R. G. Bates, H. B. Hetzer, J. Phys. Chem. 65 (1961) 667 — recalled, not read: a transcription check,
+    // R. G. Bates, H. B. Hetzer, J. Phys. Chem. 65 (1961) 667 — recalled, not read: a copying check,
     // not an independent one. (The CRC organic table read 2026-12-01 gives tris only at 20 °C, 8.30.)
     expect(getCounterIon('tromethamine')!.pKas[0]!.value).toBeCloseTo(8.07, 1);
   });
@@ -162,7 +162,7 @@ describe('pKa values against the tables they cite', () => {
   });
 
   it('citric acid step 3 matches the CRC organic table (6.40, 25 °C)', () => {
-    // Same CRC transcription as above: "C6H8O7 Citric acid" steps 3.13, 4.76, 6.40 at 25 °C.
+    // Same CRC copy as above: "C6H8O7 Citric acid" steps 3.13, 4.76, 6.40 at 25 °C.
     expect(getCounterIon('citrate')!.pKas.map((p) => p.value)).toEqual([3.13, 4.76, 6.4].map((x) => expect.closeTo(x, 1)));
     expect(getCounterIon('citrate')!.pKas[2]!.value).toBeCloseTo(6.4, 2);
   });
