@@ -1,3 +1,4 @@
+import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { useId, useState, type FormEvent } from 'react';
 import { measurementsRepo } from '@/persistence/measurements-repo';
 import type { MeasurementKind } from '@/persistence/records';
@@ -56,7 +57,7 @@ export function MeasurementForm({
   const input = (key: 'value' | 'medium' | 'ph' | 'temperatureC' | 'text', label: string, unit?: string, hint?: string) => {
     const id = `${uid}-${key}`;
     const error = errors[key];
-    const describedBy = error ? `${id}-error` : hint ? `${id}-hint` : undefined;
+    const describedById = describedBy(id, error, hint);
     return (
       <div className={`field${key === 'text' ? ' field-wide' : ''}`}>
         <label htmlFor={id}>
@@ -69,7 +70,7 @@ export function MeasurementForm({
             rows={2}
             value={draft.text}
             aria-invalid={error ? true : undefined}
-            aria-describedby={describedBy}
+            aria-describedby={describedById}
             onChange={(e) => set('text', e.target.value)}
           />
         ) : (
@@ -79,19 +80,11 @@ export function MeasurementForm({
             inputMode={key === 'medium' ? 'text' : 'decimal'}
             list={key === 'medium' ? `${uid}-media` : undefined}
             aria-invalid={error ? true : undefined}
-            aria-describedby={describedBy}
+            aria-describedby={describedById}
             onChange={(e) => set(key, e.target.value)}
           />
         )}
-        {error ? (
-          <p className="field-error" id={`${id}-error`}>
-            {error}
-          </p>
-        ) : hint ? (
-          <p className="field-hint" id={`${id}-hint`}>
-            {hint}
-          </p>
-        ) : null}
+        <FieldMessage id={id} error={error} hint={hint} />
       </div>
     );
   };

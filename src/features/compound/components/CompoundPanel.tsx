@@ -1,6 +1,7 @@
 import { useEffect, useRef, useState, type ChangeEvent } from 'react';
 import type { ProjectRecord } from '@/persistence/records';
 import { projectsRepo } from '@/persistence/projects-repo';
+import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { reportStorageError } from '@/stores/storage-problem-store';
 import {
   compoundFromDraft,
@@ -42,18 +43,10 @@ function Field({ id, label, unit, hint, draft, errors, onChange, wide, inputMode
         value={draft[id]}
         inputMode={inputMode}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined}
+        aria-describedby={describedBy(inputId, error, hint)}
         onChange={(e: ChangeEvent<HTMLInputElement>) => onChange(id, e.target.value)}
       />
-      {error ? (
-        <p className="field-error" id={`${inputId}-error`} role="alert">
-          {error}
-        </p>
-      ) : hint ? (
-        <p className="field-hint" id={`${inputId}-hint`}>
-          {hint}
-        </p>
-      ) : null}
+      <FieldMessage id={inputId} error={error} hint={hint} alert />
     </div>
   );
 }

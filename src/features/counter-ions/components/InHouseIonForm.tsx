@@ -1,3 +1,4 @@
+import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { useState, type FormEvent } from 'react';
 import {
   ChemInputError,
@@ -129,18 +130,10 @@ export function InHouseIonForm() {
           id={id}
           value={draft[k]}
           aria-invalid={errors[k] ? true : undefined}
-          aria-describedby={errors[k] ? `${id}-error` : hint ? `${id}-hint` : undefined}
+          aria-describedby={describedBy(id, errors[k], hint)}
           onChange={(e) => set(k, e.target.value)}
         />
-        {errors[k] ? (
-          <p className="field-error" id={`${id}-error`} role="alert">
-            {errors[k]}
-          </p>
-        ) : hint ? (
-          <p className="field-hint" id={`${id}-hint`}>
-            {hint}
-          </p>
-        ) : null}
+        <FieldMessage id={id} error={errors[k]} hint={hint} alert />
       </div>
     );
   };

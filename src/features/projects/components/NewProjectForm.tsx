@@ -1,3 +1,4 @@
+import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { useId, useState, type FormEvent } from 'react';
 import { projectsRepo } from '@/persistence/projects-repo';
 import {
@@ -56,18 +57,10 @@ export function NewProjectForm({ onCreated }: { onCreated: (projectId: string) =
           name={key}
           value={draft[key]}
           aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+          aria-describedby={describedBy(id, error, hint)}
           onChange={(ev) => set(key, ev.target.value)}
         />
-        {error ? (
-          <p className="field-error" id={`${id}-error`}>
-            {error}
-          </p>
-        ) : hint ? (
-          <p className="field-hint" id={`${id}-hint`}>
-            {hint}
-          </p>
-        ) : null}
+        <FieldMessage id={id} error={error} hint={hint} />
       </div>
     );
   };

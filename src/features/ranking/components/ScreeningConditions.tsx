@@ -1,3 +1,4 @@
+import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { useEffect, useId, useRef, useState } from 'react';
 import type { ScreeningSettings } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
@@ -102,18 +103,10 @@ export function ScreeningConditions({ project, settings }: { project: ProjectRec
           inputMode="decimal"
           value={draft[key]}
           aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+          aria-describedby={describedBy(id, error, hint)}
           onChange={(e) => change(key, e.target.value)}
         />
-        {error ? (
-          <p className="field-error" id={`${id}-error`}>
-            {error}
-          </p>
-        ) : hint ? (
-          <p className="field-hint" id={`${id}-hint`}>
-            {hint}
-          </p>
-        ) : null}
+        <FieldMessage id={id} error={error} hint={hint} />
       </div>
     );
   };
