@@ -8,6 +8,7 @@ import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '../hooks/use-robustness';
 import { useWeights } from '../hooks/use-weights';
+import { BufferMedia } from './BufferMedia';
 import { displayRows } from '../ranking-rows';
 import { RankingTable } from './RankingTable';
 import { ScreeningConditions } from './ScreeningConditions';
@@ -187,6 +188,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
       {data ? (
         <>
           <ScreeningConditions project={project} settings={data.settings} />
+          <BufferMedia project={project} media={data.settings.media} rows={rows} />
           <RobustnessPanel robustness={robustness} labels={labels} />
           <SolubilityPanel data={data} labels={labels} topKey={topKey} doseMg={project.compound.doseMg} />
           <section className="panel" aria-labelledby="assumptions-title">
