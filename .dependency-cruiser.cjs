@@ -32,6 +32,14 @@ module.exports = {
       to: { path: '^src/app/' },
     },
     {
+      name: 'features-stay-apart',
+      severity: 'error',
+      comment:
+        'A feature does not import another feature; the app shell composes them. The one shared data layer, features/screening-data (the screening every area reads), is the exception.',
+      from: { path: '^src/features/([^/]+)/' },
+      to: { path: '^src/features/', pathNot: ['^src/features/$1/', '^src/features/screening-data/'] },
+    },
+    {
       name: 'storage-below-ui',
       severity: 'error',
       from: { path: '^src/persistence/' },

@@ -5,6 +5,7 @@ import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
 import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
+import { ProjectFilesPanel } from '@/features/project-files/components/ProjectFilesPanel';
 import { AreaBoundary } from '@/app/AreaBoundary';
 import { CounterIonsPanel } from '@/features/counter-ions/components/CounterIonsPanel';
 import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
@@ -122,7 +123,16 @@ export function App() {
       </nav>
       <main id="main" className="content" tabIndex={-1}>
         {area === 'projects' || (!loading && !project) ? (
-          <ProjectsArea currentProjectId={project?.id ?? null} />
+          <ProjectsArea
+            currentProjectId={project?.id ?? null}
+            footer={({ projects, currentProjectId, open }) => (
+              <ProjectFilesPanel
+                projects={projects}
+                currentProjectId={currentProjectId}
+                onImported={(outcome) => open(outcome.projectId)}
+              />
+            )}
+          />
         ) : loading || !project ? (
           <p className="loading" role="status">
             Opening your project…

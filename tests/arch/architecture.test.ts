@@ -1,46 +1,65 @@
 import { describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync, rmSync, mkdirSync, copyFileSync, symlinkSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 
 /**
- * The architecture check must be able to fail: a deliberate violation in a scratch copy of the rule
- * is caught. (A check that passes everything is a defect; TOOLCHAIN.md records one way that happens.)
+ * The architecture check must be able to fail: deliberate violations in a scratch tree are caught by
+ * the project's own rule file. (A check that passes everything is a defect; TOOLCHAIN.md records one
+ * way that happens.)
  */
+function cruise(files: Record<string, string>): { failed: boolean; output: string } {
+  const dir = mkdtempSync(join(process.cwd(), '.tmp-arch-'));
+  try {
+    copyFileSync(join(process.cwd(), 'tsconfig.json'), join(dir, 'tsconfig.json'));
+    symlinkSync(join(process.cwd(), 'node_modules'), join(dir, 'node_modules'));
+    for (const [path, text] of Object.entries(files)) {
+      mkdirSync(join(dir, dirname(path)), { recursive: true });
+      writeFileSync(join(dir, path), text);
+    }
+    try {
+      execFileSync(
+        process.execPath,
+        [
+          join(process.cwd(), 'node_modules/dependency-cruiser/bin/dependency-cruise.mjs'),
+          'src',
+          '--config',
+          join(process.cwd(), '.dependency-cruiser.cjs'),
+        ],
+        { cwd: dir, encoding: 'utf8', stdio: 'pipe' },
+      );
+      return { failed: false, output: '' };
+    } catch (err) {
+      const e = err as { stdout?: string; stderr?: string };
+      return { failed: true, output: String(e.stdout) + String(e.stderr) };
+    }
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 describe('architecture rule (dependency-cruiser)', () => {
   it('flags src/chem importing a store or React', () => {
-    const dir = mkdtempSync(join(process.cwd(), '.tmp-arch-'));
-    try {
-      mkdirSync(join(dir, 'src/chem'), { recursive: true });
-      mkdirSync(join(dir, 'src/stores'), { recursive: true });
-      copyFileSync(join(process.cwd(), 'tsconfig.json'), join(dir, 'tsconfig.json'));
-      symlinkSync(join(process.cwd(), 'node_modules'), join(dir, 'node_modules'));
-      writeFileSync(join(dir, 'src/stores/x-store.ts'), 'export const x = 1;\n');
-      writeFileSync(
-        join(dir, 'src/chem/bad.ts'),
+    const r = cruise({
+      'src/stores/x-store.ts': 'export const x = 1;\n',
+      'src/chem/bad.ts':
         "import { x } from '../stores/x-store';\nimport { useState } from 'react';\nexport const y = x + String(useState).length;\n",
-      );
-      let output = '';
-      let failed = false;
-      try {
-        execFileSync(
-          process.execPath,
-          [
-            join(process.cwd(), 'node_modules/dependency-cruiser/bin/dependency-cruise.mjs'),
-            'src',
-            '--config',
-            join(process.cwd(), '.dependency-cruiser.cjs'),
-          ],
-          { cwd: dir, encoding: 'utf8', stdio: 'pipe' },
-        );
-      } catch (err) {
-        failed = true;
-        output = String((err as { stdout?: string }).stdout) + String((err as { stderr?: string }).stderr);
-      }
-      expect(failed).toBe(true);
-      expect(output).toMatch(/chem-is-pure/);
-    } finally {
-      rmSync(dir, { recursive: true, force: true });
-    }
+    });
+    expect(r.failed).toBe(true);
+    expect(r.output).toMatch(/chem-is-pure/);
+  }, 60000);
+
+  it('flags one feature importing another, but lets every feature read the shared screening data', () => {
+    const shared = cruise({
+      'src/features/screening-data/data.ts': 'export const d = 1;\n',
+      'src/features/alpha/a.ts': "import { d } from '../screening-data/data';\nexport const a = d;\n",
+    });
+    expect(shared.failed).toBe(false);
+    const crossed = cruise({
+      'src/features/beta/b.ts': 'export const b = 1;\n',
+      'src/features/alpha/a.ts': "import { b } from '../beta/b';\nexport const a = b;\n",
+    });
+    expect(crossed.failed).toBe(true);
+    expect(crossed.output).toMatch(/features-stay-apart/);
   }, 60000);
 });

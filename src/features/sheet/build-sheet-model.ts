@@ -9,7 +9,7 @@ import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
 import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 import type { ProjectScreening } from '@/features/screening-data/compute-screening';
 import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
-import { CRITERION_TEXT } from '@/features/ranking/criteria';
+import { CRITERION_TEXT } from '@/features/screening-data/criteria';
 import type { ProjectRecord } from '@/persistence/records';
 import type { SheetCell, SheetColumn, SheetModel, SheetRow, SheetSetting, ValueOrigin } from './sheet.types';
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { exportProjectText } from '@/persistence/import-project';
 import { projectFileName } from '@/persistence/export-format';
-import { downloadText } from '../download-text';
+import { downloadText } from '@/components/download-text';
 import '../project-files.css';
 
 /**

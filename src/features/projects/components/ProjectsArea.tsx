@@ -1,10 +1,10 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
+import type { ProjectRecord } from '@/persistence/records';
 import { projectsRepo, type ProjectBundle } from '@/persistence/projects-repo';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useProjectList } from '../hooks/use-project-list';
 import { NewProjectForm } from './NewProjectForm';
 import { ProjectCard, type ProjectCardActions } from './ProjectCard';
-import { ProjectFilesPanel } from '@/features/project-files/components/ProjectFilesPanel';
 import '../projects.css';
 
 /** How long the "Undo" offer stays after a delete, ms. */
@@ -14,7 +14,21 @@ const UNDO_WINDOW_MS = 12_000;
  * The Projects board: every compound side by side, with create, rename, duplicate, archive, delete
  * (with undo) and a reset of the fictional demo project.
  */
-export function ProjectsArea({ currentProjectId }: { currentProjectId: string | null }) {
+/** What the app shell may place under the board (the project-files panel), given the board's state. */
+export interface ProjectsAreaSlotContext {
+  projects: ProjectRecord[];
+  currentProjectId: string | null;
+  open: (id: string) => void;
+}
+
+export function ProjectsArea({
+  currentProjectId,
+  footer,
+}: {
+  currentProjectId: string | null;
+  /** Composed by the app shell, so that this feature does not import another feature. */
+  footer?: (ctx: ProjectsAreaSlotContext) => ReactNode;
+}) {
   const list = useProjectList();
   const openProject = useNavigationStore((s) => s.openProject);
   const goTo = useNavigationStore((s) => s.goTo);
@@ -145,11 +159,7 @@ export function ProjectsArea({ currentProjectId }: { currentProjectId: string | 
           open(id);
         }}
       />
-      <ProjectFilesPanel
-        projects={(list ?? []).map((s) => s.project)}
-        currentProjectId={currentProjectId}
-        onImported={(outcome) => open(outcome.projectId)}
-      />
+      {footer?.({ projects: (list ?? []).map((s) => s.project), currentProjectId, open })}
     </div>
   );
 }

@@ -6,7 +6,7 @@ import type { ProjectRecord } from '@/persistence/records';
 import { useProjectScreening } from '@/features/screening-data/use-screening';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '../hooks/use-robustness';
+import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '@/features/screening-data/use-robustness';
 import { useWeights } from '../hooks/use-weights';
 import { BufferMedia } from './BufferMedia';
 import { displayRows } from '../ranking-rows';

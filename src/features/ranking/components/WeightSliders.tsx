@@ -1,6 +1,6 @@
 import { useId } from 'react';
 import { CRITERIA, type ScreeningWeights } from '@/chem';
-import { CRITERION_TEXT } from '../criteria';
+import { CRITERION_TEXT } from '@/features/screening-data/criteria';
 
 /** One slider per criterion; the ranking re-orders while a slider moves. */
 export function WeightSliders({

@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import { downloadText } from '@/features/project-files/download-text';
+import { downloadText } from '@/components/download-text';
 import { sheetCsvFileName, sheetToCsv } from '../sheet-csv';
 import type { SheetModel } from '../sheet.types';
 import { ComparisonSheet } from './ComparisonSheet';

@@ -3,7 +3,7 @@ import { screeningWeightsSchema, validationReport, type ModelValidation } from '
 
 const defaultWeights = screeningWeightsSchema.parse({});
 import { useProjectScreening } from '@/features/screening-data/use-screening';
-import { ROBUSTNESS_SEED, useRobustness } from '@/features/ranking/hooks/use-robustness';
+import { ROBUSTNESS_SEED, useRobustness } from '@/features/screening-data/use-robustness';
 import type { ProjectRecord } from '@/persistence/records';
 import { buildSheetModel } from '../build-sheet-model';
 import type { SheetModel } from '../sheet.types';

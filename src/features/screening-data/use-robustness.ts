@@ -5,7 +5,7 @@ import {
   type RobustnessMessage,
   type RobustnessOutcome,
   type RobustnessRequest,
-} from '../robustness-protocol';
+} from './robustness-protocol';
 
 export interface RobustnessState {
   status: 'idle' | 'running' | 'done' | 'error';
@@ -51,7 +51,7 @@ export function useRobustness(
     const timer = setTimeout(() => {
       if (typeof Worker !== 'undefined') {
         if (!workerRef.current) {
-          workerRef.current = new Worker(new URL('../robustness.worker.ts', import.meta.url), { type: 'module' });
+          workerRef.current = new Worker(new URL('./robustness.worker.ts', import.meta.url), { type: 'module' });
         }
         const worker = workerRef.current;
         worker.onmessage = (e: MessageEvent<RobustnessMessage>) => {
