@@ -85,11 +85,12 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   useEffect(() => resetView(), [project.id, resetView]);
 
   const data = screening.result;
-  const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, weights) : []), [data, weights]);
+  // The slider thumb answers at once; the table re-ranks in a deferred render that a newer slider
+  // movement can interrupt, so dragging stays smooth while 60 rows re-order behind it.
+  const deferredWeights = useDeferredValue(weights);
+  const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, deferredWeights) : []), [data, deferredWeights]);
   const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
   const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
-  // The table follows the slider at once; the pictures below follow at lower priority.
-  const deferredWeights = useDeferredValue(weights);
   const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
   const topKey = useDeferredValue(
     rows

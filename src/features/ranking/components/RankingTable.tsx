@@ -158,7 +158,8 @@ const FixedCells = memo(function FixedCellsView({ r }: { r: DisplayRow }) {
 }, sameScreenRow);
 
 /** The ranked shortlist: sortable, each number with unit, uncertainty and origin, reasons in words. */
-export function RankingTable({ rows, onFocus }: { rows: DisplayRow[]; onFocus?: (id: string) => void }) {
+/** Memoised: a slider movement re-renders the area at once, the table only when the ranking changes. */
+export const RankingTable = memo(function RankingTableView({ rows, onFocus }: { rows: DisplayRow[]; onFocus?: (id: string) => void }) {
   const sortKey = useRankingViewStore((s) => s.sortKey);
   const dir = useRankingViewStore((s) => s.sortDir);
   const sorted = sortRows(rows, sortKey, dir);
@@ -197,4 +198,4 @@ export function RankingTable({ rows, onFocus }: { rows: DisplayRow[]; onFocus?: 
       </table>
     </div>
   );
-}
+});
