@@ -270,6 +270,15 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
   const toMg = (m: number) => m * freeM;
   const drugPkaSigma = Math.max(...c.pKas.map((p) => settings.pkaSigmaByOrigin[p.origin]));
   const media = mediaFor(settings);
+  /** The masses of one candidate's salt (stoichiometry and hydrate water included), for mass cost and K_sp. */
+  const massInput = (cand: ScreeningCandidate) => ({
+    freeFormMolarMassGPerMol: freeM,
+    drugIonMolarMassGPerMol: input.drugIon.molarMassGPerMol,
+    counterIonMolarMassGPerMol: cand.stoichiometry.ionMolarMassGPerMol ?? cand.counterIon.molarMassGPerMol,
+    drugPerSalt: cand.stoichiometry.drugPerSalt,
+    counterIonPerSalt: cand.stoichiometry.counterIonPerSalt,
+    hydrateWater: cand.hydrateWater ?? 0,
+  });
 
   const dnAt = (salt: ProfileSalt | null, pH: number, commonIonM = 0): DoseNumberAt => {
     const p = solubilityAtPh(drug, logS0.value, salt, pH, { activity, commonIonM });
@@ -311,14 +320,7 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     try {
       const st = cand.stoichiometry;
       const protolyte = counterIonProtolyte(cand.counterIon, st);
-      const saltM = saltMolarMassGPerMol({
-        freeFormMolarMassGPerMol: freeM,
-        drugIonMolarMassGPerMol: input.drugIon.molarMassGPerMol,
-        counterIonMolarMassGPerMol: st.ionMolarMassGPerMol ?? cand.counterIon.molarMassGPerMol,
-        drugPerSalt: st.drugPerSalt,
-        counterIonPerSalt: st.counterIonPerSalt,
-        hydrateWater: cand.hydrateWater ?? 0,
-      });
+      const saltM = saltMolarMassGPerMol(massInput(cand));
       const measured = cand.measurements?.length
         ? interpretMeasurements(cand.measurements, { saltMolarMassGPerMol: saltM, freeFormMolarMassGPerMol: freeM, drugPerSalt: st.drugPerSalt, temperatureK: T })
         : null;
@@ -456,14 +458,7 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     }
 
     // Mass cost.
-    const f = activeFraction({
-      freeFormMolarMassGPerMol: freeM,
-      drugIonMolarMassGPerMol: input.drugIon.molarMassGPerMol,
-      counterIonMolarMassGPerMol: st.ionMolarMassGPerMol ?? cand.counterIon.molarMassGPerMol,
-      drugPerSalt: st.drugPerSalt,
-      counterIonPerSalt: st.counterIonPerSalt,
-      hydrateWater: cand.hydrateWater ?? 0,
-    });
+    const f = activeFraction(massInput(cand));
     const massPerDose = dose === null ? null : saltMassPerDoseMg(dose, f);
     if (f < 0.7) reasons.push({ kind: 'watch', criterion: 'massCost', text: `heavy counter-ion: active fraction ${(f * 100).toFixed(0)} %${massPerDose ? `, ${fmt(massPerDose)} mg of salt per dose` : ''}` });
 

@@ -10,6 +10,7 @@ import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 import type { ProjectScreening } from '@/features/screening-data/compute-screening';
 import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
 import { CRITERION_TEXT } from '@/features/screening-data/criteria';
+import { energyCycleOf } from '@/features/screening-data/energy-cycle';
 import type { ProjectRecord } from '@/persistence/records';
 import type { SheetCell, SheetColumn, SheetModel, SheetRow, SheetSetting, ValueOrigin } from './sheet.types';
 
@@ -124,20 +125,7 @@ function settingsList(screening: ProjectScreening): SheetSetting[] {
 
 function energyCycle(row: ScreenRow, label: string, screening: ProjectScreening): EnergyCycle | null {
   const e = screening.energetics[row.id];
-  const t = e?.thermo;
-  if (!e || !t) return null;
-  return {
-    saltLabel: label,
-    cationLabel: e.cationLabel,
-    anionLabel: e.anionLabel,
-    cationsPerFormula: e.cationsPerFormula,
-    anionsPerFormula: e.anionsPerFormula,
-    lattice: { value: t.latticeEnthalpyKJ.value, uncertainty: t.latticeEnthalpyKJ.uncertainty },
-    // Identical ions share their model error, so ν ions carry ν times the uncertainty.
-    cationHydration: { value: e.cationsPerFormula * t.cationHydrationKJ.value, uncertainty: e.cationsPerFormula * t.cationHydrationKJ.uncertainty },
-    anionHydration: { value: e.anionsPerFormula * t.anionHydrationKJ.value, uncertainty: e.anionsPerFormula * t.anionHydrationKJ.uncertainty },
-    solution: { value: t.solutionEnthalpyKJ.value, uncertainty: t.solutionEnthalpyKJ.uncertainty },
-  };
+  return e?.thermo ? energyCycleOf({ ...e, thermo: e.thermo }, label) : null;
 }
 
 export interface BuildSheetInput {
