@@ -1,4 +1,4 @@
-import { PassThrough } from 'node:stream';
+import { captureIo } from './support/capture-io';
 import { describe, expect, it } from 'vitest';
 import { main } from '@/cli/main';
 import { evalKinds } from '@/cli/commands/eval';
@@ -8,16 +8,10 @@ import { evalKinds } from '@/cli/commands/eval';
 type EvalLine = Record<string, any>;
 
 async function run(argv: string[], input: string) {
-  const stdin = new PassThrough();
-  const stdout = new PassThrough();
-  const stderr = new PassThrough();
-  let out = '';
-  let err = '';
-  stdout.on('data', (d) => (out += String(d)));
-  stderr.on('data', (d) => (err += String(d)));
-  stdin.end(input);
-  const code = await main(argv, { stdin, stdout, stderr });
-  return { code, lines: out.trim() === '' ? [] : out.trim().split('\n').map((l) => JSON.parse(l) as EvalLine), err };
+  const c = captureIo(input);
+  const code = await main(argv, c.io);
+  const out = c.out();
+  return { code, lines: out.trim() === '' ? [] : out.trim().split('\n').map((l) => JSON.parse(l) as EvalLine), err: c.err() };
 }
 
 describe('saltsmith eval', () => {

@@ -1,18 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { PassThrough } from 'node:stream';
+import { captureIo } from './support/capture-io';
 import { readFileSync } from 'node:fs';
 import { ionsCommand, ionsJsonDocument } from '@/cli/commands/ions';
 import { COUNTER_IONS } from '@/chem/library';
 
 async function run(args: string[]) {
-  const stdout = new PassThrough();
-  const stderr = new PassThrough();
-  let out = '';
-  let err = '';
-  stdout.on('data', (d) => (out += String(d)));
-  stderr.on('data', (d) => (err += String(d)));
-  const code = await ionsCommand.run(args, { stdin: new PassThrough(), stdout, stderr });
-  return { code, out, err };
+  const c = captureIo();
+  const code = await ionsCommand.run(args, c.io);
+  return { code, out: c.out(), err: c.err() };
 }
 
 describe('saltsmith ions', () => {

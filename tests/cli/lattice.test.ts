@@ -1,16 +1,11 @@
-import { PassThrough } from 'node:stream';
+import { captureIo } from './support/capture-io';
 import { describe, expect, it } from 'vitest';
 import { main } from '@/cli/main';
 
 async function run(argv: string[]) {
-  const stdout = new PassThrough();
-  const stderr = new PassThrough();
-  let out = '';
-  let err = '';
-  stdout.on('data', (d) => (out += String(d)));
-  stderr.on('data', (d) => (err += String(d)));
-  const code = await main(argv, { stdin: new PassThrough(), stdout, stderr });
-  return { code, out, err };
+  const c = captureIo();
+  const code = await main(argv, c.io);
+  return { code, out: c.out(), err: c.err() };
 }
 
 describe('saltsmith lattice', () => {

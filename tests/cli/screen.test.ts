@@ -1,19 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { PassThrough } from 'node:stream';
+import { captureIo } from './support/capture-io';
 import Papa from 'papaparse';
 import { screenCommand } from '@/cli/commands/screen';
 import { evaluateRequest } from '@/cli/commands/eval';
 import { phMaxBase } from '@/chem';
 
 async function run(args: string[]) {
-  const stdout = new PassThrough();
-  const stderr = new PassThrough();
-  let out = '';
-  let err = '';
-  stdout.on('data', (d) => (out += String(d)));
-  stderr.on('data', (d) => (err += String(d)));
-  const code = await screenCommand.run(args, { stdin: new PassThrough(), stdout, stderr });
-  return { code, out, err };
+  const c = captureIo();
+  const code = await screenCommand.run(args, c.io);
+  return { code, out: c.out(), err: c.err() };
 }
 
 // A test compound given by formula and made-up properties; assertions check structure and identities,
