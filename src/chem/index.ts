@@ -8,3 +8,4 @@ export * from './thermo';
 export * from './compound';
 export * from './library';
 export * from './screening';
+export * from './report';

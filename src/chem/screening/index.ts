@@ -21,5 +21,5 @@ export * from './ranking';
 export * from './rank-robustness';
 export * from '../numerics';
 export * from './thermo-link';
-export * from './screen-compound';
+export * from './screen';
 export * from './library-candidates';

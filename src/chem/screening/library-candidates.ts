@@ -2,7 +2,8 @@ import type { CounterIon } from '../library/counter-ion.types';
 import type { ThermoIon } from '../thermo';
 import { DEFAULT_DELTA_PKA_BANDS, saltDeltaPka, type DeltaPkaBands } from './delta-pka';
 import { drugProtolyte } from './ph-profile';
-import { counterIonProtolyte, type ScreeningCandidate } from './screen-compound';
+import { counterIonProtolyte } from './screen/counter-ion-protolyte';
+import type { ScreeningCandidate } from './screen/screen.types';
 import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from './thermo-link';
 
 /**

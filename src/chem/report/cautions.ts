@@ -1,0 +1,16 @@
+/**
+ * The cautions a ranking is read with, wherever a user reads or exports one: the app's dialog and
+ * notes, the sheet's CSV, the command line. One copy, here in the core, so the words cannot drift.
+ * The sentences are the project's own (common practice in salt screening: estimates screen,
+ * experiments and the regulatory guidance in force decide).
+ */
+export const SCREENING_CAUTIONS = [
+  'Estimates here screen candidates; they do not establish a salt form.',
+  'Crystallinity, polymorphs, hydrates, chemical stability, hygroscopicity and toxicology need experiments.',
+  'Counter-ion acceptability follows the regulatory guidance in force for the product.',
+  'Strong acids and bases used in salt formation are corrosive: handle them under your lab’s safety rules and the substance’s safety data sheet.',
+];
+
+/** The one-line reminder printed beside a ranking or an export. */
+export const SCREENING_CAUTION_SUMMARY =
+  'Screening estimates only: they do not establish a salt form. Experiments, the regulatory guidance in force and your lab’s safety rules decide.';

@@ -1,0 +1,2 @@
+/** What the core says alongside its numbers when a user reads or exports them: cautions, safe CSV cells. */
+export * from './cautions';

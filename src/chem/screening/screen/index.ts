@@ -1,0 +1,6 @@
+/** The screen of one compound against its candidate salts, in named steps (see screen-compound.ts). */
+export type * from './screen.types';
+export { screenCompound } from './screen-compound';
+export { counterIonProtolyte } from './counter-ion-protolyte';
+export { GASTRIC_SODIUM_M } from './media';
+export { chooseKsp, type KspChoice } from './ksp-choice';

@@ -1,0 +1,144 @@
+import { ChemInputError, requireFiniteInRange, type Estimate } from '../../result';
+import { gseLog10IntrinsicSolubilityM } from '../intrinsic-solubility';
+import type { SaltMassInput } from '../mass-cost';
+import { drugProtolyte, type DrugAcidBase, type ProfileOptions } from '../ph-profile';
+import { parseScreeningSettings, type ScreeningSettings } from '../settings';
+import type { Protolyte } from '../speciation';
+import type {
+  FreeFormResult,
+  ScreenCompoundInput,
+  ScreeningCandidate,
+  ScreeningCompound,
+} from './screen.types';
+
+/** Measured S₀ spread, decades (our assumption, shake-flask repeatability). */
+const MEASURED_S0_LOG10_SIGMA = 0.1;
+
+/**
+ * What every step of the screen reads: the checked inputs and the quantities derived once from them
+ * (the drug as a protolyte, S₀, the activity model and pH grid).
+ */
+export interface ScreenContext {
+  settings: ScreeningSettings;
+  compound: ScreeningCompound;
+  drug: DrugAcidBase;
+  drugProtolyte: Protolyte;
+  freeFormMolarMassGPerMol: number;
+  drugIonMolarMassGPerMol: number;
+  doseMg: number | null;
+  log10IntrinsicM: Estimate;
+  intrinsicOrigin: FreeFormResult['intrinsicOrigin'];
+  temperatureK: number;
+  activity: ProfileOptions['activity'];
+  grid: { phFrom: number; phTo: number; phStep: number; activity: ProfileOptions['activity'] };
+}
+
+/** Intrinsic solubility S₀ of the free form: measured when given, else the General Solubility Equation. */
+export function intrinsicSolubility(
+  c: ScreeningCompound,
+  freeFormMolarMassGPerMol: number,
+): { est: Estimate; origin: FreeFormResult['intrinsicOrigin'] } {
+  if (c.intrinsicSolubilityMgPerMl !== null) {
+    const s = c.intrinsicSolubilityMgPerMl;
+    if (!(Number.isFinite(s) && s > 0)) {
+      throw new ChemInputError(
+        'intrinsicSolubilityMgPerMl',
+        `must be greater than zero, got ${s}`,
+        'S₀ > 0 mg/mL',
+      );
+    }
+    return {
+      origin: 'measured',
+      est: {
+        value: Math.log10(s / freeFormMolarMassGPerMol),
+        uncertainty: MEASURED_S0_LOG10_SIGMA,
+        method: 'measured',
+        sources: ['measured intrinsic solubility (user data)'],
+      },
+    };
+  }
+  if (c.meltingPointC !== null && c.logP !== null) {
+    return {
+      origin: 'general-solubility-equation',
+      est: gseLog10IntrinsicSolubilityM(c.meltingPointC, c.logP),
+    };
+  }
+  throw new ChemInputError(
+    'intrinsicSolubilityMgPerMl',
+    'no intrinsic solubility and no melting point with log P',
+    'S₀ in mg/mL, or melting point (°C) and log P for the General Solubility Equation',
+  );
+}
+
+/** Check the compound-level inputs and derive what every step shares. Throws ChemInputError. */
+export function screenContext(input: ScreenCompoundInput): ScreenContext {
+  const settings = parseScreeningSettings(input.settings);
+  const c = input.compound;
+  const drug: DrugAcidBase = {
+    kind: c.kind,
+    pKas: c.pKas.map((p) => p.value),
+    ionCharge: c.ionCharge,
+  };
+  const drugP = drugProtolyte(drug);
+  const freeFormMolarMassGPerMol = requireFiniteInRange(
+    'freeFormMolarMassGPerMol',
+    input.drugIon.freeFormMolarMassGPerMol,
+    1,
+    1e5,
+    'g/mol',
+  );
+  const drugIonMolarMassGPerMol = requireFiniteInRange(
+    'drugIonMolarMassGPerMol',
+    input.drugIon.molarMassGPerMol,
+    1,
+    1e5,
+    'g/mol',
+  );
+  const dose = c.doseMg;
+  if (dose !== null && !(Number.isFinite(dose) && dose > 0)) {
+    throw new ChemInputError('doseMg', `must be greater than zero, got ${dose}`, 'a dose > 0 mg');
+  }
+  const { est, origin } = intrinsicSolubility(c, freeFormMolarMassGPerMol);
+  const temperatureK = settings.temperatureK;
+  const activity: ProfileOptions['activity'] =
+    settings.activityModel === 'davies'
+      ? {
+          model: 'davies',
+          backgroundIonicStrengthM: settings.backgroundIonicStrengthM,
+          temperatureK,
+        }
+      : { model: 'ideal' };
+  const g = settings.phGrid;
+  return {
+    settings,
+    compound: c,
+    drug,
+    drugProtolyte: drugP,
+    freeFormMolarMassGPerMol,
+    drugIonMolarMassGPerMol,
+    doseMg: dose,
+    log10IntrinsicM: est,
+    intrinsicOrigin: origin,
+    temperatureK,
+    activity,
+    grid: { phFrom: g.from, phTo: g.to, phStep: g.step, activity },
+  };
+}
+
+/** A solubility in mol/L of drug as mg/mL of free-form equivalents. */
+export function freeFormMgPerMl(ctx: ScreenContext, solubilityM: number): number {
+  return solubilityM * ctx.freeFormMolarMassGPerMol;
+}
+
+/** The masses of one candidate's salt (stoichiometry and hydrate water included), for mass cost and K_sp. */
+export function saltMassInput(ctx: ScreenContext, cand: ScreeningCandidate): SaltMassInput {
+  return {
+    freeFormMolarMassGPerMol: ctx.freeFormMolarMassGPerMol,
+    drugIonMolarMassGPerMol: ctx.drugIonMolarMassGPerMol,
+    counterIonMolarMassGPerMol:
+      cand.stoichiometry.ionMolarMassGPerMol ?? cand.counterIon.molarMassGPerMol,
+    drugPerSalt: cand.stoichiometry.drugPerSalt,
+    counterIonPerSalt: cand.stoichiometry.counterIonPerSalt,
+    hydrateWater: cand.hydrateWater ?? 0,
+  };
+}

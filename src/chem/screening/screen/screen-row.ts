@@ -1,0 +1,221 @@
+import { saltDeltaPka, saltFormationVerdict } from '../delta-pka';
+import { disproportionationRisk } from '../disproportionation';
+import { doseNumber } from '../dose-number';
+import { activeFraction, saltMassPerDoseMg } from '../mass-cost';
+import { phSolubilityProfile, type ProfileSalt } from '../ph-profile';
+import type { CriterionInputs } from '../ranking';
+import { doseNumberAt, ichM9Phs, solubilityClassOf, worstDoseNumber } from './dose-numbers';
+import type { KspChoice } from './ksp-choice';
+import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
+import type { PreparedCandidate } from './prepare-candidate';
+import { freeFormMgPerMl, saltMassInput, type ScreenContext } from './screen-context';
+import {
+  acceptabilityReason,
+  disproportionationWords,
+  gastricReason,
+  massCostReason,
+  measuredReasons,
+  notScreenedReason,
+  poorlySolubleFlag,
+  saltFormationWords,
+  saltName,
+  saltPoorlySolubleFlag,
+  worstSolubilityReason,
+} from './screen-reasons';
+import type { Reason, ScreenFlag, ScreeningCandidate, ScreenRow } from './screen.types';
+
+/** ΔpKa against each of the counter-ion's pKa values, from the drug's pKa that forms the salt. */
+function deltaPkaEach(ctx: ScreenContext, p: PreparedCandidate): number[] {
+  const c = ctx.compound;
+  const drugP = ctx.drugProtolyte;
+  const drugLink =
+    drugP.pKas[drugP.mostProtonatedCharge - c.ionCharge + (c.kind === 'base' ? 0 : -1)];
+  if (drugLink === undefined) return [];
+  return p.protolyte.pKas.map((x) => (c.kind === 'base' ? drugLink - x : x - drugLink));
+}
+
+/**
+ * The lowest solubility on the salt branch (below pH_max, where the salt is the solid), as a flag when
+ * even there the salt cannot carry the dose — unlike the free-form limit above pH_max, which every salt
+ * of this drug shares and so does not tell one salt from another.
+ */
+function saltBranchFlag(
+  ctx: ScreenContext,
+  points: readonly { pH: number; solubilityM: number; solid: string }[],
+): ScreenFlag | null {
+  const saltBranch = points.filter((pt) => pt.solid === 'salt');
+  if (ctx.doseMg === null || saltBranch.length === 0) return null;
+  const lowest = saltBranch.reduce((a, b) => (b.solubilityM < a.solubilityM ? b : a));
+  const mg = freeFormMgPerMl(ctx, lowest.solubilityM);
+  const d0 = doseNumber(ctx.doseMg, mg);
+  return d0 > 1 ? saltPoorlySolubleFlag(mg, lowest.pH, d0) : null;
+}
+
+/** The screened row of one candidate, from its prepared inputs and its K_sp (asked for in step order). */
+export function candidateRow(
+  ctx: ScreenContext,
+  p: PreparedCandidate,
+  label: string,
+  kspOf: () => KspChoice,
+  media: readonly ScreenMedium[],
+  hcl: HydrochlorideReference | null,
+): ScreenRow {
+  const { cand, protolyte, measured } = p;
+  const c = ctx.compound;
+  const st = cand.stoichiometry;
+  const name = saltName(label, cand.counterIon.name);
+  const reasons: Reason[] = [];
+  const flags: ScreenFlag[] = [];
+
+  const dpKa = saltDeltaPka(ctx.drugProtolyte, c.ionCharge, protolyte, st.ionCharge);
+  const verdict = dpKa === null ? null : saltFormationVerdict(dpKa, ctx.settings.deltaPkaBands);
+  const formation = saltFormationWords(verdict, dpKa, ctx.settings.deltaPkaBands.stableSaltMin);
+  reasons.push(...formation.reasons);
+  flags.push(...formation.flags);
+
+  const f = activeFraction(saltMassInput(ctx, cand));
+  const massPerDose = ctx.doseMg === null ? null : saltMassPerDoseMg(ctx.doseMg, f);
+  const heavy = massCostReason(f, massPerDose);
+  if (heavy) reasons.push(heavy);
+
+  const ksp = kspOf();
+  reasons.push(...ksp.reasons);
+  flags.push(...ksp.flags);
+
+  const salt: ProfileSalt = {
+    counterIon: protolyte,
+    counterIonCharge: st.ionCharge,
+    drugPerSalt: st.drugPerSalt,
+    counterIonPerSalt: st.counterIonPerSalt,
+    log10Ksp: ksp.log10Ksp.value,
+  };
+  const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
+  const doses = ichM9Phs(profile).map((pH) => doseNumberAt(ctx, salt, pH));
+  const worst = worstDoseNumber(doses);
+  reasons.push(worstSolubilityReason(name, worst));
+  if (worst.doseNumber !== null && worst.doseNumber > 1) {
+    flags.push(poorlySolubleFlag({ ...worst, doseNumber: worst.doseNumber }));
+  }
+  const saltFlag = saltBranchFlag(ctx, profile.points);
+  if (saltFlag) flags.push(saltFlag);
+
+  const mediaResults = mediumResults(ctx, cand, salt, media, hcl);
+  const gastric = mediaResults[0] ?? null;
+  const gastricWords = gastric ? gastricReason(name, gastric, cand.counterIon.id) : null;
+  if (gastricWords) reasons.push(gastricWords);
+
+  const disp = disproportionationRisk(profile.phMax, ctx.settings.microenvironmentPh, c.kind);
+  const dispWords = disproportionationWords(disp);
+  reasons.push(dispWords.reason);
+  if (dispWords.flag) flags.push(dispWords.flag);
+
+  reasons.push(acceptabilityReason(cand.counterIon));
+  reasons.push(...measuredReasons(measured, cand.solutionEnthalpyKJ));
+
+  const criteria: CriterionInputs = {
+    saltProbability: verdict?.saltProbability ?? null,
+    log10WorstDoseNumber: worst.doseNumber === null ? null : Math.log10(worst.doseNumber),
+    log10GastricDoseNumber: gastric?.doseNumber == null ? null : Math.log10(gastric.doseNumber),
+    phMaxMarginPh: disp.marginPh,
+    activeFraction: f,
+    acceptabilityClass: cand.counterIon.acceptabilityClass,
+    hygroscopicity: measured?.hygroscopicity ?? null,
+  };
+  return {
+    id: cand.id,
+    label,
+    counterIonId: cand.counterIon.id,
+    counterIonName: cand.counterIon.name,
+    drugPerSalt: st.drugPerSalt,
+    counterIonPerSalt: st.counterIonPerSalt,
+    hydrateWater: cand.hydrateWater ?? 0,
+    error: null,
+    deltaPka: dpKa,
+    deltaPkaEach: deltaPkaEach(ctx, p),
+    saltFormation: verdict,
+    saltMolarMassGPerMol: p.saltMolarMassGPerMol,
+    activeFraction: f,
+    saltMassPerDoseMg: massPerDose,
+    log10Ksp: ksp.log10Ksp,
+    kspOrigin: ksp.kspOrigin,
+    phMax: profile.phMax,
+    profile: profile.points.map((q) => ({
+      pH: q.pH,
+      solubilityMgPerMl: freeFormMgPerMl(ctx, q.solubilityM),
+      solid: q.solid,
+    })),
+    doseNumbers: doses,
+    worst,
+    solubilityClass: solubilityClassOf(worst),
+    gastric,
+    media: mediaResults,
+    disproportionation: disp,
+    measured,
+    flags,
+    reasons,
+    criteria,
+    robustness: {
+      id: cand.id,
+      criteria,
+      error: null,
+      deltaPka: dpKa,
+      worstSolid: worst.solid,
+      gastricSolid: gastric?.solid ?? null,
+      saltLog10Sigma: ksp.saltLog10Sigma,
+      saltAnchoredOnIntrinsic: ksp.anchored,
+    },
+  };
+}
+
+/** The row of a candidate that could not be screened: its error in words, every number empty. */
+export function errorRow(cand: ScreeningCandidate, label: string, error: string): ScreenRow {
+  const criteria: CriterionInputs = {
+    saltProbability: null,
+    log10WorstDoseNumber: null,
+    log10GastricDoseNumber: null,
+    phMaxMarginPh: null,
+    activeFraction: 0,
+    acceptabilityClass: null,
+    hygroscopicity: null,
+  };
+  return {
+    id: cand.id,
+    label,
+    counterIonId: cand.counterIon.id,
+    counterIonName: cand.counterIon.name,
+    drugPerSalt: cand.stoichiometry.drugPerSalt,
+    counterIonPerSalt: cand.stoichiometry.counterIonPerSalt,
+    hydrateWater: cand.hydrateWater ?? 0,
+    error,
+    deltaPka: null,
+    deltaPkaEach: [],
+    saltFormation: null,
+    saltMolarMassGPerMol: 0,
+    activeFraction: 0,
+    saltMassPerDoseMg: null,
+    log10Ksp: null,
+    kspOrigin: null,
+    phMax: null,
+    profile: [],
+    doseNumbers: [],
+    worst: null,
+    solubilityClass: null,
+    gastric: null,
+    media: [],
+    disproportionation: null,
+    measured: null,
+    flags: [],
+    reasons: [notScreenedReason(error)],
+    criteria,
+    robustness: {
+      id: cand.id,
+      criteria,
+      error,
+      deltaPka: null,
+      worstSolid: null,
+      gastricSolid: null,
+      saltLog10Sigma: 0,
+      saltAnchoredOnIntrinsic: false,
+    },
+  };
+}

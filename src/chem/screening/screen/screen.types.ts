@@ -1,0 +1,166 @@
+import type { Estimate } from '../../result';
+import type { SaltFormationVerdict } from '../delta-pka';
+import type { DisproportionationResult } from '../disproportionation';
+import type { InterpretedMeasurements, MeasurementInput } from '../measurements';
+import type { RobustnessRow, RobustnessShared } from '../rank-robustness';
+import type { CriterionInputs } from '../ranking';
+import type { ScreeningSettings } from '../settings';
+
+/**
+ * The shapes the screen reads and returns. Inputs are structural subsets of the library's CounterIon,
+ * the compound schema and the stored measurement records, so the core imports no app code.
+ */
+
+export interface ScreeningCompound {
+  name: string;
+  kind: 'base' | 'acid';
+  pKas: readonly { value: number; origin: 'measured' | 'literature' | 'predicted' }[];
+  ionCharge: number;
+  intrinsicSolubilityMgPerMl: number | null;
+  meltingPointC: number | null;
+  logP: number | null;
+  doseMg: number | null;
+}
+
+export interface ScreeningDrugIon {
+  molarMassGPerMol: number;
+  freeFormMolarMassGPerMol: number;
+}
+
+export interface ScreeningCounterIon {
+  id: string;
+  name: string;
+  kind: 'anion' | 'cation';
+  charge: number;
+  molarMassGPerMol: number;
+  pKas: readonly { value: number; source?: string }[];
+  acceptabilityClass: 1 | 2 | 3 | null;
+  classSource?: string;
+}
+
+export interface ScreeningStoichiometry {
+  label?: string;
+  drugPerSalt: number;
+  counterIonPerSalt: number;
+  /** Charge of the counter-ion in this salt. */
+  ionCharge: number;
+  /** Molar mass of the counter-ion in this charge state, g/mol (defaults to the ion's usual one). */
+  ionMolarMassGPerMol?: number;
+  pKaIndex?: number | null;
+}
+
+export interface ScreeningCandidate {
+  id: string;
+  counterIon: ScreeningCounterIon;
+  stoichiometry: ScreeningStoichiometry;
+  hydrateWater?: number;
+  measurements?: readonly MeasurementInput[];
+  /** ΔH_sol per formula unit from the thermochemistry engine (thermo-link.ts), if computed. */
+  solutionEnthalpyKJ?: Estimate | null;
+}
+
+export interface ScreenCompoundInput {
+  compound: ScreeningCompound;
+  drugIon: ScreeningDrugIon;
+  candidates: readonly ScreeningCandidate[];
+  /** Partial settings; defaults fill the rest (settings.ts). */
+  settings?: unknown;
+}
+
+export type ReasonKind = 'keeps' | 'drops' | 'watch' | 'measured' | 'note';
+export interface Reason {
+  kind: ReasonKind;
+  criterion: string;
+  text: string;
+}
+
+export interface ScreenFlag {
+  id:
+    | 'likely-poorly-soluble'
+    | 'salt-poorly-soluble'
+    | 'disproportionation'
+    | 'cocrystal-risk'
+    | 'estimated-ksp';
+  text: string;
+  /** The rule that raised it, with its source. */
+  rule: string;
+}
+
+export interface DoseNumberAt {
+  pH: number;
+  solubilityMgPerMl: number;
+  doseNumber: number | null;
+  solid: 'salt' | 'free-form';
+}
+
+export interface MediumResult {
+  id: string;
+  label: string;
+  pH: number;
+  commonIonM: number;
+  solubilityMgPerMl: number;
+  doseNumber: number | null;
+  solid: 'salt' | 'free-form';
+  /**
+   * Set when another salt, less soluble in this medium, would form and limit solubility — for a base in
+   * gastric chloride, the hydrochloride (its label). Null otherwise.
+   */
+  convertsTo: string | null;
+}
+
+export interface ScreenRow {
+  id: string;
+  label: string;
+  counterIonId: string;
+  counterIonName: string;
+  drugPerSalt: number;
+  counterIonPerSalt: number;
+  hydrateWater: number;
+  error: string | null;
+  deltaPka: number | null;
+  deltaPkaEach: number[];
+  saltFormation: SaltFormationVerdict | null;
+  saltMolarMassGPerMol: number;
+  activeFraction: number;
+  saltMassPerDoseMg: number | null;
+  /** log₁₀ K_sp with uncertainty (decades); method says measured or estimate. */
+  log10Ksp: Estimate | null;
+  kspOrigin: 'measured' | 'estimated' | null;
+  phMax: number | null;
+  /** Profile in mg/mL of free-form equivalents (pH 1–8 by default). */
+  profile: { pH: number; solubilityMgPerMl: number; solid: 'salt' | 'free-form' }[];
+  doseNumbers: DoseNumberAt[];
+  worst: DoseNumberAt | null;
+  solubilityClass: 'high' | 'low' | null;
+  gastric: MediumResult | null;
+  media: MediumResult[];
+  disproportionation: DisproportionationResult | null;
+  measured: InterpretedMeasurements | null;
+  flags: ScreenFlag[];
+  reasons: Reason[];
+  /** Inputs of the cheap ranking step. */
+  criteria: CriterionInputs;
+  /** Inputs of the rank-robustness draw. */
+  robustness: RobustnessRow;
+}
+
+export interface FreeFormResult {
+  log10IntrinsicM: Estimate;
+  intrinsicOrigin: 'measured' | 'general-solubility-equation';
+  profile: { pH: number; solubilityMgPerMl: number }[];
+  doseNumbers: DoseNumberAt[];
+  worst: DoseNumberAt | null;
+  solubilityClass: 'high' | 'low' | null;
+  flags: ScreenFlag[];
+}
+
+export interface ScreenResult {
+  compoundName: string;
+  drugKind: 'base' | 'acid';
+  settings: ScreeningSettings;
+  freeForm: FreeFormResult;
+  rows: ScreenRow[];
+  robustnessShared: RobustnessShared;
+  assumptions: string[];
+  cautions: string[];
+}
