@@ -11,7 +11,6 @@ export {
 export { bornMayerPotentialKJ, bornLandePotentialKJ, MADELUNG_CONSTANTS, BORN_MAYER_RHO_A, nearestDistanceFromVolumeA } from './models/born-mayer/born-mayer';
 export { vbtPotentialKJ, volumeFromDensityNm3, volumeFromCellNm3, ionicStrengthFactor, VBT_CONSTANTS } from './models/vbt/vbt';
 export { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
-export { parseFormula as parseIonFormula, molarMassGPerMol as ionFormulaMassGPerMol } from './models/ion-volume/formula';
 export { vanDerWaalsVolumeA3, radiusFromVolumeA, organicIonFromFormula, packingCalibration, type PackingCalibration, type RingCounts } from './models/ion-volume/ion-volume';
 export { organicIonFromSmiles } from './models/ion-volume/from-smiles';
 export { bornHydrationEnthalpyKJ, bornEnthalpyFactor, fitBornOffsets, hydrationEnthalpyKJ, type BornOffsetFit } from './models/hydration/hydration';
@@ -19,7 +18,11 @@ export { solveCycle, bornHaberCycle, solutionCycle, type BornHaberInput, type So
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
 export { relativeSolutionEnthalpyKJ, type RelativeCandidate } from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
+export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
 export { validationReport, kapustinskiiVariants, solutionValidation, relativePairFactor, type SolutionValidation } from './validation/report';
+export { calibratedSolutionValidation, solutionValidationSections } from './validation/report';
+export { SHIPPED_LATTICE_CALIBRATION, fitLatticeCalibration, findLatticeFactor, chargeClassOf, CALIBRATION_MIN_SALTS, type CalibrationRow } from './calibration/calibration';
+export type * from './calibration/calibration.types';
 export { latticeValidation, hydrationValidation, publishedHydrationClosure } from './validation/validation';
 export { referenceLatticeEnthalpyKJ, referenceSolutionEnthalpyKJ, referenceVolumeNm3 } from './validation/reference';
 export { LATTICE_REFERENCE_SALTS, SOLUTION_REFERENCE_SALTS, type LatticeReferenceSalt } from '../data/thermo-reference';

@@ -97,9 +97,10 @@ describe('estimateSaltThermo', () => {
     }
   });
 
-  it('ΔH_sol of NaCl: the stated band covers the NBS value +3.9 kJ/mol, and is wide', () => {
+  it('ΔH_sol of NaCl: the stated band covers the NBS value +3.9 kJ/mol, and is wide (raw model)', () => {
     // Wagman et al. 1982: ΔfH°(Na⁺,aq) + ΔfH°(Cl⁻,aq) − ΔfH°(NaCl,s) = −240.12 − 167.16 + 411.15 = 3.87 kJ/mol.
-    const r = estimateSaltThermo({ cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1 });
+    // The uncalibrated model; the calibrated one (narrower band) is tested in calibration.test.ts.
+    const r = estimateSaltThermo({ cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1, calibrate: false });
     expect(Math.abs(r.solutionEnthalpyKJ.value - 3.87)).toBeLessThanOrEqual(2 * r.solutionEnthalpyKJ.uncertainty);
     expect(r.solutionEnthalpyKJ.uncertainty).toBeGreaterThan(10);
     expect(r.solutionEnthalpyKJ.value).toBeCloseTo(r.latticeEnthalpyKJ.value + r.cationHydrationKJ.value + r.anionHydrationKJ.value, 9);
