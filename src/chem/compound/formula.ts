@@ -13,39 +13,27 @@ export interface ParsedFormula {
   hill: string;
 }
 
+const SUPERSCRIPT = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+
 const ACCEPTED =
-  'element symbols with counts, optional parentheses and a hydrate part, e.g. C18H20ClN3O, Ca(C2H3O2)2, C4H4O4·H2O; a charge as a trailing + or - (±1) or ^2- / (2-)';
+  'element symbols with counts, optional parentheses and a hydrate part, e.g. C18H20ClN3O, Ca(C2H3O2)2, C4H4O4·H2O; a charge as a trailing + or - (±1), or 2- after a space, ^2-, (2-), -- or ²⁻';
 
 /**
  * Parse a molecular formula as people write it: `C18H20ClN3O`, `Ca(OH)2`, `C9H8O4·2H2O`,
- * `CH3SO3-`, `C4H12N2^2+`. Element symbols must be real; elements without a bundled standard atomic
- * weight are refused with a message naming them (no mass is guessed).
+ * `CH3SO3-`, `C4H12N2^2+`, `SO4 2-`, `SO4²⁻`. The one formula parser of the core: compounds,
+ * counter-ions and the thermochemistry engine's ions all read formulas here. Element symbols must be
+ * real; elements without a bundled standard atomic weight are refused with a message naming them (no
+ * mass is guessed).
  * @throws ChemInputError naming `field` on any unreadable part.
  */
 export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   if (typeof text !== 'string') throw new ChemInputError(field, 'a formula is text', ACCEPTED);
-  let t = text.replace(/\s+/g, '');
+  const suffix = readChargeSuffix(text.trim());
+  let t = suffix.body.replace(/\s+/g, '');
+  const charge = suffix.charge;
   if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
   if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
-
-  // Charge suffix: ^2-, (2-), 2-, +, −, ⁺ ⁻ (superscripts).
-  t = t
-    .replace(/[⁺]/g, '+')
-    .replace(/[⁻−–]/g, '-')
-    .replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)));
-  // A charge of 2 or more is written `^2-` or `(2-)`; a bare trailing sign is ±1 and any digits before
-  // it belong to the formula (`CH3SO3-` is CH3SO3 with charge −1).
-  let charge = 0;
-  const marked = /(?:\^(\d*)([+-])|\((\d*)([+-])\))$/.exec(t);
-  if (marked) {
-    const digits = marked[1] ?? marked[3] ?? '';
-    const sign = (marked[2] ?? marked[4]) === '-' ? -1 : 1;
-    charge = sign * (digits === '' ? 1 : Number(digits));
-    t = t.slice(0, t.length - marked[0].length);
-  } else if (/[+-]$/.test(t)) {
-    charge = t.endsWith('-') ? -1 : 1;
-    t = t.slice(0, -1);
-  }
+  t = t.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT.indexOf(c)));
   if (Math.abs(charge) > 6) throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
 
   const elements: ElementCounts = {};
@@ -63,6 +51,37 @@ export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   }
   if (Object.keys(elements).length === 0) throw new ChemInputError(field, 'no atoms found', ACCEPTED);
   return { elements, charge, hill: hillFormula(elements) };
+}
+
+/** Minus signs people type for a charge: hyphen-minus, U+2212 minus, en dash, superscript minus. */
+const MINUS = /[-−–⁻]/;
+
+/**
+ * Split a written charge off the end of a formula. Accepted, in this order: superscripts (`SO4²⁻`,
+ * `Na⁺`); a charge after a space (`SO4 2-`, `NH4 +`); `^2-` or `(2-)`; repeated signs (`SO4--` is −2);
+ * a bare trailing sign (±1, and digits before it belong to the formula: `CH3SO3-` is CH3SO3 with −1,
+ * `SO42-` is 42 oxygens — write `SO4 2-` or `SO4^2-`).
+ */
+function readChargeSuffix(text: string): { body: string; charge: number } {
+  const sign = (c: string) => (MINUS.test(c) ? -1 : 1);
+  const cut = (m: RegExpExecArray, charge: number) => ({ body: text.slice(0, m.index), charge });
+  const sup = /([⁰¹²³⁴⁵⁶⁷⁸⁹]*)([⁺⁻])$/.exec(text);
+  if (sup) {
+    const digits = [...sup[1]!].map((c) => SUPERSCRIPT.indexOf(c)).join('');
+    return cut(sup, sign(sup[2]!) * (digits === '' ? 1 : Number(digits)));
+  }
+  const spaced = /\s+(\d*)([-+−–])$/.exec(text);
+  if (spaced) return cut(spaced, sign(spaced[2]!) * (spaced[1] === '' ? 1 : Number(spaced[1])));
+  const marked = /(?:\^(\d*)([-+−–])|\((\d*)([-+−–])\))$/.exec(text);
+  if (marked) {
+    const digits = marked[1] ?? marked[3] ?? '';
+    return cut(marked, sign((marked[2] ?? marked[4])!) * (digits === '' ? 1 : Number(digits)));
+  }
+  const repeated = /(?:[-−–]{2,}|\+{2,})$/.exec(text);
+  if (repeated) return cut(repeated, sign(repeated[0][0]!) * repeated[0].length);
+  const bare = /[-+−–]$/.exec(text);
+  if (bare) return cut(bare, sign(bare[0]));
+  return { body: text, charge: 0 };
 }
 
 function parseGroup(body: string, field: string): ElementCounts {
@@ -193,7 +212,6 @@ export function conventionalFormula(hill: string): string {
   return hill;
 }
 
-const SUPERSCRIPT = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 /** A formula in display order with its charge as superscript text, e.g. `CH3O3S⁻`, `SO4²⁻`, `Ca²⁺`. */
 export function formatIonFormula(hill: string, charge: number): string {
   const shown = conventionalFormula(hill);

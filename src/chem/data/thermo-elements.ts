@@ -1,22 +1,14 @@
 import { CHECKED, SRC } from './thermo-sources';
 
 /**
- * Element data for formula work: conventional atomic weights (g/mol) and Bondi van der Waals radii (Å)
- * with the corresponding sphere volumes (Å³) used as atom contributions by Zhao, Abraham & Zissimos.
+ * Element data for molecular volumes: Bondi van der Waals radii (Å) with the corresponding sphere
+ * volumes (Å³) used as atom contributions by Zhao, Abraham & Zissimos. Atomic weights have one home,
+ * src/chem/compound/atomic-weights.ts (IUPAC 2021).
  *
- * Atomic weights: IUPAC conventional values (2013 table; J. Meija et al., Pure Appl. Chem. 88 (2016) 265),
- * abridged to what salts of drugs need — entered from memory, all 24 checked 2026-12-01 against
- * rafaqz/UnitfulMoles.jl src/ConventionalMoles.jl (cites that IUPAC report; I, Cs and Ba agree to the five
- * figures it gives).
  * vdW volumes: Y. H. Zhao, M. H. Abraham, A. M. Zissimos, J. Org. Chem. 68 (2003) 7368, Table 1 (sphere
  * volumes of Bondi radii, A. Bondi, J. Phys. Chem. 68 (1964) 441) — the values quoted in the science brief,
  * checked here against (4/3)πr³ of the Bondi radius (tests/chem/thermo/ion-volume.test.ts).
  */
-export const ATOMIC_WEIGHT_G_PER_MOL: Readonly<Record<string, number>> = {
-  H: 1.008, Li: 6.94, B: 10.81, C: 12.011, N: 14.007, O: 15.999, F: 18.998, Na: 22.99, Mg: 24.305,
-  Al: 26.982, Si: 28.085, P: 30.974, S: 32.06, Cl: 35.45, K: 39.098, Ca: 40.078, Zn: 65.38, Se: 78.971,
-  Br: 79.904, Rb: 85.468, Sr: 87.62, I: 126.904, Cs: 132.905, Ba: 137.327,
-};
 
 /**
  * Van der Waals radii, Å — the radii behind {@link ZHAO_ATOM_VOLUME_A3}. H, C, N, O, F, P, S, Cl, Br, I, Si

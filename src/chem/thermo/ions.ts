@@ -2,7 +2,7 @@ import { AVOGADRO_PER_MOL } from '../constants/physical';
 import { THERMO_IONS, type SourcedValue, type ThermoIonRecord } from '../data/thermo-ions';
 import { ANION_VOLUME_SALTS, ANION_VOLUME_SOURCE } from '../data/thermo-reference';
 import type { Estimate } from '../result';
-import { molarMassGPerMol, parseFormula } from './models/ion-volume/formula';
+import { formulaMolarMassGPerMol, molarMassGPerMol, parseFormula } from '../compound/formula';
 import { organicIonFromFormula, radiusFromVolumeA } from './models/ion-volume/ion-volume';
 import type { ThermoIon } from './thermo.types';
 
@@ -46,7 +46,7 @@ export function derivedAnionVolumes(): Map<string, Estimate> {
   for (const { anion, salts } of ANION_VOLUME_SALTS) {
     const vs = salts.map((s) => {
       const cat = THERMO_IONS.find((i) => i.id === s.cation)!;
-      const vm = (molarMassGPerMol(parseFormula(s.formula)) / (s.densityGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
+      const vm = (molarMassGPerMol(parseFormula(s.formula).elements) / (s.densityGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
       return (vm - s.p * cat.volumeNm3!.value) / s.q;
     });
     const mean = vs.reduce((a, b) => a + b, 0) / vs.length;
@@ -98,7 +98,7 @@ function recordToIon(r: ThermoIonRecord): ThermoIon {
     ...(hyd ? { hydrationEnthalpyKJ: hyd } : {}),
     ...(r.bornExponent ? { bornExponent: r.bornExponent } : {}),
     formula: r.formula,
-    molarMassGPerMol: molarMassGPerMol(r.formula),
+    molarMassGPerMol: formulaMolarMassGPerMol(r.formula),
     ...(estimatedSize ? { estimatedSize } : {}),
     sources: [...sources],
   };
@@ -139,12 +139,12 @@ export function findThermoIon(idOrSymbol: string): ThermoIon | undefined {
 export function findThermoIonByFormula(formula: string, charge: number): ThermoIon | undefined {
   let counts: Record<string, number>;
   try {
-    counts = parseFormula(formula);
+    counts = parseFormula(formula).elements;
   } catch {
     return undefined;
   }
   const key = (c: Record<string, number>) => Object.entries(c).sort(([a], [b]) => a.localeCompare(b)).map(([e, n]) => `${e}${n}`).join('');
   const want = key(counts);
-  const r = THERMO_IONS.find((i) => i.charge === charge && key(parseFormula(i.formula)) === want);
+  const r = THERMO_IONS.find((i) => i.charge === charge && key(parseFormula(i.formula).elements) === want);
   return r ? getThermoIon(r.id) : undefined;
 }

@@ -22,6 +22,16 @@ describe('molecular formulas', () => {
     expect(parseFormula('C4H12N2(2+)')).toMatchObject({ charge: 2 });
   });
 
+  it('reads a charge written after a space, as superscripts, as repeated signs or with a true minus', () => {
+    // Sulfate is SO4 with charge 2− (IUPAC Red Book 2005, IR-4.4) however the charge is typed.
+    for (const written of ['SO4 2-', 'SO4²⁻', 'SO4--', 'SO4^2−', 'SO4 2−']) {
+      expect(parseFormula(written), written).toMatchObject({ charge: -2, hill: 'O4S' });
+    }
+    expect(parseFormula('NH4⁺')).toMatchObject({ charge: 1, hill: 'H4N' });
+    // Digits run straight into a bare sign belong to the formula: SO42- is 42 oxygens with charge −1.
+    expect(parseFormula('SO42-').elements).toEqual({ S: 1, O: 42 });
+  });
+
   it('refuses unknown elements and unreadable text with the field named', () => {
     expect(() => parseFormula('C6H6Xx')).toThrow(ChemInputError);
     expect(() => parseFormula('C6H6Xx')).toThrow(/unknown element 'Xx'/);

@@ -4,7 +4,7 @@ import { THERMO_IONS } from '../../../data/thermo-ions';
 import { SRC } from '../../../data/thermo-sources';
 import { ChemInputError, requireFiniteInRange, type Estimate } from '../../../result';
 import type { ThermoIon } from '../../thermo.types';
-import { molarMassGPerMol, parseFormula } from './formula';
+import { formulaMolarMassGPerMol, molarMassGPerMol, parseFormula } from '../../../compound/formula';
 import { AVOGADRO_PER_MOL } from '../../../constants/physical';
 
 /** Bond-count and ring corrections of Zhao, Abraham & Zissimos 2003 (J. Org. Chem. 68, 7368, eq. 4), Å³. */
@@ -35,7 +35,7 @@ function requireRings(rings: RingCounts): RingCounts {
  * Atoms: H B C N O F Si P S Cl Se Br I.
  */
 export function vanDerWaalsVolumeA3(formula: string | Record<string, number>, rings: RingCounts): number {
-  const counts = typeof formula === 'string' ? parseFormula(formula) : formula;
+  const counts = typeof formula === 'string' ? parseFormula(formula).elements : formula;
   const r = requireRings(rings);
   let sum = 0;
   let atoms = 0;
@@ -98,8 +98,8 @@ export function packingCalibration(): PackingCalibration {
   const pre = PACKING_CALIBRATION_SALTS.map((s) => {
     const partner = THERMO_IONS.find((i) => i.id === s.partner)!;
     const vPartner = partner.volumeNm3!.value;
-    const organicCounts = parseFormula(s.organicFormula);
-    const saltMass = s.organicPerFormula * molarMassGPerMol(organicCounts) + s.partnerPerFormula * molarMassGPerMol(partner.formula);
+    const organicCounts = parseFormula(s.organicFormula).elements;
+    const saltMass = s.organicPerFormula * molarMassGPerMol(organicCounts) + s.partnerPerFormula * formulaMolarMassGPerMol(partner.formula);
     const vm = (saltMass / (s.densityGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
     const implied = (vm - s.partnerPerFormula * vPartner) / s.organicPerFormula;
     const vdw = vanDerWaalsVolumeA3(organicCounts, s.rings);
@@ -150,7 +150,7 @@ export function organicIonFromFormula(
 ): ThermoIon {
   const z = requireFiniteInRange('charge', charge, -4, 4);
   if (z === 0 || !Number.isInteger(z)) throw new ChemInputError('charge', `charge ${charge} is not a non-zero whole number`, 'whole numbers −4…−1 or +1…+4');
-  const counts = parseFormula(formula);
+  const counts = parseFormula(formula).elements;
   const vdw = vanDerWaalsVolumeA3(counts, rings);
   const cal = packingCalibration();
   const k =
