@@ -77,24 +77,24 @@ export const SHIPPED_LATTICE_CALIBRATION: ShippedLatticeCalibration = {
       "n": 24,
       "raw": {
         "n": 24,
-        "biasPercent": 0.883378434304217,
-        "rmsPercent": 6.178890340646297
+        "biasPercent": 0.8834305365030313,
+        "rmsPercent": 6.178760798516094
       },
       "crossValidated": {
         "n": 24,
-        "biasPercent": -0.638457284997911,
-        "rmsPercent": 6.060840016139817
+        "biasPercent": -0.6384059749624836,
+        "rmsPercent": 6.060699036048373
       },
       "crossValidatedByGroup": {
         "halides": {
           "n": 16,
-          "biasPercent": -2.711628647929526,
-          "rmsPercent": 5.596389135403915
+          "biasPercent": -2.71152401083937,
+          "rmsPercent": 5.596221773126196
         },
         "polyatomic": {
           "n": 8,
-          "biasPercent": 3.507885440865319,
-          "rmsPercent": 6.8965355356143245
+          "biasPercent": 3.5078300967912894,
+          "rmsPercent": 6.89643546686617
         }
       }
     },
@@ -105,13 +105,13 @@ export const SHIPPED_LATTICE_CALIBRATION: ShippedLatticeCalibration = {
       "n": 35,
       "raw": {
         "n": 35,
-        "biasPercent": -4.9680173838875445,
-        "rmsPercent": 8.195522955322215
+        "biasPercent": -4.967996114662131,
+        "rmsPercent": 8.195516462351906
       },
       "crossValidated": {
         "n": 35,
-        "biasPercent": -1.4791849207186654,
-        "rmsPercent": 6.9376677740525
+        "biasPercent": -1.4791628611053194,
+        "rmsPercent": 6.937671339267511
       },
       "crossValidatedByGroup": {
         "halides": {
@@ -121,8 +121,8 @@ export const SHIPPED_LATTICE_CALIBRATION: ShippedLatticeCalibration = {
         },
         "polyatomic": {
           "n": 15,
-          "biasPercent": -4.238458290802057,
-          "rmsPercent": 10.380672372643064
+          "biasPercent": -4.2384068183709145,
+          "rmsPercent": 10.380677932332356
         }
       }
     },

@@ -1,0 +1,192 @@
+import { describe, expect, it } from 'vitest';
+import {
+  CALIBRATION_MIN_SALTS,
+  estimateSaltThermo,
+  findLatticeFactor,
+  getThermoIon,
+  LATTICE_REFERENCE_SALTS,
+  referenceLatticeEnthalpyKJ,
+  SHIPPED_LATTICE_CALIBRATION,
+} from '@/chem';
+import {
+  buildShippedCalibration,
+  latticeCalibrationRows,
+  renderCalibrationModule,
+  solutionCrossValidation,
+} from '@/chem/thermo/calibration/fit-calibration';
+import { fitLatticeCalibration } from '@/chem/thermo/calibration/calibration';
+import { rawLattice } from '@/chem/thermo/lattice';
+
+/**
+ * The lattice calibration (src/chem/thermo/calibration). Reference data throughout: lattice enthalpies
+ * of the bundled reference salts — Born–Haber cycle with ΔfH° from the NBS tables (Wagman et al. 1982,
+ * J. Phys. Chem. Ref. Data 11 Suppl. 2) and CRC Handbook/NIST ionisation energies and electron
+ * affinities for 36 halides; the solution cycle (NBS ΔfH°, Marcus 1987 hydration enthalpies) for 23 salts
+ * of polyatomic ions — and ΔH_sol from the same NBS ΔfH° (fixtures/reference/solution-enthalpies.csv).
+ */
+
+/** Walk two values together; every number must agree to `tol`, everything else exactly. */
+function expectSameNumbers(a: unknown, b: unknown, path = '$', tol = 1e-9): void {
+  if (typeof a === 'number' && typeof b === 'number') {
+    if (Math.abs(a - b) > tol) throw new Error(`${path}: ${a} vs ${b}`);
+    return;
+  }
+  if (a && b && typeof a === 'object' && typeof b === 'object') {
+    const ka = Object.keys(a).sort();
+    const kb = Object.keys(b).sort();
+    expect(ka, path).toEqual(kb);
+    for (const k of ka) {
+      expectSameNumbers((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], `${path}.${k}`, tol);
+    }
+    return;
+  }
+  expect(a, path).toEqual(b);
+}
+
+const na = getThermoIon('sodium')!;
+const cl = getThermoIon('chloride')!;
+
+describe('the shipped coefficients are what the fit script produces', () => {
+  it('recomputing the fit and the cross-validation gives calibration.data.ts (numbers to 1e-9)', () => {
+    expectSameNumbers(buildShippedCalibration(), SHIPPED_LATTICE_CALIBRATION);
+  });
+
+  it('the rendered module holds the shipped object (what the script writes)', () => {
+    const text = renderCalibrationModule();
+    expect(text).toMatch(/export const SHIPPED_LATTICE_CALIBRATION: ShippedLatticeCalibration = /);
+    const json = text.slice(text.indexOf('= {') + 2, text.lastIndexOf('}') + 1);
+    expectSameNumbers(JSON.parse(json), SHIPPED_LATTICE_CALIBRATION);
+  });
+
+  it('the validation report shows the shipped ΔH_sol figures, raw and calibrated', async () => {
+    const { calibratedSolutionValidation, solutionValidation } = await import('@/chem');
+    const c = calibratedSolutionValidation();
+    const r = solutionValidation();
+    const shipped = SHIPPED_LATTICE_CALIBRATION.solution;
+    expect(c.signedBiasKJ).toBeCloseTo(shipped.calibratedCrossValidated.biasKJ, 9);
+    expect(c.shareWithin20KJ).toBeCloseTo(shipped.calibratedCrossValidated.shareWithin20KJ, 12);
+    expect(r.rmsErrorKJ).toBeCloseTo(shipped.raw.rmsErrorKJ, 9);
+  });
+
+  it('states its form, what it was fitted on and its provenance, without a date', () => {
+    const c = SHIPPED_LATTICE_CALIBRATION;
+    expect(c.form).toMatch(/median/);
+    expect(c.fittedOn).toMatch(/Wagman et al\. 1982/);
+    expect(c.provenance).toMatch(/fit-calibration\.ts/);
+    expect(`${c.form}${c.fittedOn}${c.provenance}`).not.toMatch(/\b(19|20)\d\d-\d\d-\d\d\b/);
+  });
+});
+
+describe('the fit', () => {
+  it('the Kapustinskii factors are the median ratio reference/model, computed here independently', () => {
+    // Reference ΔH_L: Born–Haber (NBS/CRC) and solution cycle (NBS/Marcus), as above.
+    for (const singly of [true, false]) {
+      const ratios = LATTICE_REFERENCE_SALTS.filter((s) => (s.p === 1 && s.q === 1 && getThermoIon(s.cation)!.charge === 1) === singly)
+        .map((s) => {
+          const raw = rawLattice({ cation: getThermoIon(s.cation)!, anion: getThermoIon(s.anion)!, cationsPerFormula: s.p, anionsPerFormula: s.q }, 'kapustinskii');
+          return referenceLatticeEnthalpyKJ(s).value / raw.enthalpyKJ;
+        })
+        .sort((a, b) => a - b);
+      const m = ratios.length / 2;
+      const median = ratios.length % 2 ? ratios[Math.floor(m)]! : (ratios[m - 1]! + ratios[m]!) / 2;
+      const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', singly ? 'singly-charged' : 'multiply-charged')!;
+      expect(f.n).toBe(ratios.length);
+      expect(f.factor).toBeCloseTo(median, 12);
+    }
+  });
+
+  it('the raw Kapustinskii bias it removes is the measured one: about −5.6 % on salts of singly charged ions', () => {
+    const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', 'singly-charged')!;
+    expect(f.raw.biasPercent).toBeLessThan(-4);
+    // after calibration, leave-one-salt-out, the bias is gone and the RMS error smaller
+    expect(Math.abs(f.crossValidated.biasPercent)).toBeLessThan(1);
+    expect(f.crossValidated.rmsPercent).toBeLessThan(f.raw.rmsPercent);
+  });
+
+  it('leave-one-salt-out really refits: dropping a salt moves the factor, and a class too small gets none', () => {
+    const rows = latticeCalibrationRows();
+    const full = fitLatticeCalibration(rows);
+    const without = fitLatticeCalibration(rows.filter((r) => r.id !== 'LiF'));
+    const k = (c: typeof full) => findLatticeFactor(c, 'kapustinskii', 'singly-charged')!;
+    expect(k(without).n).toBe(k(full).n - 1);
+    expect(k(without).factor).not.toBe(k(full).factor);
+    // Born–Mayer has only the three fluorites (CaF₂, SrF₂, BaF₂) with a doubly charged ion
+    expect(rows.filter((r) => r.variant === 'born-mayer' && r.chargeClass === 'multiply-charged').length).toBeLessThan(CALIBRATION_MIN_SALTS);
+    expect(findLatticeFactor(full, 'born-mayer', 'multiply-charged')).toBeUndefined();
+  });
+});
+
+describe('estimateSaltThermo applies the calibration and keeps the raw figure visible', () => {
+  const req = { cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1 };
+
+  it('NaCl: calibrated = factor × raw, the raw figure and the factor are in the result and the notes', () => {
+    const cal = estimateSaltThermo(req);
+    const raw = estimateSaltThermo({ ...req, calibrate: false });
+    const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', 'singly-charged')!;
+    expect(cal.methodChosen).toBe('kapustinskii');
+    expect(cal.latticeEnthalpyKJ.value).toBeCloseTo(f.factor * raw.latticeEnthalpyKJ.value, 9);
+    expect(cal.rawLatticeEnthalpyKJ.value).toBeCloseTo(raw.latticeEnthalpyKJ.value, 12);
+    expect(cal.latticeCalibration).toMatchObject({ applied: true, factor: f.factor });
+    expect(cal.latticeEnthalpyKJ.notes!.join(' ')).toMatch(/calibrated: raw \d+\.\d kJ\/mol/);
+    expect(raw.latticeCalibration.applied).toBe(false);
+    expect(raw.rawLatticeEnthalpyKJ).toEqual(raw.latticeEnthalpyKJ);
+  });
+
+  it('NaCl: the calibrated ΔH_L is nearer the Born–Haber value and its band covers it', () => {
+    // Born–Haber ΔH_L(NaCl) from the bundled cycle data (NBS ΔfH°, CRC/NIST IE and EA), ≈ 787 kJ/mol.
+    const ref = referenceLatticeEnthalpyKJ(LATTICE_REFERENCE_SALTS.find((s) => s.formula === 'NaCl')!).value;
+    const cal = estimateSaltThermo(req).latticeEnthalpyKJ;
+    const raw = estimateSaltThermo({ ...req, calibrate: false }).latticeEnthalpyKJ;
+    expect(Math.abs(cal.value - ref)).toBeLessThan(Math.abs(raw.value - ref));
+    expect(Math.abs(cal.value - ref)).toBeLessThanOrEqual(2 * cal.uncertainty);
+  });
+
+  it('NaCl: the calibrated ΔH_sol band covers the NBS value +3.87 kJ/mol and is narrower than the raw one', () => {
+    // Wagman et al. 1982: −240.12 − 167.16 + 411.15 = 3.87 kJ/mol.
+    const cal = estimateSaltThermo(req).solutionEnthalpyKJ;
+    const raw = estimateSaltThermo({ ...req, calibrate: false }).solutionEnthalpyKJ;
+    expect(Math.abs(cal.value - 3.87)).toBeLessThanOrEqual(2 * cal.uncertainty);
+    expect(Math.abs(cal.value - 3.87)).toBeLessThan(Math.abs(raw.value - 3.87));
+    expect(cal.uncertainty).toBeLessThan(raw.uncertainty);
+    expect(cal.uncertainty).toBeGreaterThan(3);
+    expect(cal.notes!.join(' ')).toMatch(/uncalibrated ΔH_sol would be/);
+  });
+
+  it('CaF₂ by Born–Mayer (too few calibration salts of its class) keeps the raw model and says so', () => {
+    // Cell edge 5.463 Å (Wyckoff, as bundled); reference as above.
+    const r = estimateSaltThermo({ cation: getThermoIon('calcium')!, anion: getThermoIon('fluoride')!, cationsPerFormula: 1, anionsPerFormula: 2, method: 'born-mayer', structureType: 'fluorite', formulaUnitVolumeNm3: 5.463 ** 3 / 4 / 1000 });
+    expect(r.latticeCalibration.applied).toBe(false);
+    expect(r.latticeEnthalpyKJ.value).toBe(r.rawLatticeEnthalpyKJ.value);
+    expect(r.latticeEnthalpyKJ.notes!.join(' ')).toMatch(/not calibrated: fewer than/);
+  });
+
+  it('an organic salt (sodium acetate sized from its formula) is calibrated and still covers the NBS ΔH_sol', async () => {
+    // Wagman et al. 1982: ΔH_sol(NaCH₃COO) = −17.3 kJ/mol.
+    const { organicIonFromFormula } = await import('@/chem');
+    const acetate = organicIonFromFormula('C2H3O2', -1, { aromatic: 0, nonAromatic: 0 });
+    const r = estimateSaltThermo({ cation: na, anion: acetate, cationsPerFormula: 1, anionsPerFormula: 1 });
+    expect(r.latticeCalibration.applied).toBe(true);
+    expect(Math.abs(r.solutionEnthalpyKJ.value - -17.3)).toBeLessThanOrEqual(2 * r.solutionEnthalpyKJ.uncertainty);
+  });
+});
+
+describe('leave-one-salt-out ΔH_sol over the NBS reference salts (Wagman et al. 1982)', () => {
+  const cv = solutionCrossValidation();
+
+  it('predicts every salt with a fit that did not see it, and differs from the in-sample figure', () => {
+    expect(cv.rows.length).toBe(60);
+    // in-sample: the shipped calibration applied to salts it was fitted on
+    let inSampleAbs = 0;
+    let cvAbs = 0;
+    for (const r of cv.rows) {
+      const s = LATTICE_REFERENCE_SALTS.find((x) => x.formula === r.formula);
+      const ions = s ?? { cation: 'zinc', anion: 'chloride', p: 1, q: 2 };
+      const inSample = estimateSaltThermo({ cation: getThermoIon(ions.cation)!, anion: getThermoIon(ions.anion)!, cationsPerFormula: ions.p, anionsPerFormula: ions.q });
+      inSampleAbs += Math.abs(inSample.solutionEnthalpyKJ.value - r.referenceKJ);
+      cvAbs += Math.abs(r.calibrated.valueKJ - r.referenceKJ);
+    }
+    expect(cvAbs).not.toBeCloseTo(inSampleAbs, 6);
+    // ZnCl₂ has no reference lattice enthalpy: it is out of sample in every fit
+    expect(cv.rows.find((r) => r.formula === 'ZnCl2')).toBeDefined();
+  });
+});
