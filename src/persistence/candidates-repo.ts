@@ -1,3 +1,4 @@
+import { saltStoichiometryFromCharges } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, candidateRecordSchema, type CandidateRecord } from './records';
@@ -11,11 +12,7 @@ export function saltStoichiometry(
   drugCharge: number,
   counterIonCharge: number,
 ): { drugPerSalt: number; counterIonPerSalt: number } {
-  const a = Math.abs(Math.round(drugCharge)) || 1;
-  const b = Math.abs(Math.round(counterIonCharge)) || 1;
-  const gcd = (x: number, y: number): number => (y === 0 ? x : gcd(y, x % y));
-  const lcm = (a * b) / gcd(a, b);
-  return { drugPerSalt: lcm / a, counterIonPerSalt: lcm / b };
+  return saltStoichiometryFromCharges(Math.round(drugCharge) || 1, Math.round(counterIonCharge) || 1);
 }
 
 /** Salt candidates (the shortlist) of a project. */

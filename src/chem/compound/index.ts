@@ -5,3 +5,4 @@ export * from './formula';
 export * from './structure';
 export * from './drug-ion';
 export * from './free-form-volume';
+export * from './salt-stoichiometry';

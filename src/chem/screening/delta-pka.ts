@@ -1,3 +1,4 @@
+import { saltStoichiometryFromCharges } from '../compound/salt-stoichiometry';
 import { requireFiniteInRange } from '../result';
 import { linkingPka, type Protolyte } from './speciation';
 
@@ -122,12 +123,9 @@ export function sensibleStoichiometries(
     if (drugIsBase ? z < 0 : z > 0) ionCharges.push(z);
   }
   if (counterIon.pKas.length === 0 && counterIon.mostProtonatedCharge !== 0) ionCharges.push(counterIon.mostProtonatedCharge);
-  const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
   for (const zd of drugCharges) {
     for (const zx of ionCharges) {
-      const g = gcd(Math.abs(zd), Math.abs(zx));
-      const m = Math.abs(zx) / g;
-      const n = Math.abs(zd) / g;
+      const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(zd, zx);
       if (m > 4 || n > 4) continue;
       const d = saltDeltaPka(drug, zd, counterIon, zx);
       if (d !== null && d < bands.cocrystalBelow) continue;

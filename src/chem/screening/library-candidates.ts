@@ -1,3 +1,4 @@
+import { saltStoichiometryFromCharges } from '../compound/salt-stoichiometry';
 import type { CounterIon } from '../library/counter-ion.types';
 import type { ThermoIon } from '../thermo';
 import { DEFAULT_DELTA_PKA_BANDS, saltDeltaPka, type DeltaPkaBands } from './delta-pka';
@@ -29,18 +30,13 @@ export function candidatesFromLibrary(
       dIon = null;
     }
   }
-  const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
   const out: ScreeningCandidate[] = [];
   for (const ion of ions) {
     if (ion.kind !== want) continue;
     const seen = new Set<string>();
     const list = opts.firstStoichiometryOnly ? ion.stoichiometries.slice(0, 1) : ion.stoichiometries;
     for (const st of list) {
-      const z = Math.abs(drug.ionCharge);
-      const q = Math.abs(st.ionCharge);
-      const g = gcd(z, q);
-      const m = q / g;
-      const n = z / g;
+      const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(drug.ionCharge, st.ionCharge);
       if (m > 4 || n > 4) continue;
       const key = `${m}:${n}:${st.ionCharge}`;
       if (seen.has(key)) continue;

@@ -1,4 +1,5 @@
 import {
+  saltStoichiometryFromCharges,
   COUNTER_IONS,
   drugIon as deriveDrugIon,
   drugThermoIon,
@@ -73,11 +74,8 @@ function stoichiometryFor(ion: CounterIon, c: CandidateRecord, drugCharge: numbe
   if (balanced) return { ...balanced, label: `(${c.drugPerSalt}:${c.counterIonPerSalt})`, drugPerSalt: c.drugPerSalt, counterIonPerSalt: c.counterIonPerSalt };
   const first = ion.stoichiometries[0];
   if (!first) throw new Error(`${ion.name} has no stoichiometry in the library`);
-  const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
-  const z = Math.abs(drugCharge);
-  const q = Math.abs(first.ionCharge);
-  const g = gcd(z, q);
-  return { ...first, drugPerSalt: q / g, counterIonPerSalt: z / g, label: `(${q / g}:${z / g})` };
+  const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(drugCharge, first.ionCharge);
+  return { ...first, drugPerSalt: m, counterIonPerSalt: n, label: `(${m}:${n})` };
 }
 
 function counterThermoIon(ion: CounterIon, st: Stoichiometry): ThermoIon {

@@ -1,4 +1,5 @@
 import { ChemInputError, requireFiniteInRange, type Estimate } from '../../../result';
+import { saltStoichiometryFromCharges } from '../../../compound/salt-stoichiometry';
 
 /**
  * Kapustinskii's constant in the form the CRC Handbook of Chemistry and Physics, "Lattice Energies"
@@ -33,14 +34,9 @@ export interface KapustinskiiInput {
   constantKJA?: number;
 }
 
-/** Greatest common divisor of two positive integers. */
-function gcd(a: number, b: number): number {
-  return b === 0 ? a : gcd(b, a % b);
-}
-
 /**
  * Formula-unit stoichiometry of a salt from its ion charges: p cations and q anions with
- * p·z₊ = q·|z₋| in lowest terms.
+ * p·z₊ = q·|z₋| in lowest terms (the cation in the first place of saltStoichiometryFromCharges).
  */
 export function stoichiometryFromCharges(cationCharge: number, anionCharge: number) {
   const zc = Math.round(cationCharge);
@@ -48,8 +44,8 @@ export function stoichiometryFromCharges(cationCharge: number, anionCharge: numb
   if (zc <= 0 || za <= 0) {
     throw new ChemInputError('charge', 'charges must be non-zero', 'cation +1…+4, anion −1…−4');
   }
-  const g = gcd(zc, za);
-  return { cations: za / g, anions: zc / g };
+  const st = saltStoichiometryFromCharges(zc, za);
+  return { cations: st.drugPerSalt, anions: st.counterIonPerSalt };
 }
 
 /** Validate a pair of ion charges; returns them. */
