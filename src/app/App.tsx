@@ -13,6 +13,7 @@ import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBa
 import { OpenSheetButton } from '@/features/sheet/components/OpenSheetButton';
 import { SheetOverlay } from '@/features/sheet/components/SheetOverlay';
 import type { ProjectRecord } from '@/persistence/records';
+import { guardUnsavedEdits } from '@/persistence/unsaved-edits';
 
 // Areas with charts and heavy computation load on demand, so the first screen does not wait for them.
 const RankingArea = lazy(() => import('@/features/ranking/components/RankingArea').then((m) => ({ default: m.RankingArea })));
@@ -71,6 +72,9 @@ export function App() {
   const goTo = useNavigationStore((s) => s.goTo);
   const { project, loading } = useCurrentProject();
   const [cautionsOpen, setCautionsOpen] = useState(false);
+
+  // Edits still on their way to IndexedDB are copied aside when the page is hidden or goes away.
+  useEffect(() => guardUnsavedEdits(), []);
 
   useEffect(() => {
     const onHash = () => goTo(areaFromHash(window.location.hash));

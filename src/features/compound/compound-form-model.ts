@@ -127,3 +127,93 @@ export function compoundFromDraft(
   if (Object.keys(errors).length > 0) return { ok: false, errors };
   return { ok: true, compound: parsed.data! };
 }
+
+/** Every field of the form, in display order. */
+export const DRAFT_KEYS: readonly (keyof CompoundDraft)[] = [
+  'name',
+  'smiles',
+  'formula',
+  'kind',
+  'pKas',
+  'pKaOrigin',
+  'ionCharge',
+  'intrinsicSolubilityMgPerMl',
+  'meltingPointC',
+  'logP',
+  'logPOrigin',
+  'doseMg',
+  'densityGPerCm3',
+  'cellVolumeA3',
+  'formulaUnitsPerCell',
+  'notes',
+];
+
+/**
+ * The stored compound fields a form field writes. Fields that only make sense together travel
+ * together (a log P with its origin, a cell volume with its Z; the pKa origin lives on the pKas).
+ */
+const FIELDS_OF: Record<keyof CompoundDraft, readonly (keyof Compound)[]> = {
+  name: ['name'],
+  smiles: ['smiles'],
+  formula: ['formula'],
+  kind: ['kind'],
+  pKas: ['pKas'],
+  pKaOrigin: ['pKas'],
+  ionCharge: ['ionCharge'],
+  intrinsicSolubilityMgPerMl: ['intrinsicSolubilityMgPerMl'],
+  meltingPointC: ['meltingPointC'],
+  logP: ['logP', 'logPOrigin'],
+  logPOrigin: ['logPOrigin'],
+  doseMg: ['doseMg'],
+  densityGPerCm3: ['densityGPerCm3'],
+  cellVolumeA3: ['cellVolumeA3', 'formulaUnitsPerCell'],
+  formulaUnitsPerCell: ['cellVolumeA3', 'formulaUnitsPerCell'],
+  notes: ['notes'],
+};
+
+/**
+ * The part of a valid compound that the edited form fields own: what a field-level save writes,
+ * so that the other fields keep whatever is stored (perhaps written by another tab meanwhile).
+ */
+export function changesFor(compound: Compound, edited: Iterable<keyof CompoundDraft>): Partial<Compound> {
+  const out: Record<string, unknown> = {};
+  for (const key of edited) {
+    for (const field of FIELDS_OF[key]) out[field] = compound[field] ?? null;
+  }
+  return out as Partial<Compound>;
+}
+
+const NUMERIC_KEYS = new Set<keyof CompoundDraft>([
+  'intrinsicSolubilityMgPerMl',
+  'meltingPointC',
+  'logP',
+  'doseMg',
+  'densityGPerCm3',
+  'cellVolumeA3',
+  'formulaUnitsPerCell',
+  'ionCharge',
+]);
+
+/**
+ * True when the text on screen already says what is stored ("150." and "150", "7,8" and "7.8"), so
+ * that taking over the stored value would only rewrite what the user is typing.
+ */
+export function sameFieldValue(key: keyof CompoundDraft, shown: string, stored: string): boolean {
+  if (shown === stored) return true;
+  if (NUMERIC_KEYS.has(key)) {
+    const a = parseOptionalNumber(shown);
+    const b = parseOptionalNumber(stored);
+    return a === b;
+  }
+  if (key === 'pKas') {
+    const list = (t: string) =>
+      t
+        .split(/[;\s]+|,\s+/)
+        .filter(Boolean)
+        .map((x) => Number(x.replace(',', '.')))
+        .join(' ');
+    return list(shown) === list(stored);
+  }
+  if (key === 'smiles' || key === 'formula') return shown.trim() === stored.trim();
+  return false;
+}

@@ -23,6 +23,8 @@ export function useCurrentProject(): { project: ProjectRecord | undefined; loadi
     let cancelled = false;
     setResolving(true);
     void (async () => {
+      // First put back the edits a reloaded or closed page could not confirm (unsaved-edits.ts).
+      await projectsRepo.replayUnsavedEdits().catch(() => 0);
       const demoId = await projectsRepo.ensureDemo();
       const last = await settingsRepo.get<string>(LAST_PROJECT_KEY);
       const lastExists = last ? await projectsRepo.get(last) : undefined;

@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { screeningWeightsSchema, type ScreeningWeights } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
+import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
 import type { ProjectRecord } from '@/persistence/records';
 import { SCREENING_SETTINGS_KEY, screeningBlockOf, screeningSettingsOf } from '@/features/screening-data/screening-settings';
 
@@ -37,6 +38,18 @@ export function useWeights(project: ProjectRecord): {
       timer.current = null;
       pending.current?.();
     },
+    [],
+  );
+
+  // The page being reloaded or closed starts the waiting save at once (persistence/unsaved-edits.ts).
+  useEffect(
+    () =>
+      flushBeforeLeaving(() => {
+        if (!timer.current) return;
+        clearTimeout(timer.current);
+        timer.current = null;
+        pending.current?.();
+      }),
     [],
   );
 

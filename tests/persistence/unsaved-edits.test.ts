@@ -1,0 +1,74 @@
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { DEMO_COMPOUND } from '@/persistence/demo-project';
+
+// Each "page" is a fresh copy of the modules (vi.resetModules), as after a reload: what one page
+// left in flight is gone from memory, and only the localStorage copy remains.
+async function newPage() {
+  vi.resetModules();
+  const repo = (await import('@/persistence/projects-repo')).projectsRepo;
+  const edits = await import('@/persistence/unsaved-edits');
+  return { repo, ...edits };
+}
+
+const never = () => new Promise<never>(() => undefined);
+
+beforeEach(async () => {
+  localStorage.clear();
+  vi.resetModules();
+  await (await import('@/persistence/db')).resetDbForTests();
+});
+
+describe('edits in flight when the page goes away (issue 13)', () => {
+  it('copies a write still in flight; the next start stores it', async () => {
+    const first = await newPage();
+    const p = await first.repo.create('P', DEMO_COMPOUND);
+    // A write the page could not finish (the tab closed mid-transaction): it never settles.
+    void first.trackWrite({ kind: 'compound', projectId: p.id, changes: { meltingPointC: 150 } }, never);
+    expect(first.stashUnsavedEdits()).toBe(1);
+    expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toContain('"meltingPointC":150');
+
+    const second = await newPage();
+    await expect(second.repo.replayUnsavedEdits()).resolves.toBe(1);
+    expect((await second.repo.get(p.id))!.compound.meltingPointC).toBe(150);
+    expect(localStorage.getItem(second.UNSAVED_EDITS_KEY)).toBeNull();
+  });
+
+  it('drops the copy once the write completes, so a replay cannot undo a later edit', async () => {
+    const first = await newPage();
+    const p = await first.repo.create('P', DEMO_COMPOUND);
+    const write = first.repo.patchCompound(p.id, { meltingPointC: 150 });
+    expect(first.stashUnsavedEdits()).toBe(1);
+    await write;
+    expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toBeNull();
+    await first.repo.patchCompound(p.id, { meltingPointC: 160 });
+
+    const second = await newPage();
+    await expect(second.repo.replayUnsavedEdits()).resolves.toBe(0);
+    expect((await second.repo.get(p.id))!.compound.meltingPointC).toBe(160);
+  });
+
+  it('runs a registered flush (a debounced slider) before the copy is taken', async () => {
+    const first = await newPage();
+    const p = await first.repo.create('P', DEMO_COMPOUND);
+    first.flushBeforeLeaving(() => {
+      void first.trackWrite({ kind: 'extra-settings', projectId: p.id, key: 'screening', value: { x: 1 } }, never);
+    });
+    expect(first.stashUnsavedEdits()).toBe(1);
+
+    const second = await newPage();
+    await second.repo.replayUnsavedEdits();
+    expect((await second.repo.get(p.id))!.settings.extra.screening).toEqual({ x: 1 });
+  });
+
+  it('drops a copy that no longer validates instead of storing it', async () => {
+    const first = await newPage();
+    const p = await first.repo.create('P', DEMO_COMPOUND);
+    void first.trackWrite({ kind: 'compound', projectId: p.id, changes: { meltingPointC: 'hot' } }, never);
+    first.stashUnsavedEdits();
+
+    const second = await newPage();
+    await expect(second.repo.replayUnsavedEdits()).resolves.toBe(0);
+    expect((await second.repo.get(p.id))!.compound.meltingPointC).toBe(DEMO_COMPOUND.meltingPointC);
+    expect(localStorage.getItem(second.UNSAVED_EDITS_KEY)).toBeNull();
+  });
+});
