@@ -95,3 +95,29 @@ describe('projectsRepo', () => {
     expect((await projectsRepo.get(p.id))?.settings.extra).toEqual({ screening: { a: 1 }, other: { b: 2 } });
   });
 });
+
+describe('field-level compound writes (issue 13: two tabs on one project)', () => {
+  it('a tab that writes log P leaves the melting point another tab stored', async () => {
+    const p = await projectsRepo.create('P', { ...DEMO_COMPOUND, meltingPointC: 184 });
+    await projectsRepo.patchCompound(p.id, { meltingPointC: 150 }); // tab A
+    await projectsRepo.patchCompound(p.id, { logP: 2.7, logPOrigin: 'measured' }); // tab B, still showing 184
+    const stored = (await projectsRepo.get(p.id))!.compound;
+    expect(stored.meltingPointC).toBe(150);
+    expect(stored.logP).toBe(2.7);
+  });
+
+  it('refuses a change that makes the stored compound invalid and keeps what was stored', async () => {
+    const p = await projectsRepo.create('P', DEMO_COMPOUND);
+    await expect(projectsRepo.patchCompound(p.id, { meltingPointC: 5000 })).rejects.toThrow();
+    expect((await projectsRepo.get(p.id))!.compound).toStrictEqual(p.compound);
+  });
+
+  it('writes one settings field without touching the extra blocks another tab stored', async () => {
+    const p = await projectsRepo.create('P', DEMO_COMPOUND);
+    await projectsRepo.updateExtraSettings(p.id, 'screening', { weights: { a: 1 } });
+    await projectsRepo.updateSettings(p.id, { temperatureC: 25 });
+    const stored = (await projectsRepo.get(p.id))!.settings;
+    expect(stored.temperatureC).toBe(25);
+    expect(stored.extra.screening).toEqual({ weights: { a: 1 } });
+  });
+});
