@@ -1,3 +1,4 @@
+import { celsiusToKelvin, kelvinToCelsius } from '../units/temperature';
 import { requireFiniteInRange } from '../result';
 
 /**
@@ -10,8 +11,8 @@ import { requireFiniteInRange } from '../result';
  * A ≈ 0.51 at 25 °C, close to the tabulated 0.509 (Robinson & Stokes, "Electrolyte Solutions").
  */
 export function debyeHuckelA(temperatureK: number): number {
-  requireFiniteInRange('temperatureK', temperatureK, 273.15, 373.15, 'K');
-  const t = temperatureK - 273.15;
+  requireFiniteInRange('temperatureK', temperatureK, celsiusToKelvin(0), celsiusToKelvin(100), 'K');
+  const t = kelvinToCelsius(temperatureK);
   const eps = 87.74 - 0.40008 * t + 9.398e-4 * t * t - 1.41e-6 * t * t * t;
   return 1.8248e6 * (eps * temperatureK) ** -1.5;
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ChemInputError } from '../result';
+import { celsiusToKelvin } from '../units/temperature';
 
 /**
  * Screening settings, validated with zod (the app keeps them in the project's `settings.extra.screening`).
@@ -61,7 +62,7 @@ export const screeningSettingsSchema = z.object({
   /** Extra media the user defines (buffers with their counter-ions). */
   media: z.array(mediumSchema).max(20).default([]),
   microenvironmentPh: z.number().min(0).max(14).default(7),
-  temperatureK: z.number().min(273.15).max(373.15).default(310.15),
+  temperatureK: z.number().min(celsiusToKelvin(0)).max(celsiusToKelvin(100)).default(celsiusToKelvin(37)),
   activityModel: z.enum(['ideal', 'davies']).default('ideal'),
   /** Ionic strength of the dissolution media for the Davies option, mol/L. */
   backgroundIonicStrengthM: z.number().min(0).max(5).default(0.1),

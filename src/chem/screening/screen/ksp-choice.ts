@@ -1,11 +1,15 @@
+import { celsiusToKelvin, kelvinToCelsius } from '../../units/temperature';
 import type { Estimate } from '../../result';
 import { estimateKsp, log10KspFromFormulaUnits } from '../ksp-estimate';
 import { log10KspFromSaltSolubility } from '../salt-equilibrium';
 import type { PreparedCandidate } from './prepare-candidate';
 import type { ScreenContext } from './screen-context';
-import { estimatedKspFlag, measuredEnthalpyReason, measuredKspReason } from './screen-reasons';
+import { estimatedKspFlag, measuredEnthalpyReason, measuredKspReason, saltWaterReason } from './screen-reasons';
 import { measuredKspNotes } from './screen-notes';
-import type { Reason, ScreenFlag } from './screen.types';
+import type { Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
+import { GAS_CONSTANT_KJ_PER_MOL_K } from '../../constants/physical';
+import { estimateSaltWaterSolubility } from '../salt-solubility/estimate-salt-solubility';
+import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 
 /** Measured-solubility spread carried into K_sp, decades per ion (our assumption: ~±10 % in solubility). */
 const MEASURED_LOG10_S_SIGMA = 0.05;
@@ -22,12 +26,15 @@ export interface KspChoice {
   anchored: boolean;
   reasons: Reason[];
   flags: ScreenFlag[];
+  /** The salt's own solubility in water behind this K_sp. */
+  saltWater: SaltWaterSolubility;
 }
 
 /**
  * K_sp of one prepared candidate: from the measured salt solubility when there is one, else the
- * labelled estimate (ksp-estimate.ts). This is the one place that chooses; a new salt-solubility
- * model plugs in here.
+ * labelled estimate: the calibrated salt-solubility model (salt-solubility/) when the counter-ion
+ * has descriptors, else the common-practice anchor (ksp-estimate.ts). This is the one place that
+ * chooses.
  */
 export function chooseKsp(
   ctx: ScreenContext,
@@ -57,7 +64,7 @@ export function chooseKsp(
           });
     const n = st.drugPerSalt + st.counterIonPerSalt;
     const farK = ms.temperatureK !== null && Math.abs(ms.temperatureK - T) > TEMPERATURE_NOTE_K;
-    const notes = measuredKspNotes(ms.ph, farK ? ms.temperatureK! - 273.15 : null, T - 273.15);
+    const notes = measuredKspNotes(ms.ph, farK ? kelvinToCelsius(ms.temperatureK!) : null, kelvinToCelsius(T));
     return {
       log10Ksp: {
         value: logK,
@@ -71,9 +78,66 @@ export function chooseKsp(
       anchored: false,
       reasons: [measuredKspReason(ms.formulaUnitsM * p.saltMolarMassGPerMol)],
       flags: [],
+      saltWater: saltWaterOf(
+        p,
+        ctx,
+        {
+          value: Math.log10(ms.formulaUnitsM * st.drugPerSalt),
+          uncertainty: MEASURED_LOG10_S_SIGMA,
+          method: 'measured-salt-solubility',
+          sources: ['measured salt solubility (user data)'],
+          notes,
+        },
+        'measured',
+        [],
+      ),
     };
   }
   const logS0 = ctx.log10IntrinsicM;
+  const descriptors = p.cand.counterIonDescriptors ?? LIBRARY_COUNTER_ION_DESCRIPTORS[p.cand.counterIon.id] ?? null;
+  const origin = p.solutionEnthalpyOrigin;
+  const enthalpyReasons = origin?.startsWith('measured') ? [measuredEnthalpyReason(origin)] : [];
+  if (descriptors) {
+    const m = st.drugPerSalt;
+    const n = st.counterIonPerSalt;
+    const dH = p.solutionEnthalpyKJ;
+    const thermoShiftDecades =
+      dH && referenceSolutionEnthalpyPerDrugKJ !== null
+        ? -(dH.value - m * referenceSolutionEnthalpyPerDrugKJ) /
+          ((m + n) * GAS_CONSTANT_KJ_PER_MOL_K * T * Math.LN10)
+        : null;
+    const meltingPointC = p.measured?.meltingPointC ?? null;
+    const est = estimateSaltWaterSolubility(
+      {
+        drug: { kind: ctx.compound.kind, log10IntrinsicM: logS0.value, logP: ctx.compound.logP },
+        counterIon: { ...descriptors, charge: st.ionCharge },
+        drugPerSalt: m,
+        counterIonPerSalt: n,
+        meltingPointK: meltingPointC === null ? null : celsiusToKelvin(meltingPointC),
+        fusionEnthalpyKJPerMol: p.measured?.fusionEnthalpyKJPerMol ?? null,
+        thermoShiftDecades,
+      },
+      { log10IntrinsicSigma: logS0.uncertainty },
+    );
+    const logSD = est.log10DrugM.value;
+    const sigma = est.log10DrugM.uncertainty;
+    const saltWater = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers);
+    return {
+      log10Ksp: {
+        value: log10KspFromFormulaUnits(logSD - Math.log10(m), m, n),
+        uncertainty: (m + n) * sigma,
+        method: est.log10DrugM.method,
+        sources: est.log10DrugM.sources,
+        notes: ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])],
+      },
+      kspOrigin: 'estimated',
+      saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - logS0.uncertainty ** 2)),
+      anchored: true,
+      reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
+      flags: [estimatedKspFlag(sigma)],
+      saltWater,
+    };
+  }
   const k = estimateKsp({
     log10IntrinsicM: logS0,
     drugPerSalt: st.drugPerSalt,
@@ -84,15 +148,34 @@ export function chooseKsp(
     anchorLog10: ctx.settings.saltAnchorLog10,
   });
   const log10Ksp = k.log10Ksp;
-  const origin = p.solutionEnthalpyOrigin;
   if (origin) log10Ksp.notes = [...(log10Ksp.notes ?? []), `ΔH_sol: ${origin}`];
   const sigma = k.log10SaltLimitedDrugM.uncertainty;
+  const saltWater = saltWaterOf(p, ctx, k.log10SaltLimitedDrugM, 'anchor', []);
   return {
     log10Ksp,
     kspOrigin: 'estimated',
     saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - logS0.uncertainty ** 2)),
     anchored: true,
-    reasons: origin?.startsWith('measured') ? [measuredEnthalpyReason(origin)] : [],
+    reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
     flags: [estimatedKspFlag(sigma)],
+    saltWater,
+  };
+}
+
+/** The salt's water solubility in the three units the workbench shows. */
+function saltWaterOf(
+  p: PreparedCandidate,
+  ctx: ScreenContext,
+  log10DrugM: Estimate,
+  origin: SaltWaterSolubility['origin'],
+  drivers: SaltWaterSolubility['drivers'],
+): SaltWaterSolubility {
+  const drugM = 10 ** log10DrugM.value;
+  return {
+    log10DrugM,
+    mgPerMlAsSalt: (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol,
+    mgPerMlAsFreeForm: drugM * ctx.freeFormMolarMassGPerMol,
+    origin,
+    drivers,
   };
 }

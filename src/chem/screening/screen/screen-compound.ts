@@ -1,3 +1,4 @@
+import { kelvinToCelsius } from '../../units/temperature';
 import { SCREENING_CAUTIONS } from '../../report/cautions';
 import { chooseKsp, type KspChoice } from './ksp-choice';
 import { hydrochlorideReference, screeningMedia } from './media';
@@ -72,7 +73,7 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     },
     assumptions: [
       ...freeForm.profile.assumptions,
-      ...screenAssumptions(ctx.temperatureK - 273.15, hcl !== null),
+      ...screenAssumptions(kelvinToCelsius(ctx.temperatureK), hcl !== null),
     ],
     cautions: SCREENING_CAUTIONS,
   };

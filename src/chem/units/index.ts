@@ -1,0 +1,2 @@
+/** Units and their conversions (SI inside the core). */
+export * from './temperature';
