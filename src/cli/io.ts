@@ -5,6 +5,8 @@ export interface CliIo {
   stdin: Readable;
   stdout: Writable;
   stderr: Writable;
+  /** Whether stderr is a terminal (progress bars are drawn only then). Default: false. */
+  stderrIsTty?: boolean;
 }
 
 /** A command: takes its arguments (after the command name) and returns the exit status. */
@@ -14,30 +16,26 @@ export type CliCommand = {
   run: (args: string[], io: CliIo) => Promise<number>;
 };
 
-/** Parse `--flag value` and `--switch` arguments; values are strings, switches are `true`. */
-export function parseFlags(
-  args: string[],
-  switches: readonly string[] = [],
-): { flags: Record<string, string | true>; positional: string[] } {
-  const flags: Record<string, string | true> = {};
-  const positional: string[] = [];
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i]!;
-    if (a.startsWith('--')) {
-      const eq = a.indexOf('=');
-      if (eq > 0) {
-        flags[a.slice(2, eq)] = a.slice(eq + 1);
-      } else if (switches.includes(a.slice(2))) {
-        flags[a.slice(2)] = true;
-      } else {
-        const v = args[i + 1];
-        if (v === undefined || v.startsWith('--')) throw new Error(`${a} needs a value`);
-        flags[a.slice(2)] = v;
-        i++;
-      }
-    } else positional.push(a);
-  }
-  return { flags, positional };
-}
+/** Write one line without waiting (short messages: usage, errors, a single result). */
+export const writeLine = (w: Writable, line: string): boolean => w.write(line + '\n');
 
-export const writeLine = (w: Writable, line: string) => w.write(line + '\n');
+/**
+ * Write text and wait while the stream's buffer is full ('drain'), so a slow reader slows the writer
+ * instead of the output piling up in memory. Resolves early if the stream closes or fails (a closed pipe
+ * is handled where the process streams are set up).
+ */
+export function writeText(w: Writable, text: string): Promise<void> {
+  if (w.write(text)) return Promise.resolve();
+  if (w.destroyed || w.writableEnded) return Promise.resolve();
+  return new Promise((resolve) => {
+    const done = () => {
+      w.off('drain', done);
+      w.off('close', done);
+      w.off('error', done);
+      resolve();
+    };
+    w.on('drain', done);
+    w.on('close', done);
+    w.on('error', done);
+  });
+}

@@ -1,7 +1,8 @@
 import { captureIo } from './support/capture-io';
 import { describe, expect, it } from 'vitest';
 import { main } from '@/cli/main';
-import { evalKinds } from '@/cli/commands/eval';
+import { evalRegistry } from '@/cli/commands/eval/registry';
+import { registerBuiltInEvalKinds } from '@/cli/commands/eval/built-in-kinds';
 
 // Loose shape of one answer line, read in the assertions below.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -75,7 +76,9 @@ describe('saltsmith eval', () => {
     expect(lines[8]!.line).toBe(10);
   });
 
-  it('has a registry of request kinds that starts with "salt"', () => {
-    expect(evalKinds()).toContain('salt');
+  it('has a registry of request kinds, filled explicitly with "salt" and "ph-solubility"', () => {
+    registerBuiltInEvalKinds();
+    expect(evalRegistry.list()).toContain('ph-solubility');
+    expect(evalRegistry.list()).toContain('salt');
   });
 });

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { captureIo } from './support/capture-io';
 import Papa from 'papaparse';
-import { screenCommand } from '@/cli/commands/screen';
-import { evaluateRequest } from '@/cli/commands/eval';
+import { screenCommand } from '@/cli/commands/screen/screen-command';
+import { registerBuiltInEvalKinds } from '@/cli/commands/eval/built-in-kinds';
+import { evaluateRequest } from '@/cli/commands/eval/registry';
 import { phMaxBase } from '@/chem';
 
 async function run(args: string[]) {
@@ -77,6 +78,7 @@ describe('saltsmith screen', () => {
 });
 
 describe('saltsmith eval: "kind":"ph-solubility"', () => {
+  registerBuiltInEvalKinds();
   it('returns the profile and pH_max, with the 1:1 closed form beside it (Bogardus & Blackwood 1979)', async () => {
     const r = (await evaluateRequest({
       kind: 'ph-solubility',

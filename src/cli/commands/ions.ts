@@ -1,5 +1,8 @@
+import { defineCommand } from '../define-command';
 import { COUNTER_IONS, formatIonFormula, searchCounterIons, type CounterIon } from '@/chem';
-import { parseFlags, writeLine, type CliCommand } from '../io';
+import { helpRequested } from '../args/help';
+import { parseFlags } from '../args/parse-flags';
+import { writeText, type CliCommand } from '../io';
 
 /** File tag and version of `saltsmith ions --json` (also the format of fixtures/library/counter-ions.json). */
 export const IONS_JSON_FORMAT = 'saltsmith-counter-ion-library';
@@ -28,50 +31,52 @@ function charges(ion: CounterIon): string {
  * `saltsmith ions [--search text] [--kind anion|cation] [--json]`: the bundled counter-ion library, the
  * same data the app bundles.
  */
-export const ionsCommand: CliCommand = {
+const USAGE = 'saltsmith ions [--search <text>] [--kind anion|cation] [--json]';
+
+/** The flags of `saltsmith ions`. */
+export const IONS_FLAGS = {
+  help: { type: 'switch' },
+  json: { type: 'switch' },
+  search: { type: 'string', maxLength: 200 },
+  kind: { type: 'enum', values: ['anion', 'cation'] },
+} as const;
+
+export const ionsCommand: CliCommand = defineCommand('ions', {
   summary: 'the counter-ion library: name, formula, charge, pKa values, class',
-  usage: 'saltsmith ions [--search <text>] [--kind anion|cation] [--json]',
+  usage: USAGE,
   run: async (args, io) => {
-    const { flags, positional } = parseFlags(args, ['json']);
-    if (positional.length > 0) {
-      writeLine(io.stderr, `unexpected argument '${positional[0]}'. Usage: ${ionsCommand.usage}`);
-      return 2;
-    }
-    const kind = flags.kind;
-    if (kind !== undefined && kind !== 'anion' && kind !== 'cation') {
-      writeLine(io.stderr, `--kind must be anion or cation, got '${String(kind)}'`);
-      return 2;
-    }
-    const query = typeof flags.search === 'string' ? flags.search : '';
+    const flags = parseFlags(args, IONS_FLAGS);
+    if (helpRequested(flags, io, USAGE)) return 0;
+    const query = flags.search ?? '';
+    const kind = flags.kind as 'anion' | 'cation' | undefined;
     const ions = searchCounterIons(COUNTER_IONS, query, kind ? { kind } : {});
     if (flags.json) {
-      writeLine(io.stdout, JSON.stringify(ionsJsonDocument(ions), null, 2));
+      await writeText(io.stdout, JSON.stringify(ionsJsonDocument(ions), null, 2) + '\n');
       return 0;
     }
     if (ions.length === 0) {
-      writeLine(io.stderr, `no counter-ion matches '${query}'`);
+      io.stderr.write(`no counter-ion matches '${query}'\n`);
       return 1;
     }
-    writeLine(
+    await writeText(
       io.stdout,
-      `${pad('name', 22)} ${pad('formula', 16)} ${pad('charge', 10)} ${pad('pKa (25 °C, water)', 24)} ${pad('class', 5)} ${'M (g/mol)'.padStart(9)}`,
+      `${pad('name', 22)} ${pad('formula', 16)} ${pad('charge', 10)} ${pad('pKa (25 °C, water)', 24)} ${pad('class', 5)} ${'M (g/mol)'.padStart(9)}\n`,
     );
     for (const ion of ions) {
       const pkas = ion.pKas.length ? ion.pKas.map((p) => p.value.toFixed(2)).join(', ') : 'not sourced';
-      writeLine(
+      const cls = ion.acceptabilityClass === null ? '–' : String(ion.acceptabilityClass);
+      const name = ion.referenceOnly ? `${ion.name} (ref.)` : ion.name;
+      await writeText(
         io.stdout,
-        `${pad(ion.referenceOnly ? `${ion.name} (ref.)` : ion.name, 22)} ${pad(formatIonFormula(ion.formula, ion.charge), 16)} ${pad(charges(ion), 10)} ${pad(pkas, 24)} ${pad(
-          ion.acceptabilityClass === null ? '–' : String(ion.acceptabilityClass),
-          5,
-        )} ${ion.molarMassGPerMol.toFixed(2).padStart(9)}`,
+        `${pad(name, 22)} ${pad(formatIonFormula(ion.formula, ion.charge), 16)} ${pad(charges(ion), 10)} ${pad(pkas, 24)} ${pad(cls, 5)} ${ion.molarMassGPerMol.toFixed(2).padStart(9)}\n`,
       );
     }
-    writeLine(
+    await writeText(
       io.stdout,
       `\n${ions.length} ion(s). (ref.) = reference ion for the thermochemistry models, not used in medicines. ` +
         'pKa: parent acid, or conjugate acid of the parent base. Class: Stahl & Wermuth 2002 (from memory). ' +
-        'Every value has its source in `saltsmith ions --json`.',
+        'Every value has its source in `saltsmith ions --json`.\n',
     );
     return 0;
   },
-};
+});

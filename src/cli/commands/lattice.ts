@@ -1,71 +1,98 @@
+import { defineCommand } from '../define-command';
 import { ChemInputError, estimateSaltThermo, findThermoIon, listThermoIonIds, stoichiometryFromCharges, type Estimate } from '@/chem';
-import { parseFlags, writeLine, type CliCommand } from '../io';
-
-const METHODS = ['auto', 'kapustinskii', 'born-mayer', 'born-lande', 'vbt'] as const;
+import { usageError } from '../args/cli-error';
+import { helpRequested } from '../args/help';
+import { parseFlags, refuseTogether } from '../args/parse-flags';
+import { LATTICE_CAUTION } from '../output/cautions';
+import { writeLine, type CliCommand } from '../io';
+import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from './eval/salt-kind';
 
 const fmt = (e: Estimate, digits = 0) => `${e.value.toFixed(digits)} ± ${e.uncertainty.toFixed(digits)} kJ/mol [${e.method}]`;
+
+const USAGE =
+  'saltsmith lattice --cation Na+ --anion Cl- [--method auto|kapustinskii|born-mayer|born-lande|vbt] [--structure rock-salt] [--volume nm3 | --density g/cm3] [--json]';
+
+/** The flags of `saltsmith lattice`. */
+export const LATTICE_FLAGS = {
+  help: { type: 'switch' },
+  json: { type: 'switch' },
+  cation: { type: 'string', maxLength: 80 },
+  anion: { type: 'string', maxLength: 80 },
+  method: { type: 'enum', values: LATTICE_METHODS },
+  structure: { type: 'enum', values: STRUCTURE_TYPES },
+  volume: { type: 'number', ...SIZE_RANGES.formulaUnitVolumeNm3, unit: 'nm³ per formula unit' },
+  density: { type: 'number', ...SIZE_RANGES.densityGPerCm3, unit: 'g/cm³' },
+} as const;
+
+/** Which size inputs each method reads; giving one it does not read is a contradiction. */
+const READS: Record<(typeof LATTICE_METHODS)[number], { volume: boolean; structure: boolean }> = {
+  auto: { volume: true, structure: true },
+  kapustinskii: { volume: false, structure: false },
+  vbt: { volume: true, structure: false },
+  'born-mayer': { volume: true, structure: true },
+  'born-lande': { volume: true, structure: true },
+};
 
 /**
  * `saltsmith lattice --cation Na+ --anion Cl- [--method …] [--structure rock-salt] [--volume nm³]
  * [--density g/cm³] [--json]`: one salt's lattice, hydration and solution enthalpies, for a person at a
  * terminal. Ions by bundled id (`sodium`) or symbol (`Na+`, `SO4 2-`); stoichiometry from the charges.
  */
-export const latticeCommand: CliCommand = {
+export const latticeCommand: CliCommand = defineCommand('lattice', {
   summary: 'lattice, hydration and solution enthalpies of one salt',
-  usage: 'saltsmith lattice --cation Na+ --anion Cl- [--method auto|kapustinskii|born-mayer|born-lande|vbt] [--structure rock-salt] [--volume nm3 | --density g/cm3] [--json]',
+  usage: USAGE,
   run: async (args, io) => {
-    const { flags } = parseFlags(args, ['json']);
-    const cat = typeof flags.cation === 'string' ? findThermoIon(flags.cation) : undefined;
-    const an = typeof flags.anion === 'string' ? findThermoIon(flags.anion) : undefined;
+    const flags = parseFlags(args, LATTICE_FLAGS);
+    if (helpRequested(flags, io, USAGE)) return 0;
+    if (flags.cation === undefined) throw usageError('--cation', 'is required', 'a bundled ion id or symbol, e.g. Na+');
+    if (flags.anion === undefined) throw usageError('--anion', 'is required', 'a bundled ion id or symbol, e.g. Cl-');
+    refuseTogether(flags, 'volume', 'density', 'give one measured size');
+    const method = flags.method ?? 'auto';
+    for (const f of ['volume', 'density', 'structure'] as const) {
+      const reads = f === 'structure' ? READS[method].structure : READS[method].volume;
+      if (flags[f] !== undefined && !reads) throw usageError(`--${f}`, `is not used by --method ${method}`);
+    }
+    const cat = findThermoIon(flags.cation);
+    const an = findThermoIon(flags.anion);
     if (!cat || !an) {
-      writeLine(io.stderr, `unknown ion: give --cation and --anion as an id or symbol, e.g. --cation Na+ --anion Cl-. Ids: ${listThermoIonIds().join(', ')}`);
-      return 2;
+      throw usageError(!cat ? '--cation' : '--anion', `unknown ion "${!cat ? flags.cation : flags.anion}"`, `an id or symbol, e.g. --cation Na+ --anion Cl-. Ids: ${listThermoIonIds().join(', ')}`);
     }
-    const method = typeof flags.method === 'string' ? flags.method : 'auto';
-    if (!(METHODS as readonly string[]).includes(method)) {
-      writeLine(io.stderr, `--method must be one of ${METHODS.join(', ')}`);
-      return 2;
-    }
-    const num = (name: string): number | undefined => {
-      const v = flags[name];
-      if (v === undefined) return undefined;
-      const n = Number(v);
-      if (v === true || !Number.isFinite(n)) throw new ChemInputError(name, `"${String(v)}" is not a number`, 'a finite number');
-      return n;
-    };
-    try {
-      if (cat.charge <= 0) throw new ChemInputError('cation', `${cat.label} is not a cation`, 'a positive ion');
-      if (an.charge >= 0) throw new ChemInputError('anion', `${an.label} is not an anion`, 'a negative ion');
-      const st = stoichiometryFromCharges(cat.charge, an.charge);
-      const volume = num('volume');
-      const density = num('density');
-      const r = estimateSaltThermo({
-        cation: cat,
-        anion: an,
-        cationsPerFormula: st.cations,
-        anionsPerFormula: st.anions,
-        method: method as (typeof METHODS)[number],
-        ...(typeof flags.structure === 'string' ? { structureType: flags.structure } : {}),
-        ...(volume !== undefined ? { formulaUnitVolumeNm3: volume } : {}),
-        ...(density !== undefined ? { densityGPerCm3: density } : {}),
-      });
-      if (flags.json) {
-        writeLine(io.stdout, JSON.stringify({ cation: cat.id, anion: an.id, cationsPerFormula: st.cations, anionsPerFormula: st.anions, ...r }));
-      } else {
-        const salt = `${cat.formula ?? cat.label}${st.cations > 1 ? st.cations : ''}${an.formula ?? an.label}${st.anions > 1 ? st.anions : ''}`;
-        writeLine(io.stdout, `${salt}  (${st.cations} ${cat.label} : ${st.anions} ${an.label})`);
-        writeLine(io.stdout, `  ΔH_L (dissociation, > 0)  ${fmt(r.latticeEnthalpyKJ)}`);
-        writeLine(io.stdout, `  ΔH_hyd ${cat.label.padEnd(18)} ${fmt(r.cationHydrationKJ)}`);
-        writeLine(io.stdout, `  ΔH_hyd ${an.label.padEnd(18)} ${fmt(r.anionHydrationKJ)}`);
-        writeLine(io.stdout, `  ΔH_sol (infinite dilution) ${fmt(r.solutionEnthalpyKJ)}`);
-        writeLine(io.stdout, `  method: ${r.methodReason}`);
-        writeLine(io.stdout, `  ${r.signConvention}`);
-        writeLine(io.stdout, '  Screening estimate only: it does not establish a salt form; experiments decide.');
+    if (cat.charge <= 0) throw new ChemInputError('cation', `${cat.label} is not a cation`, 'a positive ion');
+    if (an.charge >= 0) throw new ChemInputError('anion', `${an.label} is not an anion`, 'a negative ion');
+    const st = stoichiometryFromCharges(cat.charge, an.charge);
+    let molarMass: number | undefined;
+    if (flags.density !== undefined) {
+      if (cat.molarMassGPerMol === undefined || an.molarMassGPerMol === undefined) {
+        throw new ChemInputError('--density', 'the molar mass of this salt is not known', 'ions with a known formula');
       }
-      return 0;
-    } catch (err) {
-      writeLine(io.stderr, err instanceof ChemInputError ? err.message : String(err));
-      return err instanceof ChemInputError ? 1 : 2;
+      molarMass = st.cations * cat.molarMassGPerMol + st.anions * an.molarMassGPerMol;
     }
+    const r = estimateSaltThermo({
+      cation: cat,
+      anion: an,
+      cationsPerFormula: st.cations,
+      anionsPerFormula: st.anions,
+      method,
+      ...(flags.structure !== undefined ? { structureType: flags.structure } : {}),
+      ...(flags.volume !== undefined ? { formulaUnitVolumeNm3: flags.volume } : {}),
+      ...(flags.density !== undefined ? { densityGPerCm3: flags.density, molarMassGPerMol: molarMass } : {}),
+    });
+    if (flags.json) {
+      writeLine(io.stdout, JSON.stringify({ cation: cat.id, anion: an.id, cationsPerFormula: st.cations, anionsPerFormula: st.anions, ...r }));
+      return 0;
+    }
+    const salt = `${cat.formula ?? cat.label}${st.cations > 1 ? st.cations : ''}${an.formula ?? an.label}${st.anions > 1 ? st.anions : ''}`;
+    const lines = [
+      `${salt}  (${st.cations} ${cat.label} : ${st.anions} ${an.label})`,
+      `  ΔH_L (dissociation, > 0)  ${fmt(r.latticeEnthalpyKJ)}`,
+      `  ΔH_hyd ${cat.label.padEnd(18)} ${fmt(r.cationHydrationKJ)}`,
+      `  ΔH_hyd ${an.label.padEnd(18)} ${fmt(r.anionHydrationKJ)}`,
+      `  ΔH_sol (infinite dilution) ${fmt(r.solutionEnthalpyKJ)}`,
+      `  method: ${r.methodReason}`,
+      `  ${r.signConvention}`,
+      `  ${LATTICE_CAUTION}`,
+    ];
+    writeLine(io.stdout, lines.join('\n'));
+    return 0;
   },
-};
+});

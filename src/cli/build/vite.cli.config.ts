@@ -1,0 +1,37 @@
+import { builtinModules } from 'node:module';
+import { fileURLToPath, URL } from 'node:url';
+import { defineConfig } from 'vite';
+
+/**
+ * Build of the `saltsmith` command: the CLI and the core it calls, compiled once to plain JavaScript for
+ * Node (a Vite library build, Rollup-compatible output) so that a start does not transpile TypeScript.
+ * Output: dist-cli/ (git-ignored), written by `npm run build:cli`, which `prepare` runs after `npm ci`.
+ * Dependencies (zod, papaparse, openchemlib) stay in node_modules and are imported from there;
+ * openchemlib is imported only when a SMILES is parsed.
+ */
+const root = fileURLToPath(new URL('../../..', import.meta.url));
+
+export default defineConfig({
+  root,
+  publicDir: false,
+  logLevel: 'warn',
+  resolve: { alias: { '@': fileURLToPath(new URL('../..', import.meta.url)) } },
+  build: {
+    outDir: 'dist-cli',
+    emptyOutDir: true,
+    target: 'node20',
+    minify: false,
+    sourcemap: false,
+    copyPublicDir: false,
+    reportCompressedSize: false,
+    ssr: true,
+    rollupOptions: {
+      input: {
+        saltsmith: 'src/cli/entry.ts',
+        'batch-worker': 'src/cli/commands/screen/batch/batch-worker-entry.ts',
+      },
+      external: [/^node:/, ...builtinModules, 'zod', 'papaparse', 'openchemlib', /^zod\//, /^openchemlib\//],
+      output: { format: 'es', entryFileNames: '[name].js', chunkFileNames: '[name]-[hash].js' },
+    },
+  },
+});

@@ -1,0 +1,170 @@
+import { createReadStream } from 'node:fs';
+import type { Writable } from 'node:stream';
+import { stat } from 'node:fs/promises';
+import { availableParallelism } from 'node:os';
+import Papa from 'papaparse';
+import { usageError, valueError } from '../../../args/cli-error';
+import { openAtomicOutput } from '../../../output/atomic-write';
+import { SCREENING_CAUTIONS } from '../../../output/cautions';
+import { writeLine, writeText, type CliIo } from '../../../io';
+import { boundedLines, jsonNestingDepth, MAX_JSON_DEPTH } from '../../eval/bounded-lines';
+import { settingsFromBatchFlags } from './batch-settings';
+import type { ScreenFlags } from '../screen-flags';
+import { safeRow, KSP_NOTE } from '../screen-writers';
+import { checkHeader, csvCells, rowFromJson, specFromRow, type BatchColumn, type RawRow } from './batch-row';
+import { createProgressBar } from './progress-bar';
+import { createScreener } from './worker-pool';
+import { describeFailure } from '../../../define-command';
+import type { ScreenOneResult } from './screen-one';
+
+/**
+ * `saltsmith screen --batch file`: one compound per line (CSV with a header, or JSON Lines), screened
+ * with the same core and settings as a single `screen`, written as one long table — a row per compound
+ * and candidate, with the compound id and rank — in input order. Streamed: lines are read as the
+ * screening keeps up, at most a few compounds per thread are in flight, and output waits for a slow
+ * reader. Bad rows are reported by line number (stderr or --errors) and the rest go on; exit 1 if any
+ * row failed.
+ */
+
+type Sink = { write: (text: string) => Promise<void>; commit: () => Promise<void>; abort: () => Promise<void> };
+
+async function openSink(path: string | undefined, stream: Writable): Promise<Sink> {
+  if (path === undefined) {
+    return { write: (t) => writeText(stream, t), commit: async () => undefined, abort: async () => undefined };
+  }
+  return openAtomicOutput(path);
+}
+
+export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
+  const path = flags.batch!;
+  const format = /\.csv$/i.test(path) ? 'csv' : /\.(jsonl|ndjson)$/i.test(path) ? 'jsonl' : null;
+  if (!format) throw usageError('--batch', `cannot tell the format of "${path}" from its name`, 'a .csv or .jsonl file');
+  let size: number;
+  try {
+    size = (await stat(path)).size;
+  } catch (err) {
+    throw valueError('--batch', `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`);
+  }
+  const outFormat = flags.format ?? 'csv';
+  const settings = settingsFromBatchFlags(flags);
+  const jobs = flags.jobs ?? availableParallelism();
+  const screener = createScreener(jobs, settings);
+  const out = await openSink(flags.out, io.stdout);
+  const errors = flags.errors !== undefined ? await openAtomicOutput(flags.errors) : null;
+  const bar = io.stderrIsTty ? createProgressBar(io.stderr, size) : null;
+
+  let header: BatchColumn[] | null = format === 'jsonl' ? [] : null;
+  let columns: string[] | null = null;
+  let bytes = 0;
+  let compounds = 0;
+  let failed = 0;
+  let rowsOut = 0;
+  const seenIds = new Map<string, number>();
+  const pending = new Map<number, { lineNo: number; id: string; name: string; result: ScreenOneResult | null; error?: string }>();
+  let nextToWrite = 0;
+  let seq = 0;
+  let inFlight = 0;
+  const window = Math.max(4, screener.threads * 4);
+
+  const reportError = async (lineNo: number, id: string, message: string) => {
+    failed++;
+    const line = `line ${lineNo}${id ? ` (id ${id})` : ''}: ${message}`;
+    if (errors) await errors.write(line + '\n');
+    else writeLine(io.stderr, `saltsmith screen --batch: ${line}`);
+  };
+  const writeRows = async (id: string, name: string, r: Extract<ScreenOneResult, { ok: true }>) => {
+    const rows = r.rows.map((row) => ({ compound_id: id, compound_name: name, ...row }));
+    if (rows.length === 0) return;
+    if (outFormat === 'jsonl') {
+      await out.write(rows.map((row) => JSON.stringify(row)).join('\n') + '\n');
+    } else {
+      const first = columns === null;
+      columns ??= Object.keys(rows[0]!);
+      await out.write(Papa.unparse(rows.map(safeRow), { header: first, columns, newline: '\n' }) + '\n');
+    }
+    rowsOut += rows.length;
+  };
+  const flush = async () => {
+    for (let p = pending.get(nextToWrite); p && (p.result !== null || p.error !== undefined); p = pending.get(nextToWrite)) {
+      pending.delete(nextToWrite);
+      nextToWrite++;
+      if (p.error !== undefined) await reportError(p.lineNo, p.id, p.error);
+      else if (p.result && !p.result.ok) await reportError(p.lineNo, p.id, p.result.error);
+      else if (p.result && p.result.ok) await writeRows(p.id, p.name, p.result);
+    }
+  };
+  const collectOne = async () => {
+    const { seq: s, result } = await screener.next();
+    inFlight--;
+    compounds++;
+    pending.get(s)!.result = result;
+    await flush();
+  };
+
+  try {
+    for await (const line of boundedLines(createReadStream(path), undefined, (n) => (bytes += n))) {
+      bar?.update(bytes, compounds);
+      if ('tooLongBytes' in line) {
+        pending.set(seq++, { lineNo: line.lineNo, id: '', name: '', result: null, error: `line: ${line.tooLongBytes} bytes is longer than 1 MiB` });
+        await flush();
+        continue;
+      }
+      const text = line.text;
+      if (text.trim() === '' || (format === 'csv' && text.startsWith('#'))) continue;
+      if (header === null) {
+        header = checkHeader(csvCells(text).map((c) => c.trim()));
+        continue;
+      }
+      let raw: RawRow;
+      let id = '';
+      let spec;
+      try {
+        if (format === 'csv') {
+          const cells = csvCells(text);
+          if (cells.length !== header.length) throw valueError('line', `has ${cells.length} cells, the header ${header.length}`);
+          raw = Object.fromEntries(header.map((c, i) => [c, cells[i]]));
+        } else {
+          if (jsonNestingDepth(text) > MAX_JSON_DEPTH) throw valueError('line', `nested deeper than ${MAX_JSON_DEPTH} levels`);
+          let value: unknown;
+          try {
+            value = JSON.parse(text);
+          } catch {
+            throw valueError('line', 'is not valid JSON');
+          }
+          raw = rowFromJson(value);
+        }
+        const r = specFromRow(raw, flags['pka-origin'] ?? 'measured');
+        id = r.id;
+        spec = r.spec;
+        const earlier = seenIds.get(id);
+        if (earlier !== undefined) throw valueError('id', `"${id}" was already used on line ${earlier}`, 'a unique id per compound');
+        seenIds.set(id, line.lineNo);
+      } catch (err) {
+        pending.set(seq++, { lineNo: line.lineNo, id, name: '', result: null, error: describeFailure(err).message });
+        await flush();
+        continue;
+      }
+      pending.set(seq, { lineNo: line.lineNo, id, name: spec.name, result: null });
+      screener.submit(seq++, spec);
+      inFlight++;
+      while (inFlight >= window) await collectOne();
+    }
+    if (header === null) throw valueError('--batch', `${path} has no header line`, `a CSV header with the columns id, kind, pkas, smiles or formula, …`);
+    while (inFlight > 0) await collectOne();
+    await flush();
+    const closing = [...SCREENING_CAUTIONS, KSP_NOTE];
+    if (outFormat === 'jsonl') await out.write(JSON.stringify({ cautions: closing }) + '\n');
+    else await out.write(closing.map((c) => `# ${c}`).join('\n') + '\n');
+    await out.commit();
+    await errors?.commit();
+  } catch (err) {
+    await out.abort();
+    await errors?.abort();
+    throw err;
+  } finally {
+    await screener.close();
+  }
+  bar?.finish(bytes, compounds);
+  writeLine(io.stderr, `saltsmith screen --batch: ${seq - failed} of ${seq} compound(s) screened, ${rowsOut} row(s)${failed ? `, ${failed} failed${flags.errors ? ` (see ${flags.errors})` : ''}` : ''}`);
+  return failed > 0 ? 1 : 0;
+}

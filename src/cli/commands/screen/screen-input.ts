@@ -1,0 +1,153 @@
+import { z } from 'zod';
+import {
+  candidatesFromLibrary,
+  ChemInputError,
+  compoundSchema,
+  COUNTER_IONS,
+  drugIon,
+  getCounterIon,
+  parseFormula,
+  parseScreeningSettings,
+  parseStructure,
+  sameElements,
+  type CounterIon,
+  type PkaEntry,
+} from '@/chem';
+import { usageError } from '../../args/cli-error';
+import { refuseMultiComponent } from '../../args/ion-consistency';
+
+/**
+ * The input of one screen, whatever it came from (flags, an --input file, a row of a batch file): a
+ * plain compound description, checked here so that every route refuses the same things the same way.
+ */
+export interface CompoundSpec {
+  name: string;
+  smiles: string;
+  formula: string;
+  kind: 'base' | 'acid';
+  pKas: PkaEntry[];
+  /** Charge of the drug ion; default +1 for a base, −1 for an acid. */
+  ionCharge: number | null;
+  intrinsicSolubilityMgPerMl: number | null;
+  meltingPointC: number | null;
+  logP: number | null;
+  doseMg: number | null;
+  /** Counter-ion library ids; null screens the whole library. */
+  ions: string[] | null;
+}
+
+/** How a field is named to the user: a flag (`--s0`) or a batch column (`s0_mg_per_ml`). */
+export type FieldNames = Partial<Record<keyof CompoundSpec | 'settings', string>>;
+
+/** Flag names of the compound fields, for messages. */
+export const FLAG_NAMES: FieldNames = {
+  name: '--name', smiles: '--smiles', formula: '--formula', kind: '--kind', pKas: '--pka', ionCharge: '--charge',
+  intrinsicSolubilityMgPerMl: '--s0', meltingPointC: '--mp', logP: '--logp', doseMg: '--dose', ions: '--ions',
+};
+
+const pka = z.number().min(-10).max(20);
+
+/** The `--input compound.json` file: the compound's fields, an optional ion list and settings. */
+export const compoundFileSchema = z
+  .object({
+    _comment: z.string().optional(),
+    name: z.string().max(120).optional(),
+    smiles: z.string().max(2000).optional(),
+    formula: z.string().max(200).optional(),
+    kind: z.enum(['base', 'acid']).optional(),
+    pKas: z.array(z.union([pka, z.object({ value: pka, origin: z.enum(['measured', 'literature', 'predicted']) }).strict()])).min(1).max(4).optional(),
+    ionCharge: z.number().int().min(-3).max(3).optional(),
+    intrinsicSolubilityMgPerMl: z.number().positive().max(1e4).nullable().optional(),
+    meltingPointC: z.number().min(-100).max(600).nullable().optional(),
+    logP: z.number().min(-10).max(15).nullable().optional(),
+    doseMg: z.number().positive().max(1e5).nullable().optional(),
+    ions: z.array(z.string().min(1).max(80)).min(1).max(200).optional(),
+    settings: z.record(z.string(), z.unknown()).optional(),
+    // fields of an exported compound record that a screen does not read
+    logPOrigin: z.unknown().optional(),
+    densityGPerCm3: z.unknown().optional(),
+    cellVolumeA3: z.unknown().optional(),
+    formulaUnitsPerCell: z.unknown().optional(),
+    notes: z.unknown().optional(),
+  })
+  .strict();
+export type CompoundFile = z.infer<typeof compoundFileSchema>;
+
+const name = (names: FieldNames, f: keyof CompoundSpec | 'settings') => names[f] ?? f;
+
+/**
+ * Resolve counter-ion ids against the library: unknown ids, an id given twice and ions of the wrong
+ * kind for the drug (a cation for a base) are refused, naming the field.
+ */
+export function resolveCounterIons(ids: readonly string[] | null, kind: 'base' | 'acid', field: string): readonly CounterIon[] {
+  if (ids === null) return COUNTER_IONS;
+  const seen = new Set<string>();
+  const want = kind === 'base' ? 'anion' : 'cation';
+  return ids.map((raw) => {
+    const id = raw.trim().toLowerCase();
+    if (seen.has(id)) throw usageError(field, `"${id}" is given twice`, 'each counter-ion once');
+    seen.add(id);
+    const ion = getCounterIon(id);
+    if (!ion) throw new ChemInputError(field, `unknown counter-ion "${raw.slice(0, 80)}"`, 'library ids, e.g. chloride,mesylate (saltsmith ions lists them)');
+    if (ion.kind !== want) {
+      throw new ChemInputError(field, `${ion.name} is a counter-${ion.kind}; a ${kind} forms salts with counter-${want}s`, `counter-${want}s (saltsmith ions --kind ${want})`);
+    }
+    return ion;
+  });
+}
+
+/** What a screen needs, checked: the compound, its drug ion, the candidates and the settings. */
+export async function prepareScreen(
+  spec: CompoundSpec,
+  opts: { settings: Record<string, unknown>; keepCocrystalBand: boolean; names: FieldNames },
+) {
+  const n = opts.names;
+  if (spec.pKas.length === 0) throw new ChemInputError(name(n, 'pKas'), 'no pKa given', 'one to four pKa values, ascending');
+  const ionCharge = spec.ionCharge ?? (spec.kind === 'base' ? 1 : -1);
+  if (ionCharge === 0 || (spec.kind === 'base') !== ionCharge > 0) {
+    throw new ChemInputError(name(n, 'ionCharge'), `${ionCharge} does not fit a ${spec.kind} (a base forms a cation, an acid an anion)`, spec.kind === 'base' ? '1, 2 or 3' : '−1, −2 or −3');
+  }
+  let structure;
+  let formula = spec.formula.trim();
+  if (spec.smiles.trim() !== '') {
+    refuseMultiComponent(name(n, 'smiles'), spec.smiles.trim());
+    structure = await parseStructure(spec.smiles);
+    if (structure.netCharge !== 0) {
+      throw new ChemInputError(name(n, 'smiles'), `the structure carries a net charge of ${structure.netCharge}`, 'the neutral free form; the drug ion follows from --kind and --charge');
+    }
+    if (formula !== '' && !sameElements(parseFormula(formula, name(n, 'formula')).elements, structure.elements)) {
+      throw new ChemInputError(name(n, 'formula'), `${formula} disagrees with the structure's ${structure.formula}`, 'the formula of the structure, or no formula');
+    }
+    formula = structure.formula;
+  }
+  if (formula === '') throw new ChemInputError(name(n, 'smiles'), 'no structure given', 'a SMILES or a molecular formula of the neutral free form');
+  const compound = {
+    name: spec.name,
+    kind: spec.kind,
+    pKas: spec.pKas,
+    ionCharge,
+    intrinsicSolubilityMgPerMl: spec.intrinsicSolubilityMgPerMl,
+    meltingPointC: spec.meltingPointC,
+    logP: spec.logP,
+    doseMg: spec.doseMg,
+  };
+  const checked = compoundSchema.safeParse({ ...compound, smiles: spec.smiles, formula, logPOrigin: null, densityGPerCm3: null, notes: '' });
+  if (!checked.success) {
+    const issue = checked.error.issues[0]!;
+    const field = String(issue.path[0] ?? 'compound') as keyof CompoundSpec;
+    throw new ChemInputError(name(n, field), issue.message, 'see saltsmith screen --help');
+  }
+  const di = drugIon({ kind: spec.kind, ionCharge, formula }, structure);
+  const ions = resolveCounterIons(spec.ions, spec.kind, name(n, 'ions'));
+  const settings = parseScreeningSettings(opts.settings);
+  const skipped: { id: string; label: string; deltaPka: number }[] = [];
+  const rings = structure ? structure.rings : { aromatic: 0, nonAromatic: 0 };
+  const candidates = candidatesFromLibrary(
+    ions,
+    { kind: spec.kind, ionCharge, pKas: spec.pKas.map((p) => p.value), thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings } },
+    { skipped, keepCocrystalBand: opts.keepCocrystalBand, bands: settings.deltaPkaBands },
+  );
+  return { compound, drugIon: di, candidates, settings, skipped };
+}
+
+export type PreparedScreen = Awaited<ReturnType<typeof prepareScreen>>;

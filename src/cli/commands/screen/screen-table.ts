@@ -1,0 +1,55 @@
+import { rankCandidates, rankRobustness, screenCompound, type ScreenResult } from '@/chem';
+import type { PreparedScreen } from './screen-input';
+
+/** Round to `digits` significant digits for the table; null/undefined become an empty cell. */
+const sig = (x: number | null | undefined, digits = 3) => (x === null || x === undefined ? '' : Number(x.toPrecision(digits)));
+
+/** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
+export type ScreenTableRow = ReturnType<typeof screenTable>[number];
+
+/** The ranked table, one object per candidate, best first. */
+export function screenTable(res: ScreenResult, robust: Map<string, number>) {
+  const ranked = rankCandidates(res.rows, res.settings.weights);
+  const byId = new Map(res.rows.map((r) => [r.id, r]));
+  return ranked.map((k) => {
+    const row = byId.get(k.id)!;
+    const at = (pH: number) => row.doseNumbers.find((d) => Math.abs(d.pH - pH) < 1e-9);
+    return {
+      rank: k.rank ?? '',
+      candidate: row.label,
+      counter_ion: row.counterIonId,
+      stoichiometry_drug_to_ion: `${row.drugPerSalt}:${row.counterIonPerSalt}`,
+      score: k.score === null ? '' : Number(k.score.toFixed(3)),
+      p_top3: robust.has(row.id) ? Number(robust.get(row.id)!.toFixed(3)) : '',
+      delta_pka: sig(row.deltaPka),
+      salt_formation: row.saltFormation?.band ?? '',
+      active_fraction: sig(row.error ? null : row.activeFraction),
+      salt_mass_per_dose_mg: sig(row.saltMassPerDoseMg, 4),
+      log10_ksp: sig(row.log10Ksp?.value),
+      log10_ksp_sd: sig(row.log10Ksp?.uncertainty, 2),
+      ksp_origin: row.kspOrigin ?? '',
+      ph_max: sig(row.phMax),
+      solubility_ph_1_2_mg_per_ml: sig(at(1.2)?.solubilityMgPerMl),
+      dose_number_ph_1_2: sig(at(1.2)?.doseNumber),
+      dose_number_ph_6_8: sig(at(6.8)?.doseNumber),
+      gastric_dose_number: sig(row.gastric?.doseNumber),
+      worst_ph: row.worst?.pH ?? '',
+      worst_dose_number: sig(row.worst?.doseNumber),
+      ich_m9_class: row.solubilityClass ?? '',
+      disproportionation: row.disproportionation?.risk ?? '',
+      flags: row.flags.map((f) => f.text).join('; '),
+      reasons: row.reasons.map((r) => r.text).join('; '),
+      error: row.error ?? '',
+    };
+  });
+}
+
+/** Run a prepared screen with the seeded Monte Carlo for P(top 3); `top` keeps the N best rows. */
+export function runScreen(p: PreparedScreen, opts: { iterations: number; seed: number; top?: number | undefined }) {
+  const res = screenCompound({ compound: p.compound, drugIon: p.drugIon, candidates: p.candidates, settings: p.settings });
+  const robust = new Map(
+    rankRobustness(res.rows.map((r) => r.robustness), p.settings.weights, res.robustnessShared, { iterations: opts.iterations, seed: opts.seed }).map((r) => [r.id, r.pTop3]),
+  );
+  const table = screenTable(res, robust);
+  return { res, table: opts.top !== undefined ? table.slice(0, opts.top) : table };
+}
