@@ -18,11 +18,12 @@ import { fitLatticeCalibration } from '@/chem/thermo/calibration/calibration';
 import { rawLattice } from '@/chem/thermo/lattice';
 
 /**
- * The lattice calibration (src/chem/thermo/calibration). Reference data throughout: lattice enthalpies
- * of the bundled reference salts — Born–Haber cycle with ΔfH° from the NBS tables (Wagman et al. 1982,
- * J. Phys. Chem. Ref. Data 11 Suppl. 2) and CRC Handbook/NIST ionisation energies and electron
- * affinities for 36 halides; the solution cycle (NBS ΔfH°, Marcus 1987 hydration enthalpies) for 23 salts
- * of polyatomic ions — and ΔH_sol from the same NBS ΔfH° (fixtures/reference/solution-enthalpies.csv).
+ * The lattice calibration (src/chem/thermo/calibration). Reference data throughout: lattice
+ * enthalpies of the bundled reference salts — Born–Haber cycle with ΔfH° from the NBS tables
+ * (Wagman et al. 1982, J. Phys. Chem. Ref. Data 11 Suppl. 2) and CRC Handbook/NIST ionisation
+ * energies and electron affinities for 36 halides; the solution cycle (NBS ΔfH°, Marcus 1987
+ * hydration enthalpies) for 23 salts of polyatomic ions — and ΔH_sol from the same NBS ΔfH°
+ * (fixtures/reference/solution-enthalpies.csv).
  */
 
 /** Walk two values together; every number must agree to `tol`, everything else exactly. */
@@ -36,7 +37,9 @@ function expectSameNumbers(a: unknown, b: unknown, path = '$', tol = 1e-9): void
     const kb = Object.keys(b).sort();
     expect(ka, path).toEqual(kb);
     for (const k of ka) {
-      expectSameNumbers((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], `${path}.${k}`, tol);
+      const va = (a as Record<string, unknown>)[k];
+      const vb = (b as Record<string, unknown>)[k];
+      expectSameNumbers(va, vb, `${path}.${k}`, tol);
     }
     return;
   }
@@ -47,7 +50,7 @@ const na = getThermoIon('sodium')!;
 const cl = getThermoIon('chloride')!;
 
 describe('the shipped coefficients are what the fit script produces', () => {
-  it('recomputing the fit and the cross-validation gives calibration.data.ts (numbers to 1e-9)', () => {
+  it('recomputing the fit and the cross-validation gives calibration.data.ts (to 1e-9)', () => {
     expectSameNumbers(buildShippedCalibration(), SHIPPED_LATTICE_CALIBRATION);
   });
 
@@ -78,24 +81,33 @@ describe('the shipped coefficients are what the fit script produces', () => {
 });
 
 describe('the fit', () => {
-  it('the Kapustinskii factors are the median ratio reference/model, computed here independently', () => {
+  it('the Kapustinskii factors are the median ratio reference/model, computed here apart', () => {
     // Reference ΔH_L: Born–Haber (NBS/CRC) and solution cycle (NBS/Marcus), as above.
     for (const singly of [true, false]) {
-      const ratios = LATTICE_REFERENCE_SALTS.filter((s) => (s.p === 1 && s.q === 1 && getThermoIon(s.cation)!.charge === 1) === singly)
+      const isSingly = (s: (typeof LATTICE_REFERENCE_SALTS)[number]) =>
+        s.p === 1 && s.q === 1 && getThermoIon(s.cation)!.charge === 1;
+      const ratios = LATTICE_REFERENCE_SALTS.filter((s) => isSingly(s) === singly)
         .map((s) => {
-          const raw = rawLattice({ cation: getThermoIon(s.cation)!, anion: getThermoIon(s.anion)!, cationsPerFormula: s.p, anionsPerFormula: s.q }, 'kapustinskii');
-          return referenceLatticeEnthalpyKJ(s).value / raw.enthalpyKJ;
+          const req = {
+            cation: getThermoIon(s.cation)!,
+            anion: getThermoIon(s.anion)!,
+            cationsPerFormula: s.p,
+            anionsPerFormula: s.q,
+          };
+          return referenceLatticeEnthalpyKJ(s).value / rawLattice(req, 'kapustinskii').enthalpyKJ;
         })
         .sort((a, b) => a - b);
       const m = ratios.length / 2;
-      const median = ratios.length % 2 ? ratios[Math.floor(m)]! : (ratios[m - 1]! + ratios[m]!) / 2;
-      const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', singly ? 'singly-charged' : 'multiply-charged')!;
+      const median =
+        ratios.length % 2 ? ratios[Math.floor(m)]! : (ratios[m - 1]! + ratios[m]!) / 2;
+      const cls = singly ? 'singly-charged' : 'multiply-charged';
+      const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', cls)!;
       expect(f.n).toBe(ratios.length);
       expect(f.factor).toBeCloseTo(median, 12);
     }
   });
 
-  it('the raw Kapustinskii bias it removes is the measured one: about −5.6 % on salts of singly charged ions', () => {
+  it('it removes the measured raw Kapustinskii bias (about −5.6 % on 1:1 salts)', () => {
     const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', 'singly-charged')!;
     expect(f.raw.biasPercent).toBeLessThan(-4);
     // after calibration, leave-one-salt-out, the bias is gone and the RMS error smaller
@@ -103,7 +115,7 @@ describe('the fit', () => {
     expect(f.crossValidated.rmsPercent).toBeLessThan(f.raw.rmsPercent);
   });
 
-  it('leave-one-salt-out really refits: dropping a salt moves the factor, and a class too small gets none', () => {
+  it('leave-one-salt-out refits: dropping a salt moves the factor; a small class gets none', () => {
     const rows = latticeCalibrationRows();
     const full = fitLatticeCalibration(rows);
     const without = fitLatticeCalibration(rows.filter((r) => r.id !== 'LiF'));
@@ -111,7 +123,10 @@ describe('the fit', () => {
     expect(k(without).n).toBe(k(full).n - 1);
     expect(k(without).factor).not.toBe(k(full).factor);
     // Born–Mayer has only the three fluorites (CaF₂, SrF₂, BaF₂) with a doubly charged ion
-    expect(rows.filter((r) => r.variant === 'born-mayer' && r.chargeClass === 'multiply-charged').length).toBeLessThan(CALIBRATION_MIN_SALTS);
+    const bm = rows.filter(
+      (r) => r.variant === 'born-mayer' && r.chargeClass === 'multiply-charged',
+    );
+    expect(bm.length).toBeLessThan(CALIBRATION_MIN_SALTS);
     expect(findLatticeFactor(full, 'born-mayer', 'multiply-charged')).toBeUndefined();
   });
 });
@@ -119,7 +134,7 @@ describe('the fit', () => {
 describe('estimateSaltThermo applies the calibration and keeps the raw figure visible', () => {
   const req = { cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1 };
 
-  it('NaCl: calibrated = factor × raw, the raw figure and the factor are in the result and the notes', () => {
+  it('NaCl: calibrated = factor × raw; raw figure and factor in the result and notes', () => {
     const cal = estimateSaltThermo(req);
     const raw = estimateSaltThermo({ ...req, calibrate: false });
     const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', 'singly-charged')!;
@@ -133,15 +148,16 @@ describe('estimateSaltThermo applies the calibration and keeps the raw figure vi
   });
 
   it('NaCl: the calibrated ΔH_L is nearer the Born–Haber value and its band covers it', () => {
-    // Born–Haber ΔH_L(NaCl) from the bundled cycle data (NBS ΔfH°, CRC/NIST IE and EA), ≈ 787 kJ/mol.
-    const ref = referenceLatticeEnthalpyKJ(LATTICE_REFERENCE_SALTS.find((s) => s.formula === 'NaCl')!).value;
+    // Born–Haber ΔH_L(NaCl) from the bundled cycle data (NBS ΔfH°, CRC/NIST IE, EA), ≈ 787 kJ/mol.
+    const nacl = LATTICE_REFERENCE_SALTS.find((s) => s.formula === 'NaCl')!;
+    const ref = referenceLatticeEnthalpyKJ(nacl).value;
     const cal = estimateSaltThermo(req).latticeEnthalpyKJ;
     const raw = estimateSaltThermo({ ...req, calibrate: false }).latticeEnthalpyKJ;
     expect(Math.abs(cal.value - ref)).toBeLessThan(Math.abs(raw.value - ref));
     expect(Math.abs(cal.value - ref)).toBeLessThanOrEqual(2 * cal.uncertainty);
   });
 
-  it('NaCl: the calibrated ΔH_sol band covers the NBS value +3.87 kJ/mol and is narrower than the raw one', () => {
+  it('NaCl: the calibrated ΔH_sol band covers the NBS +3.87 kJ/mol, narrower than raw', () => {
     // Wagman et al. 1982: −240.12 − 167.16 + 411.15 = 3.87 kJ/mol.
     const cal = estimateSaltThermo(req).solutionEnthalpyKJ;
     const raw = estimateSaltThermo({ ...req, calibrate: false }).solutionEnthalpyKJ;
@@ -152,28 +168,42 @@ describe('estimateSaltThermo applies the calibration and keeps the raw figure vi
     expect(cal.notes!.join(' ')).toMatch(/uncalibrated ΔH_sol would be/);
   });
 
-  it('CaF₂ by Born–Mayer (too few calibration salts of its class) keeps the raw model and says so', () => {
+  it('CaF₂ by Born–Mayer (too few salts of its class) keeps the raw model and says so', () => {
     // Cell edge 5.463 Å (Wyckoff, as bundled); reference as above.
-    const r = estimateSaltThermo({ cation: getThermoIon('calcium')!, anion: getThermoIon('fluoride')!, cationsPerFormula: 1, anionsPerFormula: 2, method: 'born-mayer', structureType: 'fluorite', formulaUnitVolumeNm3: 5.463 ** 3 / 4 / 1000 });
+    const r = estimateSaltThermo({
+      cation: getThermoIon('calcium')!,
+      anion: getThermoIon('fluoride')!,
+      cationsPerFormula: 1,
+      anionsPerFormula: 2,
+      method: 'born-mayer',
+      structureType: 'fluorite',
+      formulaUnitVolumeNm3: 5.463 ** 3 / 4 / 1000,
+    });
     expect(r.latticeCalibration.applied).toBe(false);
     expect(r.latticeEnthalpyKJ.value).toBe(r.rawLatticeEnthalpyKJ.value);
     expect(r.latticeEnthalpyKJ.notes!.join(' ')).toMatch(/not calibrated: fewer than/);
   });
 
-  it('an organic salt (sodium acetate sized from its formula) is calibrated and still covers the NBS ΔH_sol', async () => {
+  it('sodium acetate (organic ion sized from its formula) is calibrated, covers NBS', async () => {
     // Wagman et al. 1982: ΔH_sol(NaCH₃COO) = −17.3 kJ/mol.
     const { organicIonFromFormula } = await import('@/chem');
     const acetate = organicIonFromFormula('C2H3O2', -1, { aromatic: 0, nonAromatic: 0 });
-    const r = estimateSaltThermo({ cation: na, anion: acetate, cationsPerFormula: 1, anionsPerFormula: 1 });
+    const r = estimateSaltThermo({
+      cation: na,
+      anion: acetate,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+    });
     expect(r.latticeCalibration.applied).toBe(true);
-    expect(Math.abs(r.solutionEnthalpyKJ.value - -17.3)).toBeLessThanOrEqual(2 * r.solutionEnthalpyKJ.uncertainty);
+    const sol = r.solutionEnthalpyKJ;
+    expect(Math.abs(sol.value - -17.3)).toBeLessThanOrEqual(2 * sol.uncertainty);
   });
 });
 
 describe('leave-one-salt-out ΔH_sol over the NBS reference salts (Wagman et al. 1982)', () => {
   const cv = solutionCrossValidation();
 
-  it('predicts every salt with a fit that did not see it, and differs from the in-sample figure', () => {
+  it('predicts every salt with a fit that did not see it; differs from in-sample', () => {
     expect(cv.rows.length).toBe(60);
     // in-sample: the shipped calibration applied to salts it was fitted on
     let inSampleAbs = 0;
@@ -181,7 +211,12 @@ describe('leave-one-salt-out ΔH_sol over the NBS reference salts (Wagman et al.
     for (const r of cv.rows) {
       const s = LATTICE_REFERENCE_SALTS.find((x) => x.formula === r.formula);
       const ions = s ?? { cation: 'zinc', anion: 'chloride', p: 1, q: 2 };
-      const inSample = estimateSaltThermo({ cation: getThermoIon(ions.cation)!, anion: getThermoIon(ions.anion)!, cationsPerFormula: ions.p, anionsPerFormula: ions.q });
+      const inSample = estimateSaltThermo({
+        cation: getThermoIon(ions.cation)!,
+        anion: getThermoIon(ions.anion)!,
+        cationsPerFormula: ions.p,
+        anionsPerFormula: ions.q,
+      });
       inSampleAbs += Math.abs(inSample.solutionEnthalpyKJ.value - r.referenceKJ);
       cvAbs += Math.abs(r.calibrated.valueKJ - r.referenceKJ);
     }

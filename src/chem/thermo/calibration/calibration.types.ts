@@ -1,19 +1,25 @@
 /**
- * Shapes of the lattice-enthalpy calibration (see calibration.ts for the form and why it was chosen).
- * Units: kJ/mol for enthalpies, % for relative errors, fractions for shares.
+ * Shapes of the lattice-enthalpy calibration (see calibration.ts for the form and why it was
+ * chosen). Units: kJ/mol for enthalpies, % for relative errors, fractions for shares.
  */
 
 /** Salts of singly charged ions only (1:1) versus salts with at least one ion of |z| ≥ 2. */
 export type ChargeClass = 'singly-charged' | 'multiply-charged';
 
 /**
- * The kind of salt used to pick a measured uncertainty, as in the uncalibrated engine: both ions monatomic
- * with tabulated sizes ('halides'), or at least one polyatomic or estimated-size ion ('polyatomic').
+ * The kind of salt used to pick a measured uncertainty, as in the uncalibrated engine: both ions
+ * monatomic with tabulated sizes ('halides'), or at least one polyatomic or estimated-size ion
+ * ('polyatomic').
  */
 export type ShapeGroup = 'halides' | 'polyatomic';
 
-/** A lattice method together with where its volume came from (VBT from a cell or density vs ion volumes). */
-export type CalibratedVariant = 'kapustinskii' | 'vbt' | 'vbt-ion-volumes' | 'born-mayer' | 'born-lande';
+/** A lattice method with where its volume came from (VBT: cell or density vs ion volumes). */
+export type CalibratedVariant =
+  | 'kapustinskii'
+  | 'vbt'
+  | 'vbt-ion-volumes'
+  | 'born-mayer'
+  | 'born-lande';
 
 /** Leave-one-salt-out error of one variant and charge class on the lattice reference salts. */
 export interface LatticeErrorFigures {
@@ -65,6 +71,6 @@ export interface ShippedLatticeCalibration extends LatticeCalibration {
   form: string;
   fittedOn: string;
   provenance: string;
-  /** ΔH_sol over the solution reference salts: raw engine vs calibrated engine (leave-one-salt-out). */
+  /** ΔH_sol over the solution reference salts: raw vs calibrated engine (leave-one-salt-out). */
   solution: { raw: SolutionErrorFigures; calibratedCrossValidated: SolutionErrorFigures };
 }
