@@ -1,15 +1,12 @@
 import { useEffect, useRef } from 'react';
+import { SCREENING_CAUTIONS } from '@/chem';
 
 /**
- * The cautions every ranking is read with (science brief §6). Shown in full in a dialog reachable
- * from every screen, and as a one-line reminder beside rankings and exports.
+ * The cautions every ranking is read with: the core's sentences (SCREENING_CAUTIONS in
+ * src/chem/report/cautions.ts), shared with the CSV export and the command line. Shown in full in a
+ * dialog reachable from every screen, and as a one-line reminder beside rankings and exports.
  */
-export const CAUTION_LINES = [
-  'Estimates here screen candidates; they do not establish a salt form.',
-  'Crystallinity, polymorphs, hydrates, chemical stability, hygroscopicity and toxicology need experiments.',
-  'Counter-ion acceptability follows the regulatory guidance in force for the product.',
-  'Strong acids and bases used in salt formation are corrosive: handle them under your lab’s safety rules and the substance’s safety data sheet.',
-];
+export const CAUTION_LINES: readonly string[] = SCREENING_CAUTIONS;
 
 export function CautionNote() {
   return (

@@ -14,3 +14,7 @@ export const SCREENING_CAUTIONS = [
 /** The one-line reminder printed beside a ranking or an export. */
 export const SCREENING_CAUTION_SUMMARY =
   'Screening estimates only: they do not establish a salt form. Experiments, the regulatory guidance in force and your lab’s safety rules decide.';
+
+/** Closes a single estimate (one lattice or salt answer) where a ranking's full list would be too much. */
+export const SINGLE_ESTIMATE_CAUTION =
+  'Screening estimate: it does not establish a salt form. Experiments, the regulatory guidance in force and the lab’s safety rules decide.';

@@ -1,2 +1,3 @@
 /** What the core says alongside its numbers when a user reads or exports them: cautions, safe CSV cells. */
 export * from './cautions';
+export * from './csv-cell-guard';

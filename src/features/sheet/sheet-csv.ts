@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import { CAUTION_LINES } from '@/components/Cautions';
-import { neutralizeCsvText } from './csv-safety';
+import { neutralizeCsvText } from '@/chem';
 import type { SheetColumn, SheetModel } from './sheet.types';
 
 /** Rounds to 6 significant digits so float noise (0.30000000000000004) never reaches a file. */
