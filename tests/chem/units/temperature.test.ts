@@ -11,6 +11,7 @@ describe('temperature units', () => {
     expect(celsiusToKelvin(37)).toBeCloseTo(310.15, 12);
   });
   it('round-trips', () => {
-    for (const t of [-40, 0, 20.5, 37, 100]) expect(kelvinToCelsius(celsiusToKelvin(t))).toBeCloseTo(t, 12);
+    for (const t of [-40, 0, 20.5, 37, 100])
+      expect(kelvinToCelsius(celsiusToKelvin(t))).toBeCloseTo(t, 12);
   });
 });
