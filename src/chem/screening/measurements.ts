@@ -8,10 +8,17 @@ import { vantHoffFit, type VanTHoffFit } from './van-t-hoff';
  *
  * Units: solubility 'mg/mL' (mass of the salt per mL, the usual way a salt's solubility is
  * reported), 'mg/mL free form' (free-form equivalents) or 'mol/L' (formula units); melting point
- * '°C'; solution enthalpy 'kJ/mol' (per formula unit); mass gain '%'; crystallinity '%'.
+ * '°C'; enthalpy of fusion 'kJ/mol' (DSC, per formula unit); solution enthalpy 'kJ/mol' (per formula unit); mass gain '%'; crystallinity '%'.
  * `temperatureK` in K; `ph` the equilibrium pH when measured (null: unknown).
  */
-export type MeasurementKind = 'solubility' | 'melting-point' | 'solution-enthalpy' | 'mass-gain-80rh' | 'crystallinity' | 'note';
+export type MeasurementKind =
+  | 'solubility'
+  | 'melting-point'
+  | 'fusion-enthalpy'
+  | 'solution-enthalpy'
+  | 'mass-gain-80rh'
+  | 'crystallinity'
+  | 'note';
 
 export interface MeasurementInput {
   kind: MeasurementKind;
@@ -39,6 +46,8 @@ export interface InterpretedMeasurements {
   vantHoff: VanTHoffFit | null;
   vantHoffNote: string | null;
   meltingPointC: number | null;
+  /** Enthalpy of fusion of the salt from DSC, kJ/mol per formula unit. */
+  fusionEnthalpyKJPerMol: number | null;
   /** Calorimetric ΔH_sol per formula unit, kJ/mol. */
   solutionEnthalpyKJ: number | null;
   massGainPercent: number | null;
@@ -77,6 +86,7 @@ export function interpretMeasurements(
     vantHoff: null,
     vantHoffNote: null,
     meltingPointC: null,
+    fusionEnthalpyKJPerMol: null,
     solutionEnthalpyKJ: null,
     massGainPercent: null,
     hygroscopicity: null,
@@ -96,6 +106,9 @@ export function interpretMeasurements(
         break;
       case 'melting-point':
         if (m.value !== null) out.meltingPointC = m.value;
+        break;
+      case 'fusion-enthalpy':
+        if (m.value !== null) out.fusionEnthalpyKJPerMol = m.value;
         break;
       case 'solution-enthalpy':
         if (m.value !== null) out.solutionEnthalpyKJ = m.value;

@@ -1,7 +1,7 @@
 import { phSolubilityProfile, type PhProfile } from '../ph-profile';
 import { doseNumberAt, ichM9Phs, solubilityClassOf, worstDoseNumber } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
-import { poorlySolubleFlag } from './screen-reasons';
+import { freeFormPoorlySolubleFlag } from './screen-reasons';
 import type { FreeFormResult, ScreenFlag } from './screen.types';
 
 /** The free form on its own: its pH–solubility profile, dose numbers across ICH M9 pH and its flag. */
@@ -11,7 +11,7 @@ export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; pr
   const worst = worstDoseNumber(doses);
   const flags: ScreenFlag[] = [];
   if (worst.doseNumber !== null && worst.doseNumber > 1) {
-    flags.push(poorlySolubleFlag({ ...worst, doseNumber: worst.doseNumber }));
+    flags.push(freeFormPoorlySolubleFlag({ ...worst, doseNumber: worst.doseNumber }));
   }
   const result: FreeFormResult = {
     log10IntrinsicM: ctx.log10IntrinsicM,

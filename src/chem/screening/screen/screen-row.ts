@@ -93,8 +93,9 @@ export function candidateRow(
   const doses = ichM9Phs(profile).map((pH) => doseNumberAt(ctx, salt, pH));
   const worst = worstDoseNumber(doses);
   reasons.push(worstSolubilityReason(name, worst));
-  if (worst.doseNumber !== null && worst.doseNumber > 1) {
-    flags.push(poorlySolubleFlag({ ...worst, doseNumber: worst.doseNumber }));
+  if (ctx.doseMg !== null) {
+    const d0Water = doseNumber(ctx.doseMg, ksp.saltWater.mgPerMlAsFreeForm);
+    if (d0Water > 1) flags.push(poorlySolubleFlag(ksp.saltWater, d0Water));
   }
   const saltFlag = saltBranchFlag(ctx, profile.points);
   if (saltFlag) flags.push(saltFlag);
@@ -136,6 +137,7 @@ export function candidateRow(
     saltMolarMassGPerMol: p.saltMolarMassGPerMol,
     activeFraction: f,
     saltMassPerDoseMg: massPerDose,
+    saltWaterSolubility: ksp.saltWater,
     log10Ksp: ksp.log10Ksp,
     kspOrigin: ksp.kspOrigin,
     phMax: profile.phMax,
@@ -193,6 +195,7 @@ export function errorRow(cand: ScreeningCandidate, label: string, error: string)
     saltMolarMassGPerMol: 0,
     activeFraction: 0,
     saltMassPerDoseMg: null,
+    saltWaterSolubility: null,
     log10Ksp: null,
     kspOrigin: null,
     phMax: null,

@@ -5,6 +5,8 @@ import type { InterpretedMeasurements, MeasurementInput } from '../measurements'
 import type { RobustnessRow, RobustnessShared } from '../rank-robustness';
 import type { CriterionInputs } from '../ranking';
 import type { ScreeningSettings } from '../settings';
+import type { CounterIonDescriptors } from '../salt-solubility/counter-ion-descriptors';
+import type { SolubilityDriver } from '../salt-solubility/estimate-salt-solubility';
 
 /**
  * The shapes the screen reads and returns. Inputs are structural subsets of the library's CounterIon,
@@ -57,6 +59,11 @@ export interface ScreeningCandidate {
   measurements?: readonly MeasurementInput[];
   /** ΔH_sol per formula unit from the thermochemistry engine (thermo-link.ts), if computed. */
   solutionEnthalpyKJ?: Estimate | null;
+  /**
+   * Computed descriptors of the counter-ion's parent (salt-solubility model). Bundled ions need none:
+   * the screen looks theirs up; an in-house ion without them falls back to the anchor estimate.
+   */
+  counterIonDescriptors?: CounterIonDescriptors | null;
 }
 
 export interface ScreenCompoundInput {
@@ -108,6 +115,25 @@ export interface MediumResult {
   convertsTo: string | null;
 }
 
+/**
+ * The salt's own solubility in pure water at the screening temperature — the number K_sp, pH_max and
+ * every dose number of an unmeasured salt rest on.
+ */
+export interface SaltWaterSolubility {
+  /** log₁₀ of the drug's molar solubility from the salt, mol/L of drug; 1σ in decades. */
+  log10DrugM: Estimate;
+  /** The same as mg/mL of salt (with its water of crystallisation) and as mg/mL of free form. */
+  mgPerMlAsSalt: number;
+  mgPerMlAsFreeForm: number;
+  /**
+   * Where it comes from: the calibrated model, the model with the bench's fusion data, the lab's
+   * measurement, or the common-practice anchor (10² × S₀) when the counter-ion has no descriptors.
+   */
+  origin: 'model' | 'model+fusion' | 'measured' | 'anchor';
+  /** Counter-ion properties that moved the model's estimate, largest first (empty when measured). */
+  drivers: SolubilityDriver[];
+}
+
 export interface ScreenRow {
   id: string;
   label: string;
@@ -123,6 +149,8 @@ export interface ScreenRow {
   saltMolarMassGPerMol: number;
   activeFraction: number;
   saltMassPerDoseMg: number | null;
+  /** The salt's own solubility in pure water (null for a row that could not be screened). */
+  saltWaterSolubility: SaltWaterSolubility | null;
   /** log₁₀ K_sp with uncertainty (decades); method says measured or estimate. */
   log10Ksp: Estimate | null;
   kspOrigin: 'measured' | 'estimated' | null;

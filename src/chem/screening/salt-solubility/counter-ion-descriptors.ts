@@ -1,0 +1,74 @@
+import type * as OpenChemLib from 'openchemlib';
+import { ChemInputError } from '../../result';
+
+/**
+ * Computed descriptors of a counter-ion, read from the structure of its neutral parent acid or base
+ * (what the salt is made from) by openchemlib's property calculators: the octanol/water log P
+ * (openchemlib's atom-increment method), the topological polar surface area (Ertl, Rohde & Selzer
+ * 2000, J. Med. Chem. 43, 3714), hydrogen-bond donor and acceptor counts, aromatic rings and heavy
+ * atoms. They carry the counter-ion's hydrophobicity and hydrogen bonding into the salt-solubility
+ * model. Where the parent has no carbon (HCl, H₂SO₄, NaOH) the organic descriptors are still computed
+ * but the `inorganic` flag lets the model treat the small inorganic ions as their own group.
+ */
+export interface CounterIonDescriptors {
+  /** log P of the parent's largest fragment, clipped to [−4, 6] (zwitterion drawings give extreme values). */
+  logPParent: number;
+  /** Topological polar surface area of the parent, Å². */
+  polarSurfaceAreaA2: number;
+  hBondDonors: number;
+  hBondAcceptors: number;
+  aromaticRings: number;
+  /** Non-hydrogen atoms of the parent. */
+  heavyAtoms: number;
+  /** True when the parent contains no carbon (halides, sulfate, phosphate, nitrate, metal hydroxides). */
+  inorganic: boolean;
+}
+
+/** Range the log P descriptor is clipped to, log units (our choice: the span of drug-salt counter-ions). */
+export const LOGP_PARENT_CLIP: readonly [number, number] = [-4, 6];
+
+type Ocl = typeof OpenChemLib;
+
+/**
+ * The parent with its hydroxide components removed: a metal or quaternary hydroxide (NaOH,
+ * Ca(OH)₂, choline hydroxide) enters the salt as its cation only, the OH⁻ leaving as water, so
+ * "[Na+].[OH-]" and "[Na+]" describe the same counter-ion.
+ */
+export function withoutHydroxide(parentSmiles: string): string {
+  const parts = parentSmiles.trim().split('.');
+  const kept = parts.filter((p) => p !== '[OH-]' && p !== '[O-][H]');
+  return kept.length ? kept.join('.') : parentSmiles.trim();
+}
+
+/**
+ * Descriptors of a parent acid or base from its SMILES. `ocl` is the openchemlib module, passed in so
+ * that the core never loads it statically (the app and the CLI load it on demand).
+ * @throws ChemInputError (field `smiles`) for an unparsable SMILES.
+ */
+export function counterIonDescriptorsFromSmiles(ocl: Ocl, parentSmiles: string): CounterIonDescriptors {
+  let mol: InstanceType<Ocl['Molecule']>;
+  try {
+    mol = ocl.Molecule.fromSmiles(withoutHydroxide(parentSmiles));
+  } catch (err) {
+    throw new ChemInputError('smiles', `cannot read the counter-ion's parent SMILES (${err instanceof Error ? err.message : String(err)})`, 'an OpenSMILES string of the neutral parent acid or base');
+  }
+  const formula = mol.getMolecularFormula().formula;
+  const inorganic = !/C(?![a-z])/.test(formula);
+  // Largest fragment by heavy atoms: the organic part of "C[N+](C)(C)C.[OH-]" style parents.
+  const fragments = mol.getFragments();
+  let largest = fragments[0] ?? mol;
+  if (fragments.length <= 1) largest = mol;
+  for (const f of fragments) if (f.getAllAtoms() > largest.getAllAtoms()) largest = f;
+  const props = new ocl.MoleculeProperties(largest);
+  const wholeProps = new ocl.MoleculeProperties(mol);
+  const [lo, hi] = LOGP_PARENT_CLIP;
+  return {
+    logPParent: Math.min(hi, Math.max(lo, props.logP)),
+    polarSurfaceAreaA2: wholeProps.polarSurfaceArea,
+    hBondDonors: wholeProps.donorCount,
+    hBondAcceptors: wholeProps.acceptorCount,
+    aromaticRings: mol.getAromaticRingCount(),
+    heavyAtoms: mol.getAtoms(),
+    inorganic,
+  };
+}
