@@ -46,6 +46,14 @@ module.exports = {
       to: { path: '^src/(features|components|stores)/' },
     },
     {
+      name: 'core-through-index',
+      severity: 'error',
+      comment:
+        'Layers outside src/chem import the core only through @/chem (src/chem/index.ts), so the core can move its files without breaking them.',
+      from: { path: '^src/', pathNot: '^src/chem/' },
+      to: { path: '^src/chem/', pathNot: '^src/chem/index\\.ts$' },
+    },
+    {
       name: 'no-circular',
       severity: 'error',
       from: {},

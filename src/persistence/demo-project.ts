@@ -1,4 +1,4 @@
-import type { Compound } from '@/chem/compound/compound.schema';
+import type { Compound } from '@/chem';
 
 /**
  * The demo scenario. Everything here is INVENTED for demonstration: "Demorazine" is a fictional weakly

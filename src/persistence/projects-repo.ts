@@ -1,4 +1,4 @@
-import { compoundSchema, type Compound } from '@/chem/compound/compound.schema';
+import { compoundSchema, type Compound } from '@/chem';
 import { getCounterIon } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';

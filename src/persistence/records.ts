@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { compoundSchema } from '@/chem/compound/compound.schema';
+import { compoundSchema, counterIonEditSchema, counterIonSchema } from '@/chem';
 
 /**
  * Stored record shapes. Every record carries `schemaVersion` so that a later version of Saltsmith
@@ -7,6 +7,11 @@ import { compoundSchema } from '@/chem/compound/compound.schema';
  * come in from a file.
  */
 export const RECORD_SCHEMA_VERSION = 1;
+
+/** A record id; bounded so that a hostile project file cannot carry megabyte-long ids. */
+const recordId = z.string().min(1).max(200);
+/** An ISO 8601 date-time as written by `new Date().toISOString()`. */
+const isoDate = z.string().min(1).max(40);
 
 export const projectSettingsSchema = z.object({
   /**
@@ -25,11 +30,11 @@ export const projectSettingsSchema = z.object({
 export type ProjectSettings = z.infer<typeof projectSettingsSchema>;
 
 export const projectRecordSchema = z.object({
-  id: z.string().min(1),
+  id: recordId,
   schemaVersion: z.number().int(),
-  name: z.string().min(1).max(120),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  name: z.string().trim().min(1).max(120),
+  createdAt: isoDate,
+  updatedAt: isoDate,
   archived: z.boolean(),
   /** True for the bundled fictional demo project. */
   isDemo: z.boolean(),
@@ -39,17 +44,17 @@ export const projectRecordSchema = z.object({
 export type ProjectRecord = z.infer<typeof projectRecordSchema>;
 
 export const candidateRecordSchema = z.object({
-  id: z.string().min(1),
+  id: recordId,
   schemaVersion: z.number().int(),
-  projectId: z.string().min(1),
+  projectId: recordId,
   /** Library id of the counter-ion (bundled or custom). */
-  ionId: z.string().min(1),
+  ionId: recordId,
   /** Drug ions per counter-ion in the salt, e.g. 2:1 for a hemisulfate is drug 2, counter-ion 1. */
   drugPerSalt: z.number().int().min(1).max(4),
   counterIonPerSalt: z.number().int().min(1).max(4),
   /** Water molecules per formula unit when a hydrate is recorded. */
   hydrateWater: z.number().min(0).max(20),
-  addedAt: z.string(),
+  addedAt: isoDate,
   order: z.number(),
 });
 export type CandidateRecord = z.infer<typeof candidateRecordSchema>;
@@ -65,10 +70,10 @@ export const measurementKindSchema = z.enum([
 export type MeasurementKind = z.infer<typeof measurementKindSchema>;
 
 export const measurementRecordSchema = z.object({
-  id: z.string().min(1),
+  id: recordId,
   schemaVersion: z.number().int(),
-  projectId: z.string().min(1),
-  candidateId: z.string().min(1),
+  projectId: recordId,
+  candidateId: recordId,
   kind: measurementKindSchema,
   /** The measured number in the unit named by `unit` (mg/mL, °C, kJ/mol, %), null for text-only kinds. */
   value: z.number().finite().nullable(),
@@ -78,21 +83,46 @@ export const measurementRecordSchema = z.object({
   temperatureK: z.number().positive().max(600).nullable(),
   medium: z.string().max(200),
   text: z.string().max(5000),
-  recordedAt: z.string(),
+  recordedAt: isoDate,
 });
 export type MeasurementRecord = z.infer<typeof measurementRecordSchema>;
 
-export const customIonRecordSchema = z.object({
-  id: z.string().min(1),
+/** The fields of a stored custom ion (without the payload check; see {@link customIonRecordSchema}). */
+export const customIonRecordFields = z.object({
+  id: recordId,
   schemaVersion: z.number().int(),
   /** Null for an ion available to every project; a project id for a per-project override. */
-  projectId: z.string().nullable(),
+  projectId: recordId.nullable(),
   /** When this record overrides a bundled ion, the bundled ion's id. */
-  overridesIonId: z.string().nullable(),
-  /** The ion's data, validated by the library's own schema (src/chem) before it is stored. */
+  overridesIonId: recordId.nullable(),
+  /** The ion's data: a whole ion (counterIonSchema) or, for an override, the edit (counterIonEditSchema). */
   ion: z.record(z.string(), z.unknown()),
-  updatedAt: z.string(),
+  updatedAt: isoDate,
 });
+
+/**
+ * The payload check every custom-ion record passes, stored or imported: an in-house ion is validated
+ * by the library's own counterIonSchema and carries the record's id as its library id (so the record
+ * id alone decides which library id it takes); an override is validated by counterIonEditSchema.
+ */
+export function checkCustomIonPayload(
+  record: { id: string; overridesIonId: string | null; ion: Record<string, unknown> },
+  ctx: z.RefinementCtx,
+): void {
+  const parsed =
+    record.overridesIonId === null ? counterIonSchema.safeParse(record.ion) : counterIonEditSchema.safeParse(record.ion);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues.slice(0, 5)) {
+      ctx.addIssue({ code: 'custom', path: ['ion', ...issue.path.map(String)], message: issue.message });
+    }
+    return;
+  }
+  if (record.overridesIonId === null && record.ion.id !== record.id) {
+    ctx.addIssue({ code: 'custom', path: ['ion', 'id'], message: `must be the record's id "${record.id}"` });
+  }
+}
+
+export const customIonRecordSchema = customIonRecordFields.superRefine(checkCustomIonPayload);
 export type CustomIonRecord = z.infer<typeof customIonRecordSchema>;
 
 export const settingRecordSchema = z.object({

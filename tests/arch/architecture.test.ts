@@ -62,4 +62,28 @@ describe('architecture rule (dependency-cruiser)', () => {
     expect(crossed.failed).toBe(true);
     expect(crossed.output).toMatch(/features-stay-apart/);
   }, 60000);
+  it('flags a layer outside the core importing a core file by its deep path, but not through @/chem', () => {
+    const core = {
+      'src/chem/compound/mass.ts': 'export const massGPerMol = 1;\n',
+      'src/chem/index.ts': "export * from './compound/mass';\n",
+    };
+    const throughIndex = cruise({
+      ...core,
+      'src/features/alpha/a.ts': "import { massGPerMol } from '@/chem';\nexport const a = massGPerMol;\n",
+    });
+    expect(throughIndex.failed).toBe(false);
+    const deep = cruise({
+      ...core,
+      'src/features/alpha/a.ts':
+        "import { massGPerMol } from '@/chem/compound/mass';\nexport const a = massGPerMol;\n",
+    });
+    expect(deep.failed).toBe(true);
+    expect(deep.output).toMatch(/core-through-index/);
+    const relative = cruise({
+      ...core,
+      'src/persistence/p.ts': "import { massGPerMol } from '../chem/compound/mass';\nexport const p = massGPerMol;\n",
+    });
+    expect(relative.failed).toBe(true);
+    expect(relative.output).toMatch(/core-through-index/);
+  }, 60000);
 });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { compoundSchema, type Compound } from '@/chem/compound/compound.schema';
+import { compoundSchema, type Compound } from '@/chem';
 
 /** The new-project form as typed: every field is text until it validates. */
 export interface NewProjectDraft {
