@@ -6,7 +6,7 @@ import { VBT_SOURCES } from './models/vbt/vbt';
 import { formulaUnitVolume, rawLattice, requireBalanced, requireIon, type RawLattice } from './lattice';
 import type { LatticeMethod, SaltThermoRequest, SaltThermoResult } from './thermo.types';
 import { latticeStats, publishedHydrationClosure, type LatticeVariant } from './validation/validation';
-import { calibratedRelU, chargeClassOf, findLatticeFactor, SHIPPED_LATTICE_CALIBRATION } from './calibration/calibration';
+import { calibratedRelU, cellLabel, chargeClassOf, findLatticeFactor, SHIPPED_LATTICE_CALIBRATION } from './calibration/calibration';
 import type { CalibratedVariant, LatticeCalibration } from './calibration/calibration.types';
 
 /**
@@ -106,16 +106,17 @@ export function latticeEnthalpyEstimate(
   const cal = opts.calibration ?? SHIPPED_LATTICE_CALIBRATION;
   const variant = variantOf(raw) as CalibratedVariant;
   const cls = chargeClassOf(req.cation.charge, req.anion.charge);
-  const f = findLatticeFactor(cal, variant, cls);
+  const group = groupOf(req);
+  const f = findLatticeFactor(cal, variant, cls, group);
   if (!f) {
-    const note = `not calibrated: fewer than ${cal.minSalts} ${cls} reference salts for ${variant}; the raw model and its raw uncertainty`;
+    const note = `not calibrated: fewer than ${cal.minSalts} ${cls} ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts for ${variant}; the raw model and its raw uncertainty`;
     return { estimate: { ...rawEst, notes: [note, ...(rawEst.notes ?? [])] }, raw, rawEstimate: rawEst, factor: 1, calibrationNote: note };
   }
-  const u = calibratedRelU(f, groupOf(req));
+  const u = calibratedRelU(f);
   const s = sizeRelU(raw, req);
   const rel = Math.hypot(u.rel, s);
   const value = f.factor * raw.enthalpyKJ;
-  const note = `calibrated: raw ${raw.enthalpyKJ.toFixed(1)} kJ/mol × ${f.factor.toFixed(4)} (median ratio reference/model over ${f.n} ${f.chargeClass} reference salts)`;
+  const note = `calibrated: raw ${raw.enthalpyKJ.toFixed(1)} kJ/mol × ${f.factor.toFixed(4)} (median ratio reference/model over ${cellLabel(f)})`;
   const notes = [note, raw.detail, `uncertainty: ${u.basis}${s ? `, plus ${(s * 100).toFixed(1)} % from the estimated ion size` : ''}`];
   if (raw.distanceFrom === 'radii') notes.push('r₀ from the sum of six-coordinate radii, not a measured cell');
   return {

@@ -21,7 +21,7 @@ export type CalibratedVariant =
   | 'born-mayer'
   | 'born-lande';
 
-/** Leave-one-salt-out error of one variant and charge class on the lattice reference salts. */
+/** Error of one variant on one cell (charge class × shape group) of the lattice reference salts. */
 export interface LatticeErrorFigures {
   n: number;
   /** Mean of (model/reference − 1), %. */
@@ -30,25 +30,27 @@ export interface LatticeErrorFigures {
   rmsPercent: number;
 }
 
-/** One calibration factor: ΔH_L,cal = factor × ΔH_L,raw for one variant and charge class. */
+/** One calibration factor: ΔH_L,cal = factor × ΔH_L,raw for one variant, charge class and group. */
 export interface LatticeFactor {
   variant: CalibratedVariant;
   chargeClass: ChargeClass;
-  /** Median over the class's reference salts of ΔH_L,reference / ΔH_L,raw. */
+  group: ShapeGroup;
+  /** Median over the cell's reference salts of ΔH_L,reference / ΔH_L,raw. */
   factor: number;
   /** Reference salts the factor was fitted on. */
   n: number;
   /** The raw model's error on the same salts (no calibration, nothing fitted). */
   raw: LatticeErrorFigures;
-  /** Calibrated error, leave-one-salt-out: each salt predicted by a factor fitted without it. */
+  /**
+   * Calibrated error, leave-one-salt-out: each salt predicted by a factor fitted without it. Its
+   * RMS is the calibrated model's stated uncertainty for salts of this cell.
+   */
   crossValidated: LatticeErrorFigures;
-  /** The same, per shape group (present where the group has at least 3 salts of this class). */
-  crossValidatedByGroup: Partial<Record<ShapeGroup, LatticeErrorFigures>>;
 }
 
-/** The fitted calibration: one factor per (variant, charge class) with enough reference salts. */
+/** The fitted calibration: one factor per (variant, charge class, group) with enough salts. */
 export interface LatticeCalibration {
-  /** Smallest number of reference salts a (variant, charge class) needs to get a factor. */
+  /** Smallest number of reference salts a cell needs to get a factor. */
   minSalts: number;
   factors: LatticeFactor[];
 }

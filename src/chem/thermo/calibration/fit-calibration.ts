@@ -39,9 +39,10 @@ const VARIANTS: readonly CalibratedVariant[] = [
 ];
 
 export const CALIBRATION_FORM =
-  'ΔH_L,cal = k·ΔH_L,raw, one factor k per lattice variant and charge class (singly charged ' +
-  'ions only / an ion with |z| ≥ 2), k = median of ΔH_L,reference / ΔH_L,raw over that class; ' +
-  'classes with fewer than minSalts reference salts keep the raw model';
+  'ΔH_L,cal = k·ΔH_L,raw, one factor k per lattice variant and cell = charge class (singly ' +
+  'charged ions only / an ion with |z| ≥ 2) × shape group (monatomic ions with tabulated sizes / ' +
+  'a polyatomic or estimated-size ion), k = median of ΔH_L,reference / ΔH_L,raw over the cell; ' +
+  'cells with fewer than minSalts reference salts keep the raw model';
 export const CALIBRATION_FITTED_ON =
   'lattice enthalpies of the bundled lattice reference salts (not ΔH_sol): 36 alkali and ' +
   'alkaline-earth halides by the Born–Haber cycle (NBS tables, Wagman et al. 1982; CRC/NIST ' +
