@@ -1,0 +1,46 @@
+import { spawnSync } from 'node:child_process';
+import { rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { buildCompiledCli } from './support/compiled-cli';
+
+// The installed command end to end: the compiled build, launched as `saltsmith` is (issues 12 and 13).
+let cli: { launcher: string; root: string };
+beforeAll(() => {
+  cli = buildCompiledCli();
+}, 120_000);
+
+const saltsmith = (args: string[], opts: { cwd?: string; input?: string } = {}) =>
+  spawnSync(process.execPath, [cli.launcher, ...args], { cwd: opts.cwd ?? '/', input: opts.input, encoding: 'utf8' });
+
+describe('the compiled saltsmith command', () => {
+  it('runs from any directory, including a SMILES that needs openchemlib', () => {
+    const a = saltsmith(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--json'], { cwd: '/' });
+    expect(a.status).toBe(0);
+    expect(JSON.parse(a.stdout).methodChosen).toBeTruthy();
+    const b = saltsmith(['eval'], { cwd: '/tmp', input: '{"kind":"salt","cation":{"smiles":"CN1CCN(C)CC1","charge":1},"anion":"mesylate"}\n' });
+    expect(b.status).toBe(0);
+    expect(JSON.parse(b.stdout).ok).toBe(true);
+  });
+
+  it.each([['ions'], ['ions', '--json']])('ends quietly when the reader closes the pipe early (saltsmith %s | head -1)', (...args) => {
+    // ions --json is ~180 kB, more than a pipe holds, so the write after head exits meets EPIPE.
+    const r = spawnSync('bash', ['-c', `"${process.execPath}" "${cli.launcher}" ${args.join(' ')} | head -1; echo "status=\${PIPESTATUS[0]}" >&2`], { encoding: 'utf8' });
+    expect(r.stdout.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr.trim()).toBe('status=0');
+  });
+
+  it('usage errors exit 2, refused values exit 1', () => {
+    expect(saltsmith(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--dosee', '1']).status).toBe(2);
+    expect(saltsmith(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--volume', '0']).status).toBe(1);
+  });
+
+  it('says how to build it when the compiled file is missing', () => {
+    rmSync(join(cli.root, 'dist-cli', 'saltsmith.js'));
+    const r = saltsmith(['ions']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/compiled command is missing[\s\S]*npm run build:cli/);
+    cli = buildCompiledCli();
+  }, 120_000);
+});
+
