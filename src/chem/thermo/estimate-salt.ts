@@ -109,7 +109,12 @@ export function latticeEnthalpyEstimate(
   const group = groupOf(req);
   const f = findLatticeFactor(cal, variant, cls, group);
   if (!f) {
-    const note = `not calibrated: fewer than ${cal.minSalts} ${cls} ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts for ${variant}; the raw model and its raw uncertainty`;
+    const kind = group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion';
+    const w = cal.withheld.find((x) => x.variant === variant && x.chargeClass === cls && x.group === group);
+    const why = w
+      ? `on the ${cellLabel(w)} the calibrated ${variant} did no better than the raw one, leave-one-salt-out (RMS ${w.crossValidated.rmsPercent.toFixed(1)} % vs ${w.raw.rmsPercent.toFixed(1)} %)`
+      : `fewer than ${cal.minSalts} ${cls} ${kind} reference salts for ${variant}`;
+    const note = `not calibrated: ${why}; the raw model and its raw uncertainty`;
     return { estimate: { ...rawEst, notes: [note, ...(rawEst.notes ?? [])] }, raw, rawEstimate: rawEst, factor: 1, calibrationNote: note };
   }
   const u = calibratedRelU(f);
@@ -193,7 +198,7 @@ export function estimateSaltThermo(req: SaltThermoRequest & LatticeCalibrationOp
     const best = ranked[0];
     if (!best) throw errors[0];
     chosen = best.r;
-    reason = `auto: ${best.m} has the lowest ${calOpts.calibrate === false ? 'measured' : 'cross-validated'} uncertainty (${(best.rel * 100).toFixed(1)} %) among the methods these inputs allow (${ranked.map((r) => `${r.m} ${(r.rel * 100).toFixed(1)} %`).join(', ')}), measured on the bundled ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts`;
+    reason = `auto: ${best.m} has the lowest ${calOpts.calibrate === false ? 'measured' : 'stated (cross-validated where calibrated)'} uncertainty (${(best.rel * 100).toFixed(1)} %) among the methods these inputs allow (${ranked.map((r) => `${r.m} ${(r.rel * 100).toFixed(1)} %`).join(', ')}), measured on the bundled ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts`;
   } else {
     if (!['kapustinskii', 'born-mayer', 'born-lande', 'vbt'].includes(requested)) {
       throw new ChemInputError('method', `unknown method ${String(requested)}`, 'auto, kapustinskii, born-mayer, born-lande, vbt');

@@ -142,6 +142,39 @@ describe('the fit', () => {
   });
 });
 
+describe('calibration only where cross-validation shows it helps', () => {
+  it('every shipped factor beats the raw model leave-one-salt-out; the others are withheld', () => {
+    const c = SHIPPED_LATTICE_CALIBRATION;
+    expect(c.factors.length).toBeGreaterThanOrEqual(8);
+    for (const f of c.factors) {
+      expect(f.crossValidated.rmsPercent).toBeLessThan(f.raw.rmsPercent);
+    }
+    for (const w of c.withheld) {
+      expect(w.crossValidated.rmsPercent).toBeGreaterThanOrEqual(w.raw.rmsPercent);
+    }
+    const vbtDoubly = findLatticeFactor(c, 'vbt', 'multiply-charged', 'halides');
+    expect(vbtDoubly).toBeUndefined();
+    const isVbtDoubly = (w: (typeof c.withheld)[number]) =>
+      w.variant === 'vbt' && w.chargeClass === 'multiply-charged';
+    expect(c.withheld.some(isVbtDoubly)).toBe(true);
+  });
+
+  it('a withheld cell says why it keeps the raw model (VBT, MgCl₂ from its CRC density)', () => {
+    // Density 2.325 g/cm³ (CRC Handbook, as bundled for the reference set).
+    const r = estimateSaltThermo({
+      cation: getThermoIon('magnesium')!,
+      anion: cl,
+      cationsPerFormula: 1,
+      anionsPerFormula: 2,
+      method: 'vbt',
+      densityGPerCm3: 2.325,
+      molarMassGPerMol: 95.21, // MgCl₂, CRC
+    });
+    expect(r.latticeCalibration.applied).toBe(false);
+    expect(r.latticeEnthalpyKJ.notes!.join(' ')).toMatch(/did no better than the raw one/);
+  });
+});
+
 describe('estimateSaltThermo applies the calibration and keeps the raw figure visible', () => {
   const req = { cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1 };
 

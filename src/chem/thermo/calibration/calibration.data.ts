@@ -68,23 +68,6 @@ export const SHIPPED_LATTICE_CALIBRATION: ShippedLatticeCalibration = {
     },
     {
       "variant": "vbt",
-      "chargeClass": "multiply-charged",
-      "group": "halides",
-      "factor": 0.9935640371026725,
-      "n": 16,
-      "raw": {
-        "n": 16,
-        "biasPercent": -1.2207596338649978,
-        "rmsPercent": 5.114321996988539
-      },
-      "crossValidated": {
-        "n": 16,
-        "biasPercent": -1.8422760622069219,
-        "rmsPercent": 5.532985034031522
-      }
-    },
-    {
-      "variant": "vbt",
       "chargeClass": "singly-charged",
       "group": "halides",
       "factor": 1.0355324223227018,
@@ -201,6 +184,26 @@ export const SHIPPED_LATTICE_CALIBRATION: ShippedLatticeCalibration = {
         "biasPercent": -0.4850588729705618,
         "rmsPercent": 1.331193092459031
       }
+    }
+  ],
+  "withheld": [
+    {
+      "variant": "vbt",
+      "chargeClass": "multiply-charged",
+      "group": "halides",
+      "factor": 0.9935640371026725,
+      "n": 16,
+      "raw": {
+        "n": 16,
+        "biasPercent": -1.2207596338649978,
+        "rmsPercent": 5.114321996988539
+      },
+      "crossValidated": {
+        "n": 16,
+        "biasPercent": -1.8422760622069219,
+        "rmsPercent": 5.532985034031522
+      },
+      "reason": "leave-one-salt-out RMS error not below the raw model"
     }
   ],
   "solution": {

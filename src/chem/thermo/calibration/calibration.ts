@@ -6,6 +6,7 @@ import type {
   LatticeErrorFigures,
   LatticeFactor,
   ShapeGroup,
+  WithheldLatticeFactor,
 } from './calibration.types';
 
 /**
@@ -15,8 +16,9 @@ import type {
  * class (salts of singly charged ions only; salts with an ion of |z| ≥ 2) × a shape group (both
  * ions monatomic with tabulated sizes; a polyatomic or estimated-size ion), k = the median over the
  * cell's reference salts of ΔH_L,reference / ΔH_L,raw. A cell with fewer than
- * {@link CALIBRATION_MIN_SALTS} reference salts keeps the raw model. The calibrated uncertainty is
- * the cell's leave-one-salt-out RMS error.
+ * {@link CALIBRATION_MIN_SALTS} reference salts keeps the raw model, and so does a cell whose
+ * calibrated leave-one-salt-out RMS error is not below the raw model's (VBT on the salts of doubly
+ * charged monatomic ions). The calibrated uncertainty is the cell's leave-one-salt-out RMS error.
  *
  * Why this form (measured by fit-calibration.ts on the bundled reference set; ΔH_sol over 60 salts,
  * leave-one-salt-out, auto method; share within ±20 kJ/mol, mean error, RMSE):
@@ -99,9 +101,11 @@ function errorFigures(relErrors: readonly number[]): LatticeErrorFigures {
 }
 
 /**
- * Fit one factor per (variant, charge class) with at least `minSalts` rows, and measure each by
- * leave-one-salt-out: every row predicted by the median ratio of the other rows of its class. Pure
- * and deterministic (rows are processed in the order given; the median does not depend on it).
+ * Fit one factor per (variant, charge class, shape group) with at least `minSalts` rows, and
+ * measure each by leave-one-salt-out: every row predicted by the median ratio of the other rows of
+ * its cell. A factor whose leave-one-salt-out RMS error is not below the raw model's is withheld
+ * (the cell keeps the raw model): calibration is used only where cross-validation shows it helps.
+ * Pure and deterministic.
  */
 export function fitLatticeCalibration(
   rows: readonly CalibrationRow[],
@@ -115,6 +119,7 @@ export function fitLatticeCalibration(
     cells.set(key, list);
   }
   const factors: LatticeFactor[] = [];
+  const withheld: WithheldLatticeFactor[] = [];
   for (const cell of cells.values()) {
     if (cell.length < minSalts) continue;
     const ratios = cell.map((r) => r.referenceKJ / r.rawKJ);
@@ -123,7 +128,7 @@ export function fitLatticeCalibration(
       const kOut = median(ratios.filter((_, j) => j !== i));
       return (kOut * r.rawKJ) / r.referenceKJ - 1;
     });
-    factors.push({
+    const fitted: LatticeFactor = {
       variant: cell[0]!.variant,
       chargeClass: cell[0]!.chargeClass,
       group: cell[0]!.group,
@@ -131,7 +136,9 @@ export function fitLatticeCalibration(
       n: cell.length,
       raw: errorFigures(cell.map((r) => r.rawKJ / r.referenceKJ - 1)),
       crossValidated: errorFigures(cvErr),
-    });
+    };
+    if (fitted.crossValidated.rmsPercent < fitted.raw.rmsPercent) factors.push(fitted);
+    else withheld.push({ ...fitted, reason: 'leave-one-salt-out RMS error not below the raw model' });
   }
   const order: CalibratedVariant[] = [
     'kapustinskii',
@@ -140,13 +147,13 @@ export function fitLatticeCalibration(
     'born-mayer',
     'born-lande',
   ];
-  factors.sort(
-    (a, b) =>
-      order.indexOf(a.variant) - order.indexOf(b.variant) ||
-      a.chargeClass.localeCompare(b.chargeClass) ||
-      a.group.localeCompare(b.group),
-  );
-  return { minSalts, factors };
+  const byCell = (a: LatticeFactor, b: LatticeFactor) =>
+    order.indexOf(a.variant) - order.indexOf(b.variant) ||
+    a.chargeClass.localeCompare(b.chargeClass) ||
+    a.group.localeCompare(b.group);
+  factors.sort(byCell);
+  withheld.sort(byCell);
+  return { minSalts, factors, withheld };
 }
 
 /** The factor for a variant, charge class and group; undefined where the cell had too few salts. */

@@ -48,11 +48,18 @@ export interface LatticeFactor {
   crossValidated: LatticeErrorFigures;
 }
 
+/** A cell with enough salts whose factor is not used, with the figures that decided it. */
+export interface WithheldLatticeFactor extends LatticeFactor {
+  reason: string;
+}
+
 /** The fitted calibration: one factor per (variant, charge class, group) with enough salts. */
 export interface LatticeCalibration {
   /** Smallest number of reference salts a cell needs to get a factor. */
   minSalts: number;
   factors: LatticeFactor[];
+  /** Cells whose calibrated leave-one-salt-out RMS error is not below the raw model's: kept raw. */
+  withheld: WithheldLatticeFactor[];
 }
 
 /** ΔH_sol by Hess's law against the reference values, one set of figures. */
