@@ -23,3 +23,4 @@ export * from '../numerics';
 export * from './thermo-link';
 export * from './screen';
 export * from './library-candidates';
+export * from './salt-solubility';

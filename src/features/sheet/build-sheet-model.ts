@@ -29,6 +29,10 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   { key: 'saltProbability', label: 'P(salt)', unit: '0–1', kind: 'number', hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend', group: 'formation' },
   { key: 'activeFraction', label: 'Active fraction', unit: '%', kind: 'number', hint: 'drug mass / salt mass', group: 'formation' },
   { key: 'saltMassPerDose', label: 'Salt per dose', unit: 'mg', kind: 'number', group: 'formation' },
+  { key: 'saltWaterMgPerMl', label: 'Salt in water', unit: 'mg/mL as salt', kind: 'number', hint: "the salt's own solubility in pure water (±1σ in the log₁₀ column)", group: 'solubility' },
+  { key: 'saltWaterFreeFormMgPerMl', label: 'Salt in water, as free form', unit: 'mg/mL free form', kind: 'number', group: 'solubility' },
+  { key: 'saltWaterLog10M', label: 'log₁₀ S(salt, water)', unit: 'mol/L of drug', kind: 'number', hint: '±1σ: the model’s leave-one-drug-out error, or the measurement’s', group: 'solubility' },
+  { key: 'saltWaterOrigin', label: 'Salt solubility from', unit: null, kind: 'text', hint: 'model, model + fusion data (your DSC), measured, or the 10² × S₀ anchor', group: 'solubility' },
   { key: 'log10Ksp', label: 'log₁₀ K_sp', unit: 'K_sp in (mol/L)^ν', kind: 'number', group: 'solubility' },
   { key: 'phMax', label: 'pH_max', unit: null, kind: 'number', group: 'solubility' },
   { key: 'worstDoseNumber', label: 'Worst D₀ in pH 1.2–6.8', unit: null, kind: 'number', hint: 'ICH M9 dose number at the least favourable pH', group: 'solubility' },
@@ -48,6 +52,14 @@ const num = (value: number | null | undefined, origin: ValueOrigin | null, uncer
 const est = (e: Estimate | null | undefined, origin: ValueOrigin = 'estimated'): SheetCell =>
   e ? num(e.value, origin, e.uncertainty) : { value: null };
 
+/** The salt-solubility origins as the sheet and its CSV write them. */
+export const SALT_WATER_ORIGIN_WORDS: Record<NonNullable<ScreenRow['saltWaterSolubility']>['origin'], string> = {
+  model: 'model',
+  'model+fusion': 'model + fusion data',
+  measured: 'measured',
+  anchor: 'anchor 10² × S₀',
+};
+
 const REASON_WORD: Record<string, string> = { keeps: 'for', drops: 'against', watch: 'watch', measured: 'measured', note: 'note' };
 
 function rowCells(
@@ -59,6 +71,8 @@ function rowCells(
   const kspOrigin: ValueOrigin | null = row.kspOrigin ?? null;
   const thermo = screening.energetics[row.id]?.thermo ?? null;
   const measuredSol = row.measured?.solutionEnthalpyKJ ?? null;
+  const sw = row.saltWaterSolubility;
+  const swOrigin: ValueOrigin | null = sw ? (sw.origin === 'measured' ? 'measured' : 'estimated') : null;
   return {
     score: num(score, null),
     pTop3: num(pTop3 === null ? null : pTop3 * 100, 'estimated'),
@@ -66,6 +80,10 @@ function rowCells(
     saltProbability: num(row.saltFormation?.saltProbability ?? null, 'estimated'),
     activeFraction: num(row.activeFraction * 100, 'input'),
     saltMassPerDose: num(row.saltMassPerDoseMg, 'input'),
+    saltWaterMgPerMl: num(sw?.mgPerMlAsSalt ?? null, swOrigin),
+    saltWaterFreeFormMgPerMl: num(sw?.mgPerMlAsFreeForm ?? null, swOrigin),
+    saltWaterLog10M: sw ? est(sw.log10DrugM, swOrigin ?? 'estimated') : { value: null },
+    saltWaterOrigin: { value: sw ? SALT_WATER_ORIGIN_WORDS[sw.origin] : null },
     log10Ksp: est(row.log10Ksp, kspOrigin ?? 'estimated'),
     // The same 1σ the Ranking area shows (linearised as the rank-robustness draw perturbs pH_max).
     phMax: num(row.phMax, kspOrigin, uncertaintiesOf(row, screening.screen.robustnessShared).phMaxSigma),

@@ -7,7 +7,7 @@
 export const SALT_SOLUBILITY_MODEL = {
   "id": "within-series",
   "kind": "within-series",
-  "level": 1.810446699,
+  "level": 1.635674022,
   "featureNames": [
     "drugLog10IntrinsicM",
     "drugLogP",
@@ -33,30 +33,30 @@ export const SALT_SOLUBILITY_MODEL = {
   "featureScales": [
     1,
     1,
-    0.5119602515,
-    0.1474419562,
-    2.075594321,
-    2.130013268,
-    0.2780192187,
-    0.3717045214,
+    0.5011809337,
+    0.1443375673,
+    2.171495687,
+    2.137788317,
+    0.272165527,
+    0.3686185422,
     1
   ],
   "intercept": 0,
   "coefficients": [
-    4.3828779e-33,
-    2.422059709e-34,
-    -0.02197501235,
-    -0.07610750923,
-    -0.0288881644,
-    -0.06499998469,
-    0.01660862597,
-    -0.05705815547,
+    1.506935735e-33,
+    6.470426808e-34,
+    -0.004878629361,
+    -0.03303140857,
+    -0.01385395024,
+    -0.03015022118,
+    0.01304576956,
+    -0.02266060599,
     0
   ],
-  "lambda": 100,
-  "cvRmseLog10": 0.8248307878,
-  "nSalts": 46,
-  "nDrugs": 21
+  "lambda": 300,
+  "cvRmseLog10": 0.8594392127,
+  "nSalts": 48,
+  "nDrugs": 22
 } as const;
 
 /** The fusion variant for salts with bench melting data, or null when cross-validation did not favour it. */
@@ -67,66 +67,66 @@ export const SALT_SOLUBILITY_VARIANTS = [
   {
     "id": "pooled",
     "kind": "pooled",
-    "nSalts": 46,
-    "nDrugs": 21,
-    "rmse": 1.152498109,
-    "anchorRmse": 0.911799514,
-    "meanSpearman": 0.4813410104,
-    "anchorMeanSpearman": -0.1369035904,
-    "medianSpearman": 0.7126820208,
-    "anchorMedianSpearman": -0.1864674635,
-    "leastSolubleHitRate": 0.75,
-    "anchorLeastSolubleHitRate": 0.25
+    "nSalts": 48,
+    "nDrugs": 22,
+    "rmse": 0.9326578156,
+    "anchorRmse": 0.9378827592,
+    "meanSpearman": 0.3509087297,
+    "anchorMeanSpearman": -0.3095228723,
+    "medianSpearman": 0.5,
+    "anchorMedianSpearman": -0.372934927,
+    "leastSolubleHitRate": 0.8,
+    "anchorLeastSolubleHitRate": 0.2
   },
   {
     "id": "pooled+thermo",
     "kind": "pooled",
-    "nSalts": 46,
-    "nDrugs": 21,
-    "rmse": 0.9967667886,
-    "anchorRmse": 0.911799514,
-    "meanSpearman": 0.06951758961,
-    "anchorMeanSpearman": -0.1369035904,
-    "medianSpearman": 0.08903517923,
-    "anchorMedianSpearman": -0.1864674635,
-    "leastSolubleHitRate": 0.5,
-    "anchorLeastSolubleHitRate": 0.25
+    "nSalts": 48,
+    "nDrugs": 22,
+    "rmse": 0.8462796028,
+    "anchorRmse": 0.9378827592,
+    "meanSpearman": 0.1791290969,
+    "anchorMeanSpearman": -0.3095228723,
+    "medianSpearman": 0.5,
+    "anchorMedianSpearman": -0.372934927,
+    "leastSolubleHitRate": 0.6,
+    "anchorLeastSolubleHitRate": 0.2
   },
   {
     "id": "within-series",
     "kind": "within-series",
-    "nSalts": 46,
-    "nDrugs": 21,
-    "rmse": 0.8248307878,
-    "anchorRmse": 0.911799514,
-    "meanSpearman": 0.4813410104,
-    "anchorMeanSpearman": -0.1369035904,
-    "medianSpearman": 0.7126820208,
-    "anchorMedianSpearman": -0.1864674635,
-    "leastSolubleHitRate": 0.75,
-    "anchorLeastSolubleHitRate": 0.25
+    "nSalts": 48,
+    "nDrugs": 22,
+    "rmse": 0.8594392127,
+    "anchorRmse": 0.9378827592,
+    "meanSpearman": 0.4641834896,
+    "anchorMeanSpearman": -0.3095228723,
+    "medianSpearman": 0.5,
+    "anchorMedianSpearman": -0.372934927,
+    "leastSolubleHitRate": 0.8,
+    "anchorLeastSolubleHitRate": 0.2
   },
   {
     "id": "within-series+thermo",
     "kind": "within-series",
-    "nSalts": 46,
-    "nDrugs": 21,
-    "rmse": 0.8293072896,
-    "anchorRmse": 0.911799514,
-    "meanSpearman": 0.3527909348,
-    "anchorMeanSpearman": -0.1369035904,
-    "medianSpearman": 0.4555818696,
-    "anchorMedianSpearman": -0.1864674635,
-    "leastSolubleHitRate": 0.75,
-    "anchorLeastSolubleHitRate": 0.25
+    "nSalts": 48,
+    "nDrugs": 22,
+    "rmse": 0.8606062161,
+    "anchorRmse": 0.9378827592,
+    "meanSpearman": 0.3521069611,
+    "anchorMeanSpearman": -0.3095228723,
+    "medianSpearman": 0.5,
+    "anchorMedianSpearman": -0.372934927,
+    "leastSolubleHitRate": 0.8,
+    "anchorLeastSolubleHitRate": 0.2
   },
   {
     "id": "pooled+fusion",
     "kind": "pooled",
-    "nSalts": 7,
-    "nDrugs": 7,
-    "rmse": 1.135949864,
-    "anchorRmse": 0.7306489735,
+    "nSalts": 8,
+    "nDrugs": 8,
+    "rmse": 1.034718514,
+    "anchorRmse": 0.8033764776,
     "meanSpearman": 0,
     "anchorMeanSpearman": 0,
     "medianSpearman": null,
@@ -137,10 +137,10 @@ export const SALT_SOLUBILITY_VARIANTS = [
   {
     "id": "pooled-on-fusion-subset",
     "kind": "pooled",
-    "nSalts": 7,
-    "nDrugs": 7,
-    "rmse": 1.090389491,
-    "anchorRmse": 0.7306489735,
+    "nSalts": 8,
+    "nDrugs": 8,
+    "rmse": 0.9702336056,
+    "anchorRmse": 0.8033764776,
     "meanSpearman": 0,
     "anchorMeanSpearman": 0,
     "medianSpearman": null,
@@ -155,7 +155,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "apomorphine",
     "name": "apomorphine",
-    "rmse": 0.1162170462,
+    "rmse": 0.2930036395,
     "anchorRmse": 0.05230827314,
     "spearman": null,
     "anchorSpearman": null,
@@ -164,7 +164,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "apomorphine · chloride (1:1)",
         "measured": -1.145308216,
-        "predicted": -1.261525262,
+        "predicted": -1.438311855,
         "anchor": -1.092999943
       }
     ]
@@ -172,7 +172,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "atropine",
     "name": "atropine",
-    "rmse": 0.5793171568,
+    "rmse": 0.5434862194,
     "anchorRmse": 0.5215871521,
     "spearman": 1,
     "anchorSpearman": 1,
@@ -181,13 +181,13 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "atropine · sulfate (2:1)",
         "measured": 0.2944859839,
-        "predicted": -0.4977489526,
+        "predicted": -0.4473051127,
         "anchor": 0.05994069086
       },
       {
         "label": "atropine · salicylate (1:1)",
         "measured": -0.9531436803,
-        "predicted": -1.161903212,
+        "predicted": -0.7518962944,
         "anchor": -0.2537905363
       }
     ]
@@ -195,7 +195,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "barbital",
     "name": "barbital",
-    "rmse": 0.5741289311,
+    "rmse": 0.4969105491,
     "anchorRmse": 0.7097806325,
     "spearman": null,
     "anchorSpearman": null,
@@ -204,7 +204,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "barbital · sodium (1:1)",
         "measured": -0.09230461626,
-        "predicted": 0.4818243148,
+        "predicted": 0.4046059328,
         "anchor": 0.6174760162
       }
     ]
@@ -212,7 +212,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "benzoic-acid",
     "name": "benzoic acid",
-    "rmse": 0.3734168318,
+    "rmse": 0.4120075747,
     "anchorRmse": 0.4847779599,
     "spearman": 0.894427191,
     "anchorSpearman": null,
@@ -221,31 +221,31 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "benzoic acid · sodium (1:1)",
         "measured": 0.3641562639,
-        "predicted": 0.1441635042,
+        "predicted": -0.02422785762,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · lithium (1:1)",
         "measured": 0.1936334552,
-        "predicted": 0.1441635042,
+        "predicted": -0.02422785762,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · potassium (1:1)",
         "measured": 0.4233845083,
-        "predicted": 0.1441635042,
+        "predicted": -0.02422785762,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · ammonium (1:1)",
         "measured": 0.1010288169,
-        "predicted": 0.1156576339,
+        "predicted": -0.03661276029,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · calcium (2:1)",
         "measured": -0.7267752089,
-        "predicted": 0.02700074563,
+        "predicted": -0.07016010354,
         "anchor": 0.321104356
       }
     ]
@@ -253,7 +253,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "cinchonidine",
     "name": "cinchonidine",
-    "rmse": 0.02459506282,
+    "rmse": 0.008769391372,
     "anchorRmse": 0.4940583544,
     "spearman": null,
     "anchorSpearman": null,
@@ -262,7 +262,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "cinchonidine · sulfate (2:1)",
         "measured": -1.573058159,
-        "predicted": -1.597653222,
+        "predicted": -1.564288767,
         "anchor": -1.078999804
       }
     ]
@@ -270,7 +270,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "cinchonine",
     "name": "cinchonine",
-    "rmse": 0.1092154511,
+    "rmse": 0.07565911391,
     "anchorRmse": 0.4134675085,
     "spearman": null,
     "anchorSpearman": null,
@@ -279,7 +279,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "cinchonine · sulfate (2:1)",
         "measured": -1.492467313,
-        "predicted": -1.601682764,
+        "predicted": -1.568126427,
         "anchor": -1.078999804
       }
     ]
@@ -287,7 +287,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "cocaine",
     "name": "cocaine",
-    "rmse": 0.7837497439,
+    "rmse": 0.9590226577,
     "anchorRmse": 0.5834371533,
     "spearman": null,
     "anchorSpearman": null,
@@ -296,7 +296,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "cocaine · chloride (1:1)",
         "measured": 0.3226368267,
-        "predicted": -0.4611129173,
+        "predicted": -0.636385831,
         "anchor": -0.2608003266
       }
     ]
@@ -304,30 +304,53 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "codeine",
     "name": "codeine",
-    "rmse": 0.834449196,
-    "anchorRmse": 1.188445452,
-    "spearman": 1,
+    "rmse": 0.983465131,
+    "anchorRmse": 1.338778251,
+    "spearman": 0.5,
     "anchorSpearman": -1,
     "leastSolubleInLowestTwo": true,
     "salts": [
       {
         "label": "codeine · dihydrogen phosphate (1:1)",
         "measured": -0.1110610225,
-        "predicted": 0.2198120882,
-        "anchor": 0.3780216802
+        "predicted": 0.1694058998,
+        "anchor": 0.4420284038
       },
       {
         "label": "codeine · sulfate (2:1)",
         "measured": -1.033421262,
-        "predicted": 0.09933374454,
+        "predicted": 0.04671497562,
+        "anchor": 0.6749556354
+      },
+      {
+        "label": "codeine · chloride (1:1)",
+        "measured": -0.8925877381,
+        "predicted": 0.3943679738,
         "anchor": 0.5745598618
+      }
+    ]
+  },
+  {
+    "drugId": "ephedrine",
+    "name": "ephedrine ((-)-(1R,2S))",
+    "rmse": 1.004511991,
+    "anchorRmse": 1.194309282,
+    "spearman": null,
+    "anchorSpearman": null,
+    "leastSolubleInLowestTwo": true,
+    "salts": [
+      {
+        "label": "ephedrine ((-)-(1R,2S)) · chloride (1:1)",
+        "measured": -0.003662983334,
+        "predicted": 1.000849008,
+        "anchor": 1.190646299
       }
     ]
   },
   {
     "drugId": "haloperidol",
     "name": "haloperidol",
-    "rmse": 0.4764699422,
+    "rmse": 0.6524396355,
     "anchorRmse": 0.290789723,
     "spearman": null,
     "anchorSpearman": null,
@@ -336,7 +359,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "haloperidol · chloride (1:1)",
         "measured": -2.138119466,
-        "predicted": -2.614589408,
+        "predicted": -2.790559102,
         "anchor": -2.428909189
       }
     ]
@@ -344,7 +367,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "homatropine",
     "name": "homatropine",
-    "rmse": 0.2385224707,
+    "rmse": 0.1620651011,
     "anchorRmse": 0.3901554321,
     "spearman": null,
     "anchorSpearman": null,
@@ -353,7 +376,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "homatropine · bromide (1:1)",
         "measured": -0.5931554058,
-        "predicted": -0.3546329351,
+        "predicted": -0.4310903047,
         "anchor": -0.2029999737
       }
     ]
@@ -361,7 +384,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "hyoscine",
     "name": "hyoscine (scopolamine)",
-    "rmse": 0.3714607186,
+    "rmse": 0.5476685281,
     "anchorRmse": 0.1907809387,
     "spearman": null,
     "anchorSpearman": null,
@@ -370,7 +393,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "hyoscine (scopolamine) · bromide (1:1)",
         "measured": -0.1042190762,
-        "predicted": -0.4756797948,
+        "predicted": -0.6518876043,
         "anchor": -0.2950000148
       }
     ]
@@ -378,7 +401,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "hyoscyamine",
     "name": "hyoscyamine",
-    "rmse": 1.321537341,
+    "rmse": 1.380366031,
     "anchorRmse": 1.075087015,
     "spearman": 1,
     "anchorSpearman": -1,
@@ -387,13 +410,13 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "hyoscyamine · sulfate (2:1)",
         "measured": 0.2719610784,
-        "predicted": -1.206889271,
+        "predicted": -1.165241511,
         "anchor": -0.6120000426
       },
       {
         "label": "hyoscyamine · bromide (1:1)",
         "measured": 0.3175008104,
-        "predicted": -0.8252693031,
+        "predicted": -1.003585665,
         "anchor": -0.9195266408
       }
     ]
@@ -401,7 +424,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "ibuprofen",
     "name": "ibuprofen (racemic)",
-    "rmse": 0.2239934393,
+    "rmse": 0.2769173108,
     "anchorRmse": 0.706626317,
     "spearman": 0.9,
     "anchorSpearman": -0.9746794345,
@@ -410,31 +433,31 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "ibuprofen (racemic) · L-valine ethyl ester (1:1)",
         "measured": -1.802242746,
-        "predicted": -1.971791744,
+        "predicted": -1.948336167,
         "anchor": -1.434403618
       },
       {
         "label": "ibuprofen (racemic) · L-valine propyl ester (1:1)",
         "measured": -1.937488664,
-        "predicted": -2.009278619,
+        "predicted": -1.960778901,
         "anchor": -1.433651783
       },
       {
         "label": "ibuprofen (racemic) · L-valine isopropyl ester (1:1)",
         "measured": -2.022824927,
-        "predicted": -2.007077479,
+        "predicted": -1.960764098,
         "anchor": -1.433651783
       },
       {
         "label": "ibuprofen (racemic) · L-valine butyl ester (1:1)",
         "measured": -2.084408676,
-        "predicted": -2.046765494,
+        "predicted": -1.973221635,
         "anchor": -1.432644651
       },
       {
         "label": "ibuprofen (racemic) · L-valine hexyl ester (1:1)",
         "measured": -2.58574318,
-        "predicted": -2.121739244,
+        "predicted": -1.998107104,
         "anchor": -1.430093927
       }
     ]
@@ -442,7 +465,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "morphine",
     "name": "morphine",
-    "rmse": 1.051686916,
+    "rmse": 1.094896012,
     "anchorRmse": 0.5497530417,
     "spearman": -0.4,
     "anchorSpearman": 0.8,
@@ -451,25 +474,25 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "morphine · chloride (1:1)",
         "measured": -0.9729499412,
-        "predicted": -1.249122402,
+        "predicted": -1.333694653,
         "anchor": -1.270578925
       },
       {
         "label": "morphine · sulfate (2:1)",
         "measured": -0.9215823259,
-        "predicted": -1.672739175,
+        "predicted": -1.705148351,
         "anchor": -1.094015464
       },
       {
         "label": "morphine · acetate (1:1)",
         "measured": -0.1455413127,
-        "predicted": -1.550933834,
+        "predicted": -1.623329295,
         "anchor": -1.059949373
       },
       {
         "label": "morphine · L-tartrate (2:1)",
         "measured": -0.6295574874,
-        "predicted": -1.974379221,
+        "predicted": -1.996019829,
         "anchor": -1.13399314
       }
     ]
@@ -477,7 +500,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "physostigmine",
     "name": "physostigmine",
-    "rmse": 1.200809186,
+    "rmse": 1.186395875,
     "anchorRmse": 0.9520631956,
     "spearman": 1,
     "anchorSpearman": 1,
@@ -486,13 +509,13 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "physostigmine · sulfate (2:1)",
         "measured": 0.3920252069,
-        "predicted": -1.297431127,
+        "predicted": -1.233867547,
         "anchor": -0.6969999634
       },
       {
         "label": "physostigmine · salicylate (1:1)",
         "measured": -1.79539345,
-        "predicted": -1.623280997,
+        "predicted": -1.381215836,
         "anchor": -1.003640436
       }
     ]
@@ -500,7 +523,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "pilocarpine",
     "name": "pilocarpine",
-    "rmse": 0.9084090629,
+    "rmse": 0.8580392249,
     "anchorRmse": 1.187692549,
     "spearman": null,
     "anchorSpearman": null,
@@ -509,7 +532,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "pilocarpine · nitrate (1:1)",
         "measured": -0.3876925113,
-        "predicted": 0.5207165516,
+        "predicted": 0.4703467136,
         "anchor": 0.800000038
       }
     ]
@@ -517,7 +540,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "piperazine",
     "name": "piperazine",
-    "rmse": 2.623700396,
+    "rmse": 2.662660591,
     "anchorRmse": 3.086034936,
     "spearman": null,
     "anchorSpearman": null,
@@ -526,7 +549,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "piperazine · hydrogen adipate (1:1)",
         "measured": -0.6232866861,
-        "predicted": 2.00041371,
+        "predicted": 2.039373905,
         "anchor": 2.46274825
       }
     ]
@@ -534,7 +557,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "quinidine",
     "name": "quinidine",
-    "rmse": 0.280589351,
+    "rmse": 0.313261777,
     "anchorRmse": 0.7847101771,
     "spearman": null,
     "anchorSpearman": null,
@@ -543,7 +566,7 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "quinidine · sulfate (2:1)",
         "measured": -1.597024972,
-        "predicted": -1.316435621,
+        "predicted": -1.283763195,
         "anchor": -0.8123147952
       }
     ]
@@ -551,64 +574,64 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "quinine",
     "name": "quinine",
-    "rmse": 0.9003876867,
+    "rmse": 0.9014558382,
     "anchorRmse": 1.133762946,
-    "spearman": 0.5309368507,
+    "spearman": 0.4264902571,
     "anchorSpearman": -0.372934927,
     "leastSolubleInLowestTwo": true,
     "salts": [
       {
         "label": "quinine · sulfate (2:1)",
         "measured": -2.548240007,
-        "predicted": -1.103339338,
+        "predicted": -1.139311262,
         "anchor": -0.4844004499
       },
       {
         "label": "quinine · chloride (1:1)",
         "measured": -1.211482429,
-        "predicted": -1.010533695,
+        "predicted": -1.075719472,
         "anchor": -0.467552417
       },
       {
         "label": "quinine · chloride (1:2)",
         "measured": 0.04539380062,
-        "predicted": -1.010533695,
+        "predicted": -1.075719472,
         "anchor": -0.7341194621
       },
       {
         "label": "quinine · bromide (1:1)",
         "measured": -1.28944105,
-        "predicted": -1.010533695,
+        "predicted": -1.075719472,
         "anchor": -0.5885796606
       },
       {
         "label": "quinine · bromide (1:2)",
         "measured": -0.6349083277,
-        "predicted": -1.010533695,
+        "predicted": -1.075719472,
         "anchor": -0.7341194621
       },
       {
         "label": "quinine · hydrogen sulfate (1:1)",
         "measured": -0.8184552131,
-        "predicted": -1.042716293,
+        "predicted": -1.081438816,
         "anchor": -0.7799746882
       },
       {
         "label": "quinine · citrate (2:1)",
         "measured": -2.730364397,
-        "predicted": -1.166442545,
+        "predicted": -1.16575081,
         "anchor": -0.7341194621
       },
       {
         "label": "quinine · hypophosphite (1:1)",
         "measured": -1.991212727,
-        "predicted": -1.026624994,
+        "predicted": -1.078579144,
         "anchor": -0.7506981723
       },
       {
         "label": "quinine · lactate (1:1)",
         "measured": -0.4624944016,
-        "predicted": -1.101026193,
+        "predicted": -1.14303052,
         "anchor": -0.8115771563
       }
     ]
@@ -616,7 +639,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "salicylic-acid",
     "name": "salicylic acid",
-    "rmse": 0.5336358576,
+    "rmse": 0.5157190721,
     "anchorRmse": 0.6960721096,
     "spearman": 1,
     "anchorSpearman": null,
@@ -625,13 +648,13 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "salicylic acid · sodium (1:1)",
         "measured": 0.5403600547,
-        "predicted": 0.2079894261,
+        "predicted": 0.1324672976,
         "anchor": 0.3697467866
       },
       {
         "label": "salicylic acid · strontium (2:1)",
         "measured": -0.5997499262,
-        "predicted": 0.07779285637,
+        "predicted": 0.004862198413,
         "anchor": 0.3697467866
       }
     ]
@@ -639,7 +662,7 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "strychnine",
     "name": "strychnine",
-    "rmse": 0.4677828332,
+    "rmse": 0.5099104224,
     "anchorRmse": 0.3510772328,
     "spearman": 1,
     "anchorSpearman": -1,
@@ -648,13 +671,13 @@ export const SALT_SOLUBILITY_SERIES = [
       {
         "label": "strychnine · sulfate (2:1)",
         "measured": -1.357351164,
-        "predicted": -1.895834993,
+        "predicted": -1.93494751,
         "anchor": -1.350520407
       },
       {
         "label": "strychnine · nitrate (1:1)",
         "measured": -1.306784146,
-        "predicted": -1.69107144,
+        "predicted": -1.738524507,
         "anchor": -1.803235339
       }
     ]
