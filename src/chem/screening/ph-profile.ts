@@ -116,12 +116,14 @@ function pointAt(
   o: ProfileOptions,
 ): ProfilePoint {
   requireFiniteInRange('pH', pH, 0, 14);
-  const free = 10 ** log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
-  if (!salt) return { pH, solubilityM: free, freeFormLimitedM: free, saltLimitedM: null, solid: 'free-form' };
+  const freeFormLimitedM = 10 ** log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
+  if (!salt) return { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM: null, solid: 'free-form' };
   const r = solveSaltSolubility(saltInput(p, ionCharge, salt, pH, o), true);
-  const saltM = r.unbounded ? null : r.drugTotalM;
-  if (saltM !== null && saltM < free) return { pH, solubilityM: saltM, freeFormLimitedM: free, saltLimitedM: saltM, solid: 'salt' };
-  return { pH, solubilityM: free, freeFormLimitedM: free, saltLimitedM: saltM, solid: 'free-form' };
+  const saltLimitedM = r.unbounded ? null : r.drugTotalM;
+  if (saltLimitedM !== null && saltLimitedM < freeFormLimitedM) {
+    return { pH, solubilityM: saltLimitedM, freeFormLimitedM, saltLimitedM, solid: 'salt' };
+  }
+  return { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM, solid: 'free-form' };
 }
 
 /**

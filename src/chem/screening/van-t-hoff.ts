@@ -21,7 +21,8 @@ export interface VanTHoffFit {
   standardErrorKJ: number;
   /** Intercept of ln S against 1/T (the apparent ΔS_sol/R for S in mole-fraction units). */
   interceptLnS: number;
-  slopeK: number;
+  /** Slope of ln S against 1/T, K (= −ΔH_sol,app/R). */
+  lnSSlopeOnInverseTK: number;
   /** Mean of 1/T over the points, K⁻¹ (the line pivots about it). */
   meanInverseTemperaturePerK: number;
   rSquared: number;
@@ -62,7 +63,7 @@ export function vantHoffFit(points: readonly SolubilityAtTemperature[]): VanTHof
     },
     standardErrorKJ: se,
     interceptLnS: fit.intercept,
-    slopeK: fit.slope,
+    lnSSlopeOnInverseTK: fit.slope,
     meanInverseTemperaturePerK: points.reduce((a, p) => a + 1 / p.temperatureK, 0) / points.length,
     rSquared: fit.rSquared,
     n: fit.n,
@@ -85,7 +86,7 @@ export function vantHoffLine(
   return temperaturesK.map((t) => {
     requireFiniteInRange('temperatureK', t, 1e-6, 1000, 'K');
     const x = 1 / t;
-    const lnS = fit.interceptLnS + fit.slopeK * x;
+    const lnS = fit.interceptLnS + fit.lnSSlopeOnInverseTK * x;
     const half = Math.abs(se * (x - meanInvT));
     return { temperatureK: t, inverseTemperaturePerK: x, lnS, lnSLow: lnS - half, lnSHigh: lnS + half };
   });

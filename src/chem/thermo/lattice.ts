@@ -43,21 +43,21 @@ export function requireBalanced(req: Pick<SaltThermoRequest, 'cation' | 'anion' 
 }
 
 /** Formula-unit volume from the request: given V_m, else density + molar mass, else the ions' volumes summed. */
-export function formulaUnitVolume(req: SaltThermoRequest, p: number, q: number): { v: number; from: 'given' | 'density' | 'ion-volumes'; relU: number } | undefined {
+export function formulaUnitVolume(req: SaltThermoRequest, p: number, q: number): { volumeNm3: number; from: 'given' | 'density' | 'ion-volumes'; relativeSigma: number } | undefined {
   if (req.formulaUnitVolumeNm3 !== undefined) {
-    return { v: requireFiniteInRange('formulaUnitVolumeNm3', req.formulaUnitVolumeNm3, 0.005, 10, 'nm³'), from: 'given', relU: 0 };
+    return { volumeNm3: requireFiniteInRange('formulaUnitVolumeNm3', req.formulaUnitVolumeNm3, 0.005, 10, 'nm³'), from: 'given', relativeSigma: 0 };
   }
   if (req.densityGPerCm3 !== undefined) {
-    const m = req.molarMassGPerMol ?? (req.cation.molarMassGPerMol !== undefined && req.anion.molarMassGPerMol !== undefined ? p * req.cation.molarMassGPerMol + q * req.anion.molarMassGPerMol : undefined);
-    if (m === undefined) throw new ChemInputError('molarMassGPerMol', 'a density needs the molar mass of the salt', 'g/mol, 1–10000');
-    return { v: volumeFromDensityNm3(m, req.densityGPerCm3), from: 'density', relU: 0 };
+    const saltGPerMol = req.molarMassGPerMol ?? (req.cation.molarMassGPerMol !== undefined && req.anion.molarMassGPerMol !== undefined ? p * req.cation.molarMassGPerMol + q * req.anion.molarMassGPerMol : undefined);
+    if (saltGPerMol === undefined) throw new ChemInputError('molarMassGPerMol', 'a density needs the molar mass of the salt', 'g/mol, 1–10000');
+    return { volumeNm3: volumeFromDensityNm3(saltGPerMol, req.densityGPerCm3), from: 'density', relativeSigma: 0 };
   }
   const vc = req.cation.volumeNm3;
   const va = req.anion.volumeNm3;
   if (vc && va) {
-    const v = p * vc.value + q * va.value;
-    const u = Math.sqrt((p * vc.uncertainty) ** 2 + (q * va.uncertainty) ** 2);
-    return { v, from: 'ion-volumes', relU: u / v };
+    const volumeNm3 = p * vc.value + q * va.value;
+    const sigmaNm3 = Math.sqrt((p * vc.uncertainty) ** 2 + (q * va.uncertainty) ** 2);
+    return { volumeNm3, from: 'ion-volumes', relativeSigma: sigmaNm3 / volumeNm3 };
   }
   return undefined;
 }
@@ -68,48 +68,48 @@ export function rawLattice(req: SaltThermoRequest, method: LatticeMethod, opts: 
   const anion = requireIon(req.anion, 'anion', -1);
   requireIonCharges(cation.charge, anion.charge);
   const { p, q } = requireBalanced(req);
-  const t = requireFiniteInRange('temperatureK', req.temperatureK ?? STANDARD_TEMPERATURE_K, 250, 400, 'K');
-  const corr = latticeEnthalpyCorrectionKJ(p, cation.shape, q, anion.shape, t);
-  const done = (partial: Omit<RawLattice, 'enthalpyKJ' | 'method'>): RawLattice => ({ method, ...partial, enthalpyKJ: partial.potentialKJ + corr });
+  const temperatureK = requireFiniteInRange('temperatureK', req.temperatureK ?? STANDARD_TEMPERATURE_K, 250, 400, 'K');
+  const correctionKJ = latticeEnthalpyCorrectionKJ(p, cation.shape, q, anion.shape, temperatureK);
+  const done = (partial: Omit<RawLattice, 'enthalpyKJ' | 'method'>): RawLattice => ({ method, ...partial, enthalpyKJ: partial.potentialKJ + correctionKJ });
   switch (method) {
     case 'kapustinskii': {
-      const rc = opts.kapustinskiiRadii?.cation ?? cation.radiusA?.value;
-      const ra = opts.kapustinskiiRadii?.anion ?? anion.radiusA?.value;
-      if (rc === undefined) throw new ChemInputError('cation.radiusA', `${cation.label} has no radius`, 'an ion with a radius or volume');
-      if (ra === undefined) throw new ChemInputError('anion.radiusA', `${anion.label} has no radius`, 'an ion with a radius or volume');
-      const u = kapustinskiiPotentialKJ({ cationCharge: cation.charge, anionCharge: anion.charge, cationRadiusA: rc, anionRadiusA: ra, ionsPerFormulaUnit: p + q, constantKJA: opts.kapustinskiiK ?? KAPUSTINSKII_K_KJ_A_PER_MOL });
-      return done({ potentialKJ: u, detail: `r₊ = ${rc.toFixed(3)} Å, r₋ = ${ra.toFixed(3)} Å, ν = ${p + q}` });
+      const rcA = opts.kapustinskiiRadii?.cation ?? cation.radiusA?.value;
+      const raA = opts.kapustinskiiRadii?.anion ?? anion.radiusA?.value;
+      if (rcA === undefined) throw new ChemInputError('cation.radiusA', `${cation.label} has no radius`, 'an ion with a radius or volume');
+      if (raA === undefined) throw new ChemInputError('anion.radiusA', `${anion.label} has no radius`, 'an ion with a radius or volume');
+      const potentialKJ = kapustinskiiPotentialKJ({ cationCharge: cation.charge, anionCharge: anion.charge, cationRadiusA: rcA, anionRadiusA: raA, ionsPerFormulaUnit: p + q, constantKJA: opts.kapustinskiiK ?? KAPUSTINSKII_K_KJ_A_PER_MOL });
+      return done({ potentialKJ, detail: `r₊ = ${rcA.toFixed(3)} Å, r₋ = ${raA.toFixed(3)} Å, ν = ${p + q}` });
     }
     case 'born-mayer':
     case 'born-lande': {
       if (req.structureType === undefined) throw new ChemInputError('structureType', `${method} needs a structure type`, 'rock-salt, caesium-chloride, zinc-blende, wurtzite, fluorite, rutile');
       const s = requireStructureType(req.structureType);
       const vol = formulaUnitVolume(req, p, q);
-      let r0: number | undefined;
+      let nearestA: number | undefined;
       let from: 'volume' | 'radii' = 'volume';
-      if (vol && vol.from !== 'ion-volumes') r0 = nearestDistanceFromVolumeA(s, vol.v);
-      if (r0 === undefined) {
-        const rc = cation.crystalRadiusA?.value ?? cation.radiusA?.value;
-        const ra = anion.crystalRadiusA?.value ?? anion.radiusA?.value;
-        if (rc === undefined || ra === undefined) throw new ChemInputError('radius', 'Born–Mayer needs a cell volume or both ions’ radii', 'a formula-unit volume, a density, or bundled ions');
-        r0 = rc + ra;
+      if (vol && vol.from !== 'ion-volumes') nearestA = nearestDistanceFromVolumeA(s, vol.volumeNm3);
+      if (nearestA === undefined) {
+        const rcA = cation.crystalRadiusA?.value ?? cation.radiusA?.value;
+        const raA = anion.crystalRadiusA?.value ?? anion.radiusA?.value;
+        if (rcA === undefined || raA === undefined) throw new ChemInputError('radius', 'Born–Mayer needs a cell volume or both ions’ radii', 'a formula-unit volume, a density, or bundled ions');
+        nearestA = rcA + raA;
         from = 'radii';
       }
-      const base = { cationCharge: cation.charge, anionCharge: anion.charge, structureType: s, nearestDistanceA: r0 };
+      const base = { cationCharge: cation.charge, anionCharge: anion.charge, structureType: s, nearestDistanceA: nearestA };
       if (method === 'born-mayer') {
-        return done({ potentialKJ: bornMayerPotentialKJ(base), nearestDistanceA: r0, distanceFrom: from, detail: `${s}, r₀ = ${r0.toFixed(3)} Å (${from === 'volume' ? 'from the cell volume' : 'sum of radii'})` });
+        return done({ potentialKJ: bornMayerPotentialKJ(base), nearestDistanceA: nearestA, distanceFrom: from, detail: `${s}, r₀ = ${nearestA.toFixed(3)} Å (${from === 'volume' ? 'from the cell volume' : 'sum of radii'})` });
       }
       const nc = cation.bornExponent;
       const na = anion.bornExponent;
       if (nc === undefined || na === undefined) throw new ChemInputError('bornExponent', 'Born–Landé needs monatomic ions with a noble-gas shell', 'bundled monatomic ions');
       const n = (p * nc + q * na) / (p + q);
-      return done({ potentialKJ: bornLandePotentialKJ({ ...base, bornExponent: n }), nearestDistanceA: r0, distanceFrom: from, detail: `${s}, r₀ = ${r0.toFixed(3)} Å, n = ${n.toFixed(2)}` });
+      return done({ potentialKJ: bornLandePotentialKJ({ ...base, bornExponent: n }), nearestDistanceA: nearestA, distanceFrom: from, detail: `${s}, r₀ = ${nearestA.toFixed(3)} Å, n = ${n.toFixed(2)}` });
     }
     case 'vbt': {
       const vol = formulaUnitVolume(req, p, q);
       if (!vol) throw new ChemInputError('formulaUnitVolumeNm3', 'VBT needs a formula-unit volume, a density, or ions with volumes', '0.005–10 nm³');
-      const r = vbtPotentialKJ({ cationCharge: cation.charge, anionCharge: anion.charge, cationsPerFormula: p, anionsPerFormula: q, formulaUnitVolumeNm3: vol.v });
-      return done({ potentialKJ: r.valueKJ, volumeNm3: vol.v, volumeFrom: vol.from, volumeRelU: vol.relU, detail: `V_m = ${vol.v.toFixed(4)} nm³ (${vol.from}); ${r.form}` });
+      const r = vbtPotentialKJ({ cationCharge: cation.charge, anionCharge: anion.charge, cationsPerFormula: p, anionsPerFormula: q, formulaUnitVolumeNm3: vol.volumeNm3 });
+      return done({ potentialKJ: r.valueKJ, volumeNm3: vol.volumeNm3, volumeFrom: vol.from, volumeRelU: vol.relativeSigma, detail: `V_m = ${vol.volumeNm3.toFixed(4)} nm³ (${vol.from}); ${r.form}` });
     }
     default:
       throw new ChemInputError('method', `unknown method ${String(method)}`, 'auto, kapustinskii, born-mayer, born-lande, vbt');

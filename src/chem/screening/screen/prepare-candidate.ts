@@ -33,10 +33,10 @@ export function prepareCandidate(ctx: ScreenContext, cand: ScreeningCandidate): 
   try {
     const st = cand.stoichiometry;
     const protolyte = counterIonProtolyte(cand.counterIon, st);
-    const saltM = saltMolarMassGPerMol(saltMassInput(ctx, cand));
+    const saltGPerMol = saltMolarMassGPerMol(saltMassInput(ctx, cand));
     const measured = cand.measurements?.length
       ? interpretMeasurements(cand.measurements, {
-          saltMolarMassGPerMol: saltM,
+          saltMolarMassGPerMol: saltGPerMol,
           freeFormMolarMassGPerMol: ctx.freeFormMolarMassGPerMol,
           drugPerSalt: st.drugPerSalt,
           temperatureK: ctx.temperatureK,
@@ -59,7 +59,7 @@ export function prepareCandidate(ctx: ScreenContext, cand: ScreeningCandidate): 
     return {
       cand,
       protolyte,
-      saltMolarMassGPerMol: saltM,
+      saltMolarMassGPerMol: saltGPerMol,
       measured,
       solutionEnthalpyKJ: dH,
       solutionEnthalpyOrigin: origin,

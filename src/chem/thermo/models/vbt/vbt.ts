@@ -64,26 +64,26 @@ export function vbtPotentialKJ(input: VbtInput): { valueKJ: number; form: string
   const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
   const p = requireFiniteInRange('cationsPerFormula', input.cationsPerFormula, 1, 6);
   const q = requireFiniteInRange('anionsPerFormula', input.anionsPerFormula, 1, 6);
-  const v = requireFiniteInRange('formulaUnitVolumeNm3', input.formulaUnitVolumeNm3, 0.005, 10, 'nm³');
+  const volumeNm3 = requireFiniteInRange('formulaUnitVolumeNm3', input.formulaUnitVolumeNm3, 0.005, 10, 'nm³');
   const i = ionicStrengthFactor(zc, za, p, q);
   const c = vbtConstantsFor(zc, za, p, q);
-  const u = 2 * i * (c.alphaKJNm / Math.cbrt(v) + c.betaKJ);
-  if (u > 5000) {
-    return { valueKJ: GLASSER_A_KJ_NM * i * Math.cbrt((2 * i) / v), form: 'Glasser A·I·(2I/V_m)^(1/3)' };
+  const potentialKJ = 2 * i * (c.alphaKJNm / Math.cbrt(volumeNm3) + c.betaKJ);
+  if (potentialKJ > 5000) {
+    return { valueKJ: GLASSER_A_KJ_NM * i * Math.cbrt((2 * i) / volumeNm3), form: 'Glasser A·I·(2I/V_m)^(1/3)' };
   }
-  return { valueKJ: u, form: `2I(α/V_m^(1/3) + β), ${c.key} constants α = ${c.alphaKJNm}, β = ${c.betaKJ}` };
+  return { valueKJ: potentialKJ, form: `2I(α/V_m^(1/3) + β), ${c.key} constants α = ${c.alphaKJNm}, β = ${c.betaKJ}` };
 }
 
 /** Formula-unit volume from density: V_m = M / (ρ·N_A), nm³ (M in g/mol, ρ in g/cm³). */
 export function volumeFromDensityNm3(molarMassGPerMol: number, densityGPerCm3: number): number {
-  const m = requireFiniteInRange('molarMassGPerMol', molarMassGPerMol, 1, 10000, 'g/mol');
-  const rho = requireFiniteInRange('densityGPerCm3', densityGPerCm3, 0.3, 25, 'g/cm³');
-  return (m / (rho * AVOGADRO_PER_MOL)) * 1e21;
+  const massGPerMol = requireFiniteInRange('molarMassGPerMol', molarMassGPerMol, 1, 10000, 'g/mol');
+  const rhoGPerCm3 = requireFiniteInRange('densityGPerCm3', densityGPerCm3, 0.3, 25, 'g/cm³');
+  return (massGPerMol / (rhoGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
 }
 
 /** Formula-unit volume from a unit cell: V_m = V_cell / Z, nm³ (V_cell in Å³). */
 export function volumeFromCellNm3(cellVolumeA3: number, formulaUnitsPerCell: number): number {
-  const vc = requireFiniteInRange('cellVolumeA3', cellVolumeA3, 5, 1e6, 'Å³');
+  const cellA3 = requireFiniteInRange('cellVolumeA3', cellVolumeA3, 5, 1e6, 'Å³');
   const z = requireFiniteInRange('formulaUnitsPerCell', formulaUnitsPerCell, 1, 256);
-  return vc / z / 1000;
+  return cellA3 / z / 1000;
 }
