@@ -15,12 +15,15 @@ export default defineConfig({
   root,
   publicDir: false,
   logLevel: 'warn',
+  // Bundle zod and papaparse into the build: loading zod's hundreds of small module files cost more
+  // start-up time than the whole command (measured: ~150 ms of module resolution).
+  ssr: { noExternal: true, external: ['openchemlib'] },
   resolve: { alias: { '@': fileURLToPath(new URL('../..', import.meta.url)) } },
   build: {
     outDir: 'dist-cli',
     emptyOutDir: true,
     target: 'node20',
-    minify: false,
+    minify: true,
     sourcemap: false,
     copyPublicDir: false,
     reportCompressedSize: false,
@@ -30,7 +33,7 @@ export default defineConfig({
         saltsmith: 'src/cli/entry.ts',
         'batch-worker': 'src/cli/commands/screen/batch/batch-worker-entry.ts',
       },
-      external: [/^node:/, ...builtinModules, 'zod', 'papaparse', 'openchemlib', /^zod\//, /^openchemlib\//],
+      external: [/^node:/, ...builtinModules, 'openchemlib', /^openchemlib\//],
       output: { format: 'es', entryFileNames: '[name].js', chunkFileNames: '[name]-[hash].js' },
     },
   },
