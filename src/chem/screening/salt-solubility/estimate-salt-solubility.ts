@@ -1,23 +1,35 @@
+import { STANDARD_TEMPERATURE_K } from '../../constants/physical';
 import type { Estimate } from '../../result';
 import { predictSaltSolubility, type FittedSaltSolubilityModel, type SaltSolubilityModelKind } from './fit-salt-solubility';
 import { ridgeContributions } from './ridge-regression';
 import {
   featureRow,
   IDEAL_SOLUBILITY_FEATURE,
+  log10IdealMoleFraction,
   SALT_SOLUBILITY_FEATURES,
   THERMO_SHIFT_FEATURE,
   type SaltSolubilityFeature,
   type SaltSolubilityInput,
 } from './salt-solubility-features';
-import { SALT_SOLUBILITY_FUSION_MODEL, SALT_SOLUBILITY_MODEL } from './salt-solubility-model.data';
+import { SALT_SOLUBILITY_FUSION_MODEL, SALT_SOLUBILITY_MODEL, SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K } from './salt-solubility-model.data';
 
 /**
  * The salt's own solubility in pure water, estimated before the salt exists: a ridge regression in
  * log₁₀ units on the drug's intrinsic solubility and the counter-ion's computed descriptors,
  * calibrated on published series of salts (fixtures/reference/salt-solubility.csv) and carrying as
- * its 1σ the error measured by leaving whole drugs out (see fit-salt-solubility.ts). With the salt's
- * melting point (and ΔH_fus) from the bench, the fusion variant adds the Schröder–van Laar crystal
- * term — when cross-validation favoured it; otherwise the bench data are noted, not used.
+ * its 1σ the error measured by leaving whole drugs out (see fit-salt-solubility.ts).
+ *
+ * With the salt's melting point (and, from DSC, its ΔH_fus) the crystal is no longer a typical one:
+ * log x = log x_ideal − log γ (Schröder–van Laar, fusion.ts). The model's estimate stands for a salt
+ * with the typical crystal term of its training salts (the mean log x_ideal of the published salts
+ * that report a melting point); the model's estimate of the non-ideality is then
+ * log γ ≈ mean log x_ideal − log x_model, and the bench-informed estimate is
+ * log S = log S_model + (log x_ideal(this salt) − mean log x_ideal(training salts)),
+ * the crystal term entering with its theoretical slope of 1. ΔC_p is taken as 0; without a measured
+ * ΔH_fus the entropy of melting follows Walden's rule (said so in the notes). This combination is not
+ * cross-validated — too few published salts carry melting data — so its 1σ stays the model's.
+ * A fusion variant fitted by cross-validation replaces it when the published set is large enough to
+ * favour one (model-build.ts).
  */
 export type SaltSolubilityOrigin = 'model' | 'model+fusion';
 
@@ -125,6 +137,8 @@ function driverFor(name: string, c: number): SolubilityDriverId | null {
 }
 
 export interface SaltSolubilityOptions {
+  /** Temperature of the estimate, K (the crystal term of the fusion path depends on it); default 298.15 K. */
+  temperatureK?: number;
   /** 1σ of log₁₀ S₀, decades (a GSE estimate is far less certain than a measurement). */
   log10IntrinsicSigma?: number;
 }
@@ -135,7 +149,15 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
   const chosen = useFusion ? FUSION! : MAIN;
   const literal = (useFusion ? SALT_SOLUBILITY_FUSION_MODEL : SALT_SOLUBILITY_MODEL) as ShippedLiteral;
   const row = featureRow(input, chosen.features);
-  const value = predictSaltSolubility(chosen.model, row, input.drug.log10IntrinsicM);
+  let value = predictSaltSolubility(chosen.model, row, input.drug.log10IntrinsicM);
+  const T = opts.temperatureK ?? STANDARD_TEMPERATURE_K;
+  let crystalShift: number | null = null;
+  if (hasMelt && !useFusion && SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K.length > 0) {
+    const own = log10IdealMoleFraction(input, T);
+    const refs = SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K.map((tm) => log10IdealMoleFraction({ ...input, meltingPointK: tm, fusionEnthalpyKJPerMol: null }, T));
+    crystalShift = own - refs.reduce((s, v) => s + v, 0) / refs.length;
+    value += crystalShift;
+  }
   const ridge = chosen.model.ridge;
   // Contributions relative to the average training salt, decades (the centred fit: relative to zero).
   const contributions = ridgeContributions(ridge, row);
@@ -150,11 +172,19 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
     const id = driverFor(name, c);
     if (id) drivers.push({ id, decades: c });
   });
+  if (crystalShift !== null && Math.abs(crystalShift) >= DRIVER_THRESHOLD_DECADES) {
+    drivers.push({ id: crystalShift < 0 ? 'high-melting-salt' : 'low-melting-salt', decades: crystalShift });
+  }
   drivers.sort((a, b) => Math.abs(b.decades) - Math.abs(a.decades));
   const notes = [
     `ridge regression on ${literal.nSalts} published salts of ${literal.nDrugs} drugs; 1σ = leave-one-drug-out error ${cv.toFixed(2)} decades${opts.log10IntrinsicSigma ? ` combined with S₀'s ${opts.log10IntrinsicSigma.toFixed(2)}` : ''}`,
   ];
-  if (hasMelt && !useFusion) notes.push('bench melting data noted; the fusion variant did not beat the descriptors in cross-validation, so it is not used');
+  if (crystalShift !== null) {
+    const dh = input.fusionEnthalpyKJPerMol != null ? `ΔH_fus ${input.fusionEnthalpyKJPerMol} kJ/mol (measured)` : "ΔH_fus from Walden's rule (ΔS_m 56.5 J/(mol·K); no DSC enthalpy entered)";
+    notes.push(
+      `bench fusion data: T_m ${(input.meltingPointK! - 273.15).toFixed(1)} °C, ${dh}; Schröder–van Laar (ΔC_p = 0) crystal term ${crystalShift >= 0 ? '+' : ''}${crystalShift.toFixed(2)} decades against the typical published salt, applied with slope 1 (not cross-validated)`,
+    );
+  }
   if (ridge.featureNames.includes('thermoShiftDecades') && (input.thermoShiftDecades === null || input.thermoShiftDecades === undefined)) {
     notes.push('no ΔH_sol for this salt: the thermochemical term is taken as the average');
   }
@@ -166,7 +196,7 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
       sources: ['Saltsmith salt-solubility model (published series in fixtures/reference/salt-solubility.csv)'],
       notes,
     },
-    origin: useFusion ? 'model+fusion' : 'model',
+    origin: useFusion || crystalShift !== null ? 'model+fusion' : 'model',
     drivers,
   };
 }

@@ -36,6 +36,8 @@ export interface SaltSolubilityBuild {
   shipped: ShippedVariant;
   /** The fusion variant, used only when it beats the descriptors on the salts with melting data. */
   fusion: ShippedVariant | null;
+  /** Melting points of the training salts that have one, K: the reference crystal term. */
+  fusionReferenceMeltingPointsK: number[];
   report: {
     summary: { nSalts: number; nDrugs: number; shipped: VariantId; fusionUsed: boolean; rule: string };
     drugs: TrainingSet['drugs'];
@@ -89,9 +91,11 @@ export function fitAndValidateSaltSolubility(ocl: typeof OpenChemLib, saltRecord
   const [plain, thermo] = withinFirst ? [within, withinThermo] : [pooled, pooledThermo];
   const thermoHelps = thermo.cv.meanSpearman >= plain.cv.meanSpearman + RHO_TIE && thermo.cv.rmse <= plain.cv.rmse + MARGIN;
   const shipped = thermoHelps ? ship(thermo, rows, withThermo) : ship(plain, rows, base);
+  const fusionReferenceMeltingPointsK = fusionRows.map((r) => r.input.meltingPointK!).sort((a, b) => a - b);
   return {
     shipped,
     fusion,
+    fusionReferenceMeltingPointsK,
     report: {
       summary: { nSalts: rows.length, nDrugs: new Set(rows.map((r) => r.drugId)).size, shipped: shipped.id, fusionUsed: fusion !== null, rule: VARIANT_RULE },
       drugs: set.drugs,
@@ -159,6 +163,13 @@ export function renderModelDataModule(b: SaltSolubilityBuild): string {
     '',
     '/** The fusion variant for salts with bench melting data, or null when cross-validation did not favour it. */',
     `export const SALT_SOLUBILITY_FUSION_MODEL = ${b.fusion ? `${JSON.stringify(variantLiteral(b.fusion), null, 2)} as const` : 'null'};`,
+    '',
+    '/**',
+    ' * Melting points of the published training salts that report one, K. Their mean Schröder–van Laar',
+    " * crystal term is the 'typical salt' the model's estimate stands for; a salt whose bench melting data",
+    ' * give a different crystal term is shifted by the difference (estimate-salt-solubility.ts).',
+    ' */',
+    `export const SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K = ${JSON.stringify(b.fusionReferenceMeltingPointsK.map(r6))} as const;`,
     '',
     '/** Nested leave-one-drug-out cross-validation of every variant, with today\'s anchor on the same folds. */',
     `export const SALT_SOLUBILITY_VARIANTS = ${JSON.stringify(summaries, null, 2)} as const;`,

@@ -62,6 +62,13 @@ export const SALT_SOLUBILITY_MODEL = {
 /** The fusion variant for salts with bench melting data, or null when cross-validation did not favour it. */
 export const SALT_SOLUBILITY_FUSION_MODEL = null;
 
+/**
+ * Melting points of the published training salts that report one, K. Their mean Schröder–van Laar
+ * crystal term is the 'typical salt' the model's estimate stands for; a salt whose bench melting data
+ * give a different crystal term is shifted by the difference (estimate-salt-solubility.ts).
+ */
+export const SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K = [413.15,450.65,458.65,471.15,471.65,479.15,491.65,499.95] as const;
+
 /** Nested leave-one-drug-out cross-validation of every variant, with today's anchor on the same folds. */
 export const SALT_SOLUBILITY_VARIANTS = [
   {

@@ -117,7 +117,7 @@ export function chooseKsp(
         fusionEnthalpyKJPerMol: p.measured?.fusionEnthalpyKJPerMol ?? null,
         thermoShiftDecades,
       },
-      { log10IntrinsicSigma: logS0.uncertainty },
+      { log10IntrinsicSigma: logS0.uncertainty, temperatureK: T },
     );
     const logSD = est.log10DrugM.value;
     const sigma = est.log10DrugM.uncertainty;

@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import OCL from 'openchemlib';
+import * as OCL from 'openchemlib';
 import Papa from 'papaparse';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { COUNTER_IONS } from '@/chem';
