@@ -1,8 +1,10 @@
 import { z } from 'zod';
-import { compoundSchema } from '@/chem/compound/compound.schema';
 import {
-  measurementKindSchema,
-  projectSettingsSchema,
+  candidateRecordSchema,
+  checkCustomIonPayload,
+  customIonRecordFields,
+  measurementRecordSchema,
+  projectRecordSchema,
   type CandidateRecord,
   type CustomIonRecord,
   type MeasurementRecord,
@@ -53,38 +55,23 @@ export class ProjectFileError extends Error {
 
 const isoDate = z.string().min(1).max(40);
 
+// Every record in a file is checked by the schema of the stored record it becomes (records.ts), minus
+// the fields the importing database assigns (schemaVersion, projectId); nothing is declared twice.
+
 /** A shortlisted candidate as it appears in the file (ids are the exporting database's own). */
-const fileCandidateSchema = z.object({
-  id: z.string().min(1).max(200),
-  ionId: z.string().min(1).max(200),
-  drugPerSalt: z.number().int().min(1).max(4),
-  counterIonPerSalt: z.number().int().min(1).max(4),
-  hydrateWater: z.number().min(0).max(20),
-  addedAt: isoDate,
-  order: z.number().finite(),
-});
+const fileCandidateSchema = candidateRecordSchema.omit({ schemaVersion: true, projectId: true });
 
-const fileMeasurementSchema = z.object({
-  id: z.string().min(1).max(200),
-  candidateId: z.string().min(1).max(200),
-  kind: measurementKindSchema,
-  value: z.number().finite().nullable(),
-  unit: z.string().max(20),
-  ph: z.number().min(0).max(14).nullable(),
-  temperatureK: z.number().positive().max(600).nullable(),
-  medium: z.string().max(200),
-  text: z.string().max(5000),
-  recordedAt: isoDate,
-});
+const fileMeasurementSchema = measurementRecordSchema.omit({ schemaVersion: true, projectId: true });
 
-const fileCustomIonSchema = z.object({
-  id: z.string().min(1).max(200),
-  /** 'project': belonged to the exported project; 'shared': available to every project there. */
-  scope: z.enum(['project', 'shared']),
-  overridesIonId: z.string().max(200).nullable(),
-  ion: z.record(z.string(), z.unknown()),
-  updatedAt: isoDate,
-});
+const fileCustomIonSchema = customIonRecordFields
+  .omit({ schemaVersion: true, projectId: true })
+  .extend({
+    /** 'project': belonged to the exported project; 'shared': available to every project there. */
+    scope: z.enum(['project', 'shared']),
+  })
+  .superRefine(checkCustomIonPayload);
+
+const fileProjectSchema = projectRecordSchema.omit({ id: true, schemaVersion: true });
 
 /** The current (version 2) project file. */
 export const projectFileSchema = z
@@ -93,15 +80,7 @@ export const projectFileSchema = z
     version: z.literal(PROJECT_FILE_VERSION),
     app: z.object({ name: z.string().max(100), version: z.string().max(40) }),
     createdAt: isoDate,
-    project: z.object({
-      name: z.string().trim().min(1).max(120),
-      createdAt: isoDate,
-      updatedAt: isoDate,
-      archived: z.boolean(),
-      isDemo: z.boolean(),
-      compound: compoundSchema,
-      settings: projectSettingsSchema,
-    }),
+    project: fileProjectSchema,
     candidates: z.array(fileCandidateSchema).max(PROJECT_FILE_LIMITS.candidates),
     measurements: z.array(fileMeasurementSchema).max(PROJECT_FILE_LIMITS.measurements),
     customIons: z.array(fileCustomIonSchema).max(PROJECT_FILE_LIMITS.customIons),

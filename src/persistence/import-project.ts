@@ -1,3 +1,4 @@
+import { COUNTER_IONS } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
 import {
@@ -54,11 +55,88 @@ export interface ImportOutcome {
 
 const sameJson = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
 
+/** Library ids of the bundled counter-ions: no imported record may take one. */
+const BUNDLED_IDS = new Set(COUNTER_IONS.map((i) => i.id));
+
+/**
+ * Decide where each custom ion of a file goes (inside the import's transaction). An imported ion can
+ * never shadow a bundled ion or another project's ion:
+ * - an edit (`overridesIonId`) of a bundled ion becomes an edit of the imported project only, under a
+ *   fresh record id (a shared edit, which applies to no project, is kept as it was when its id is
+ *   free or holds the same edit); an edit of anything that is not a bundled ion is dropped;
+ * - a shared in-house ion keeps its id only when that id is not a bundled id and is free, or already
+ *   holds the very same shared ion (then it is not duplicated);
+ * - every other in-house ion (project-scoped, or whose id is taken or bundled) becomes an ion of the
+ *   imported project under a fresh id, its library id (`ion.id`) rewritten to match.
+ * `ionIdMap` maps the file's ion ids to the ids they got, for the candidates that use them.
+ */
+async function placeImportedIons(
+  fileIons: ProjectFile['customIons'],
+  projectId: string,
+): Promise<{ ions: CustomIonRecord[]; ionIdMap: Map<string, string> }> {
+  const db = getDb();
+  const ionIdMap = new Map<string, string>();
+  const ions: CustomIonRecord[] = [];
+  for (const ion of fileIons) {
+    if (ion.overridesIonId !== null) {
+      if (!BUNDLED_IDS.has(ion.overridesIonId)) continue;
+      let editId = newId('ionedit');
+      let editScope: string | null = projectId;
+      if (ion.scope === 'shared') {
+        // A shared edit applies to no project (only per-project edits do); keep it as it was.
+        const existing = await db.customIons.get(ion.id);
+        if (existing && existing.projectId === null && existing.overridesIonId === ion.overridesIonId && sameJson(existing.ion, ion.ion)) {
+          continue;
+        }
+        if (!existing && !BUNDLED_IDS.has(ion.id)) {
+          editId = ion.id;
+          editScope = null;
+        }
+      }
+      ions.push(
+        customIonRecordSchema.parse({
+          id: editId,
+          schemaVersion: RECORD_SCHEMA_VERSION,
+          projectId: editScope,
+          overridesIonId: ion.overridesIonId,
+          ion: ion.ion,
+          updatedAt: ion.updatedAt,
+        }),
+      );
+      continue;
+    }
+    let id = ion.id;
+    let projectScope: string | null = projectId;
+    if (ion.scope === 'shared' && !BUNDLED_IDS.has(ion.id)) {
+      const existing = await db.customIons.get(ion.id);
+      if (existing && existing.projectId === null && existing.overridesIonId === null && sameJson(existing.ion, ion.ion)) {
+        ionIdMap.set(ion.id, ion.id);
+        continue; // the same shared ion is already here
+      }
+      if (!existing) projectScope = null;
+      else id = newId('inhouse');
+    } else {
+      id = newId('inhouse');
+    }
+    ionIdMap.set(ion.id, id);
+    ions.push(
+      customIonRecordSchema.parse({
+        id,
+        schemaVersion: RECORD_SCHEMA_VERSION,
+        projectId: projectScope,
+        overridesIonId: null,
+        ion: { ...ion.ion, id },
+        updatedAt: ion.updatedAt,
+      }),
+    );
+  }
+  return { ions, ionIdMap };
+}
+
 /**
  * Write a validated project file into the database in ONE transaction: either every record lands or
  * none does. Candidate, measurement and project-scoped ion ids are fresh, so a file can be imported
- * beside the project it came from. A shared custom ion keeps its id when that id is free or already
- * holds the same ion; otherwise it comes in as an ion of the imported project under a new id.
+ * beside the project it came from; custom ions are placed by {@link placeImportedIons}.
  */
 export async function writeProjectFile(file: ProjectFile, target: ImportMode): Promise<ImportOutcome> {
   const db = getDb();
@@ -78,35 +156,7 @@ export async function writeProjectFile(file: ProjectFile, target: ImportMode): P
       projectId = newId('prj');
     }
 
-    const ionIdMap = new Map<string, string>();
-    const ions: CustomIonRecord[] = [];
-    for (const ion of file.customIons) {
-      let id = ion.id;
-      let projectScope: string | null = ion.scope === 'project' ? projectId : null;
-      if (ion.scope === 'shared') {
-        const existing = await db.customIons.get(ion.id);
-        if (existing && existing.projectId === null && sameJson(existing.ion, ion.ion) && existing.overridesIonId === ion.overridesIonId) {
-          continue; // the same shared ion is already here
-        }
-        if (existing) {
-          id = newId('ion');
-          projectScope = projectId;
-        }
-      } else {
-        id = newId('ion');
-      }
-      ionIdMap.set(ion.id, id);
-      ions.push(
-        customIonRecordSchema.parse({
-          id,
-          schemaVersion: RECORD_SCHEMA_VERSION,
-          projectId: projectScope,
-          overridesIonId: ion.overridesIonId,
-          ion: ion.ion,
-          updatedAt: ion.updatedAt,
-        }),
-      );
-    }
+    const { ions, ionIdMap } = await placeImportedIons(file.customIons, projectId);
 
     const candidateIdMap = new Map<string, string>();
     const candidates: CandidateRecord[] = file.candidates.map((c) => {

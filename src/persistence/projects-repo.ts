@@ -252,17 +252,25 @@ export const projectsRepo = {
         archived: false,
         isDemo: false,
       });
+      // The copy's own in-house ions get new ids (record and library id alike, so that no two
+      // records claim one library id); its shortlist follows them.
+      const ionIds = new Map<string, string>();
+      const customIons = source.customIons.map((ion) => {
+        if (ion.overridesIonId !== null) return { ...ion, id: newId('ionedit'), projectId: project.id };
+        const copyId = newId('inhouse');
+        ionIds.set(ion.id, copyId);
+        return { ...ion, id: copyId, projectId: project.id, ion: { ...ion.ion, id: copyId } };
+      });
       const candidateIds = new Map<string, string>();
       const candidates = source.candidates.map((c) => {
         const copyId = newId('cand');
         candidateIds.set(c.id, copyId);
-        return { ...c, id: copyId, projectId: project.id };
+        return { ...c, id: copyId, projectId: project.id, ionId: ionIds.get(c.ionId) ?? c.ionId };
       });
       const measurements = source.measurements.flatMap((m) => {
         const candidateId = candidateIds.get(m.candidateId);
         return candidateId ? [{ ...m, id: newId('meas'), projectId: project.id, candidateId }] : [];
       });
-      const customIons = source.customIons.map((ion) => ({ ...ion, id: newId('ion'), projectId: project.id }));
       await db.projects.add(project);
       await db.candidates.bulkAdd(candidates);
       await db.measurements.bulkAdd(measurements);

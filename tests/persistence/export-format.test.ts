@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import fc from 'fast-check';
+import { inHouseIonPayload } from '../support/in-house-ion';
 import {
   PROJECT_FILE_FORMAT,
   PROJECT_FILE_MAX_BYTES,
@@ -53,7 +54,7 @@ function bundle(): ProjectBundle {
       { id: 'meas_1', schemaVersion: 1, projectId: 'prj_1', candidateId: 'cand_a', kind: 'solubility', value: 1.2, unit: 'mg/mL', ph: 1.2, temperatureK: 310.15, medium: 'SGF', text: '', recordedAt: '2026-11-03T00:00:00.000Z' },
     ],
     customIons: [
-      { id: 'ion_x', schemaVersion: 1, projectId: 'prj_1', overridesIonId: null, ion: { name: 'In-house sulfonate' }, updatedAt: '2026-11-01T00:00:00.000Z' },
+      { id: 'ion_x', schemaVersion: 1, projectId: 'prj_1', overridesIonId: null, ion: inHouseIonPayload('ion_x'), updatedAt: '2026-11-01T00:00:00.000Z' },
     ],
   };
 }

@@ -7,6 +7,7 @@ import { candidatesRepo } from '@/persistence/candidates-repo';
 import { measurementsRepo } from '@/persistence/measurements-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
+import { inHouseIon } from '../support/in-house-ion';
 import { ProjectFileError, parseProjectFileText, type ProjectFile } from '@/persistence/export-format';
 import { exportProjectText, importProjectText, loadProjectBundle, writeProjectFile } from '@/persistence/import-project';
 
@@ -26,7 +27,9 @@ async function snapshot() {
 /** The content of a project without ids, dates of storage or flags set by the import itself. */
 async function content(projectId: string) {
   const b = await loadProjectBundle(projectId);
-  const ionName = new Map(b.customIons.map((i) => [i.id, JSON.stringify(i.ion)]));
+  // An in-house ion's library id (`ion.id`) is its record id: an id like the others, left out here.
+  const withoutId = ({ id: _id, ...ion }: Record<string, unknown>) => ion;
+  const ionName = new Map(b.customIons.map((i) => [i.id, JSON.stringify(withoutId(i.ion))]));
   const byCandidate = new Map(b.candidates.map((c) => [c.id, `${ionName.get(c.ionId) ?? c.ionId}`]));
   return {
     name: b.project.name,
@@ -47,7 +50,7 @@ async function content(projectId: string) {
       .sort((x, y) => (x.recordedAt + x.kind).localeCompare(y.recordedAt + y.kind)),
     // Ids are random, so the database's order of ions is too: compare them as a sorted list.
     customIons: b.customIons
-      .map((i) => ({ ion: i.ion, overridesIonId: i.overridesIonId, scoped: i.projectId !== null }))
+      .map((i) => ({ ion: withoutId(i.ion), overridesIonId: i.overridesIonId, scoped: i.projectId !== null }))
       .sort((x, y) => JSON.stringify(x).localeCompare(JSON.stringify(y))),
   };
 }
@@ -55,7 +58,7 @@ async function content(projectId: string) {
 async function seed() {
   const p = await projectsRepo.create('Screen of the demo compound', DEMO_COMPOUND);
   await projectsRepo.updateSettings(p.id, { ...p.settings, microenvironmentPh: 6.2, extra: { weights: { dose: 3 } } });
-  const own = await customIonsRepo.save({ projectId: p.id, overridesIonId: null, ion: { name: 'In-house ion', charge: -1 } });
+  const own = await customIonsRepo.saveInHouse(inHouseIon(customIonsRepo.newInHouseId(), 'In-house ion'), p.id);
   const shared = await customIonsRepo.save({ projectId: null, overridesIonId: 'mesylate', ion: { name: 'Mesylate, lab pKa', charge: -1 } });
   const c1 = await candidatesRepo.add(p.id, 'chloride');
   const c2 = await candidatesRepo.add(p.id, 'sulfate', { drugPerSalt: 2, counterIonPerSalt: 1 });

@@ -57,6 +57,7 @@ export function mergeLibrary(
   const rejected: { recordId: string; reason: string }[] = [];
   const edits = new Map<string, StoredIonRecord>();
   const inHouse: LibraryIon[] = [];
+  const bundledIds = new Set(bundled.map((b) => b.id));
   for (const r of records) {
     if (r.overridesIonId) {
       if (r.projectId === projectId) edits.set(r.overridesIonId, r);
@@ -66,6 +67,12 @@ export function mergeLibrary(
     const parsed = counterIonSchema.safeParse(r.ion);
     if (!parsed.success) {
       rejected.push({ recordId: r.id, reason: parsed.error.issues[0]?.message ?? 'invalid' });
+      continue;
+    }
+    // An in-house ion never replaces a bundled ion or another in-house ion (only an explicit
+    // per-project edit changes a bundled ion): a record whose library id is taken is left out.
+    if (bundledIds.has(parsed.data.id) || inHouse.some((i) => i.id === parsed.data.id)) {
+      rejected.push({ recordId: r.id, reason: `its id "${parsed.data.id}" belongs to another library ion` });
       continue;
     }
     inHouse.push({ ...(parsed.data as CounterIon), origin: 'in-house', editedFields: [], recordId: r.id });

@@ -128,3 +128,21 @@ describe('Counter-ions area: reference ions', () => {
     expect(within(header).getByText('reference only')).toBeInTheDocument();
   });
 });
+
+describe('an unreadable stored in-house record (issue 13)', () => {
+  it('is named once with its reason; acknowledged, it is not reported again in any project', async () => {
+    const { getDb } = await import('@/persistence/db');
+    await getDb().customIons.put({ id: 'inhouse_bad', schemaVersion: 1, projectId: null, overridesIonId: null, ion: { name: 5 }, updatedAt: 'x' });
+    const { user, table } = await setup();
+    const alert = await screen.findByRole('alert');
+    expect(alert).toHaveTextContent('inhouse_bad');
+    // The library itself still works.
+    expect(within(table).getAllByRole('row').length).toBeGreaterThan(10);
+    await user.click(screen.getByRole('button', { name: 'Keep them, stop telling me' }));
+    await waitFor(() => expect(screen.queryByRole('alert')).not.toBeInTheDocument());
+    const other = await projectsRepo.create('Another project', compound);
+    render(<CounterIonsPanel project={other} />);
+    await screen.findAllByRole('table', { name: 'Counter-ion library' });
+    expect(screen.queryByText(/inhouse_bad/)).not.toBeInTheDocument();
+  });
+});

@@ -5,7 +5,8 @@ import { CautionNote } from '@/components/Cautions';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import type { ProjectRecord } from '@/persistence/records';
 import { useCounterIonsViewStore, type ClassFilter } from '../counter-ions-store';
-import { useProjectLibrary } from '../hooks/use-project-library';
+import { customIonsRepo } from '@/persistence/custom-ions-repo';
+import { acknowledgeRejected, useProjectLibrary } from '../hooks/use-project-library';
 import { CounterIonRow } from './CounterIonRow';
 import { InHouseIonForm } from './InHouseIonForm';
 import '../counter-ions.css';
@@ -23,7 +24,7 @@ const CLASS_OPTIONS: { value: ClassFilter; label: string }[] = [
  */
 export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
   const view = useCounterIonsViewStore();
-  const { ions, loading, rejectedCount } = useProjectLibrary(project.id);
+  const { ions, loading, rejected } = useProjectLibrary(project.id);
   const shortlist = useLiveQuery(() => candidatesRepo.listForProject(project.id), [project.id], []);
   const compound = project.compound;
   const pairedKind = compound.kind === 'base' ? 'anion' : 'cation';
@@ -140,10 +141,26 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         </div>
       </form>
 
-      {rejectedCount > 0 ? (
-        <p className="field-error" role="alert">
-          {rejectedCount} stored in-house record(s) failed validation and are not shown.
-        </p>
+      {rejected.length > 0 ? (
+        <div className="field-error ion-rejected" role="alert">
+          <p>
+            {rejected.length} stored in-house record(s) cannot be used and are left out of every project’s
+            library:
+          </p>
+          <ul>
+            {rejected.map((r) => (
+              <li key={r.recordId}>
+                <code>{r.recordId}</code>: {r.reason}
+              </li>
+            ))}
+          </ul>
+          <button type="button" onClick={() => void Promise.all(rejected.map((r) => customIonsRepo.remove(r.recordId)))}>
+            Delete these records
+          </button>{' '}
+          <button type="button" onClick={() => void acknowledgeRejected(rejected.map((r) => r.recordId))}>
+            Keep them, stop telling me
+          </button>
+        </div>
       ) : null}
 
       <p className="muted" role="status" aria-live="polite">
