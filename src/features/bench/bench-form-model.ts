@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CELSIUS_ZERO_K } from '@/chem';
 import type { MeasurementKind } from '@/persistence/records';
 import type { NewMeasurement } from '@/persistence/measurements-repo';
 
@@ -25,6 +26,16 @@ export const MEASUREMENT_KINDS: Record<
 > = {
   solubility: { label: 'Solubility', unit: 'mg/mL', valueLabel: 'Solubility (as salt)', min: 0, max: 1000, conditions: ['medium', 'ph', 'temperatureC'] },
   'melting-point': { label: 'Melting point', unit: '°C', valueLabel: 'Melting point (onset)', min: -50, max: 500, conditions: [] },
+  // DSC peak area per mole of salt formula unit; with the melting point it gives the salt's ideal
+  // (Schröder–van Laar) solubility, which sharpens the salt-solubility estimate.
+  'fusion-enthalpy': {
+    label: 'Enthalpy of fusion (DSC)',
+    unit: 'kJ/mol',
+    valueLabel: 'ΔH_fus per formula unit',
+    min: 0.5,
+    max: 300,
+    conditions: [],
+  },
   'solution-enthalpy': {
     label: 'Enthalpy of solution (calorimetry)',
     unit: 'kJ/mol',
@@ -62,8 +73,8 @@ const finiteIn = (label: string, unit: string, min: number, max: number) =>
     .min(min, `${label} must be at least ${min}${unit ? ' ' + unit : ''}`)
     .max(max, `${label} must be at most ${max}${unit ? ' ' + unit : ''}`);
 
-/** 0 °C = 273.15 K (definition of the Celsius scale, SI Brochure 9th ed. 2019). */
-export const CELSIUS_ZERO_K = 273.15;
+/** 0 °C in kelvin: the core's constant (src/chem/units/temperature.ts), re-exported for the bench area. */
+export { CELSIUS_ZERO_K };
 
 /**
  * Validate a measurement draft into a record for `measurementsRepo.add`, or into field messages.

@@ -1,4 +1,4 @@
-import { screeningSettingsSchema, type ScreeningSettings } from '@/chem';
+import { celsiusToKelvin, screeningSettingsSchema, type ScreeningSettings } from '@/chem';
 import { projectSettingsSchema, type ProjectSettings } from '@/persistence/records';
 
 /** The screening-conditions form as typed. */
@@ -70,7 +70,7 @@ export function conditionsFromDraft(
     gastricPh: num.gastricPh,
     gastricChlorideM: num.gastricChlorideM,
     microenvironmentPh: num.microenvironmentPh,
-    temperatureK: num.temperatureC! + 273.15,
+    temperatureK: celsiusToKelvin(num.temperatureC!),
     activityModel: draft.activityModel,
     deltaPkaBands: { cocrystalBelow: num.cocrystalBelow, saltAbove: num.saltAbove, stableSaltMin: num.stableSaltMin },
   });

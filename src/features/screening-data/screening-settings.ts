@@ -1,8 +1,5 @@
-import { screeningSettingsSchema, type ScreeningSettings } from '@/chem';
+import { CELSIUS_ZERO_K, screeningSettingsSchema, type ScreeningSettings } from '@/chem';
 import type { ProjectRecord } from '@/persistence/records';
-
-/** 0 °C in kelvin (definition of the Celsius scale, SI Brochure, 9th ed., 2019). */
-const CELSIUS_ZERO_K = 273.15;
 
 /** Key of the screening block in `project.settings.extra`. */
 export const SCREENING_SETTINGS_KEY = 'screening';

@@ -1,5 +1,7 @@
 import {
+  CELSIUS_ZERO_K,
   CRITERIA,
+  ICH_M9_VOLUME_ML,
   rankCandidates,
   type Estimate,
   type ModelValidation,
@@ -14,10 +16,6 @@ import { energyCycleOf } from '@/features/screening-data/energy-cycle';
 import type { ProjectRecord } from '@/persistence/records';
 import type { SheetCell, SheetColumn, SheetModel, SheetRow, SheetSetting, ValueOrigin } from './sheet.types';
 
-/** 0 °C in kelvin (definition of the Celsius scale, SI Brochure, 9th ed., 2019). */
-const CELSIUS_ZERO_K = 273.15;
-/** ICH M9 (2019): the dose is dissolved in 250 mL for the dose number. */
-const ICH_M9_VOLUME_ML = 250;
 /** The charts' palette has eight distinguishable series; more salts would be unreadable on paper. */
 const MAX_CHART_SALTS = 7;
 
