@@ -3,7 +3,7 @@ import type { ProjectRecord } from '@/persistence/records';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
 import { FieldMessage, describedBy } from '@/components/FieldMessage';
-import { reportStorageError } from '@/stores/storage-problem-store';
+import { reportStorageError, useStorageProblemStore } from '@/stores/storage-problem-store';
 import type { Compound } from '@/chem';
 import {
   DRAFT_KEYS,
@@ -78,6 +78,8 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
   const [saveState, setSaveState] = useState<SaveState>('saved');
   const projectId = project.id;
   const structure = useStructureCheck(project.compound.smiles);
+  // A lost database connection outranks this panel's own state (the banner says why).
+  const connectionLost = useStorageProblemStore((s) => s.connectionLost !== null);
 
   /** The latest draft (event handlers and async saves read it, never a stale render's copy). */
   const draftRef = useRef(draft);
@@ -244,7 +246,7 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     <section aria-labelledby="compound-title" className="panel">
       <header className="panel-head">
         <h2 id="compound-title">Compound</h2>
-        <SaveBadge state={saveState} />
+        <SaveBadge state={connectionLost ? 'lost' : saveState} />
       </header>
       {project.isDemo ? (
         <p className="demo-banner" role="note">
@@ -318,15 +320,21 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
   );
 }
 
-function SaveBadge({ state }: { state: SaveState }) {
-  const text: Record<SaveState, string> = {
+function SaveBadge({ state }: { state: SaveState | 'lost' }) {
+  const text: Record<SaveState | 'lost', string> = {
+    lost: 'Not saved: the database was closed — reload this tab',
     saved: 'All changes saved',
     pending: 'Saving…',
     invalid: 'Not saved: fix the marked field',
     error: 'Could not save — your last saved values are kept',
   };
   return (
-    <span className={`save-badge save-${state}`} role="status" aria-live="polite">
+    <span
+      className={`save-badge save-${state === 'lost' ? 'error' : state}`}
+      role="status"
+      aria-live="polite"
+      aria-label={`Save state: ${text[state]}`}
+    >
       {text[state]}
     </span>
   );
