@@ -62,6 +62,7 @@ export type CandidateRecord = z.infer<typeof candidateRecordSchema>;
 export const measurementKindSchema = z.enum([
   'solubility',
   'melting-point',
+  'fusion-enthalpy',
   'solution-enthalpy',
   'mass-gain-80rh',
   'crystallinity',

@@ -21,8 +21,9 @@ const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 1 ? x.toPrecision(3) 
 /**
  * What the workbench predicts for a measurement of a candidate: the salt's solubility at the
  * measured pH (as salt, from the screen's profile and K_sp, with its ±1σ range), its ΔH_sol from the
- * thermochemical cycle, the Ph. Eur. 5.11 class of a mass gain. No model exists for melting points
- * or crystallinity here, and the text says so.
+ * thermochemical cycle, the Ph. Eur. 5.11 class of a mass gain; beside a melting point or a DSC
+ * enthalpy of fusion, the salt's water solubility that those data now sharpen. No model predicts
+ * the melting point or crystallinity themselves, and the text says so.
  */
 export function predictionFor(m: MeasurementRecord, data: ProjectScreening | undefined): Prediction {
   if (!data) return { text: 'screen not available', kind: 'none', basis: '' };
@@ -68,7 +69,22 @@ export function predictionFor(m: MeasurementRecord, data: ProjectScreening | und
       return { text: `Ph. Eur. 5.11 class: ${cls}${note ? `. Library note: ${note}` : ''}`, kind: 'classification', basis: 'European Pharmacopoeia 5.11' };
     }
     case 'melting-point':
-      return { text: 'no melting-point model in the workbench', kind: 'none', basis: '' };
+    case 'fusion-enthalpy': {
+      const sw = row.saltWaterSolubility;
+      if (!sw) return { text: 'no salt-solubility estimate for this salt', kind: 'none', basis: '' };
+      const sig = sw.log10DrugM.uncertainty;
+      const s = sw.mgPerMlAsSalt;
+      const used = sw.origin === 'model+fusion'
+        ? 'uses your fusion data (Schröder–van Laar crystal term)'
+        : sw.origin === 'measured'
+          ? 'rests on your measured solubility'
+          : 'does not use melting data';
+      return {
+        text: `salt in water ≈ ${fmt(s)} mg/mL as salt (±1σ ${fmt(s / 10 ** sig)}–${fmt(s * 10 ** sig)}); the estimate ${used}. No model predicts the melting point itself`,
+        kind: sw.origin === 'measured' ? 'from-measured' : 'estimate',
+        basis: sw.origin === 'model+fusion' ? 'salt-solubility model + fusion data' : sw.origin === 'measured' ? 'measured solubility' : 'salt-solubility model',
+      };
+    }
     default:
       return { text: '—', kind: 'none', basis: '' };
   }
