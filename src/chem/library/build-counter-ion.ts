@@ -7,15 +7,8 @@ import { SRC_FORMULA, SRC_SMILES } from './sources';
  * One row of the library as a reviewer reads it. Molar masses, formulas of other charge states and
  * the per-field source record are derived from it by {@link buildCounterIon}, so no mass is typed by hand.
  */
-export interface CounterIonRow {
-  id: string;
-  name: string;
-  synonyms: string[];
-  kind: 'anion' | 'cation';
-  /** Hill formula of the ion in its usual charge state, without the charge. */
-  formula: string;
-  charge: number;
-  ionSmiles: string;
+export interface CounterIonRow
+  extends Pick<CounterIon, 'id' | 'name' | 'synonyms' | 'kind' | 'formula' | 'charge' | 'ionSmiles'> {
   /** [aromatic, non-aromatic] ring counts of the ion. */
   rings: [number, number];
   parent: { name: string; formula: string; smiles: string };
