@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { rmSync } from 'node:fs';
+import { readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { buildCompiledCli } from './support/compiled-cli';
@@ -34,6 +34,30 @@ describe('the compiled saltsmith command', () => {
     expect(saltsmith(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--dosee', '1']).status).toBe(2);
     expect(saltsmith(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--volume', '0']).status).toBe(1);
   });
+
+  it('loads openchemlib only when a SMILES needs it (no static import in the build)', () => {
+    const dist = join(cli.root, 'dist-cli');
+    const code = readdirSync(dist).map((f) => readFileSync(join(dist, f), 'utf8')).join('\n');
+    expect(/import\(["'`]openchemlib["'`]\)/.test(code)).toBe(true);
+    expect(/from\s*["'`]openchemlib["'`]/.test(code)).toBe(false);
+  });
+
+  it('screens a batch on worker threads with the same rows, in input order, as on one thread', () => {
+    // Made-up compounds by formula, with different ion lists so the threads finish out of order.
+    const ions = ['chloride;mesylate', 'sulfate', '', 'tosylate;besylate;maleate', 'chloride'];
+    const lines = Array.from({ length: 24 }, (_, i) => `C${i},,,C${14 + (i % 7)}H${18 + (i % 5)}N2O2,base,${(5 + (i % 6) * 0.7).toFixed(1)},,${(0.01 * (1 + (i % 4))).toFixed(2)},,,100,${ions[i % ions.length]}`);
+    const file = join(cli.root, 'many.csv');
+    writeFileSync(file, ['id,name,smiles,formula,kind,pkas,charge,s0_mg_per_ml,mp_c,logp,dose_mg,ions', ...lines].join('\n') + '\n');
+    const one = saltsmith(['screen', '--batch', file, '--jobs', '1', '--iterations', '30']);
+    const two = saltsmith(['screen', '--batch', file, '--jobs', '2', '--iterations', '30']);
+    expect(one.status).toBe(0);
+    expect(two.status).toBe(0);
+    expect(two.stderr).toMatch(/24 of 24 compound\(s\) screened on 2 thread\(s\)/);
+    expect(one.stderr).toMatch(/on 1 thread\(s\)/);
+    expect(two.stdout).toBe(one.stdout);
+    const ids = two.stdout.split('\n').filter((l) => /^C\d+,/.test(l)).map((l) => l.split(',')[0]);
+    expect([...new Set(ids)]).toEqual(lines.map((l) => l.split(',')[0]));
+  }, 60_000);
 
   it('says how to build it when the compiled file is missing', () => {
     rmSync(join(cli.root, 'dist-cli', 'saltsmith.js'));

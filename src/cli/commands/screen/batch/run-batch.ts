@@ -115,7 +115,7 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
         header = checkHeader(csvCells(text).map((c) => c.trim()));
         continue;
       }
-      let raw: RawRow;
+      let raw: RawRow | undefined;
       let id = '';
       let spec;
       try {
@@ -140,6 +140,7 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
         if (earlier !== undefined) throw valueError('id', `"${id}" was already used on line ${earlier}`, 'a unique id per compound');
         seenIds.set(id, line.lineNo);
       } catch (err) {
+        if (id === '' && typeof raw?.id === 'string') id = raw.id.trim().slice(0, 120);
         pending.set(seq++, { lineNo: line.lineNo, id, name: '', result: null, error: describeFailure(err).message });
         await flush();
         continue;
@@ -165,6 +166,6 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     await screener.close();
   }
   bar?.finish(bytes, compounds);
-  writeLine(io.stderr, `saltsmith screen --batch: ${seq - failed} of ${seq} compound(s) screened, ${rowsOut} row(s)${failed ? `, ${failed} failed${flags.errors ? ` (see ${flags.errors})` : ''}` : ''}`);
+  writeLine(io.stderr, `saltsmith screen --batch: ${seq - failed} of ${seq} compound(s) screened on ${screener.threads} thread(s), ${rowsOut} row(s)${failed ? `, ${failed} failed${flags.errors ? ` (see ${flags.errors})` : ''}` : ''}`);
   return failed > 0 ? 1 : 0;
 }

@@ -44,13 +44,18 @@ function queue<T>() {
 }
 
 export function createScreener(jobs: number, settings: BatchSettings): Screener {
-  const done = queue<{ seq: number; result: ScreenOneResult }>();
+  const done = queue<{ seq: number; result: ScreenOneResult } | { failure: Error }>();
+  const next = async () => {
+    const m = await done.pop();
+    if ('failure' in m) throw m.failure;
+    return m;
+  };
   const url = jobs > 1 ? workerFileUrl() : null;
   if (!url) {
     return {
       threads: 1,
       submit: (seq, spec) => void screenOne(spec, settings).then((result) => done.push({ seq, result })),
-      next: () => done.pop(),
+      next,
       close: async () => undefined,
     };
   }
@@ -61,9 +66,7 @@ export function createScreener(jobs: number, settings: BatchSettings): Screener 
       load[i]!--;
       done.push(m);
     });
-    w.on('error', (err) => {
-      throw err;
-    });
+    w.on('error', (err) => done.push({ failure: new Error(`a screening thread failed: ${err.message}`) }));
   }
   return {
     threads: jobs,
@@ -74,7 +77,7 @@ export function createScreener(jobs: number, settings: BatchSettings): Screener 
       const msg: WorkerRequest = { seq, spec, settings };
       workers[best]!.postMessage(msg);
     },
-    next: () => done.pop(),
+    next,
     close: async () => {
       await Promise.all(workers.map((w) => w.terminate()));
     },
