@@ -131,6 +131,14 @@ describe('saltsmith screen --batch', () => {
     expect(bar.render(250, 50)).toMatch(/\[######\.{18}\]\s+25 %\s+50 compounds\s+25\/s\s+0:06 left/);
   });
 
+  it('neutralises formula-like text cells, Unicode look-alikes included (OWASP "CSV Injection")', async () => {
+    const names = ['=HYPERLINK("x")', '\uFE66cmd', '\uFE62 1', '\u200B=1+1', '\uFF0B2'];
+    const file = batchFile('inject.csv', names.map((n, i) => `I${i},"${n.replace(/"/g, '""')}",,C16H19N3O2,base,6.4,,0.1,,,100,chloride`));
+    const r = await runCli(['screen', '--batch', file, '--jobs', '1', ...ITER]);
+    expect(r.code).toBe(0);
+    expect(parseCsv(r.out).map((x) => x.compound_name)).toEqual(names.map((n) => `'${n}`));
+  });
+
   it('runs the fictional example file in fixtures/batch', async () => {
     const r = await runCli(['screen', '--batch', 'fixtures/batch/fictional-compounds.csv', '--top', '3', '--jobs', '1', ...ITER]);
     expect(r.code).toBe(0);

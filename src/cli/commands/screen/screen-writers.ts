@@ -1,6 +1,5 @@
 import Papa from 'papaparse';
-import type { ScreenResult } from '@/chem';
-import { safeCsvCell } from '../../output/csv-cell';
+import { safeCsvCell, type ScreenResult } from '@/chem';
 import { SCREENING_CAUTIONS } from '../../output/cautions';
 import type { ScreenTableRow } from './screen-table';
 
