@@ -19,11 +19,11 @@ export const DEMO_COMPOUND: Compound = {
   meltingPointC: 184,
   logP: 3.3,
   logPOrigin: 'measured',
-  doseMg: 200,
+  doseMg: 100,
   densityGPerCm3: null,
   notes:
     'Fictional compound for the demo project. Every number here is invented; replace it with your own compound.',
 };
 
 /** Counter-ion ids shortlisted in the demo project (bundled library ids). */
-export const DEMO_SHORTLIST = ['chloride', 'mesylate', 'sulfate', 'maleate', 'tosylate'];
+export const DEMO_SHORTLIST = ['chloride', 'mesylate', 'sulfate', 'maleate', 'tosylate', 'napsylate'];
