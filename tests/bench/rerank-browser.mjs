@@ -4,12 +4,16 @@
 //
 //   node tests/bench/rerank-browser.mjs            (builds into /tmp/saltsmith-bench-dist first)
 //   SALTSMITH_SKIP_BUILD=1 SALTSMITH_OUT_DIR=… node tests/bench/rerank-browser.mjs
+//   SALTSMITH_BENCH_JSON=out.json …      (also write the summary there; tests/bench/run-all.mjs does)
+//
+// It fails (exit 1) when the rows on screen are not in rank order during a movement or the document
+// order has not caught up after it ends.
 //
 // The 60 candidates are written straight into the browser's IndexedDB (records shaped as
 // src/persistence/records.ts describes) for the fictional demo project; the demo's numbers are a
 // workload here, not data.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
@@ -18,7 +22,7 @@ import { freePort, startPreview } from '../e2e/support/server.mjs';
 
 const outDir = process.env.SALTSMITH_OUT_DIR ?? '/tmp/saltsmith-bench-dist';
 if (!process.env.SALTSMITH_SKIP_BUILD) {
-  const b = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--outDir', outDir, '--emptyOutDir'], { stdio: 'inherit' });
+  const b = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--bypass-lock', '--outDir', outDir, '--emptyOutDir'], { stdio: 'inherit' });
   if (b.status !== 0) process.exit(b.status ?? 1);
 }
 const server = await startPreview(await freePort(), ['--outDir', outDir]);
@@ -99,11 +103,67 @@ try {
   times.sort((a, b) => a - b);
   const commitMedianMs = await page.evaluate(() => window.__commitMedian);
   const layoutMedianMs = await page.evaluate(() => window.__layout.sort((a, b) => a - b)[30]);
-  console.log(JSON.stringify({ commitMedianMs: +commitMedianMs.toFixed(1), layoutMedianMs: +layoutMedianMs.toFixed(1) }));
   const table = (await page.evaluate(() => window.__table)).sort((a, b) => a - b);
-  const q = (arr, f) => +arr[Math.min(arr.length - 1, Math.floor(f * arr.length))].toFixed(1);
-  console.log(JSON.stringify({ candidatesOnScreen: ranked, movements: times.length, medianMs: +times[30].toFixed(1), p95Ms: +times[56].toFixed(1), maxMs: +times[59].toFixed(1), note: 'slider: input event → React commit → next frame, Chromium headless, 1280×800' }, null, 2));
-  console.log(JSON.stringify({ tableUpdates: table.length, medianMs: q(table, 0.5), p95Ms: q(table, 0.95), maxMs: q(table, 1), note: 'table: input event → re-ranked table painted (deferred render)' }, null, 2));
+  const q = (arr, f) => (arr.length ? +arr[Math.min(arr.length - 1, Math.floor(f * arr.length))].toFixed(1) : null);
+
+  // The shown order must be the ranking: rows read top to bottom on screen (transforms included)
+  // carry ranks 1, 2, 3… and do not overlap. Checked mid-movement and after the movement ends.
+  const shownOrder = () =>
+    page.evaluate(() => {
+      const trs = [...document.querySelectorAll('table tbody')].find((b) => b.closest('table')?.querySelector('caption')?.textContent?.startsWith('Ranked candidates'));
+      const rows = [...trs.rows].map((tr) => ({ rank: tr.cells[0].textContent.trim(), top: tr.getBoundingClientRect().top, bottom: tr.getBoundingClientRect().bottom }));
+      const onScreen = [...rows].sort((a, b) => a.top - b.top);
+      const overlaps = onScreen.slice(1).filter((r, i) => r.top < onScreen[i].bottom - 1).length;
+      return { onScreen: onScreen.map((r) => r.rank), inDocument: rows.map((r) => r.rank), overlaps };
+    });
+  const ranksInOrder = (ranks) => ranks.filter((r) => r !== '—').every((r, i, a) => i === 0 || Number(a[i - 1]) <= Number(r));
+  const during = await shownOrder();
+  if (!ranksInOrder(during.onScreen) || during.overlaps > 0) {
+    throw new Error(`rows on screen are not in rank order during the movement: ${JSON.stringify(during)}`);
+  }
+  // End the movement (the slider's change event) and time until the document order has caught up.
+  const settleMs = await page.evaluate(async () => {
+    const slider = [...document.querySelectorAll('input[type=range]')].find((e) => e.labels?.[0]?.textContent === 'Tablet mass');
+    const t0 = performance.now();
+    slider.dispatchEvent(new Event('change', { bubbles: true }));
+    await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+    return performance.now() - t0;
+  });
+  const after = await shownOrder();
+  if (!ranksInOrder(after.inDocument) || !ranksInOrder(after.onScreen)) {
+    throw new Error(`document order is not the ranking after the movement ended: ${JSON.stringify(after)}`);
+  }
+
+  // A keyboard step: input and change together (the document order follows at once).
+  const steps = await page.evaluate(async () => {
+    const slider = [...document.querySelectorAll('input[type=range]')].find((e) => e.labels?.[0]?.textContent === 'Tablet mass');
+    const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value').set;
+    const out = [];
+    for (let i = 0; i < 20; i++) {
+      const t0 = performance.now();
+      setter.call(slider, String(((i * 7) % 30) / 10));
+      slider.dispatchEvent(new Event('input', { bubbles: true }));
+      slider.dispatchEvent(new Event('change', { bubbles: true }));
+      await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+      out.push(performance.now() - t0);
+    }
+    return out.sort((a, b) => a - b);
+  });
+
+  const summary = {
+    candidatesOnScreen: ranked,
+    movements: times.length,
+    slider: { medianMs: q(times, 0.5), p95Ms: q(times, 0.95), maxMs: q(times, 1), note: 'input event → React commit → next frame' },
+    table: { updates: table.length, medianMs: q(table, 0.5), p95Ms: q(table, 0.95), maxMs: q(table, 1), note: 'input event → re-ranked table painted' },
+    commitMedianMs: +commitMedianMs.toFixed(1),
+    layoutMedianMs: +layoutMedianMs.toFixed(1),
+    movementEndMs: +settleMs.toFixed(1),
+    keyboardStep: { steps: steps.length, medianMs: q(steps, 0.5), p95Ms: q(steps, 0.95), note: 'input + change (document order follows at once) → next frame' },
+    shownOrderChecked: true,
+    setting: 'Chromium headless, 1280×800, production build',
+  };
+  console.log(JSON.stringify(summary, null, 2));
+  if (process.env.SALTSMITH_BENCH_JSON) writeFileSync(process.env.SALTSMITH_BENCH_JSON, JSON.stringify(summary));
 } finally {
   await ctx.close();
   rmSync(profile, { recursive: true, force: true });

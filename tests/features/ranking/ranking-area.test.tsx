@@ -87,6 +87,27 @@ describe('Ranking area (formula-only compound, so no structure parser is loaded)
     expect(f).toEqual([...f].sort((a, b) => a - b));
   });
 
+  it('folds each candidate’s reasons behind a “Why” button until asked, then lists them', async () => {
+    const user = userEvent.setup();
+    render(<RankingArea project={project} />);
+    const table = await screen.findByRole('table', { name: /Ranked candidates/ }, { timeout: 15000 });
+    const first = rows()[0]!;
+    const why = within(first).getByRole('button', { name: /^Why \(\d+\)$/ });
+    expect(why).toHaveAttribute('aria-expanded', 'false');
+    expect(within(table).queryAllByRole('listitem')).toHaveLength(0);
+    const count = Number(/\((\d+)\)/.exec(why.textContent ?? '')![1]);
+    await user.click(why);
+    expect(why).toHaveAttribute('aria-expanded', 'true');
+    const list = document.getElementById(why.getAttribute('aria-controls')!)!;
+    expect(within(first).getByRole('list')).toBe(list);
+    // Every reason the screen gave for this candidate, in words (plus the rule behind each flag).
+    expect(within(list).getAllByRole('listitem').length).toBeGreaterThanOrEqual(count);
+    expect(list).toHaveTextContent(/ΔpKa|pKa/);
+    await user.click(why);
+    expect(why).toHaveAttribute('aria-expanded', 'false');
+    expect(within(table).queryAllByRole('listitem')).toHaveLength(0);
+  });
+
   it('says what is missing when the compound cannot be screened', async () => {
     await projectsRepo.updateCompound(project.id, { ...project.compound, intrinsicSolubilityMgPerMl: null, meltingPointC: null });
     const fresh = (await projectsRepo.get(project.id))!;

@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { memo, useId, useState } from 'react';
 import { COUNTER_IONS, type ScreeningMedium } from '@/chem';
 import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { projectsRepo } from '@/persistence/projects-repo';
@@ -29,7 +29,15 @@ const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 1 ? x.toFixed(2) : x.
  * the screen as a common ion to the salts of that counter-ion, and shown per candidate as solubility
  * and dose number (ICH M9: highest dose in 250 mL).
  */
-export function BufferMedia({ project, media, rows }: { project: ProjectRecord; media: readonly ScreeningMedium[]; rows: readonly DisplayRow[] }) {
+export const BufferMedia = memo(function BufferMediaView({
+  project,
+  media,
+  rows,
+}: {
+  project: ProjectRecord;
+  media: readonly ScreeningMedium[];
+  rows: readonly DisplayRow[];
+}) {
   const uid = useId();
   const [draft, setDraft] = useState<BufferDraft>(EMPTY_BUFFER);
   const [errors, setErrors] = useState<BufferErrors>({});
@@ -170,4 +178,4 @@ export function BufferMedia({ project, media, rows }: { project: ProjectRecord; 
       </form>
     </section>
   );
-}
+});

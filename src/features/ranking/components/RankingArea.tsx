@@ -1,4 +1,4 @@
-import { memo, useCallback, useDeferredValue, useEffect, useMemo } from 'react';
+import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { rankCandidates, screeningWeightsSchema } from '@/chem';
 import { CAUTION_LINES } from '@/components/Cautions';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
@@ -15,6 +15,9 @@ import { ScreeningConditions } from './ScreeningConditions';
 import { SolubilityPanel } from './SolubilityPanel';
 import { WeightSliders } from './WeightSliders';
 import '../ranking.css';
+
+/** A weight movement has ended when the weights stood still this long (ms) or the slider sent `change`. */
+const SETTLE_MS = 400;
 
 /** The cautions, in full, beside the ranking (not behind a button). */
 export function RankingCautions() {
@@ -85,15 +88,30 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   useEffect(() => resetView(), [project.id, resetView]);
 
   const data = screening.result;
-  // The slider thumb answers at once; the table re-ranks in a deferred render that a newer slider
-  // movement can interrupt, so dragging stays smooth while 60 rows re-order behind it.
-  const deferredWeights = useDeferredValue(weights);
-  const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, deferredWeights) : []), [data, deferredWeights]);
+  // The table re-ranks in the same frame as the slider (its re-ordering is transform-based while the
+  // slider moves, see RankingTable); what is slower to follow — the media table, the chart's top
+  // three, the Monte Carlo — reads a deferred copy that a newer movement can interrupt.
+  const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, weights) : []), [data, weights]);
   const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
+  const deferredWeights = useDeferredValue(weights);
+  const [settleTick, setSettleTick] = useState(0);
+  const onSettle = useCallback(() => setSettleTick((t) => t + 1), []);
+  // A movement also ends when the weights stand still for a moment (a reset, another tab, no `change`).
+  useEffect(() => {
+    const t = setTimeout(onSettle, SETTLE_MS);
+    return () => clearTimeout(t);
+  }, [weights, onSettle]);
+  const deferredRows = useDeferredValue(rows);
+  // The media table follows the ranking when a movement ends (or the screen changes), not during it;
+  // its rows and media come from the same screen.
+  const mediaView = useDeferredValue(
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- rows read at the settle on purpose
+    useMemo(() => ({ rows, media: data?.settings.media ?? [] }), [data, settleTick]),
+  );
   const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
   const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
   const topKey = useDeferredValue(
-    rows
+    deferredRows
       .filter((r) => r.rank !== null && r.rank <= 3)
       .sort((a, b) => a.rank! - b.rank!)
       .map((r) => r.id)
@@ -179,9 +197,10 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
               <WeightSliders
                 weights={weights}
                 onChange={setWeights}
-                onReset={() => setWeights(screeningWeightsSchema.parse({}))}
+                onReset={() => (setWeights(screeningWeightsSchema.parse({})), onSettle())}
+                onSettle={onSettle}
               />
-              <RankingTable rows={rows} onFocus={onFocus} />
+              <RankingTable rows={rows} onFocus={onFocus} settleTick={settleTick} />
             </div>
           </>
         ) : null}
@@ -189,7 +208,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
       {data ? (
         <>
           <ScreeningConditions project={project} settings={data.settings} />
-          <BufferMedia project={project} media={data.settings.media} rows={rows} />
+          <BufferMedia project={project} media={mediaView.media} rows={mediaView.rows} />
           <RobustnessPanel robustness={robustness} labels={labels} />
           <SolubilityPanel data={data} labels={labels} topKey={topKey} doseMg={project.compound.doseMg} />
           <section className="panel" aria-labelledby="assumptions-title">

@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { CRITERIA } from '@/chem';
 import { sig } from '@/components/charts/chart-format';
 import { useRankingViewStore, type RankingSortKey } from '@/stores/ranking-view-store';
@@ -33,40 +33,46 @@ function Sortable({ k, children, title }: { k: RankingSortKey; children: React.R
   );
 }
 
+/**
+ * The score and its parts as one element: the parts are colour stops of a gradient, so a weight
+ * movement changes one style value (repaint only) instead of the widths of seven boxes (layout).
+ */
 function ScoreBar({ row }: { row: DisplayRow }) {
   if (row.score === null) return <span className="muted">—</span>;
-  const parts = CRITERIA.map((k, i) => ({ k, v: row.contributions[k] ?? 0, i }));
-  const text = parts
-    .filter((p) => p.v > 0.0005)
-    .map((p) => `${CRITERION_TEXT[p.k].label} ${(p.v * 100).toFixed(0)}`)
-    .join(', ');
+  let at = 0;
+  const stops: string[] = [];
+  const said: string[] = [];
+  CRITERIA.forEach((k, i) => {
+    const v = row.contributions[k] ?? 0;
+    if (v > 0.0005) said.push(`${CRITERION_TEXT[k].label} ${(v * 100).toFixed(0)}`);
+    if (v <= 0) return;
+    const to = at + v * 100;
+    stops.push(`var(--part-${i}) ${at.toFixed(1)}% ${to.toFixed(1)}%`); // colours: ranking.css
+    at = to;
+  });
+  stops.push(`transparent ${at.toFixed(1)}%`);
   return (
-    <span className="score">
+    <>
       <strong>{row.score.toFixed(2)}</strong>
-      <span className="score-bar" role="img" aria-label={`score parts: ${text}`}>
-        {parts.map((p) => (
-          <span key={p.k} className={`score-part part-${p.i}`} style={{ width: `${p.v * 100}%` }} />
-        ))}
-      </span>
-    </span>
+      <span
+        className="score-bar"
+        role="img"
+        aria-label={`score parts: ${said.join(', ')}`}
+        style={{ backgroundImage: `linear-gradient(to right, ${stops.join(', ')})` }}
+      />
+    </>
   );
 }
 
-function Dose({ d }: { d: (ShownNumber & { pH?: number }) | null }) {
-  if (!d) return <span className="muted">—</span>;
-  const bad = d.value > 1;
+/** A dose number cell: value, the pH it applies at, origin and ±1σ range (colour on the cell itself). */
+function DoseCell({ d }: { d: (ShownNumber & { pH?: number }) | null }) {
+  if (!d) return <td className="muted">—</td>;
   return (
-    <span className={bad ? 'dose-bad' : 'dose-ok'}>
+    <td className={d.value > 1 ? 'dose-bad' : 'dose-ok'}>
       {sig(d.value, 2)}
-      {d.pH !== undefined ? <span className="unit"> at pH {d.pH}</span> : null}{' '}
-      <Origin n={d} />
-      {d.range ? (
-        <span className="range">
-          {' '}
-          ±1σ {sig(d.range[0], 2)}–{sig(d.range[1], 2)}
-        </span>
-      ) : null}
-    </span>
+      {d.pH !== undefined ? <span className="unit"> at pH {d.pH}</span> : null} <Origin n={d} />
+      {d.range ? <span className="range"> ±1σ {sig(d.range[0], 2)}–{sig(d.range[1], 2)}</span> : null}
+    </td>
   );
 }
 
@@ -83,86 +89,180 @@ const CandidateCell = memo(function CandidateCellView({ r, onFocus }: { r: Displ
       ) : (
         r.label
       )}
-      <div className="muted small-note">
+      <span className="muted small-note">
         {r.acceptabilityClass ? `class ${r.acceptabilityClass}` : 'no class'}
         {r.row.hydrateWater ? ` · ${r.row.hydrateWater} H₂O` : ''}
-      </div>
+      </span>
     </th>
   );
 }, (a, b) => sameScreenRow(a, b) && a.onFocus === b.onFocus);
 
-const FixedCells = memo(function FixedCellsView({ r }: { r: DisplayRow }) {
+interface FixedCellsProps {
+  r: DisplayRow;
+  /** The reasons are shown (folded until asked, so a row stays light while the order moves). */
+  open: boolean;
+  onToggle: (id: string) => void;
+}
+
+const FixedCells = memo(function FixedCellsView({ r, open, onToggle }: FixedCellsProps) {
+  const row = r.row;
+  const reasonsId = `why-${r.id}`;
   return (
     <>
       <td>
         {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
-        {r.row.saltFormation ? <div className="muted small-note">{r.row.saltFormation.band}</div> : null}
+        {row.saltFormation ? <span className="muted small-note">{row.saltFormation.band}</span> : null}
       </td>
-      <td>
-        {r.phMax ? (
-          <>
-            {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span> <Origin n={r.phMax} />
-          </>
-        ) : (
-          <span className="muted">none in 0–14</span>
-        )}
-      </td>
-      <td>
-        <Dose d={r.worstDose} />
-      </td>
-      <td>
-        <Dose d={r.gastricDose} />
-      </td>
-      <td>
-        {r.solutionEnthalpy ? (
-          <>
-            {minus(r.solutionEnthalpy.value.toFixed(0))}
-            {r.solutionEnthalpy.sigma !== undefined ? <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span> : null}{' '}
-            <Origin n={r.solutionEnthalpy} />
-          </>
-        ) : (
-          <span className="muted">—</span>
-        )}
-      </td>
+      {r.phMax ? (
+        <td>
+          {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span> <Origin n={r.phMax} />
+        </td>
+      ) : (
+        <td className="muted">none in 0–14</td>
+      )}
+      <DoseCell d={r.worstDose} />
+      <DoseCell d={r.gastricDose} />
+      {r.solutionEnthalpy ? (
+        <td>
+          {minus(r.solutionEnthalpy.value.toFixed(0))}
+          {r.solutionEnthalpy.sigma !== undefined ? <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span> : null}{' '}
+          <Origin n={r.solutionEnthalpy} />
+        </td>
+      ) : (
+        <td className="muted">—</td>
+      )}
       <td>
         {(r.activeFraction * 100).toFixed(0)} %
-        {r.saltMassPerDoseMg !== null ? <div className="muted small-note">{sig(r.saltMassPerDoseMg)} mg salt/dose</div> : null}
+        {r.saltMassPerDoseMg !== null ? <span className="muted small-note">{sig(r.saltMassPerDoseMg)} mg salt/dose</span> : null}
       </td>
       <td className="reasons-cell">
-        {r.row.error ? <p className="field-error">Not screened: {r.row.error}</p> : null}
-        {r.row.flags.filter((f) => f.id !== 'estimated-ksp').map((f) => (
-          <span key={f.id} className={`flag flag-${f.id}`} title={f.rule}>
-            {f.text}
-          </span>
-        ))}
-        {r.row.reasons.length ? (
-          <details>
-            <summary>Why ({r.row.reasons.length})</summary>
-            <ul className="reasons">
-              {r.row.reasons.map((x, i) => (
-                <li key={i} className={`reason reason-${x.kind}`}>
-                  {x.text}
-                </li>
-              ))}
-              {r.row.flags.map((f) => (
-                <li key={`rule-${f.id}`} className="reason reason-note">
-                  Rule behind “{f.text}”: {f.rule}
-                </li>
-              ))}
-            </ul>
-          </details>
+        {row.error ? <p className="field-error">Not screened: {row.error}</p> : null}
+        {row.flags
+          .filter((f) => f.id !== 'estimated-ksp')
+          .map((f) => (
+            <span key={f.id} className={`flag flag-${f.id}`} title={f.rule}>
+              {f.text}
+            </span>
+          ))}
+        {row.reasons.length ? (
+          <button
+            type="button"
+            className="why-button"
+            aria-expanded={open}
+            aria-controls={open ? reasonsId : undefined}
+            onClick={() => onToggle(r.id)}
+          >
+            Why ({row.reasons.length})
+          </button>
+        ) : null}
+        {open && row.reasons.length ? (
+          <ul className="reasons" id={reasonsId}>
+            {row.reasons.map((x, i) => (
+              <li key={i} className={`reason-${x.kind}`}>
+                {x.text}
+              </li>
+            ))}
+            {row.flags.map((f) => (
+              <li key={`rule-${f.id}`} className="reason-note">
+                Rule behind “{f.text}”: {f.rule}
+              </li>
+            ))}
+          </ul>
         ) : null}
       </td>
     </>
   );
-}, sameScreenRow);
+}, (a, b) => sameScreenRow(a, b) && a.open === b.open && a.onToggle === b.onToggle);
 
-/** The ranked shortlist: sortable, each number with unit, uncertainty and origin, reasons in words. */
-/** Memoised: a slider movement re-renders the area at once, the table only when the ranking changes. */
-export const RankingTable = memo(function RankingTableView({ rows, onFocus }: { rows: DisplayRow[]; onFocus?: (id: string) => void }) {
+const sameOrder = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x, i) => x === b[i]);
+
+/**
+ * The ranked shortlist: sortable, each number with unit, uncertainty and origin, reasons in words
+ * (folded until asked).
+ *
+ * Re-ordering while a weight slider is dragged is transform-based (FLIP): the rows keep their place in
+ * the document and each is shifted with `translateY` to its new position, which costs neither a
+ * rebuild of the rows' boxes nor a new layout of the table. The document order — what a screen
+ * reader or a copy reads — follows when the movement ends, which the area signals by changing
+ * `settleTick` (the slider's `change` event: pointer released, key pressed, value typed; or the
+ * weights standing still for a moment). Without `settleTick`, on a new sort column, a different set
+ * of candidates, or in a browser that does no layout (jsdom), the document is re-ordered at once.
+ */
+export const RankingTable = memo(function RankingTableView({
+  rows,
+  onFocus,
+  settleTick,
+}: {
+  rows: DisplayRow[];
+  onFocus?: (id: string) => void;
+  /** Changes when a weight movement ends: the document order catches up with the shown order. */
+  settleTick?: number;
+}) {
   const sortKey = useRankingViewStore((s) => s.sortKey);
   const dir = useRankingViewStore((s) => s.sortDir);
-  const sorted = sortRows(rows, sortKey, dir);
+  const sorted = useMemo(() => sortRows(rows, sortKey, dir), [rows, sortKey, dir]);
+  const shownIds = useMemo(() => sorted.map((r) => r.id), [sorted]);
+  const basis = `${sortKey}|${dir}|${[...shownIds].sort().join('|')}|${settleTick ?? ''}`;
+
+  // The document order of the rows, and what it was last decided on.
+  const [docIds, setDocIds] = useState<readonly string[]>(shownIds);
+  const [docBasis, setDocBasis] = useState(basis);
+  const [measurable, setMeasurable] = useState(false);
+  let order = docIds;
+  if (basis !== docBasis || !measurable || settleTick === undefined) {
+    order = shownIds;
+    if (!sameOrder(docIds, shownIds)) setDocIds(shownIds);
+    if (basis !== docBasis) setDocBasis(basis);
+  }
+  const byId = new Map(sorted.map((r) => [r.id, r]));
+  const docRows = order.map((id) => byId.get(id)!);
+
+  const [openIds, setOpenIds] = useState<ReadonlySet<string>>(() => new Set());
+  const onToggle = useCallback(
+    (id: string) =>
+      setOpenIds((s) => {
+        const next = new Set(s);
+        if (!next.delete(id)) next.add(id);
+        return next;
+      }),
+    [],
+  );
+
+  // FLIP: shift each row from its place in the document to its place in the shown order. The rows'
+  // heights are measured when the document order, the folded reasons or the screen change (a layout
+  // read), not on every weight movement: a movement changes only the rank and the score, whose boxes
+  // have a fixed size (ranking.css), so no height moves.
+  const body = useRef<HTMLTableSectionElement>(null);
+  const measured = useRef<{ key: readonly unknown[]; tops: number[]; pitch: Map<string, number> } | null>(null);
+  const measureKey = [order, openIds, ...docRows.map((r) => r.row)];
+  const rowCount = docRows.length;
+  useLayoutEffect(() => {
+    if (!measurable && (body.current?.rows[0]?.offsetHeight ?? 0) > 0) setMeasurable(true);
+  }, [measurable, rowCount]);
+  useLayoutEffect(() => {
+    const trs = body.current ? [...body.current.rows] : [];
+    if (trs.length === 0 || !measurable) return;
+    const prev = measured.current;
+    let m = prev;
+    if (!prev || prev.key.length !== measureKey.length || prev.key.some((x, i) => x !== measureKey[i])) {
+      for (const tr of trs) tr.style.transform = '';
+      const tops = trs.map((tr) => tr.offsetTop);
+      const pitch = new Map(order.map((id, i) => [id, i + 1 < trs.length ? tops[i + 1]! - tops[i]! : trs[i]!.offsetHeight]));
+      m = measured.current = { key: measureKey, tops, pitch };
+    }
+    const { tops, pitch } = m!;
+    let y = tops[0]!;
+    const target = new Map<string, number>();
+    for (const id of shownIds) {
+      target.set(id, y);
+      y += pitch.get(id) ?? 0;
+    }
+    trs.forEach((tr, i) => {
+      const t = `translateY(${(target.get(order[i]!) ?? tops[i]!) - tops[i]!}px)`;
+      if (tr.style.transform !== t) tr.style.transform = t;
+    });
+  });
+
   return (
     <div className="table-scroll">
       <table className="data-table ranking-table">
@@ -183,15 +283,19 @@ export const RankingTable = memo(function RankingTableView({ rows, onFocus }: { 
             <th scope="col">Flags and reasons</th>
           </tr>
         </thead>
-        <tbody>
-          {sorted.map((r) => (
+        <tbody ref={body}>
+          {docRows.map((r) => (
             <tr key={r.id} className={r.row.error ? 'row-error' : undefined}>
-              <td className="rank-cell">{r.rank ?? '—'}</td>
-              <CandidateCell r={r} onFocus={onFocus} />
-              <td>
-                <ScoreBar row={r} />
+              <td className="rank-cell">
+                <span className="fixed-box rank-box">{r.rank ?? '—'}</span>
               </td>
-              <FixedCells r={r} />
+              <CandidateCell r={r} onFocus={onFocus} />
+              <td className="score-cell">
+                <span className="fixed-box score-box">
+                  <ScoreBar row={r} />
+                </span>
+              </td>
+              <FixedCells r={r} open={openIds.has(r.id)} onToggle={onToggle} />
             </tr>
           ))}
         </tbody>

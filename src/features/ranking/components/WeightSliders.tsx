@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useEffect, useId, useRef } from 'react';
 import { CRITERIA, type ScreeningWeights } from '@/chem';
 import { CRITERION_TEXT } from '@/features/screening-data/criteria';
 
@@ -7,15 +7,29 @@ export function WeightSliders({
   weights,
   onChange,
   onReset,
+  onSettle,
 }: {
   weights: ScreeningWeights;
   onChange: (w: ScreeningWeights) => void;
   onReset: () => void;
+  /** A movement ended: the slider's native `change` (pointer released, key step, typed value). */
+  onSettle?: () => void;
 }) {
   const uid = useId();
+  // React's onChange is the native `input` event; the end of a movement is the native `change`.
+  const box = useRef<HTMLFieldSetElement>(null);
+  const settle = useRef(onSettle);
+  settle.current = onSettle;
+  useEffect(() => {
+    const el = box.current;
+    if (!el) return;
+    const end = () => settle.current?.();
+    el.addEventListener('change', end);
+    return () => el.removeEventListener('change', end);
+  }, []);
   const total = CRITERIA.reduce((s, k) => s + weights[k], 0);
   return (
-    <fieldset className="weights">
+    <fieldset className="weights" ref={box}>
       <legend>Weights</legend>
       <p className="field-hint">
         Each criterion scores 0–1; the score is the weighted mean (its bar in the table is split in these colours). Drag to see the order
