@@ -5,7 +5,7 @@ import { dirname, join } from 'node:path';
 
 /**
  * The architecture check must be able to fail: deliberate violations in a scratch tree are caught by
- * the project's own rule file. (A check that passes everything is a defect; TOOLCHAIN.md records one
+ * the project's own rule file. (A check that passes everything is a defect; DEVELOPERS.md records one
  * way that happens.)
  */
 function cruise(files: Record<string, string>): { failed: boolean; output: string } {

@@ -8,7 +8,7 @@ const NM3_PER_CM3 = 1e21;
 
 /**
  * Volume per formula unit of the free form, nm³, from what the user measured, best first
- * (SCIENCE.md §2, after Glasser & Jenkins 2000, J. Am. Chem. Soc. 122, 632):
+ * (after Glasser & Jenkins 2000, J. Am. Chem. Soc. 122, 632):
  * (a) crystal structure: V_m = V_cell / Z; (b) density: V_m = M / (ρ·N_A).
  * The uncertainty is not known from the input; 1 % is assumed for a cell and 2 % for a density
  * (common practice for room-temperature measurements, not a published figure). Null when neither is given.

@@ -6,7 +6,7 @@ import { CHECKED, SRC } from './thermo-sources';
  * src/chem/compound/atomic-weights.ts (IUPAC 2021).
  *
  * vdW volumes: Y. H. Zhao, M. H. Abraham, A. M. Zissimos, J. Org. Chem. 68 (2003) 7368, Table 1 (sphere
- * volumes of Bondi radii, A. Bondi, J. Phys. Chem. 68 (1964) 441) — the values quoted in the science brief,
+ * volumes of Bondi radii, A. Bondi, J. Phys. Chem. 68 (1964) 441) — the values Zhao, Abraham & Zissimos tabulate,
  * checked here against (4/3)πr³ of the Bondi radius (tests/chem/thermo/ion-volume.test.ts).
  */
 

@@ -19,7 +19,7 @@ export interface DeltaPka {
 
 /**
  * ΔpKa between a compound and a counter-ion for one stoichiometry (default: the ion's first).
- * ΔpKa = pKa(protonated base) − pKa(acid) (Stahl & Wermuth 2002; SCIENCE.md §5): for a basic drug,
+ * ΔpKa = pKa(protonated base) − pKa(acid) (Stahl & Wermuth 2002): for a basic drug,
  * pKa(BH⁺) − pKa(counter-acid); for an acidic drug, pKa(conjugate acid of the counter-base) − pKa(drug).
  * For a drug ion of charge ±n the n-th strongest site is used (the last proton to move limits the salt);
  * the counter-ion side uses the stoichiometry's limiting pKa. Returns null when the pair cannot form a

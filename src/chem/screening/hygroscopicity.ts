@@ -6,7 +6,7 @@ import { requireFiniteInRange } from '../result';
  * deliquescent — sufficient water is absorbed to form a liquid; very hygroscopic — increase ≥ 15 %;
  * hygroscopic — < 15 % and ≥ 2 %; slightly hygroscopic — < 2 % and ≥ 0.2 %.
  * Below 0.2 % the text defines no class; "non-hygroscopic" is common practice.
- * (Limits as the SCIENCE brief quotes them, from memory of the Ph. Eur. text.)
+ * (Limits from memory of the Ph. Eur. text.)
  */
 export type HygroscopicityClass = 'non-hygroscopic' | 'slightly hygroscopic' | 'hygroscopic' | 'very hygroscopic' | 'deliquescent';
 

@@ -40,7 +40,7 @@ export function saltMolarMassGPerMol(i: SaltMassInput): number {
 
 /**
  * Active fraction f = m·M(free drug) / M(salt formula unit incl. hydrate water) — the share of the
- * salt's mass that is the drug as free form (SCIENCE brief §5; Stahl & Wermuth 2002, ch. on salt
+ * salt's mass that is the drug as free form (Stahl & Wermuth 2002, ch. on salt
  * selection, where heavy counter-ions are noted to cost tablet mass).
  */
 export function activeFraction(i: SaltMassInput): number {

@@ -1,6 +1,6 @@
 /**
  * Thermochemistry engine: lattice, hydration and solution enthalpies with sourced ion data and measured
- * uncertainty (SCIENCE.md §1–3). Everything here is pure and deterministic.
+ * uncertainty (sign conventions in estimate-salt.ts). Everything here is pure and deterministic.
  */
 export type * from './thermo.types';
 export { getThermoIon, findThermoIon, findThermoIonByFormula, listThermoIonIds, derivedAnionVolumes, KAPUSTINSKII_RADIUS_SET } from './ions';

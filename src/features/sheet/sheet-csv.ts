@@ -47,7 +47,7 @@ export function sheetCsvRows(model: SheetModel): CsvValue[][] {
 
 /**
  * The lines after the table, separated from it by one empty line: where the numbers come from and the
- * cautions (SCIENCE.md §6) — an exported ranking always travels with them.
+ * cautions (src/chem/report) — an exported ranking always travels with them.
  */
 export function csvFooter(model: SheetModel): string[] {
   return [

@@ -3,7 +3,7 @@ import { bornEnthalpyFactor, bornHydrationEnthalpyKJ, ChemInputError, fitBornOff
 
 describe('Born hydration enthalpy', () => {
   it('water’s bracket [1 − 1/ε − (T/ε²)dε/dT] is about 1.005 at 298.15 K', () => {
-    // ε_r = 78.36, dε_r/dT = −0.361 K⁻¹ (Archer & Wang 1990, from memory); the science brief quotes ≈ 1.005.
+    // ε_r = 78.36, dε_r/dT = −0.361 K⁻¹ (Archer & Wang 1990, from memory); the bracket is then ≈ 1.005.
     expect(bornEnthalpyFactor()).toBeCloseTo(1.005, 3);
   });
   it('scales with z² and 1/r', () => {

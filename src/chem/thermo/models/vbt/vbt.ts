@@ -5,7 +5,7 @@ import { requireIonCharges } from '../kapustinskii/kapustinskii';
 /**
  * Volume-based thermodynamics constants α (kJ·mol⁻¹·nm) and β (kJ/mol) for U_POT = 2I(α/V_m^(1/3) + β).
  * H. D. B. Jenkins, H. K. Roobottom, J. Passmore, L. Glasser, Inorg. Chem. 38 (1999) 3609, Table 2;
- * L. Glasser, H. D. B. Jenkins, J. Am. Chem. Soc. 122 (2000) 632. Values as quoted by the science brief,
+ * L. Glasser, H. D. B. Jenkins, J. Am. Chem. Soc. 122 (2000) 632. Values recalled
  * from memory — the validation measures how well they reproduce the reference set.
  */
 export const VBT_CONSTANTS = {
