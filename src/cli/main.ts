@@ -1,28 +1,31 @@
 import { writeLine, type CliCommand, type CliIo } from './io';
-import { latticeCommand } from './commands/lattice';
-import { ionsCommand } from './commands/ions';
-import { evalCommand } from './commands/eval/eval-command';
-import { registerBuiltInEvalKinds } from './commands/eval/built-in-kinds';
-import { screenCommand } from './commands/screen/screen-command';
-import { serveCommand } from './serve/serve-command';
+import { COMMAND_USAGE, type CommandName } from './command-usage';
 import { describeFailure } from './define-command';
 import { HELP_CAUTION } from './output/cautions';
 
 /**
- * The commands of `saltsmith`. Add one line per command; each lives in commands/<name>/ or its own
- * folder. Nothing registers itself on import: the `eval` request kinds are added here, once.
+ * The commands of `saltsmith`, each loaded only when it runs (a `lattice` start does not load the
+ * screening code, papaparse or the eval schemas). Add a command: its text in command-usage.ts, its
+ * module under commands/, one line here. Nothing registers itself on import: the `eval` request kinds
+ * are registered here, explicitly, before `eval` runs.
  */
-const COMMANDS: Record<string, CliCommand> = {
-  lattice: latticeCommand,
-  ions: ionsCommand,
-  eval: evalCommand,
-  screen: screenCommand,
-  serve: serveCommand,
+const LOADERS: Record<CommandName, () => Promise<CliCommand>> = {
+  lattice: async () => (await import('./commands/lattice')).latticeCommand,
+  ions: async () => (await import('./commands/ions')).ionsCommand,
+  eval: async () => {
+    const { registerBuiltInEvalKinds } = await import('./commands/eval/built-in-kinds');
+    registerBuiltInEvalKinds();
+    return (await import('./commands/eval/eval-command')).evalCommand;
+  },
+  screen: async () => (await import('./commands/screen/screen-command')).screenCommand,
+  serve: async () => (await import('./serve/serve-command')).serveCommand,
 };
+
+const isCommand = (name: string): name is CommandName => Object.prototype.hasOwnProperty.call(LOADERS, name);
 
 function help(io: CliIo) {
   writeLine(io.stdout, 'saltsmith — salt-selection workbench, command line\n');
-  for (const [name, c] of Object.entries(COMMANDS)) {
+  for (const [name, c] of Object.entries(COMMAND_USAGE)) {
     writeLine(io.stdout, `  ${name.padEnd(10)} ${c.summary}\n  ${''.padEnd(10)} ${c.usage}`);
   }
   writeLine(io.stdout, '\nExit status: 0 done, 1 an input was refused (the message names it), 2 the command line cannot be read.');
@@ -31,18 +34,17 @@ function help(io: CliIo) {
 
 /** Run one command line; returns the exit status (0 ok, 1 some input failed, 2 usage error). */
 export async function main(argv: string[], io: CliIo): Promise<number> {
-  registerBuiltInEvalKinds();
   const [name, ...rest] = argv;
   if (!name || name === '--help' || name === '-h' || name === 'help') {
     help(io);
     return name ? 0 : 2;
   }
-  const cmd = Object.prototype.hasOwnProperty.call(COMMANDS, name) ? COMMANDS[name] : undefined;
-  if (!cmd) {
-    writeLine(io.stderr, `saltsmith: unknown command '${name.slice(0, 40)}'. Commands: ${Object.keys(COMMANDS).join(', ')}`);
+  if (!isCommand(name)) {
+    writeLine(io.stderr, `saltsmith: unknown command '${name.slice(0, 40)}'. Commands: ${Object.keys(LOADERS).join(', ')}`);
     return 2;
   }
   try {
+    const cmd = await LOADERS[name]();
     return await cmd.run(rest, io);
   } catch (err) {
     const f = describeFailure(err);

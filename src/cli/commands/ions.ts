@@ -1,6 +1,7 @@
 import { defineCommand } from '../define-command';
 import { COUNTER_IONS, formatIonFormula, searchCounterIons, type CounterIon } from '@/chem';
 import { helpRequested } from '../args/help';
+import { COMMAND_USAGE } from '../command-usage';
 import { parseFlags } from '../args/parse-flags';
 import { writeText, type CliCommand } from '../io';
 
@@ -31,7 +32,7 @@ function charges(ion: CounterIon): string {
  * `saltsmith ions [--search text] [--kind anion|cation] [--json]`: the bundled counter-ion library, the
  * same data the app bundles.
  */
-const USAGE = 'saltsmith ions [--search <text>] [--kind anion|cation] [--json]';
+const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.ions;
 
 /** The flags of `saltsmith ions`. */
 export const IONS_FLAGS = {
@@ -42,7 +43,7 @@ export const IONS_FLAGS = {
 } as const;
 
 export const ionsCommand: CliCommand = defineCommand('ions', {
-  summary: 'the counter-ion library: name, formula, charge, pKa values, class',
+  summary: SUMMARY,
   usage: USAGE,
   run: async (args, io) => {
     const flags = parseFlags(args, IONS_FLAGS);

@@ -5,12 +5,12 @@ import { helpRequested } from '../args/help';
 import { parseFlags, refuseTogether } from '../args/parse-flags';
 import { LATTICE_CAUTION } from '../output/cautions';
 import { writeLine, type CliCommand } from '../io';
-import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from './eval/salt-kind';
+import { COMMAND_USAGE } from '../command-usage';
+import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from './lattice-options';
 
 const fmt = (e: Estimate, digits = 0) => `${e.value.toFixed(digits)} ± ${e.uncertainty.toFixed(digits)} kJ/mol [${e.method}]`;
 
-const USAGE =
-  'saltsmith lattice --cation Na+ --anion Cl- [--method auto|kapustinskii|born-mayer|born-lande|vbt] [--structure rock-salt] [--volume nm3 | --density g/cm3] [--json]';
+const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.lattice;
 
 /** The flags of `saltsmith lattice`. */
 export const LATTICE_FLAGS = {
@@ -39,7 +39,7 @@ const READS: Record<(typeof LATTICE_METHODS)[number], { volume: boolean; structu
  * terminal. Ions by bundled id (`sodium`) or symbol (`Na+`, `SO4 2-`); stoichiometry from the charges.
  */
 export const latticeCommand: CliCommand = defineCommand('lattice', {
-  summary: 'lattice, hydration and solution enthalpies of one salt',
+  summary: SUMMARY,
   usage: USAGE,
   run: async (args, io) => {
     const flags = parseFlags(args, LATTICE_FLAGS);

@@ -2,12 +2,13 @@ import { isAbsolute, join, resolve } from 'node:path';
 import { defineCommand } from '../define-command';
 import { usageError, valueError } from '../args/cli-error';
 import { helpRequested } from '../args/help';
+import { COMMAND_USAGE } from '../command-usage';
 import { parseFlags, readNumber } from '../args/parse-flags';
 import { writeLine, type CliCommand } from '../io';
 import { buildApp, buildNeeded, findPackageRoot } from './app-build';
 import { startStaticServer } from './static-server';
 
-const USAGE = 'saltsmith serve [--port 4173] [--dir dist] [--no-build]   (PORT sets the default port)';
+const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.serve;
 
 export const SERVE_FLAGS = {
   help: { type: 'switch' },
@@ -22,7 +23,7 @@ export const SERVE_FLAGS = {
  * until Ctrl+C. `npm start` runs this.
  */
 export const serveCommand: CliCommand = defineCommand('serve', {
-  summary: 'build the workbench if needed and serve it on 127.0.0.1 (npm start)',
+  summary: SUMMARY,
   usage: USAGE,
   run: async (args, io) => {
     const flags = parseFlags(args, SERVE_FLAGS);

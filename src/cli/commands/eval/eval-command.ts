@@ -1,5 +1,6 @@
 import { defineCommand } from '../../define-command';
 import { HELP_FLAG_SPEC, helpRequested } from '../../args/help';
+import { COMMAND_USAGE } from '../../command-usage';
 import { parseFlags } from '../../args/parse-flags';
 import { writeLine, writeText, type CliCommand } from '../../io';
 import { boundedLines, jsonNestingDepth, MAX_JSON_DEPTH, MAX_LINE_BYTES } from './bounded-lines';
@@ -14,7 +15,7 @@ import { describeError, evalRegistry, evaluateRequest, type LineError } from './
  * for a slow reader.
  */
 
-const USAGE = 'saltsmith eval < requests.jsonl   e.g. {"kind":"salt","cation":"Na+","anion":"Cl-"}';
+const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.eval;
 
 /** The `id` to echo: a string (≤ 200 characters) or a finite number; anything else is not echoed. */
 function echoId(value: unknown): string | number | undefined {
@@ -49,7 +50,7 @@ export async function answerLine(lineNo: number, text: string): Promise<{ json: 
 }
 
 export const evalCommand: CliCommand = defineCommand('eval', {
-  summary: 'answer JSON Lines requests from stdin (one JSON line out per line in)',
+  summary: SUMMARY,
   usage: USAGE,
   run: async (args, io) => {
     const flags = parseFlags(args, HELP_FLAG_SPEC);

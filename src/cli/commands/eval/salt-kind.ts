@@ -5,7 +5,6 @@ import {
   findThermoIon,
   findThermoIonByFormula,
   getCounterIon,
-  MADELUNG_CONSTANTS,
   organicIonFromFormula,
   organicIonFromSmiles,
   stoichiometryFromCharges,
@@ -13,31 +12,13 @@ import {
 } from '@/chem';
 import { refuseMultiComponent, requireBuiltIonPlausible, requireFormulaChargeAgrees } from '../../args/ion-consistency';
 import { LATTICE_CAUTION } from '../../output/cautions';
+import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from '../lattice-options';
 import type { EvalHandler } from './registry';
 
 /** `"kind": "salt"`: lattice, hydration and solution enthalpies of one salt. */
 
 const ringsSchema = z.object({ aromatic: z.number().int().min(0).max(50), nonAromatic: z.number().int().min(0).max(50) }).strict();
 const chargeSchema = z.number().int().min(-4).max(4).refine((z_) => z_ !== 0, 'charge must not be zero');
-
-/** The lattice methods, as the core names them. */
-export const LATTICE_METHODS = ['auto', 'kapustinskii', 'born-mayer', 'born-lande', 'vbt'] as const;
-/** Crystal structure types with a Madelung constant in the core (Born–Mayer, Born–Landé). */
-export const STRUCTURE_TYPES = Object.keys(MADELUNG_CONSTANTS) as [string, ...string[]];
-
-/**
- * Ranges of the measured sizes a request may give. The core refuses the same ranges when a method is
- * asked for by name; under `auto` it would drop an out-of-range size and choose another method, so the
- * request is checked here first.
- */
-export const SIZE_RANGES = {
-  /** nm³ per formula unit (the core's VBT range). */
-  formulaUnitVolumeNm3: { min: 0.005, max: 10 },
-  /** g/cm³ (the core's density range). */
-  densityGPerCm3: { min: 0.3, max: 25 },
-  /** g/mol of the salt formula unit. */
-  molarMassGPerMol: { min: 1, max: 10000 },
-} as const;
 
 /**
  * An ion: a bundled id or symbol, a library counter-ion id, a formula with charge (a bundled ion with the same

@@ -2,6 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { ChemInputError } from '@/chem';
 import { defineCommand } from '../../define-command';
 import { helpRequested } from '../../args/help';
+import { COMMAND_USAGE } from '../../command-usage';
 import { parseFlags } from '../../args/parse-flags';
 import { writeFileAtomic } from '../../output/atomic-write';
 import { writeLine, writeText, type CliCommand } from '../../io';
@@ -59,7 +60,7 @@ async function readCompoundFile(path: string): Promise<CompoundFile> {
 }
 
 export const screenCommand: CliCommand = defineCommand('screen', {
-  summary: 'screen a compound (or a list, --batch) against counter-ions; ranked table as CSV or JSON',
+  summary: COMMAND_USAGE.screen.summary,
   usage: SCREEN_USAGE,
   run: async (args, io) => {
     const flags = parseFlags(args, SCREEN_FLAGS);

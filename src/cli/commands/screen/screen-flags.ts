@@ -1,16 +1,11 @@
 import { celsiusToKelvin } from '@/chem';
 import { usageError } from '../../args/cli-error';
+import { COMMAND_USAGE } from '../../command-usage';
 import { refuseTogether, type ParsedFlags } from '../../args/parse-flags';
 
 /** The flags of `saltsmith screen` (one compound, or a list with --batch), with their accepted ranges. */
 
-export const SCREEN_USAGE = `saltsmith screen (--smiles S | --formula F) --pka 7.8[,3.1] [--kind base|acid] [--charge 1]
-                  (--s0 mg/mL | --mp °C --logp X) [--dose mg] [--ions chloride,mesylate] [--input compound.json]
-                  [--format csv|json] [--out file] [--top N] [--iterations 1000] [--seed 1]
-                  [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
-                  [--keep-cocrystal-band]
-       saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
-                  [--errors file] [--out file] [--ions …] [settings flags as above]`;
+export const SCREEN_USAGE = COMMAND_USAGE.screen.usage;
 
 /** Flags that describe one compound; with --batch they come from the file instead. */
 export const COMPOUND_FLAGS = ['smiles', 'formula', 'name', 'kind', 'charge', 'pka', 's0', 'mp', 'logp', 'dose', 'input'] as const;

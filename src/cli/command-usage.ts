@@ -1,0 +1,35 @@
+/**
+ * What each command is for and how it is called, as plain text: read by the help (main.ts) without
+ * loading the commands, and by each command for its own --help and usage errors.
+ */
+export const COMMAND_USAGE = {
+  lattice: {
+    summary: 'lattice, hydration and solution enthalpies of one salt',
+    usage:
+      'saltsmith lattice --cation Na+ --anion Cl- [--method auto|kapustinskii|born-mayer|born-lande|vbt] [--structure rock-salt] [--volume nm3 | --density g/cm3] [--json]',
+  },
+  ions: {
+    summary: 'the counter-ion library: name, formula, charge, pKa values, class',
+    usage: 'saltsmith ions [--search <text>] [--kind anion|cation] [--json]',
+  },
+  eval: {
+    summary: 'answer JSON Lines requests from stdin (one JSON line out per line in)',
+    usage: 'saltsmith eval < requests.jsonl   e.g. {"kind":"salt","cation":"Na+","anion":"Cl-"}',
+  },
+  screen: {
+    summary: 'screen a compound (or a list, --batch) against counter-ions; ranked table as CSV or JSON',
+    usage: `saltsmith screen (--smiles S | --formula F) --pka 7.8[,3.1] [--kind base|acid] [--charge 1]
+                  (--s0 mg/mL | --mp °C --logp X) [--dose mg] [--ions chloride,mesylate] [--input compound.json]
+                  [--format csv|json] [--out file] [--top N] [--iterations 1000] [--seed 1]
+                  [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
+                  [--keep-cocrystal-band]
+       saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
+                  [--errors file] [--out file] [--ions …] [settings flags as above]`,
+  },
+  serve: {
+    summary: 'build the workbench if needed and serve it on 127.0.0.1 (npm start)',
+    usage: 'saltsmith serve [--port 4173] [--dir dist] [--no-build]   (PORT sets the default port)',
+  },
+} as const;
+
+export type CommandName = keyof typeof COMMAND_USAGE;
