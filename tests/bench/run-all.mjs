@@ -1,0 +1,197 @@
+// `npm run bench`: every benchmark, one JSON summary (not part of `npm test`; nothing here is a
+// timed test, and no figure makes it fail — only a benchmark that cannot run does).
+//
+//   node tests/bench/run-all.mjs [--out file] [--skip core,cli,batch,browser] [--batch-sizes 1000,10000]
+//                                [--batch-max-s 300]
+//
+// Runs, in order:
+//   core     tests/bench/core.bench.ts (through tsx): models per salt, a full screen of one compound
+//            against the library (Monte Carlo excluded), and the bare closed-form baseline in the same
+//            process, with the screen's overhead over it as a ratio
+//   cli      `saltsmith lattice --cation Na+ --anion Cl-` wall time, 12 runs (2 warm-up), beside a bare
+//            `node -e 0` start on the same machine
+//   batch    `saltsmith screen --batch` on generated fictional compounds (formula only, whole library),
+//            compounds per second and peak resident memory (GNU time), when the command has --batch; a
+//            size the previous size's rate says would take longer than --batch-max-s is left out, with
+//            its estimated time written down
+//   browser  tests/bench/rerank-browser.mjs: weight slider → re-ranked table painted in Chromium, and
+//            the first screen's gzipped JavaScript of the same build (tests/bench/check-budget.mjs)
+// The summary (default tests/bench/out/summary.json, git-ignored) carries medians, p95 and the
+// machine's core count and load, so figures from different machines can be read side by side.
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { availableParallelism, cpus, loadavg, tmpdir, totalmem } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { measureFirstScreen } from './check-budget.mjs';
+
+const args = process.argv.slice(2);
+const opt = (name, fallback) => {
+  const i = args.indexOf(name);
+  return i >= 0 && args[i + 1] ? args[i + 1] : fallback;
+};
+const outPath = resolve(opt('--out', 'tests/bench/out/summary.json'));
+const skip = new Set(opt('--skip', '').split(',').filter(Boolean));
+const batchSizes = opt('--batch-sizes', '1000,10000').split(',').map(Number).filter((n) => n > 0);
+const batchMaxS = Number(opt('--batch-max-s', '300'));
+const work = mkdtempSync(join(tmpdir(), 'saltsmith-bench-'));
+
+const q = (sorted, f) => sorted[Math.min(sorted.length - 1, Math.floor(f * sorted.length))];
+const stats = (ms) => {
+  const s = [...ms].sort((a, b) => a - b);
+  const r = (x) => +x.toFixed(1);
+  return { runs: s.length, medianMs: r(q(s, 0.5)), p95Ms: r(q(s, 0.95)), minMs: r(s[0]), maxMs: r(s.at(-1)) };
+};
+const log = (m) => process.stderr.write(`bench: ${m}\n`);
+
+const summary = {
+  startedAt: new Date().toISOString(),
+  machine: {
+    cores: availableParallelism(),
+    cpu: cpus()[0]?.model ?? 'unknown',
+    memoryGB: +(totalmem() / 2 ** 30).toFixed(1),
+    loadAverage1mAtStart: +loadavg()[0].toFixed(2),
+    node: process.version,
+  },
+  results: {},
+  skipped: {},
+};
+
+// ---- core ---------------------------------------------------------------------------------------
+if (!skip.has('core')) {
+  log('core models, full screen and closed-form baseline (tsx)…');
+  const json = join(work, 'core.json');
+  const r = spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', '--tsconfig', 'tsconfig.json', 'tests/bench/core.bench.ts', '--json', json], {
+    encoding: 'utf8',
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  if (r.status !== 0 || !existsSync(json)) throw new Error(`core benchmark failed (exit ${r.status})`);
+  summary.results.core = JSON.parse(readFileSync(json, 'utf8'));
+} else summary.skipped.core = 'skipped by --skip';
+
+// ---- CLI start ------------------------------------------------------------------------------------
+const CLI = 'src/cli/saltsmith.mjs';
+function wallMs(cmd, argv, runs, warm = 2) {
+  const ms = [];
+  for (let i = 0; i < runs + warm; i++) {
+    const t0 = process.hrtime.bigint();
+    const r = spawnSync(cmd, argv, { stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
+    const t = Number(process.hrtime.bigint() - t0) / 1e6;
+    if (r.status !== 0) throw new Error(`${[cmd, ...argv].join(' ')} exited ${r.status}: ${r.stderr}`);
+    if (i >= warm) ms.push(t);
+  }
+  return stats(ms);
+}
+if (!skip.has('cli')) {
+  log('CLI start…');
+  const lattice = wallMs(process.execPath, [CLI, 'lattice', '--cation', 'Na+', '--anion', 'Cl-'], 12);
+  const bareNode = wallMs(process.execPath, ['-e', '0'], 12);
+  summary.results.cliStart = {
+    command: 'saltsmith lattice --cation Na+ --anion Cl-',
+    ...lattice,
+    bareNodeStart: bareNode,
+    overBareNode: +(lattice.medianMs / bareNode.medianMs).toFixed(2),
+    note: 'wall time of the whole process, 2 warm-up runs left out',
+  };
+} else summary.skipped.cliStart = 'skipped by --skip';
+
+// ---- batch ----------------------------------------------------------------------------------------
+/** `n` fictional compounds (invented numbers, a workload only), formula only, whole library. */
+function fictionalCompounds(n) {
+  const lines = ['id,name,smiles,formula,kind,pkas,charge,s0_mg_per_ml,mp_c,logp,dose_mg,ions'];
+  for (let i = 0; i < n; i++) {
+    const acid = i % 5 === 4;
+    const c = 14 + (i % 11);
+    const h = 2 * c - 6 + (i % 5);
+    const nN = acid ? i % 2 : 1 + (i % 3);
+    const o = 1 + (i % 3);
+    const pka = acid ? (3.2 + (i % 17) / 10).toFixed(1) : (6 + (i % 31) / 10).toFixed(1);
+    const s0 = i % 3 === 0 ? '' : (0.001 * (1 + (i % 50))).toFixed(3);
+    const mp = s0 ? '' : String(120 + (i % 90));
+    const logp = s0 ? '' : (1 + (i % 30) / 10).toFixed(1);
+    lines.push(`FB-${i},Batch compound ${i} (fictional),,C${c}H${h}N${nN}O${o},${acid ? 'acid' : 'base'},${pka},,${s0},${mp},${logp},${10 + (i % 40) * 10},`);
+  }
+  return lines.join('\n') + '\n';
+}
+const hasBatch = () => {
+  const r = spawnSync(process.execPath, [CLI, 'screen', '--help'], { encoding: 'utf8' });
+  return /--batch/.test(`${r.stdout}${r.stderr}`);
+};
+function runTimed(argv) {
+  // GNU time (when present) reports the peak resident set of the whole process tree's leader,
+  // worker threads included (they share the process).
+  const gnuTime = existsSync('/usr/bin/time');
+  const memFile = join(work, 'mem.txt');
+  const cmd = gnuTime ? '/usr/bin/time' : process.execPath;
+  const full = gnuTime ? ['-f', '%M', '-o', memFile, process.execPath, ...argv] : argv;
+  return new Promise((done, fail) => {
+    const t0 = process.hrtime.bigint();
+    const child = spawn(cmd, full, { stdio: ['ignore', 'ignore', 'pipe'] });
+    let err = '';
+    child.stderr.on('data', (d) => (err += d));
+    child.on('error', fail);
+    child.on('close', (code) => {
+      const ms = Number(process.hrtime.bigint() - t0) / 1e6;
+      const peakKB = gnuTime && existsSync(memFile) ? Number(readFileSync(memFile, 'utf8').trim().split('\n').at(-1)) : null;
+      done({ code, ms, peakMB: peakKB ? +(peakKB / 1024).toFixed(0) : null, stderr: err.slice(-2000) });
+    });
+  });
+}
+if (!skip.has('batch')) {
+  if (!hasBatch()) {
+    summary.skipped.batch = '`saltsmith screen --batch` is not available in this checkout';
+  } else {
+    summary.results.batch = [];
+    let rate = null;
+    for (const n of batchSizes) {
+      if (rate && n / rate > batchMaxS) {
+        summary.results.batch.push({
+          compounds: n,
+          notRun: `estimated ${Math.round(n / rate)} s at the previous size's ${rate.toFixed(1)} compounds/s, over --batch-max-s ${batchMaxS}`,
+        });
+        continue;
+      }
+      log(`batch of ${n} generated compounds…`);
+      const file = join(work, `compounds-${n}.csv`);
+      writeFileSync(file, fictionalCompounds(n));
+      const out = join(work, `batch-${n}.csv`);
+      const r = await runTimed([CLI, 'screen', '--batch', file, '--out', out, '--errors', join(work, `errors-${n}.txt`)]);
+      if (r.code === 0) rate = (n * 1000) / r.ms;
+      summary.results.batch.push({
+        compounds: n,
+        jobs: `default (${availableParallelism()} cores)`,
+        exitCode: r.code,
+        wallMs: +r.ms.toFixed(0),
+        compoundsPerSecond: +((n * 1000) / r.ms).toFixed(1),
+        peakResidentMB: r.peakMB,
+        note: 'formula-only fictional compounds against the whole library, default settings (rank robustness included), CSV to a file',
+        ...(r.code !== 0 ? { stderrTail: r.stderr } : {}),
+      });
+    }
+  }
+} else summary.skipped.batch = 'skipped by --skip';
+
+// ---- browser re-rank and first-screen size ----------------------------------------------------------
+if (!skip.has('browser')) {
+  log('re-rank in Chromium (builds the app first)…');
+  const json = join(work, 'rerank.json');
+  const distDir = process.env.SALTSMITH_OUT_DIR ?? join(work, 'dist');
+  const r = spawnSync(process.execPath, ['tests/bench/rerank-browser.mjs'], {
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...process.env, SALTSMITH_OUT_DIR: distDir, SALTSMITH_BENCH_JSON: json },
+  });
+  if (r.status === 0 && existsSync(json)) {
+    summary.results.rerankBrowser = JSON.parse(readFileSync(json, 'utf8'));
+    const m = measureFirstScreen(distDir);
+    summary.results.firstScreen = { gzipKiB: +(m.gzipBytes / 1024).toFixed(1), rawKiB: +(m.rawBytes / 1024).toFixed(1), budgetGzipKiB: 250 };
+  } else {
+    summary.skipped.rerankBrowser = `tests/bench/rerank-browser.mjs exited ${r.status} (Chromium missing or the page failed; see its output)`;
+  }
+} else summary.skipped.rerankBrowser = 'skipped by --skip';
+
+summary.machine.loadAverage1mAtEnd = +loadavg()[0].toFixed(2);
+summary.finishedAt = new Date().toISOString();
+mkdirSync(dirname(outPath), { recursive: true });
+writeFileSync(outPath, JSON.stringify(summary, null, 2) + '\n');
+rmSync(work, { recursive: true, force: true });
+console.log(JSON.stringify(summary, null, 2));
+log(`summary written to ${outPath}`);
