@@ -14,8 +14,10 @@ import { SOLUTION_REFERENCE_SOURCE } from '@/chem/thermo/validation/reference';
 
 /**
  * fixtures/reference/*.csv are the published reference sets in a form people and other tools can read,
- * one source per row. They are written from the TypeScript data by this test when
- * SALTSMITH_WRITE_FIXTURES=1, and otherwise compared with it, so the two cannot drift apart.
+ * one source per row, with the derived columns (reference lattice enthalpies, volumes) the core
+ * computes. The tables themselves have one source of truth, fixtures/reference/thermo-*.json, from which
+ * src/chem/data/*.data.ts is generated (tests/chem/data/reference-data.test.ts). The CSVs are written
+ * by this test when SALTSMITH_WRITE_FIXTURES=1, and otherwise compared with what the core computes.
  */
 const DIR = resolve(__dirname, '../../../fixtures/reference');
 const round = (x: number, d = 2) => Number(x.toFixed(d));

@@ -89,7 +89,7 @@ let calibrationCache: PackingCalibration | undefined;
 
 /**
  * Calibrate the packing coefficient k (V_crystal = V_vdW / k) on salts of small organic ions with published
- * densities (data/thermo-reference.ts, PACKING_CALIBRATION_SALTS): per salt, the organic ion's share of the
+ * densities (fixtures/reference/thermo-reference.json, PACKING_CALIBRATION_SALTS): per salt, the organic ion's share of the
  * formula-unit volume is M/(ρN_A) minus the partner ions' Jenkins volumes; k = V_vdW / that share; the mean
  * is used. Kitaigorodskii's range for organic crystals is 0.65–0.77.
  */
