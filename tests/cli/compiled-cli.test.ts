@@ -1,4 +1,6 @@
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -58,6 +60,27 @@ describe('the compiled saltsmith command', () => {
     const ids = two.stdout.split('\n').filter((l) => /^C\d+,/.test(l)).map((l) => l.split(',')[0]);
     expect([...new Set(ids)]).toEqual(lines.map((l) => l.split(',')[0]));
   }, 60_000);
+
+  it('serve prints the URL and serves a built app with the Content-Security-Policy header until stopped', async () => {
+    const site = mkdtempSync(join(tmpdir(), 'saltsmith-site-'));
+    writeFileSync(join(site, 'index.html'), '<!doctype html><title>built</title>');
+    const child = spawn(process.execPath, [cli.launcher, 'serve', '--port', '0', '--dir', site, '--no-build'], { cwd: '/' });
+    let out = '';
+    child.stdout.on('data', (d) => (out += d));
+    let err = '';
+    child.stderr.on('data', (d) => (err += d));
+    const deadline = Date.now() + 20_000;
+    while (!/http:\/\/127\.0\.0\.1:\d+\//.test(out) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
+    const url = /http:\/\/127\.0\.0\.1:\d+\//.exec(out)?.[0];
+    expect(url, err).toBeTruthy();
+    const res = await fetch(`${url}projects/1`);
+    expect(res.status).toBe(200);
+    expect(await res.text()).toMatch(/<title>built<\/title>/);
+    expect(res.headers.get('content-security-policy')).toMatch(/^default-src 'self'; script-src 'self';/);
+    const exited = new Promise<number | null>((r) => child.on('exit', (code) => r(code)));
+    child.kill('SIGTERM');
+    expect(await exited).toBe(0);
+  }, 30_000);
 
   it('says how to build it when the compiled file is missing', () => {
     rmSync(join(cli.root, 'dist-cli', 'saltsmith.js'));

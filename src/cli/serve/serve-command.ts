@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import { isAbsolute, join, resolve } from 'node:path';
 import { defineCommand } from '../define-command';
 import { usageError, valueError } from '../args/cli-error';
@@ -12,7 +13,7 @@ const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.serve;
 
 export const SERVE_FLAGS = {
   help: { type: 'switch' },
-  port: { type: 'number', min: 1, max: 65535, integer: true },
+  port: { type: 'number', min: 0, max: 65535, integer: true, unit: '(0 picks a free port)' },
   dir: { type: 'string', maxLength: 4096 },
   'no-build': { type: 'switch' },
 } as const;
@@ -30,11 +31,11 @@ export const serveCommand: CliCommand = defineCommand('serve', {
     if (helpRequested(flags, io, USAGE)) return 0;
     const envPort = process.env.PORT;
     const port = flags.port ?? (envPort !== undefined && envPort !== '' ? readNumber('PORT', envPort, SERVE_FLAGS.port) : 4173);
-    const root = findPackageRoot();
-    const dir = flags.dir === undefined ? join(root, 'dist') : isAbsolute(flags.dir) ? flags.dir : resolve(flags.dir);
-    const why = buildNeeded(root, dir);
+    const root = flags.dir !== undefined && flags['no-build'] ? null : findPackageRoot();
+    const dir = flags.dir !== undefined ? (isAbsolute(flags.dir) ? flags.dir : resolve(flags.dir)) : join(root!, 'dist');
+    const why = root ? buildNeeded(root, dir) : existsSync(join(dir, 'index.html')) ? null : `no index.html in ${dir}`;
     if (why) {
-      if (flags['no-build']) throw valueError('--no-build', `${why}; cannot serve without building`);
+      if (flags['no-build'] || !root) throw valueError('--no-build', `${why}; cannot serve without building`);
       writeLine(io.stderr, `saltsmith serve: building the workbench (${why})…`);
       const code = await buildApp(root, dir, (l) => writeLine(io.stderr, l));
       if (code !== 0) {

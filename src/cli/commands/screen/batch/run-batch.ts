@@ -148,7 +148,8 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
       pending.set(seq, { lineNo: line.lineNo, id, name: spec.name, result: null });
       screener.submit(seq++, spec);
       inFlight++;
-      while (inFlight >= window) await collectOne();
+      // Bounded memory: at most `window` compounds in flight, and results held for ordering are bounded too.
+      while (inFlight > 0 && (inFlight >= window || pending.size > 4 * window)) await collectOne();
     }
     if (header === null) throw valueError('--batch', `${path} has no header line`, `a CSV header with the columns id, kind, pkas, smiles or formula, …`);
     while (inFlight > 0) await collectOne();
