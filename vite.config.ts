@@ -1,5 +1,5 @@
 /// <reference types="vitest/config" />
-import { defineConfig } from 'vite';
+import { defineConfig, type Plugin } from 'vite';
 import react from '@vitejs/plugin-react';
 import { VitePWA } from 'vite-plugin-pwa';
 import { fileURLToPath, URL } from 'node:url';
@@ -10,6 +10,49 @@ const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 
 };
 
 const projectRoot = fileURLToPath(new URL('.', import.meta.url));
+
+/**
+ * The Content-Security-Policy of the production build (README, "Offline"): scripts, workers, styles,
+ * fonts, data and the manifest come from the app's own origin only; no inline script, no remote
+ * origin, no plugins. Inline styles stay allowed because React and recharts set `style` attributes.
+ * `blob:` images are the structure pictures and downloads; `blob:` workers are left open for
+ * bundlers that inline a worker. `frame-ancestors` is ignored in a meta tag: `saltsmith serve` sends
+ * the same policy as a header with `frame-ancestors 'none'` added.
+ */
+export const CONTENT_SECURITY_POLICY = [
+  "default-src 'self'",
+  "script-src 'self'",
+  "style-src 'self' 'unsafe-inline'",
+  "img-src 'self' data: blob:",
+  "font-src 'self'",
+  "connect-src 'self'",
+  "worker-src 'self' blob:",
+  "manifest-src 'self'",
+  "object-src 'none'",
+  "base-uri 'self'",
+  "form-action 'self'",
+].join('; ');
+
+/**
+ * Put the policy into index.html as the first element of <head> at build time only: the dev server
+ * needs an inline script (React Fast Refresh), which the policy rightly forbids.
+ */
+function contentSecurityPolicy(): Plugin {
+  return {
+    name: 'saltsmith-content-security-policy',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler: () => [
+        {
+          tag: 'meta',
+          attrs: { 'http-equiv': 'Content-Security-Policy', content: CONTENT_SECURITY_POLICY },
+          injectTo: 'head-prepend',
+        },
+      ],
+    },
+  };
+}
 
 export default defineConfig({
   // index.html lives in src/ so the top level keeps only the designed entries.
@@ -23,6 +66,7 @@ export default defineConfig({
   },
   plugins: [
     react(),
+    contentSecurityPolicy(),
     // Offline (README "Offline"): precache the whole app so it opens and works with no network after
     // one visit. The manifest is public/manifest.webmanifest (our own); registration is in
     // src/app/register-sw.ts. Every .js is precached: openchemlib's lazy chunk (structure parsing)

@@ -1,3 +1,5 @@
+// First: zod must not probe for eval under the Content-Security-Policy (see the module).
+import '@/persistence/zod-without-eval';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from '@/app/App';

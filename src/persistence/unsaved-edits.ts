@@ -75,12 +75,12 @@ export function trackWrite<T>(edit: NewEdit, write: () => Promise<T>): Promise<T
   inFlight.set(id, { ...edit, id } as UnsavedEdit);
   const settle = (stored: boolean) => {
     inFlight.delete(id);
-    // Stored: a copy taken when the page was hidden is obsolete. Failed: the copy is dropped as well,
-    // as the failure was reported on screen and replaying a refused write would fail again.
-    if (storage()?.getItem(UNSAVED_EDITS_KEY)?.includes(id)) {
+    // Stored: a copy taken when the page was hidden is obsolete. Failed: the copy stays, because a
+    // page being torn down sees its transactions abort; the next start tries again, and drops the
+    // copy if the write is refused once more.
+    if (stored && storage()?.getItem(UNSAVED_EDITS_KEY)?.includes(id)) {
       writeCopies(readCopies().filter((e) => e.id !== id));
     }
-    return stored;
   };
   return write().then(
     (v) => {

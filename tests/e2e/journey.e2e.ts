@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import { DEMO_SHORTLIST } from '@/persistence/demo-project';
 import { BASE_URL, openSession, type Session } from './support/browser';
 
 /*
@@ -126,7 +127,7 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await second.goto(`${BASE_URL}#/projects`);
     const card = second.getByRole('article', { name: /Demorazine/ });
     await card.waitFor();
-    await card.getByText('5 counter-ions, 0 measurements').waitFor();
+    await card.getByText(`${DEMO_SHORTLIST.length} counter-ions, 0 measurements`).waitFor();
 
     await area(page, 'Projects');
     await page.getByRole('button', { name: /^Rename Demorazine/ }).click();
@@ -139,7 +140,7 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await form.getByLabel(/^Solubility/).fill('2');
     await form.getByLabel('pH at equilibrium').fill('1.2');
     await form.getByRole('button', { name: 'Save measurement' }).click();
-    await second.getByRole('article', { name: 'Morning demo' }).getByText('5 counter-ions, 1 measurement').waitFor();
+    await second.getByRole('article', { name: 'Morning demo' }).getByText(`${DEMO_SHORTLIST.length} counter-ions, 1 measurement`).waitFor();
     expect(s.errors).toEqual([]);
   }, 90_000);
 });

@@ -47,6 +47,20 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     expect((await second.repo.get(p.id))!.compound.meltingPointC).toBe(160);
   });
 
+  it('keeps the copy of a write that aborts (a page being torn down sees its transactions abort)', async () => {
+    const first = await newPage();
+    const p = await first.repo.create('P', DEMO_COMPOUND);
+    let abort: (e: Error) => void = () => undefined;
+    const write = first.trackWrite({ kind: 'compound', projectId: p.id, changes: { notes: 'typed last' } }, () => new Promise<never>((_, reject) => (abort = reject)));
+    first.stashUnsavedEdits();
+    abort(new Error('AbortError'));
+    await expect(write).rejects.toThrow('AbortError');
+
+    const second = await newPage();
+    await expect(second.repo.replayUnsavedEdits()).resolves.toBe(1);
+    expect((await second.repo.get(p.id))!.compound.notes).toBe('typed last');
+  });
+
   it('runs a registered flush (a debounced slider) before the copy is taken', async () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);

@@ -1,4 +1,5 @@
 /// <reference lib="webworker" />
+import '@/persistence/zod-without-eval';
 import { runRobustnessBatches, type RobustnessMessage, type RobustnessRequest } from './robustness-protocol';
 
 /** The rank-robustness Monte Carlo, off the main thread so the sliders stay smooth. */
