@@ -1,8 +1,8 @@
 import { rankCandidates, rankRobustness, screenCompound, type ScreenResult } from '@/chem';
 import type { PreparedScreen } from './screen-input';
 
-/** Round to `digits` significant digits for the table; null/undefined become an empty cell. */
-const sig = (x: number | null | undefined, digits = 3) => (x === null || x === undefined ? '' : Number(x.toPrecision(digits)));
+/** Round to `digits` significant digits for the table; null, undefined and non-finite values become an empty cell. */
+const sig = (x: number | null | undefined, digits = 3) => (x === null || x === undefined || !Number.isFinite(x) ? '' : Number(x.toPrecision(digits)));
 
 /** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
 export type ScreenTableRow = ReturnType<typeof screenTable>[number];
