@@ -14,8 +14,10 @@ const SCRIPT = join(ROOT, 'fixtures/reference/generate-thermo-data.mjs');
 const FILES = [
   'fixtures/reference/thermo-reference.json',
   'fixtures/reference/thermo-ions.json',
+  'fixtures/reference/thermo-elements.json',
   'src/chem/data/thermo-reference.data.ts',
   'src/chem/data/thermo-ions.data.ts',
+  'src/chem/data/thermo-elements.data.ts',
 ];
 
 function check(root: string): { ok: boolean; output: string } {
