@@ -12,13 +12,9 @@ import {
   type MeasurementRecord,
   type ProjectRecord,
 } from './records';
-import {
-  buildProjectFile,
-  parseProjectFileText,
-  serializeProjectFile,
-  type ProjectBundle,
-  type ProjectFile,
-} from './export-format';
+import { buildProjectFile, serializeProjectFile, type ProjectBundle } from './project-file/build';
+import { parseProjectFileText } from './project-file/restore';
+import type { ProjectFile } from './project-file/schema';
 
 /** Read everything a project file holds for one project. */
 export async function loadProjectBundle(projectId: string): Promise<ProjectBundle> {
@@ -38,7 +34,7 @@ export async function loadProjectBundle(projectId: string): Promise<ProjectBundl
   });
 }
 
-/** Export a project as the text of a project file (see export-format.ts). */
+/** Export a project as the text of a project file (see project-file/). */
 export async function exportProjectText(projectId: string): Promise<string> {
   return serializeProjectFile(buildProjectFile(await loadProjectBundle(projectId), nowIso()));
 }

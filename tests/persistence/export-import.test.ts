@@ -8,7 +8,9 @@ import { measurementsRepo } from '@/persistence/measurements-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { inHouseIon } from '../support/in-house-ion';
-import { ProjectFileError, parseProjectFileText, type ProjectFile } from '@/persistence/export-format';
+import { ProjectFileError } from '@/persistence/project-file/errors';
+import { parseProjectFileText } from '@/persistence/project-file/restore';
+import type { ProjectFile } from '@/persistence/project-file/schema';
 import { exportProjectText, importProjectText, loadProjectBundle, writeProjectFile } from '@/persistence/import-project';
 
 const fixture = (name: string) => readFileSync(resolve(process.cwd(), 'fixtures/files', name), 'utf8');

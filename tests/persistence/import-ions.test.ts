@@ -5,7 +5,7 @@ import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
-import { ProjectFileError } from '@/persistence/export-format';
+import { ProjectFileError } from '@/persistence/project-file/errors';
 import { exportProjectText, importProjectText } from '@/persistence/import-project';
 import { inHouseIonPayload } from '../support/in-house-ion';
 

@@ -2,20 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import fc from 'fast-check';
-import { inHouseIonPayload } from '../support/in-house-ion';
-import {
-  PROJECT_FILE_FORMAT,
-  PROJECT_FILE_MAX_BYTES,
-  PROJECT_FILE_VERSION,
-  ProjectFileError,
-  buildProjectFile,
-  looksTruncated,
-  parseProjectFileText,
-  projectFileName,
-  restoreProjectFile,
-  serializeProjectFile,
-  type ProjectBundle,
-} from '@/persistence/export-format';
+import { inHouseIonPayload } from '../../support/in-house-ion';
+import { PROJECT_FILE_FORMAT, PROJECT_FILE_MAX_BYTES, PROJECT_FILE_VERSION } from '@/persistence/project-file/format';
+import { ProjectFileError } from '@/persistence/project-file/errors';
+import { buildProjectFile, serializeProjectFile, type ProjectBundle } from '@/persistence/project-file/build';
+import { looksTruncated } from '@/persistence/project-file/truncation';
+import { parseProjectFileText, restoreProjectFile } from '@/persistence/project-file/restore';
+import { projectFileName } from '@/persistence/project-file/file-name';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { projectSettingsSchema } from '@/persistence/records';
 

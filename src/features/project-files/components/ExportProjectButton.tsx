@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { exportProjectText } from '@/persistence/import-project';
-import { projectFileName } from '@/persistence/export-format';
+import { projectFileName } from '@/persistence/project-file/file-name';
 import { downloadText } from '@/components/download-text';
 import '../project-files.css';
 

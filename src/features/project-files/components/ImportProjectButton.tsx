@@ -1,10 +1,8 @@
 import { useId, useRef, useState } from 'react';
-import {
-  PROJECT_FILE_MAX_BYTES,
-  ProjectFileError,
-  parseProjectFileText,
-  type ProjectFile,
-} from '@/persistence/export-format';
+import { ProjectFileError } from '@/persistence/project-file/errors';
+import { PROJECT_FILE_MAX_BYTES } from '@/persistence/project-file/format';
+import { parseProjectFileText } from '@/persistence/project-file/restore';
+import type { ProjectFile } from '@/persistence/project-file/schema';
 import { writeProjectFile, type ImportOutcome } from '@/persistence/import-project';
 import '../project-files.css';
 
