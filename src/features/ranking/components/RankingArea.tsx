@@ -4,6 +4,7 @@ import { CAUTION_LINES } from '@/components/Cautions';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
 import type { ProjectRecord } from '@/persistence/records';
 import { useProjectScreening } from '@/features/screening-data/use-screening';
+import type { ProjectScreening } from '@/features/screening-data/compute-screening';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '@/features/screening-data/use-robustness';
@@ -20,7 +21,7 @@ import '../ranking.css';
 const SETTLE_MS = 400;
 
 /** The cautions, in full, beside the ranking (not behind a button). */
-export function RankingCautions() {
+export const RankingCautions = memo(function RankingCautionsView() {
   return (
     <aside className="ranking-cautions" aria-label="Cautions for reading this ranking">
       <strong>Read with care.</strong>
@@ -31,7 +32,7 @@ export function RankingCautions() {
       </ul>
     </aside>
   );
-}
+});
 
 /** Rank robustness: the Monte Carlo's probabilities as bars, with its progress while it runs. */
 const RobustnessPanel = memo(function RobustnessPanelView({ robustness, labels }: { robustness: RobustnessState; labels: Record<string, string> }) {
@@ -75,6 +76,20 @@ const RobustnessPanel = memo(function RobustnessPanelView({ robustness, labels }
           <p className="loading">Drawing…</p>
         ) : null}
       </section>
+  );
+});
+
+/** What the screen assumed, in words; re-rendered only when the screen changes. */
+const ScreenAssumptions = memo(function ScreenAssumptionsView({ data }: { data: ProjectScreening }) {
+  return (
+    <section className="panel" aria-labelledby="assumptions-title">
+      <h2 id="assumptions-title">Assumptions of this screen</h2>
+      <ul>
+        {[...data.notes, ...data.screen.assumptions].map((a) => (
+          <li key={a}>{a}</li>
+        ))}
+      </ul>
+    </section>
   );
 });
 
@@ -211,14 +226,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
           <BufferMedia project={project} media={mediaView.media} rows={mediaView.rows} />
           <RobustnessPanel robustness={robustness} labels={labels} />
           <SolubilityPanel data={data} labels={labels} topKey={topKey} doseMg={project.compound.doseMg} />
-          <section className="panel" aria-labelledby="assumptions-title">
-            <h2 id="assumptions-title">Assumptions of this screen</h2>
-            <ul>
-              {[...data.notes, ...data.screen.assumptions].map((a) => (
-                <li key={a}>{a}</li>
-              ))}
-            </ul>
-          </section>
+          <ScreenAssumptions data={data} />
         </>
       ) : null}
     </div>

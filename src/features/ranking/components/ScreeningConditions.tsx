@@ -1,5 +1,5 @@
 import { FieldMessage, describedBy } from '@/components/FieldMessage';
-import { useEffect, useId, useRef, useState } from 'react';
+import { memo, useEffect, useId, useRef, useState } from 'react';
 import type { ScreeningSettings } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
 import type { ProjectRecord } from '@/persistence/records';
@@ -23,8 +23,17 @@ const HINTS: Partial<Record<keyof ConditionsDraft, string>> = {
   saltAbove: 'Cruz-Cabeza 2012: 4',
 };
 
-/** Media and rule settings of the screen, saved with the project as they are typed. */
-export function ScreeningConditions({ project, settings }: { project: ProjectRecord; settings: ScreeningSettings }) {
+/**
+ * Media and rule settings of the screen, saved with the project as they are typed. Memoised: a weight
+ * movement re-renders the area, not this form.
+ */
+export const ScreeningConditions = memo(function ScreeningConditionsView({
+  project,
+  settings,
+}: {
+  project: ProjectRecord;
+  settings: ScreeningSettings;
+}) {
   const [draft, setDraft] = useState<ConditionsDraft>(() => conditionsDraftOf(project.settings, settings));
   const [errors, setErrors] = useState<ConditionsErrors>({});
   const [state, setState] = useState<'saved' | 'pending' | 'invalid'>('saved');
@@ -141,4 +150,4 @@ export function ScreeningConditions({ project, settings }: { project: ProjectRec
       </form>
     </details>
   );
-}
+});
