@@ -41,11 +41,11 @@ export function getDb(): SaltsmithDb {
   return instance;
 }
 
-/** Close and forget the shared handle; tests use this to start from an empty database. */
-export async function resetDbForTests(): Promise<void> {
-  if (instance) {
-    instance.close();
-    await Dexie.delete(instance.name);
-    instance = null;
-  }
+/**
+ * Close and forget the shared handle; the next {@link getDb} opens a fresh one. (Tests delete the
+ * database after this: tests/support/db.ts.)
+ */
+export function closeDb(): void {
+  instance?.close();
+  instance = null;
 }

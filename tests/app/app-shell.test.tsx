@@ -2,7 +2,7 @@ import { describe, expect, it, beforeEach } from 'vitest';
 import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { App } from '@/app/App';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../support/db';
 import { useNavigationStore } from '@/stores/navigation-store';
 
 beforeEach(async () => {

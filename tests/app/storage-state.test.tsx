@@ -2,7 +2,8 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { render, screen } from '@testing-library/react';
 import Dexie from 'dexie';
 import { App } from '@/app/App';
-import { DB_NAME, getDb, resetDbForTests } from '@/persistence/db';
+import { DB_NAME, getDb } from '@/persistence/db';
+import { resetDbForTests } from '../support/db';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useStorageProblemStore } from '@/stores/storage-problem-store';
 

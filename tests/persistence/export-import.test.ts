@@ -1,7 +1,8 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { getDb, resetDbForTests } from '@/persistence/db';
+import { getDb } from '@/persistence/db';
+import { resetDbForTests } from '../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { measurementsRepo } from '@/persistence/measurements-repo';

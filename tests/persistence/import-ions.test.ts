@@ -1,6 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { COUNTER_IONS, getCounterIon, mergeLibrary } from '@/chem';
-import { getDb, resetDbForTests } from '@/persistence/db';
+import { getDb } from '@/persistence/db';
+import { resetDbForTests } from '../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo, saltStoichiometry } from '@/persistence/candidates-repo';
 import { measurementsRepo } from '@/persistence/measurements-repo';

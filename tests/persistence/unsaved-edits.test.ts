@@ -15,7 +15,7 @@ const never = () => new Promise<never>(() => undefined);
 beforeEach(async () => {
   localStorage.clear();
   vi.resetModules();
-  await (await import('@/persistence/db')).resetDbForTests();
+  await (await import('../support/db')).resetDbForTests();
 });
 
 describe('edits in flight when the page goes away (issue 13)', () => {

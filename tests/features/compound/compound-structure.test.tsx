@@ -3,7 +3,7 @@ import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import type { Compound } from '@/chem';
 

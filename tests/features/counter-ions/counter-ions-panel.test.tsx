@@ -3,7 +3,7 @@ import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { CounterIonsPanel } from '@/features/counter-ions/components/CounterIonsPanel';
 import { useCounterIonsViewStore } from '@/features/counter-ions/counter-ions-store';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';

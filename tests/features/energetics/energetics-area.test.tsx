@@ -1,6 +1,6 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { render, screen, within } from '@testing-library/react';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { measurementsRepo } from '@/persistence/measurements-repo';

@@ -5,7 +5,7 @@ import { OfflineStatus } from '@/features/offline/components/OfflineStatus';
 import { StorageErrorBanner } from '@/features/offline/components/StorageErrorBanner';
 import { reportStorageError, useStorageProblemStore } from '@/stores/storage-problem-store';
 import { classifyStorageError } from '@/persistence/storage-status';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { SW_UPDATE_EVENT } from '@/features/offline/update-event';
 
 function stubStorage(storage: Partial<StorageManager> | undefined) {

@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { App } from '@/app/App';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { newProjectFromDraft, EMPTY_NEW_PROJECT } from '@/features/projects/new-project-model';
 

@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';

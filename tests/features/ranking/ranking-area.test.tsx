@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { defaultScreeningSettings } from '@/chem';
-import { resetDbForTests } from '@/persistence/db';
+import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
