@@ -3,10 +3,8 @@ import type { DisproportionationResult } from '../disproportionation';
 import { ICH_M9_VOLUME_ML } from '../dose-number';
 import type { InterpretedMeasurements } from '../measurements';
 import type { Estimate } from '../../result';
-import type { SolubilityDriverId } from '../salt-solubility/estimate-salt-solubility';
 import type {
   DoseNumberAt,
-  SaltWaterSolubility,
   MediumResult,
   Reason,
   ScreenFlag,
@@ -43,67 +41,12 @@ export function saltName(label: string, ionName: string): string {
   return withoutRatio(label) || ionName.toLowerCase();
 }
 
-/** What each driver of the salt-solubility estimate is called in words. */
-export const SOLUBILITY_DRIVER_WORDS: Record<SolubilityDriverId, string> = {
-  'hydrophobic-counter-ion': 'hydrophobic counter-ion',
-  'hydrophilic-counter-ion': 'hydrophilic counter-ion',
-  'aromatic-counter-ion': 'aromatic counter-ion',
-  'hydrogen-bonding-counter-ion': 'hydrogen-bonding counter-ion',
-  'few-hydrogen-bonds': 'counter-ion with few hydrogen-bond groups',
-  'large-counter-ion': 'large counter-ion',
-  'small-counter-ion': 'small counter-ion',
-  'inorganic-counter-ion': 'small inorganic counter-ion',
-  'organic-counter-ion': 'organic counter-ion',
-  'multivalent-counter-ion': 'doubly charged counter-ion',
-  'endothermic-dissolution': 'more endothermic dissolution (ΔH_sol)',
-  'exothermic-dissolution': 'less endothermic dissolution (ΔH_sol)',
-  'high-melting-salt': 'high-melting salt',
-  'low-melting-salt': 'low-melting salt',
-};
-
-const ORIGIN_WORDS: Record<SaltWaterSolubility['origin'], string> = {
-  model: 'model estimate',
-  'model+fusion': 'model + your fusion data',
-  measured: 'measured',
-  anchor: 'common-practice anchor 10² × S₀ (no descriptors for this counter-ion)',
-};
-
-/** The drivers in words with their signed size, e.g. "hydrophobic counter-ion (−0.6)". */
-export function driverWords(drivers: SaltWaterSolubility['drivers']): string {
-  return drivers
-    .map((d) => `${SOLUBILITY_DRIVER_WORDS[d.id]} (${d.decades > 0 ? '+' : '−'}${Math.abs(d.decades).toFixed(1)})`)
-    .join(', ');
-}
-
-/** The salt's own water solubility as a reason in words, naming what drives the estimate. */
-export function saltWaterReason(s: SaltWaterSolubility): Reason {
-  const drivers = s.drivers.length ? `; drivers, in decades: ${driverWords(s.drivers)}` : '';
-  return {
-    kind: s.origin === 'measured' ? 'measured' : 'note',
-    criterion: 'solubility',
-    text: `salt in water: ${fmt(s.mgPerMlAsSalt)} mg/mL as salt (${ORIGIN_WORDS[s.origin]}, ±${s.log10DrugM.uncertainty.toFixed(1)} decades)${drivers}`,
-  };
-}
-
 /** The free form's own flag: its worst dose number over pH 1.2–6.8 (ICH M9). */
 export function freeFormPoorlySolubleFlag(worst: DoseNumberAt & { doseNumber: number }): ScreenFlag {
   return {
     id: 'likely-poorly-soluble',
     text: `free form likely poorly soluble: D₀ ${fmt(worst.doseNumber)} at pH ${worst.pH}`,
     rule: ICH_M9_RULE,
-  };
-}
-
-/**
- * "Likely poorly soluble" is about the salt itself: its own solubility in water (free-form
- * equivalents, its 1σ shown) against the highest dose in 250 mL — the ICH M9 volume.
- */
-export function poorlySolubleFlag(s: SaltWaterSolubility, doseNumberInWater: number): ScreenFlag {
-  const why = s.drivers.length ? ` (${s.drivers.slice(0, 2).map((d) => SOLUBILITY_DRIVER_WORDS[d.id]).join(', ')})` : '';
-  return {
-    id: 'likely-poorly-soluble',
-    text: `likely poorly soluble salt: ${fmt(s.mgPerMlAsFreeForm)} mg/mL in water as free form, D₀ ${fmt(doseNumberInWater)}${why}`,
-    rule: `the salt's own solubility in water (${ORIGIN_WORDS[s.origin]}) below the highest dose in 250 mL, the ICH M9 (2019) volume (D₀ > 1)`,
   };
 }
 

@@ -16,12 +16,12 @@ import {
   massCostReason,
   measuredReasons,
   notScreenedReason,
-  poorlySolubleFlag,
   saltFormationWords,
   saltName,
   saltPoorlySolubleFlag,
   worstSolubilityReason,
 } from './screen-reasons';
+import { poorlySolubleFlag } from './salt-water-words';
 import type { Reason, ScreenFlag, ScreeningCandidate, ScreenRow } from './screen.types';
 
 /** ΔpKa against each of the counter-ion's pKa values, from the drug's pKa that forms the salt. */
