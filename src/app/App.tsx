@@ -19,7 +19,7 @@ import { guardUnsavedEdits } from '@/persistence/unsaved-edits';
 const RankingArea = lazy(() => import('@/features/ranking/components/RankingArea').then((m) => ({ default: m.RankingArea })));
 const EnergeticsArea = lazy(() => import('@/features/energetics/components/EnergeticsArea').then((m) => ({ default: m.EnergeticsArea })));
 const BenchWorkspace = lazy(() => import('@/features/bench/components/BenchWorkspace').then((m) => ({ default: m.BenchWorkspace })));
-const ModelCheckArea = lazy(() => import('@/features/confidence/components/ModelCheckArea').then((m) => ({ default: m.ModelCheckArea })));
+const ModelCheckArea = lazy(() => import('@/features/model-check/components/ModelCheckArea').then((m) => ({ default: m.ModelCheckArea })));
 
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
   switch (area) {
@@ -36,7 +36,7 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
           <BenchWorkspace project={project} />
         </AreaBoundary>
       );
-    case 'confidence':
+    case 'model-check':
       return (
         <AreaBoundary>
           <ModelCheckArea />
@@ -54,7 +54,7 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
           <EnergeticsArea project={project} />
         </AreaBoundary>
       );
-    case 'library':
+    case 'counter-ions':
       return <CounterIonsPanel project={project} />;
     default:
       return (

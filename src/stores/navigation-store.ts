@@ -3,21 +3,24 @@ import { create } from 'zustand';
 /** The areas of the workbench, in the order a formulator works through them. */
 export const AREAS = [
   { id: 'compound', label: 'Compound' },
-  { id: 'library', label: 'Counter-ions' },
+  { id: 'counter-ions', label: 'Counter-ions' },
   { id: 'ranking', label: 'Ranking' },
   { id: 'energetics', label: 'Energetics' },
   { id: 'bench', label: 'Bench data' },
-  { id: 'confidence', label: 'Model check' },
+  { id: 'model-check', label: 'Model check' },
   { id: 'projects', label: 'Projects' },
 ] as const;
 export type AreaId = (typeof AREAS)[number]['id'];
 
 const isArea = (s: string): s is AreaId => AREAS.some((a) => a.id === s);
 
+/** Ids used by earlier builds, so that old bookmarks still open the right area. */
+const FORMER_IDS: Record<string, AreaId> = { library: 'counter-ions', confidence: 'model-check' };
+
 /** Read the area from the URL hash (`#/ranking`), falling back to the compound area. */
 export function areaFromHash(hash: string): AreaId {
   const id = hash.replace(/^#\/?/, '').split('/')[0] ?? '';
-  return isArea(id) ? id : 'compound';
+  return isArea(id) ? id : (FORMER_IDS[id] ?? 'compound');
 }
 
 interface NavigationState {

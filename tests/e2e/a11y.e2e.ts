@@ -9,11 +9,11 @@ import { axeViolations } from './support/axe';
 
 const AREAS = [
   { id: 'compound', ready: 'Demorazine is fictional' },
-  { id: 'library', ready: /on this project’s shortlist/ },
+  { id: 'counter-ions', ready: /on this project’s shortlist/ },
   { id: 'ranking', ready: /candidates ranked/ },
   { id: 'energetics', ready: 'Sign convention.' },
   { id: 'bench', ready: 'Recorded for' },
-  { id: 'confidence', ready: 'Figures' },
+  { id: 'model-check', ready: 'Figures' },
   { id: 'projects', ready: 'Start a project' },
 ] as const;
 

@@ -35,7 +35,7 @@ describe('offline after one visit (service worker precache)', () => {
     await page.getByLabel('Highest single dose').fill('100');
     await page.getByText('All changes saved').waitFor();
     // Shortlist two counter-ions from the library, still offline.
-    await page.goto(`${BASE_URL}#/library`);
+    await page.goto(`${BASE_URL}#/counter-ions`);
     for (const query of ['mesylate', 'chloride']) {
       await page.getByLabel('Search counter-ions').fill(query);
       await page.getByRole('button', { name: /^Add .* to the shortlist$/ }).first().click();

@@ -148,7 +148,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
         <h2 id="ranking-title">Ranking</h2>
         <p>
           The shortlist is empty. Pick counter-ions in the{' '}
-          <a href="#/library" onClick={(e) => (e.preventDefault(), goTo('library'))}>
+          <a href="#/counter-ions" onClick={(e) => (e.preventDefault(), goTo('counter-ions'))}>
             Counter-ions
           </a>{' '}
           area; they are ranked here.

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { validationReport } from '@/chem';
-import { ModelCheckArea } from '@/features/confidence/components/ModelCheckArea';
+import { ModelCheckArea } from '@/features/model-check/components/ModelCheckArea';
 
 describe('Model check area', () => {
   it('lists every model of the engine’s validation report with its n and errors', () => {

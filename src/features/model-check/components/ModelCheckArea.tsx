@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { validationReport, type ModelValidation } from '@/chem';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
-import '../confidence.css';
+import '../model-check.css';
 
 const pct = (x: number) => `${x.toFixed(1)} %`;
 const signedPct = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(1)} %`;
