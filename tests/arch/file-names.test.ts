@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
  * The file-name convention the codebase follows (DEVELOPERS.md, "Layout"): folders and files in
  * kebab-case, with dotted role suffixes (`counter-ions.data.ts`, `screen.types.ts`,
  * `robustness.worker.ts`, `journey.e2e.ts`); React components in PascalCase `.tsx`; a README.md may
- * explain a folder. A name outside the convention fails here, in CI.
+ * explain a folder, and dotfiles (.gitignore) configure tools. A name outside the convention fails here, in CI.
  */
 const ROOT = join(import.meta.dirname, '..', '..');
 const KEBAB = /^[a-z0-9]+(-[a-z0-9]+)*$/;
@@ -19,6 +19,7 @@ export function nameProblems(paths: readonly string[]): string[] {
     const parts = p.split('/');
     const file = parts.pop()!;
     for (const dir of parts) if (!KEBAB.test(dir)) problems.push(`${p}: folder '${dir}' is not kebab-case`);
+    if (file.startsWith('.')) continue; // dotfiles (.gitignore) configure tools, not code
     if (!(FILE.test(file) || COMPONENT.test(file) || file === 'README.md')) problems.push(`${p}: '${file}' is neither kebab-case nor a PascalCase component`);
   }
   return problems;

@@ -1,4 +1,5 @@
 import type * as OpenChemLib from 'openchemlib';
+import { hillFormula, parseFormula, withHydrogens } from '../../compound/formula';
 import { ChemInputError } from '../../result';
 
 /**
@@ -71,4 +72,47 @@ export function counterIonDescriptorsFromSmiles(ocl: Ocl, parentSmiles: string):
     heavyAtoms: mol.getAtoms(),
     inorganic,
   };
+}
+
+/** A counter-ion read from its parent's SMILES: the ion as it sits in the salt, and its descriptors. */
+export interface CounterIonFromParent {
+  /** Hill formula of the counter-ion in the salt (charge given separately). */
+  ionFormula: string;
+  /** Hill formula of the parent as drawn. */
+  parentFormula: string;
+  rings: { aromatic: number; nonAromatic: number };
+  descriptors: CounterIonDescriptors;
+}
+
+/**
+ * The counter-ion a parent acid or base gives in a salt with charge `charge`: a hydroxide parent loses
+ * its OH⁻ (NaOH → Na⁺, choline hydroxide → choline), a parent drawn already with that charge
+ * ([Na+]) stays as drawn, a neutral acid gives up |z| protons and a neutral base takes up z.
+ * @throws ChemInputError (field `smiles`) for an unreadable SMILES or a parent whose drawn charge is
+ * neither 0 nor `charge`.
+ */
+export function counterIonFromParentSmiles(ocl: Ocl, parentSmiles: string, charge: number): CounterIonFromParent {
+  const descriptors = counterIonDescriptorsFromSmiles(ocl, parentSmiles);
+  const mol = ocl.Molecule.fromSmiles(parentSmiles);
+  const parentFormula = mol.getMolecularFormula().formula;
+  let net = 0;
+  for (let a = 0; a < mol.getAllAtoms(); a++) net += mol.getAtomCharge(a);
+  const total = mol.getRingSet().getSize();
+  const aromatic = mol.getAromaticRingCount();
+  const rings = { aromatic, nonAromatic: Math.max(0, total - aromatic) };
+  const hydroxides = parentSmiles.split('.').filter((p) => p.trim() === '[OH-]').length;
+  const el = { ...parseFormula(parentFormula).elements };
+  let ionFormula: string;
+  if (hydroxides > 0) {
+    el.O = (el.O ?? 0) - hydroxides;
+    el.H = (el.H ?? 0) - hydroxides;
+    ionFormula = hillFormula(el);
+  } else if (net === charge) {
+    ionFormula = parentFormula;
+  } else if (net === 0) {
+    ionFormula = hillFormula(withHydrogens(el, charge, 'smiles'));
+  } else {
+    throw new ChemInputError('smiles', `the structure carries charge ${net}, the counter-ion ${charge}`, 'the neutral parent acid or base, or the ion drawn with the same charge');
+  }
+  return { ionFormula, parentFormula, rings, descriptors };
 }

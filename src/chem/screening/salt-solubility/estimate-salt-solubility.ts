@@ -1,4 +1,5 @@
 import { STANDARD_TEMPERATURE_K } from '../../constants/physical';
+import { kelvinToCelsius } from '../../units/temperature';
 import type { Estimate } from '../../result';
 import { predictSaltSolubility, type FittedSaltSolubilityModel, type SaltSolubilityModelKind } from './fit-salt-solubility';
 import { ridgeContributions } from './ridge-regression';
@@ -182,7 +183,7 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
   if (crystalShift !== null) {
     const dh = input.fusionEnthalpyKJPerMol != null ? `ΔH_fus ${input.fusionEnthalpyKJPerMol} kJ/mol (measured)` : "ΔH_fus from Walden's rule (ΔS_m 56.5 J/(mol·K); no DSC enthalpy entered)";
     notes.push(
-      `bench fusion data: T_m ${(input.meltingPointK! - 273.15).toFixed(1)} °C, ${dh}; Schröder–van Laar (ΔC_p = 0) crystal term ${crystalShift >= 0 ? '+' : ''}${crystalShift.toFixed(2)} decades against the typical published salt, applied with slope 1 (not cross-validated)`,
+      `bench fusion data: T_m ${kelvinToCelsius(input.meltingPointK!).toFixed(1)} °C, ${dh}; Schröder–van Laar (ΔC_p = 0) crystal term ${crystalShift >= 0 ? '+' : ''}${crystalShift.toFixed(2)} decades against the typical published salt, applied with slope 1 (not cross-validated)`,
     );
   }
   if (ridge.featureNames.includes('thermoShiftDecades') && (input.thermoShiftDecades === null || input.thermoShiftDecades === undefined)) {

@@ -2,7 +2,13 @@
  * The salt's own solubility in water: computed counter-ion descriptors, the calibrated model, its
  * fitting and nested leave-one-drug-out validation, and the Schröder–van Laar ideal solubility.
  */
-export { counterIonDescriptorsFromSmiles, withoutHydroxide, type CounterIonDescriptors } from './counter-ion-descriptors';
+export {
+  counterIonDescriptorsFromSmiles,
+  counterIonFromParentSmiles,
+  withoutHydroxide,
+  type CounterIonDescriptors,
+  type CounterIonFromParent,
+} from './counter-ion-descriptors';
 export { LIBRARY_COUNTER_ION_DESCRIPTORS } from './library-descriptors.data';
 export {
   estimateSaltWaterSolubility,

@@ -1,11 +1,12 @@
 import type * as OpenChemLib from 'openchemlib';
-import { GAS_CONSTANT_KJ_PER_MOL_K } from '../../constants/physical';
+import { GAS_CONSTANT_KJ_PER_MOL_K, STANDARD_TEMPERATURE_K } from '../../constants/physical';
+import { celsiusToKelvin } from '../../units/temperature';
 import { formulaMolarMassGPerMol, hillFormula, parseFormula, withHydrogens } from '../../compound/formula';
 import { COUNTER_IONS } from '../../library';
 import type { CounterIon } from '../../library';
 import { estimateKsp } from '../ksp-estimate';
 import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoCounterIon } from '../thermo-link';
-import { counterIonDescriptorsFromSmiles, type CounterIonDescriptors } from './counter-ion-descriptors';
+import { counterIonFromParentSmiles, type CounterIonDescriptors } from './counter-ion-descriptors';
 import type { SaltSolubilityTrainingRow } from './fit-salt-solubility';
 
 /**
@@ -29,7 +30,7 @@ type Ocl = typeof OpenChemLib;
 /** Molar mass of water, g/mol (IUPAC 2021: 2 × 1.008 + 15.999). */
 const WATER_G_PER_MOL = 18.015;
 /** Temperature the published series were mostly measured at; the anchor is computed there, K. */
-const REFERENCE_TEMPERATURE_K = 298.15;
+const REFERENCE_TEMPERATURE_K = STANDARD_TEMPERATURE_K;
 
 function num(s: string | undefined): number | null {
   if (s === undefined) return null;
@@ -141,29 +142,16 @@ export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], dr
     if (charge === null || charge === 0) return excluded.push({ line, label, reason: 'no counter-ion charge' });
     const parentSmiles = (r.counter_ion_parent_smiles ?? '').trim();
     let desc: CounterIonDescriptors;
-    let parentFormula: string;
-    let parentNetCharge = 0;
+    let ionFormula: string;
     let parentRings: { aromatic: number; nonAromatic: number };
     try {
-      desc = counterIonDescriptorsFromSmiles(ocl, parentSmiles);
-      const pm = ocl.Molecule.fromSmiles(parentSmiles);
-      parentFormula = pm.getMolecularFormula().formula;
-      for (let a = 0; a < pm.getAllAtoms(); a++) parentNetCharge += pm.getAtomCharge(a);
-      parentRings = ringsOf(pm);
+      const ion = counterIonFromParentSmiles(ocl, parentSmiles, charge);
+      desc = ion.descriptors;
+      ionFormula = ion.ionFormula;
+      parentRings = ion.rings;
     } catch (err) {
       return excluded.push({ line, label, reason: `counter-ion structure: ${err instanceof Error ? err.message : String(err)}` });
     }
-    // The counter-ion as it sits in the salt: a hydroxide parent loses its OH⁻ (NaOH → Na⁺), a parent
-    // drawn already charged ([Na+]) stays, an acid or amine gives up or takes up |z| protons.
-    const hydroxides = (parentSmiles.match(/\[OH-\]/g) ?? []).length;
-    let ionFormula: string;
-    if (hydroxides > 0) {
-      const el = { ...parseFormula(parentFormula).elements };
-      el.O = (el.O ?? 0) - hydroxides;
-      el.H = (el.H ?? 0) - hydroxides;
-      ionFormula = hillFormula(el);
-    } else if (parentNetCharge === charge) ionFormula = parentFormula;
-    else ionFormula = shiftHydrogens(parentFormula, charge);
     const drugIonFormula = shiftHydrogens(drug.formula, drug.kind === 'base' ? 1 : -1);
     const hydrate = num(r.hydrate_water) ?? 0;
     const saltMass = m * formulaMolarMassGPerMol(drugIonFormula) + n * formulaMolarMassGPerMol(ionFormula) + hydrate * WATER_G_PER_MOL;
@@ -173,7 +161,7 @@ export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], dr
       ? { id: lib.id, ...(lib.thermoId ? { thermoId: lib.thermoId } : {}), formula: lib.formula, rings: lib.rings }
       : { id: `ref-${(r.counter_ion_name ?? 'ion').trim().toLowerCase().replace(/[^a-z0-9]+/g, '-')}`, formula: ionFormula, rings: parentRings };
     const meltingPointC = num(r.salt_melting_point_c);
-    pending.push({ line, drug, label: `${drug.name} · ${(r.counter_ion_name ?? '').trim()} (${m}:${n})`, m, n, charge, desc, log10DrugM, counter, ionFormula, drugIonFormula, meltingPointK: meltingPointC === null ? null : meltingPointC + 273.15, fusionKJ: num(r.salt_fusion_enthalpy_kj_per_mol) });
+    pending.push({ line, drug, label: `${drug.name} · ${(r.counter_ion_name ?? '').trim()} (${m}:${n})`, m, n, charge, desc, log10DrugM, counter, ionFormula, drugIonFormula, meltingPointK: meltingPointC === null ? null : celsiusToKelvin(meltingPointC), fusionKJ: num(r.salt_fusion_enthalpy_kj_per_mol) });
   });
   // Today's anchor needs every candidate's ΔH_sol and their median per drug ion (as the screen does).
   const thermo = pending.map((p) => {

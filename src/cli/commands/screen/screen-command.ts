@@ -72,6 +72,8 @@ export const screenCommand: CliCommand = defineCommand('screen', {
       settings: settingsFromFlags(flags, file.settings),
       keepCocrystalBand: flags['keep-cocrystal-band'] === true,
       names: FLAG_NAMES,
+      customIons: 'customIons' in file ? file.customIons : [],
+      bench: 'bench' in file ? file.bench : {},
     });
     const iterations = flags.iterations ?? 1000;
     const seed = flags.seed ?? 1;

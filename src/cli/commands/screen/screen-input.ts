@@ -15,6 +15,7 @@ import {
 } from '@/chem';
 import { usageError } from '../../args/cli-error';
 import { refuseMultiComponent } from '../../args/ion-consistency';
+import { benchEntrySchema, buildCustomIons, customIonSpecSchema, withExtras, type BenchEntry, type CustomIonSpec } from './screen-extras';
 
 /**
  * The input of one screen, whatever it came from (flags, an --input file, a row of a batch file): a
@@ -63,6 +64,8 @@ export const compoundFileSchema = z
     doseMg: z.number().positive().max(1e5).nullable().optional(),
     ions: z.array(z.string().min(1).max(80)).min(1).max(200).optional(),
     settings: z.record(z.string(), z.unknown()).optional(),
+    customIons: z.array(customIonSpecSchema).max(50).optional(),
+    bench: z.record(z.string().max(80), benchEntrySchema).optional(),
     // fields of an exported compound record that a screen does not read
     logPOrigin: z.unknown().optional(),
     densityGPerCm3: z.unknown().optional(),
@@ -79,16 +82,16 @@ const name = (names: FieldNames, f: keyof CompoundSpec | 'settings') => names[f]
  * Resolve counter-ion ids against the library: unknown ids, an id given twice and ions of the wrong
  * kind for the drug (a cation for a base) are refused, naming the field.
  */
-export function resolveCounterIons(ids: readonly string[] | null, kind: 'base' | 'acid', field: string): readonly CounterIon[] {
-  if (ids === null) return COUNTER_IONS;
+export function resolveCounterIons(ids: readonly string[] | null, kind: 'base' | 'acid', field: string, inHouse: readonly CounterIon[] = []): readonly CounterIon[] {
+  if (ids === null) return [...COUNTER_IONS, ...inHouse];
   const seen = new Set<string>();
   const want = kind === 'base' ? 'anion' : 'cation';
   return ids.map((raw) => {
     const id = raw.trim().toLowerCase();
     if (seen.has(id)) throw usageError(field, `"${id}" is given twice`, 'each counter-ion once');
     seen.add(id);
-    const ion = getCounterIon(id);
-    if (!ion) throw new ChemInputError(field, `unknown counter-ion "${raw.slice(0, 80)}"`, 'library ids, e.g. chloride,mesylate (saltsmith ions lists them)');
+    const ion = getCounterIon(id) ?? inHouse.find((x) => x.id === id);
+    if (!ion) throw new ChemInputError(field, `unknown counter-ion "${raw.slice(0, 80)}"`, 'library ids, e.g. chloride,mesylate (saltsmith ions lists them), or ids of customIons');
     if (ion.kind !== want) {
       throw new ChemInputError(field, `${ion.name} is a counter-${ion.kind}; a ${kind} forms salts with counter-${want}s`, `counter-${want}s (saltsmith ions --kind ${want})`);
     }
@@ -99,7 +102,13 @@ export function resolveCounterIons(ids: readonly string[] | null, kind: 'base' |
 /** What a screen needs, checked: the compound, its drug ion, the candidates and the settings. */
 export async function prepareScreen(
   spec: CompoundSpec,
-  opts: { settings: Record<string, unknown>; keepCocrystalBand: boolean; names: FieldNames },
+  opts: {
+    settings: Record<string, unknown>;
+    keepCocrystalBand: boolean;
+    names: FieldNames;
+    customIons?: readonly CustomIonSpec[];
+    bench?: Record<string, BenchEntry>;
+  },
 ) {
   const n = opts.names;
   if (spec.pKas.length === 0) throw new ChemInputError(name(n, 'pKas'), 'no pKa given', 'one to four pKa values, ascending');
@@ -138,15 +147,17 @@ export async function prepareScreen(
     throw new ChemInputError(name(n, field), issue.message, 'see saltsmith screen --help');
   }
   const di = drugIon({ kind: spec.kind, ionCharge, formula }, structure);
-  const ions = resolveCounterIons(spec.ions, spec.kind, name(n, 'ions'));
+  const custom = await buildCustomIons(opts.customIons ?? [], spec.kind);
+  const ions = resolveCounterIons(spec.ions, spec.kind, name(n, 'ions'), custom.ions);
   const settings = parseScreeningSettings(opts.settings);
   const skipped: { id: string; label: string; deltaPka: number }[] = [];
   const rings = structure ? structure.rings : { aromatic: 0, nonAromatic: 0 };
-  const candidates = candidatesFromLibrary(
+  const libraryCandidates = candidatesFromLibrary(
     ions,
     { kind: spec.kind, ionCharge, pKas: spec.pKas.map((p) => p.value), thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings } },
     { skipped, keepCocrystalBand: opts.keepCocrystalBand, bands: settings.deltaPkaBands },
   );
+  const candidates = withExtras(libraryCandidates, custom.descriptors, opts.bench ?? {});
   return { compound, drugIon: di, candidates, settings, skipped };
 }
 
