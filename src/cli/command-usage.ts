@@ -24,7 +24,10 @@ export const COMMAND_USAGE = {
                   [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
                   [--keep-cocrystal-band]
        saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
-                  [--errors file] [--out file] [--ions …] [settings flags as above]`,
+                  [--errors file] [--out file] [--ions …] [settings flags as above]
+  compound.json may also hold "customIons": [{"id","smiles","charge","pKas"}] (counter-ions outside the
+  library, named in "ions" by id) and "bench": {"<ion id>": {"meltingPointC", "fusionEnthalpyKJPerMol",
+  "solubilityMgPerMl"}} (that ion's 1:1 salt, or its only salt form).`,
   },
   serve: {
     summary: 'build the workbench if needed and serve it on 127.0.0.1 (npm start)',
