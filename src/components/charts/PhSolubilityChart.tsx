@@ -65,7 +65,10 @@ export function PhSolubilityChart({
   const summary = series.map((s) => {
     const inBand = s.points.filter((p) => p.pH >= BAND[0] - 1e-9 && p.pH <= BAND[1] + 1e-9);
     const worst = inBand.reduce((a, b) => (b.solubilityMgPerMl < a.solubilityMgPerMl ? b : a), inBand[0] ?? s.points[0]!);
-    return `${s.label}${s.estimated ? ' (estimated)' : ''}: ${s.phMax != null ? `pH_max ${s.phMax.toFixed(2)}, ` : ''}lowest in pH 1.2–6.8 ${sig(worst?.solubilityMgPerMl ?? Number.NaN)} mg/mL at pH ${worst?.pH.toFixed(1)}`;
+    // For a salt, the highest point of the band is its plateau below pH_max (the salt's own solubility).
+    const best = inBand.reduce((a, b) => (b.solubilityMgPerMl > a.solubilityMgPerMl ? b : a), inBand[0] ?? s.points[0]!);
+    const plateau = s.kind === 'salt' ? `, highest ${sig(best?.solubilityMgPerMl ?? Number.NaN)} mg/mL at pH ${best?.pH.toFixed(1)}` : '';
+    return `${s.label}${s.estimated ? ' (estimated)' : ''}: ${s.phMax != null ? `pH_max ${s.phMax.toFixed(2)}, ` : ''}lowest in pH 1.2–6.8 ${sig(worst?.solubilityMgPerMl ?? Number.NaN)} mg/mL at pH ${worst?.pH.toFixed(1)}${plateau}`;
   });
   return (
     <figure className="chart ph-solubility">
