@@ -30,3 +30,19 @@ describe('Model check area', () => {
     expect(within(inner).getAllByText(report[0]!.rows[0]!.source, { selector: 'td' }).length).toBeGreaterThan(0);
   });
 });
+
+describe('Model check: the salt-solubility model on drugs it never saw (issue 10)', () => {
+  it('shows the leave-one-drug-out figures of every variant with the anchor’s beside them, and one parity plot per series', async () => {
+    const { SALT_SOLUBILITY_VARIANTS, SALT_SOLUBILITY_SERIES, SALT_SOLUBILITY_MODEL } = await import('@/chem');
+    render(<ModelCheckArea />);
+    const table = screen.getByRole('table', { name: /Leave-one-drug-out figures/ });
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows).toHaveLength(SALT_SOLUBILITY_VARIANTS.length);
+    const inUse = rows.find((r) => /in use/.test(r.textContent ?? ''))!;
+    const shipped = SALT_SOLUBILITY_VARIANTS.find((v) => v.id === SALT_SOLUBILITY_MODEL.id)!;
+    expect(within(inUse).getByText(shipped.rmse!.toFixed(2))).toBeInTheDocument();
+    expect(within(inUse).getByText(shipped.anchorRmse!.toFixed(2))).toBeInTheDocument();
+    const plots = screen.getAllByRole('img', { name: /salts, ρ/ });
+    expect(plots).toHaveLength(SALT_SOLUBILITY_SERIES.filter((s) => s.salts.length >= 3).length);
+  });
+});

@@ -1,6 +1,7 @@
 import { useMemo, useState } from 'react';
 import { validationReport, type ModelValidation } from '@/chem';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
+import { SaltSolubilityCheck } from './SaltSolubilityCheck';
 import '../model-check.css';
 
 const pct = (x: number) => `${x.toFixed(1)} %`;
@@ -70,6 +71,7 @@ export function ModelCheckArea() {
           width={760}
         />
       </section>
+      <SaltSolubilityCheck />
       <section className="panel" aria-labelledby="confidence-table-title">
         <h2 id="confidence-table-title">Figures</h2>
         <div className="table-scroll">
