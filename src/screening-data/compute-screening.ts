@@ -1,16 +1,20 @@
 import {
   saltStoichiometryFromCharges,
   COUNTER_IONS,
+  counterIonDescriptorsFromSmiles,
   drugIon as deriveDrugIon,
   drugThermoIon,
   estimateSaltThermo,
   getThermoIon,
   mergeLibrary,
+  neutralParentSmiles,
   organicIonFromFormula,
   parseStructure,
   screenCompound,
   type CounterIon,
+  type CounterIonDescriptors,
   type DrugIon,
+  type LibraryIon,
   type ParsedStructure,
   type SaltThermoResult,
   type ScreenResult,
@@ -85,6 +89,30 @@ function counterThermoIon(ion: CounterIon, st: Stoichiometry): ThermoIon {
 }
 
 /**
+ * Descriptors of the shortlisted in-house ions for the salt-solubility model, read from the ion's
+ * SMILES (neutralised to its parent) with openchemlib, loaded only when such an ion is shortlisted.
+ * Bundled ions need none (the core ships theirs); an in-house ion without a SMILES keeps the
+ * common-practice anchor, and a note says so.
+ */
+async function inHouseIonDescriptors(ions: readonly LibraryIon[], notes: string[]): Promise<Record<string, CounterIonDescriptors>> {
+  const mine = ions.filter((i) => i.origin === 'in-house');
+  if (mine.length === 0) return {};
+  const out: Record<string, CounterIonDescriptors> = {};
+  const withSmiles = mine.filter((i) => i.ionSmiles.trim() !== '');
+  for (const i of mine) if (!withSmiles.includes(i)) notes.push(`${i.name}: no SMILES, so its salt solubility rests on the 10² × S₀ anchor, not the model.`);
+  if (withSmiles.length === 0) return out;
+  const ocl = await import('openchemlib');
+  for (const i of withSmiles) {
+    try {
+      out[i.id] = counterIonDescriptorsFromSmiles(ocl, neutralParentSmiles(ocl, i.ionSmiles));
+    } catch {
+      notes.push(`${i.name}: its SMILES could not be read for descriptors; its salt solubility rests on the anchor.`);
+    }
+  }
+  return out;
+}
+
+/**
  * Screen a project: parse the structure (openchemlib, loaded lazily) when a SMILES is given, derive
  * the drug ion, resolve the shortlist against the library (bundled + in-house + per-project edits),
  * estimate each salt's thermochemical cycle, then run the core's `screenCompound`. Throws the core's
@@ -110,6 +138,10 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
   const settings = screeningSettingsOf(project);
   const library = mergeLibrary(COUNTER_IONS, customIons, project.id).ions;
   const byId = new Map(library.map((i) => [i.id, i]));
+  const inHouseDescriptors = await inHouseIonDescriptors(
+    candidates.map((c) => byId.get(c.ionId)).filter((i): i is LibraryIon => i !== undefined),
+    notes,
+  );
   let drugThermo: ThermoIon | null = null;
   let drugThermoReason: string | null = null;
   try {
@@ -186,6 +218,7 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
     screening.push({
       id: c.id,
       counterIon: ion,
+      ...(inHouseDescriptors[ion.id] ? { counterIonDescriptors: inHouseDescriptors[ion.id] } : {}),
       stoichiometry: {
         label: st.label,
         drugPerSalt: st.drugPerSalt,

@@ -116,3 +116,26 @@ export function counterIonFromParentSmiles(ocl: Ocl, parentSmiles: string, charg
   }
   return { ionFormula, parentFormula, rings, descriptors };
 }
+
+/**
+ * The neutral parent of an ion drawn with its charge, for the descriptors: charged N, O and S atoms
+ * are given back their protons (a carboxylate or sulfonate O⁻ → OH, an ammonium N⁺–H → N). A
+ * quaternary N⁺ without hydrogen stays charged — such a cation has no neutral parent.
+ * @throws ChemInputError (field `smiles`) for an unreadable SMILES.
+ */
+export function neutralParentSmiles(ocl: Ocl, ionSmiles: string): string {
+  let mol: InstanceType<Ocl['Molecule']>;
+  try {
+    mol = ocl.Molecule.fromSmiles(ionSmiles);
+  } catch (err) {
+    throw new ChemInputError('smiles', `cannot read the ion's SMILES (${err instanceof Error ? err.message : String(err)})`, 'an OpenSMILES string of the ion');
+  }
+  for (let a = 0; a < mol.getAllAtoms(); a++) {
+    const z = mol.getAtomicNo(a);
+    const q = mol.getAtomCharge(a);
+    if (q === 0 || (z !== 7 && z !== 8 && z !== 16)) continue;
+    if (q < 0 || mol.getAllHydrogens(a) > 0) mol.setAtomCharge(a, 0);
+  }
+  mol.ensureHelperArrays(ocl.Molecule.cHelperNeighbours);
+  return mol.toIsomericSmiles();
+}

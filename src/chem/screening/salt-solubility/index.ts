@@ -5,6 +5,7 @@
 export {
   counterIonDescriptorsFromSmiles,
   counterIonFromParentSmiles,
+  neutralParentSmiles,
   withoutHydroxide,
   type CounterIonDescriptors,
   type CounterIonFromParent,
