@@ -27,23 +27,31 @@ module.exports = {
     {
       name: 'one-way-flow',
       severity: 'error',
-      comment: 'Imports flow core ← persistence ← stores ← features ← app; nothing below imports app/.',
-      from: { path: '^src/(persistence|stores|features|components|chem)/' },
+      comment: 'Imports flow core ← persistence ← stores ← screening-data ← features ← app; nothing below imports app/.',
+      from: { path: '^src/(persistence|stores|screening-data|features|components|chem)/' },
       to: { path: '^src/app/' },
     },
     {
       name: 'features-stay-apart',
       severity: 'error',
       comment:
-        'A feature does not import another feature; the app shell composes them. The one shared data layer, features/screening-data (the screening every area reads), is the exception.',
+        'A feature does not import another feature; the app shell composes them. What several areas share (the screening every area reads) lives in src/screening-data, outside the features.',
       from: { path: '^src/features/([^/]+)/' },
-      to: { path: '^src/features/', pathNot: ['^src/features/$1/', '^src/features/screening-data/'] },
+      to: { path: '^src/features/', pathNot: '^src/features/$1/' },
+    },
+    {
+      name: 'screening-data-below-features',
+      severity: 'error',
+      comment:
+        'src/screening-data is the shared screening layer under the feature areas: it reads the core, storage, stores and the shared chart types, never a feature or the app shell.',
+      from: { path: '^src/screening-data/' },
+      to: { path: '^src/(features|app)/' },
     },
     {
       name: 'storage-below-ui',
       severity: 'error',
       from: { path: '^src/persistence/' },
-      to: { path: '^src/(features|components|stores)/' },
+      to: { path: '^src/(features|components|stores|screening-data)/' },
     },
     {
       name: 'core-through-index',

@@ -51,8 +51,8 @@ describe('architecture rule (dependency-cruiser)', () => {
 
   it('flags one feature importing another, but lets every feature read the shared screening data', () => {
     const shared = cruise({
-      'src/features/screening-data/data.ts': 'export const d = 1;\n',
-      'src/features/alpha/a.ts': "import { d } from '../screening-data/data';\nexport const a = d;\n",
+      'src/screening-data/data.ts': 'export const d = 1;\n',
+      'src/features/alpha/a.ts': "import { d } from '../../screening-data/data';\nexport const a = d;\n",
     });
     expect(shared.failed).toBe(false);
     const crossed = cruise({
@@ -62,6 +62,16 @@ describe('architecture rule (dependency-cruiser)', () => {
     expect(crossed.failed).toBe(true);
     expect(crossed.output).toMatch(/features-stay-apart/);
   }, 60000);
+
+  it('flags the shared screening layer importing a feature', () => {
+    const upward = cruise({
+      'src/features/alpha/a.ts': 'export const a = 1;\n',
+      'src/screening-data/data.ts': "import { a } from '../features/alpha/a';\nexport const d = a;\n",
+    });
+    expect(upward.failed).toBe(true);
+    expect(upward.output).toMatch(/screening-data-below-features/);
+  }, 60000);
+
   it('flags a layer outside the core importing a core file by its deep path, but not through @/chem', () => {
     const core = {
       'src/chem/compound/mass.ts': 'export const massGPerMol = 1;\n',

@@ -10,7 +10,7 @@
  * 60 are reached).
  */
 import { COUNTER_IONS, rankCandidates, screeningWeightsSchema, CRITERIA } from '@/chem';
-import { computeProjectScreening } from '@/features/screening-data/compute-screening';
+import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { displayRows, sortRows } from '@/features/ranking/ranking-rows';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { projectSettingsSchema, type CandidateRecord, type ProjectRecord } from '@/persistence/records';

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { projectSettingsSchema, type ProjectRecord } from '@/persistence/records';
-import { screeningInputsKey } from '@/features/screening-data/compute-screening';
-import { screeningSettingsOf } from '@/features/screening-data/screening-settings';
+import { screeningInputsKey } from '@/screening-data/compute-screening';
+import { screeningSettingsOf } from '@/screening-data/screening-settings';
 
 const project = (extra: Record<string, unknown> = {}, chlorideM = 0.12): ProjectRecord => ({
   id: 'p',

@@ -1,6 +1,6 @@
 import { hygroscopicityClass, latticeFromSolutionEnthalpy, vantHoffFit, type Estimate, type VanTHoffFit } from '@/chem';
-import type { ProjectScreening } from '@/features/screening-data/compute-screening';
-import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
+import type { ProjectScreening } from '@/screening-data/compute-screening';
+import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { MeasurementRecord } from '@/persistence/records';
 import { CELSIUS_ZERO_K } from './bench-form-model';
 

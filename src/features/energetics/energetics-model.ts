@@ -1,7 +1,7 @@
 import type { Estimate } from '@/chem';
 import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
 
-export { energyCycleOf } from '@/features/screening-data/energy-cycle';
+export { energyCycleOf } from '@/screening-data/energy-cycle';
 
 /** How small ΔH_sol is next to the two terms it is the difference of (the reason its error is large). */
 export function cancellationNote(cycle: EnergyCycle): string {

@@ -1,7 +1,7 @@
 import type { RankedRow, ScreenRow } from '@/chem';
-import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
-import type { ProjectScreening } from '@/features/screening-data/compute-screening';
-import { candidateLabel } from '@/features/screening-data/candidate-label';
+import { uncertaintiesOf } from '@/screening-data/uncertainty';
+import type { ProjectScreening } from '@/screening-data/compute-screening';
+import { candidateLabel } from '@/screening-data/candidate-label';
 import type { RankingSortKey } from '@/stores/ranking-view-store';
 
 /** A number as the ranking shows it: value, 1σ (or a ±1σ range), and whether a measurement backs it. */

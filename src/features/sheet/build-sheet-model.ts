@@ -9,10 +9,10 @@ import {
 } from '@/chem';
 import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
 import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
-import type { ProjectScreening } from '@/features/screening-data/compute-screening';
-import { uncertaintiesOf } from '@/features/screening-data/uncertainty';
-import { CRITERION_TEXT } from '@/features/screening-data/criteria';
-import { energyCycleOf } from '@/features/screening-data/energy-cycle';
+import type { ProjectScreening } from '@/screening-data/compute-screening';
+import { uncertaintiesOf } from '@/screening-data/uncertainty';
+import { CRITERION_TEXT } from '@/screening-data/criteria';
+import { energyCycleOf } from '@/screening-data/energy-cycle';
 import type { ProjectRecord } from '@/persistence/records';
 import type { SheetCell, SheetColumn, SheetModel, SheetRow, SheetSetting, ValueOrigin } from './sheet.types';
 

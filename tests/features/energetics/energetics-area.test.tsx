@@ -7,7 +7,7 @@ import { measurementsRepo } from '@/persistence/measurements-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import type { ProjectRecord } from '@/persistence/records';
 import { EnergeticsArea } from '@/features/energetics/components/EnergeticsArea';
-import { computeProjectScreening } from '@/features/screening-data/compute-screening';
+import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { backedOutLattice } from '@/features/bench/bench-predictions';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 

@@ -8,7 +8,7 @@ import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import type { ProjectRecord } from '@/persistence/records';
 import { RankingArea } from '@/features/ranking/components/RankingArea';
 import { bufferFromDraft, EMPTY_BUFFER } from '@/features/ranking/buffer-media-model';
-import { screeningSettingsOf } from '@/features/screening-data/screening-settings';
+import { screeningSettingsOf } from '@/screening-data/screening-settings';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 
 describe('buffer form model', () => {

@@ -9,7 +9,7 @@ import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { projectSettingsSchema, type ProjectRecord } from '@/persistence/records';
 import { RankingArea } from '@/features/ranking/components/RankingArea';
 import { conditionsDraftOf, conditionsFromDraft } from '@/features/ranking/settings-form-model';
-import { screeningSettingsOf } from '@/features/screening-data/screening-settings';
+import { screeningSettingsOf } from '@/screening-data/screening-settings';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 
 describe('screening-conditions form model', () => {

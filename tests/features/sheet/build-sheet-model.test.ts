@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import { CRITERIA, defaultScreeningSettings, validationReport } from '@/chem';
-import { computeProjectScreening } from '@/features/screening-data/compute-screening';
+import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
 import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';

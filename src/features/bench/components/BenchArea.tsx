@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import type { MeasurementRecord, ProjectRecord } from '@/persistence/records';
-import { candidateLabel } from '@/features/screening-data/candidate-label';
+import { candidateLabel } from '@/screening-data/candidate-label';
 import { useBenchData } from '../hooks/use-bench-data';
 import { CandidateForm } from './CandidateForm';
 import { MeasurementForm } from './MeasurementForm';

@@ -1,6 +1,6 @@
 import type { ProjectRecord, MeasurementRecord } from '@/persistence/records';
-import { useProjectScreening } from '@/features/screening-data/use-screening';
-import type { ProjectScreening } from '@/features/screening-data/compute-screening';
+import { useProjectScreening } from '@/screening-data/use-screening';
+import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { VantHoffPlot } from '@/components/charts/VantHoffPlot';
 import { backedOutLattice, predictionFor, vantHoffOf } from '../bench-predictions';
 import { BenchArea } from './BenchArea';

@@ -193,6 +193,8 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     const formula = storedRef.current.formula;
     if (parsed && parsed.netCharge === 0 && (formula === '' || formula === previousFormula) && !edited.current.has('formula')) {
       changes.formula = parsed.formula;
+      const shown = draftRef.current;
+      if (shown.smiles.trim() === smiles) setDraft({ ...shown, formula: parsed.formula });
     }
     write(changes, ['smiles']);
   };

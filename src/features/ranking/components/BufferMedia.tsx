@@ -2,7 +2,7 @@ import { memo, useId, useState } from 'react';
 import { COUNTER_IONS, type ScreeningMedium } from '@/chem';
 import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { projectsRepo } from '@/persistence/projects-repo';
-import { SCREENING_SETTINGS_KEY } from '@/features/screening-data/screening-settings';
+import { SCREENING_SETTINGS_KEY } from '@/screening-data/screening-settings';
 import type { ProjectRecord } from '@/persistence/records';
 import type { DisplayRow } from '../ranking-rows';
 import { bufferFromDraft, EMPTY_BUFFER, type BufferDraft, type BufferErrors } from '../buffer-media-model';

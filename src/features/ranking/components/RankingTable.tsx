@@ -2,7 +2,7 @@ import { memo, useCallback, useLayoutEffect, useMemo, useRef, useState } from 'r
 import { CRITERIA } from '@/chem';
 import { sig } from '@/components/charts/chart-format';
 import { useRankingViewStore, type RankingSortKey } from '@/stores/ranking-view-store';
-import { CRITERION_TEXT } from '@/features/screening-data/criteria';
+import { CRITERION_TEXT } from '@/screening-data/criteria';
 import { sortRows, type DisplayRow, type ShownNumber } from '../ranking-rows';
 
 const minus = (s: string) => s.replace(/^-/, '−');

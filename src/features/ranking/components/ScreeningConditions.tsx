@@ -3,7 +3,7 @@ import { memo, useEffect, useId, useRef, useState } from 'react';
 import type { ScreeningSettings } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
 import type { ProjectRecord } from '@/persistence/records';
-import { SCREENING_SETTINGS_KEY } from '@/features/screening-data/screening-settings';
+import { SCREENING_SETTINGS_KEY } from '@/screening-data/screening-settings';
 import {
   CONDITION_FIELDS,
   conditionsDraftOf,

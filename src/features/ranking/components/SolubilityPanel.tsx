@@ -1,6 +1,6 @@
 import { memo, useMemo } from 'react';
 import { PhSolubilityChart, type SolubilitySeries } from '@/components/charts/PhSolubilityChart';
-import type { ProjectScreening } from '@/features/screening-data/compute-screening';
+import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 import type { ScreenRow } from '@/chem';
 

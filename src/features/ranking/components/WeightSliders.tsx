@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef } from 'react';
 import { CRITERIA, type ScreeningWeights } from '@/chem';
-import { CRITERION_TEXT } from '@/features/screening-data/criteria';
+import { CRITERION_TEXT } from '@/screening-data/criteria';
 
 /** One slider per criterion; the ranking re-orders while a slider moves. */
 export function WeightSliders({

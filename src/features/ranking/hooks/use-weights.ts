@@ -3,7 +3,7 @@ import { screeningWeightsSchema, type ScreeningWeights } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
 import type { ProjectRecord } from '@/persistence/records';
-import { SCREENING_SETTINGS_KEY, screeningBlockOf, screeningSettingsOf } from '@/features/screening-data/screening-settings';
+import { SCREENING_SETTINGS_KEY, screeningBlockOf, screeningSettingsOf } from '@/screening-data/screening-settings';
 
 /** Save this long after the last slider movement, ms. */
 const SAVE_DELAY_MS = 400;

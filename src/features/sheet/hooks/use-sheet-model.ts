@@ -2,8 +2,8 @@ import { useMemo, useState } from 'react';
 import { screeningWeightsSchema, validationReport, type ModelValidation } from '@/chem';
 
 const defaultWeights = screeningWeightsSchema.parse({});
-import { useProjectScreening } from '@/features/screening-data/use-screening';
-import { ROBUSTNESS_SEED, useRobustness } from '@/features/screening-data/use-robustness';
+import { useProjectScreening } from '@/screening-data/use-screening';
+import { ROBUSTNESS_SEED, useRobustness } from '@/screening-data/use-robustness';
 import type { ProjectRecord } from '@/persistence/records';
 import { buildSheetModel } from '../build-sheet-model';
 import type { SheetModel } from '../sheet.types';
