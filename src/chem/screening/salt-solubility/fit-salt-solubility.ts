@@ -96,7 +96,7 @@ export function predictSaltSolubility(m: FittedSaltSolubilityModel, row: readonl
   return log10IntrinsicM + m.level + slopePart(m.ridge, row);
 }
 
-/** Σ βⱼ·xⱼ on the raw scale (the centred fit's intercept and means are zero by construction). */
+/** Σ βⱼ·xⱼ on the raw scale (the within-series fit has no intercept; the level carries it). */
 function slopePart(r: RidgeModel, row: readonly number[]): number {
   let y = 0;
   for (let j = 0; j < r.coefficients.length; j++) y += (r.coefficients[j]! * row[j]!) / r.featureScales[j]!;
@@ -129,7 +129,11 @@ function fitOn(rows: readonly SaltSolubilityTrainingRow[], features: readonly Sa
     });
   }
   const ridge = fitRidge(names, x, y, lambda);
-  const centred: RidgeModel = { ...ridge, intercept: 0, featureMeans: ridge.featureMeans.map(() => 0) };
+  // The slopes act on raw predictors (slopePart); the means kept here are those of every training
+  // salt, so that a salt's contributions read "relative to the average published salt".
+  const allRows = rows.map((r) => featureRow(r.input, features));
+  const allMeans = names.map((_, j) => allRows.reduce((s, v) => s + v[j]!, 0) / allRows.length);
+  const centred: RidgeModel = { ...ridge, intercept: 0, featureMeans: allMeans };
   const offsets = series.map((g) => g.reduce((s, r) => s + r.log10DrugM - r.input.drug.log10IntrinsicM - slopePart(centred, featureRow(r.input, features)), 0) / g.length);
   return { kind, ridge: centred, level: offsets.reduce((s, v) => s + v, 0) / offsets.length };
 }
