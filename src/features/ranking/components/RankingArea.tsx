@@ -104,8 +104,8 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
 
   const data = screening.result;
   // The table re-ranks in the same frame as the slider (its re-ordering is transform-based while the
-  // slider moves, see RankingTable); what is slower to follow — the media table, the chart's top
-  // three, the Monte Carlo — reads a deferred copy that a newer movement can interrupt.
+  // slider moves, see RankingTable). What is slower to follow — the media table and the chart's top
+  // three — follows when the movement ends (`settleTick`), the Monte Carlo after the weights settle.
   const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, weights) : []), [data, weights]);
   const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
   const deferredWeights = useDeferredValue(weights);
@@ -116,17 +116,13 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
     const t = setTimeout(onSettle, SETTLE_MS);
     return () => clearTimeout(t);
   }, [weights, onSettle]);
-  const deferredRows = useDeferredValue(rows);
-  // The media table follows the ranking when a movement ends (or the screen changes), not during it;
-  // its rows and media come from the same screen.
-  const mediaView = useDeferredValue(
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- rows read at the settle on purpose
-    useMemo(() => ({ rows, media: data?.settings.media ?? [] }), [data, settleTick]),
-  );
+  // The ranking as it stood when the last movement ended (or the screen changed).
+  const settledRows = useMemo(() => rows, [data, settleTick]); // eslint-disable-line react-hooks/exhaustive-deps
+  const mediaView = useDeferredValue(useMemo(() => ({ rows: settledRows, media: data?.settings.media ?? [] }), [settledRows, data]));
   const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
   const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
   const topKey = useDeferredValue(
-    deferredRows
+    settledRows
       .filter((r) => r.rank !== null && r.rank <= 3)
       .sort((a, b) => a.rank! - b.rank!)
       .map((r) => r.id)
