@@ -73,7 +73,7 @@ export interface PhProfile {
   assumptions: string[];
 }
 
-const ASSUMPTIONS = [
+export const PROFILE_ASSUMPTIONS: readonly string[] = [
   'pH held by the medium (buffered); activities equal concentrations unless the Davies option is on',
   'total dissolved counter-ion = (counter-ions per formula unit) × (formula units dissolved) + the medium’s own',
   'pKa values at 25 °C used as given; no self-association, no micelles, no complexation',
@@ -160,13 +160,17 @@ export function numericalPhMax(
   return crossings.reduce((best, x) => (Math.abs(x - ref) < Math.abs(best - ref) ? x : best));
 }
 
-/** Solubility against pH, default 1.0–8.0 in steps of 0.1, with pH_max and the stated assumptions. */
-export function phSolubilityProfile(
+/**
+ * The checks phSolubilityProfile makes before it computes anything (grid, S₀, drug, salt), in its
+ * order, for callers that evaluate the same model another way (ph-grid-solubility.ts). Throws
+ * ChemInputError.
+ */
+export function checkProfileInput(
   drug: DrugAcidBase,
   log10IntrinsicM: number,
   salt: ProfileSalt | null,
   o: ProfileOptions = {},
-): PhProfile {
+): { from: number; to: number; step: number; p: Protolyte } {
   const from = requireFiniteInRange('phFrom', o.phFrom ?? 1, 0, 14);
   const to = requireFiniteInRange('phTo', o.phTo ?? 8, 0, 14);
   const step = requireFiniteInRange('phStep', o.phStep ?? 0.1, 0.001, 14);
@@ -174,6 +178,17 @@ export function phSolubilityProfile(
   requireFiniteInRange('log10IntrinsicSolubility', log10IntrinsicM, -20, 2, 'log₁₀ mol/L');
   const p = drugProtolyte(drug);
   if (salt) checkSaltInput(saltInput(p, drug.ionCharge, salt, from, o));
+  return { from, to, step, p };
+}
+
+/** Solubility against pH, default 1.0–8.0 in steps of 0.1, with pH_max and the stated assumptions. */
+export function phSolubilityProfile(
+  drug: DrugAcidBase,
+  log10IntrinsicM: number,
+  salt: ProfileSalt | null,
+  o: ProfileOptions = {},
+): PhProfile {
+  const { from, to, step, p } = checkProfileInput(drug, log10IntrinsicM, salt, o);
   const n = Math.round((to - from) / step);
   const points: ProfilePoint[] = [];
   for (let k = 0; k <= n; k++) {
@@ -183,6 +198,6 @@ export function phSolubilityProfile(
   return {
     points,
     phMax: salt ? numericalPhMax(drug, log10IntrinsicM, salt, o) : null,
-    assumptions: ASSUMPTIONS,
+    assumptions: [...PROFILE_ASSUMPTIONS],
   };
 }

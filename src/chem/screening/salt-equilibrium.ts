@@ -86,6 +86,27 @@ function saltIonicContribution(i: SaltEquilibriumInput, s: number): number {
   return 0.5 * sum;
 }
 
+/**
+ * log₁₀ of the formula units dissolved, s, without counter-ion in the medium (c = 0): the mass balance
+ * then makes log K_sp linear in log s, m·(log α_D + log m + log s) + n·(log α_X + log n + log s) =
+ * log K_sp − (activity term), solved in closed form rather than by a root search. `laD`, `laX`: log₁₀ of
+ * the fractions of drug and counter-ion in their salt charge states. Above 10⁶ formula units per litre
+ * the salt does not limit solubility (`unbounded`); below 10⁻²⁰⁰ the value is clamped there, as the
+ * bracketed search clamps it.
+ */
+export function saltLog10FormulaUnitsNoCommonIon(
+  m: number,
+  n: number,
+  laD: number,
+  laX: number,
+  log10KspLessGamma: number,
+): { u: number; unbounded: boolean } {
+  const u = (log10KspLessGamma - m * (laD + Math.log10(m)) - n * (laX + Math.log10(n))) / (m + n);
+  if (u > LOG_S_MAX) return { u: LOG_S_MAX, unbounded: true };
+  if (u < LOG_S_MIN) return { u: LOG_S_MIN, unbounded: false };
+  return { u, unbounded: false };
+}
+
 /** Solve the salt's solubility at one pH. */
 export function solveSaltSolubility(i: SaltEquilibriumInput, checked = false): SaltEquilibriumResult {
   if (!checked) checkSaltInput(i);
@@ -95,6 +116,7 @@ export function solveSaltSolubility(i: SaltEquilibriumInput, checked = false): S
   const laD = log10ChargeFraction(i.drug, i.pH, i.drugIonCharge);
   const laX = log10ChargeFraction(i.counterIon, i.pH, i.counterIonCharge);
   const solveWith = (log10GammaTerm: number) => {
+    if (c === 0) return saltLog10FormulaUnitsNoCommonIon(m, n, laD, laX, i.log10Ksp - log10GammaTerm);
     const g = (u: number) => {
       const s = 10 ** u;
       return m * (laD + Math.log10(m) + u) + n * (laX + Math.log10(n * s + c)) + log10GammaTerm - i.log10Ksp;

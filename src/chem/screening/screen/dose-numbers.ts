@@ -1,5 +1,5 @@
 import { doseNumber, ICH_M9_PH_RANGE } from '../dose-number';
-import { solubilityAtPh, type PhProfile, type ProfileSalt } from '../ph-profile';
+import { solubilityAtPh, type PhProfile, type ProfilePoint, type ProfileSalt } from '../ph-profile';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import type { DoseNumberAt } from './screen.types';
 
@@ -27,12 +27,36 @@ export function doseNumberAt(
 }
 
 /** The ICH M9 points plus every profile point inside pH 1.2–6.8, ascending. */
-export function ichM9Phs(profile: PhProfile): number[] {
+export function ichM9Phs(profile: Pick<PhProfile, 'points'>): number[] {
   const ph = new Set<number>(ICH_M9_POINTS_PH);
   for (const p of profile.points) {
     if (p.pH >= ICH_M9_PH_RANGE[0] - 1e-9 && p.pH <= ICH_M9_PH_RANGE[1] + 1e-9) ph.add(p.pH);
   }
   return [...ph].sort((a, b) => a - b);
+}
+
+/**
+ * Dose numbers at the ICH M9 pH values, taking each from the profile point at that pH where there is
+ * one (the same model at the same pH, so the same number as doseNumberAt) instead of solving again.
+ */
+export function ichM9DoseNumbers(
+  ctx: ScreenContext,
+  salt: ProfileSalt | null,
+  points: readonly ProfilePoint[],
+): DoseNumberAt[] {
+  const byPh = new Map<number, ProfilePoint>();
+  for (const p of points) byPh.set(p.pH, p);
+  return ichM9Phs({ points: [...points] }).map((pH) => {
+    const p = byPh.get(pH);
+    if (!p) return doseNumberAt(ctx, salt, pH);
+    const mg = freeFormMgPerMl(ctx, p.solubilityM);
+    return {
+      pH,
+      solubilityMgPerMl: mg,
+      doseNumber: ctx.doseMg === null ? null : doseNumber(ctx.doseMg, mg),
+      solid: p.solid,
+    };
+  });
 }
 
 /** The point of lowest solubility (the first one on ties). */

@@ -1,5 +1,5 @@
 import { phSolubilityProfile, type PhProfile } from '../ph-profile';
-import { doseNumberAt, ichM9Phs, solubilityClassOf, worstDoseNumber } from './dose-numbers';
+import { ichM9DoseNumbers, solubilityClassOf, worstDoseNumber } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import { freeFormPoorlySolubleFlag } from './screen-reasons';
 import type { FreeFormResult, ScreenFlag } from './screen.types';
@@ -7,7 +7,7 @@ import type { FreeFormResult, ScreenFlag } from './screen.types';
 /** The free form on its own: its pH–solubility profile, dose numbers across ICH M9 pH and its flag. */
 export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; profile: PhProfile } {
   const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, null, ctx.grid);
-  const doses = ichM9Phs(profile).map((pH) => doseNumberAt(ctx, null, pH));
+  const doses = ichM9DoseNumbers(ctx, null, profile.points);
   const worst = worstDoseNumber(doses);
   const flags: ScreenFlag[] = [];
   if (worst.doseNumber !== null && worst.doseNumber > 1) {
@@ -16,10 +16,13 @@ export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; pr
   const result: FreeFormResult = {
     log10IntrinsicM: ctx.log10IntrinsicM,
     intrinsicOrigin: ctx.intrinsicOrigin,
-    profile: profile.points.map((p) => ({
-      pH: p.pH,
-      solubilityMgPerMl: freeFormMgPerMl(ctx, p.solubilityM),
-    })),
+    profile:
+      ctx.profiles === 'none'
+        ? []
+        : profile.points.map((p) => ({
+            pH: p.pH,
+            solubilityMgPerMl: freeFormMgPerMl(ctx, p.solubilityM),
+          })),
     doseNumbers: doses,
     worst,
     solubilityClass: solubilityClassOf(worst),

@@ -1,6 +1,7 @@
 import { ChemInputError, requireFiniteInRange, type Estimate } from '../../result';
 import { gseLog10IntrinsicSolubilityM } from '../intrinsic-solubility';
 import type { SaltMassInput } from '../mass-cost';
+import { drugGrids, type DrugGrids } from '../ph-grid-solubility';
 import { drugProtolyte, type DrugAcidBase, type ProfileOptions } from '../ph-profile';
 import { parseScreeningSettings, type ScreeningSettings } from '../settings';
 import type { Protolyte } from '../speciation';
@@ -31,6 +32,10 @@ export interface ScreenContext {
   temperatureK: number;
   activity: ProfileOptions['activity'];
   grid: { phFrom: number; phTo: number; phStep: number; activity: ProfileOptions['activity'] };
+  /** The drug's speciation and free-form solubility on the grid and the pH_max scan, computed once. */
+  grids: DrugGrids;
+  /** Whether rows and the free form carry their profile (ScreenCompoundInput.profiles). */
+  profiles: 'full' | 'none';
 }
 
 /** Intrinsic solubility S₀ of the free form: measured when given, else the General Solubility Equation. */
@@ -109,6 +114,7 @@ export function screenContext(input: ScreenCompoundInput): ScreenContext {
         }
       : { model: 'ideal' };
   const g = settings.phGrid;
+  const grid = { phFrom: g.from, phTo: g.to, phStep: g.step, activity };
   return {
     settings,
     compound: c,
@@ -121,7 +127,9 @@ export function screenContext(input: ScreenCompoundInput): ScreenContext {
     intrinsicOrigin: origin,
     temperatureK,
     activity,
-    grid: { phFrom: g.from, phTo: g.to, phStep: g.step, activity },
+    grid,
+    grids: drugGrids(drugP, c.ionCharge, est.value, grid),
+    profiles: input.profiles ?? 'full',
   };
 }
 

@@ -2,9 +2,15 @@ import { saltDeltaPka, saltFormationVerdict } from '../delta-pka';
 import { disproportionationRisk } from '../disproportionation';
 import { doseNumber } from '../dose-number';
 import { activeFraction, saltMassPerDoseMg } from '../mass-cost';
-import { phSolubilityProfile, type ProfileSalt } from '../ph-profile';
+import { fastPathApplies, gridPhMax, saltPointsOnGrid } from '../ph-grid-solubility';
+import {
+  checkProfileInput,
+  phSolubilityProfile,
+  type PhProfile,
+  type ProfileSalt,
+} from '../ph-profile';
 import type { CriterionInputs } from '../ranking';
-import { doseNumberAt, ichM9Phs, solubilityClassOf, worstDoseNumber } from './dose-numbers';
+import { ichM9DoseNumbers, solubilityClassOf, worstDoseNumber } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
 import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
 import type { PreparedCandidate } from './prepare-candidate';
@@ -51,6 +57,22 @@ function saltBranchFlag(
   return d0 > 1 ? saltPoorlySolubleFlag(mg, lowest.pH, d0) : null;
 }
 
+/**
+ * The salt's points on the pH grid and its pH_max. With ideal activities the fast grid evaluation
+ * (ph-grid-solubility.ts) gives the numbers phSolubilityProfile gives, after the same input checks;
+ * the Davies option takes the general solver.
+ */
+function saltProfile(ctx: ScreenContext, salt: ProfileSalt): Pick<PhProfile, 'points' | 'phMax'> {
+  if (!fastPathApplies(ctx.grid)) {
+    return phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
+  }
+  checkProfileInput(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
+  return {
+    points: saltPointsOnGrid(ctx.grids.profile, salt),
+    phMax: gridPhMax(ctx.grids, salt),
+  };
+}
+
 /** The screened row of one candidate, from its prepared inputs and its K_sp (asked for in step order). */
 export function candidateRow(
   ctx: ScreenContext,
@@ -89,8 +111,8 @@ export function candidateRow(
     counterIonPerSalt: st.counterIonPerSalt,
     log10Ksp: ksp.log10Ksp.value,
   };
-  const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-  const doses = ichM9Phs(profile).map((pH) => doseNumberAt(ctx, salt, pH));
+  const profile = saltProfile(ctx, salt);
+  const doses = ichM9DoseNumbers(ctx, salt, profile.points);
   const worst = worstDoseNumber(doses);
   reasons.push(worstSolubilityReason(name, worst));
   if (ctx.doseMg !== null) {
@@ -141,11 +163,14 @@ export function candidateRow(
     log10Ksp: ksp.log10Ksp,
     kspOrigin: ksp.kspOrigin,
     phMax: profile.phMax,
-    profile: profile.points.map((q) => ({
-      pH: q.pH,
-      solubilityMgPerMl: freeFormMgPerMl(ctx, q.solubilityM),
-      solid: q.solid,
-    })),
+    profile:
+      ctx.profiles === 'none'
+        ? []
+        : profile.points.map((q) => ({
+            pH: q.pH,
+            solubilityMgPerMl: freeFormMgPerMl(ctx, q.solubilityM),
+            solid: q.solid,
+          })),
     doseNumbers: doses,
     worst,
     solubilityClass: solubilityClassOf(worst),

@@ -72,6 +72,12 @@ export interface ScreenCompoundInput {
   candidates: readonly ScreeningCandidate[];
   /** Partial settings; defaults fill the rest (settings.ts). */
   settings?: unknown;
+  /**
+   * 'full' (default): every row and the free form carry their pH–solubility profile for a chart.
+   * 'none': the profiles are left empty (a ranking, a table or a batch needs none); every other number
+   * is the same, pH_max included (found without the profile, see ph-grid-solubility.ts).
+   */
+  profiles?: 'full' | 'none';
 }
 
 export type ReasonKind = 'keeps' | 'drops' | 'watch' | 'measured' | 'note';

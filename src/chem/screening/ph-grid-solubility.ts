@@ -1,0 +1,153 @@
+import { brentRoot } from '../numerics/root-finding';
+import type { ProfileOptions, ProfilePoint, ProfileSalt } from './ph-profile';
+import { log10FreeFormSolubilityM, saltLog10FormulaUnitsNoCommonIon } from './salt-equilibrium';
+import { log10ChargeFraction, type Protolyte } from './speciation';
+
+/**
+ * The pH–solubility model of ph-profile.ts evaluated fast on fixed pH lists, for the screen: the same
+ * equations and the same arithmetic (so the same numbers), with what does not depend on the salt
+ * (the drug's speciation and free-form solubility) computed once per compound, and what does not
+ * depend on the compound (a counter-ion's speciation on the grid) memoised across compounds.
+ * Only the ideal-activity, no-common-ion case is taken here; every other case goes to the general
+ * solver (salt-equilibrium.ts) point by point.
+ */
+
+/** The pH values of a profile grid, built exactly as phSolubilityProfile builds them. */
+export function profilePhs(from: number, to: number, step: number): number[] {
+  const n = Math.round((to - from) / step);
+  const out: number[] = [];
+  for (let k = 0; k <= n; k++) out.push(Number(Math.min(to, from + k * step).toFixed(10)));
+  return out;
+}
+
+/** The scan points of the pH_max search, 0 to 14 in steps of 0.25 (as numericalPhMax takes them). */
+export const PH_MAX_SCAN_STEP = 0.25;
+const SCAN_PHS: readonly number[] = (() => {
+  const out = [0];
+  for (let pH = PH_MAX_SCAN_STEP; pH <= 14 + 1e-9; pH += PH_MAX_SCAN_STEP) out.push(pH);
+  return out;
+})();
+
+/** Counter-ion speciation per pH list; bounded so that a long batch of custom ions cannot grow it. */
+const ION_CACHE_LIMIT = 512;
+const ionCache = new Map<string, Float64Array>();
+
+function chargeFractionsOn(p: Protolyte, charge: number, phs: readonly number[], gridKey: string): Float64Array {
+  const key = `${p.pKas.join(',')}|${p.mostProtonatedCharge}|${charge}|${gridKey}`;
+  let v = ionCache.get(key);
+  if (!v) {
+    v = Float64Array.from(phs, (pH) => log10ChargeFraction(p, pH, charge));
+    if (ionCache.size >= ION_CACHE_LIMIT) ionCache.clear();
+    ionCache.set(key, v);
+  }
+  return v;
+}
+
+/** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
+export interface DrugOnGrid {
+  phs: readonly number[];
+  gridKey: string;
+  /** log₁₀ fraction of the drug in its salt charge state. */
+  laD: Float64Array;
+  /** log₁₀ free-form solubility, mol/L. */
+  log10FreeM: Float64Array;
+}
+
+export function drugOnGrid(
+  drug: Protolyte,
+  ionCharge: number,
+  log10IntrinsicM: number,
+  phs: readonly number[],
+  gridKey = phs.join(','),
+): DrugOnGrid {
+  return {
+    phs,
+    gridKey,
+    laD: Float64Array.from(phs, (pH) => log10ChargeFraction(drug, pH, ionCharge)),
+    log10FreeM: Float64Array.from(phs, (pH) => log10FreeFormSolubilityM(drug, log10IntrinsicM, pH)),
+  };
+}
+
+/** Per compound: the drug on the profile grid and on the pH_max scan points. */
+export interface DrugGrids {
+  drug: Protolyte;
+  ionCharge: number;
+  log10IntrinsicM: number;
+  profile: DrugOnGrid;
+  scan: DrugOnGrid;
+}
+
+export function drugGrids(
+  drug: Protolyte,
+  ionCharge: number,
+  log10IntrinsicM: number,
+  grid: { phFrom: number; phTo: number; phStep: number },
+): DrugGrids {
+  const phs = profilePhs(grid.phFrom, grid.phTo, grid.phStep);
+  return {
+    drug,
+    ionCharge,
+    log10IntrinsicM,
+    profile: drugOnGrid(drug, ionCharge, log10IntrinsicM, phs, `${grid.phFrom}:${grid.phTo}:${grid.phStep}`),
+    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
+  };
+}
+
+/** True when the fast path applies: ideal activities and no counter-ion in the medium. */
+export function fastPathApplies(o: ProfileOptions): boolean {
+  return (o.activity === undefined || o.activity.model === 'ideal') && (o.commonIonM ?? 0) === 0;
+}
+
+/**
+ * The salt's profile points on the grid (ideal activities, no common ion): the same values
+ * pointAt in ph-profile.ts gives at each pH. The caller checks the salt input first.
+ */
+export function saltPointsOnGrid(g: DrugOnGrid, salt: ProfileSalt): ProfilePoint[] {
+  const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, g.phs, g.gridKey);
+  const m = salt.drugPerSalt;
+  const n = salt.counterIonPerSalt;
+  const out: ProfilePoint[] = new Array(g.phs.length);
+  for (let k = 0; k < g.phs.length; k++) {
+    const pH = g.phs[k]!;
+    const freeFormLimitedM = 10 ** g.log10FreeM[k]!;
+    const sol = saltLog10FormulaUnitsNoCommonIon(m, n, g.laD[k]!, laX[k]!, salt.log10Ksp);
+    const saltLimitedM = sol.unbounded ? null : m * 10 ** sol.u;
+    out[k] =
+      saltLimitedM !== null && saltLimitedM < freeFormLimitedM
+        ? { pH, solubilityM: saltLimitedM, freeFormLimitedM, saltLimitedM, solid: 'salt' }
+        : { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM, solid: 'free-form' };
+  }
+  return out;
+}
+
+/**
+ * pH_max without a profile (ideal activities, no common ion): log S_salt − log S_free scanned at the
+ * 0.25-step points from cached speciation, each sign change refined by Brent's method on the same
+ * function, and the crossing nearest the drug's salt-forming pKa returned — the algorithm and the
+ * function of numericalPhMax (ph-profile.ts), so the two agree to the root tolerance.
+ */
+export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
+  const m = salt.drugPerSalt;
+  const n = salt.counterIonPerSalt;
+  const logSaltOf = (laD: number, laX: number) =>
+    Math.log10(m * 10 ** saltLog10FormulaUnitsNoCommonIon(m, n, laD, laX, salt.log10Ksp).u);
+  const h = (pH: number) =>
+    logSaltOf(
+      log10ChargeFraction(g.drug, pH, g.ionCharge),
+      log10ChargeFraction(salt.counterIon, pH, salt.counterIonCharge),
+    ) - log10FreeFormSolubilityM(g.drug, g.log10IntrinsicM, pH);
+  const s = g.scan;
+  const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, s.phs, s.gridKey);
+  const crossings: number[] = [];
+  let prev = logSaltOf(s.laD[0]!, laX[0]!) - s.log10FreeM[0]!;
+  for (let k = 1; k < s.phs.length; k++) {
+    const cur = logSaltOf(s.laD[k]!, laX[k]!) - s.log10FreeM[k]!;
+    if (prev === 0) crossings.push(s.phs[k - 1]!);
+    else if (prev * cur < 0) crossings.push(brentRoot(h, s.phs[k - 1]!, s.phs[k]!, 1e-12).root);
+    prev = cur;
+  }
+  if (crossings.length === 0) return null;
+  const p = g.drug;
+  const ref = p.pKas[p.mostProtonatedCharge - g.ionCharge] ?? p.pKas[0]!;
+  return crossings.reduce((best, x) => (Math.abs(x - ref) < Math.abs(best - ref) ? x : best));
+}
