@@ -4,6 +4,7 @@ export type RankingSortKey =
   | 'rank'
   | 'name'
   | 'deltaPka'
+  | 'saltWaterSolubility'
   | 'phMax'
   | 'worstDoseNumber'
   | 'gastricDoseNumber'

@@ -33,8 +33,14 @@ async function rankedNames(page: Page): Promise<string[]> {
 
 /** Active fractions (%) in rank order. */
 async function activeFractions(page: Page): Promise<number[]> {
-  const cells = await page.getByRole('table', { name: /Ranked candidates/ }).locator('tbody tr td:nth-child(9)').allTextContents();
-  return cells.map((t) => Number(/(\d+) %/.exec(t)?.[1]));
+  // The column found by its heading, so a new column cannot point the check at another cell.
+  const table = page.getByRole('table', { name: /Ranked candidates/ });
+  const heads = await table.locator('thead th').allTextContents();
+  const nth = heads.findIndex((h) => /Active fraction/.test(h)) + 1;
+  const cells = await table.locator(`tbody tr > :nth-child(${nth})`).allTextContents();
+  const values = cells.map((t) => Number(/(\d+) %/.exec(t)?.[1]));
+  expect(values.every(Number.isFinite)).toBe(true);
+  return values;
 }
 
 describe('a formulator’s morning (production build, Chromium)', () => {

@@ -1,4 +1,4 @@
-import type { RankedRow, ScreenRow } from '@/chem';
+import { SALT_WATER_ORIGIN_BASIS, SALT_WATER_ORIGIN_LABELS, SOLUBILITY_DRIVER_WORDS, type RankedRow, type ScreenRow } from '@/chem';
 import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { candidateLabel } from '@/screening-data/candidate-label';
@@ -25,6 +25,8 @@ export interface DisplayRow {
   contributions: RankedRow['contributions'];
   row: ScreenRow;
   deltaPka: number | null;
+  /** The salt's own solubility in water, mg/mL as salt, with its ±1σ range and where it comes from. */
+  saltWater: SaltWaterShown | null;
   phMax: ShownNumber | null;
   worstDose: (ShownNumber & { pH: number; solid: string }) | null;
   gastricDose: (ShownNumber & { solid: string }) | null;
@@ -32,6 +34,33 @@ export interface DisplayRow {
   activeFraction: number;
   saltMassPerDoseMg: number | null;
   acceptabilityClass: 1 | 2 | 3 | null;
+}
+
+export interface SaltWaterShown extends ShownNumber {
+  freeFormMgPerMl: number;
+  log10DrugM: number;
+  log10Sigma: number;
+  /** 'model', 'model + fusion data', 'measured' or 'anchor 10² × S₀'. */
+  originWord: string;
+  /** The drivers of the estimate in words, largest first. */
+  drivers: string;
+}
+
+function saltWaterShown(row: ScreenRow): SaltWaterShown | null {
+  const sw = row.saltWaterSolubility;
+  if (!sw) return null;
+  const sigma = sw.log10DrugM.uncertainty;
+  return {
+    value: sw.mgPerMlAsSalt,
+    range: doseRange(sw.mgPerMlAsSalt, sigma),
+    origin: sw.origin === 'measured' ? 'measured' : 'estimated',
+    basis: SALT_WATER_ORIGIN_BASIS[sw.origin],
+    freeFormMgPerMl: sw.mgPerMlAsFreeForm,
+    log10DrugM: sw.log10DrugM.value,
+    log10Sigma: sigma,
+    originWord: SALT_WATER_ORIGIN_LABELS[sw.origin],
+    drivers: sw.drivers.map((d) => SOLUBILITY_DRIVER_WORDS[d.id]).join(', '),
+  };
 }
 
 const doseRange = (d: number, logSigma: number): [number, number] => [d / 10 ** logSigma, d * 10 ** logSigma];
@@ -75,6 +104,7 @@ export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]
         contributions: k.contributions,
         row,
         deltaPka: row.deltaPka,
+        saltWater: saltWaterShown(row),
         phMax: row.phMax === null ? null : { value: row.phMax, sigma: u.phMaxSigma, origin: kspMeasured ? 'measured' : 'estimated', basis: kspBasis },
         worstDose:
           row.worst && row.worst.doseNumber !== null
@@ -110,6 +140,7 @@ const SORT_VALUE: Record<RankingSortKey, (r: DisplayRow) => number | string | nu
   rank: (r) => r.rank,
   name: (r) => r.label.toLowerCase(),
   deltaPka: (r) => r.deltaPka,
+  saltWaterSolubility: (r) => r.saltWater?.log10DrugM ?? null,
   phMax: (r) => r.phMax?.value ?? null,
   worstDoseNumber: (r) => r.worstDose?.value ?? null,
   gastricDoseNumber: (r) => r.gastricDose?.value ?? null,

@@ -1,4 +1,5 @@
 import {
+  SALT_WATER_ORIGIN_LABELS,
   CELSIUS_ZERO_K,
   CRITERIA,
   ICH_M9_VOLUME_ML,
@@ -50,13 +51,6 @@ const num = (value: number | null | undefined, origin: ValueOrigin | null, uncer
 const est = (e: Estimate | null | undefined, origin: ValueOrigin = 'estimated'): SheetCell =>
   e ? num(e.value, origin, e.uncertainty) : { value: null };
 
-/** The salt-solubility origins as the sheet and its CSV write them. */
-export const SALT_WATER_ORIGIN_WORDS: Record<NonNullable<ScreenRow['saltWaterSolubility']>['origin'], string> = {
-  model: 'model',
-  'model+fusion': 'model + fusion data',
-  measured: 'measured',
-  anchor: 'anchor 10² × S₀',
-};
 
 const REASON_WORD: Record<string, string> = { keeps: 'for', drops: 'against', watch: 'watch', measured: 'measured', note: 'note' };
 
@@ -81,7 +75,7 @@ function rowCells(
     saltWaterMgPerMl: num(sw?.mgPerMlAsSalt ?? null, swOrigin),
     saltWaterFreeFormMgPerMl: num(sw?.mgPerMlAsFreeForm ?? null, swOrigin),
     saltWaterLog10M: sw ? est(sw.log10DrugM, swOrigin ?? 'estimated') : { value: null },
-    saltWaterOrigin: { value: sw ? SALT_WATER_ORIGIN_WORDS[sw.origin] : null },
+    saltWaterOrigin: { value: sw ? SALT_WATER_ORIGIN_LABELS[sw.origin] : null },
     log10Ksp: est(row.log10Ksp, kspOrigin ?? 'estimated'),
     // The same 1σ the Ranking area shows (linearised as the rank-robustness draw perturbs pH_max).
     phMax: num(row.phMax, kspOrigin, uncertaintiesOf(row, screening.screen.robustnessShared).phMaxSigma),

@@ -57,7 +57,15 @@ describe('Ranking area (formula-only compound, so no structure parser is loaded)
   });
 
   const rows = () => within(screen.getByRole('table', { name: /Ranked candidates/ })).getAllByRole('row').slice(1);
-  const fractions = () => rows().map((r) => Number(/(\d+) %/.exec(within(r).getAllByRole('cell')[7]!.textContent ?? '')?.[1]));
+  // The active-fraction cell found by its heading (the candidate is a row header, not a cell), so a new
+  // column cannot silently point the check at another cell.
+  const fractions = () => {
+    const heads = within(screen.getByRole('table', { name: /Ranked candidates/ })).getAllByRole('columnheader');
+    const col = heads.findIndex((h) => /Active fraction/.test(h.textContent ?? '')) - 1;
+    const values = rows().map((r) => Number(/(\d+) %/.exec(within(r).getAllByRole('cell')[col]!.textContent ?? '')?.[1]));
+    expect(values.every(Number.isFinite)).toBe(true);
+    return values;
+  };
 
   it('ranks the shortlist with the cautions beside it and re-orders as a weight moves', async () => {
     render(<RankingArea project={project} />);

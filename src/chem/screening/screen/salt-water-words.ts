@@ -26,12 +26,23 @@ export const SOLUBILITY_DRIVER_WORDS: Record<SolubilityDriverId, string> = {
   'low-melting-salt': 'low-melting salt',
 };
 
-const ORIGIN_WORDS: Record<SaltWaterSolubility['origin'], string> = {
-  model: 'model estimate',
-  'model+fusion': 'model + your fusion data',
+/** Where a salt's water solubility came from, as a short label (tables, CSV). */
+export const SALT_WATER_ORIGIN_LABELS: Record<SaltWaterSolubility['origin'], string> = {
+  model: 'model',
+  'model+fusion': 'model + fusion data',
   measured: 'measured',
+  anchor: 'anchor 10² × S₀',
+};
+
+/** The same in a sentence: what the number rests on. */
+export const SALT_WATER_ORIGIN_BASIS: Record<SaltWaterSolubility['origin'], string> = {
+  model: 'model estimate from published salt series, ±1σ from leaving whole drugs out',
+  'model+fusion': 'model estimate shifted by your melting data (Schröder–van Laar)',
+  measured: 'your measured solubility of this salt',
   anchor: 'common-practice anchor 10² × S₀ (no descriptors for this counter-ion)',
 };
+
+const ORIGIN_WORDS = SALT_WATER_ORIGIN_BASIS;
 
 /** The drivers in words with their signed size, e.g. "hydrophobic counter-ion (−0.6)". */
 export function driverWords(drivers: SaltWaterSolubility['drivers']): string {

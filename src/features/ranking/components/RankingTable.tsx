@@ -1,80 +1,11 @@
 import { memo, useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react';
-import { CRITERIA } from '@/chem';
 import { sig } from '@/components/charts/chart-format';
-import { useRankingViewStore, type RankingSortKey } from '@/stores/ranking-view-store';
-import { CRITERION_TEXT } from '@/screening-data/criteria';
-import { sortRows, type DisplayRow, type ShownNumber } from '../ranking-rows';
+import { useRankingViewStore } from '@/stores/ranking-view-store';
+import { sortRows, type DisplayRow } from '../ranking-rows';
+import { DoseCell, Origin, ScoreBar, Sortable } from './RankingCells';
+import { SaltWaterCell } from './SaltWaterCell';
 
 const minus = (s: string) => s.replace(/^-/, '−');
-
-function Origin({ n }: { n: Pick<ShownNumber, 'origin' | 'basis'> }) {
-  return (
-    <span className={`origin origin-${n.origin}`} title={n.basis}>
-      {n.origin === 'measured' ? 'meas.' : 'est.'}
-      <span className="sr-only"> ({n.basis})</span>
-    </span>
-  );
-}
-
-function Sortable({ k, children, title }: { k: RankingSortKey; children: React.ReactNode; title?: string }) {
-  const sortKey = useRankingViewStore((s) => s.sortKey);
-  const dir = useRankingViewStore((s) => s.sortDir);
-  const sortBy = useRankingViewStore((s) => s.sortBy);
-  const active = sortKey === k;
-  return (
-    <th scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'} title={title}>
-      <button type="button" className="sort-button" onClick={() => sortBy(k)}>
-        {children}
-        <span aria-hidden="true" className="sort-mark">
-          {active ? (dir === 'asc' ? '▲' : '▼') : '↕'}
-        </span>
-      </button>
-    </th>
-  );
-}
-
-/**
- * The score and its parts as one element: the parts are colour stops of a gradient, so a weight
- * movement changes one style value (repaint only) instead of the widths of seven boxes (layout).
- */
-function ScoreBar({ row }: { row: DisplayRow }) {
-  if (row.score === null) return <span className="muted">—</span>;
-  let at = 0;
-  const stops: string[] = [];
-  const said: string[] = [];
-  CRITERIA.forEach((k, i) => {
-    const v = row.contributions[k] ?? 0;
-    if (v > 0.0005) said.push(`${CRITERION_TEXT[k].label} ${(v * 100).toFixed(0)}`);
-    if (v <= 0) return;
-    const to = at + v * 100;
-    stops.push(`var(--part-${i}) ${at.toFixed(1)}% ${to.toFixed(1)}%`); // colours: ranking.css
-    at = to;
-  });
-  stops.push(`transparent ${at.toFixed(1)}%`);
-  return (
-    <>
-      <strong>{row.score.toFixed(2)}</strong>
-      <span
-        className="score-bar"
-        role="img"
-        aria-label={`score parts: ${said.join(', ')}`}
-        style={{ backgroundImage: `linear-gradient(to right, ${stops.join(', ')})` }}
-      />
-    </>
-  );
-}
-
-/** A dose number cell: value, the pH it applies at, origin and ±1σ range (colour on the cell itself). */
-function DoseCell({ d }: { d: (ShownNumber & { pH?: number }) | null }) {
-  if (!d) return <td className="muted">—</td>;
-  return (
-    <td className={d.value > 1 ? 'dose-bad' : 'dose-ok'}>
-      {sig(d.value, 2)}
-      {d.pH !== undefined ? <span className="unit"> at pH {d.pH}</span> : null} <Origin n={d} />
-      {d.range ? <span className="range"> ±1σ {sig(d.range[0], 2)}–{sig(d.range[1], 2)}</span> : null}
-    </td>
-  );
-}
 
 /** Cells that depend on the screen only, not on the weights: re-rendered only when the screen changes. */
 const sameScreenRow = (a: { r: DisplayRow }, b: { r: DisplayRow }) => a.r.row === b.r.row && a.r.label === b.r.label;
@@ -113,6 +44,7 @@ const FixedCells = memo(function FixedCellsView({ r, open, onToggle }: FixedCell
         {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
         {row.saltFormation ? <span className="muted small-note">{row.saltFormation.band}</span> : null}
       </td>
+      <SaltWaterCell s={r.saltWater} poorlySoluble={row.flags.some((f) => f.id === 'likely-poorly-soluble')} />
       {r.phMax ? (
         <td>
           {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span> <Origin n={r.phMax} />
@@ -267,7 +199,7 @@ export const RankingTable = memo(function RankingTableView({
     <div className="table-scroll">
       <table className="data-table ranking-table">
         <caption className="sr-only">
-          Ranked candidates. Columns: rank, candidate, score, ΔpKa, pH_max, dose numbers, enthalpy of solution, active fraction, flags and reasons.
+          Ranked candidates. Columns: rank, candidate, score, ΔpKa, salt in water, pH_max, dose numbers, enthalpy of solution, active fraction, flags and reasons.
         </caption>
         <thead>
           <tr>
@@ -275,6 +207,7 @@ export const RankingTable = memo(function RankingTableView({
             <Sortable k="name">Candidate</Sortable>
             <th scope="col">Score (0–1)</th>
             <Sortable k="deltaPka" title="pKa(protonated base) − pKa(acid)">ΔpKa</Sortable>
+            <Sortable k="saltWaterSolubility" title="The salt's own solubility in pure water (mg/mL as salt), ±1σ">Salt in water</Sortable>
             <Sortable k="phMax" title="pH where salt and free form are both saturated">pH_max ± 1σ</Sortable>
             <Sortable k="worstDoseNumber" title="Dose number at the worst pH in 1.2–6.8 (250 mL, ICH M9)">Worst D₀, pH 1.2–6.8</Sortable>
             <Sortable k="gastricDoseNumber" title="Dose number in the gastric medium with its chloride">Gastric D₀</Sortable>
