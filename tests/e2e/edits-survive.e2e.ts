@@ -44,7 +44,10 @@ describe('edits survive the page going away (Chromium, production build)', () =>
     await notes(page).fill('Closed the tab right after typing');
     await page.waitForTimeout(50);
     // As a person closing the tab: the page's beforeunload/pagehide handlers run, then it is gone.
+    // (With runBeforeUnload, close() does not wait for the page to go: wait for it before reopening.)
+    const gone = page.waitForEvent('close');
     await page.close({ runBeforeUnload: true });
+    await gone;
     const next = await context.newPage();
     await openDemo(next);
     await expect(notes(next).inputValue()).resolves.toBe('Closed the tab right after typing');
