@@ -20,10 +20,15 @@ describe('the salt’s own solubility in the browser (production build)', () => 
     await page.goto(BASE_URL);
     await page.getByText('Demorazine is fictional').waitFor();
     await area(page, 'Ranking');
-    const chart = page.getByRole('img', { name: /^Solubility against pH/ });
+    const chart = page.getByRole('img', { name: /^Solubility \(free-form equivalents\) of .* and its salts/ });
     await chart.waitFor({ timeout: 30_000 });
-    const label = (await chart.getAttribute('aria-label')) ?? '';
-    const plateaus = [...label.matchAll(/highest ([\d.eE+-]+) mg\/mL/g)].map((m) => Number(m[1]));
+    // The chart first draws the free form, then the salts once the screen has settled: wait for them.
+    let plateaus: number[] = [];
+    for (let i = 0; i < 60 && plateaus.length < 2; i++) {
+      const label = (await chart.getAttribute('aria-label')) ?? '';
+      plateaus = [...label.matchAll(/highest ([\d.eE+-]+) mg\/mL/g)].map((m) => Number(m[1]));
+      if (plateaus.length < 2) await page.waitForTimeout(500);
+    }
     expect(plateaus.length).toBeGreaterThanOrEqual(2);
     expect(new Set(plateaus.map((x) => x.toPrecision(2))).size).toBeGreaterThanOrEqual(2);
 
