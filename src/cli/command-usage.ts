@@ -24,7 +24,8 @@ export const COMMAND_USAGE = {
                   [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
                   [--keep-cocrystal-band]
        saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
-                  [--errors file] [--out file] [--ions …] [settings flags as above]
+                  [--errors file] [--out file] [--ions …] [--iterations N] [settings flags as above]
+  --batch runs the P(top 3) Monte Carlo only when --iterations is given (the column is empty otherwise).
   compound.json may also hold "customIons": [{"id","smiles","charge","pKas"}] (counter-ions outside the
   library, named in "ions" by id) and "bench": {"<ion id>": {"meltingPointC", "fusionEnthalpyKJPerMol",
   "solubilityMgPerMl"}} (that ion's 1:1 salt, or its only salt form).`,

@@ -59,9 +59,19 @@ export function ichM9DoseNumbers(
   });
 }
 
-/** The point of lowest solubility (the first one on ties). */
+/**
+ * Relative difference below which two solubilities count as tied. A minimum between two grid points
+ * (a salt whose drug and counter-ion pKa values lie symmetric about it) gives two values that are
+ * equal in exact arithmetic; without a tolerance the last bits of the solver would choose the pH.
+ */
+export const SOLUBILITY_TIE_REL = 1e-9;
+
+/** True when `b` is lower than `a` by more than the tie tolerance. */
+export const clearlyLower = (b: number, a: number): boolean => b < a * (1 - SOLUBILITY_TIE_REL);
+
+/** The point of lowest solubility (the first one, lowest pH, on ties). */
 export function worstDoseNumber(list: DoseNumberAt[]): DoseNumberAt {
-  return list.reduce((a, b) => (b.solubilityMgPerMl < a.solubilityMgPerMl ? b : a));
+  return list.reduce((a, b) => (clearlyLower(b.solubilityMgPerMl, a.solubilityMgPerMl) ? b : a));
 }
 
 /** High when the worst dose number is ≤ 1 (ICH M9 (2019) §2.1.1), low above, null without a dose. */

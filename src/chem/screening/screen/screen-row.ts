@@ -10,7 +10,7 @@ import {
   type ProfileSalt,
 } from '../ph-profile';
 import type { CriterionInputs } from '../ranking';
-import { ichM9DoseNumbers, solubilityClassOf, worstDoseNumber } from './dose-numbers';
+import { clearlyLower, ichM9DoseNumbers, solubilityClassOf, worstDoseNumber } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
 import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
 import type { PreparedCandidate } from './prepare-candidate';
@@ -51,7 +51,7 @@ function saltBranchFlag(
 ): ScreenFlag | null {
   const saltBranch = points.filter((pt) => pt.solid === 'salt');
   if (ctx.doseMg === null || saltBranch.length === 0) return null;
-  const lowest = saltBranch.reduce((a, b) => (b.solubilityM < a.solubilityM ? b : a));
+  const lowest = saltBranch.reduce((a, b) => (clearlyLower(b.solubilityM, a.solubilityM) ? b : a));
   const mg = freeFormMgPerMl(ctx, lowest.solubilityM);
   const d0 = doseNumber(ctx.doseMg, mg);
   return d0 > 1 ? saltPoorlySolubleFlag(mg, lowest.pH, d0) : null;

@@ -49,11 +49,17 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>) {
   });
 }
 
-/** Run a prepared screen with the seeded Monte Carlo for P(top 3); `top` keeps the N best rows. */
+/**
+ * Run a prepared screen with the seeded Monte Carlo for P(top 3) (none when `iterations` is 0: the
+ * column stays empty); `top` keeps the N best rows. The table draws no chart, so the screen skips the
+ * pH–solubility profiles (every number of the table is the same with or without them).
+ */
 export function runScreen(p: PreparedScreen, opts: { iterations: number; seed: number; top?: number | undefined }) {
-  const res = screenCompound({ compound: p.compound, drugIon: p.drugIon, candidates: p.candidates, settings: p.settings });
+  const res = screenCompound({ compound: p.compound, drugIon: p.drugIon, candidates: p.candidates, settings: p.settings, profiles: 'none' });
   const robust = new Map(
-    rankRobustness(res.rows.map((r) => r.robustness), p.settings.weights, res.robustnessShared, { iterations: opts.iterations, seed: opts.seed }).map((r) => [r.id, r.pTop3]),
+    opts.iterations > 0
+      ? rankRobustness(res.rows.map((r) => r.robustness), p.settings.weights, res.robustnessShared, { iterations: opts.iterations, seed: opts.seed }).map((r) => [r.id, r.pTop3])
+      : [],
   );
   const table = screenTable(res, robust);
   return { res, table: opts.top !== undefined ? table.slice(0, opts.top) : table };
