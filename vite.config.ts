@@ -4,6 +4,7 @@ import react from '@vitejs/plugin-react';
 import { VitePWA } from 'vite-plugin-pwa';
 import { fileURLToPath, URL } from 'node:url';
 import { readFileSync } from 'node:fs';
+import { CONTENT_SECURITY_POLICY_META } from './src/cli/serve/content-security-policy';
 
 const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 'utf8')) as {
   version: string;
@@ -11,30 +12,9 @@ const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 
 
 const projectRoot = fileURLToPath(new URL('.', import.meta.url));
 
-/**
- * The Content-Security-Policy of the production build (README, "Offline"): scripts, workers, styles,
- * fonts, data and the manifest come from the app's own origin only; no inline script, no remote
- * origin, no plugins. Inline styles stay allowed because React and recharts set `style` attributes.
- * `blob:` images are the structure pictures and downloads; `blob:` workers are left open for
- * bundlers that inline a worker. `frame-ancestors` is ignored in a meta tag: `saltsmith serve` sends
- * the same policy as a header with `frame-ancestors 'none'` added.
- */
-export const CONTENT_SECURITY_POLICY = [
-  "default-src 'self'",
-  "script-src 'self'",
-  "style-src 'self' 'unsafe-inline'",
-  "img-src 'self' data: blob:",
-  "font-src 'self'",
-  "connect-src 'self'",
-  "worker-src 'self' blob:",
-  "manifest-src 'self'",
-  "object-src 'none'",
-  "base-uri 'self'",
-  "form-action 'self'",
-].join('; ');
 
 /**
- * Put the policy into index.html as the first element of <head> at build time only: the dev server
+ * Put the policy (src/cli/serve/content-security-policy.ts) into index.html as the first element of <head> at build time only: the dev server
  * needs an inline script (React Fast Refresh), which the policy rightly forbids.
  */
 function contentSecurityPolicy(): Plugin {
@@ -46,7 +26,7 @@ function contentSecurityPolicy(): Plugin {
       handler: () => [
         {
           tag: 'meta',
-          attrs: { 'http-equiv': 'Content-Security-Policy', content: CONTENT_SECURITY_POLICY },
+          attrs: { 'http-equiv': 'Content-Security-Policy', content: CONTENT_SECURITY_POLICY_META },
           injectTo: 'head-prepend',
         },
       ],
