@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
 import { BASE_URL, openSession, type Session } from './support/browser';
+import { area } from './support/navigation';
 
 // Issue 13: the production build carries a Content-Security-Policy that forbids inline script and
 // remote origins, and the whole workbench (service worker, workers, openchemlib, charts) runs under it.
@@ -16,10 +16,6 @@ beforeEach(async () => {
 afterEach(async () => {
   await s.close();
 });
-
-async function area(page: Page, name: string) {
-  await page.getByRole('navigation', { name: 'Workbench areas' }).getByRole('link', { name, exact: true }).click();
-}
 
 describe('Content-Security-Policy (Chromium, production build)', () => {
   it('is in the served page and refuses inline script and remote origins', async () => {

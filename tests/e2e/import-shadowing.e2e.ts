@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { BASE_URL, openSession, type Session } from './support/browser';
+import { area } from './support/navigation';
 import { inHouseIonPayload } from '../support/in-house-ion';
 
 // Issue 13: a project file whose shared in-house ion used the bundled id `mesylate` (with pKa 11)
@@ -13,10 +14,6 @@ beforeEach(async () => {
 afterEach(async () => {
   await s.close();
 });
-
-async function area(page: Page, name: string) {
-  await page.getByRole('navigation', { name: 'Workbench areas' }).getByRole('link', { name, exact: true }).click();
-}
 
 /** The ranking table's rows as text, in rank order (waits until the screen has settled). */
 async function rankingRows(page: Page): Promise<string[]> {

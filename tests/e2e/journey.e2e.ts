@@ -2,6 +2,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { DEMO_SHORTLIST } from '@/persistence/demo-project';
 import { BASE_URL, openSession, type Session } from './support/browser';
+import { area } from './support/navigation';
 
 /*
  * A formulator's morning, end to end on the production build: create a project from SMILES, shortlist
@@ -19,10 +20,6 @@ afterEach(async () => {
 });
 
 const SHORTLIST = ['Chloride', 'Mesylate', 'Tosylate', 'Besylate', 'Maleate'];
-
-async function area(page: Page, name: string) {
-  await page.getByRole('navigation', { name: 'Workbench areas' }).getByRole('link', { name, exact: true }).click();
-}
 
 /** Candidate names in rank order, read from the ranking table. */
 async function rankedNames(page: Page): Promise<string[]> {
