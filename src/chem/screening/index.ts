@@ -1,6 +1,6 @@
 /**
  * Screening: the decision models that turn a compound and its candidate counter-ions into a ranked,
- * explained shortlist (DEVELOPERS.md, "Screening"). Every module is pure; see each file for its sources.
+ * explained shortlist (layout in DEVELOPERS.md). Every module is pure; see each file for its sources.
  */
 export * from './speciation';
 export * from './delta-pka';

@@ -6,7 +6,7 @@ import { join } from 'node:path';
 /** The served production build (set by run-browser-tests.mjs). */
 export const BASE_URL = process.env.SALTSMITH_URL ?? 'http://127.0.0.1:4173/';
 
-/** Chromium flags that keep it off a network this machine does not have (DEVELOPERS.md, "Browser tests"). */
+/** Chromium flags that keep it off a network this machine does not have (DEVELOPERS.md, "Commands"). */
 export const CHROMIUM_ARGS = [
   '--headless=new',
   '--no-sandbox',
