@@ -122,22 +122,14 @@ export function chooseKsp(
     );
     const logSD = est.log10DrugM.value;
     const sigma = est.log10DrugM.uncertainty;
-    const saltWater = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers);
-    return {
-      log10Ksp: {
-        value: log10KspFromFormulaUnits(logSD - Math.log10(m), m, n),
-        uncertainty: (m + n) * sigma,
-        method: est.log10DrugM.method,
-        sources: est.log10DrugM.sources,
-        notes: ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])],
-      },
-      kspOrigin: 'estimated',
-      saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - logS0.uncertainty ** 2)),
-      anchored: true,
-      reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
-      flags: [estimatedKspFlag(sigma)],
-      saltWater,
+    const log10Ksp: Estimate = {
+      value: log10KspFromFormulaUnits(logSD - Math.log10(m), m, n),
+      uncertainty: (m + n) * sigma,
+      method: est.log10DrugM.method,
+      sources: est.log10DrugM.sources,
+      notes: ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])],
     };
+    return estimatedChoice(log10Ksp, est.log10DrugM, logS0.uncertainty, saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers), enthalpyReasons);
   }
   const k = estimateKsp({
     log10IntrinsicM: logS0,
@@ -150,12 +142,26 @@ export function chooseKsp(
   });
   const log10Ksp = k.log10Ksp;
   if (origin) log10Ksp.notes = [...(log10Ksp.notes ?? []), `ΔH_sol: ${origin}`];
-  const sigma = k.log10SaltLimitedDrugM.uncertainty;
   const saltWater = saltWaterOf(p, ctx, k.log10SaltLimitedDrugM, 'anchor', []);
+  return estimatedChoice(log10Ksp, k.log10SaltLimitedDrugM, logS0.uncertainty, saltWater, enthalpyReasons);
+}
+
+/**
+ * An estimated K_sp as the screen carries it: the salt's own spread beyond S₀'s (the robustness draw
+ * moves S₀ separately), its words and the "estimated" flag.
+ */
+function estimatedChoice(
+  log10Ksp: Estimate,
+  log10DrugM: Estimate,
+  log10IntrinsicSigma: number,
+  saltWater: SaltWaterSolubility,
+  enthalpyReasons: Reason[],
+): KspChoice {
+  const sigma = log10DrugM.uncertainty;
   return {
     log10Ksp,
     kspOrigin: 'estimated',
-    saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - logS0.uncertainty ** 2)),
+    saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - log10IntrinsicSigma ** 2)),
     anchored: true,
     reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
     flags: [estimatedKspFlag(sigma)],
