@@ -5,7 +5,7 @@ import './charts.css';
 export interface VantHoffData {
   points: { temperatureK: number; solubility: number }[];
   /** ln S = intercept + slope·(1/T), slope in K. */
-  fit: { slopeK: number; interceptLnS: number; solutionEnthalpyKJ: number; standardErrorKJ: number; rSquared: number } | null;
+  fit: { lnSSlopeOnInverseTK: number; interceptLnS: number; solutionEnthalpyKJ: number; standardErrorKJ: number; rSquared: number } | null;
   unit: string;
 }
 
@@ -20,7 +20,7 @@ export function VantHoffPlot({ data, title, width = 520, height = 300 }: { data:
   const xMax = Math.max(...xs);
   const pad = (xMax - xMin) * 0.1 || 0.05;
   const line = data.fit
-    ? [xMin - pad, xMax + pad].map((x) => ({ x, fitLnS: data.fit!.interceptLnS + data.fit!.slopeK * (x / 1000) }))
+    ? [xMin - pad, xMax + pad].map((x) => ({ x, fitLnS: data.fit!.interceptLnS + data.fit!.lnSSlopeOnInverseTK * (x / 1000) }))
     : [];
   const caption = data.fit
     ? `${title}: ${pts.length} solubilities; fitted apparent ΔH_sol = ${data.fit.solutionEnthalpyKJ.toFixed(1)} ± ${data.fit.standardErrorKJ.toFixed(1)} kJ/mol (standard error), R² = ${data.fit.rSquared.toFixed(3)}.`

@@ -42,7 +42,7 @@ function Derived({ candidateId, measurements, data, status }: { candidateId: str
               unit: 'mg/mL',
               fit: vh.fit
                 ? {
-                    slopeK: vh.fit.lnSSlopeOnInverseTK,
+                    lnSSlopeOnInverseTK: vh.fit.lnSSlopeOnInverseTK,
                     interceptLnS: vh.fit.interceptLnS,
                     solutionEnthalpyKJ: vh.fit.solutionEnthalpyKJ.value,
                     standardErrorKJ: vh.fit.standardErrorKJ,

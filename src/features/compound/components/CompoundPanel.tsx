@@ -1,8 +1,7 @@
-import { useEffect, useRef, useState, type ChangeEvent } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import type { ProjectRecord } from '@/persistence/records';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
-import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { reportStorageError, useStorageProblemStore } from '@/stores/storage-problem-store';
 import type { Compound } from '@/chem';
 import {
@@ -16,50 +15,14 @@ import {
 } from '../compound-form-model';
 import { useStructureCheck } from '../hooks/use-structure-check';
 import { StructureCard } from './StructureCard';
+import { Field, SaveBadge, type SaveState } from './CompoundFields';
 import '../compound.css';
-
-interface FieldProps {
-  id: keyof CompoundDraft;
-  label: string;
-  unit?: string;
-  hint?: string;
-  draft: CompoundDraft;
-  errors: FieldErrors;
-  onChange: (id: keyof CompoundDraft, value: string) => void;
-  wide?: boolean;
-  inputMode?: 'decimal' | 'text';
-}
-
-function Field({ id, label, unit, hint, draft, errors, onChange, wide, inputMode }: FieldProps) {
-  const error = errors[id];
-  const inputId = `compound-${id}`;
-  return (
-    <div className={`field${wide ? ' field-wide' : ''}`}>
-      <label htmlFor={inputId}>
-        {label}
-        {unit ? <span className="unit"> ({unit})</span> : null}
-      </label>
-      <input
-        id={inputId}
-        name={id}
-        value={draft[id]}
-        inputMode={inputMode}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(inputId, error, hint)}
-        onChange={(e: ChangeEvent<HTMLInputElement>) => onChange(id, e.target.value)}
-      />
-      <FieldMessage id={inputId} error={error} hint={hint} alert />
-    </div>
-  );
-}
 
 /**
  * Autosave delay after the last keystroke, ms: a word typed is one write, not one per letter. A
  * waiting save is started at once when the area is left or the page is hidden or goes away.
  */
 const SAVE_DELAY_MS = 250;
-
-export type SaveState = 'saved' | 'pending' | 'invalid' | 'error';
 
 /**
  * The compound definition, saved as the user types. An invalid draft is never stored: the last valid
@@ -319,25 +282,5 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
         onUseLogP={applyComputedLogP}
       />
     </section>
-  );
-}
-
-function SaveBadge({ state }: { state: SaveState | 'lost' }) {
-  const text: Record<SaveState | 'lost', string> = {
-    lost: 'Not saved: the database was closed — reload this tab',
-    saved: 'All changes saved',
-    pending: 'Saving…',
-    invalid: 'Not saved: fix the marked field',
-    error: 'Could not save — your last saved values are kept',
-  };
-  return (
-    <span
-      className={`save-badge save-${state === 'lost' ? 'error' : state}`}
-      role="status"
-      aria-live="polite"
-      aria-label={`Save state: ${text[state]}`}
-    >
-      {text[state]}
-    </span>
   );
 }
