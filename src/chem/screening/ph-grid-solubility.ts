@@ -1,6 +1,10 @@
 import { brentRoot } from '../numerics/root-finding';
 import type { ProfileOptions, ProfilePoint, ProfileSalt } from './ph-profile';
-import { log10FreeFormSolubilityM, saltLog10FormulaUnitsNoCommonIon } from './salt-equilibrium';
+import {
+  log10FreeFormSolubilityM,
+  SALT_LOG10_S_LIMITS,
+  saltLog10FormulaUnitsRaw,
+} from './salt-equilibrium';
 import { log10ChargeFraction, type Protolyte } from './speciation';
 
 /**
@@ -51,6 +55,8 @@ export interface DrugOnGrid {
   laD: Float64Array;
   /** log₁₀ free-form solubility, mol/L. */
   log10FreeM: Float64Array;
+  /** Free-form solubility, mol/L (10 to the power above). */
+  freeM: Float64Array;
 }
 
 export function drugOnGrid(
@@ -60,12 +66,15 @@ export function drugOnGrid(
   phs: readonly number[],
   gridKey = phs.join(','),
 ): DrugOnGrid {
-  return {
-    phs,
-    gridKey,
-    laD: Float64Array.from(phs, (pH) => log10ChargeFraction(drug, pH, ionCharge)),
-    log10FreeM: Float64Array.from(phs, (pH) => log10FreeFormSolubilityM(drug, log10IntrinsicM, pH)),
-  };
+  const laD = new Float64Array(phs.length);
+  const log10FreeM = new Float64Array(phs.length);
+  const freeM = new Float64Array(phs.length);
+  for (let k = 0; k < phs.length; k++) {
+    laD[k] = log10ChargeFraction(drug, phs[k]!, ionCharge);
+    log10FreeM[k] = log10FreeFormSolubilityM(drug, log10IntrinsicM, phs[k]!);
+    freeM[k] = 10 ** log10FreeM[k]!;
+  }
+  return { phs, gridKey, laD, log10FreeM, freeM };
 }
 
 /** Per compound: the drug on the profile grid and on the pH_max scan points. */
@@ -98,26 +107,71 @@ export function fastPathApplies(o: ProfileOptions): boolean {
   return (o.activity === undefined || o.activity.model === 'ideal') && (o.commonIonM ?? 0) === 0;
 }
 
+/** A solubility curve on a pH list as arrays (no object per point): what a screen reads from it. */
+export interface GridSolubility {
+  phs: readonly number[];
+  /** Total dissolved drug, mol/L. */
+  solubilityM: Float64Array;
+  /** 1 where the salt is the solid in equilibrium, 0 where the free form is. */
+  saltSolid: Uint8Array;
+}
+
+/** The free form alone on the grid. */
+export function freeFormOnGrid(g: DrugOnGrid): GridSolubility {
+  return { phs: g.phs, solubilityM: g.freeM, saltSolid: new Uint8Array(g.phs.length) };
+}
+
+/** A curve from profile points (the general solver's output) as arrays. */
+export function gridFromPoints(points: readonly ProfilePoint[]): GridSolubility {
+  return {
+    phs: points.map((p) => p.pH),
+    solubilityM: Float64Array.from(points, (p) => p.solubilityM),
+    saltSolid: Uint8Array.from(points, (p) => (p.solid === 'salt' ? 1 : 0)),
+  };
+}
+
 /**
- * The salt's profile points on the grid (ideal activities, no common ion): the same values
- * pointAt in ph-profile.ts gives at each pH. The caller checks the salt input first.
+ * The salt on the grid (ideal activities, no common ion): at each pH the value pointAt in
+ * ph-profile.ts gives, with the same arithmetic. The caller checks the salt input first.
  */
+export function saltOnGrid(g: DrugOnGrid, salt: ProfileSalt): GridSolubility {
+  const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, g.phs, g.gridKey);
+  const m = salt.drugPerSalt;
+  const n = salt.counterIonPerSalt;
+  const len = g.phs.length;
+  const solubilityM = new Float64Array(len);
+  const saltSolid = new Uint8Array(len);
+  for (let k = 0; k < len; k++) {
+    const free = g.freeM[k]!;
+    const u = saltLog10FormulaUnitsRaw(m, n, g.laD[k]!, laX[k]!, salt.log10Ksp);
+    // above the upper limit the salt does not limit (the solver's `unbounded`)
+    if (u > SALT_LOG10_S_LIMITS.max) {
+      solubilityM[k] = free;
+      continue;
+    }
+    const saltM = m * 10 ** Math.max(u, SALT_LOG10_S_LIMITS.min);
+    if (saltM < free) {
+      solubilityM[k] = saltM;
+      saltSolid[k] = 1;
+    } else solubilityM[k] = free;
+  }
+  return { phs: g.phs, solubilityM, saltSolid };
+}
+
+/** The salt's profile points on the grid, as phSolubilityProfile gives them (for tests and charts). */
 export function saltPointsOnGrid(g: DrugOnGrid, salt: ProfileSalt): ProfilePoint[] {
   const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, g.phs, g.gridKey);
   const m = salt.drugPerSalt;
   const n = salt.counterIonPerSalt;
-  const out: ProfilePoint[] = new Array(g.phs.length);
-  for (let k = 0; k < g.phs.length; k++) {
-    const pH = g.phs[k]!;
-    const freeFormLimitedM = 10 ** g.log10FreeM[k]!;
-    const sol = saltLog10FormulaUnitsNoCommonIon(m, n, g.laD[k]!, laX[k]!, salt.log10Ksp);
-    const saltLimitedM = sol.unbounded ? null : m * 10 ** sol.u;
-    out[k] =
-      saltLimitedM !== null && saltLimitedM < freeFormLimitedM
-        ? { pH, solubilityM: saltLimitedM, freeFormLimitedM, saltLimitedM, solid: 'salt' }
-        : { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM, solid: 'free-form' };
-  }
-  return out;
+  return g.phs.map((pH, k) => {
+    const freeFormLimitedM = g.freeM[k]!;
+    const u = saltLog10FormulaUnitsRaw(m, n, g.laD[k]!, laX[k]!, salt.log10Ksp);
+    const saltLimitedM =
+      u > SALT_LOG10_S_LIMITS.max ? null : m * 10 ** Math.max(u, SALT_LOG10_S_LIMITS.min);
+    return saltLimitedM !== null && saltLimitedM < freeFormLimitedM
+      ? { pH, solubilityM: saltLimitedM, freeFormLimitedM, saltLimitedM, solid: 'salt' }
+      : { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM, solid: 'free-form' };
+  });
 }
 
 /**
@@ -129,8 +183,11 @@ export function saltPointsOnGrid(g: DrugOnGrid, salt: ProfileSalt): ProfilePoint
 export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
   const m = salt.drugPerSalt;
   const n = salt.counterIonPerSalt;
+  const { min, max } = SALT_LOG10_S_LIMITS;
+  // log₁₀(m·s) as log₁₀ m + log₁₀ s: numericalPhMax takes log₁₀ of m·10^u, equal but for rounding
+  const log10M = Math.log10(m);
   const logSaltOf = (laD: number, laX: number) =>
-    Math.log10(m * 10 ** saltLog10FormulaUnitsNoCommonIon(m, n, laD, laX, salt.log10Ksp).u);
+    log10M + Math.min(max, Math.max(min, saltLog10FormulaUnitsRaw(m, n, laD, laX, salt.log10Ksp)));
   const h = (pH: number) =>
     logSaltOf(
       log10ChargeFraction(g.drug, pH, g.ionCharge),

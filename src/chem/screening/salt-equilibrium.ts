@@ -101,11 +101,19 @@ export function saltLog10FormulaUnitsNoCommonIon(
   laX: number,
   log10KspLessGamma: number,
 ): { u: number; unbounded: boolean } {
-  const u = (log10KspLessGamma - m * (laD + Math.log10(m)) - n * (laX + Math.log10(n))) / (m + n);
+  const u = saltLog10FormulaUnitsRaw(m, n, laD, laX, log10KspLessGamma);
   if (u > LOG_S_MAX) return { u: LOG_S_MAX, unbounded: true };
   if (u < LOG_S_MIN) return { u: LOG_S_MIN, unbounded: false };
   return { u, unbounded: false };
 }
+
+/** The closed form above before its limits are applied (no object made: hot loops call it). */
+export function saltLog10FormulaUnitsRaw(m: number, n: number, laD: number, laX: number, log10KspLessGamma: number): number {
+  return (log10KspLessGamma - m * (laD + Math.log10(m)) - n * (laX + Math.log10(n))) / (m + n);
+}
+
+/** The limits of log₁₀ s the solver works within: above, the salt does not limit; below, clamped. */
+export const SALT_LOG10_S_LIMITS = { min: LOG_S_MIN, max: LOG_S_MAX } as const;
 
 /** Solve the salt's solubility at one pH. */
 export function solveSaltSolubility(i: SaltEquilibriumInput, checked = false): SaltEquilibriumResult {

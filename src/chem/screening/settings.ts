@@ -79,13 +79,32 @@ export type ScreeningSettings = z.infer<typeof screeningSettingsSchema>;
 /** Settings with every default filled in. */
 export const defaultScreeningSettings = (): ScreeningSettings => screeningSettingsSchema.parse({});
 
+const parsedSettingsMemo = new Map<string, string>();
+
 /**
  * Validate settings, turning a zod failure into a ChemInputError that names the first bad field
  * (e.g. `temperatureK` below 273.15 K), so callers see one error type for bad input.
  */
 export function parseScreeningSettings(input: unknown): ScreeningSettings {
+  // Memoised by the input's JSON text (settings are plain data): a batch parses the same settings for
+  // every compound. Each call gets its own copy, so a caller that edits the result changes nothing else.
+  let key: string | null = null;
+  try {
+    key = JSON.stringify(input ?? {});
+  } catch {
+    key = null; // not plain data: the schema decides
+  }
+  const hit = key === null ? undefined : parsedSettingsMemo.get(key);
+  if (hit !== undefined) return JSON.parse(hit) as ScreeningSettings;
   const r = screeningSettingsSchema.safeParse(input ?? {});
-  if (r.success) return r.data;
+  if (r.success) {
+    // only when the parsed settings survive JSON unchanged (they are numbers, strings, records, lists)
+    if (key !== null && key.length <= 20_000) {
+      if (parsedSettingsMemo.size >= 32) parsedSettingsMemo.clear();
+      parsedSettingsMemo.set(key, JSON.stringify(r.data));
+    }
+    return r.data;
+  }
   const issue = r.error.issues[0]!;
   const field = `settings.${issue.path.map(String).join('.') || 'root'}`;
   throw new ChemInputError(field, issue.message, 'see screeningSettingsSchema (settings.ts) for each field’s range');

@@ -27,10 +27,26 @@ export function drugThermoIon(d: ThermoDrugIon): ThermoIon {
   return organicIonFromFormula(d.formula, d.charge, d.rings, { label: 'drug ion' });
 }
 
+/**
+ * Counter-ions built from their formula, memoised: the same for every drug, so a batch builds each
+ * once. Keyed by everything the build reads; bounded; the objects are frozen so no caller can change
+ * what the next one gets.
+ */
+const COUNTER_ION_MEMO_LIMIT = 512;
+const counterIonMemo = new Map<string, ThermoIon>();
+
 function counterThermoIon(c: ThermoCounterIon, ionCharge: number, ionFormula: string): ThermoIon {
   const bundled = getThermoIon(c.thermoId ?? c.id);
   if (bundled && bundled.charge === ionCharge) return bundled;
-  return organicIonFromFormula(ionFormula || c.formula, ionCharge, c.rings, { label: c.id });
+  const formula = ionFormula || c.formula;
+  const key = `${c.thermoId ?? ''}|${c.id}|${ionCharge}|${formula}|${c.rings.aromatic}|${c.rings.nonAromatic}`;
+  let ion = counterIonMemo.get(key);
+  if (!ion) {
+    ion = Object.freeze(organicIonFromFormula(formula, ionCharge, c.rings, { label: c.id }));
+    if (counterIonMemo.size >= COUNTER_ION_MEMO_LIMIT) counterIonMemo.clear();
+    counterIonMemo.set(key, ion);
+  }
+  return ion;
 }
 
 /** ΔH_sol per formula unit (kJ/mol) of D_m X_n, or null with the reason the engine gave. */

@@ -141,11 +141,15 @@ describe("screenCompound with profiles: 'none'", () => {
       expect(full.rows.every((r) => r.error !== null || r.profile.length > 0)).toBe(true);
       expect(none.rows.every((r) => r.profile.length === 0)).toBe(true);
       expect(none.freeForm.profile).toEqual([]);
+      // the dose-number series keeps the ICH M9 pH values (1.2, 4.5, 6.8) and the worst point
+      const named = <T extends { doseNumbers: { pH: number }[]; worst: { pH: number } | null }>(r: T) =>
+        r.doseNumbers.filter((d) => [1.2, 4.5, 6.8, r.worst?.pH].includes(d.pH));
       const strip = (res: typeof full) => ({
         ...res,
-        freeForm: { ...res.freeForm, profile: [] },
-        rows: res.rows.map((r) => ({ ...r, profile: [] })),
+        freeForm: { ...res.freeForm, profile: [], doseNumbers: named(res.freeForm) },
+        rows: res.rows.map((r) => ({ ...r, profile: [], doseNumbers: named(r) })),
       });
+      expect(none.rows.some((r) => r.doseNumbers.length === 3)).toBe(true);
       expect(strip(none)).toEqual(strip(full));
     });
   }

@@ -1,5 +1,6 @@
 import { doseNumber, ICH_M9_PH_RANGE } from '../dose-number';
-import { solubilityAtPh, type PhProfile, type ProfilePoint, type ProfileSalt } from '../ph-profile';
+import type { GridSolubility } from '../ph-grid-solubility';
+import { solubilityAtPh, type PhProfile, type ProfileSalt } from '../ph-profile';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import type { DoseNumberAt } from './screen.types';
 
@@ -35,36 +36,109 @@ export function ichM9Phs(profile: Pick<PhProfile, 'points'>): number[] {
   return [...ph].sort((a, b) => a - b);
 }
 
+/** One pH of the ICH M9 series and its index on the grid (−1 when it is not a grid point). */
+export interface IchM9PlanPoint {
+  pH: number;
+  k: number;
+}
+
+/** The ICH M9 series on a grid (ichM9Phs of the grid's points), with each pH's grid index: once per compound. */
+export function ichM9Plan(phs: readonly number[]): IchM9PlanPoint[] {
+  const index = new Map<number, number>();
+  phs.forEach((pH, k) => index.set(pH, k));
+  return ichM9Phs({ points: phs.map((pH) => ({ pH })) as PhProfile['points'] }).map((pH) => ({
+    pH,
+    k: index.get(pH) ?? -1,
+  }));
+}
+
+function doseAt(ctx: ScreenContext, pH: number, solubilityM: number, salt: boolean): DoseNumberAt {
+  const mg = freeFormMgPerMl(ctx, solubilityM);
+  return {
+    pH,
+    solubilityMgPerMl: mg,
+    doseNumber: ctx.doseMg === null ? null : doseNumber(ctx.doseMg, mg),
+    solid: salt ? 'salt' : 'free-form',
+  };
+}
+
 /**
- * Dose numbers at the ICH M9 pH values, taking each from the profile point at that pH where there is
- * one (the same model at the same pH, so the same number as doseNumberAt) instead of solving again.
+ * Dose numbers over the ICH M9 series, each from the grid where the pH is a grid point (the same
+ * model at the same pH, so the same number as doseNumberAt) and solved on its own otherwise.
  */
 export function ichM9DoseNumbers(
   ctx: ScreenContext,
   salt: ProfileSalt | null,
-  points: readonly ProfilePoint[],
+  grid: GridSolubility,
+  plan: readonly IchM9PlanPoint[],
 ): DoseNumberAt[] {
-  const byPh = new Map<number, ProfilePoint>();
-  for (const p of points) byPh.set(p.pH, p);
-  return ichM9Phs({ points: [...points] }).map((pH) => {
-    const p = byPh.get(pH);
-    if (!p) return doseNumberAt(ctx, salt, pH);
-    const mg = freeFormMgPerMl(ctx, p.solubilityM);
-    return {
-      pH,
-      solubilityMgPerMl: mg,
-      doseNumber: ctx.doseMg === null ? null : doseNumber(ctx.doseMg, mg),
-      solid: p.solid,
-    };
-  });
+  return plan.map(({ pH, k }) =>
+    k < 0 ? doseNumberAt(ctx, salt, pH) : doseAt(ctx, pH, grid.solubilityM[k]!, grid.saltSolid[k] === 1),
+  );
+}
+
+/**
+ * What a screen without profiles keeps of the series: the worst point over the whole series (the
+ * same point worstDoseNumber picks from it) and the dose numbers at the three ICH M9 pH values and at
+ * that worst pH, ascending — without making an object for every grid point.
+ */
+export function ichM9WorstAndNamed(
+  ctx: ScreenContext,
+  salt: ProfileSalt | null,
+  grid: GridSolubility,
+  plan: readonly IchM9PlanPoint[],
+): { doses: DoseNumberAt[]; worst: DoseNumberAt } {
+  const off = new Map<number, DoseNumberAt>();
+  const mgAt = (i: number): number => {
+    const { pH, k } = plan[i]!;
+    if (k >= 0) return freeFormMgPerMl(ctx, grid.solubilityM[k]!);
+    let d = off.get(i);
+    if (!d) off.set(i, (d = doseNumberAt(ctx, salt, pH)));
+    return d.solubilityMgPerMl;
+  };
+  const doseOf = (i: number): DoseNumberAt => {
+    const { pH, k } = plan[i]!;
+    return k < 0 ? off.get(i) ?? doseNumberAt(ctx, salt, pH) : doseAt(ctx, pH, grid.solubilityM[k]!, grid.saltSolid[k] === 1);
+  };
+  let w = 0;
+  let wMg = mgAt(0);
+  for (let i = 1; i < plan.length; i++) {
+    const mg = mgAt(i);
+    if (clearlyLower(mg, wMg)) {
+      w = i;
+      wMg = mg;
+    }
+  }
+  const doses: DoseNumberAt[] = [];
+  let worst: DoseNumberAt | null = null;
+  for (let i = 0; i < plan.length; i++) {
+    if (i !== w && !ICH_M9_POINTS_PH.includes(plan[i]!.pH)) continue;
+    const d = doseOf(i);
+    if (i === w) worst = d;
+    doses.push(d);
+  }
+  return { doses, worst: worst! };
+}
+
+/** The full series and its worst point ('full'), or the named points and the worst ('none'). */
+export function screenDoseNumbers(
+  ctx: ScreenContext,
+  salt: ProfileSalt | null,
+  grid: GridSolubility,
+): { doses: DoseNumberAt[]; worst: DoseNumberAt } {
+  if (ctx.profiles === 'none') return ichM9WorstAndNamed(ctx, salt, grid, ctx.ichM9Plan);
+  const doses = ichM9DoseNumbers(ctx, salt, grid, ctx.ichM9Plan);
+  return { doses, worst: worstDoseNumber(doses) };
 }
 
 /**
  * Relative difference below which two solubilities count as tied. A minimum between two grid points
  * (a salt whose drug and counter-ion pKa values lie symmetric about it) gives two values that are
  * equal in exact arithmetic; without a tolerance the last bits of the solver would choose the pH.
+ * Kept far below any difference the model means (a nearly flat salt branch still differs by ~1e-9
+ * from one grid point to the next) and above rounding (~1e-15).
  */
-export const SOLUBILITY_TIE_REL = 1e-9;
+export const SOLUBILITY_TIE_REL = 1e-12;
 
 /** True when `b` is lower than `a` by more than the tie tolerance. */
 export const clearlyLower = (b: number, a: number): boolean => b < a * (1 - SOLUBILITY_TIE_REL);

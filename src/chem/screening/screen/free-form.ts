@@ -1,5 +1,6 @@
 import { phSolubilityProfile, type PhProfile } from '../ph-profile';
-import { ichM9DoseNumbers, solubilityClassOf, worstDoseNumber } from './dose-numbers';
+import { gridFromPoints } from '../ph-grid-solubility';
+import { screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import { freeFormPoorlySolubleFlag } from './screen-reasons';
 import type { FreeFormResult, ScreenFlag } from './screen.types';
@@ -7,8 +8,7 @@ import type { FreeFormResult, ScreenFlag } from './screen.types';
 /** The free form on its own: its pH–solubility profile, dose numbers across ICH M9 pH and its flag. */
 export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; profile: PhProfile } {
   const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, null, ctx.grid);
-  const doses = ichM9DoseNumbers(ctx, null, profile.points);
-  const worst = worstDoseNumber(doses);
+  const { doses, worst } = screenDoseNumbers(ctx, null, gridFromPoints(profile.points));
   const flags: ScreenFlag[] = [];
   if (worst.doseNumber !== null && worst.doseNumber > 1) {
     flags.push(freeFormPoorlySolubleFlag({ ...worst, doseNumber: worst.doseNumber }));

@@ -5,6 +5,7 @@ import { drugGrids, type DrugGrids } from '../ph-grid-solubility';
 import { drugProtolyte, type DrugAcidBase, type ProfileOptions } from '../ph-profile';
 import { parseScreeningSettings, type ScreeningSettings } from '../settings';
 import type { Protolyte } from '../speciation';
+import { ichM9Plan, type IchM9PlanPoint } from './dose-numbers';
 import type {
   FreeFormResult,
   ScreenCompoundInput,
@@ -36,6 +37,8 @@ export interface ScreenContext {
   grids: DrugGrids;
   /** Whether rows and the free form carry their profile (ScreenCompoundInput.profiles). */
   profiles: 'full' | 'none';
+  /** The ICH M9 pH series on the grid, with grid indices (dose-numbers.ts). */
+  ichM9Plan: IchM9PlanPoint[];
 }
 
 /** Intrinsic solubility S₀ of the free form: measured when given, else the General Solubility Equation. */
@@ -115,6 +118,7 @@ export function screenContext(input: ScreenCompoundInput): ScreenContext {
       : { model: 'ideal' };
   const g = settings.phGrid;
   const grid = { phFrom: g.from, phTo: g.to, phStep: g.step, activity };
+  const grids = drugGrids(drugP, c.ionCharge, est.value, grid);
   return {
     settings,
     compound: c,
@@ -128,8 +132,9 @@ export function screenContext(input: ScreenCompoundInput): ScreenContext {
     temperatureK,
     activity,
     grid,
-    grids: drugGrids(drugP, c.ionCharge, est.value, grid),
+    grids,
     profiles: input.profiles ?? 'full',
+    ichM9Plan: ichM9Plan(grids.profile.phs),
   };
 }
 

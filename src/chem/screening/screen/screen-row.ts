@@ -2,15 +2,16 @@ import { saltDeltaPka, saltFormationVerdict } from '../delta-pka';
 import { disproportionationRisk } from '../disproportionation';
 import { doseNumber } from '../dose-number';
 import { activeFraction, saltMassPerDoseMg } from '../mass-cost';
-import { fastPathApplies, gridPhMax, saltPointsOnGrid } from '../ph-grid-solubility';
 import {
-  checkProfileInput,
-  phSolubilityProfile,
-  type PhProfile,
-  type ProfileSalt,
-} from '../ph-profile';
+  fastPathApplies,
+  gridFromPoints,
+  gridPhMax,
+  saltOnGrid,
+  type GridSolubility,
+} from '../ph-grid-solubility';
+import { checkProfileInput, phSolubilityProfile, type ProfileSalt } from '../ph-profile';
 import type { CriterionInputs } from '../ranking';
-import { clearlyLower, ichM9DoseNumbers, solubilityClassOf, worstDoseNumber } from './dose-numbers';
+import { clearlyLower, screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
 import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
 import type { PreparedCandidate } from './prepare-candidate';
@@ -45,16 +46,17 @@ function deltaPkaEach(ctx: ScreenContext, p: PreparedCandidate): number[] {
  * even there the salt cannot carry the dose — unlike the free-form limit above pH_max, which every salt
  * of this drug shares and so does not tell one salt from another.
  */
-function saltBranchFlag(
-  ctx: ScreenContext,
-  points: readonly { pH: number; solubilityM: number; solid: string }[],
-): ScreenFlag | null {
-  const saltBranch = points.filter((pt) => pt.solid === 'salt');
-  if (ctx.doseMg === null || saltBranch.length === 0) return null;
-  const lowest = saltBranch.reduce((a, b) => (clearlyLower(b.solubilityM, a.solubilityM) ? b : a));
-  const mg = freeFormMgPerMl(ctx, lowest.solubilityM);
+function saltBranchFlag(ctx: ScreenContext, grid: GridSolubility): ScreenFlag | null {
+  if (ctx.doseMg === null) return null;
+  let lowest = -1;
+  for (let k = 0; k < grid.phs.length; k++) {
+    if (grid.saltSolid[k] !== 1) continue;
+    if (lowest < 0 || clearlyLower(grid.solubilityM[k]!, grid.solubilityM[lowest]!)) lowest = k;
+  }
+  if (lowest < 0) return null;
+  const mg = freeFormMgPerMl(ctx, grid.solubilityM[lowest]!);
   const d0 = doseNumber(ctx.doseMg, mg);
-  return d0 > 1 ? saltPoorlySolubleFlag(mg, lowest.pH, d0) : null;
+  return d0 > 1 ? saltPoorlySolubleFlag(mg, grid.phs[lowest]!, d0) : null;
 }
 
 /**
@@ -62,15 +64,13 @@ function saltBranchFlag(
  * (ph-grid-solubility.ts) gives the numbers phSolubilityProfile gives, after the same input checks;
  * the Davies option takes the general solver.
  */
-function saltProfile(ctx: ScreenContext, salt: ProfileSalt): Pick<PhProfile, 'points' | 'phMax'> {
+function saltProfile(ctx: ScreenContext, salt: ProfileSalt): { grid: GridSolubility; phMax: number | null } {
   if (!fastPathApplies(ctx.grid)) {
-    return phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
+    const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
+    return { grid: gridFromPoints(profile.points), phMax: profile.phMax };
   }
   checkProfileInput(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-  return {
-    points: saltPointsOnGrid(ctx.grids.profile, salt),
-    phMax: gridPhMax(ctx.grids, salt),
-  };
+  return { grid: saltOnGrid(ctx.grids.profile, salt), phMax: gridPhMax(ctx.grids, salt) };
 }
 
 /** The screened row of one candidate, from its prepared inputs and its K_sp (asked for in step order). */
@@ -112,14 +112,13 @@ export function candidateRow(
     log10Ksp: ksp.log10Ksp.value,
   };
   const profile = saltProfile(ctx, salt);
-  const doses = ichM9DoseNumbers(ctx, salt, profile.points);
-  const worst = worstDoseNumber(doses);
+  const { doses, worst } = screenDoseNumbers(ctx, salt, profile.grid);
   reasons.push(worstSolubilityReason(name, worst));
   if (ctx.doseMg !== null) {
     const d0Water = doseNumber(ctx.doseMg, ksp.saltWater.mgPerMlAsFreeForm);
     if (d0Water > 1) flags.push(poorlySolubleFlag(ksp.saltWater, d0Water));
   }
-  const saltFlag = saltBranchFlag(ctx, profile.points);
+  const saltFlag = saltBranchFlag(ctx, profile.grid);
   if (saltFlag) flags.push(saltFlag);
 
   const mediaResults = mediumResults(ctx, cand, salt, media, hcl);
@@ -166,10 +165,10 @@ export function candidateRow(
     profile:
       ctx.profiles === 'none'
         ? []
-        : profile.points.map((q) => ({
-            pH: q.pH,
-            solubilityMgPerMl: freeFormMgPerMl(ctx, q.solubilityM),
-            solid: q.solid,
+        : profile.grid.phs.map((pH, k) => ({
+            pH,
+            solubilityMgPerMl: freeFormMgPerMl(ctx, profile.grid.solubilityM[k]!),
+            solid: profile.grid.saltSolid[k] === 1 ? ('salt' as const) : ('free-form' as const),
           })),
     doseNumbers: doses,
     worst,

@@ -74,8 +74,9 @@ export interface ScreenCompoundInput {
   settings?: unknown;
   /**
    * 'full' (default): every row and the free form carry their pH–solubility profile for a chart.
-   * 'none': the profiles are left empty (a ranking, a table or a batch needs none); every other number
-   * is the same, pH_max included (found without the profile, see ph-grid-solubility.ts).
+   * 'none': the profiles are left empty (a ranking, a table or a batch needs none) and `doseNumbers`
+   * keeps only the ICH M9 pH values (1.2, 4.5, 6.8) and the worst point; every other number is the
+   * same, pH_max and the worst point included (found without the profile, ph-grid-solubility.ts).
    */
   profiles?: 'full' | 'none';
 }
