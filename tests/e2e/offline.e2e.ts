@@ -56,7 +56,7 @@ describe('offline after one visit (service worker precache)', () => {
     // Still offline: a reload keeps the new project (IndexedDB) and the app (precache).
     await page.reload();
     await page.goto(`${BASE_URL}#/projects`);
-    await page.getByRole('heading', { name: 'Offline bench project' }).waitFor();
+    await page.getByRole('heading', { name: 'Offline bench project' }).waitFor({ timeout: 60_000 });
     await context.setOffline(false);
     expect(s.errors.filter((e) => !/ERR_INTERNET_DISCONNECTED/.test(e))).toEqual([]);
   });
