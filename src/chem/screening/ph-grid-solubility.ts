@@ -141,11 +141,16 @@ export function saltOnGrid(g: DrugOnGrid, salt: ProfileSalt): GridSolubility {
   const len = g.phs.length;
   const solubilityM = new Float64Array(len);
   const saltSolid = new Uint8Array(len);
+  // saltLog10FormulaUnitsRaw with its logarithms taken once (the same values, so the same bits)
+  const lm = Math.log10(m);
+  const ln = Math.log10(n);
+  const K = salt.log10Ksp;
   for (let k = 0; k < len; k++) {
     const free = g.freeM[k]!;
-    const u = saltLog10FormulaUnitsRaw(m, n, g.laD[k]!, laX[k]!, salt.log10Ksp);
-    // above the upper limit the salt does not limit (the solver's `unbounded`)
-    if (u > SALT_LOG10_S_LIMITS.max) {
+    const u = (K - m * (g.laD[k]! + lm) - n * (laX[k]! + ln)) / (m + n);
+    // above the upper limit the salt does not limit (the solver's `unbounded`); far above the free
+    // form (a thousandth of a decade) it does not either, and no power needs taking to see it
+    if (u > SALT_LOG10_S_LIMITS.max || lm + u > g.log10FreeM[k]! + 1e-3) {
       solubilityM[k] = free;
       continue;
     }

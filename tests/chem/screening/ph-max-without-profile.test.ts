@@ -13,7 +13,12 @@ import {
   type ProfileSalt,
   type ScreeningCompound,
 } from '@/chem';
-import { drugGrids, gridPhMax, saltPointsOnGrid } from '@/chem/screening/ph-grid-solubility';
+import {
+  drugGrids,
+  gridPhMax,
+  saltOnGrid,
+  saltPointsOnGrid,
+} from '@/chem/screening/ph-grid-solubility';
 
 const GRID = { phFrom: 1, phTo: 8, phStep: 0.1 };
 /** The profile's pH step: the resolution the screen's pH_max had to stay within. */
@@ -109,9 +114,11 @@ describe('pH_max and the salt points without a profile (ph-grid-solubility.ts)',
     fc.assert(
       fc.property(drugAndSalt, ({ drug, salt, log10S0 }) => {
         const g = drugGrids(drugProtolyte(drug), drug.ionCharge, log10S0, GRID);
-        expect(saltPointsOnGrid(g.profile, salt)).toEqual(
-          phSolubilityProfile(drug, log10S0, salt, GRID).points,
-        );
+        const points = phSolubilityProfile(drug, log10S0, salt, GRID).points;
+        expect(saltPointsOnGrid(g.profile, salt)).toEqual(points);
+        const arrays = saltOnGrid(g.profile, salt);
+        expect([...arrays.solubilityM]).toEqual(points.map((p) => p.solubilityM));
+        expect([...arrays.saltSolid]).toEqual(points.map((p) => (p.solid === 'salt' ? 1 : 0)));
       }),
       { numRuns: 300, seed: 5 },
     );

@@ -12,5 +12,6 @@ export function settingsFromBatchFlags(flags: ScreenFlags): BatchSettings {
     seed: flags.seed ?? 1,
     top: flags.top,
     ions: flags.ions ?? null,
+    outFormat: flags.format === 'jsonl' ? 'jsonl' : 'csv',
   };
 }

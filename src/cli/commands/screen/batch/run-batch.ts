@@ -10,7 +10,7 @@ import { writeLine, writeText, type CliIo } from '../../../io';
 import { boundedLines, jsonNestingDepth, MAX_JSON_DEPTH } from '../../eval/bounded-lines';
 import { settingsFromBatchFlags } from './batch-settings';
 import type { ScreenFlags } from '../screen-flags';
-import { safeRow, KSP_NOTE } from '../screen-writers';
+import { KSP_NOTE } from '../screen-writers';
 import { checkHeader, csvCells, rowFromJson, specFromRow, type BatchColumn, type RawRow } from './batch-row';
 import { createProgressBar } from './progress-bar';
 import { createScreener } from './worker-pool';
@@ -72,17 +72,15 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     if (errors) await errors.write(line + '\n');
     else writeLine(io.stderr, `saltsmith screen --batch: ${line}`);
   };
-  const writeRows = async (id: string, name: string, r: Extract<ScreenOneResult, { ok: true }>) => {
-    const rows = r.rows.map((row) => ({ compound_id: id, compound_name: name, ...row }));
-    if (rows.length === 0) return;
-    if (outFormat === 'jsonl') {
-      await out.write(rows.map((row) => JSON.stringify(row)).join('\n') + '\n');
-    } else {
-      const first = columns === null;
-      columns ??= Object.keys(rows[0]!);
-      await out.write(Papa.unparse(rows.map(safeRow), { header: first, columns, newline: '\n' }) + '\n');
-    }
-    rowsOut += rows.length;
+  // The rows arrive as text, written where they were screened (screen-one.ts); the CSV header goes
+  // before the first compound's rows.
+  const writeRows = async (r: Extract<ScreenOneResult, { ok: true }>) => {
+    if (r.rowCount === 0) return;
+    if (outFormat === 'csv' && columns === null) {
+      columns = r.columns;
+      await out.write(Papa.unparse({ fields: columns, data: [] }, { newline: '\n' }) + r.text);
+    } else await out.write(r.text);
+    rowsOut += r.rowCount;
   };
   const flush = async () => {
     for (let p = pending.get(nextToWrite); p && (p.result !== null || p.error !== undefined); p = pending.get(nextToWrite)) {
@@ -90,7 +88,7 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
       nextToWrite++;
       if (p.error !== undefined) await reportError(p.lineNo, p.id, p.error);
       else if (p.result && !p.result.ok) await reportError(p.lineNo, p.id, p.result.error);
-      else if (p.result && p.result.ok) await writeRows(p.id, p.name, p.result);
+      else if (p.result && p.result.ok) await writeRows(p.result);
     }
   };
   const collectOne = async () => {
@@ -146,7 +144,7 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
         continue;
       }
       pending.set(seq, { lineNo: line.lineNo, id, name: spec.name, result: null });
-      screener.submit(seq++, spec);
+      screener.submit(seq++, spec, id);
       inFlight++;
       // Bounded memory: at most `window` compounds in flight, and results held for ordering are bounded too.
       while (inFlight > 0 && (inFlight >= window || pending.size > 4 * window)) await collectOne();

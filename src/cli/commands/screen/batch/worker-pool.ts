@@ -13,7 +13,7 @@ import { screenOne, type BatchSettings, type ScreenOneResult } from './screen-on
 export interface Screener {
   /** How many threads screen at once. */
   readonly threads: number;
-  submit(seq: number, spec: CompoundSpec): void;
+  submit(seq: number, spec: CompoundSpec, id: string): void;
   /** Resolves with the next finished compound (any order). */
   next(): Promise<{ seq: number; result: ScreenOneResult }>;
   close(): Promise<void>;
@@ -54,7 +54,7 @@ export function createScreener(jobs: number, settings: BatchSettings): Screener 
   if (!url) {
     return {
       threads: 1,
-      submit: (seq, spec) => void screenOne(spec, settings).then((result) => done.push({ seq, result })),
+      submit: (seq, spec, id) => void screenOne(spec, settings, id).then((result) => done.push({ seq, result })),
       next,
       close: async () => undefined,
     };
@@ -70,11 +70,11 @@ export function createScreener(jobs: number, settings: BatchSettings): Screener 
   }
   return {
     threads: jobs,
-    submit: (seq, spec) => {
+    submit: (seq, spec, id) => {
       let best = 0;
       for (let i = 1; i < load.length; i++) if (load[i]! < load[best]!) best = i;
       load[best]!++;
-      const msg: WorkerRequest = { seq, spec, settings };
+      const msg: WorkerRequest = { seq, id, spec, settings };
       workers[best]!.postMessage(msg);
     },
     next,
