@@ -7,9 +7,10 @@ const sig = (x: number | null | undefined, digits = 3) => (x === null || x === u
 /** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
 export type ScreenTableRow = ReturnType<typeof screenTable>[number];
 
-/** The ranked table, one object per candidate, best first. */
-export function screenTable(res: ScreenResult, robust: Map<string, number>) {
-  const ranked = rankCandidates(res.rows, res.settings.weights);
+/** The ranked table, one object per candidate, best first (the `top` best only, when given). */
+export function screenTable(res: ScreenResult, robust: Map<string, number>, top?: number) {
+  const all = rankCandidates(res.rows, res.settings.weights);
+  const ranked = top !== undefined ? all.slice(0, top) : all;
   const byId = new Map(res.rows.map((r) => [r.id, r]));
   return ranked.map((k) => {
     const row = byId.get(k.id)!;
@@ -61,6 +62,5 @@ export function runScreen(p: PreparedScreen, opts: { iterations: number; seed: n
       ? rankRobustness(res.rows.map((r) => r.robustness), p.settings.weights, res.robustnessShared, { iterations: opts.iterations, seed: opts.seed }).map((r) => [r.id, r.pTop3])
       : [],
   );
-  const table = screenTable(res, robust);
-  return { res, table: opts.top !== undefined ? table.slice(0, opts.top) : table };
+  return { res, table: screenTable(res, robust, opts.top) };
 }
