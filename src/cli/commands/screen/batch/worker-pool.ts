@@ -59,7 +59,9 @@ export function createScreener(jobs: number, settings: BatchSettings): Screener 
       close: async () => undefined,
     };
   }
-  const workers = Array.from({ length: jobs }, () => new Worker(url));
+  // A screening thread holds little (one compound at a time, memoised ion data): a modest old-space
+  // limit makes V8 collect early instead of growing each thread's heap towards the default size.
+  const workers = Array.from({ length: jobs }, () => new Worker(url, { resourceLimits: { maxOldGenerationSizeMb: 128 } }));
   const load = workers.map(() => 0);
   for (const [i, w] of workers.entries()) {
     w.on('message', (m: { seq: number; result: ScreenOneResult }) => {
