@@ -1,8 +1,7 @@
-import Papa from 'papaparse';
 import { describeFailure } from '../../../define-command';
 import { prepareScreen, type CompoundSpec } from '../screen-input';
 import { runScreen, type ScreenTableRow } from '../screen-table';
-import { safeRow } from '../screen-writers';
+import { safeCsvCell } from '@/chem';
 import { COLUMN_NAMES } from './batch-row';
 
 /** The settings shared by every compound of a batch (the same as one `screen` takes from its flags). */
@@ -33,14 +32,34 @@ export function encodeRows(
   table: readonly ScreenTableRow[],
   format: 'csv' | 'jsonl',
 ): { rowCount: number; columns: string[]; text: string } {
-  const rows = table.map((row) => ({ compound_id: id, compound_name: name, ...row }));
-  if (rows.length === 0) return { rowCount: 0, columns: [], text: '' };
-  const columns = Object.keys(rows[0]!);
-  const text =
-    format === 'jsonl'
-      ? rows.map((row) => JSON.stringify(row)).join('\n') + '\n'
-      : Papa.unparse(rows.map(safeRow), { header: false, columns, newline: '\n' }) + '\n';
-  return { rowCount: rows.length, columns, text };
+  if (table.length === 0) return { rowCount: 0, columns: [], text: '' };
+  const keys = Object.keys(table[0]!) as (keyof ScreenTableRow)[];
+  const columns = ['compound_id', 'compound_name', ...keys];
+  if (format === 'jsonl') {
+    const text = table.map((row) => JSON.stringify({ compound_id: id, compound_name: name, ...row })).join('\n');
+    return { rowCount: table.length, columns, text: text + '\n' };
+  }
+  // CSV as Papa.unparse writes it (the header line comes from the caller), each cell through the
+  // spreadsheet-formula guard, without building an object per row.
+  const lead = `${csvField(safeCsvCell(id))},${csvField(safeCsvCell(name))}`;
+  let text = '';
+  for (const row of table) {
+    text += lead;
+    for (const k of keys) text += ',' + csvField(safeCsvCell(row[k]));
+    text += '\n';
+  }
+  return { rowCount: table.length, columns, text };
+}
+
+/** Quoting as papaparse's unparse does it: around text with a quote, comma, line break, BOM or edge space. */
+const NEEDS_QUOTES = /[\r\n",\uFEFF]|^ | $/;
+
+/** One CSV field (null and undefined empty, quotes doubled, quoted when needed). */
+export function csvField(v: unknown): string {
+  if (v === undefined || v === null) return '';
+  const s = String(v);
+  const e = s.includes('"') ? s.replace(/"/g, '""') : s;
+  return NEEDS_QUOTES.test(e) ? `"${e}"` : e;
 }
 
 /** Screen one compound of a batch with the same core and settings as a single `screen`. */
