@@ -27,7 +27,8 @@ module.exports = {
     {
       name: 'one-way-flow',
       severity: 'error',
-      comment: 'Imports flow core ← persistence ← stores ← screening-data ← features ← app; nothing below imports app/.',
+      comment:
+        'Imports flow core ← persistence ← stores ← screening-data ← features ← app; nothing below imports app/.',
       from: { path: '^src/(persistence|stores|screening-data|features|components|chem)/' },
       to: { path: '^src/app/' },
     },
@@ -72,7 +73,10 @@ module.exports = {
     doNotFollow: { path: 'node_modules' },
     tsPreCompilationDeps: true,
     tsConfig: { fileName: 'tsconfig.json' },
-    enhancedResolveOptions: { exportsFields: ['exports'], conditionNames: ['import', 'require', 'node', 'default', 'types'] },
+    enhancedResolveOptions: {
+      exportsFields: ['exports'],
+      conditionNames: ['import', 'require', 'node', 'default', 'types'],
+    },
     exclude: { path: '\\.d\\.ts$' },
   },
 };

@@ -15,7 +15,10 @@ export default tseslint.config(
       'react-hooks/rules-of-hooks': 'error',
       'react-hooks/exhaustive-deps': 'warn',
       '@typescript-eslint/consistent-type-imports': 'error',
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       'no-shadow': 'off',
       '@typescript-eslint/no-shadow': 'error',
     },
@@ -30,8 +33,22 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['react', 'react-*', 'dexie', 'dexie-*', 'zustand', 'zustand/*', 'recharts'], message: 'src/chem is pure: no UI, state or storage.' },
-            { group: ['@/persistence/*', '@/stores/*', '@/features/*', '@/components/*', '@/app/*', '@/cli/*', 'node:*'], message: 'src/chem imports nothing from the app, storage or Node.' },
+            {
+              group: ['react', 'react-*', 'dexie', 'dexie-*', 'zustand', 'zustand/*', 'recharts'],
+              message: 'src/chem is pure: no UI, state or storage.',
+            },
+            {
+              group: [
+                '@/persistence/*',
+                '@/stores/*',
+                '@/features/*',
+                '@/components/*',
+                '@/app/*',
+                '@/cli/*',
+                'node:*',
+              ],
+              message: 'src/chem imports nothing from the app, storage or Node.',
+            },
           ],
         },
       ],

@@ -12,7 +12,6 @@ const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 
 
 const projectRoot = fileURLToPath(new URL('.', import.meta.url));
 
-
 /**
  * Put the policy (src/cli/serve/content-security-policy.ts) into index.html as the first element of <head> at build time only: the dev server
  * needs an inline script (React Fast Refresh), which the policy rightly forbids.
@@ -77,7 +76,11 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'core', environment: 'node', include: ['tests/chem/**/*.test.ts', 'tests/cli/**/*.test.ts', 'tests/arch/**/*.test.ts'] },
+        test: {
+          name: 'core',
+          environment: 'node',
+          include: ['tests/chem/**/*.test.ts', 'tests/cli/**/*.test.ts', 'tests/arch/**/*.test.ts'],
+        },
       },
       {
         extends: true,

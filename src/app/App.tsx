@@ -16,10 +16,22 @@ import type { ProjectRecord } from '@/persistence/records';
 import { guardUnsavedEdits } from '@/persistence/unsaved-edits';
 
 // Areas with charts and heavy computation load on demand, so the first screen does not wait for them.
-const RankingArea = lazy(() => import('@/features/ranking/components/RankingArea').then((m) => ({ default: m.RankingArea })));
-const EnergeticsArea = lazy(() => import('@/features/energetics/components/EnergeticsArea').then((m) => ({ default: m.EnergeticsArea })));
-const BenchWorkspace = lazy(() => import('@/features/bench/components/BenchWorkspace').then((m) => ({ default: m.BenchWorkspace })));
-const ModelCheckArea = lazy(() => import('@/features/model-check/components/ModelCheckArea').then((m) => ({ default: m.ModelCheckArea })));
+const RankingArea = lazy(() =>
+  import('@/features/ranking/components/RankingArea').then((m) => ({ default: m.RankingArea })),
+);
+const EnergeticsArea = lazy(() =>
+  import('@/features/energetics/components/EnergeticsArea').then((m) => ({
+    default: m.EnergeticsArea,
+  })),
+);
+const BenchWorkspace = lazy(() =>
+  import('@/features/bench/components/BenchWorkspace').then((m) => ({ default: m.BenchWorkspace })),
+);
+const ModelCheckArea = lazy(() =>
+  import('@/features/model-check/components/ModelCheckArea').then((m) => ({
+    default: m.ModelCheckArea,
+  })),
+);
 
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
   switch (area) {

@@ -12,7 +12,8 @@ import { SW_UPDATE_EVENT } from '@/features/offline/update-event';
  * old page's not-yet-loaded chunks are gone from the cache).
  */
 export function registerServiceWorker(): void {
-  if (import.meta.env.DEV || typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
+  if (import.meta.env.DEV || typeof navigator === 'undefined' || !('serviceWorker' in navigator))
+    return;
   const hadController = navigator.serviceWorker.controller !== null;
   navigator.serviceWorker.addEventListener('controllerchange', () => {
     if (hadController) window.dispatchEvent(new Event(SW_UPDATE_EVENT));

@@ -17,7 +17,8 @@ export const COMMAND_USAGE = {
     usage: 'saltsmith eval < requests.jsonl   e.g. {"kind":"salt","cation":"Na+","anion":"Cl-"}',
   },
   screen: {
-    summary: 'screen a compound (or a list, --batch) against counter-ions; ranked table as CSV or JSON',
+    summary:
+      'screen a compound (or a list, --batch) against counter-ions; ranked table as CSV or JSON',
     usage: `saltsmith screen (--smiles S | --formula F) --pka 7.8[,3.1] [--kind base|acid] [--charge 1]
                   (--s0 mg/mL | --mp °C --logp X) [--dose mg] [--ions chloride,mesylate] [--input compound.json]
                   [--format csv|json] [--out file] [--top N] [--iterations 1000] [--seed 1]

@@ -30,7 +30,10 @@ export function describeFailure(err: unknown): { message: string; code: 1 | 2 } 
   if (err instanceof CliError) return { message: err.message, code: err.exitCode };
   if (err instanceof ChemInputError) return { message: err.message, code: 1 };
   if (err instanceof z.ZodError) {
-    return { message: err.issues.map((i) => `${i.path.join('.') || 'input'}: ${i.message}`).join('; '), code: 1 };
+    return {
+      message: err.issues.map((i) => `${i.path.join('.') || 'input'}: ${i.message}`).join('; '),
+      code: 1,
+    };
   }
   return { message: err instanceof Error ? err.message : String(err), code: 2 };
 }

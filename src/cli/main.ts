@@ -21,14 +21,18 @@ const LOADERS: Record<CommandName, () => Promise<CliCommand>> = {
   serve: async () => (await import('./serve/serve-command')).serveCommand,
 };
 
-const isCommand = (name: string): name is CommandName => Object.prototype.hasOwnProperty.call(LOADERS, name);
+const isCommand = (name: string): name is CommandName =>
+  Object.prototype.hasOwnProperty.call(LOADERS, name);
 
 function help(io: CliIo) {
   writeLine(io.stdout, 'saltsmith — salt-selection workbench, command line\n');
   for (const [name, c] of Object.entries(COMMAND_USAGE)) {
     writeLine(io.stdout, `  ${name.padEnd(10)} ${c.summary}\n  ${''.padEnd(10)} ${c.usage}`);
   }
-  writeLine(io.stdout, '\nExit status: 0 done, 1 an input was refused (the message names it), 2 the command line cannot be read.');
+  writeLine(
+    io.stdout,
+    '\nExit status: 0 done, 1 an input was refused (the message names it), 2 the command line cannot be read.',
+  );
   writeLine(io.stdout, `\n${HELP_CAUTION}`);
 }
 
@@ -40,7 +44,10 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     return name ? 0 : 2;
   }
   if (!isCommand(name)) {
-    writeLine(io.stderr, `saltsmith: unknown command '${name.slice(0, 40)}'. Commands: ${Object.keys(LOADERS).join(', ')}`);
+    writeLine(
+      io.stderr,
+      `saltsmith: unknown command '${name.slice(0, 40)}'. Commands: ${Object.keys(LOADERS).join(', ')}`,
+    );
     return 2;
   }
   try {

@@ -31,7 +31,12 @@ export function CautionsDialog({ open, onClose }: { open: boolean; onClose: () =
     }
   }, [open]);
   return (
-    <dialog ref={ref} className="cautions-dialog" aria-labelledby="cautions-title" onClose={onClose}>
+    <dialog
+      ref={ref}
+      className="cautions-dialog"
+      aria-labelledby="cautions-title"
+      onClose={onClose}
+    >
       <h2 id="cautions-title">Before you act on a ranking</h2>
       <ul>
         {CAUTION_LINES.map((l) => (

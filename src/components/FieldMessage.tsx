@@ -32,6 +32,10 @@ export function FieldMessage({
 }
 
 /** The `aria-describedby` value matching {@link FieldMessage}'s line, or undefined when it shows none. */
-export function describedBy(id: string, error?: string | null, hint?: string | null): string | undefined {
+export function describedBy(
+  id: string,
+  error?: string | null,
+  hint?: string | null,
+): string | undefined {
   return error ? `${id}-error` : hint ? `${id}-hint` : undefined;
 }

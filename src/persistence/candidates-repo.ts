@@ -12,7 +12,10 @@ export function saltStoichiometry(
   drugCharge: number,
   counterIonCharge: number,
 ): { drugPerSalt: number; counterIonPerSalt: number } {
-  return saltStoichiometryFromCharges(Math.round(drugCharge) || 1, Math.round(counterIonCharge) || 1);
+  return saltStoichiometryFromCharges(
+    Math.round(drugCharge) || 1,
+    Math.round(counterIonCharge) || 1,
+  );
 }
 
 /** Salt candidates (the shortlist) of a project. */
@@ -63,7 +66,9 @@ export const candidatesRepo = {
   /** The shortlisted counter-ion ids of every project, for the project overview (projectId → count). */
   countByProject: async (): Promise<Map<string, number>> => {
     const counts = new Map<string, number>();
-    await getDb().candidates.each((c) => counts.set(c.projectId, (counts.get(c.projectId) ?? 0) + 1));
+    await getDb().candidates.each((c) =>
+      counts.set(c.projectId, (counts.get(c.projectId) ?? 0) + 1),
+    );
     return counts;
   },
 

@@ -1,4 +1,9 @@
-import { counterIonEditSchema, counterIonSchema, type CounterIon, type CounterIonEdit } from '@/chem';
+import {
+  counterIonEditSchema,
+  counterIonSchema,
+  type CounterIon,
+  type CounterIonEdit,
+} from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, customIonRecordSchema, type CustomIonRecord } from './records';
@@ -27,19 +32,35 @@ export const customIonsRepo = {
   newInHouseId: (): string => newId('inhouse'),
 
   /** Store an in-house ion for every project (projectId null) or for one project. */
-  saveInHouse: async (ion: CounterIon, projectId: string | null = null): Promise<CustomIonRecord> => {
+  saveInHouse: async (
+    ion: CounterIon,
+    projectId: string | null = null,
+  ): Promise<CustomIonRecord> => {
     const valid = counterIonSchema.parse(ion);
-    return customIonsRepo.save({ id: valid.id, projectId, overridesIonId: null, ion: valid as unknown as Record<string, unknown> });
+    return customIonsRepo.save({
+      id: valid.id,
+      projectId,
+      overridesIonId: null,
+      ion: valid as unknown as Record<string, unknown>,
+    });
   },
 
   /**
    * Record this project's edits of a bundled ion (replacing earlier edits of the same ion); the bundled
    * value itself is never changed.
    */
-  saveEdit: async (projectId: string, ionId: string, edit: CounterIonEdit): Promise<CustomIonRecord> => {
+  saveEdit: async (
+    projectId: string,
+    ionId: string,
+    edit: CounterIonEdit,
+  ): Promise<CustomIonRecord> => {
     const db = getDb();
     return db.transaction('rw', db.customIons, async () => {
-      const existing = await db.customIons.where('overridesIonId').equals(ionId).filter((r) => r.projectId === projectId).first();
+      const existing = await db.customIons
+        .where('overridesIonId')
+        .equals(ionId)
+        .filter((r) => r.projectId === projectId)
+        .first();
       const merged = counterIonEditSchema.parse(edit);
       const record = customIonRecordSchema.parse({
         id: existing?.id ?? newId('ionedit'),
@@ -57,7 +78,11 @@ export const customIonsRepo = {
   /** Drop this project's edits of a bundled ion: the bundled values apply again. */
   restoreBundled: async (projectId: string, ionId: string): Promise<void> => {
     const db = getDb();
-    await db.customIons.where('overridesIonId').equals(ionId).filter((r) => r.projectId === projectId).delete();
+    await db.customIons
+      .where('overridesIonId')
+      .equals(ionId)
+      .filter((r) => r.projectId === projectId)
+      .delete();
   },
 
   remove: (id: string): Promise<void> => getDb().customIons.delete(id),

@@ -26,4 +26,11 @@ export const DEMO_COMPOUND: Compound = {
 };
 
 /** Counter-ion ids shortlisted in the demo project (bundled library ids). */
-export const DEMO_SHORTLIST = ['chloride', 'mesylate', 'sulfate', 'maleate', 'tosylate', 'napsylate'];
+export const DEMO_SHORTLIST = [
+  'chloride',
+  'mesylate',
+  'sulfate',
+  'maleate',
+  'tosylate',
+  'napsylate',
+];

@@ -19,19 +19,25 @@ import type { ProjectFile } from './project-file/schema';
 /** Read everything a project file holds for one project. */
 export async function loadProjectBundle(projectId: string): Promise<ProjectBundle> {
   const db = getDb();
-  return db.transaction('r', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-    const project = await db.projects.get(projectId);
-    if (!project) throw new Error(`No project with id ${projectId}`);
-    const candidates = await db.candidates.where('projectId').equals(projectId).toArray();
-    const measurements = await db.measurements.where('projectId').equals(projectId).toArray();
-    const usedIonIds = new Set(candidates.map((c) => c.ionId));
-    const customIons = (await db.customIons.toArray()).filter(
-      (ion) =>
-        ion.projectId === projectId ||
-        (ion.projectId === null && (usedIonIds.has(ion.id) || (ion.overridesIonId !== null && usedIonIds.has(ion.overridesIonId)))),
-    );
-    return { project, candidates, measurements, customIons };
-  });
+  return db.transaction(
+    'r',
+    [db.projects, db.candidates, db.measurements, db.customIons],
+    async () => {
+      const project = await db.projects.get(projectId);
+      if (!project) throw new Error(`No project with id ${projectId}`);
+      const candidates = await db.candidates.where('projectId').equals(projectId).toArray();
+      const measurements = await db.measurements.where('projectId').equals(projectId).toArray();
+      const usedIonIds = new Set(candidates.map((c) => c.ionId));
+      const customIons = (await db.customIons.toArray()).filter(
+        (ion) =>
+          ion.projectId === projectId ||
+          (ion.projectId === null &&
+            (usedIonIds.has(ion.id) ||
+              (ion.overridesIonId !== null && usedIonIds.has(ion.overridesIonId)))),
+      );
+      return { project, candidates, measurements, customIons };
+    },
+  );
 }
 
 /** Export a project as the text of a project file (see project-file/). */
@@ -81,7 +87,12 @@ async function placeImportedIons(
       if (ion.scope === 'shared') {
         // A shared edit applies to no project (only per-project edits do); keep it as it was.
         const existing = await db.customIons.get(ion.id);
-        if (existing && existing.projectId === null && existing.overridesIonId === ion.overridesIonId && sameJson(existing.ion, ion.ion)) {
+        if (
+          existing &&
+          existing.projectId === null &&
+          existing.overridesIonId === ion.overridesIonId &&
+          sameJson(existing.ion, ion.ion)
+        ) {
           continue;
         }
         if (!existing && !BUNDLED_IDS.has(ion.id)) {
@@ -105,7 +116,12 @@ async function placeImportedIons(
     let projectScope: string | null = projectId;
     if (ion.scope === 'shared' && !BUNDLED_IDS.has(ion.id)) {
       const existing = await db.customIons.get(ion.id);
-      if (existing && existing.projectId === null && existing.overridesIonId === null && sameJson(existing.ion, ion.ion)) {
+      if (
+        existing &&
+        existing.projectId === null &&
+        existing.overridesIonId === null &&
+        sameJson(existing.ion, ion.ion)
+      ) {
         ionIdMap.set(ion.id, ion.id);
         continue; // the same shared ion is already here
       }
@@ -134,71 +150,79 @@ async function placeImportedIons(
  * none does. Candidate, measurement and project-scoped ion ids are fresh, so a file can be imported
  * beside the project it came from; custom ions are placed by {@link placeImportedIons}.
  */
-export async function writeProjectFile(file: ProjectFile, target: ImportMode): Promise<ImportOutcome> {
+export async function writeProjectFile(
+  file: ProjectFile,
+  target: ImportMode,
+): Promise<ImportOutcome> {
   const db = getDb();
-  return db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-    const now = nowIso();
-    let projectId: string;
-    let createdAt = file.project.createdAt;
-    if (target.mode === 'replace') {
-      const existing = await db.projects.get(target.projectId);
-      if (!existing) throw new Error('The project to replace no longer exists; nothing was imported.');
-      projectId = existing.id;
-      createdAt = existing.createdAt;
-      await db.measurements.where('projectId').equals(projectId).delete();
-      await db.candidates.where('projectId').equals(projectId).delete();
-      await db.customIons.where('projectId').equals(projectId).delete();
-    } else {
-      projectId = newId('prj');
-    }
+  return db.transaction(
+    'rw',
+    [db.projects, db.candidates, db.measurements, db.customIons],
+    async () => {
+      const now = nowIso();
+      let projectId: string;
+      let createdAt = file.project.createdAt;
+      if (target.mode === 'replace') {
+        const existing = await db.projects.get(target.projectId);
+        if (!existing)
+          throw new Error('The project to replace no longer exists; nothing was imported.');
+        projectId = existing.id;
+        createdAt = existing.createdAt;
+        await db.measurements.where('projectId').equals(projectId).delete();
+        await db.candidates.where('projectId').equals(projectId).delete();
+        await db.customIons.where('projectId').equals(projectId).delete();
+      } else {
+        projectId = newId('prj');
+      }
 
-    const { ions, ionIdMap } = await placeImportedIons(file.customIons, projectId);
+      const { ions, ionIdMap } = await placeImportedIons(file.customIons, projectId);
 
-    const candidateIdMap = new Map<string, string>();
-    const candidates: CandidateRecord[] = file.candidates.map((c) => {
-      const id = newId('cand');
-      candidateIdMap.set(c.id, id);
-      return candidateRecordSchema.parse({
-        ...c,
-        id,
-        schemaVersion: RECORD_SCHEMA_VERSION,
-        projectId,
-        ionId: ionIdMap.get(c.ionId) ?? c.ionId,
+      const candidateIdMap = new Map<string, string>();
+      const candidates: CandidateRecord[] = file.candidates.map((c) => {
+        const id = newId('cand');
+        candidateIdMap.set(c.id, id);
+        return candidateRecordSchema.parse({
+          ...c,
+          id,
+          schemaVersion: RECORD_SCHEMA_VERSION,
+          projectId,
+          ionId: ionIdMap.get(c.ionId) ?? c.ionId,
+        });
       });
-    });
-    const measurements: MeasurementRecord[] = file.measurements.map((m) =>
-      measurementRecordSchema.parse({
-        ...m,
-        id: newId('meas'),
+      const measurements: MeasurementRecord[] = file.measurements.map((m) =>
+        measurementRecordSchema.parse({
+          ...m,
+          id: newId('meas'),
+          schemaVersion: RECORD_SCHEMA_VERSION,
+          projectId,
+          candidateId: candidateIdMap.get(m.candidateId),
+        }),
+      );
+      const project: ProjectRecord = projectRecordSchema.parse({
+        id: projectId,
         schemaVersion: RECORD_SCHEMA_VERSION,
-        projectId,
-        candidateId: candidateIdMap.get(m.candidateId),
-      }),
-    );
-    const project: ProjectRecord = projectRecordSchema.parse({
-      id: projectId,
-      schemaVersion: RECORD_SCHEMA_VERSION,
-      name: file.project.name,
-      createdAt,
-      updatedAt: now,
-      archived: false,
-      isDemo: false,
-      compound: file.project.compound,
-      settings: file.project.settings,
-    });
+        name: file.project.name,
+        createdAt,
+        updatedAt: now,
+        archived: false,
+        isDemo: false,
+        compound: file.project.compound,
+        settings: file.project.settings,
+      });
 
-    await db.projects.put(project);
-    if (ions.length) await db.customIons.bulkAdd(ions);
-    if (candidates.length) await db.candidates.bulkAdd(candidates);
-    if (measurements.length) await db.measurements.bulkAdd(measurements);
-    return {
-      projectId,
-      name: project.name,
-      candidates: candidates.length,
-      measurements: measurements.length,
-      customIons: ions.length,
-    };
-  });
+      await db.projects.put(project);
+      if (ions.length) await db.customIons.bulkAdd(ions);
+      if (candidates.length) await db.candidates.bulkAdd(candidates);
+      if (measurements.length) await db.measurements.bulkAdd(measurements);
+      return {
+        projectId,
+        name: project.name,
+        candidates: candidates.length,
+        measurements: measurements.length,
+        customIons: ions.length,
+      };
+    },
+  );
 }
 
 /**

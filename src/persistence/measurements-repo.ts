@@ -1,10 +1,6 @@
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
-import {
-  RECORD_SCHEMA_VERSION,
-  measurementRecordSchema,
-  type MeasurementRecord,
-} from './records';
+import { RECORD_SCHEMA_VERSION, measurementRecordSchema, type MeasurementRecord } from './records';
 
 export type NewMeasurement = Omit<MeasurementRecord, 'id' | 'schemaVersion' | 'recordedAt'>;
 
@@ -41,7 +37,9 @@ export const measurementsRepo = {
   /** Count of measurements per project (projectId → count), for the project overview. */
   countByProject: async (): Promise<Map<string, number>> => {
     const counts = new Map<string, number>();
-    await getDb().measurements.each((m) => counts.set(m.projectId, (counts.get(m.projectId) ?? 0) + 1));
+    await getDb().measurements.each((m) =>
+      counts.set(m.projectId, (counts.get(m.projectId) ?? 0) + 1),
+    );
     return counts;
   },
 

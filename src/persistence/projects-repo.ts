@@ -116,7 +116,9 @@ export const projectsRepo = {
    * An invalid result throws and nothing is stored.
    */
   patchCompound: (id: string, changes: Partial<Compound>): Promise<Compound> =>
-    trackWrite({ kind: 'compound', projectId: id, changes }, () => writeCompoundChanges(id, changes)),
+    trackWrite({ kind: 'compound', projectId: id, changes }, () =>
+      writeCompoundChanges(id, changes),
+    ),
 
   /** Store a whole compound definition (every field written; see {@link projectsRepo.patchCompound}). */
   updateCompound: async (id: string, compound: Compound): Promise<void> => {
@@ -154,12 +156,16 @@ export const projectsRepo = {
   /** Delete a project and everything that belongs to it, in one transaction. */
   remove: async (id: string): Promise<void> => {
     const db = getDb();
-    await db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-      await db.candidates.where('projectId').equals(id).delete();
-      await db.measurements.where('projectId').equals(id).delete();
-      await db.customIons.where('projectId').equals(id).delete();
-      await db.projects.delete(id);
-    });
+    await db.transaction(
+      'rw',
+      [db.projects, db.candidates, db.measurements, db.customIons],
+      async () => {
+        await db.candidates.where('projectId').equals(id).delete();
+        await db.measurements.where('projectId').equals(id).delete();
+        await db.customIons.where('projectId').equals(id).delete();
+        await db.projects.delete(id);
+      },
+    );
   },
 
   /**
@@ -200,37 +206,49 @@ export const projectsRepo = {
   /** Everything stored for one project (undefined when there is no such project). */
   bundle: async (id: string): Promise<ProjectBundle | undefined> => {
     const db = getDb();
-    return db.transaction('r', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-      const project = await db.projects.get(id);
-      if (!project) return undefined;
-      return {
-        project,
-        candidates: await db.candidates.where('projectId').equals(id).toArray(),
-        measurements: await db.measurements.where('projectId').equals(id).toArray(),
-        customIons: await db.customIons.where('projectId').equals(id).toArray(),
-      };
-    });
+    return db.transaction(
+      'r',
+      [db.projects, db.candidates, db.measurements, db.customIons],
+      async () => {
+        const project = await db.projects.get(id);
+        if (!project) return undefined;
+        return {
+          project,
+          candidates: await db.candidates.where('projectId').equals(id).toArray(),
+          measurements: await db.measurements.where('projectId').equals(id).toArray(),
+          customIons: await db.customIons.where('projectId').equals(id).toArray(),
+        };
+      },
+    );
   },
 
   /** Delete a project and return what was deleted, so that the caller can offer an undo. */
   removeWithUndo: async (id: string): Promise<ProjectBundle | undefined> => {
     const db = getDb();
-    return db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-      const bundle = await projectsRepo.bundle(id);
-      if (bundle) await projectsRepo.remove(id);
-      return bundle;
-    });
+    return db.transaction(
+      'rw',
+      [db.projects, db.candidates, db.measurements, db.customIons],
+      async () => {
+        const bundle = await projectsRepo.bundle(id);
+        if (bundle) await projectsRepo.remove(id);
+        return bundle;
+      },
+    );
   },
 
   /** Put a deleted project back exactly as it was (the undo of {@link projectsRepo.removeWithUndo}). */
   restore: async (bundle: ProjectBundle): Promise<void> => {
     const db = getDb();
-    await db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-      await db.projects.put(projectRecordSchema.parse(bundle.project));
-      await db.candidates.bulkPut(bundle.candidates);
-      await db.measurements.bulkPut(bundle.measurements);
-      await db.customIons.bulkPut(bundle.customIons);
-    });
+    await db.transaction(
+      'rw',
+      [db.projects, db.candidates, db.measurements, db.customIons],
+      async () => {
+        await db.projects.put(projectRecordSchema.parse(bundle.project));
+        await db.candidates.bulkPut(bundle.candidates);
+        await db.measurements.bulkPut(bundle.measurements);
+        await db.customIons.bulkPut(bundle.customIons);
+      },
+    );
   },
 
   /**
@@ -239,49 +257,58 @@ export const projectsRepo = {
    */
   duplicate: async (id: string, name?: string): Promise<ProjectRecord> => {
     const db = getDb();
-    return db.transaction('rw', [db.projects, db.candidates, db.measurements, db.customIons], async () => {
-      const source = await projectsRepo.bundle(id);
-      if (!source) throw new Error(`No project with id ${id}`);
-      const now = nowIso();
-      const project = projectRecordSchema.parse({
-        ...source.project,
-        id: newId('prj'),
-        name: (name?.trim() || `${source.project.name} (copy)`).slice(0, 120),
-        createdAt: now,
-        updatedAt: now,
-        archived: false,
-        isDemo: false,
-      });
-      // The copy's own in-house ions get new ids (record and library id alike, so that no two
-      // records claim one library id); its shortlist follows them.
-      const ionIds = new Map<string, string>();
-      const customIons = source.customIons.map((ion) => {
-        if (ion.overridesIonId !== null) return { ...ion, id: newId('ionedit'), projectId: project.id };
-        const copyId = newId('inhouse');
-        ionIds.set(ion.id, copyId);
-        return { ...ion, id: copyId, projectId: project.id, ion: { ...ion.ion, id: copyId } };
-      });
-      const candidateIds = new Map<string, string>();
-      const candidates = source.candidates.map((c) => {
-        const copyId = newId('cand');
-        candidateIds.set(c.id, copyId);
-        return { ...c, id: copyId, projectId: project.id, ionId: ionIds.get(c.ionId) ?? c.ionId };
-      });
-      const measurements = source.measurements.flatMap((m) => {
-        const candidateId = candidateIds.get(m.candidateId);
-        return candidateId ? [{ ...m, id: newId('meas'), projectId: project.id, candidateId }] : [];
-      });
-      await db.projects.add(project);
-      await db.candidates.bulkAdd(candidates);
-      await db.measurements.bulkAdd(measurements);
-      await db.customIons.bulkAdd(customIons);
-      return project;
-    });
+    return db.transaction(
+      'rw',
+      [db.projects, db.candidates, db.measurements, db.customIons],
+      async () => {
+        const source = await projectsRepo.bundle(id);
+        if (!source) throw new Error(`No project with id ${id}`);
+        const now = nowIso();
+        const project = projectRecordSchema.parse({
+          ...source.project,
+          id: newId('prj'),
+          name: (name?.trim() || `${source.project.name} (copy)`).slice(0, 120),
+          createdAt: now,
+          updatedAt: now,
+          archived: false,
+          isDemo: false,
+        });
+        // The copy's own in-house ions get new ids (record and library id alike, so that no two
+        // records claim one library id); its shortlist follows them.
+        const ionIds = new Map<string, string>();
+        const customIons = source.customIons.map((ion) => {
+          if (ion.overridesIonId !== null)
+            return { ...ion, id: newId('ionedit'), projectId: project.id };
+          const copyId = newId('inhouse');
+          ionIds.set(ion.id, copyId);
+          return { ...ion, id: copyId, projectId: project.id, ion: { ...ion.ion, id: copyId } };
+        });
+        const candidateIds = new Map<string, string>();
+        const candidates = source.candidates.map((c) => {
+          const copyId = newId('cand');
+          candidateIds.set(c.id, copyId);
+          return { ...c, id: copyId, projectId: project.id, ionId: ionIds.get(c.ionId) ?? c.ionId };
+        });
+        const measurements = source.measurements.flatMap((m) => {
+          const candidateId = candidateIds.get(m.candidateId);
+          return candidateId
+            ? [{ ...m, id: newId('meas'), projectId: project.id, candidateId }]
+            : [];
+        });
+        await db.projects.add(project);
+        await db.candidates.bulkAdd(candidates);
+        await db.measurements.bulkAdd(measurements);
+        await db.customIons.bulkAdd(customIons);
+        return project;
+      },
+    );
   },
 
   /** Store a project's extra settings block (e.g. `screening`), validated by its owner beforehand. */
   updateExtraSettings: (id: string, key: string, value: unknown): Promise<void> =>
-    trackWrite({ kind: 'extra-settings', projectId: id, key, value }, () => writeExtraSettings(id, key, value)),
+    trackWrite({ kind: 'extra-settings', projectId: id, key, value }, () =>
+      writeExtraSettings(id, key, value),
+    ),
 
   /**
    * Apply the edits a page left unconfirmed when it was reloaded or closed (see unsaved-edits.ts).
@@ -290,7 +317,9 @@ export const projectsRepo = {
   replayUnsavedEdits: (): Promise<number> =>
     replayUnsavedEdits((edit) =>
       edit.kind === 'compound'
-        ? writeCompoundChanges(edit.projectId, edit.changes as Partial<Compound>).then(() => undefined)
+        ? writeCompoundChanges(edit.projectId, edit.changes as Partial<Compound>).then(
+            () => undefined,
+          )
         : writeExtraSettings(edit.projectId, edit.key, edit.value),
     ),
 };

@@ -111,15 +111,25 @@ export function checkCustomIonPayload(
   ctx: z.RefinementCtx,
 ): void {
   const parsed =
-    record.overridesIonId === null ? counterIonSchema.safeParse(record.ion) : counterIonEditSchema.safeParse(record.ion);
+    record.overridesIonId === null
+      ? counterIonSchema.safeParse(record.ion)
+      : counterIonEditSchema.safeParse(record.ion);
   if (!parsed.success) {
     for (const issue of parsed.error.issues.slice(0, 5)) {
-      ctx.addIssue({ code: 'custom', path: ['ion', ...issue.path.map(String)], message: issue.message });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ion', ...issue.path.map(String)],
+        message: issue.message,
+      });
     }
     return;
   }
   if (record.overridesIonId === null && record.ion.id !== record.id) {
-    ctx.addIssue({ code: 'custom', path: ['ion', 'id'], message: `must be the record's id "${record.id}"` });
+    ctx.addIssue({
+      code: 'custom',
+      path: ['ion', 'id'],
+      message: `must be the record's id "${record.id}"`,
+    });
   }
 }
 

@@ -104,11 +104,16 @@ export function classifyStorageError(err: unknown): StorageProblem | null {
         'The browser will not let Saltsmith store data here (private window, disabled site storage, or a disk error). Nothing you enter can be kept: export to a file before closing the tab.',
     };
   }
-  if (chain.some((c) => /^(Dexie|IDB)|IndexedDB|AbortError|ConstraintError|DataError/i.test(`${c.name} ${c.message}`))) {
+  if (
+    chain.some((c) =>
+      /^(Dexie|IDB)|IndexedDB|AbortError|ConstraintError|DataError/i.test(`${c.name} ${c.message}`),
+    )
+  ) {
     return {
       kind: 'other',
       technical,
-      message: 'Saving failed because of a storage error. Your last change may not have been saved; try again, or export your project to a file.',
+      message:
+        'Saving failed because of a storage error. Your last change may not have been saved; try again, or export your project to a file.',
     };
   }
   return null;

@@ -32,7 +32,11 @@ const unsavedEditSchema = z.discriminatedUnion('kind', [
   }),
 ]);
 export type UnsavedEdit = z.infer<typeof unsavedEditSchema>;
-type NewEdit = UnsavedEdit extends infer E ? (E extends UnsavedEdit ? Omit<E, 'id'> : never) : never;
+type NewEdit = UnsavedEdit extends infer E
+  ? E extends UnsavedEdit
+    ? Omit<E, 'id'>
+    : never
+  : never;
 
 const inFlight = new Map<string, UnsavedEdit>();
 const flushers = new Set<() => void>();
@@ -135,7 +139,9 @@ export function guardUnsavedEdits(): () => void {
  * Replay the copies a page left behind (oldest first) with `apply`, then forget them. A copy that
  * no longer applies (its project deleted, a value now invalid) is dropped. Returns how many applied.
  */
-export async function replayUnsavedEdits(apply: (edit: UnsavedEdit) => Promise<void>): Promise<number> {
+export async function replayUnsavedEdits(
+  apply: (edit: UnsavedEdit) => Promise<void>,
+): Promise<number> {
   const copies = readCopies().filter((e) => !inFlight.has(e.id));
   if (copies.length === 0) return 0;
   let applied = 0;

@@ -7,7 +7,10 @@ export function ionIdAsWords(ionId: string): string {
 }
 
 /** How a candidate is named on screen: the counter-ion and the salt's stoichiometry (drug:counter-ion). */
-export function candidateLabel(c: Pick<CandidateRecord, 'ionId' | 'drugPerSalt' | 'counterIonPerSalt'>, ionName?: string): string {
+export function candidateLabel(
+  c: Pick<CandidateRecord, 'ionId' | 'drugPerSalt' | 'counterIonPerSalt'>,
+  ionName?: string,
+): string {
   const name = ionName ?? ionIdAsWords(c.ionId);
   return `${name} (${c.drugPerSalt}:${c.counterIonPerSalt})`;
 }

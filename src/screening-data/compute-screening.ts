@@ -23,7 +23,12 @@ import {
   type Stoichiometry,
   type ThermoIon,
 } from '@/chem';
-import type { CandidateRecord, CustomIonRecord, MeasurementRecord, ProjectRecord } from '@/persistence/records';
+import type {
+  CandidateRecord,
+  CustomIonRecord,
+  MeasurementRecord,
+  ProjectRecord,
+} from '@/persistence/records';
 import { ionIdAsWords } from './candidate-label';
 import { screeningSettingsOf } from './screening-settings';
 
@@ -66,7 +71,11 @@ export interface ProjectScreening {
 }
 
 /** Pick the library stoichiometry matching the stored candidate, or balance charges on the first usable one. */
-function stoichiometryFor(ion: CounterIon, c: CandidateRecord, drugCharge: number): Stoichiometry & { label: string } {
+function stoichiometryFor(
+  ion: CounterIon,
+  c: CandidateRecord,
+  drugCharge: number,
+): Stoichiometry & { label: string } {
   const exact = ion.stoichiometries.find(
     (s) =>
       s.drugPerSalt === c.drugPerSalt &&
@@ -74,18 +83,31 @@ function stoichiometryFor(ion: CounterIon, c: CandidateRecord, drugCharge: numbe
       c.drugPerSalt * Math.abs(drugCharge) === c.counterIonPerSalt * Math.abs(s.ionCharge),
   );
   if (exact) return exact;
-  const balanced = ion.stoichiometries.find((s) => c.drugPerSalt * Math.abs(drugCharge) === c.counterIonPerSalt * Math.abs(s.ionCharge));
-  if (balanced) return { ...balanced, label: `(${c.drugPerSalt}:${c.counterIonPerSalt})`, drugPerSalt: c.drugPerSalt, counterIonPerSalt: c.counterIonPerSalt };
+  const balanced = ion.stoichiometries.find(
+    (s) => c.drugPerSalt * Math.abs(drugCharge) === c.counterIonPerSalt * Math.abs(s.ionCharge),
+  );
+  if (balanced)
+    return {
+      ...balanced,
+      label: `(${c.drugPerSalt}:${c.counterIonPerSalt})`,
+      drugPerSalt: c.drugPerSalt,
+      counterIonPerSalt: c.counterIonPerSalt,
+    };
   const first = ion.stoichiometries[0];
   if (!first) throw new Error(`${ion.name} has no stoichiometry in the library`);
-  const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(drugCharge, first.ionCharge);
+  const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(
+    drugCharge,
+    first.ionCharge,
+  );
   return { ...first, drugPerSalt: m, counterIonPerSalt: n, label: `(${m}:${n})` };
 }
 
 function counterThermoIon(ion: CounterIon, st: Stoichiometry): ThermoIon {
   const bundled = getThermoIon(ion.thermoId ?? ion.id);
   if (bundled && bundled.charge === st.ionCharge) return bundled;
-  return organicIonFromFormula(st.ionFormula || ion.formula, st.ionCharge, ion.rings, { label: ion.name });
+  return organicIonFromFormula(st.ionFormula || ion.formula, st.ionCharge, ion.rings, {
+    label: ion.name,
+  });
 }
 
 /**
@@ -94,19 +116,28 @@ function counterThermoIon(ion: CounterIon, st: Stoichiometry): ThermoIon {
  * Bundled ions need none (the core ships theirs); an in-house ion without a SMILES keeps the
  * common-practice anchor, and a note says so.
  */
-async function inHouseIonDescriptors(ions: readonly LibraryIon[], notes: string[]): Promise<Record<string, CounterIonDescriptors>> {
+async function inHouseIonDescriptors(
+  ions: readonly LibraryIon[],
+  notes: string[],
+): Promise<Record<string, CounterIonDescriptors>> {
   const mine = ions.filter((i) => i.origin === 'in-house');
   if (mine.length === 0) return {};
   const out: Record<string, CounterIonDescriptors> = {};
   const withSmiles = mine.filter((i) => i.ionSmiles.trim() !== '');
-  for (const i of mine) if (!withSmiles.includes(i)) notes.push(`${i.name}: no SMILES, so its salt solubility rests on the 10² × S₀ anchor, not the model.`);
+  for (const i of mine)
+    if (!withSmiles.includes(i))
+      notes.push(
+        `${i.name}: no SMILES, so its salt solubility rests on the 10² × S₀ anchor, not the model.`,
+      );
   if (withSmiles.length === 0) return out;
   const ocl = await import('openchemlib');
   for (const i of withSmiles) {
     try {
       out[i.id] = counterIonDescriptorsFromSmiles(ocl, neutralParentSmiles(ocl, i.ionSmiles));
     } catch {
-      notes.push(`${i.name}: its SMILES could not be read for descriptors; its salt solubility rests on the anchor.`);
+      notes.push(
+        `${i.name}: its SMILES could not be read for descriptors; its salt solubility rests on the anchor.`,
+      );
     }
   }
   return out;
@@ -128,12 +159,17 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
       structure = await parseStructure(compound.smiles);
     } catch (err) {
       if (!compound.formula.trim()) throw err;
-      notes.push(`The SMILES could not be read (${err instanceof Error ? err.message : String(err)}); the molecular formula is used.`);
+      notes.push(
+        `The SMILES could not be read (${err instanceof Error ? err.message : String(err)}); the molecular formula is used.`,
+      );
     }
   }
   const dIon = deriveDrugIon(compound, structure ?? undefined);
   notes.push(...dIon.notes);
-  if (!dIon.ringsKnown) notes.push('Ring counts unknown (formula only): the drug ion’s volume estimate ignores ring corrections.');
+  if (!dIon.ringsKnown)
+    notes.push(
+      'Ring counts unknown (formula only): the drug ion’s volume estimate ignores ring corrections.',
+    );
 
   const settings = screeningSettingsOf(project);
   const library = mergeLibrary(COUNTER_IONS, customIons, project.id).ions;
@@ -166,21 +202,33 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
   for (const c of candidates) {
     const ion = byId.get(c.ionId);
     if (!ion) {
-      missing.push({ candidateId: c.id, ionId: c.ionId, reason: 'not in the counter-ion library (an in-house ion that was deleted?)' });
+      missing.push({
+        candidateId: c.id,
+        ionId: c.ionId,
+        reason: 'not in the counter-ion library (an in-house ion that was deleted?)',
+      });
       ionNames[c.id] = ionIdAsWords(c.ionId);
       continue;
     }
     ionNames[c.id] = ion.name;
     counterIons[c.id] = ion;
     if ((ion.kind === 'anion') !== drugIsCation) {
-      missing.push({ candidateId: c.id, ionId: c.ionId, reason: `${ion.name} is ${ion.kind === 'anion' ? 'an anion' : 'a cation'}: it cannot make a salt with this ${compound.kind}` });
+      missing.push({
+        candidateId: c.id,
+        ionId: c.ionId,
+        reason: `${ion.name} is ${ion.kind === 'anion' ? 'an anion' : 'a cation'}: it cannot make a salt with this ${compound.kind}`,
+      });
       continue;
     }
     let st: Stoichiometry & { label: string };
     try {
       st = stoichiometryFor(ion, c, dIon.charge);
     } catch (err) {
-      missing.push({ candidateId: c.id, ionId: c.ionId, reason: err instanceof Error ? err.message : String(err) });
+      missing.push({
+        candidateId: c.id,
+        ionId: c.ionId,
+        reason: err instanceof Error ? err.message : String(err),
+      });
       continue;
     }
     const p = drugIsCation ? st.drugPerSalt : st.counterIonPerSalt;
@@ -198,7 +246,11 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
           anionsPerFormula: q,
           method: 'auto',
         });
-        if (![thermo.latticeEnthalpyKJ, thermo.solutionEnthalpyKJ].every((e) => Number.isFinite(e.value) && Number.isFinite(e.uncertainty))) {
+        if (
+          ![thermo.latticeEnthalpyKJ, thermo.solutionEnthalpyKJ].every(
+            (e) => Number.isFinite(e.value) && Number.isFinite(e.uncertainty),
+          )
+        ) {
           thermo = null;
           reason = 'the thermochemistry gave no finite result';
         }
@@ -243,11 +295,24 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
 
   const screen = screenCompound({
     compound,
-    drugIon: { molarMassGPerMol: dIon.molarMassGPerMol, freeFormMolarMassGPerMol: dIon.freeFormMolarMassGPerMol },
+    drugIon: {
+      molarMassGPerMol: dIon.molarMassGPerMol,
+      freeFormMolarMassGPerMol: dIon.freeFormMolarMassGPerMol,
+    },
     candidates: screening,
     settings,
   });
-  return { screen, settings, drugIon: dIon, structure, energetics, ionNames, counterIons, missing, notes };
+  return {
+    screen,
+    settings,
+    drugIon: dIon,
+    structure,
+    energetics,
+    ionNames,
+    counterIons,
+    missing,
+    notes,
+  };
 }
 
 /**
@@ -261,8 +326,25 @@ export function screeningInputsKey(inputs: ScreeningInputs): string {
     inputs.project.id,
     inputs.project.compound,
     physics,
-    inputs.candidates.map((c) => [c.id, c.ionId, c.drugPerSalt, c.counterIonPerSalt, c.hydrateWater, c.order]),
-    inputs.measurements.map((m) => [m.id, m.candidateId, m.kind, m.value, m.unit, m.ph, m.temperatureK, m.medium, m.text]),
+    inputs.candidates.map((c) => [
+      c.id,
+      c.ionId,
+      c.drugPerSalt,
+      c.counterIonPerSalt,
+      c.hydrateWater,
+      c.order,
+    ]),
+    inputs.measurements.map((m) => [
+      m.id,
+      m.candidateId,
+      m.kind,
+      m.value,
+      m.unit,
+      m.ph,
+      m.temperatureK,
+      m.medium,
+      m.text,
+    ]),
     inputs.customIons.map((i) => [i.id, i.updatedAt, i.projectId]),
   ]);
 }

@@ -7,7 +7,10 @@ import type { CandidateEnergetics } from './compute-screening';
  * hydration of all p cations and q anions of a formula unit (identical ions share their model error,
  * so σ scales with p and q), and ΔH_sol as the engine carried it through the cycle.
  */
-export function energyCycleOf(e: CandidateEnergetics & { thermo: SaltThermoResult }, saltLabel: string): EnergyCycle {
+export function energyCycleOf(
+  e: CandidateEnergetics & { thermo: SaltThermoResult },
+  saltLabel: string,
+): EnergyCycle {
   const t = e.thermo;
   return {
     saltLabel,
@@ -16,8 +19,14 @@ export function energyCycleOf(e: CandidateEnergetics & { thermo: SaltThermoResul
     cationsPerFormula: e.cationsPerFormula,
     anionsPerFormula: e.anionsPerFormula,
     lattice: { value: t.latticeEnthalpyKJ.value, uncertainty: t.latticeEnthalpyKJ.uncertainty },
-    cationHydration: { value: e.cationsPerFormula * t.cationHydrationKJ.value, uncertainty: e.cationsPerFormula * t.cationHydrationKJ.uncertainty },
-    anionHydration: { value: e.anionsPerFormula * t.anionHydrationKJ.value, uncertainty: e.anionsPerFormula * t.anionHydrationKJ.uncertainty },
+    cationHydration: {
+      value: e.cationsPerFormula * t.cationHydrationKJ.value,
+      uncertainty: e.cationsPerFormula * t.cationHydrationKJ.uncertainty,
+    },
+    anionHydration: {
+      value: e.anionsPerFormula * t.anionHydrationKJ.value,
+      uncertainty: e.anionsPerFormula * t.anionHydrationKJ.uncertainty,
+    },
     solution: { value: t.solutionEnthalpyKJ.value, uncertainty: t.solutionEnthalpyKJ.uncertainty },
   };
 }

@@ -1,4 +1,9 @@
-import { rankRobustness, type RobustnessRow, type RobustnessShared, type ScreeningWeights } from '@/chem';
+import {
+  rankRobustness,
+  type RobustnessRow,
+  type RobustnessShared,
+  type ScreeningWeights,
+} from '@/chem';
 
 /** A request to the rank-robustness worker. */
 export interface RobustnessRequest {
@@ -37,7 +42,10 @@ export function runRobustnessBatches(
   const per = Math.max(1, Math.round(req.iterations / req.batches));
   const sums = new Map<string, { pTop3: number; pFirst: number }>();
   for (let b = 0; b < req.batches; b++) {
-    const part = rankRobustness(req.rows, req.weights, req.shared, { iterations: per, seed: req.seed + b });
+    const part = rankRobustness(req.rows, req.weights, req.shared, {
+      iterations: per,
+      seed: req.seed + b,
+    });
     for (const r of part) {
       const s = sums.get(r.id) ?? { pTop3: 0, pFirst: 0 };
       s.pTop3 += r.pTop3;
@@ -46,5 +54,9 @@ export function runRobustnessBatches(
     }
     onBatch(b + 1, req.batches);
   }
-  return [...sums].map(([id, s]) => ({ id, pTop3: s.pTop3 / req.batches, pFirst: s.pFirst / req.batches }));
+  return [...sums].map(([id, s]) => ({
+    id,
+    pTop3: s.pTop3 / req.batches,
+    pFirst: s.pFirst / req.batches,
+  }));
 }

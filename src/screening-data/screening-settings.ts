@@ -30,7 +30,9 @@ export function screeningSettingsOf(project: ProjectRecord): ScreeningSettings {
 }
 
 /** The part of the screening settings stored in `settings.extra.screening` (the rest is top-level). */
-export function screeningBlockOf(s: ScreeningSettings): Omit<ScreeningSettings, 'gastricChlorideM' | 'microenvironmentPh' | 'temperatureK'> {
+export function screeningBlockOf(
+  s: ScreeningSettings,
+): Omit<ScreeningSettings, 'gastricChlorideM' | 'microenvironmentPh' | 'temperatureK'> {
   const { gastricChlorideM: _g, microenvironmentPh: _m, temperatureK: _t, ...rest } = s;
   return rest;
 }

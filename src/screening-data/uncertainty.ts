@@ -5,10 +5,15 @@ import type { RobustnessShared, ScreenRow } from '@/chem';
  * draw perturbs them (rank-robustness.ts): pH_max moves by Δ(pKa) + Δ(log S₀) − Δ(log s_salt) for a
  * base; when K_sp is anchored on S₀ the S₀ term cancels.
  */
-export function uncertaintiesOf(row: ScreenRow, shared: RobustnessShared): { saltLogSigma: number; freeLogSigma: number; phMaxSigma: number } {
+export function uncertaintiesOf(
+  row: ScreenRow,
+  shared: RobustnessShared,
+): { saltLogSigma: number; freeLogSigma: number; phMaxSigma: number } {
   const r = row.robustness;
   const s0 = shared.log10IntrinsicSigma;
   const saltLogSigma = Math.sqrt(r.saltLog10Sigma ** 2 + (r.saltAnchoredOnIntrinsic ? s0 ** 2 : 0));
-  const phMaxSigma = Math.sqrt(shared.drugPkaSigma ** 2 + r.saltLog10Sigma ** 2 + (r.saltAnchoredOnIntrinsic ? 0 : s0 ** 2));
+  const phMaxSigma = Math.sqrt(
+    shared.drugPkaSigma ** 2 + r.saltLog10Sigma ** 2 + (r.saltAnchoredOnIntrinsic ? 0 : s0 ** 2),
+  );
   return { saltLogSigma, freeLogSigma: s0, phMaxSigma };
 }

@@ -45,23 +45,42 @@ export function useRobustness(
       return;
     }
     const runId = ++runRef.current;
-    const req: RobustnessRequest = { runId, rows, weights, shared, iterations: ROBUSTNESS_ITERATIONS, seed: ROBUSTNESS_SEED, batches: BATCHES };
-    setState((s) => (s.status === 'running' && s.progress === 0 ? s : { ...s, status: 'running', progress: 0 }));
+    const req: RobustnessRequest = {
+      runId,
+      rows,
+      weights,
+      shared,
+      iterations: ROBUSTNESS_ITERATIONS,
+      seed: ROBUSTNESS_SEED,
+      batches: BATCHES,
+    };
+    setState((s) =>
+      s.status === 'running' && s.progress === 0 ? s : { ...s, status: 'running', progress: 0 },
+    );
     let cancelled = false;
     const timer = setTimeout(() => {
       if (typeof Worker !== 'undefined') {
         if (!workerRef.current) {
-          workerRef.current = new Worker(new URL('./robustness.worker.ts', import.meta.url), { type: 'module' });
+          workerRef.current = new Worker(new URL('./robustness.worker.ts', import.meta.url), {
+            type: 'module',
+          });
         }
         const worker = workerRef.current;
         worker.onmessage = (e: MessageEvent<RobustnessMessage>) => {
           const m = e.data;
           if (m.runId !== runRef.current) return;
-          if (m.type === 'progress') setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
-          else if (m.type === 'result') setState({ status: 'done', progress: 1, results: m.results, iterations: m.iterations });
+          if (m.type === 'progress')
+            setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
+          else if (m.type === 'result')
+            setState({ status: 'done', progress: 1, results: m.results, iterations: m.iterations });
           else setState({ status: 'error', progress: 0, error: m.message });
         };
-        worker.onerror = (e) => setState({ status: 'error', progress: 0, error: e.message || 'The robustness worker failed' });
+        worker.onerror = (e) =>
+          setState({
+            status: 'error',
+            progress: 0,
+            error: e.message || 'The robustness worker failed',
+          });
         worker.postMessage(req);
       } else {
         // No Worker: run the same batches on the main thread, one batch per task.
@@ -69,7 +88,12 @@ export function useRobustness(
           try {
             const results = runRobustnessBatches(req);
             if (!cancelled && runId === runRef.current) {
-              setState({ status: 'done', progress: 1, results, iterations: Math.round(req.iterations / BATCHES) * BATCHES });
+              setState({
+                status: 'done',
+                progress: 1,
+                results,
+                iterations: Math.round(req.iterations / BATCHES) * BATCHES,
+              });
             }
           } catch (err) {
             if (!cancelled) setState({ status: 'error', progress: 0, error: String(err) });

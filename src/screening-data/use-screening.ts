@@ -4,8 +4,17 @@ import { ChemInputError } from '@/chem';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { measurementsRepo } from '@/persistence/measurements-repo';
-import type { CandidateRecord, CustomIonRecord, MeasurementRecord, ProjectRecord } from '@/persistence/records';
-import { computeProjectScreening, screeningInputsKey, type ProjectScreening } from './compute-screening';
+import type {
+  CandidateRecord,
+  CustomIonRecord,
+  MeasurementRecord,
+  ProjectRecord,
+} from '@/persistence/records';
+import {
+  computeProjectScreening,
+  screeningInputsKey,
+  type ProjectScreening,
+} from './compute-screening';
 
 /** Names of the compound's fields as the Compound area labels them. */
 const FIELD_LABELS: Record<string, string> = {
@@ -92,6 +101,11 @@ export function useProjectScreening(project: ProjectRecord | undefined): Screeni
   measurements?: MeasurementRecord[];
 } {
   const records = useProjectRecords(project?.id);
-  const state = useScreening(project, records?.candidates, records?.measurements, records?.customIons);
+  const state = useScreening(
+    project,
+    records?.candidates,
+    records?.measurements,
+    records?.customIons,
+  );
   return { ...state, candidates: records?.candidates, measurements: records?.measurements };
 }

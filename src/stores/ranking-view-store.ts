@@ -33,7 +33,11 @@ export const useRankingViewStore = create<RankingViewState>()((set) => ({
   chartIds: null,
   focusCandidateId: null,
   sortBy: (key) =>
-    set((s) => (s.sortKey === key ? { sortDir: s.sortDir === 'asc' ? 'desc' : 'asc' } : { sortKey: key, sortDir: 'asc' })),
+    set((s) =>
+      s.sortKey === key
+        ? { sortDir: s.sortDir === 'asc' ? 'desc' : 'asc' }
+        : { sortKey: key, sortDir: 'asc' },
+    ),
   toggleChart: (id, currentTop) =>
     set((s) => {
       const now = s.chartIds ?? currentTop;

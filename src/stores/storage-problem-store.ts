@@ -2,7 +2,11 @@ import { create } from 'zustand';
 import { classifyStorageError, type StorageProblem } from '@/persistence/storage-status';
 
 /** Problems after which this tab cannot save until it is reloaded. */
-const CONNECTION_PROBLEMS: ReadonlySet<StorageProblem['kind']> = new Set(['closed', 'blocked', 'unavailable']);
+const CONNECTION_PROBLEMS: ReadonlySet<StorageProblem['kind']> = new Set([
+  'closed',
+  'blocked',
+  'unavailable',
+]);
 
 interface StorageProblemState {
   /** The latest storage failure not yet dismissed, or null. */

@@ -15,7 +15,14 @@ describe('workbench shell', () => {
     render(<App />);
     expect(await screen.findByText(/Demorazine is fictional/)).toBeInTheDocument();
     const nav = screen.getByRole('navigation', { name: 'Workbench areas' });
-    for (const label of ['Compound', 'Counter-ions', 'Ranking', 'Bench data', 'Model check', 'Projects']) {
+    for (const label of [
+      'Compound',
+      'Counter-ions',
+      'Ranking',
+      'Bench data',
+      'Model check',
+      'Projects',
+    ]) {
       expect(within(nav).getByRole('link', { name: label })).toBeInTheDocument();
     }
     const table = screen.getByRole('table');
@@ -50,6 +57,8 @@ describe('workbench shell', () => {
     const user = userEvent.setup();
     render(<App />);
     await user.click(screen.getByRole('button', { name: 'Cautions' }));
-    expect(screen.getByText(/do not establish a salt form/, { selector: 'li' })).toBeInTheDocument();
+    expect(
+      screen.getByText(/do not establish a salt form/, { selector: 'li' }),
+    ).toBeInTheDocument();
   });
 });

@@ -52,7 +52,8 @@ describe('architecture rule (dependency-cruiser)', () => {
   it('flags one feature importing another, but lets every feature read the shared screening data', () => {
     const shared = cruise({
       'src/screening-data/data.ts': 'export const d = 1;\n',
-      'src/features/alpha/a.ts': "import { d } from '../../screening-data/data';\nexport const a = d;\n",
+      'src/features/alpha/a.ts':
+        "import { d } from '../../screening-data/data';\nexport const a = d;\n",
     });
     expect(shared.failed).toBe(false);
     const crossed = cruise({
@@ -66,7 +67,8 @@ describe('architecture rule (dependency-cruiser)', () => {
   it('flags the shared screening layer importing a feature', () => {
     const upward = cruise({
       'src/features/alpha/a.ts': 'export const a = 1;\n',
-      'src/screening-data/data.ts': "import { a } from '../features/alpha/a';\nexport const d = a;\n",
+      'src/screening-data/data.ts':
+        "import { a } from '../features/alpha/a';\nexport const d = a;\n",
     });
     expect(upward.failed).toBe(true);
     expect(upward.output).toMatch(/screening-data-below-features/);
@@ -79,7 +81,8 @@ describe('architecture rule (dependency-cruiser)', () => {
     };
     const throughIndex = cruise({
       ...core,
-      'src/features/alpha/a.ts': "import { massGPerMol } from '@/chem';\nexport const a = massGPerMol;\n",
+      'src/features/alpha/a.ts':
+        "import { massGPerMol } from '@/chem';\nexport const a = massGPerMol;\n",
     });
     expect(throughIndex.failed).toBe(false);
     const deep = cruise({
@@ -91,7 +94,8 @@ describe('architecture rule (dependency-cruiser)', () => {
     expect(deep.output).toMatch(/core-through-index/);
     const relative = cruise({
       ...core,
-      'src/persistence/p.ts': "import { massGPerMol } from '../chem/compound/mass';\nexport const p = massGPerMol;\n",
+      'src/persistence/p.ts':
+        "import { massGPerMol } from '../chem/compound/mass';\nexport const p = massGPerMol;\n",
     });
     expect(relative.failed).toBe(true);
     expect(relative.output).toMatch(/core-through-index/);

@@ -10,7 +10,8 @@ import { describe, expect, it } from 'vitest';
  */
 const ROOT = join(import.meta.dirname, '..', '..');
 const KEBAB = /^[a-z0-9]+(-[a-z0-9]+)*$/;
-const FILE = /^[a-z0-9]+(-[a-z0-9]+)*(\.[a-z0-9]+(-[a-z0-9]+)*)*\.(ts|tsx|mts|mjs|cjs|js|css|json|csv|md|html|txt|svg|png|webmanifest)$/;
+const FILE =
+  /^[a-z0-9]+(-[a-z0-9]+)*(\.[a-z0-9]+(-[a-z0-9]+)*)*\.(ts|tsx|mts|mjs|cjs|js|css|json|csv|md|html|txt|svg|png|webmanifest)$/;
 const COMPONENT = /^[A-Z][A-Za-z0-9]*\.tsx$/;
 
 export function nameProblems(paths: readonly string[]): string[] {
@@ -18,9 +19,11 @@ export function nameProblems(paths: readonly string[]): string[] {
   for (const p of paths) {
     const parts = p.split('/');
     const file = parts.pop()!;
-    for (const dir of parts) if (!KEBAB.test(dir)) problems.push(`${p}: folder '${dir}' is not kebab-case`);
+    for (const dir of parts)
+      if (!KEBAB.test(dir)) problems.push(`${p}: folder '${dir}' is not kebab-case`);
     if (file.startsWith('.')) continue; // dotfiles (.gitignore) configure tools, not code
-    if (!(FILE.test(file) || COMPONENT.test(file) || file === 'README.md')) problems.push(`${p}: '${file}' is neither kebab-case nor a PascalCase component`);
+    if (!(FILE.test(file) || COMPONENT.test(file) || file === 'README.md'))
+      problems.push(`${p}: '${file}' is neither kebab-case nor a PascalCase component`);
   }
   return problems;
 }
@@ -34,7 +37,9 @@ function walk(dir: string): string[] {
 
 describe('file names follow one convention', () => {
   it('every file under src/, tests/, fixtures/ and public/', () => {
-    const files = ['src', 'tests', 'fixtures', 'public'].flatMap((d) => walk(join(ROOT, d))).map((p) => p.split('\\').join('/'));
+    const files = ['src', 'tests', 'fixtures', 'public']
+      .flatMap((d) => walk(join(ROOT, d)))
+      .map((p) => p.split('\\').join('/'));
     expect(files.length).toBeGreaterThan(100);
     expect(nameProblems(files)).toEqual([]);
   });
@@ -43,6 +48,11 @@ describe('file names follow one convention', () => {
     expect(nameProblems(['src/chem/screening/saltSolubility.ts'])).toHaveLength(1);
     expect(nameProblems(['src/features/bench_data/x.ts'])).toHaveLength(1);
     expect(nameProblems(['src/features/bench/components/measurementForm.tsx'])).toHaveLength(1);
-    expect(nameProblems(['src/features/bench/components/MeasurementForm.tsx', 'src/chem/screening/screen/screen.types.ts'])).toEqual([]);
+    expect(
+      nameProblems([
+        'src/features/bench/components/MeasurementForm.tsx',
+        'src/chem/screening/screen/screen.types.ts',
+      ]),
+    ).toEqual([]);
   });
 });

@@ -34,14 +34,16 @@ export function entryScripts(html) {
  * between `import` and the string and is not matched.
  */
 export function staticImports(code) {
-  const re = /(?:^|[;}\s])(?:import|export)\s*(?:[\w$*{}\s,]*?\s*from\s*)?["'](\.{1,2}\/[^"']+)["']/g;
+  const re =
+    /(?:^|[;}\s])(?:import|export)\s*(?:[\w$*{}\s,]*?\s*from\s*)?["'](\.{1,2}\/[^"']+)["']/g;
   return [...code.matchAll(re)].map((m) => m[1]);
 }
 
 /** Walks the first screen's module graph in `distDir`; throws when a named file is missing. */
 export function measureFirstScreen(distDir) {
   const indexPath = join(distDir, 'index.html');
-  if (!existsSync(indexPath)) throw new Error(`${indexPath} not found: run the production build first`);
+  if (!existsSync(indexPath))
+    throw new Error(`${indexPath} not found: run the production build first`);
   const html = readFileSync(indexPath, 'utf8');
   const queue = entryScripts(html);
   if (queue.length === 0) throw new Error(`${indexPath} names no script`);
@@ -52,10 +54,12 @@ export function measureFirstScreen(distDir) {
     if (seen.has(url)) continue;
     seen.add(url);
     const path = join(distDir, url.replace(/^\//, ''));
-    if (!existsSync(path)) throw new Error(`${url} is loaded by the first screen but missing from ${distDir}`);
+    if (!existsSync(path))
+      throw new Error(`${url} is loaded by the first screen but missing from ${distDir}`);
     const buf = readFileSync(path);
     files.push({ file: url, rawBytes: buf.length, gzipBytes: gzipSync(buf, { level: 9 }).length });
-    for (const spec of staticImports(buf.toString('utf8'))) queue.push(posix.join(posix.dirname(url), spec));
+    for (const spec of staticImports(buf.toString('utf8')))
+      queue.push(posix.join(posix.dirname(url), spec));
   }
   const gzipBytes = files.reduce((a, f) => a + f.gzipBytes, 0);
   const rawBytes = files.reduce((a, f) => a + f.rawBytes, 0);
@@ -70,7 +74,8 @@ function parseArgs(argv) {
     const a = argv[i];
     if (a === '--budget-kib') {
       budgetKiB = Number(argv[++i]);
-      if (!Number.isFinite(budgetKiB) || budgetKiB <= 0) throw new Error('--budget-kib needs a positive number');
+      if (!Number.isFinite(budgetKiB) || budgetKiB <= 0)
+        throw new Error('--budget-kib needs a positive number');
     } else if (a === '--json') json = true;
     else if (a.startsWith('--')) throw new Error(`unknown option ${a}`);
     else distDir = a;
@@ -95,11 +100,16 @@ export function main(argv) {
     firstScreenRawKiB: kib(m.rawBytes),
     budgetGzipKiB: args.budgetKiB,
     withinBudget: !over,
-    files: m.files.map((f) => ({ file: f.file, rawKiB: kib(f.rawBytes), gzipKiB: kib(f.gzipBytes) })),
+    files: m.files.map((f) => ({
+      file: f.file,
+      rawKiB: kib(f.rawBytes),
+      gzipKiB: kib(f.gzipBytes),
+    })),
   };
   if (args.json) console.log(JSON.stringify(summary, null, 2));
   else {
-    for (const f of summary.files) console.log(`  ${f.file}  ${f.gzipKiB} KiB gzipped (${f.rawKiB} KiB raw)`);
+    for (const f of summary.files)
+      console.log(`  ${f.file}  ${f.gzipKiB} KiB gzipped (${f.rawKiB} KiB raw)`);
     console.log(
       `first screen JavaScript: ${summary.firstScreenGzipKiB} KiB gzipped, budget ${args.budgetKiB} KiB: ` +
         (over ? 'OVER BUDGET' : 'within budget'),

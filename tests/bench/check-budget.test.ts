@@ -37,7 +37,8 @@ function fakeDist(files: Record<string, string>, html?: string): string {
   mkdirSync(join(dir, 'assets'));
   writeFileSync(
     join(dir, 'index.html'),
-    html ?? '<!doctype html><html><head><script type="module" crossorigin src="/assets/entry.js"></script></head></html>',
+    html ??
+      '<!doctype html><html><head><script type="module" crossorigin src="/assets/entry.js"></script></head></html>',
   );
   for (const [name, text] of Object.entries(files)) writeFileSync(join(dir, 'assets', name), text);
   return dir;
@@ -45,7 +46,9 @@ function fakeDist(files: Record<string, string>, html?: string): string {
 
 function check(dir: string, ...args: string[]) {
   const r = spawnSync(process.execPath, [SCRIPT, dir, '--json', ...args], { encoding: 'utf8' });
-  const summary = r.stdout ? (JSON.parse(r.stdout) as { firstScreenGzipKiB: number; files: { file: string }[] }) : null;
+  const summary = r.stdout
+    ? (JSON.parse(r.stdout) as { firstScreenGzipKiB: number; files: { file: string }[] })
+    : null;
   return { status: r.status, summary, stderr: r.stderr };
 }
 
@@ -101,7 +104,10 @@ describe('first-screen budget check', () => {
   it('counts modulepreload links in index.html and honours --budget-kib', () => {
     const html =
       '<script type="module" src="/assets/entry.js"></script><link rel="modulepreload" crossorigin href="/assets/pre.js">';
-    const dir = fakeDist({ 'entry.js': 'export{};', 'pre.js': `export const p="${noise(60, 9)}";` }, html);
+    const dir = fakeDist(
+      { 'entry.js': 'export{};', 'pre.js': `export const p="${noise(60, 9)}";` },
+      html,
+    );
     expect(check(dir).status).toBe(0);
     const tight = check(dir, '--budget-kib', '20');
     expect(tight.summary!.files.map((f) => f.file)).toContain('/assets/pre.js');

@@ -41,7 +41,8 @@ export interface Stat {
   cpuMedianMs: number;
 }
 
-const quantile = (sorted: number[], f: number) => sorted[Math.min(sorted.length - 1, Math.floor(f * sorted.length))]!;
+const quantile = (sorted: number[], f: number) =>
+  sorted[Math.min(sorted.length - 1, Math.floor(f * sorted.length))]!;
 
 /** Time `f` `runs` times after `warm` warm-up calls; milliseconds per call. */
 export function timeIt(runs: number, f: () => unknown, warm = 3): Stat {
@@ -61,7 +62,13 @@ export function timeIt(runs: number, f: () => unknown, warm = 3): Stat {
   cpu.sort((a, b) => a - b);
   if (sink < 0) console.log(sink); // keeps the calls observable
   const r = (x: number) => Number(x.toFixed(4));
-  return { runs, medianMs: r(quantile(ms, 0.5)), p95Ms: r(quantile(ms, 0.95)), minMs: r(ms[0]!), cpuMedianMs: r(quantile(cpu, 0.5)) };
+  return {
+    runs,
+    medianMs: r(quantile(ms, 0.5)),
+    p95Ms: r(quantile(ms, 0.95)),
+    minMs: r(ms[0]!),
+    cpuMedianMs: r(quantile(cpu, 0.5)),
+  };
 }
 
 /** Per-salt figures: one timed run is a loop over all salts; reported per salt in microseconds. */
@@ -72,13 +79,25 @@ function perSalt(label: string, salts: number, runs: number, loop: () => unknown
 }
 
 // ---- core models per salt -------------------------------------------------------------------------
-const pairs = LATTICE_REFERENCE_SALTS.map((s) => ({ s, cation: getThermoIon(s.cation), anion: getThermoIon(s.anion) })).filter(
-  (x): x is { s: (typeof LATTICE_REFERENCE_SALTS)[number]; cation: ThermoIon; anion: ThermoIon } => !!x.cation && !!x.anion,
+const pairs = LATTICE_REFERENCE_SALTS.map((s) => ({
+  s,
+  cation: getThermoIon(s.cation),
+  anion: getThermoIon(s.anion),
+})).filter(
+  (x): x is { s: (typeof LATTICE_REFERENCE_SALTS)[number]; cation: ThermoIon; anion: ThermoIon } =>
+    !!x.cation && !!x.anion,
 );
 const withRadii = pairs.filter((x) => x.cation.radiusA && x.anion.radiusA);
 const models = [
   perSalt('estimateSaltThermo (auto method, calibrated, Hess cycle)', pairs.length, 50, () =>
-    pairs.map((x) => estimateSaltThermo({ cation: x.cation, anion: x.anion, cationsPerFormula: x.s.p, anionsPerFormula: x.s.q })),
+    pairs.map((x) =>
+      estimateSaltThermo({
+        cation: x.cation,
+        anion: x.anion,
+        cationsPerFormula: x.s.p,
+        anionsPerFormula: x.s.q,
+      }),
+    ),
   ),
   perSalt('kapustinskiiLatticeEnergyKJ', withRadii.length, 200, () =>
     withRadii.map((x) =>
@@ -100,8 +119,14 @@ const di = drugIon(DEMO_COMPOUND);
 const thermo = { formula: di.formula, charge: di.charge, rings: { aromatic: 2, nonAromatic: 1 } };
 const library = () => candidatesFromLibrary(COUNTER_IONS, { kind: 'base', ionCharge: 1, thermo });
 const cands = library();
-const screenOnly = () => screenCompound({ compound: DEMO_COMPOUND, drugIon: di, candidates: cands });
-const full = () => screenCompound({ compound: DEMO_COMPOUND, drugIon: drugIon(DEMO_COMPOUND), candidates: library() });
+const screenOnly = () =>
+  screenCompound({ compound: DEMO_COMPOUND, drugIon: di, candidates: cands });
+const full = () =>
+  screenCompound({
+    compound: DEMO_COMPOUND,
+    drugIon: drugIon(DEMO_COMPOUND),
+    candidates: library(),
+  });
 const screened = screenOnly().rows.length;
 const fullScreen = {
   compound: 'fictional demo compound (formula only)',
@@ -154,7 +179,8 @@ const baselineStat = timeIt(200, () => {
 });
 const baseline = {
   salts: n,
-  equations: 'Kapustinskii U_L, Born ΔH_hyd (cation + anion), pH_max = pKa + log10(S0/√Ksp), D0 = dose/250 mL/S',
+  equations:
+    'Kapustinskii U_L, Born ΔH_hyd (cation + anion), pH_max = pKa + log10(S0/√Ksp), D0 = dose/250 mL/S',
   medianMsPerLoop: Number((baselineStat.medianMs / REPS).toFixed(6)),
   p95MsPerLoop: Number((baselineStat.p95Ms / REPS).toFixed(6)),
 };
@@ -162,7 +188,9 @@ const baseline = {
 const coreClosedForm = timeIt(200, () => {
   let s = 0;
   for (let i = 0; i < n; i++) {
-    s += saltLimitedBaseSolubilityM(ksp[i]!, pKa[i]!, 5) + doseNumber(doseMg, Math.sqrt(ksp[i]!) * molarMass);
+    s +=
+      saltLimitedBaseSolubilityM(ksp[i]!, pKa[i]!, 5) +
+      doseNumber(doseMg, Math.sqrt(ksp[i]!) * molarMass);
   }
   return s;
 });
@@ -173,14 +201,20 @@ const result = {
   models,
   fullScreen,
   baseline,
-  coreClosedFormLoop: { salts: n, ...coreClosedForm, note: 'saltLimitedBaseSolubilityM + doseNumber over the same salts' },
+  coreClosedFormLoop: {
+    salts: n,
+    ...coreClosedForm,
+    note: 'saltLimitedBaseSolubilityM + doseNumber over the same salts',
+  },
   screenOverBaseline: Number((fullScreen.total.medianMs / baseline.medianMsPerLoop).toFixed(0)),
-  screenOverBaselineNote: 'median full screen ÷ median bare closed-form loop over the same number of salts',
+  screenOverBaselineNote:
+    'median full screen ÷ median bare closed-form loop over the same number of salts',
   runNote:
     'run through tsx, whose esbuild transform keeps function names (a __name() call per closure created): ' +
     'closure-heavy code such as the salt-equilibrium solver measures ~30 % slower here than in the compiled CLI',
 };
 
 const jsonAt = process.argv.indexOf('--json');
-if (jsonAt > 0 && process.argv[jsonAt + 1]) writeFileSync(process.argv[jsonAt + 1]!, JSON.stringify(result, null, 2));
+if (jsonAt > 0 && process.argv[jsonAt + 1])
+  writeFileSync(process.argv[jsonAt + 1]!, JSON.stringify(result, null, 2));
 console.log(JSON.stringify(result, null, 2));

@@ -13,7 +13,11 @@ import { COUNTER_IONS, rankCandidates, screeningWeightsSchema, CRITERIA } from '
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { displayRows, sortRows } from '@/features/ranking/ranking-rows';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
-import { projectSettingsSchema, type CandidateRecord, type ProjectRecord } from '@/persistence/records';
+import {
+  projectSettingsSchema,
+  type CandidateRecord,
+  type ProjectRecord,
+} from '@/persistence/records';
 
 const N = 60;
 const anions = COUNTER_IONS.filter((i) => i.kind === 'anion');
@@ -48,7 +52,12 @@ const project: ProjectRecord = {
 };
 
 const t0 = performance.now();
-const data = await computeProjectScreening({ project, candidates, measurements: [], customIons: [] });
+const data = await computeProjectScreening({
+  project,
+  candidates,
+  measurements: [],
+  customIons: [],
+});
 const screenMs = performance.now() - t0;
 const ok = data.screen.rows.filter((r) => !r.error).length;
 
@@ -73,7 +82,12 @@ console.log(
       candidates: candidates.length,
       screened: ok,
       screenOnceMs: Number(screenMs.toFixed(1)),
-      rerank: { iterations: times.length, medianMs: Number(q(0.5).toFixed(3)), p95Ms: Number(q(0.95).toFixed(3)), maxMs: Number(q(1 - 1e-9).toFixed(3)) },
+      rerank: {
+        iterations: times.length,
+        medianMs: Number(q(0.5).toFixed(3)),
+        p95Ms: Number(q(0.95).toFixed(3)),
+        maxMs: Number(q(1 - 1e-9).toFixed(3)),
+      },
       frameBudgetMs: 16.7,
       checksum,
       node: process.version,

@@ -31,7 +31,10 @@ const opt = (name, fallback) => {
 };
 const outPath = resolve(opt('--out', 'tests/bench/out/summary.json'));
 const skip = new Set(opt('--skip', '').split(',').filter(Boolean));
-const batchSizes = opt('--batch-sizes', '1000,10000').split(',').map(Number).filter((n) => n > 0);
+const batchSizes = opt('--batch-sizes', '1000,10000')
+  .split(',')
+  .map(Number)
+  .filter((n) => n > 0);
 const batchMaxS = Number(opt('--batch-max-s', '300'));
 const work = mkdtempSync(join(tmpdir(), 'saltsmith-bench-'));
 
@@ -39,7 +42,13 @@ const q = (sorted, f) => sorted[Math.min(sorted.length - 1, Math.floor(f * sorte
 const stats = (ms) => {
   const s = [...ms].sort((a, b) => a - b);
   const r = (x) => +x.toFixed(1);
-  return { runs: s.length, medianMs: r(q(s, 0.5)), p95Ms: r(q(s, 0.95)), minMs: r(s[0]), maxMs: r(s.at(-1)) };
+  return {
+    runs: s.length,
+    medianMs: r(q(s, 0.5)),
+    p95Ms: r(q(s, 0.95)),
+    minMs: r(s[0]),
+    maxMs: r(s.at(-1)),
+  };
 };
 const log = (m) => process.stderr.write(`bench: ${m}\n`);
 
@@ -60,11 +69,23 @@ const summary = {
 if (!skip.has('core')) {
   log('core models, full screen and closed-form baseline (tsx)…');
   const json = join(work, 'core.json');
-  const r = spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', '--tsconfig', 'tsconfig.json', 'tests/bench/core.bench.ts', '--json', json], {
-    encoding: 'utf8',
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  if (r.status !== 0 || !existsSync(json)) throw new Error(`core benchmark failed (exit ${r.status})`);
+  const r = spawnSync(
+    process.execPath,
+    [
+      'node_modules/tsx/dist/cli.mjs',
+      '--tsconfig',
+      'tsconfig.json',
+      'tests/bench/core.bench.ts',
+      '--json',
+      json,
+    ],
+    {
+      encoding: 'utf8',
+      stdio: ['ignore', 'ignore', 'inherit'],
+    },
+  );
+  if (r.status !== 0 || !existsSync(json))
+    throw new Error(`core benchmark failed (exit ${r.status})`);
   summary.results.core = JSON.parse(readFileSync(json, 'utf8'));
 } else summary.skipped.core = 'skipped by --skip';
 
@@ -76,14 +97,19 @@ function wallMs(cmd, argv, runs, warm = 2) {
     const t0 = process.hrtime.bigint();
     const r = spawnSync(cmd, argv, { stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
     const t = Number(process.hrtime.bigint() - t0) / 1e6;
-    if (r.status !== 0) throw new Error(`${[cmd, ...argv].join(' ')} exited ${r.status}: ${r.stderr}`);
+    if (r.status !== 0)
+      throw new Error(`${[cmd, ...argv].join(' ')} exited ${r.status}: ${r.stderr}`);
     if (i >= warm) ms.push(t);
   }
   return stats(ms);
 }
 if (!skip.has('cli')) {
   log('CLI start…');
-  const lattice = wallMs(process.execPath, [CLI, 'lattice', '--cation', 'Na+', '--anion', 'Cl-'], 12);
+  const lattice = wallMs(
+    process.execPath,
+    [CLI, 'lattice', '--cation', 'Na+', '--anion', 'Cl-'],
+    12,
+  );
   const bareNode = wallMs(process.execPath, ['-e', '0'], 12);
   summary.results.cliStart = {
     command: 'saltsmith lattice --cation Na+ --anion Cl-',
@@ -108,7 +134,9 @@ function fictionalCompounds(n) {
     const s0 = i % 3 === 0 ? '' : (0.001 * (1 + (i % 50))).toFixed(3);
     const mp = s0 ? '' : String(120 + (i % 90));
     const logp = s0 ? '' : (1 + (i % 30) / 10).toFixed(1);
-    lines.push(`FB-${i},Batch compound ${i} (fictional),,C${c}H${h}N${nN}O${o},${acid ? 'acid' : 'base'},${pka},,${s0},${mp},${logp},${10 + (i % 40) * 10},`);
+    lines.push(
+      `FB-${i},Batch compound ${i} (fictional),,C${c}H${h}N${nN}O${o},${acid ? 'acid' : 'base'},${pka},,${s0},${mp},${logp},${10 + (i % 40) * 10},`,
+    );
   }
   return lines.join('\n') + '\n';
 }
@@ -131,8 +159,16 @@ function runTimed(argv) {
     child.on('error', fail);
     child.on('close', (code) => {
       const ms = Number(process.hrtime.bigint() - t0) / 1e6;
-      const peakKB = gnuTime && existsSync(memFile) ? Number(readFileSync(memFile, 'utf8').trim().split('\n').at(-1)) : null;
-      done({ code, ms, peakMB: peakKB ? +(peakKB / 1024).toFixed(0) : null, stderr: err.slice(-2000) });
+      const peakKB =
+        gnuTime && existsSync(memFile)
+          ? Number(readFileSync(memFile, 'utf8').trim().split('\n').at(-1))
+          : null;
+      done({
+        code,
+        ms,
+        peakMB: peakKB ? +(peakKB / 1024).toFixed(0) : null,
+        stderr: err.slice(-2000),
+      });
     });
   });
 }
@@ -154,7 +190,16 @@ if (!skip.has('batch')) {
       const file = join(work, `compounds-${n}.csv`);
       writeFileSync(file, fictionalCompounds(n));
       const out = join(work, `batch-${n}.csv`);
-      const r = await runTimed([CLI, 'screen', '--batch', file, '--out', out, '--errors', join(work, `errors-${n}.txt`)]);
+      const r = await runTimed([
+        CLI,
+        'screen',
+        '--batch',
+        file,
+        '--out',
+        out,
+        '--errors',
+        join(work, `errors-${n}.txt`),
+      ]);
       if (r.code === 0) rate = (n * 1000) / r.ms;
       summary.results.batch.push({
         compounds: n,
@@ -182,7 +227,11 @@ if (!skip.has('browser')) {
   if (r.status === 0 && existsSync(json)) {
     summary.results.rerankBrowser = JSON.parse(readFileSync(json, 'utf8'));
     const m = measureFirstScreen(distDir);
-    summary.results.firstScreen = { gzipKiB: +(m.gzipBytes / 1024).toFixed(1), rawKiB: +(m.rawBytes / 1024).toFixed(1), budgetGzipKiB: 250 };
+    summary.results.firstScreen = {
+      gzipKiB: +(m.gzipBytes / 1024).toFixed(1),
+      rawKiB: +(m.rawBytes / 1024).toFixed(1),
+      budgetGzipKiB: 250,
+    };
   } else {
     summary.skipped.rerankBrowser = `tests/bench/rerank-browser.mjs exited ${r.status} (Chromium missing or the page failed; see its output)`;
   }

@@ -29,7 +29,9 @@ function time<T>(label: string, runs: number, f: () => T): T {
   }
   ms.sort((a, b) => a - b);
   const med = ms[Math.floor(ms.length / 2)]!;
-  console.log(`${label.padEnd(58)} median ${med.toFixed(2)} ms  (min ${ms[0]!.toFixed(2)}, max ${ms.at(-1)!.toFixed(2)}, n=${runs})`);
+  console.log(
+    `${label.padEnd(58)} median ${med.toFixed(2)} ms  (min ${ms[0]!.toFixed(2)}, max ${ms.at(-1)!.toFixed(2)}, n=${runs})`,
+  );
   return out;
 }
 
@@ -50,7 +52,14 @@ for (let i = 0; rows60.length < 60; i++) {
   rows60.push({ ...r, id: `${r.id}#${i}`, robustness: { ...r.robustness, id: `${r.id}#${i}` } });
 }
 const w = defaultScreeningSettings().weights;
-time('rankCandidates, 60 candidates (one weight-slider move)', 200, () => rankCandidates(rows60, { ...w, massCost: Math.random() }));
+time('rankCandidates, 60 candidates (one weight-slider move)', 200, () =>
+  rankCandidates(rows60, { ...w, massCost: Math.random() }),
+);
 time('rankRobustness, 60 candidates × 1000 iterations', 10, () =>
-  rankRobustness(rows60.map((r) => r.robustness), w, res.robustnessShared, { iterations: 1000, seed: 1 }),
+  rankRobustness(
+    rows60.map((r) => r.robustness),
+    w,
+    res.robustnessShared,
+    { iterations: 1000, seed: 1 },
+  ),
 );

@@ -9,11 +9,16 @@ import { describe, expect, it, vi } from 'vitest';
 const state = vi.hoisted(() => ({ full: false }));
 vi.mock('node:fs/promises', async (importOriginal) => {
   const real = await importOriginal<typeof FsPromises>();
-  const enospc = () => Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC' });
+  const enospc = () =>
+    Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC' });
   const half = (data: unknown) => String(data).slice(0, Math.floor(String(data).length / 2));
   const mocked = {
     ...real,
-    writeFile: async (path: Parameters<typeof real.writeFile>[0], data: unknown, opts?: unknown) => {
+    writeFile: async (
+      path: Parameters<typeof real.writeFile>[0],
+      data: unknown,
+      opts?: unknown,
+    ) => {
       if (!state.full) return real.writeFile(path, data as string, opts as never);
       await real.writeFile(path, half(data));
       throw enospc();
@@ -47,7 +52,21 @@ describe('--out on a full disk (issue 13)', () => {
     writeFileSync(out, 'previous good file\n');
     state.full = true;
     try {
-      const r = await runCli(['screen', '--formula', 'C17H20N2O2', '--pka', '8', '--s0', '0.02', '--iterations', '20', '--ions', 'chloride', '--out', out]);
+      const r = await runCli([
+        'screen',
+        '--formula',
+        'C17H20N2O2',
+        '--pka',
+        '8',
+        '--s0',
+        '0.02',
+        '--iterations',
+        '20',
+        '--ions',
+        'chloride',
+        '--out',
+        out,
+      ]);
       expect(r.code).not.toBe(0);
       expect(r.err).toMatch(/ENOSPC/);
     } finally {

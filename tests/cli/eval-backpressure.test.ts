@@ -16,7 +16,8 @@ describe('eval with a slow reader (issue 13)', () => {
       },
     });
     const stderr = new PassThrough();
-    const line = '{"kind":"ph-solubility","drug":{"kind":"base","pKas":[8],"log10IntrinsicM":-5},"phStep":1}\n';
+    const line =
+      '{"kind":"ph-solubility","drug":{"kind":"base","pKas":[8],"log10IntrinsicM":-5},"phStep":1}\n';
     const total = 2000;
     for (let i = 0; i < total; i++) stdin.write(line);
     stdin.end();

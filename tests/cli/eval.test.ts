@@ -12,7 +12,17 @@ async function run(argv: string[], input: string) {
   const c = captureIo(input);
   const code = await main(argv, c.io);
   const out = c.out();
-  return { code, lines: out.trim() === '' ? [] : out.trim().split('\n').map((l) => JSON.parse(l) as EvalLine), err: c.err() };
+  return {
+    code,
+    lines:
+      out.trim() === ''
+        ? []
+        : out
+            .trim()
+            .split('\n')
+            .map((l) => JSON.parse(l) as EvalLine),
+    err: c.err(),
+  };
 }
 
 describe('saltsmith eval', () => {
@@ -29,14 +39,21 @@ describe('saltsmith eval', () => {
     const nacl = lines[0]!;
     expect(nacl.ok).toBe(true);
     expect(nacl.signConvention).toMatch(/dissociation/);
-    for (const k of ['latticeEnthalpyKJ', 'cationHydrationKJ', 'anionHydrationKJ', 'solutionEnthalpyKJ']) {
+    for (const k of [
+      'latticeEnthalpyKJ',
+      'cationHydrationKJ',
+      'anionHydrationKJ',
+      'solutionEnthalpyKJ',
+    ]) {
       expect(typeof nacl[k].value).toBe('number');
       expect(nacl[k].uncertainty).toBeGreaterThan(0);
       expect(nacl[k].sources.length).toBeGreaterThan(0);
       expect(typeof nacl[k].method).toBe('string');
     }
     // NaCl: Born–Haber 787 kJ/mol (Wagman 1982 ΔfH° + CRC IE/EA) within the stated 2σ.
-    expect(Math.abs(nacl.latticeEnthalpyKJ.value - 787)).toBeLessThan(2 * nacl.latticeEnthalpyKJ.uncertainty);
+    expect(Math.abs(nacl.latticeEnthalpyKJ.value - 787)).toBeLessThan(
+      2 * nacl.latticeEnthalpyKJ.uncertainty,
+    );
     expect(lines[1]!.cationsPerFormula).toBe(2);
     // {"formula":"SO4","charge":-2} is the bundled sulfate, with Marcus's published hydration enthalpy
     expect(lines[1]!.anion.id).toBe('sulfate');

@@ -37,7 +37,13 @@ describe('saltsmith ions', () => {
     expect(mesylate.id).toBe('mesylate');
     expect(mesylate.pKas[0].source).toMatch(/from memory/);
     expect(Object.keys(mesylate.sources)).toEqual(
-      expect.arrayContaining(['formula', 'molarMassGPerMol', 'pKas', 'acceptabilityClass', 'tradeNote']),
+      expect.arrayContaining([
+        'formula',
+        'molarMassGPerMol',
+        'pKas',
+        'acceptabilityClass',
+        'tradeNote',
+      ]),
     );
   });
 

@@ -18,7 +18,16 @@ describe('saltsmith lattice', () => {
   });
 
   it('accepts ids, a method and --json; works out the 1:2 stoichiometry', async () => {
-    const { code, out } = await run(['lattice', '--cation', 'calcium', '--anion', 'chloride', '--method', 'kapustinskii', '--json']);
+    const { code, out } = await run([
+      'lattice',
+      '--cation',
+      'calcium',
+      '--anion',
+      'chloride',
+      '--method',
+      'kapustinskii',
+      '--json',
+    ]);
     expect(code).toBe(0);
     const j = JSON.parse(out);
     expect(j.anionsPerFormula).toBe(2);
@@ -29,7 +38,20 @@ describe('saltsmith lattice', () => {
 
   it('runs Born–Mayer with --structure and --volume (CaF₂)', async () => {
     // V_m = a³/4 with a = 5.463 Å (Wyckoff 1963); Born–Haber 2635 kJ/mol (Wagman 1982 ΔfH° + CRC IE/EA).
-    const { code, out } = await run(['lattice', '--cation', 'Ca2+', '--anion', 'F-', '--method', 'born-mayer', '--structure', 'fluorite', '--volume', String(5.463 ** 3 / 4 / 1000), '--json']);
+    const { code, out } = await run([
+      'lattice',
+      '--cation',
+      'Ca2+',
+      '--anion',
+      'F-',
+      '--method',
+      'born-mayer',
+      '--structure',
+      'fluorite',
+      '--volume',
+      String(5.463 ** 3 / 4 / 1000),
+      '--json',
+    ]);
     expect(code).toBe(0);
     const j = JSON.parse(out);
     expect(j.methodChosen).toBe('born-mayer');
@@ -38,7 +60,9 @@ describe('saltsmith lattice', () => {
 
   it('rejects unknown ions and methods with usage errors, and bad numbers with a field name', async () => {
     expect((await run(['lattice', '--cation', 'Qq+', '--anion', 'Cl-'])).code).toBe(2);
-    expect((await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--method', 'magic'])).code).toBe(2);
+    expect(
+      (await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--method', 'magic'])).code,
+    ).toBe(2);
     const bad = await run(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--density', 'heavy']);
     expect(bad.code).toBe(1);
     expect(bad.err).toMatch(/density/);

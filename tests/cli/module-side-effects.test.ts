@@ -20,7 +20,9 @@ describe('CLI modules have no import-time side effects', () => {
     vi.resetModules();
     const { main } = await import('@/cli/main');
     const { captureIo } = await import('./support/capture-io');
-    const c = captureIo('{"kind":"ph-solubility","drug":{"kind":"base","pKas":[8],"log10IntrinsicM":-5}}\n');
+    const c = captureIo(
+      '{"kind":"ph-solubility","drug":{"kind":"base","pKas":[8],"log10IntrinsicM":-5}}\n',
+    );
     expect(await main(['eval'], c.io)).toBe(0);
     expect(JSON.parse(c.out()).kind).toBe('ph-solubility');
   });

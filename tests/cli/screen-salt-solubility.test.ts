@@ -13,7 +13,18 @@ import { captureIo } from './support/capture-io';
 const dir = mkdtempSync(join(tmpdir(), 'saltsmith-sst-'));
 function input(extra: Record<string, unknown>): string {
   const p = join(dir, `in-${Math.random().toString(36).slice(2)}.json`);
-  writeFileSync(p, JSON.stringify({ name: 'test base', formula: 'C17H20N2O2', kind: 'base', pKas: [8], intrinsicSolubilityMgPerMl: 0.02, doseMg: 100, ...extra }));
+  writeFileSync(
+    p,
+    JSON.stringify({
+      name: 'test base',
+      formula: 'C17H20N2O2',
+      kind: 'base',
+      pKas: [8],
+      intrinsicSolubilityMgPerMl: 0.02,
+      doseMg: 100,
+      ...extra,
+    }),
+  );
   return p;
 }
 async function run(args: string[]) {
@@ -23,7 +34,11 @@ async function run(args: string[]) {
 }
 const csvRows = (text: string) =>
   Papa.parse<Record<string, string>>(
-    text.trim().split('\n').filter((l) => !l.startsWith('#')).join('\n'),
+    text
+      .trim()
+      .split('\n')
+      .filter((l) => !l.startsWith('#'))
+      .join('\n'),
     { header: true, skipEmptyLines: true },
   ).data;
 
@@ -39,7 +54,12 @@ describe('saltsmith screen: the salt’s own solubility', () => {
       expect(r.salt_solubility_origin).toBe('model');
     }
     expect(new Set(rows.map((r) => r.salt_solubility_water_log10_M)).size).toBe(3);
-    const json = await run(['--input', input({ ions: ['chloride', 'mesylate'] }), '--format', 'json']);
+    const json = await run([
+      '--input',
+      input({ ions: ['chloride', 'mesylate'] }),
+      '--format',
+      'json',
+    ]);
     const j = JSON.parse(json.out) as { rows: Record<string, unknown>[] };
     for (const r of j.rows) {
       expect(r).toHaveProperty('salt_solubility_water_log10_M');
@@ -53,7 +73,10 @@ describe('saltsmith screen: the salt’s own solubility', () => {
       '--input',
       input({
         ions: ['chloride', 'mesylate', 'tosylate'],
-        bench: { chloride: { solubilityMgPerMl: 12 }, mesylate: { meltingPointC: 210, fusionEnthalpyKJPerMol: 40 } },
+        bench: {
+          chloride: { solubilityMgPerMl: 12 },
+          mesylate: { meltingPointC: 210, fusionEnthalpyKJPerMol: 40 },
+        },
       }),
     ]);
     expect(code).toBe(0);
@@ -67,12 +90,26 @@ describe('saltsmith screen: the salt’s own solubility', () => {
 
   it('the fusion path moves the estimate by the Schröder–van Laar difference between two melting points', async () => {
     const at = async (mp: number) => {
-      const { out } = await run(['--input', input({ ions: ['mesylate'], bench: { mesylate: { meltingPointC: mp, fusionEnthalpyKJPerMol: 40 } } })]);
+      const { out } = await run([
+        '--input',
+        input({
+          ions: ['mesylate'],
+          bench: { mesylate: { meltingPointC: mp, fusionEnthalpyKJPerMol: 40 } },
+        }),
+      ]);
       return Number(csvRows(out)[0]!.salt_solubility_water_log10_M);
     };
     const T = 310.15; // the default screening temperature, 37 °C
-    const lo = idealSolubility({ meltingPointK: 150 + 273.15, fusionEnthalpyKJPerMol: 40, temperatureK: T });
-    const hi = idealSolubility({ meltingPointK: 250 + 273.15, fusionEnthalpyKJPerMol: 40, temperatureK: T });
+    const lo = idealSolubility({
+      meltingPointK: 150 + 273.15,
+      fusionEnthalpyKJPerMol: 40,
+      temperatureK: T,
+    });
+    const hi = idealSolubility({
+      meltingPointK: 250 + 273.15,
+      fusionEnthalpyKJPerMol: 40,
+      temperatureK: T,
+    });
     const expected = (hi.lnMoleFraction - lo.lnMoleFraction) / Math.LN10;
     // The CSV keeps 3 significant digits (0.01 at these magnitudes), so two readings differ by ≤ 0.011.
     expect(Math.abs((await at(250)) - (await at(150)) - expected)).toBeLessThan(0.011);
@@ -81,7 +118,12 @@ describe('saltsmith screen: the salt’s own solubility', () => {
   it('customIons: an in-house counter-ion from its parent SMILES is screened, with descriptors (origin "model")', async () => {
     const { out, code, err } = await run([
       '--input',
-      input({ ions: ['chloride', 'my-sulfonate'], customIons: [{ id: 'my-sulfonate', smiles: 'CCCCCCCCS(=O)(=O)O', charge: -1, pKas: [-1.9] }] }),
+      input({
+        ions: ['chloride', 'my-sulfonate'],
+        customIons: [
+          { id: 'my-sulfonate', smiles: 'CCCCCCCCS(=O)(=O)O', charge: -1, pKas: [-1.9] },
+        ],
+      }),
     ]);
     expect(err).toBe('');
     expect(code).toBe(0);
@@ -92,14 +134,32 @@ describe('saltsmith screen: the salt’s own solubility', () => {
 
   it('bad entries are refused with the field named', async () => {
     const cases: [Record<string, unknown>, RegExp][] = [
-      [{ customIons: [{ id: 'mesylate', smiles: 'CS(=O)(=O)O', charge: -1 }] }, /customIons\.0\.id.*bundled/],
-      [{ customIons: [{ id: 'my-ion', smiles: 'CS(=O)(=O)O', charge: 1 }] }, /customIons\.0\.charge/],
-      [{ customIons: [{ id: 'my-ion', smiles: 'C[N+](C)(C)C', charge: -1 }] }, /customIons\.0\.(smiles|charge)/],
-      [{ customIons: [{ id: 'my-ion', smiles: 'CS(=O)(=O)O.CCO', charge: -1 }] }, /customIons\.0\.smiles/],
-      [{ customIons: [{ id: 'my-ion', smiles: 'CS(=O)(=O)O', charge: -1, extra: 1 }] }, /customIons/],
+      [
+        { customIons: [{ id: 'mesylate', smiles: 'CS(=O)(=O)O', charge: -1 }] },
+        /customIons\.0\.id.*bundled/,
+      ],
+      [
+        { customIons: [{ id: 'my-ion', smiles: 'CS(=O)(=O)O', charge: 1 }] },
+        /customIons\.0\.charge/,
+      ],
+      [
+        { customIons: [{ id: 'my-ion', smiles: 'C[N+](C)(C)C', charge: -1 }] },
+        /customIons\.0\.(smiles|charge)/,
+      ],
+      [
+        { customIons: [{ id: 'my-ion', smiles: 'CS(=O)(=O)O.CCO', charge: -1 }] },
+        /customIons\.0\.smiles/,
+      ],
+      [
+        { customIons: [{ id: 'my-ion', smiles: 'CS(=O)(=O)O', charge: -1, extra: 1 }] },
+        /customIons/,
+      ],
       [{ ions: ['chloride'], bench: { sulfate: { meltingPointC: 200 } } }, /bench\.sulfate/],
       [{ ions: ['chloride'], bench: { chloride: {} } }, /bench/],
-      [{ ions: ['chloride'], bench: { chloride: { fusionEnthalpyKJPerMol: -4 } } }, /bench\.chloride\.fusionEnthalpyKJPerMol/],
+      [
+        { ions: ['chloride'], bench: { chloride: { fusionEnthalpyKJPerMol: -4 } } },
+        /bench\.chloride\.fusionEnthalpyKJPerMol/,
+      ],
     ];
     for (const [extra, message] of cases) {
       const r = await run(['--input', input(extra)]);

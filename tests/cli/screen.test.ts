@@ -14,7 +14,18 @@ async function run(args: string[]) {
 
 // A test compound given by formula and made-up properties; assertions check structure and identities,
 // not these inputs.
-const BASE = ['--formula', 'C17H20N2O2', '--pka', '8', '--s0', '0.02', '--dose', '100', '--iterations', '200'];
+const BASE = [
+  '--formula',
+  'C17H20N2O2',
+  '--pka',
+  '8',
+  '--s0',
+  '0.02',
+  '--dose',
+  '100',
+  '--iterations',
+  '200',
+];
 
 describe('saltsmith screen', () => {
   it('writes a ranked CSV with pH_max, dose numbers at pH 1.2 and 6.8, flags, reasons and the cautions', async () => {
@@ -23,11 +34,23 @@ describe('saltsmith screen', () => {
     const lines = out.trim().split('\n');
     const cautions = lines.filter((l) => l.startsWith('#'));
     expect(cautions.join(' ')).toMatch(/do not establish a salt form/);
-    const parsed = Papa.parse<Record<string, string>>(lines.filter((l) => !l.startsWith('#')).join('\n'), { header: true });
+    const parsed = Papa.parse<Record<string, string>>(
+      lines.filter((l) => !l.startsWith('#')).join('\n'),
+      { header: true },
+    );
     expect(parsed.errors).toHaveLength(0);
     const rows = parsed.data;
     expect(rows.map((r) => r.rank)).toStrictEqual(['1', '2', '3']);
-    for (const k of ['ph_max', 'dose_number_ph_1_2', 'dose_number_ph_6_8', 'gastric_dose_number', 'flags', 'reasons', 'p_top3']) expect(Object.keys(rows[0]!)).toContain(k);
+    for (const k of [
+      'ph_max',
+      'dose_number_ph_1_2',
+      'dose_number_ph_6_8',
+      'gastric_dose_number',
+      'flags',
+      'reasons',
+      'p_top3',
+    ])
+      expect(Object.keys(rows[0]!)).toContain(k);
     expect(rows.every((r) => !/NaN|Infinity/.test(Object.values(r).join(',')))).toBe(true);
     const hcl = rows.find((r) => r.counter_ion === 'chloride')!;
     expect(hcl.reasons).toMatch(/hydrochloride/);
@@ -49,22 +72,57 @@ describe('saltsmith screen', () => {
   });
 
   it('reads a compound from --input JSON (the fictional demo file) and leaves cocrystal-band stoichiometries out, saying so', async () => {
-    const { code, out } = await run(['--input', 'fixtures/screening/demorazine-screen-input.json', '--format', 'json', '--iterations', '100']);
+    const { code, out } = await run([
+      '--input',
+      'fixtures/screening/demorazine-screen-input.json',
+      '--format',
+      'json',
+      '--iterations',
+      '100',
+    ]);
     expect(code).toBe(0);
     const doc = JSON.parse(out);
     expect(doc.compound).toMatch(/fictional/);
     // ΔpKa rule (Cruz-Cabeza 2012): a stoichiometry below −1 is left out and listed.
     expect(doc.skippedCocrystalBand.length).toBeGreaterThan(0);
     for (const s of doc.skippedCocrystalBand) expect(s.deltaPka).toBeLessThan(-1);
-    const kept = await run(['--input', 'fixtures/screening/demorazine-screen-input.json', '--format', 'json', '--iterations', '100', '--keep-cocrystal-band']);
-    expect(JSON.parse(kept.out).rows.length).toBe(doc.rows.length + doc.skippedCocrystalBand.length);
+    const kept = await run([
+      '--input',
+      'fixtures/screening/demorazine-screen-input.json',
+      '--format',
+      'json',
+      '--iterations',
+      '100',
+      '--keep-cocrystal-band',
+    ]);
+    expect(JSON.parse(kept.out).rows.length).toBe(
+      doc.rows.length + doc.skippedCocrystalBand.length,
+    );
   });
 
   it('refuses bad input with a message and exit status 1', async () => {
-    const outOfOrder = await run(['--formula', 'C17H20N2O2', '--pka', '8,3', '--s0', '0.02', '--dose', '100']);
+    const outOfOrder = await run([
+      '--formula',
+      'C17H20N2O2',
+      '--pka',
+      '8,3',
+      '--s0',
+      '0.02',
+      '--dose',
+      '100',
+    ]);
     expect(outOfOrder.code).toBe(1);
     expect(outOfOrder.err).toMatch(/out of order/);
-    const zeroDose = await run(['--formula', 'C17H20N2O2', '--pka', '8', '--s0', '0.02', '--dose', '0']);
+    const zeroDose = await run([
+      '--formula',
+      'C17H20N2O2',
+      '--pka',
+      '8',
+      '--s0',
+      '0.02',
+      '--dose',
+      '0',
+    ]);
     expect(zeroDose.code).toBe(1);
     expect(zeroDose.err).toMatch(/dose/i);
     const noS0 = await run(['--formula', 'C17H20N2O2', '--pka', '8', '--dose', '100']);
@@ -90,6 +148,12 @@ describe('saltsmith eval: "kind":"ph-solubility"', () => {
     expect(Math.abs(r.phMax - r.phMaxClosedForm1to1)).toBeLessThan(1e-3);
   });
   it('rejects a pH outside 0–14', async () => {
-    await expect(evaluateRequest({ kind: 'ph-solubility', drug: { kind: 'base', pKas: [8], log10IntrinsicM: -5 }, phFrom: -2 })).rejects.toThrow(/pH|phFrom/);
+    await expect(
+      evaluateRequest({
+        kind: 'ph-solubility',
+        drug: { kind: 'base', pKas: [8], log10IntrinsicM: -5 },
+        phFrom: -2,
+      }),
+    ).rejects.toThrow(/pH|phFrom/);
   });
 });

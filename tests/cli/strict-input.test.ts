@@ -6,12 +6,32 @@ import { runCli } from './support/run-cli';
 
 // Each case below is one of the command-line failures reported in issue 13; before the fix each was
 // accepted (exit 0) or ended the run. Compound values are made up (structure checks only).
-const BASE = ['screen', '--formula', 'C17H20N2O2', '--pka', '8', '--s0', '0.02', '--dose', '100', '--iterations', '50', '--ions', 'chloride,mesylate'];
+const BASE = [
+  'screen',
+  '--formula',
+  'C17H20N2O2',
+  '--pka',
+  '8',
+  '--s0',
+  '0.02',
+  '--dose',
+  '100',
+  '--iterations',
+  '50',
+  '--ions',
+  'chloride,mesylate',
+];
 
 async function evalLines(...lines: string[]) {
   const r = await runCli(['eval'], lines.join('\n') + '\n');
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  return { ...r, lines: r.out.trim().split('\n').map((l) => JSON.parse(l) as Record<string, any>) };
+  return {
+    ...r,
+    lines: r.out
+      .trim()
+      .split('\n')
+      // eslint-disable-next-line @typescript-eslint/no-explicit-any
+      .map((l) => JSON.parse(l) as Record<string, any>),
+  };
 }
 
 describe('flags: empty, extra, unknown, repeated and contradictory input is refused with the flag named (exit 2)', () => {
@@ -42,10 +62,30 @@ describe('flags: empty, extra, unknown, repeated and contradictory input is refu
     const b = await runCli(['ions', 'sulfate']);
     expect(b.code).toBe(2);
     expect(b.err).toContain('sulfate');
-    const c = await runCli(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--volume', '0.04', '--density', '2']);
+    const c = await runCli([
+      'lattice',
+      '--cation',
+      'Na+',
+      '--anion',
+      'Cl-',
+      '--volume',
+      '0.04',
+      '--density',
+      '2',
+    ]);
     expect(c.code).toBe(2);
     expect(c.err).toContain('--volume');
-    const d = await runCli(['lattice', '--cation', 'Na+', '--anion', 'Cl-', '--method', 'kapustinskii', '--volume', '0.04']);
+    const d = await runCli([
+      'lattice',
+      '--cation',
+      'Na+',
+      '--anion',
+      'Cl-',
+      '--method',
+      'kapustinskii',
+      '--volume',
+      '0.04',
+    ]);
     expect(d.code).toBe(2);
     expect(d.err).toMatch(/--volume.*not used by --method kapustinskii/);
   });
@@ -59,7 +99,15 @@ describe('values: every number finite and in range (exit 1, field named)', () =>
   });
 
   it('refuses five pKa values (one to four are accepted)', async () => {
-    const r = await runCli(['screen', '--formula', 'C17H20N2O2', '--pka', '3,4,5,6,7', '--s0', '0.02']);
+    const r = await runCli([
+      'screen',
+      '--formula',
+      'C17H20N2O2',
+      '--pka',
+      '3,4,5,6,7',
+      '--s0',
+      '0.02',
+    ]);
     expect(r.code).toBe(1);
     expect(r.err).toMatch(/--pka: 5 value\(s\).*1 to 4/);
   });
@@ -106,17 +154,33 @@ describe('ions whose formula, SMILES and charge disagree are refused', () => {
   });
 
   it('refuses a multi-component SMILES with the same message in screen and eval', async () => {
-    const s = await runCli(['screen', '--smiles', 'CCN.Cl', '--pka', '10.6', '--s0', '1', '--ions', 'chloride', '--iterations', '10']);
+    const s = await runCli([
+      'screen',
+      '--smiles',
+      'CCN.Cl',
+      '--pka',
+      '10.6',
+      '--s0',
+      '1',
+      '--ions',
+      'chloride',
+      '--iterations',
+      '10',
+    ]);
     expect(s.code).toBe(1);
     expect(s.err).toMatch(/--smiles: "CCN\.Cl" has several components/);
-    const { lines } = await evalLines('{"kind":"salt","cation":{"smiles":"CCN.Cl","charge":1},"anion":"Cl-"}');
+    const { lines } = await evalLines(
+      '{"kind":"salt","cation":{"smiles":"CCN.Cl","charge":1},"anion":"Cl-"}',
+    );
     expect(lines[0]!.error.message).toMatch(/"CCN\.Cl" has several components/);
   });
 
   it('refuses --ions sodium for a base, naming the mismatch (exit 1, not an empty table)', async () => {
     const r = await runCli([...BASE.slice(0, 9), '--ions', 'sodium']);
     expect(r.code).toBe(1);
-    expect(r.err).toMatch(/--ions: Sodium is a counter-cation; a base forms salts with counter-anions/i);
+    expect(r.err).toMatch(
+      /--ions: Sodium is a counter-cation; a base forms salts with counter-anions/i,
+    );
     expect(r.out).toBe('');
   });
 
@@ -129,7 +193,11 @@ describe('ions whose formula, SMILES and charge disagree are refused', () => {
 
 describe('eval: bounded lines and nesting, the run goes on', () => {
   it('answers an id nested 5,000 deep with a per-line error and goes on', async () => {
-    const deep = '{"kind":"salt","cation":"Na+","anion":"Cl-","id":' + '['.repeat(5000) + ']'.repeat(5000) + '}';
+    const deep =
+      '{"kind":"salt","cation":"Na+","anion":"Cl-","id":' +
+      '['.repeat(5000) +
+      ']'.repeat(5000) +
+      '}';
     const { code, lines } = await evalLines(deep, '{"kind":"salt","cation":"K+","anion":"Br-"}');
     expect(code).toBe(1);
     expect(lines).toHaveLength(2);
@@ -139,7 +207,10 @@ describe('eval: bounded lines and nesting, the run goes on', () => {
 
   it('answers a line over 1 MiB with a per-line error (no stack trace) and goes on', async () => {
     const huge = '{"kind":"salt","id":"' + 'x'.repeat(2 * 1024 * 1024) + '"}';
-    const { code, lines, err } = await evalLines(huge, '{"kind":"salt","cation":"K+","anion":"Br-"}');
+    const { code, lines, err } = await evalLines(
+      huge,
+      '{"kind":"salt","cation":"K+","anion":"Br-"}',
+    );
     expect(code).toBe(1);
     expect(lines[0]!.error.message).toMatch(/bytes long/);
     expect(lines[0]!.line).toBe(1);

@@ -40,7 +40,9 @@ for (const viewport of [
         await page.getByText(a.ready).first().waitFor({ timeout: 30_000 });
         const violations = await axeViolations(page);
         expect(violations, JSON.stringify(violations, null, 1)).toEqual([]);
-        const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+        const overflow = await page.evaluate(
+          () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+        );
         expect(overflow).toBeLessThanOrEqual(0);
       }, 60_000);
     }

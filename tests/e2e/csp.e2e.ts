@@ -22,7 +22,9 @@ describe('Content-Security-Policy (Chromium, production build)', () => {
     const { page } = s;
     await page.goto(BASE_URL);
     await page.getByText('Demorazine is fictional').waitFor();
-    await expect(page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content')).resolves.toBe(POLICY);
+    await expect(
+      page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content'),
+    ).resolves.toBe(POLICY);
 
     const ran = await page.evaluate(async () => {
       const w = window as unknown as { inlineRan?: boolean };
@@ -52,12 +54,19 @@ describe('Content-Security-Policy (Chromium, production build)', () => {
     await page.getByRole('img', { name: /Structure of Demorazine/ }).waitFor({ timeout: 20000 });
     // The service worker takes control.
     await expect
-      .poll(() => page.evaluate(() => navigator.serviceWorker.ready.then((r) => r.active?.state ?? 'none')), { timeout: 20000 })
+      .poll(
+        () =>
+          page.evaluate(() => navigator.serviceWorker.ready.then((r) => r.active?.state ?? 'none')),
+        { timeout: 20000 },
+      )
       .toBe('activated');
     // Ranking: the Monte Carlo robustness runs in a module worker; recharts draws the pH-solubility chart.
     await area(page, 'Ranking');
     await page.getByRole('table', { name: /Ranked candidates/ }).waitFor();
-    await page.getByText(/\(first \d+ %\)/).first().waitFor({ timeout: 30000 });
+    await page
+      .getByText(/\(first \d+ %\)/)
+      .first()
+      .waitFor({ timeout: 30000 });
     await page.locator('.recharts-surface').first().waitFor({ timeout: 20000 });
     expect(s.errors).toEqual([]);
     expect(s.cspViolations).toEqual([]);

@@ -48,7 +48,9 @@ function comparable(text: string) {
     measurements: f.measurements
       .map(({ id: _id, candidateId, ...rest }) => ({ ...rest, candidate: order.get(candidateId) }))
       .sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
-    customIons: f.customIons.map(({ id: _id, ...rest }) => rest).sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
+    customIons: f.customIons
+      .map(({ id: _id, ...rest }) => rest)
+      .sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
   };
 }
 
@@ -75,12 +77,18 @@ describe('project files in Chromium', () => {
     await page.goto(`${BASE_URL}#/projects`);
     const panel = page.getByRole('region', { name: 'Project files' });
     await panel.waitFor();
-    const projectName = await panel.getByLabel('Project', { exact: true }).evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]?.textContent ?? '');
+    const projectName = await panel
+      .getByLabel('Project', { exact: true })
+      .evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]?.textContent ?? '');
     expect(projectName).not.toBe('');
 
     const first = await exportOpenProject(page);
     expect(first.name).toMatch(/\.saltsmith\.json$/);
-    const parsed = JSON.parse(first.text) as { format: string; version: number; candidates: unknown[] };
+    const parsed = JSON.parse(first.text) as {
+      format: string;
+      version: number;
+      candidates: unknown[];
+    };
     expect(parsed.format).toBe('saltsmith-project');
     expect(parsed.version).toBe(2);
     // The demo project comes with a shortlist, so the round trip carries candidates, not just a name.
@@ -88,14 +96,26 @@ describe('project files in Chromium', () => {
 
     page.once('dialog', (d) => void d.accept());
     await page.getByRole('button', { name: `Delete ${projectName}` }).click();
-    await page.getByRole('button', { name: `Delete ${projectName}` }).waitFor({ state: 'detached' }).catch(() => undefined);
-    await expect.poll(async () => page.getByRole('heading', { name: projectName, exact: true }).count()).toBe(0);
+    await page
+      .getByRole('button', { name: `Delete ${projectName}` })
+      .waitFor({ state: 'detached' })
+      .catch(() => undefined);
+    await expect
+      .poll(async () => page.getByRole('heading', { name: projectName, exact: true }).count())
+      .toBe(0);
 
-    await page.getByLabel('Import a project file').setInputFiles({ name: first.name, mimeType: 'application/json', buffer: Buffer.from(first.text) });
+    await page.getByLabel('Import a project file').setInputFiles({
+      name: first.name,
+      mimeType: 'application/json',
+      buffer: Buffer.from(first.text),
+    });
     await page.getByRole('button', { name: 'Import as a new project' }).click();
     await page.goto(`${BASE_URL}#/projects`);
     await page.getByRole('heading', { name: projectName, exact: true }).waitFor();
-    await page.getByRole('region', { name: 'Project files' }).getByLabel('Project', { exact: true }).selectOption({ label: projectName });
+    await page
+      .getByRole('region', { name: 'Project files' })
+      .getByLabel('Project', { exact: true })
+      .selectOption({ label: projectName });
     const second = await exportOpenProject(page);
     expect(comparable(second.text)).toStrictEqual(comparable(first.text));
     expect(s.errors).toEqual([]);
@@ -112,11 +132,15 @@ describe('project files in Chromium', () => {
     await page.getByRole('button', { name: 'Export to file' }).waitFor();
     const before = await dumpDatabase(page);
     const text = readFileSync(resolve(process.cwd(), 'fixtures/files', fixture));
-    await page.getByLabel('Import a project file').setInputFiles({ name: fixture, mimeType: 'application/json', buffer: text });
+    await page
+      .getByLabel('Import a project file')
+      .setInputFiles({ name: fixture, mimeType: 'application/json', buffer: text });
     const alert = page.getByRole('alert').filter({ hasText: 'was not imported' });
     await alert.waitFor();
     await expect(alert.textContent()).resolves.toMatch(message);
-    await expect(page.getByRole('button', { name: 'Import as a new project' }).count()).resolves.toBe(0);
+    await expect(
+      page.getByRole('button', { name: 'Import as a new project' }).count(),
+    ).resolves.toBe(0);
     expect(await dumpDatabase(page)).toStrictEqual(before);
     expect(s.errors).toEqual([]);
   });

@@ -35,7 +35,10 @@ describe('an imported file cannot shadow a bundled counter-ion (Chromium, produc
     await area(page, 'Projects');
     const panel = page.getByRole('region', { name: 'Project files' });
     await panel.waitFor();
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export to file' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export to file' }).click(),
+    ]);
     const { readFileSync } = await import('node:fs');
     const file = JSON.parse(readFileSync(await download.path(), 'utf8')) as {
       project: { name: string };
@@ -56,7 +59,9 @@ describe('an imported file cannot shadow a bundled counter-ion (Chromium, produc
     });
     await page.getByRole('button', { name: 'Import as a new project' }).click();
     // The import opens the imported project; back in Projects it is listed beside the demo.
-    await page.getByRole('button', { name: 'Import as a new project' }).waitFor({ state: 'detached' });
+    await page
+      .getByRole('button', { name: 'Import as a new project' })
+      .waitFor({ state: 'detached' });
     await area(page, 'Projects');
     await page.getByRole('heading', { name: 'Hostile import', exact: true }).waitFor();
 
@@ -68,7 +73,9 @@ describe('an imported file cannot shadow a bundled counter-ion (Chromium, produc
     const table = page.getByRole('table', { name: 'Counter-ion library' });
     await table.waitFor();
     await page.getByLabel('Search counter-ions').fill('Mesylate');
-    await expect.poll(() => table.locator('tbody tr').filter({ hasText: 'Mesylate' }).count()).toBe(1);
+    await expect
+      .poll(() => table.locator('tbody tr').filter({ hasText: 'Mesylate' }).count())
+      .toBe(1);
     expect(s.errors).toEqual([]);
   });
 });

@@ -53,7 +53,9 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await page.getByLabel('pKa of the conjugate acid').fill('8.9');
     await page.getByRole('button', { name: 'Create project' }).click();
     await page.getByRole('heading', { name: 'Compound', exact: true }).waitFor();
-    await expect(page.getByLabel('Name', { exact: true }).inputValue()).resolves.toBe('Journey base 7');
+    await expect(page.getByLabel('Name', { exact: true }).inputValue()).resolves.toBe(
+      'Journey base 7',
+    );
     // Screening needs S₀ and a dose.
     await page.getByLabel(/Intrinsic solubility S₀/).fill('0.02');
     await page.getByLabel(/Highest single dose/).fill('150');
@@ -63,7 +65,9 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await area(page, 'Counter-ions');
     for (const name of SHORTLIST) {
       // The library's button names the ion ("Add … Mesylate … shortlist"), whatever the exact wording.
-      await page.getByRole('button', { name: new RegExp(`^Add\\b.*\\b${name}\\b.*shortlist`) }).click();
+      await page
+        .getByRole('button', { name: new RegExp(`^Add\\b.*\\b${name}\\b.*shortlist`) })
+        .click();
       await page.getByText(`${SHORTLIST.indexOf(name) + 1} on this project’s shortlist`).waitFor();
     }
 
@@ -72,7 +76,14 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await page.getByRole('table', { name: /Ranked candidates/ }).waitFor({ timeout: 30_000 });
     const before = await rankedNames(page);
     expect(before).toHaveLength(5);
-    for (const label of ['Salt formation (ΔpKa)', 'Dose dissolves, pH 1.2–6.8', 'Dose dissolves in gastric fluid', 'Stays a salt in the tablet', 'Counter-ion class', 'Moisture uptake (measured)']) {
+    for (const label of [
+      'Salt formation (ΔpKa)',
+      'Dose dissolves, pH 1.2–6.8',
+      'Dose dissolves in gastric fluid',
+      'Stays a salt in the tablet',
+      'Counter-ion class',
+      'Moisture uptake (measured)',
+    ]) {
       await page.getByLabel(label, { exact: true }).fill('0');
     }
     await page.getByLabel('Tablet mass', { exact: true }).fill('3');
@@ -104,21 +115,36 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     // Reload: everything is still there.
     await page.reload();
     await page.getByText(/Project:/).waitFor();
-    await expect(page.locator('.topbar-project').textContent()).resolves.toContain('Journey base 7');
+    await expect(page.locator('.topbar-project').textContent()).resolves.toContain(
+      'Journey base 7',
+    );
     await area(page, 'Ranking');
     await page.getByRole('table', { name: /Ranked candidates/ }).waitFor({ timeout: 30_000 });
     await expect(rankedNames(page)).resolves.toEqual(after);
     await expect(page.getByLabel('Tablet mass', { exact: true }).inputValue()).resolves.toBe('3');
-    await expect(page.getByLabel('Counter-ion class', { exact: true }).inputValue()).resolves.toBe('0');
+    await expect(page.getByLabel('Counter-ion class', { exact: true }).inputValue()).resolves.toBe(
+      '0',
+    );
     // The measured solubility now backs the mesylate's K_sp and says so.
     await area(page, 'Bench data');
-    await page.getByRole('navigation', { name: 'Shortlisted candidates' }).getByRole('button', { name: /Mesylate/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Shortlisted candidates' })
+      .getByRole('button', { name: /Mesylate/ })
+      .click();
     const table = page.getByRole('table', { name: /Measurements for Mesylate/ });
     await expect(table.textContent()).resolves.toContain('4.20');
-    await page.getByRole('navigation', { name: 'Shortlisted candidates' }).getByRole('button', { name: /Tosylate/ }).click();
-    await expect(page.getByRole('table', { name: /Measurements for Tosylate/ }).textContent()).resolves.toContain('1.40');
+    await page
+      .getByRole('navigation', { name: 'Shortlisted candidates' })
+      .getByRole('button', { name: /Tosylate/ })
+      .click();
+    await expect(
+      page.getByRole('table', { name: /Measurements for Tosylate/ }).textContent(),
+    ).resolves.toContain('1.40');
     await area(page, 'Projects');
-    await page.getByRole('article', { name: 'Journey base 7' }).getByText('5 counter-ions, 2 measurements').waitFor();
+    await page
+      .getByRole('article', { name: 'Journey base 7' })
+      .getByText('5 counter-ions, 2 measurements')
+      .waitFor();
     expect(s.errors).toEqual([]);
   }, 120_000);
 
@@ -143,7 +169,10 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await form.getByLabel(/^Solubility/).fill('2');
     await form.getByLabel('pH at equilibrium').fill('1.2');
     await form.getByRole('button', { name: 'Save measurement' }).click();
-    await second.getByRole('article', { name: 'Morning demo' }).getByText(`${DEMO_SHORTLIST.length} counter-ions, 1 measurement`).waitFor();
+    await second
+      .getByRole('article', { name: 'Morning demo' })
+      .getByText(`${DEMO_SHORTLIST.length} counter-ions, 1 measurement`)
+      .waitFor();
     expect(s.errors).toEqual([]);
   }, 90_000);
 });

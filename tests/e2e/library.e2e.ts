@@ -14,7 +14,10 @@ describe('counter-ion library in Chromium (production build)', () => {
     const { page } = s;
     await page.goto(BASE_URL);
     await page.getByText('Demorazine is fictional').waitFor();
-    await page.getByRole('navigation', { name: 'Workbench areas' }).getByRole('link', { name: 'Counter-ions' }).click();
+    await page
+      .getByRole('navigation', { name: 'Workbench areas' })
+      .getByRole('link', { name: 'Counter-ions' })
+      .click();
     const table = page.getByRole('table', { name: 'Counter-ion library' });
     await table.waitFor();
 

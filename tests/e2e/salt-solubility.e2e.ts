@@ -20,7 +20,9 @@ describe('the salt’s own solubility in the browser (production build)', () => 
     await page.goto(BASE_URL);
     await page.getByText('Demorazine is fictional').waitFor();
     await area(page, 'Ranking');
-    const chart = page.getByRole('img', { name: /^Solubility \(free-form equivalents\) of .* and its salts/ });
+    const chart = page.getByRole('img', {
+      name: /^Solubility \(free-form equivalents\) of .* and its salts/,
+    });
     await chart.waitFor({ timeout: 30_000 });
     // The chart first draws the free form, then the salts once the screen has settled: wait for them.
     let plateaus: number[] = [];

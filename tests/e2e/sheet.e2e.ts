@@ -45,12 +45,16 @@ function pdfText(pdf: Buffer): string {
   const cmapOf = (id: string): Map<number, string> => {
     const map = new Map<number, string>();
     const text = objects.get(id)?.stream?.toString('latin1') ?? '';
-    const hex = (h: string) => String.fromCodePoint(...(h.match(/.{4}/g) ?? []).map((x) => parseInt(x, 16)));
+    const hex = (h: string) =>
+      String.fromCodePoint(...(h.match(/.{4}/g) ?? []).map((x) => parseInt(x, 16)));
     for (const block of text.matchAll(/beginbfchar([\s\S]*?)endbfchar/g)) {
-      for (const p of (block[1] ?? '').matchAll(/<([0-9A-Fa-f]+)>\s*<([0-9A-Fa-f]+)>/g)) map.set(parseInt(p[1] ?? '0', 16), hex(p[2] ?? ''));
+      for (const p of (block[1] ?? '').matchAll(/<([0-9A-Fa-f]+)>\s*<([0-9A-Fa-f]+)>/g))
+        map.set(parseInt(p[1] ?? '0', 16), hex(p[2] ?? ''));
     }
     for (const block of text.matchAll(/beginbfrange([\s\S]*?)endbfrange/g)) {
-      for (const p of (block[1] ?? '').matchAll(/<([0-9A-Fa-f]+)>\s*<([0-9A-Fa-f]+)>\s*<([0-9A-Fa-f]+)>/g)) {
+      for (const p of (block[1] ?? '').matchAll(
+        /<([0-9A-Fa-f]+)>\s*<([0-9A-Fa-f]+)>\s*<([0-9A-Fa-f]+)>/g,
+      )) {
         const lo = parseInt(p[1] ?? '0', 16);
         const hi = parseInt(p[2] ?? '0', 16);
         const base = parseInt(p[3] ?? '0', 16);
@@ -109,7 +113,11 @@ async function shortlist(page: Page): Promise<{ ionId: string }[]> {
             const projectId = (last.result as { value: string }).value;
             const all = tx.objectStore('candidates').getAll();
             all.onsuccess = () => {
-              res((all.result as { projectId: string; ionId: string }[]).filter((c) => c.projectId === projectId));
+              res(
+                (all.result as { projectId: string; ionId: string }[]).filter(
+                  (c) => c.projectId === projectId,
+                ),
+              );
               db.close();
             };
           };
@@ -125,7 +133,10 @@ async function openSheet(page: Page): Promise<void> {
 }
 
 async function downloadCsv(page: Page): Promise<string> {
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download CSV' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Download CSV' }).click(),
+  ]);
   expect(download.suggestedFilename()).toMatch(/-comparison-\d{4}-\d{2}-\d{2}\.csv$/);
   return readFileSync(await download.path(), 'utf8');
 }
@@ -151,8 +162,12 @@ describe('comparison sheet in Chromium', () => {
 
     // On paper only the sheet shows: the workbench around it is hidden by the print rules.
     await page.emulateMedia({ media: 'print' });
-    await expect(page.getByRole('navigation', { name: 'Workbench areas' }).isVisible()).resolves.toBe(false);
-    await expect(page.getByRole('button', { name: 'Download CSV' }).isVisible()).resolves.toBe(false);
+    await expect(
+      page.getByRole('navigation', { name: 'Workbench areas' }).isVisible(),
+    ).resolves.toBe(false);
+    await expect(page.getByRole('button', { name: 'Download CSV' }).isVisible()).resolves.toBe(
+      false,
+    );
     await expect(page.locator('.comparison-sheet').isVisible()).resolves.toBe(true);
 
     const pdf = await page.pdf({ format: 'A4', printBackground: true });
@@ -164,7 +179,10 @@ describe('comparison sheet in Chromium', () => {
       expect(ion, `library ion ${c.ionId}`).toBeDefined();
       expect(text).toContain(squash(ion?.name ?? c.ionId));
     }
-    const labels = await page.getByRole('table', { name: /^Salt formation/ }).getByRole('rowheader').allTextContents();
+    const labels = await page
+      .getByRole('table', { name: /^Salt formation/ })
+      .getByRole('rowheader')
+      .allTextContents();
     expect(labels).toHaveLength(list.length);
     for (const l of labels) expect(text).toContain(squash(l));
     for (const line of CAUTION_LINES) expect(text).toContain(squash(line));
@@ -179,7 +197,11 @@ describe('comparison sheet in Chromium', () => {
     await page.goto(BASE_URL);
     await openSheet(page);
     const csv = await downloadCsv(page);
-    const parsed = Papa.parse<(string | number | null)[]>(csv, { dynamicTyping: true, delimiter: ',', newline: '\r\n' });
+    const parsed = Papa.parse<(string | number | null)[]>(csv, {
+      dynamicTyping: true,
+      delimiter: ',',
+      newline: '\r\n',
+    });
     expect(parsed.errors).toEqual([]);
     const [header, ...rest] = parsed.data;
     const blank = rest.findIndex((r) => r.length === 1 && r[0] === null);
@@ -214,7 +236,12 @@ describe('comparison sheet in Chromium', () => {
       expect(col, `CSV column "${cell.heading}"`).toBeGreaterThan(1);
       expect(row?.[col], `${cell.label} / ${cell.heading}`).toBe(Number(cell.value.toPrecision(6)));
     }
-    expect(rows).toHaveLength(await page.getByRole('table', { name: /^Salt formation/ }).getByRole('rowheader').count());
+    expect(rows).toHaveLength(
+      await page
+        .getByRole('table', { name: /^Salt formation/ })
+        .getByRole('rowheader')
+        .count(),
+    );
     // The cautions travel with the file.
     const footer = rest.slice(blank + 1).map((r) => r[0]);
     for (const line of CAUTION_LINES) expect(footer).toContain(`Caution: ${line}`);
@@ -232,11 +259,20 @@ describe('comparison sheet in Chromium', () => {
     const markup = '<img src=x onerror=alert(1)>';
     await page.goto(`${BASE_URL}#/projects`);
     // Take the demo project's file, give it hostile names, import it.
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export to file' }).click()]);
-    const file = JSON.parse(readFileSync(await download.path(), 'utf8')) as { project: { name: string; compound: { name: string } } };
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export to file' }).click(),
+    ]);
+    const file = JSON.parse(readFileSync(await download.path(), 'utf8')) as {
+      project: { name: string; compound: { name: string } };
+    };
     file.project.name = markup;
     file.project.compound.name = formula;
-    await page.getByLabel('Import a project file').setInputFiles({ name: 'hostile.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(file)) });
+    await page.getByLabel('Import a project file').setInputFiles({
+      name: 'hostile.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(JSON.stringify(file)),
+    });
     await page.getByRole('button', { name: 'Import as a new project' }).click();
     await expect.poll(() => page.locator('.topbar-project').textContent()).toContain(markup);
 
@@ -247,7 +283,10 @@ describe('comparison sheet in Chromium', () => {
 
     const csv = await downloadCsv(page);
     const rows = Papa.parse<string[]>(csv, { delimiter: ',', newline: '\r\n' }).data;
-    const labels = rows.slice(1).map((r) => r[1]).filter((l): l is string => !!l && l.includes('HYPERLINK'));
+    const labels = rows
+      .slice(1)
+      .map((r) => r[1])
+      .filter((l): l is string => !!l && l.includes('HYPERLINK'));
     expect(labels.length).toBeGreaterThan(0);
     // OWASP CSV Injection: a cell starting with "=" is prefixed with a single quote and quoted.
     for (const l of labels) expect(l.startsWith(`'${formula}`)).toBe(true);

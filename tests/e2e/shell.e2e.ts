@@ -21,7 +21,9 @@ describe('workbench shell in Chromium (production build)', () => {
     await page.getByText('All changes saved').waitFor();
     await page.reload();
     await page.getByText('Demorazine is fictional').waitFor();
-    await expect(page.getByLabel('Name', { exact: true }).inputValue()).resolves.toBe('Compound BX-17');
+    await expect(page.getByLabel('Name', { exact: true }).inputValue()).resolves.toBe(
+      'Compound BX-17',
+    );
     expect(s.errors).toEqual([]);
   });
 });

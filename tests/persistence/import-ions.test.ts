@@ -34,11 +34,18 @@ async function fileWithSharedIon(ionId: string, ion: Record<string, unknown>): P
   await projectsRepo.remove(source.id);
   const file = JSON.parse(text) as { candidates: Record<string, unknown>[]; customIons: unknown[] };
   file.candidates.push({ ...file.candidates[0], id: 'cand_imported', ionId, order: 1 });
-  file.customIons.push({ id: ionId, scope: 'shared', overridesIonId: null, ion, updatedAt: '2026-12-01T00:00:00.000Z' });
+  file.customIons.push({
+    id: ionId,
+    scope: 'shared',
+    overridesIonId: null,
+    ion,
+    updatedAt: '2026-12-01T00:00:00.000Z',
+  });
   return JSON.stringify(file);
 }
 
-const libraryOf = async (projectId: string) => mergeLibrary(COUNTER_IONS, await customIonsRepo.listAll(), projectId);
+const libraryOf = async (projectId: string) =>
+  mergeLibrary(COUNTER_IONS, await customIonsRepo.listAll(), projectId);
 
 describe('imported in-house ions never shadow another ion', () => {
   it('a shared ion with the bundled id "mesylate" comes in under a fresh id; other projects keep the bundled Mesylate', async () => {
@@ -59,13 +66,21 @@ describe('imported in-house ions never shadow another ion', () => {
     expect(ionId).not.toBe('mesylate');
     const own = (await libraryOf(outcome.projectId)).ions.find((i) => i.id === ionId)!;
     expect(own.pKas[0]!.value).toBe(11);
-    expect((await customIonsRepo.listAll()).find((r) => r.id === ionId)?.projectId).toBe(outcome.projectId);
+    expect((await customIonsRepo.listAll()).find((r) => r.id === ionId)?.projectId).toBe(
+      outcome.projectId,
+    );
   });
 
   it('a shared ion whose id another project already uses for a different ion comes in under a fresh id', async () => {
     const other = await projectsRepo.create('Other', DEMO_COMPOUND);
-    await customIonsRepo.saveInHouse(inHouseIonPayload('inhouse_lab1', 'Lab ion A', -1) as never, other.id);
-    const text = await fileWithSharedIon('inhouse_lab1', inHouseIonPayload('inhouse_lab1', 'Lab ion B', 3));
+    await customIonsRepo.saveInHouse(
+      inHouseIonPayload('inhouse_lab1', 'Lab ion A', -1) as never,
+      other.id,
+    );
+    const text = await fileWithSharedIon(
+      'inhouse_lab1',
+      inHouseIonPayload('inhouse_lab1', 'Lab ion B', 3),
+    );
     await importProjectText(text, { mode: 'new' });
     const mine = (await libraryOf(other.id)).ions.filter((i) => i.id === 'inhouse_lab1');
     expect(mine.map((i) => i.name)).toEqual(['Lab ion A']);
@@ -90,8 +105,22 @@ describe('a stored invalid or shadowing in-house record', () => {
     const p = await projectsRepo.create('P', DEMO_COMPOUND);
     // Records written by an older build, straight into the table (the repository would refuse them).
     await getDb().customIons.bulkPut([
-      { id: 'inhouse_bad', schemaVersion: 1, projectId: null, overridesIonId: null, ion: { name: 5 }, updatedAt: 'x' },
-      { id: 'mesylate', schemaVersion: 1, projectId: null, overridesIonId: null, ion: inHouseIonPayload('mesylate', 'Mesylate', 11), updatedAt: 'x' },
+      {
+        id: 'inhouse_bad',
+        schemaVersion: 1,
+        projectId: null,
+        overridesIonId: null,
+        ion: { name: 5 },
+        updatedAt: 'x',
+      },
+      {
+        id: 'mesylate',
+        schemaVersion: 1,
+        projectId: null,
+        overridesIonId: null,
+        ion: inHouseIonPayload('mesylate', 'Mesylate', 11),
+        updatedAt: 'x',
+      },
     ]);
     await customIonsRepo.saveInHouse(inHouseIonPayload('inhouse_ok', 'Lab ion') as never);
     const lib = await libraryOf(p.id);
@@ -105,7 +134,10 @@ describe('a stored invalid or shadowing in-house record', () => {
 describe('duplicating a project', () => {
   it('gives the copy its own ions (record and library id) and points its shortlist at them', async () => {
     const p = await projectsRepo.create('P', DEMO_COMPOUND);
-    const ion = await customIonsRepo.saveInHouse(inHouseIonPayload('inhouse_own', 'Own ion') as never, p.id);
+    const ion = await customIonsRepo.saveInHouse(
+      inHouseIonPayload('inhouse_own', 'Own ion') as never,
+      p.id,
+    );
     await candidatesRepo.add(p.id, ion.id);
     const copy = await projectsRepo.duplicate(p.id);
     const [cand] = await candidatesRepo.listForProject(copy.id);

@@ -61,7 +61,10 @@ describe('projectsRepo', () => {
     const copyMeas = await measurementsRepo.listForProject(copy.id);
     expect(copyMeas).toHaveLength(2);
     const byIon = new Map(copyCands.map((c) => [c.id, c.ionId]));
-    expect(copyMeas.map((m) => `${byIon.get(m.candidateId)}:${m.value}`).sort()).toEqual(['chloride:1.5', 'mesylate:3']);
+    expect(copyMeas.map((m) => `${byIon.get(m.candidateId)}:${m.value}`).sort()).toEqual([
+      'chloride:1.5',
+      'mesylate:3',
+    ]);
     // the original is untouched
     expect(await measurementsRepo.listForProject(p.id)).toHaveLength(2);
   });
@@ -92,7 +95,10 @@ describe('projectsRepo', () => {
     const p = await projectsRepo.create('Base C', { ...DEMO_COMPOUND, name: 'Base C' });
     await projectsRepo.updateExtraSettings(p.id, 'screening', { a: 1 });
     await projectsRepo.updateExtraSettings(p.id, 'other', { b: 2 });
-    expect((await projectsRepo.get(p.id))?.settings.extra).toEqual({ screening: { a: 1 }, other: { b: 2 } });
+    expect((await projectsRepo.get(p.id))?.settings.extra).toEqual({
+      screening: { a: 1 },
+      other: { b: 2 },
+    });
   });
 });
 

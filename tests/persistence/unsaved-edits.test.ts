@@ -23,7 +23,10 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);
     // A write the page could not finish (the tab closed mid-transaction): it never settles.
-    void first.trackWrite({ kind: 'compound', projectId: p.id, changes: { meltingPointC: 150 } }, never);
+    void first.trackWrite(
+      { kind: 'compound', projectId: p.id, changes: { meltingPointC: 150 } },
+      never,
+    );
     expect(first.stashUnsavedEdits()).toBe(1);
     expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toContain('"meltingPointC":150');
 
@@ -51,7 +54,10 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);
     let abort: (e: Error) => void = () => undefined;
-    const write = first.trackWrite({ kind: 'compound', projectId: p.id, changes: { notes: 'typed last' } }, () => new Promise<never>((_, reject) => (abort = reject)));
+    const write = first.trackWrite(
+      { kind: 'compound', projectId: p.id, changes: { notes: 'typed last' } },
+      () => new Promise<never>((_, reject) => (abort = reject)),
+    );
     first.stashUnsavedEdits();
     abort(new Error('AbortError'));
     await expect(write).rejects.toThrow('AbortError');
@@ -65,7 +71,10 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);
     first.flushBeforeLeaving(() => {
-      void first.trackWrite({ kind: 'extra-settings', projectId: p.id, key: 'screening', value: { x: 1 } }, never);
+      void first.trackWrite(
+        { kind: 'extra-settings', projectId: p.id, key: 'screening', value: { x: 1 } },
+        never,
+      );
     });
     expect(first.stashUnsavedEdits()).toBe(1);
 
@@ -77,7 +86,10 @@ describe('edits in flight when the page goes away (issue 13)', () => {
   it('drops a copy that no longer validates instead of storing it', async () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);
-    void first.trackWrite({ kind: 'compound', projectId: p.id, changes: { meltingPointC: 'hot' } }, never);
+    void first.trackWrite(
+      { kind: 'compound', projectId: p.id, changes: { meltingPointC: 'hot' } },
+      never,
+    );
     first.stashUnsavedEdits();
 
     const second = await newPage();

@@ -15,7 +15,8 @@ const project = (extra: Record<string, unknown> = {}, chlorideM = 0.12): Project
   compound: DEMO_COMPOUND,
   settings: projectSettingsSchema.parse({ gastricChlorideM: chlorideM, extra }),
 });
-const key = (p: ProjectRecord) => screeningInputsKey({ project: p, candidates: [], measurements: [], customIons: [] });
+const key = (p: ProjectRecord) =>
+  screeningInputsKey({ project: p, candidates: [], measurements: [], customIons: [] });
 
 describe('the screen re-runs only when the physics changes', () => {
   it('moving a weight leaves the key unchanged (the ranking re-weights the stored rows)', () => {
@@ -23,10 +24,18 @@ describe('the screen re-runs only when the physics changes', () => {
   });
   it('changing the gastric chloride or a ΔpKa band changes the key', () => {
     expect(key(project({}, 0.2))).not.toBe(key(project()));
-    expect(key(project({ screening: { deltaPkaBands: { cocrystalBelow: -1, saltAbove: 3, stableSaltMin: 2 } } }))).not.toBe(key(project()));
+    expect(
+      key(
+        project({
+          screening: { deltaPkaBands: { cocrystalBelow: -1, saltAbove: 3, stableSaltMin: 2 } },
+        }),
+      ),
+    ).not.toBe(key(project()));
   });
   it('reads a stored block field by field: an invalid field falls back to its default, valid ones are kept', () => {
-    const s = screeningSettingsOf(project({ screening: { gastricPh: 99, weights: { massCost: 2 } } }));
+    const s = screeningSettingsOf(
+      project({ screening: { gastricPh: 99, weights: { massCost: 2 } } }),
+    );
     expect(s.gastricPh).toBe(1.2);
     expect(s.weights.massCost).toBe(2);
     // The project's own fields win: temperature in °C becomes kelvin (T/K = t/°C + 273.15).

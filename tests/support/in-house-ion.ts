@@ -24,5 +24,9 @@ export function inHouseIon(id: string, name = 'In-house sulfonate', pKa = -1.5):
 }
 
 /** The same ion as a plain record payload (what IndexedDB and project files hold). */
-export const inHouseIonPayload = (id: string, name?: string, pKa?: number): Record<string, unknown> =>
+export const inHouseIonPayload = (
+  id: string,
+  name?: string,
+  pKa?: number,
+): Record<string, unknown> =>
   JSON.parse(JSON.stringify(inHouseIon(id, name, pKa))) as Record<string, unknown>;

@@ -31,7 +31,12 @@ export const compoundSchema = z.object({
   kind: z.enum(['base', 'acid']),
   pKas: z.array(pkaEntrySchema).min(1, 'Give at least one pKa').max(4),
   /** Charge of the salt-forming drug ion: +1/+2 for a base, −1/−2 for an acid. */
-  ionCharge: z.number().int().min(-3).max(3).refine((charge) => charge !== 0, 'The drug ion cannot be neutral'),
+  ionCharge: z
+    .number()
+    .int()
+    .min(-3)
+    .max(3)
+    .refine((charge) => charge !== 0, 'The drug ion cannot be neutral'),
   /** Intrinsic solubility S₀ of the free form, mg/mL, when measured. */
   intrinsicSolubilityMgPerMl: positiveOrNull('Intrinsic solubility', 1e4),
   /** Melting point of the free form, °C. */
@@ -46,7 +51,13 @@ export const compoundSchema = z.object({
   /** Unit-cell volume of the free form's crystal structure, Å³ (optional; added after version 1 records). */
   cellVolumeA3: positiveOrNull('Cell volume', 1e6).optional(),
   /** Formula units (molecules) per unit cell, Z, for `cellVolumeA3`. */
-  formulaUnitsPerCell: z.number().int('Z must be a whole number').min(1, 'Z must be at least 1').max(64, 'Z must be at most 64').nullable().optional(),
+  formulaUnitsPerCell: z
+    .number()
+    .int('Z must be a whole number')
+    .min(1, 'Z must be at least 1')
+    .max(64, 'Z must be at most 64')
+    .nullable()
+    .optional(),
   notes: z.string().max(5000),
 });
 export type Compound = z.infer<typeof compoundSchema>;

@@ -1,6 +1,13 @@
 import { ChemInputError } from '../result';
 import type { Compound } from './compound.schema';
-import { hillFormula, molarMassGPerMol, parseFormula, sameElements, withHydrogens, type ElementCounts } from './formula';
+import {
+  hillFormula,
+  molarMassGPerMol,
+  parseFormula,
+  sameElements,
+  withHydrogens,
+  type ElementCounts,
+} from './formula';
 import type { ParsedStructure } from './structure';
 
 /** The salt-forming drug ion derived from the neutral free form. */
@@ -33,7 +40,11 @@ export function drugIon(
 ): DrugIon {
   const n = Math.abs(compound.ionCharge);
   if (!Number.isInteger(n) || n < 1 || n > 3) {
-    throw new ChemInputError('ionCharge', `charge ${compound.ionCharge} is not usable`, '±1, ±2 or ±3');
+    throw new ChemInputError(
+      'ionCharge',
+      `charge ${compound.ionCharge} is not usable`,
+      '±1, ±2 or ±3',
+    );
   }
   const notes: string[] = [];
   let free: ElementCounts;
@@ -45,7 +56,9 @@ export function drugIon(
       try {
         const typed = parseFormula(compound.formula, 'formula').elements;
         if (!sameElements(typed, free)) {
-          notes.push(`The typed formula ${compound.formula} differs from the structure's ${hillFormula(free)}; the structure is used.`);
+          notes.push(
+            `The typed formula ${compound.formula} differs from the structure's ${hillFormula(free)}; the structure is used.`,
+          );
         }
       } catch {
         notes.push('The typed formula cannot be read; the structure is used.');
@@ -53,7 +66,11 @@ export function drugIon(
     }
   } else {
     if (compound.formula.trim() === '') {
-      throw new ChemInputError('formula', 'give a SMILES or a molecular formula', 'a molecular formula such as C18H20ClN3O');
+      throw new ChemInputError(
+        'formula',
+        'give a SMILES or a molecular formula',
+        'a molecular formula such as C18H20ClN3O',
+      );
     }
     free = parseFormula(compound.formula, 'formula').elements;
     formulaFrom = 'formula';

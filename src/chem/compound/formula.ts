@@ -34,22 +34,26 @@ export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
   if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
   t = t.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT.indexOf(c)));
-  if (Math.abs(charge) > 6) throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
+  if (Math.abs(charge) > 6)
+    throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
 
   const elements: ElementCounts = {};
   const parts = t.split(/[·.*•]/);
   for (const part of parts) {
-    if (part === '') throw new ChemInputError(field, 'an empty part around a hydrate dot', ACCEPTED);
+    if (part === '')
+      throw new ChemInputError(field, 'an empty part around a hydrate dot', ACCEPTED);
     const lead = /^(\d+)(.*)$/.exec(part);
     const multiplier = lead ? Number(lead[1]) : 1;
     const body = lead ? lead[2]! : part;
     const counts = parseGroup(body, field);
-    for (const [el, n] of Object.entries(counts)) elements[el] = (elements[el] ?? 0) + n * multiplier;
+    for (const [el, n] of Object.entries(counts))
+      elements[el] = (elements[el] ?? 0) + n * multiplier;
   }
   for (const [el, n] of Object.entries(elements)) {
     if (n === 0) Reflect.deleteProperty(elements, el);
   }
-  if (Object.keys(elements).length === 0) throw new ChemInputError(field, 'no atoms found', ACCEPTED);
+  if (Object.keys(elements).length === 0)
+    throw new ChemInputError(field, 'no atoms found', ACCEPTED);
   return { elements, charge, hill: hillFormula(elements) };
 }
 
@@ -139,7 +143,11 @@ export function hillFormula(elements: ElementCounts): string {
   const syms = Object.keys(elements).filter((s) => (elements[s] ?? 0) > 0);
   const hasC = syms.includes('C');
   const ordered = hasC
-    ? ['C', ...(syms.includes('H') ? ['H'] : []), ...syms.filter((s) => s !== 'C' && s !== 'H').sort()]
+    ? [
+        'C',
+        ...(syms.includes('H') ? ['H'] : []),
+        ...syms.filter((s) => s !== 'C' && s !== 'H').sort(),
+      ]
     : [...syms].sort();
   return ordered.map((s) => (elements[s] === 1 ? s : `${s}${elements[s]}`)).join('');
 }
@@ -153,7 +161,12 @@ export function molarMassGPerMol(elements: ElementCounts): number {
   let m = 0;
   for (const [el, n] of Object.entries(elements)) {
     const w = ATOMIC_WEIGHTS_G_PER_MOL[el];
-    if (w === undefined) throw new ChemInputError('formula', `element ${el} has no bundled atomic weight`, 'supported elements');
+    if (w === undefined)
+      throw new ChemInputError(
+        'formula',
+        `element ${el} has no bundled atomic weight`,
+        'supported elements',
+      );
     m += w * n;
   }
   return m;
@@ -165,7 +178,11 @@ export function formulaMolarMassGPerMol(formula: string, field = 'formula'): num
 }
 
 /** Add (n > 0) or remove (n < 0) hydrogen atoms, as protonation and deprotonation do. */
-export function withHydrogens(elements: ElementCounts, n: number, field = 'formula'): ElementCounts {
+export function withHydrogens(
+  elements: ElementCounts,
+  n: number,
+  field = 'formula',
+): ElementCounts {
   const h = (elements.H ?? 0) + n;
   if (h < 0) {
     throw new ChemInputError(
@@ -207,7 +224,8 @@ export function conventionalFormula(hill: string): string {
   const hasCH = elements.C !== undefined && elements.H !== undefined;
   if (hasCH) return hill;
   if (others.length === 0 && elements.O !== undefined) return `${n('O')}${n('H')}`;
-  if (others.length === 1 && elements.O === undefined && others[0] === 'N') return `${n('N')}${n('H')}`;
+  if (others.length === 1 && elements.O === undefined && others[0] === 'N')
+    return `${n('N')}${n('H')}`;
   if (others.length === 1 && elements.O !== undefined) return `${n('H')}${n(others[0]!)}${n('O')}`;
   return hill;
 }
@@ -217,6 +235,12 @@ export function formatIonFormula(hill: string, charge: number): string {
   const shown = conventionalFormula(hill);
   if (charge === 0) return shown;
   const mag = Math.abs(charge);
-  const digits = mag === 1 ? '' : String(mag).split('').map((d) => SUPERSCRIPT[Number(d)]).join('');
+  const digits =
+    mag === 1
+      ? ''
+      : String(mag)
+          .split('')
+          .map((d) => SUPERSCRIPT[Number(d)])
+          .join('');
   return `${shown}${digits}${charge > 0 ? '⁺' : '⁻'}`;
 }

@@ -22,7 +22,11 @@ export function freeFormVolumeNm3(input: {
   const { cellVolumeA3, formulaUnitsPerCell, densityGPerCm3 } = input;
   if (cellVolumeA3 != null || formulaUnitsPerCell != null) {
     if (cellVolumeA3 == null || formulaUnitsPerCell == null) {
-      throw new ChemInputError('cellVolumeA3', 'give both the cell volume and Z', 'a cell volume in Å³ with Z ≥ 1');
+      throw new ChemInputError(
+        'cellVolumeA3',
+        'give both the cell volume and Z',
+        'a cell volume in Å³ with Z ≥ 1',
+      );
     }
     const v = requireFiniteInRange('cellVolumeA3', cellVolumeA3, 1, 1e6, 'Å³');
     const z = requireFiniteInRange('formulaUnitsPerCell', formulaUnitsPerCell, 1, 64);
@@ -31,7 +35,9 @@ export function freeFormVolumeNm3(input: {
       value,
       uncertainty: 0.01 * value,
       method: 'cell',
-      sources: ['V_m = V_cell / Z (Glasser & Jenkins 2000, J. Am. Chem. Soc. 122, 632); 1 % uncertainty assumed (common practice)'],
+      sources: [
+        'V_m = V_cell / Z (Glasser & Jenkins 2000, J. Am. Chem. Soc. 122, 632); 1 % uncertainty assumed (common practice)',
+      ],
     };
   }
   if (densityGPerCm3 != null) {
@@ -42,7 +48,9 @@ export function freeFormVolumeNm3(input: {
       value,
       uncertainty: 0.02 * value,
       method: 'density',
-      sources: ['V_m = M / (ρ·N_A) (Glasser & Jenkins 2000); N_A exact (SI 2019); 2 % uncertainty assumed (common practice)'],
+      sources: [
+        'V_m = M / (ρ·N_A) (Glasser & Jenkins 2000); N_A exact (SI 2019); 2 % uncertainty assumed (common practice)',
+      ],
     };
   }
   return null;

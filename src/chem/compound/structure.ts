@@ -27,7 +27,9 @@ export interface ParsedStructure {
 /** The chemistry library (loaded on demand) could not be loaded: no verdict on the SMILES is possible. */
 export class StructureLibraryUnavailableError extends Error {
   constructor(cause: unknown) {
-    super(`the chemistry library could not be loaded (${cause instanceof Error ? cause.message : String(cause)})`);
+    super(
+      `the chemistry library could not be loaded (${cause instanceof Error ? cause.message : String(cause)})`,
+    );
     this.name = 'StructureLibraryUnavailableError';
   }
 }
@@ -43,10 +45,14 @@ const OCL_LOGP_UNCERTAINTY = 0.5;
  * rings as openchemlib perceives them.
  * @throws ChemInputError (field `smiles`) for an empty or unparsable SMILES.
  */
-export async function parseStructure(smiles: string, opts: { widthPx?: number; heightPx?: number } = {}): Promise<ParsedStructure> {
+export async function parseStructure(
+  smiles: string,
+  opts: { widthPx?: number; heightPx?: number } = {},
+): Promise<ParsedStructure> {
   const text = typeof smiles === 'string' ? smiles.trim() : '';
   if (text === '') throw new ChemInputError('smiles', 'the SMILES is empty', ACCEPTED);
-  if (text.length > 2000) throw new ChemInputError('smiles', 'the SMILES is longer than 2000 characters', ACCEPTED);
+  if (text.length > 2000)
+    throw new ChemInputError('smiles', 'the SMILES is longer than 2000 characters', ACCEPTED);
   let ocl: typeof OpenChemLib;
   try {
     ocl = await import('openchemlib');
@@ -81,7 +87,9 @@ export async function parseStructure(smiles: string, opts: { widthPx?: number; h
         value,
         uncertainty: OCL_LOGP_UNCERTAINTY,
         method: 'computed (openchemlib logP increments)',
-        sources: ['openchemlib MoleculeProperties.logP (atom-type increment method); uncertainty ±0.5 from memory'],
+        sources: [
+          'openchemlib MoleculeProperties.logP (atom-type increment method); uncertainty ±0.5 from memory',
+        ],
       };
     }
   } catch {
@@ -89,8 +97,10 @@ export async function parseStructure(smiles: string, opts: { widthPx?: number; h
   }
 
   const notes: string[] = [];
-  if (fragments > 1) notes.push(`The structure has ${fragments} separate parts; enter the free form alone.`);
-  if (netCharge !== 0) notes.push(`The structure carries a net charge of ${netCharge}; enter the neutral free form.`);
+  if (fragments > 1)
+    notes.push(`The structure has ${fragments} separate parts; enter the free form alone.`);
+  if (netCharge !== 0)
+    notes.push(`The structure carries a net charge of ${netCharge}; enter the neutral free form.`);
 
   return {
     formula: parsed.hill,
@@ -100,7 +110,10 @@ export async function parseStructure(smiles: string, opts: { widthPx?: number; h
     rings: { aromatic, nonAromatic: sssr - aromatic },
     heavyAtoms,
     fragments,
-    svg: mol.toSVG(opts.widthPx ?? 320, opts.heightPx ?? 220, 'saltsmith-structure', { autoCrop: true, autoCropMargin: 10 }),
+    svg: mol.toSVG(opts.widthPx ?? 320, opts.heightPx ?? 220, 'saltsmith-structure', {
+      autoCrop: true,
+      autoCropMargin: 10,
+    }),
     ...(logP ? { logP } : {}),
     notes,
   };

@@ -7,8 +7,10 @@ import { SRC_FORMULA, SRC_SMILES } from './sources';
  * One row of the library as a reviewer reads it. Molar masses, formulas of other charge states and
  * the per-field source record are derived from it by {@link buildCounterIon}, so no mass is typed by hand.
  */
-export interface CounterIonRow
-  extends Pick<CounterIon, 'id' | 'name' | 'synonyms' | 'kind' | 'formula' | 'charge' | 'ionSmiles'> {
+export interface CounterIonRow extends Pick<
+  CounterIon,
+  'id' | 'name' | 'synonyms' | 'kind' | 'formula' | 'charge' | 'ionSmiles'
+> {
   /** [aromatic, non-aromatic] ring counts of the ion. */
   rings: [number, number];
   parent: { name: string; formula: string; smiles: string };
@@ -33,21 +35,23 @@ export interface CounterIonRow
 export function buildCounterIon(row: CounterIonRow): CounterIon {
   const ion = parseFormula(row.formula, `${row.id}.formula`);
   const parent = parseFormula(row.parent.formula, `${row.id}.parent.formula`);
-  const stoichiometries = row.stoichiometries.map(([label, drugPerSalt, counterIonPerSalt, ionCharge, pKaIndex]) => {
-    const elements =
-      row.fixedCharge || ionCharge === row.charge
-        ? ion.elements
-        : withHydrogens(ion.elements, ionCharge - row.charge, `${row.id}.stoichiometries`);
-    return {
-      label,
-      drugPerSalt,
-      counterIonPerSalt,
-      ionCharge,
-      ionFormula: hillFormula(elements),
-      ionMolarMassGPerMol: round4(molarMassGPerMol(elements)),
-      pKaIndex,
-    };
-  });
+  const stoichiometries = row.stoichiometries.map(
+    ([label, drugPerSalt, counterIonPerSalt, ionCharge, pKaIndex]) => {
+      const elements =
+        row.fixedCharge || ionCharge === row.charge
+          ? ion.elements
+          : withHydrogens(ion.elements, ionCharge - row.charge, `${row.id}.stoichiometries`);
+      return {
+        label,
+        drugPerSalt,
+        counterIonPerSalt,
+        ionCharge,
+        ionFormula: hillFormula(elements),
+        ionMolarMassGPerMol: round4(molarMassGPerMol(elements)),
+        pKaIndex,
+      };
+    },
+  );
   const pKaSources = [...new Set(row.pKas.map((p) => p.source))];
   return {
     id: row.id,

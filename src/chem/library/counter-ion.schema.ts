@@ -3,7 +3,11 @@ import { hillFormula, molarMassGPerMol, parseFormula, withHydrogens } from '../c
 import { ChemInputError } from '../result';
 import type { CounterIon } from './counter-ion.types';
 
-const pkaValue = z.number().finite().min(-10, 'pKa must be at least −10').max(20, 'pKa must be at most 20');
+const pkaValue = z
+  .number()
+  .finite()
+  .min(-10, 'pKa must be at least −10')
+  .max(20, 'pKa must be at most 20');
 const classSchema = z.union([z.literal(1), z.literal(2), z.literal(3)]).nullable();
 const positiveMass = z.number().finite().positive('Molar mass must be greater than zero').max(5000);
 
@@ -14,11 +18,24 @@ export const counterIonSchema = z.object({
   synonyms: z.array(z.string().max(120)).max(30),
   kind: z.enum(['anion', 'cation']),
   formula: z.string().min(1).max(200),
-  charge: z.number().int().min(-4).max(4).refine((c) => c !== 0, 'An ion cannot be neutral'),
+  charge: z
+    .number()
+    .int()
+    .min(-4)
+    .max(4)
+    .refine((c) => c !== 0, 'An ion cannot be neutral'),
   ionSmiles: z.string().max(2000),
-  rings: z.object({ aromatic: z.number().int().min(0).max(30), nonAromatic: z.number().int().min(0).max(30) }),
+  rings: z.object({
+    aromatic: z.number().int().min(0).max(30),
+    nonAromatic: z.number().int().min(0).max(30),
+  }),
   molarMassGPerMol: positiveMass,
-  parent: z.object({ name: z.string().max(200), formula: z.string().max(200), smiles: z.string().max(2000), molarMassGPerMol: positiveMass }),
+  parent: z.object({
+    name: z.string().max(200),
+    formula: z.string().max(200),
+    smiles: z.string().max(2000),
+    molarMassGPerMol: positiveMass,
+  }),
   pKas: z.array(z.object({ value: pkaValue, source: z.string().min(1).max(500) })).max(6),
   stoichiometries: z
     .array(
@@ -26,7 +43,12 @@ export const counterIonSchema = z.object({
         label: z.string().min(1).max(120),
         drugPerSalt: z.number().int().min(1).max(4),
         counterIonPerSalt: z.number().int().min(1).max(4),
-        ionCharge: z.number().int().min(-4).max(4).refine((c) => c !== 0, 'An ion cannot be neutral'),
+        ionCharge: z
+          .number()
+          .int()
+          .min(-4)
+          .max(4)
+          .refine((c) => c !== 0, 'An ion cannot be neutral'),
         ionFormula: z.string().min(1).max(200),
         ionMolarMassGPerMol: positiveMass,
         pKaIndex: z.number().int().min(0).nullable(),
@@ -82,7 +104,8 @@ export const counterIonEditSchema = z
 export type CounterIonEdit = z.infer<typeof counterIonEditSchema>;
 
 export const IN_HOUSE_SOURCE = 'in-house entry (entered by the user; not checked by Saltsmith)';
-export const EDIT_SOURCE = 'edited for this project by the user (bundled value kept and restorable)';
+export const EDIT_SOURCE =
+  'edited for this project by the user (bundled value kept and restorable)';
 
 /**
  * Build a full in-house {@link CounterIon} from validated form input.
@@ -97,20 +120,34 @@ export function buildCustomCounterIon(input: CustomCounterIonInput, id: string):
   const v = parsed.data;
   const ion = parseFormula(v.formula, 'formula');
   if (ion.charge !== 0 && ion.charge !== v.charge) {
-    throw new ChemInputError('formula', `the formula says charge ${ion.charge} but the charge field says ${v.charge}`, 'one charge');
+    throw new ChemInputError(
+      'formula',
+      `the formula says charge ${ion.charge} but the charge field says ${v.charge}`,
+      'one charge',
+    );
   }
   // Parent acid: the anion plus its protons; parent base: the cation minus its protons when it has them.
   let parentElements = ion.elements;
   if (v.kind === 'anion') parentElements = withHydrogens(ion.elements, -v.charge);
-  else if ((ion.elements.H ?? 0) >= v.charge) parentElements = withHydrogens(ion.elements, -v.charge);
+  else if ((ion.elements.H ?? 0) >= v.charge)
+    parentElements = withHydrogens(ion.elements, -v.charge);
   const mass = molarMassGPerMol(ion.elements);
-  const pKas = [...v.pKas].sort((a, b) => a - b).map((value) => ({ value, source: v.pKaSource || IN_HOUSE_SOURCE }));
+  const pKas = [...v.pKas]
+    .sort((a, b) => a - b)
+    .map((value) => ({ value, source: v.pKaSource || IN_HOUSE_SOURCE }));
   const n = Math.abs(v.charge);
   const stoich =
     v.kind === 'anion'
       ? { label: `${v.name} (${n}:1)`, drugPerSalt: n, counterIonPerSalt: 1 }
       : { label: `${v.name} (${n}:1)`, drugPerSalt: n, counterIonPerSalt: 1 };
-  const pKaIndex = pKas.length === 0 ? null : v.kind === 'anion' ? Math.min(n - 1, pKas.length - 1) : pKas.length - n >= 0 ? pKas.length - n : 0;
+  const pKaIndex =
+    pKas.length === 0
+      ? null
+      : v.kind === 'anion'
+        ? Math.min(n - 1, pKas.length - 1)
+        : pKas.length - n >= 0
+          ? pKas.length - n
+          : 0;
   return {
     id,
     name: v.name,
@@ -129,14 +166,21 @@ export function buildCustomCounterIon(input: CustomCounterIonInput, id: string):
     },
     pKas,
     stoichiometries: [
-      { ...stoich, ionCharge: v.charge, ionFormula: ion.hill, ionMolarMassGPerMol: Math.round(mass * 1e4) / 1e4, pKaIndex },
+      {
+        ...stoich,
+        ionCharge: v.charge,
+        ionFormula: ion.hill,
+        ionMolarMassGPerMol: Math.round(mass * 1e4) / 1e4,
+        pKaIndex,
+      },
     ],
     acceptabilityClass: v.acceptabilityClass,
     classSource: v.acceptabilityClass === null ? 'not set' : IN_HOUSE_SOURCE,
     tradeNote: v.tradeNote,
     sources: {
       formula: IN_HOUSE_SOURCE,
-      molarMassGPerMol: 'computed from the in-house formula with IUPAC 2021 standard atomic weights',
+      molarMassGPerMol:
+        'computed from the in-house formula with IUPAC 2021 standard atomic weights',
       pKas: v.pKaSource || IN_HOUSE_SOURCE,
       acceptabilityClass: IN_HOUSE_SOURCE,
       tradeNote: IN_HOUSE_SOURCE,

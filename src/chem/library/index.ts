@@ -16,7 +16,9 @@ export * from './merge-library';
 export * as librarySources from './sources';
 
 /** Every bundled counter-ion, built once from {@link COUNTER_ION_ROWS}. */
-export const COUNTER_IONS: readonly CounterIon[] = Object.freeze(COUNTER_ION_ROWS.map(buildCounterIon));
+export const COUNTER_IONS: readonly CounterIon[] = Object.freeze(
+  COUNTER_ION_ROWS.map(buildCounterIon),
+);
 
 const byId = new Map(COUNTER_IONS.map((ion) => [ion.id, ion]));
 

@@ -1,4 +1,9 @@
-import { counterIonEditSchema, counterIonSchema, EDIT_SOURCE, type CounterIonEdit } from './counter-ion.schema';
+import {
+  counterIonEditSchema,
+  counterIonSchema,
+  EDIT_SOURCE,
+  type CounterIonEdit,
+} from './counter-ion.schema';
 import type { CounterIon, LibraryIon } from './counter-ion.types';
 
 /** A stored in-house ion or per-project edit, as the persistence layer hands it over (plain data). */
@@ -10,12 +15,18 @@ export interface StoredIonRecord {
 }
 
 /** Apply a per-project edit to a bundled ion; the original is kept on the result. */
-export function applyCounterIonEdit(base: CounterIon, edit: CounterIonEdit, recordId?: string): LibraryIon {
+export function applyCounterIonEdit(
+  base: CounterIon,
+  edit: CounterIonEdit,
+  recordId?: string,
+): LibraryIon {
   const valid = counterIonEditSchema.parse(edit);
   const editedFields: string[] = [];
   const next: CounterIon = { ...base, sources: { ...base.sources } };
   if (valid.pKas !== undefined) {
-    next.pKas = [...valid.pKas].sort((a, b) => a - b).map((value) => ({ value, source: EDIT_SOURCE }));
+    next.pKas = [...valid.pKas]
+      .sort((a, b) => a - b)
+      .map((value) => ({ value, source: EDIT_SOURCE }));
     // Keep each stoichiometry's limiting-pKa index inside the edited list.
     next.stoichiometries = base.stoichiometries.map((s) => ({
       ...s,
@@ -72,17 +83,28 @@ export function mergeLibrary(
     // An in-house ion never replaces a bundled ion or another in-house ion (only an explicit
     // per-project edit changes a bundled ion): a record whose library id is taken is left out.
     if (bundledIds.has(parsed.data.id) || inHouse.some((i) => i.id === parsed.data.id)) {
-      rejected.push({ recordId: r.id, reason: `its id "${parsed.data.id}" belongs to another library ion` });
+      rejected.push({
+        recordId: r.id,
+        reason: `its id "${parsed.data.id}" belongs to another library ion`,
+      });
       continue;
     }
-    inHouse.push({ ...(parsed.data as CounterIon), origin: 'in-house', editedFields: [], recordId: r.id });
+    inHouse.push({
+      ...(parsed.data as CounterIon),
+      origin: 'in-house',
+      editedFields: [],
+      recordId: r.id,
+    });
   }
   const ions: LibraryIon[] = bundled.map((b) => {
     const edit = edits.get(b.id);
     if (!edit) return { ...b, origin: 'bundled', editedFields: [] };
     const parsed = counterIonEditSchema.safeParse(edit.ion);
     if (!parsed.success) {
-      rejected.push({ recordId: edit.id, reason: parsed.error.issues[0]?.message ?? 'invalid edit' });
+      rejected.push({
+        recordId: edit.id,
+        reason: parsed.error.issues[0]?.message ?? 'invalid edit',
+      });
       return { ...b, origin: 'bundled', editedFields: [] };
     }
     return applyCounterIonEdit(b, parsed.data, edit.id);

@@ -35,7 +35,10 @@ export function counterIonDeltaPka(
   const values = compound.pKas.map((p) => p.value).filter(Number.isFinite);
   if (values.length === 0 || stoichiometry.pKaIndex === null) return null;
   const n = Math.max(1, Math.abs(compound.ionCharge));
-  const ordered = compound.kind === 'base' ? [...values].sort((a, b) => b - a) : [...values].sort((a, b) => a - b);
+  const ordered =
+    compound.kind === 'base'
+      ? [...values].sort((a, b) => b - a)
+      : [...values].sort((a, b) => a - b);
   const drugPka = ordered[Math.min(n, ordered.length) - 1]!;
   const ionPka = ion.pKas[stoichiometry.pKaIndex]?.value;
   if (ionPka === undefined) return null;
@@ -51,8 +54,13 @@ export type LocalSaltVerdict = 'salt-likely' | 'uncertain' | 'salt-unlikely';
  * Org. Process Res. Dev. 4, 427, quote 2–3); below −1 a neutral cocrystal is almost always found
  * (Cruz-Cabeza 2012, CrystEngComm 14, 6362). Thresholds are common practice, not constants.
  */
-export function localSaltVerdict(deltaPka: number): { verdict: LocalSaltVerdict; label: string; basis: string } {
-  const basis = 'common practice: ΔpKa ≥ 2 (Stahl & Wermuth 2002); < −1 cocrystal (Cruz-Cabeza 2012)';
+export function localSaltVerdict(deltaPka: number): {
+  verdict: LocalSaltVerdict;
+  label: string;
+  basis: string;
+} {
+  const basis =
+    'common practice: ΔpKa ≥ 2 (Stahl & Wermuth 2002); < −1 cocrystal (Cruz-Cabeza 2012)';
   if (deltaPka >= 2) return { verdict: 'salt-likely', label: 'salt expected', basis };
   if (deltaPka < -1) return { verdict: 'salt-unlikely', label: 'no salt expected', basis };
   return { verdict: 'uncertain', label: 'salt uncertain', basis };
@@ -79,7 +87,11 @@ export interface CounterIonFilters {
   pairedOnly?: boolean;
 }
 
-const norm = (s: string) => s.toLowerCase().normalize('NFKD').replace(/[\s\-_,′'()]+/g, '');
+const norm = (s: string) =>
+  s
+    .toLowerCase()
+    .normalize('NFKD')
+    .replace(/[\s\-_,′'()]+/g, '');
 
 /** Best (largest) ΔpKa of an ion over its stoichiometries, or null. */
 export function bestDeltaPka(partner: PkaPartner, ion: CounterIon): DeltaPka | null {
@@ -113,7 +125,11 @@ export function searchCounterIons<T extends CounterIon>(
 
 function matchScore(ion: CounterIon, q: string): number {
   const names = [ion.name, ion.id, ...ion.synonyms, ion.parent.name].map(norm);
-  const formulas = [ion.formula, ion.parent.formula, ...ion.stoichiometries.map((s) => s.ionFormula)].map(norm);
+  const formulas = [
+    ion.formula,
+    ion.parent.formula,
+    ...ion.stoichiometries.map((s) => s.ionFormula),
+  ].map(norm);
   if (names.includes(q) || formulas.includes(q)) return 0;
   if (names.some((n) => n.startsWith(q))) return 1;
   if (formulas.some((f) => f.startsWith(q))) return 2;
@@ -129,8 +145,14 @@ function passes(ion: CounterIon, f: CounterIonFilters): boolean {
     const cls = ion.acceptabilityClass ?? 'none';
     if (!f.classes.includes(cls)) return false;
   }
-  if (f.charge !== undefined && f.charge !== 0 && !ion.stoichiometries.some((s) => s.ionCharge === f.charge)) return false;
-  if (f.stoichiometry && !ion.stoichiometries.some((s) => stoichiometryKey(s) === f.stoichiometry)) return false;
+  if (
+    f.charge !== undefined &&
+    f.charge !== 0 &&
+    !ion.stoichiometries.some((s) => s.ionCharge === f.charge)
+  )
+    return false;
+  if (f.stoichiometry && !ion.stoichiometries.some((s) => stoichiometryKey(s) === f.stoichiometry))
+    return false;
   if (f.partner) {
     const paired = (f.partner.kind === 'base') === (ion.kind === 'anion');
     if (f.pairedOnly && !paired) return false;

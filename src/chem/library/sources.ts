@@ -71,7 +71,8 @@ export const SRC_SMILES =
 export const SRC_FORMULA =
   'Hill formula of the ion; tests/chem/library check it against openchemlib applied to the ion SMILES';
 
-export const SRC_TRADE_MEMORY = 'note of the trade from memory (general pre-formulation experience; not a measurement)';
+export const SRC_TRADE_MEMORY =
+  'note of the trade from memory (general pre-formulation experience; not a measurement)';
 
 export const SRC_SERAJUDDIN_2007 =
   'A. T. M. Serajuddin, Adv. Drug Deliv. Rev. 59 (2007) 603–616 (common-ion effect of gastric chloride)';

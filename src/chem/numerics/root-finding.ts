@@ -23,7 +23,8 @@ export function brentRoot(
 ): RootResult {
   let fa = f(a);
   let fb = f(b);
-  if (!Number.isFinite(fa) || !Number.isFinite(fb)) throw new RangeError('brentRoot: f is not finite at the bracket');
+  if (!Number.isFinite(fa) || !Number.isFinite(fb))
+    throw new RangeError('brentRoot: f is not finite at the bracket');
   if (fa === 0) return { root: a, iterations: 0, converged: true };
   if (fb === 0) return { root: b, iterations: 0, converged: true };
   if (fa * fb > 0) throw new RangeError('brentRoot: the bracket does not change sign');

@@ -21,7 +21,11 @@ export interface DeltaPkaBands {
   stableSaltMin: number;
 }
 
-export const DEFAULT_DELTA_PKA_BANDS: DeltaPkaBands = { cocrystalBelow: -1, saltAbove: 4, stableSaltMin: 2 };
+export const DEFAULT_DELTA_PKA_BANDS: DeltaPkaBands = {
+  cocrystalBelow: -1,
+  saltAbove: 4,
+  stableSaltMin: 2,
+};
 
 /** ΔpKa = pKa(protonated base) − pKa(acid). */
 export function deltaPka(pKaProtonatedBase: number, pKaAcid: number): number {
@@ -47,7 +51,10 @@ export interface SaltFormationVerdict {
  * from memory) clamped to 0–1, at least 95 % above the salt band and at most 5 % below the cocrystal
  * band ("almost always"). Allocation-free, for the Monte Carlo.
  */
-export function saltProbabilityFor(dpKa: number, bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS): number {
+export function saltProbabilityFor(
+  dpKa: number,
+  bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS,
+): number {
   const linear = (17 * dpKa + 28) / 100;
   const clamped = linear < 0 ? 0 : linear > 1 ? 1 : linear;
   if (dpKa > bands.saltAbove) return Math.max(clamped, 0.95);
@@ -56,9 +63,13 @@ export function saltProbabilityFor(dpKa: number, bands: DeltaPkaBands = DEFAULT_
 }
 
 /** The verdict for one ΔpKa, with the bands named in words. */
-export function saltFormationVerdict(dpKa: number, bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS): SaltFormationVerdict {
+export function saltFormationVerdict(
+  dpKa: number,
+  bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS,
+): SaltFormationVerdict {
   requireFiniteInRange('deltaPka', dpKa, -30, 30);
-  const band: SaltFormationBand = dpKa > bands.saltAbove ? 'salt' : dpKa < bands.cocrystalBelow ? 'cocrystal' : 'uncertain';
+  const band: SaltFormationBand =
+    dpKa > bands.saltAbove ? 'salt' : dpKa < bands.cocrystalBelow ? 'cocrystal' : 'uncertain';
   const saltProbability = saltProbabilityFor(dpKa, bands);
   const meets = dpKa >= bands.stableSaltMin;
   const d = dpKa.toFixed(1);
@@ -83,14 +94,22 @@ export function saltDeltaPka(
   counterIonCharge: number,
 ): number | null {
   const drugIsBase = drugIonCharge > 0;
-  const drugPka = drugIsBase ? linkingPka(drug, drugIonCharge - 1) : linkingPka(drug, drugIonCharge);
-  const ionPka = drugIsBase ? linkingPka(counterIon, counterIonCharge) : linkingPka(counterIon, counterIonCharge - 1);
+  const drugPka = drugIsBase
+    ? linkingPka(drug, drugIonCharge - 1)
+    : linkingPka(drug, drugIonCharge);
+  const ionPka = drugIsBase
+    ? linkingPka(counterIon, counterIonCharge)
+    : linkingPka(counterIon, counterIonCharge - 1);
   if (drugPka === undefined || ionPka === undefined) return null;
   return drugIsBase ? drugPka - ionPka : ionPka - drugPka;
 }
 
 /** ΔpKa against every pKa of the counter-ion (for display: which protons the drug can take or give). */
-export function deltaPkaAgainstEach(drugPka: number, counterIonPkas: readonly number[], drugIsBase: boolean): number[] {
+export function deltaPkaAgainstEach(
+  drugPka: number,
+  counterIonPkas: readonly number[],
+  drugIsBase: boolean,
+): number[] {
   return counterIonPkas.map((p) => (drugIsBase ? deltaPka(drugPka, p) : deltaPka(p, drugPka)));
 }
 
@@ -116,20 +135,30 @@ export function sensibleStoichiometries(
   bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS,
 ): StoichiometryOption[] {
   const out: StoichiometryOption[] = [];
-  const drugCharges = Array.from({ length: drug.pKas.length }, (_, k) => (drugIsBase ? k + 1 : -(k + 1)));
+  const drugCharges = Array.from({ length: drug.pKas.length }, (_, k) =>
+    drugIsBase ? k + 1 : -(k + 1),
+  );
   const ionCharges: number[] = [];
   for (let k = 0; k <= counterIon.pKas.length; k++) {
     const z = counterIon.mostProtonatedCharge - k;
     if (drugIsBase ? z < 0 : z > 0) ionCharges.push(z);
   }
-  if (counterIon.pKas.length === 0 && counterIon.mostProtonatedCharge !== 0) ionCharges.push(counterIon.mostProtonatedCharge);
+  if (counterIon.pKas.length === 0 && counterIon.mostProtonatedCharge !== 0)
+    ionCharges.push(counterIon.mostProtonatedCharge);
   for (const zd of drugCharges) {
     for (const zx of ionCharges) {
       const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(zd, zx);
       if (m > 4 || n > 4) continue;
       const d = saltDeltaPka(drug, zd, counterIon, zx);
       if (d !== null && d < bands.cocrystalBelow) continue;
-      out.push({ drugPerSalt: m, counterIonPerSalt: n, drugIonCharge: zd, counterIonCharge: zx, deltaPka: d, label: `${m}:${n}` });
+      out.push({
+        drugPerSalt: m,
+        counterIonPerSalt: n,
+        drugIonCharge: zd,
+        counterIonCharge: zx,
+        deltaPka: d,
+        label: `${m}:${n}`,
+      });
     }
   }
   return out.sort((a, b) => (b.deltaPka ?? 99) - (a.deltaPka ?? 99));

@@ -22,11 +22,29 @@ export function disproportionationRisk(
 ): DisproportionationResult {
   requireFiniteInRange('microenvironmentPh', microenvironmentPh, 0, 14);
   if (phMax === null) {
-    return { risk: 'unknown', marginPh: null, reason: 'pH_max lies outside pH 0–14, so no disproportionation check was possible' };
+    return {
+      risk: 'unknown',
+      marginPh: null,
+      reason: 'pH_max lies outside pH 0–14, so no disproportionation check was possible',
+    };
   }
   const margin = drugKind === 'base' ? phMax - microenvironmentPh : microenvironmentPh - phMax;
   const where = `pH_max ${phMax.toFixed(1)} vs microenvironment pH ${microenvironmentPh.toFixed(1)}`;
-  if (margin < 0) return { risk: 'high', marginPh: margin, reason: `may convert to the free form in the dose form (${where})` };
-  if (margin < 1) return { risk: 'watch', marginPh: margin, reason: `less than one pH unit from disproportionation (${where})` };
-  return { risk: 'low', marginPh: margin, reason: `salt side by ${margin.toFixed(1)} pH units (${where})` };
+  if (margin < 0)
+    return {
+      risk: 'high',
+      marginPh: margin,
+      reason: `may convert to the free form in the dose form (${where})`,
+    };
+  if (margin < 1)
+    return {
+      risk: 'watch',
+      marginPh: margin,
+      reason: `less than one pH unit from disproportionation (${where})`,
+    };
+  return {
+    risk: 'low',
+    marginPh: margin,
+    reason: `salt side by ${margin.toFixed(1)} pH units (${where})`,
+  };
 }

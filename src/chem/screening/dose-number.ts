@@ -12,12 +12,22 @@ export const ICH_M9_VOLUME_ML = 250;
 export const ICH_M9_PH_RANGE = [1.2, 6.8] as const;
 
 /** D₀ = (dose / volume) / S, with S in mg/mL (free-form equivalents). */
-export function doseNumber(doseMg: number, solubilityMgPerMl: number, volumeMl = ICH_M9_VOLUME_ML): number {
-  if (!(Number.isFinite(doseMg) && doseMg > 0)) throw new ChemInputError('doseMg', `must be greater than zero, got ${doseMg}`, 'a dose > 0 mg');
+export function doseNumber(
+  doseMg: number,
+  solubilityMgPerMl: number,
+  volumeMl = ICH_M9_VOLUME_ML,
+): number {
+  if (!(Number.isFinite(doseMg) && doseMg > 0))
+    throw new ChemInputError('doseMg', `must be greater than zero, got ${doseMg}`, 'a dose > 0 mg');
   if (!(Number.isFinite(solubilityMgPerMl) && solubilityMgPerMl > 0)) {
-    throw new ChemInputError('solubility', `must be greater than zero, got ${solubilityMgPerMl}`, 'a solubility > 0 mg/mL');
+    throw new ChemInputError(
+      'solubility',
+      `must be greater than zero, got ${solubilityMgPerMl}`,
+      'a solubility > 0 mg/mL',
+    );
   }
-  if (!(Number.isFinite(volumeMl) && volumeMl > 0)) throw new ChemInputError('volumeMl', `must be greater than zero`, 'a volume > 0 mL');
+  if (!(Number.isFinite(volumeMl) && volumeMl > 0))
+    throw new ChemInputError('volumeMl', `must be greater than zero`, 'a volume > 0 mL');
   return doseMg / volumeMl / solubilityMgPerMl;
 }
 
@@ -35,12 +45,24 @@ export interface SolubilityClassResult {
  * ICH M9 class from solubilities at several pH values (mg/mL, free-form equivalents). Only the
  * points inside pH 1.2–6.8 count (ICH M9 asks at least pH 1.2, 4.5 and 6.8 and the pKa if inside).
  */
-export function solubilityClass(doseMg: number, points: readonly { pH: number; solubilityMgPerMl: number }[]): SolubilityClassResult {
-  const inside = points.filter((p) => p.pH >= ICH_M9_PH_RANGE[0] - 1e-9 && p.pH <= ICH_M9_PH_RANGE[1] + 1e-9);
+export function solubilityClass(
+  doseMg: number,
+  points: readonly { pH: number; solubilityMgPerMl: number }[],
+): SolubilityClassResult {
+  const inside = points.filter(
+    (p) => p.pH >= ICH_M9_PH_RANGE[0] - 1e-9 && p.pH <= ICH_M9_PH_RANGE[1] + 1e-9,
+  );
   if (inside.length === 0) {
-    throw new ChemInputError('points', 'no solubility inside pH 1.2–6.8', 'at least one solubility between pH 1.2 and 6.8');
+    throw new ChemInputError(
+      'points',
+      'no solubility inside pH 1.2–6.8',
+      'at least one solubility between pH 1.2 and 6.8',
+    );
   }
-  const doseNumbers = inside.map((p) => ({ pH: p.pH, doseNumber: doseNumber(doseMg, p.solubilityMgPerMl) }));
+  const doseNumbers = inside.map((p) => ({
+    pH: p.pH,
+    doseNumber: doseNumber(doseMg, p.solubilityMgPerMl),
+  }));
   const worst = doseNumbers.reduce((a, b) => (b.doseNumber > a.doseNumber ? b : a));
   return {
     solubilityClass: worst.doseNumber <= 1 ? 'high' : 'low',

@@ -8,15 +8,23 @@ import { requireFiniteInRange } from '../result';
  * Below 0.2 % the text defines no class; "non-hygroscopic" is common practice.
  * (Limits from memory of the Ph. Eur. text.)
  */
-export type HygroscopicityClass = 'non-hygroscopic' | 'slightly hygroscopic' | 'hygroscopic' | 'very hygroscopic' | 'deliquescent';
+export type HygroscopicityClass =
+  'non-hygroscopic' | 'slightly hygroscopic' | 'hygroscopic' | 'very hygroscopic' | 'deliquescent';
 
-export const PH_EUR_HYGROSCOPICITY_LIMITS_PERCENT = { slightly: 0.2, hygroscopic: 2, very: 15 } as const;
+export const PH_EUR_HYGROSCOPICITY_LIMITS_PERCENT = {
+  slightly: 0.2,
+  hygroscopic: 2,
+  very: 15,
+} as const;
 
 /**
  * Class from a measured mass gain (% w/w) at 80 % RH. `liquefied` marks a sample that turned liquid
  * (deliquescence cannot be told from the number alone).
  */
-export function hygroscopicityClass(massGainPercent: number, liquefied = false): HygroscopicityClass {
+export function hygroscopicityClass(
+  massGainPercent: number,
+  liquefied = false,
+): HygroscopicityClass {
   requireFiniteInRange('massGainPercent', massGainPercent, -5, 1000, '%');
   if (liquefied) return 'deliquescent';
   const L = PH_EUR_HYGROSCOPICITY_LIMITS_PERCENT;

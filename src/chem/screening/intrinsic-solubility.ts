@@ -27,12 +27,23 @@ export function gseLog10IntrinsicSolubilityM(meltingPointC: number, logP: number
  * (Schröder–van Laar equation; e.g. Prausnitz, Lichtenthaler & de Azevedo, "Molecular
  * Thermodynamics of Fluid-Phase Equilibria", 3rd ed., ch. 11). Returns x ≤ 1 (1 above the melting point).
  */
-export function idealSolubilityMoleFraction(fusionEnthalpyKJ: number, meltingPointK: number, temperatureK: number): number {
+export function idealSolubilityMoleFraction(
+  fusionEnthalpyKJ: number,
+  meltingPointK: number,
+  temperatureK: number,
+): number {
   requireFiniteInRange('fusionEnthalpyKJ', fusionEnthalpyKJ, 0, 500, 'kJ/mol');
   requireFiniteInRange('meltingPointK', meltingPointK, 1, 1000, 'K');
   if (!(Number.isFinite(temperatureK) && temperatureK > 0)) {
-    throw new ChemInputError('temperatureK', `must be above 0 K, got ${temperatureK}`, 'a temperature > 0 K');
+    throw new ChemInputError(
+      'temperatureK',
+      `must be above 0 K, got ${temperatureK}`,
+      'a temperature > 0 K',
+    );
   }
   if (temperatureK >= meltingPointK) return 1;
-  return Math.exp(-((fusionEnthalpyKJ * 1000) / GAS_CONSTANT_J_PER_MOL_K) * (1 / temperatureK - 1 / meltingPointK));
+  return Math.exp(
+    -((fusionEnthalpyKJ * 1000) / GAS_CONSTANT_J_PER_MOL_K) *
+      (1 / temperatureK - 1 / meltingPointK),
+  );
 }

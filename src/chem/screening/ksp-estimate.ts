@@ -79,7 +79,11 @@ export function estimateKsp(i: KspEstimateInput): KspEstimate {
     `anchor: salt-limited solubility ${anchor} decades above S₀ (common practice, σ ${tau} decade)`,
   ];
   const dH = i.solutionEnthalpyKJ;
-  if (dH && i.referenceSolutionEnthalpyPerDrugKJ !== undefined && i.referenceSolutionEnthalpyPerDrugKJ !== null) {
+  if (
+    dH &&
+    i.referenceSolutionEnthalpyPerDrugKJ !== undefined &&
+    i.referenceSolutionEnthalpyPerDrugKJ !== null
+  ) {
     raw = -(dH.value - m * i.referenceSolutionEnthalpyPerDrugKJ) / ((m + n) * perDecade);
     rawSigma = Math.max(dH.uncertainty, 1e-9) / ((m + n) * perDecade);
     const w = (tau * tau) / (tau * tau + rawSigma * rawSigma);
@@ -107,7 +111,13 @@ export function estimateKsp(i: KspEstimateInput): KspEstimate {
       sources,
       notes: ['ESTIMATE — no salt solubility measured', ...notes],
     },
-    log10SaltLimitedDrugM: { value: logSD, uncertainty: sigmaSD, method: dH ? 'ksp-estimate-anchor-thermo' : 'ksp-estimate-anchor', sources, notes },
+    log10SaltLimitedDrugM: {
+      value: logSD,
+      uncertainty: sigmaSD,
+      method: dH ? 'ksp-estimate-anchor-thermo' : 'ksp-estimate-anchor',
+      sources,
+      notes,
+    },
     thermoShiftDecades: shift,
     rawThermoShiftDecades: raw,
     rawThermoShiftSigma: rawSigma,

@@ -16,11 +16,24 @@ import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from '
  */
 export function candidatesFromLibrary(
   ions: readonly CounterIon[],
-  drug: { kind: 'base' | 'acid'; ionCharge: number; pKas?: readonly number[]; thermo?: ThermoDrugIon | null },
-  opts: { firstStoichiometryOnly?: boolean; keepCocrystalBand?: boolean; bands?: DeltaPkaBands; skipped?: { id: string; label: string; deltaPka: number }[] } = {},
+  drug: {
+    kind: 'base' | 'acid';
+    ionCharge: number;
+    pKas?: readonly number[];
+    thermo?: ThermoDrugIon | null;
+  },
+  opts: {
+    firstStoichiometryOnly?: boolean;
+    keepCocrystalBand?: boolean;
+    bands?: DeltaPkaBands;
+    skipped?: { id: string; label: string; deltaPka: number }[];
+  } = {},
 ): ScreeningCandidate[] {
   const bands = opts.bands ?? DEFAULT_DELTA_PKA_BANDS;
-  const drugP = drug.pKas && drug.pKas.length > 0 ? drugProtolyte({ kind: drug.kind, pKas: drug.pKas, ionCharge: drug.ionCharge }) : null;
+  const drugP =
+    drug.pKas && drug.pKas.length > 0
+      ? drugProtolyte({ kind: drug.kind, pKas: drug.pKas, ionCharge: drug.ionCharge })
+      : null;
   const want = drug.kind === 'base' ? 'anion' : 'cation';
   let dIon: ThermoIon | null = null;
   if (drug.thermo) {
@@ -34,15 +47,30 @@ export function candidatesFromLibrary(
   for (const ion of ions) {
     if (ion.kind !== want) continue;
     const seen = new Set<string>();
-    const list = opts.firstStoichiometryOnly ? ion.stoichiometries.slice(0, 1) : ion.stoichiometries;
+    const list = opts.firstStoichiometryOnly
+      ? ion.stoichiometries.slice(0, 1)
+      : ion.stoichiometries;
     for (const st of list) {
-      const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(drug.ionCharge, st.ionCharge);
+      const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(
+        drug.ionCharge,
+        st.ionCharge,
+      );
       if (m > 4 || n > 4) continue;
       const key = `${m}:${n}:${st.ionCharge}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      const label = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : `${ion.name.toLowerCase()} (${m}:${n})`;
-      const stoich = { label, drugPerSalt: m, counterIonPerSalt: n, ionCharge: st.ionCharge, ionMolarMassGPerMol: st.ionMolarMassGPerMol, pKaIndex: st.pKaIndex };
+      const label =
+        m === st.drugPerSalt && n === st.counterIonPerSalt
+          ? st.label
+          : `${ion.name.toLowerCase()} (${m}:${n})`;
+      const stoich = {
+        label,
+        drugPerSalt: m,
+        counterIonPerSalt: n,
+        ionCharge: st.ionCharge,
+        ionMolarMassGPerMol: st.ionMolarMassGPerMol,
+        pKaIndex: st.pKaIndex,
+      };
       const id = `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`;
       if (drugP && !opts.keepCocrystalBand) {
         let d: number | null = null;
@@ -57,12 +85,16 @@ export function candidatesFromLibrary(
         }
       }
       const thermo = dIon
-        ? candidateSolutionEnthalpyKJ(dIon, { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings }, {
-            drugPerSalt: m,
-            counterIonPerSalt: n,
-            ionCharge: st.ionCharge,
-            ionFormula: st.ionFormula,
-          }).solutionEnthalpyKJ
+        ? candidateSolutionEnthalpyKJ(
+            dIon,
+            { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings },
+            {
+              drugPerSalt: m,
+              counterIonPerSalt: n,
+              ionCharge: st.ionCharge,
+              ionFormula: st.ionFormula,
+            },
+          ).solutionEnthalpyKJ
         : null;
       out.push({
         id,

@@ -28,9 +28,16 @@ export function saltMolarMassGPerMol(i: SaltMassInput): number {
     ['drugPerSalt', i.drugPerSalt],
     ['counterIonPerSalt', i.counterIonPerSalt],
   ] as const) {
-    if (!Number.isInteger(v) || v < 1 || v > 4) throw new ChemInputError(f, `${v} is not allowed`, 'an integer from 1 to 4');
+    if (!Number.isInteger(v) || v < 1 || v > 4)
+      throw new ChemInputError(f, `${v} is not allowed`, 'an integer from 1 to 4');
   }
-  const w = requireFiniteInRange('hydrateWater', i.hydrateWater ?? 0, 0, 20, 'molecules per formula unit');
+  const w = requireFiniteInRange(
+    'hydrateWater',
+    i.hydrateWater ?? 0,
+    0,
+    20,
+    'molecules per formula unit',
+  );
   return (
     i.drugPerSalt * i.drugIonMolarMassGPerMol +
     i.counterIonPerSalt * i.counterIonMolarMassGPerMol +
@@ -49,7 +56,8 @@ export function activeFraction(i: SaltMassInput): number {
 
 /** Mass of salt that delivers a dose of free form: dose / f, mg. */
 export function saltMassPerDoseMg(doseMg: number, fraction: number): number {
-  if (!(Number.isFinite(doseMg) && doseMg > 0)) throw new ChemInputError('doseMg', `must be greater than zero, got ${doseMg}`, 'a dose > 0 mg');
+  if (!(Number.isFinite(doseMg) && doseMg > 0))
+    throw new ChemInputError('doseMg', `must be greater than zero, got ${doseMg}`, 'a dose > 0 mg');
   requireFiniteInRange('activeFraction', fraction, 1e-6, 1);
   return doseMg / fraction;
 }

@@ -58,17 +58,31 @@ export interface InterpretedMeasurements {
 
 const LIQUEFIED = /deliquesc|liquef|turned liquid/i;
 
-function toFormulaUnitsM(m: MeasurementInput, saltMolarMassGPerMol: number, freeFormMolarMassGPerMol: number, drugPerSalt: number): number {
+function toFormulaUnitsM(
+  m: MeasurementInput,
+  saltMolarMassGPerMol: number,
+  freeFormMolarMassGPerMol: number,
+  drugPerSalt: number,
+): number {
   const v = m.value;
   if (v === null || !(Number.isFinite(v) && v > 0)) {
-    throw new ChemInputError('measurement.value', `a solubility must be greater than zero, got ${String(v)}`, 'a solubility > 0');
+    throw new ChemInputError(
+      'measurement.value',
+      `a solubility must be greater than zero, got ${String(v)}`,
+      'a solubility > 0',
+    );
   }
   const unit = m.unit.trim().toLowerCase();
   if (unit === 'mol/l' || unit === 'm') return v;
-  if (unit === 'mg/ml free form' || unit === 'mg/ml (free form)') return v / freeFormMolarMassGPerMol / drugPerSalt;
+  if (unit === 'mg/ml free form' || unit === 'mg/ml (free form)')
+    return v / freeFormMolarMassGPerMol / drugPerSalt;
   if (unit === 'mg/ml' || unit === 'g/l') return v / saltMolarMassGPerMol;
   if (unit === 'µg/ml' || unit === 'ug/ml') return v / 1000 / saltMolarMassGPerMol;
-  throw new ChemInputError('measurement.unit', `unknown solubility unit '${m.unit}'`, "'mg/mL' (as salt), 'mg/mL free form', 'µg/mL' or 'mol/L'");
+  throw new ChemInputError(
+    'measurement.unit',
+    `unknown solubility unit '${m.unit}'`,
+    "'mg/mL' (as salt), 'mg/mL free form', 'µg/mL' or 'mol/L'",
+  );
 }
 
 /**
@@ -78,7 +92,12 @@ function toFormulaUnitsM(m: MeasurementInput, saltMolarMassGPerMol: number, free
  */
 export function interpretMeasurements(
   list: readonly MeasurementInput[],
-  ctx: { saltMolarMassGPerMol: number; freeFormMolarMassGPerMol: number; drugPerSalt: number; temperatureK: number },
+  ctx: {
+    saltMolarMassGPerMol: number;
+    freeFormMolarMassGPerMol: number;
+    drugPerSalt: number;
+    temperatureK: number;
+  },
 ): InterpretedMeasurements {
   const out: InterpretedMeasurements = {
     solubility: null,
@@ -98,7 +117,12 @@ export function interpretMeasurements(
     switch (m.kind) {
       case 'solubility':
         out.allSolubilities.push({
-          formulaUnitsM: toFormulaUnitsM(m, ctx.saltMolarMassGPerMol, ctx.freeFormMolarMassGPerMol, ctx.drugPerSalt),
+          formulaUnitsM: toFormulaUnitsM(
+            m,
+            ctx.saltMolarMassGPerMol,
+            ctx.freeFormMolarMassGPerMol,
+            ctx.drugPerSalt,
+          ),
           ph: m.ph,
           temperatureK: m.temperatureK,
           medium: m.medium,
@@ -126,7 +150,8 @@ export function interpretMeasurements(
         break;
     }
   }
-  if (out.massGainPercent !== null || liquefied) out.hygroscopicity = hygroscopicityClass(out.massGainPercent ?? 0, liquefied);
+  if (out.massGainPercent !== null || liquefied)
+    out.hygroscopicity = hygroscopicityClass(out.massGainPercent ?? 0, liquefied);
   if (out.allSolubilities.length > 0) {
     const T = ctx.temperatureK;
     out.solubility = out.allSolubilities.reduce((best, s) =>
@@ -135,7 +160,9 @@ export function interpretMeasurements(
     const withT = out.allSolubilities.filter((s) => s.temperatureK !== null);
     const temps = new Set(withT.map((s) => s.temperatureK));
     if (withT.length >= 3 && temps.size >= 2) {
-      out.vantHoff = vantHoffFit(withT.map((s) => ({ temperatureK: s.temperatureK!, solubility: s.formulaUnitsM })));
+      out.vantHoff = vantHoffFit(
+        withT.map((s) => ({ temperatureK: s.temperatureK!, solubility: s.formulaUnitsM })),
+      );
     } else if (withT.length > 0) {
       out.vantHoffNote = `van ’t Hoff fit needs at least three solubilities at two or more temperatures (have ${withT.length} at ${temps.size})`;
     }

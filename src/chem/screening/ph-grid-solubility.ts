@@ -36,7 +36,12 @@ const SCAN_PHS: readonly number[] = (() => {
 const ION_CACHE_LIMIT = 512;
 const ionCache = new Map<string, Float64Array>();
 
-function chargeFractionsOn(p: Protolyte, charge: number, phs: readonly number[], gridKey: string): Float64Array {
+function chargeFractionsOn(
+  p: Protolyte,
+  charge: number,
+  phs: readonly number[],
+  gridKey: string,
+): Float64Array {
   const key = `${p.pKas.join(',')}|${p.mostProtonatedCharge}|${charge}|${gridKey}`;
   let v = ionCache.get(key);
   if (!v) {
@@ -97,7 +102,13 @@ export function drugGrids(
     drug,
     ionCharge,
     log10IntrinsicM,
-    profile: drugOnGrid(drug, ionCharge, log10IntrinsicM, phs, `${grid.phFrom}:${grid.phTo}:${grid.phStep}`),
+    profile: drugOnGrid(
+      drug,
+      ionCharge,
+      log10IntrinsicM,
+      phs,
+      `${grid.phFrom}:${grid.phTo}:${grid.phStep}`,
+    ),
     scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
   };
 }

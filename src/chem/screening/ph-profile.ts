@@ -26,7 +26,11 @@ export function drugProtolyte(d: DrugAcidBase): Protolyte {
   requireAscendingPkas('pKas', d.pKas);
   if (d.pKas.length < 1) throw new ChemInputError('pKas', 'no pKa given', 'one to four pKa values');
   const sign = d.kind === 'base' ? 1 : -1;
-  if (!Number.isInteger(d.ionCharge) || d.ionCharge * sign < 1 || Math.abs(d.ionCharge) > d.pKas.length) {
+  if (
+    !Number.isInteger(d.ionCharge) ||
+    d.ionCharge * sign < 1 ||
+    Math.abs(d.ionCharge) > d.pKas.length
+  ) {
     throw new ChemInputError(
       'ionCharge',
       `${d.ionCharge} does not fit a ${d.kind} with ${d.pKas.length} pKa value(s)`,
@@ -80,7 +84,13 @@ export const PROFILE_ASSUMPTIONS: readonly string[] = [
   'the less soluble solid (salt or free form) is the one in equilibrium at each pH',
 ];
 
-function saltInput(d: Protolyte, drugIonCharge: number, salt: ProfileSalt, pH: number, o: ProfileOptions): SaltEquilibriumInput {
+function saltInput(
+  d: Protolyte,
+  drugIonCharge: number,
+  salt: ProfileSalt,
+  pH: number,
+  o: ProfileOptions,
+): SaltEquilibriumInput {
   return {
     drug: d,
     drugIonCharge,
@@ -117,7 +127,14 @@ function pointAt(
 ): ProfilePoint {
   requireFiniteInRange('pH', pH, 0, 14);
   const freeFormLimitedM = 10 ** log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
-  if (!salt) return { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM: null, solid: 'free-form' };
+  if (!salt)
+    return {
+      pH,
+      solubilityM: freeFormLimitedM,
+      freeFormLimitedM,
+      saltLimitedM: null,
+      solid: 'free-form',
+    };
   const r = solveSaltSolubility(saltInput(p, ionCharge, salt, pH, o), true);
   const saltLimitedM = r.unbounded ? null : r.drugTotalM;
   if (saltLimitedM !== null && saltLimitedM < freeFormLimitedM) {
@@ -174,7 +191,8 @@ export function checkProfileInput(
   const from = requireFiniteInRange('phFrom', o.phFrom ?? 1, 0, 14);
   const to = requireFiniteInRange('phTo', o.phTo ?? 8, 0, 14);
   const step = requireFiniteInRange('phStep', o.phStep ?? 0.1, 0.001, 14);
-  if (!(to >= from)) throw new ChemInputError('phTo', `${to} is below phFrom ${from}`, 'phTo ≥ phFrom');
+  if (!(to >= from))
+    throw new ChemInputError('phTo', `${to} is below phFrom ${from}`, 'phTo ≥ phFrom');
   requireFiniteInRange('log10IntrinsicSolubility', log10IntrinsicM, -20, 2, 'log₁₀ mol/L');
   const p = drugProtolyte(drug);
   if (salt) checkSaltInput(saltInput(p, drug.ionCharge, salt, from, o));

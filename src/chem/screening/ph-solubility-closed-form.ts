@@ -14,7 +14,11 @@ import { ChemInputError, requireFiniteInRange } from '../result';
 
 const requirePositive = (field: string, x: number, unit: string) => {
   if (!(Number.isFinite(x) && x > 0)) {
-    throw new ChemInputError(field, `must be greater than zero, got ${String(x)}`, `a finite number > 0 ${unit}`);
+    throw new ChemInputError(
+      field,
+      `must be greater than zero, got ${String(x)}`,
+      `a finite number > 0 ${unit}`,
+    );
   }
   return x;
 };
@@ -46,13 +50,23 @@ export function commonIonSaltIonM(kspM2: number, commonIonM = 0): number {
 }
 
 /** Salt-limited solubility of a weak base's 1:1 salt: S = [BH⁺]·(1 + 10^(pH − pKa)), mol/L. */
-export function saltLimitedBaseSolubilityM(kspM2: number, pKa: number, pH: number, commonIonM = 0): number {
+export function saltLimitedBaseSolubilityM(
+  kspM2: number,
+  pKa: number,
+  pH: number,
+  commonIonM = 0,
+): number {
   requirePh(pH);
   return commonIonSaltIonM(kspM2, commonIonM) * (1 + 10 ** (pH - pKa));
 }
 
 /** Salt-limited solubility of a weak acid's 1:1 salt: S = [A⁻]·(1 + 10^(pKa − pH)), mol/L. */
-export function saltLimitedAcidSolubilityM(kspM2: number, pKa: number, pH: number, commonIonM = 0): number {
+export function saltLimitedAcidSolubilityM(
+  kspM2: number,
+  pKa: number,
+  pH: number,
+  commonIonM = 0,
+): number {
   requirePh(pH);
   return commonIonSaltIonM(kspM2, commonIonM) * (1 + 10 ** (pKa - pH));
 }
@@ -84,10 +98,17 @@ export function baseWithSaltSolubilityM(
 ): { solubilityM: number; solid: 'salt' | 'free-form' } {
   const free = freeBaseSolubilityM(intrinsicM, pKa, pH);
   const salt = saltLimitedBaseSolubilityM(kspM2, pKa, pH, commonIonM);
-  return salt < free ? { solubilityM: salt, solid: 'salt' } : { solubilityM: free, solid: 'free-form' };
+  return salt < free
+    ? { solubilityM: salt, solid: 'salt' }
+    : { solubilityM: free, solid: 'free-form' };
 }
 
 /** pH_max of a 1:1 salt of a weak base or acid with a single salt-forming pKa (dispatches to the two forms above). */
-export function phMax(kind: 'base' | 'acid', pKa: number, intrinsicM: number, kspM2: number): number {
+export function phMax(
+  kind: 'base' | 'acid',
+  pKa: number,
+  intrinsicM: number,
+  kspM2: number,
+): number {
   return kind === 'base' ? phMaxBase(pKa, intrinsicM, kspM2) : phMaxAcid(pKa, intrinsicM, kspM2);
 }

@@ -56,7 +56,11 @@ export function rankRobustness(
 ): RobustnessResult[] {
   const iterations = opts.iterations ?? 1000;
   if (!Number.isInteger(iterations) || iterations < 1 || iterations > 1e6) {
-    throw new ChemInputError('iterations', `${iterations} is not allowed`, 'an integer from 1 to 1 000 000');
+    throw new ChemInputError(
+      'iterations',
+      `${iterations} is not allowed`,
+      'an integer from 1 to 1 000 000',
+    );
   }
   const rng = createSeededRandom(opts.seed ?? 1);
   const bands = shared.bands ?? DEFAULT_DELTA_PKA_BANDS;
@@ -76,14 +80,22 @@ export function rankRobustness(
       const ds = rng.normal() * r.saltLog10Sigma;
       const saltShift = ds + (r.saltAnchoredOnIntrinsic ? dS0 : 0);
       const c = r.criteria;
-      const shiftFor = (solid: 'salt' | 'free-form' | null) => (solid === 'salt' ? saltShift : solid === 'free-form' ? dS0 : 0);
+      const shiftFor = (solid: 'salt' | 'free-form' | null) =>
+        solid === 'salt' ? saltShift : solid === 'free-form' ? dS0 : 0;
       // margin = pH_max − micro-pH for a base, micro-pH − pH_max for an acid.
       const dMargin = sign * dPka + dS0 - saltShift;
       const perturbed: CriterionInputs = {
         ...c,
-        saltProbability: r.deltaPka === null ? c.saltProbability : saltProbabilityFor(r.deltaPka + sign * dPka, bands),
-        log10WorstDoseNumber: c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - shiftFor(r.worstSolid),
-        log10GastricDoseNumber: c.log10GastricDoseNumber === null ? null : c.log10GastricDoseNumber - shiftFor(r.gastricSolid),
+        saltProbability:
+          r.deltaPka === null
+            ? c.saltProbability
+            : saltProbabilityFor(r.deltaPka + sign * dPka, bands),
+        log10WorstDoseNumber:
+          c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - shiftFor(r.worstSolid),
+        log10GastricDoseNumber:
+          c.log10GastricDoseNumber === null
+            ? null
+            : c.log10GastricDoseNumber - shiftFor(r.gastricSolid),
         phMaxMarginPh: c.phMaxMarginPh === null ? null : c.phMaxMarginPh + dMargin,
       };
       scores[i] = weightedScore(criterionScores(perturbed), weights);

@@ -27,7 +27,8 @@ export interface CriterionInputs {
 }
 
 const clamp01 = (x: number) => (x < 0 ? 0 : x > 1 ? 1 : x);
-const doseScore = (logD0: number | null) => (logD0 === null ? 0.5 : clamp01(1 - Math.max(0, logD0) / 2));
+const doseScore = (logD0: number | null) =>
+  logD0 === null ? 0.5 : clamp01(1 - Math.max(0, logD0) / 2);
 const ACCEPTABILITY: Record<string, number> = { '1': 1, '2': 0.6, '3': 0.2, null: 0.4 };
 const HYGRO: Record<HygroscopicityClass, number> = {
   'non-hygroscopic': 1,
@@ -79,15 +80,31 @@ export interface RankedRow {
 }
 
 /** Rank rows by weighted score, best first; ties keep input order. Cheap: O(n log n), no physics. */
-export function rankCandidates(rows: readonly RankableRow[], weights: ScreeningWeights): RankedRow[] {
+export function rankCandidates(
+  rows: readonly RankableRow[],
+  weights: ScreeningWeights,
+): RankedRow[] {
   let den = 0;
   for (const k of CRITERIA) den += weights[k];
   const scored = rows.map((r, i) => {
-    if (r.error) return { i, out: { id: r.id, rank: null, score: null, scores: null, contributions: {} } as RankedRow };
+    if (r.error)
+      return {
+        i,
+        out: { id: r.id, rank: null, score: null, scores: null, contributions: {} } as RankedRow,
+      };
     const scores = criterionScores(r.criteria);
     const contributions: Partial<Record<CriterionKey, number>> = {};
     for (const k of CRITERIA) contributions[k] = den > 0 ? (weights[k] * scores[k]) / den : 0;
-    return { i, out: { id: r.id, rank: null, score: weightedScore(scores, weights), scores, contributions } as RankedRow };
+    return {
+      i,
+      out: {
+        id: r.id,
+        rank: null,
+        score: weightedScore(scores, weights),
+        scores,
+        contributions,
+      } as RankedRow,
+    };
   });
   scored.sort((a, b) => {
     const sa = a.out.score;

@@ -34,7 +34,9 @@ export interface SaltEquilibriumInput {
   pH: number;
   /** Counter-ion (all protonation states) already in the medium, mol/L. */
   commonIonM?: number;
-  activity?: { model: 'ideal' } | { model: 'davies'; backgroundIonicStrengthM: number; temperatureK: number };
+  activity?:
+    | { model: 'ideal' }
+    | { model: 'davies'; backgroundIonicStrengthM: number; temperatureK: number };
 }
 
 export interface SaltEquilibriumResult {
@@ -56,7 +58,8 @@ export function checkSaltInput(i: SaltEquilibriumInput): void {
     ['drugPerSalt', i.drugPerSalt],
     ['counterIonPerSalt', i.counterIonPerSalt],
   ] as const) {
-    if (!Number.isInteger(v) || v < 1 || v > 4) throw new ChemInputError(f, `${v} is not allowed`, 'an integer from 1 to 4');
+    if (!Number.isInteger(v) || v < 1 || v > 4)
+      throw new ChemInputError(f, `${v} is not allowed`, 'an integer from 1 to 4');
   }
   if (i.drugPerSalt * i.drugIonCharge + i.counterIonPerSalt * i.counterIonCharge !== 0) {
     throw new ChemInputError(
@@ -108,7 +111,13 @@ export function saltLog10FormulaUnitsNoCommonIon(
 }
 
 /** The closed form above before its limits are applied (no object made: hot loops call it). */
-export function saltLog10FormulaUnitsRaw(m: number, n: number, laD: number, laX: number, log10KspLessGamma: number): number {
+export function saltLog10FormulaUnitsRaw(
+  m: number,
+  n: number,
+  laD: number,
+  laX: number,
+  log10KspLessGamma: number,
+): number {
   return (log10KspLessGamma - m * (laD + Math.log10(m)) - n * (laX + Math.log10(n))) / (m + n);
 }
 
@@ -116,7 +125,10 @@ export function saltLog10FormulaUnitsRaw(m: number, n: number, laD: number, laX:
 export const SALT_LOG10_S_LIMITS = { min: LOG_S_MIN, max: LOG_S_MAX } as const;
 
 /** Solve the salt's solubility at one pH. */
-export function solveSaltSolubility(i: SaltEquilibriumInput, checked = false): SaltEquilibriumResult {
+export function solveSaltSolubility(
+  i: SaltEquilibriumInput,
+  checked = false,
+): SaltEquilibriumResult {
   if (!checked) checkSaltInput(i);
   const m = i.drugPerSalt;
   const n = i.counterIonPerSalt;
@@ -124,10 +136,16 @@ export function solveSaltSolubility(i: SaltEquilibriumInput, checked = false): S
   const laD = log10ChargeFraction(i.drug, i.pH, i.drugIonCharge);
   const laX = log10ChargeFraction(i.counterIon, i.pH, i.counterIonCharge);
   const solveWith = (log10GammaTerm: number) => {
-    if (c === 0) return saltLog10FormulaUnitsNoCommonIon(m, n, laD, laX, i.log10Ksp - log10GammaTerm);
+    if (c === 0)
+      return saltLog10FormulaUnitsNoCommonIon(m, n, laD, laX, i.log10Ksp - log10GammaTerm);
     const g = (u: number) => {
       const s = 10 ** u;
-      return m * (laD + Math.log10(m) + u) + n * (laX + Math.log10(n * s + c)) + log10GammaTerm - i.log10Ksp;
+      return (
+        m * (laD + Math.log10(m) + u) +
+        n * (laX + Math.log10(n * s + c)) +
+        log10GammaTerm -
+        i.log10Ksp
+      );
     };
     if (g(LOG_S_MAX) < 0) return { u: LOG_S_MAX, unbounded: true };
     if (g(LOG_S_MIN) > 0) return { u: LOG_S_MIN, unbounded: false };
@@ -155,7 +173,11 @@ export function solveSaltSolubility(i: SaltEquilibriumInput, checked = false): S
 }
 
 /** log₁₀ of the free form's solubility at a pH: log S₀ − log₁₀ α(neutral). */
-export function log10FreeFormSolubilityM(drug: Protolyte, log10IntrinsicM: number, pH: number): number {
+export function log10FreeFormSolubilityM(
+  drug: Protolyte,
+  log10IntrinsicM: number,
+  pH: number,
+): number {
   return log10IntrinsicM - log10ChargeFraction(drug, pH, 0);
 }
 
@@ -169,7 +191,11 @@ export function log10KspFromSaltSolubility(
   i: Omit<SaltEquilibriumInput, 'log10Ksp' | 'activity'> & { formulaUnitsM: number },
 ): number {
   if (!(i.formulaUnitsM > 0 && Number.isFinite(i.formulaUnitsM))) {
-    throw new ChemInputError('saltSolubility', `must be greater than zero, got ${i.formulaUnitsM}`, 'a finite number > 0 mol/L');
+    throw new ChemInputError(
+      'saltSolubility',
+      `must be greater than zero, got ${i.formulaUnitsM}`,
+      'a finite number > 0 mol/L',
+    );
   }
   checkSaltInput({ ...i, log10Ksp: 0 });
   const m = i.drugPerSalt;
@@ -177,5 +203,7 @@ export function log10KspFromSaltSolubility(
   const c = i.commonIonM ?? 0;
   const laD = log10ChargeFraction(i.drug, i.pH, i.drugIonCharge);
   const laX = log10ChargeFraction(i.counterIon, i.pH, i.counterIonCharge);
-  return m * (laD + Math.log10(m * i.formulaUnitsM)) + n * (laX + Math.log10(n * i.formulaUnitsM + c));
+  return (
+    m * (laD + Math.log10(m * i.formulaUnitsM)) + n * (laX + Math.log10(n * i.formulaUnitsM + c))
+  );
 }

@@ -55,23 +55,38 @@ export const screeningSettingsSchema = z.object({
       saltAbove: z.number().min(-10).max(15).default(4),
       stableSaltMin: z.number().min(-10).max(15).default(2),
     })
-    .refine((b) => b.cocrystalBelow < b.saltAbove, 'the cocrystal band must lie below the salt band')
+    .refine(
+      (b) => b.cocrystalBelow < b.saltAbove,
+      'the cocrystal band must lie below the salt band',
+    )
     .default({ cocrystalBelow: -1, saltAbove: 4, stableSaltMin: 2 }),
   gastricPh: z.number().min(0).max(14).default(1.2),
   gastricChlorideM: z.number().min(0).max(5).default(0.12),
   /** Extra media the user defines (buffers with their counter-ions). */
   media: z.array(mediumSchema).max(20).default([]),
   microenvironmentPh: z.number().min(0).max(14).default(7),
-  temperatureK: z.number().min(celsiusToKelvin(0)).max(celsiusToKelvin(100)).default(celsiusToKelvin(37)),
+  temperatureK: z
+    .number()
+    .min(celsiusToKelvin(0))
+    .max(celsiusToKelvin(100))
+    .default(celsiusToKelvin(37)),
   activityModel: z.enum(['ideal', 'davies']).default('ideal'),
   /** Ionic strength of the dissolution media for the Davies option, mol/L. */
   backgroundIonicStrengthM: z.number().min(0).max(5).default(0.1),
   phGrid: z
-    .object({ from: z.number().min(0).max(14).default(1), to: z.number().min(0).max(14).default(8), step: z.number().min(0.01).max(2).default(0.1) })
+    .object({
+      from: z.number().min(0).max(14).default(1),
+      to: z.number().min(0).max(14).default(8),
+      step: z.number().min(0.01).max(2).default(0.1),
+    })
     .default({ from: 1, to: 8, step: 0.1 }),
   saltAnchorLog10: z.number().min(0).max(6).default(2),
   pkaSigmaByOrigin: z
-    .object({ measured: z.number().min(0).max(3).default(0.1), literature: z.number().min(0).max(3).default(0.3), predicted: z.number().min(0).max(3).default(0.7) })
+    .object({
+      measured: z.number().min(0).max(3).default(0.1),
+      literature: z.number().min(0).max(3).default(0.3),
+      predicted: z.number().min(0).max(3).default(0.7),
+    })
     .default({ measured: 0.1, literature: 0.3, predicted: 0.7 }),
 });
 export type ScreeningSettings = z.infer<typeof screeningSettingsSchema>;
@@ -107,5 +122,9 @@ export function parseScreeningSettings(input: unknown): ScreeningSettings {
   }
   const issue = r.error.issues[0]!;
   const field = `settings.${issue.path.map(String).join('.') || 'root'}`;
-  throw new ChemInputError(field, issue.message, 'see screeningSettingsSchema (settings.ts) for each field’s range');
+  throw new ChemInputError(
+    field,
+    issue.message,
+    'see screeningSettingsSchema (settings.ts) for each field’s range',
+  );
 }

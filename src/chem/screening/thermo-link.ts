@@ -53,11 +53,20 @@ function counterThermoIon(c: ThermoCounterIon, ionCharge: number, ionFormula: st
 export function candidateSolutionEnthalpyKJ(
   drug: ThermoDrugIon | ThermoIon,
   counterIon: ThermoCounterIon,
-  stoichiometry: { drugPerSalt: number; counterIonPerSalt: number; ionCharge: number; ionFormula?: string },
+  stoichiometry: {
+    drugPerSalt: number;
+    counterIonPerSalt: number;
+    ionCharge: number;
+    ionFormula?: string;
+  },
 ): { solutionEnthalpyKJ: Estimate | null; reason: string | null } {
   try {
     const d = 'shape' in drug ? drug : drugThermoIon(drug);
-    const x = counterThermoIon(counterIon, stoichiometry.ionCharge, stoichiometry.ionFormula ?? counterIon.formula);
+    const x = counterThermoIon(
+      counterIon,
+      stoichiometry.ionCharge,
+      stoichiometry.ionFormula ?? counterIon.formula,
+    );
     const drugIsCation = drug.charge > 0;
     const r = estimateSaltThermo({
       cation: drugIsCation ? d : x,
@@ -67,7 +76,8 @@ export function candidateSolutionEnthalpyKJ(
       method: 'auto',
     });
     const e = r.solutionEnthalpyKJ;
-    if (!Number.isFinite(e.value) || !Number.isFinite(e.uncertainty)) return { solutionEnthalpyKJ: null, reason: 'the thermochemistry gave no finite ΔH_sol' };
+    if (!Number.isFinite(e.value) || !Number.isFinite(e.uncertainty))
+      return { solutionEnthalpyKJ: null, reason: 'the thermochemistry gave no finite ΔH_sol' };
     return { solutionEnthalpyKJ: e, reason: null };
   } catch (err) {
     return { solutionEnthalpyKJ: null, reason: err instanceof Error ? err.message : String(err) };

@@ -35,17 +35,29 @@ export interface VanTHoffFit {
 /** Fit ΔH_sol,app from ≥ 3 solubilities at ≥ 2 distinct temperatures. */
 export function vantHoffFit(points: readonly SolubilityAtTemperature[]): VanTHoffFit {
   if (points.length < 3) {
-    throw new ChemInputError('points', `${points.length} point(s) given`, 'at least three solubilities at two or more temperatures');
+    throw new ChemInputError(
+      'points',
+      `${points.length} point(s) given`,
+      'at least three solubilities at two or more temperatures',
+    );
   }
   points.forEach((p, i) => {
     requireFiniteInRange(`points[${i}].temperatureK`, p.temperatureK, 1e-6, 1000, 'K');
     if (!(Number.isFinite(p.solubility) && p.solubility > 0)) {
-      throw new ChemInputError(`points[${i}].solubility`, `must be greater than zero, got ${p.solubility}`, 'a solubility > 0');
+      throw new ChemInputError(
+        `points[${i}].solubility`,
+        `must be greater than zero, got ${p.solubility}`,
+        'a solubility > 0',
+      );
     }
   });
   const distinct = new Set(points.map((p) => p.temperatureK.toFixed(6)));
   if (distinct.size < 2) {
-    throw new ChemInputError('points', 'all solubilities were measured at one temperature', 'solubilities at two or more temperatures');
+    throw new ChemInputError(
+      'points',
+      'all solubilities were measured at one temperature',
+      'solubilities at two or more temperatures',
+    );
   }
   const fit = linearLeastSquares(
     points.map((p) => 1 / p.temperatureK),
@@ -59,7 +71,9 @@ export function vantHoffFit(points: readonly SolubilityAtTemperature[]): VanTHof
       uncertainty: se,
       method: 'van-t-hoff-fit',
       sources: ['van ’t Hoff analysis of measured solubilities (ln S against 1/T, least squares)'],
-      notes: [`${fit.n} points, ${distinct.size} temperatures, ${fit.degreesOfFreedom} degrees of freedom`],
+      notes: [
+        `${fit.n} points, ${distinct.size} temperatures, ${fit.degreesOfFreedom} degrees of freedom`,
+      ],
     },
     standardErrorKJ: se,
     interceptLnS: fit.intercept,
@@ -80,7 +94,13 @@ export function vantHoffFit(points: readonly SolubilityAtTemperature[]): VanTHof
 export function vantHoffLine(
   fit: VanTHoffFit,
   temperaturesK: readonly number[],
-): { temperatureK: number; inverseTemperaturePerK: number; lnS: number; lnSLow: number; lnSHigh: number }[] {
+): {
+  temperatureK: number;
+  inverseTemperaturePerK: number;
+  lnS: number;
+  lnSLow: number;
+  lnSHigh: number;
+}[] {
   const se = fit.standardErrorKJ / GAS_CONSTANT_KJ_PER_MOL_K;
   const meanInvT = fit.meanInverseTemperaturePerK;
   return temperaturesK.map((t) => {
@@ -88,6 +108,12 @@ export function vantHoffLine(
     const x = 1 / t;
     const lnS = fit.interceptLnS + fit.lnSSlopeOnInverseTK * x;
     const half = Math.abs(se * (x - meanInvT));
-    return { temperatureK: t, inverseTemperaturePerK: x, lnS, lnSLow: lnS - half, lnSHigh: lnS + half };
+    return {
+      temperatureK: t,
+      inverseTemperaturePerK: x,
+      lnS,
+      lnSLow: lnS - half,
+      lnSHigh: lnS + half,
+    };
   });
 }

@@ -1,12 +1,32 @@
 import { ChemInputError, type Estimate } from '../result';
 import { hydrationEnthalpyKJ } from './models/hydration/hydration';
-import { BORN_LANDE_SOURCES, BORN_MAYER_SOURCES, isStructureType } from './models/born-mayer/born-mayer';
+import {
+  BORN_LANDE_SOURCES,
+  BORN_MAYER_SOURCES,
+  isStructureType,
+} from './models/born-mayer/born-mayer';
 import { KAPUSTINSKII_SOURCES } from './models/kapustinskii/kapustinskii';
 import { VBT_SOURCES } from './models/vbt/vbt';
-import { formulaUnitVolume, rawLattice, requireBalanced, requireIon, type RawLattice } from './lattice';
+import {
+  formulaUnitVolume,
+  rawLattice,
+  requireBalanced,
+  requireIon,
+  type RawLattice,
+} from './lattice';
 import type { LatticeMethod, SaltThermoRequest, SaltThermoResult } from './thermo.types';
-import { latticeStats, publishedHydrationClosure, type LatticeVariant } from './validation/validation';
-import { calibratedRelU, cellLabel, chargeClassOf, findLatticeFactor, SHIPPED_LATTICE_CALIBRATION } from './calibration/calibration';
+import {
+  latticeStats,
+  publishedHydrationClosure,
+  type LatticeVariant,
+} from './validation/validation';
+import {
+  calibratedRelU,
+  cellLabel,
+  chargeClassOf,
+  findLatticeFactor,
+  SHIPPED_LATTICE_CALIBRATION,
+} from './calibration/calibration';
 import type { CalibratedVariant, LatticeCalibration } from './calibration/calibration.types';
 
 /**
@@ -49,11 +69,19 @@ function variantOf(raw: RawLattice): LatticeVariant {
 }
 
 function groupOf(req: SaltThermoRequest): 'halides' | 'polyatomic' {
-  return req.cation.shape === 'monatomic' && req.anion.shape === 'monatomic' && !req.cation.estimatedSize && !req.anion.estimatedSize ? 'halides' : 'polyatomic';
+  return req.cation.shape === 'monatomic' &&
+    req.anion.shape === 'monatomic' &&
+    !req.cation.estimatedSize &&
+    !req.anion.estimatedSize
+    ? 'halides'
+    : 'polyatomic';
 }
 
 /** Relative model error (RMS over the matching reference group) of a raw computation, fraction. */
-function modelRelU(raw: RawLattice, group: 'halides' | 'polyatomic'): { rel: number; basis: string } {
+function modelRelU(
+  raw: RawLattice,
+  group: 'halides' | 'polyatomic',
+): { rel: number; basis: string } {
   const variant = variantOf(raw);
   let stats;
   try {
@@ -61,7 +89,10 @@ function modelRelU(raw: RawLattice, group: 'halides' | 'polyatomic'): { rel: num
   } catch {
     stats = latticeStats(variant, 'all');
   }
-  return { rel: stats.rmsPercentError / 100, basis: `RMS error ${stats.rmsPercentError.toFixed(1)} % of ${stats.label} on ${stats.n} reference salts (${stats.group})` };
+  return {
+    rel: stats.rmsPercentError / 100,
+    basis: `RMS error ${stats.rmsPercentError.toFixed(1)} % of ${stats.label} on ${stats.n} reference salts (${stats.group})`,
+  };
 }
 
 /** Extra relative uncertainty from ion sizes that are themselves estimates (organic ions). */
@@ -82,9 +113,19 @@ function rawEstimate(req: SaltThermoRequest, raw: RawLattice, method: LatticeMet
   const m = modelRelU(raw, groupOf(req));
   const s = sizeRelU(raw, req);
   const rel = Math.hypot(m.rel, s);
-  const notes = [raw.detail, `uncertainty: ${m.basis}${s ? `, plus ${(s * 100).toFixed(1)} % from the estimated ion size` : ''}`];
-  if (raw.distanceFrom === 'radii') notes.push('r₀ from the sum of six-coordinate radii, not a measured cell');
-  return { value: raw.enthalpyKJ, uncertainty: raw.enthalpyKJ * rel, method, sources: METHOD_SOURCES[method], notes };
+  const notes = [
+    raw.detail,
+    `uncertainty: ${m.basis}${s ? `, plus ${(s * 100).toFixed(1)} % from the estimated ion size` : ''}`,
+  ];
+  if (raw.distanceFrom === 'radii')
+    notes.push('r₀ from the sum of six-coordinate radii, not a measured cell');
+  return {
+    value: raw.enthalpyKJ,
+    uncertainty: raw.enthalpyKJ * rel,
+    method,
+    sources: METHOD_SOURCES[method],
+    notes,
+  };
 }
 
 /**
@@ -97,11 +138,23 @@ export function latticeEnthalpyEstimate(
   req: SaltThermoRequest,
   method: LatticeMethod,
   opts: LatticeCalibrationOptions = {},
-): { estimate: Estimate; raw: RawLattice; rawEstimate: Estimate; factor: number; calibrationNote: string } {
+): {
+  estimate: Estimate;
+  raw: RawLattice;
+  rawEstimate: Estimate;
+  factor: number;
+  calibrationNote: string;
+} {
   const raw = rawLattice(req, method);
   const rawEst = rawEstimate(req, raw, method);
   if (opts.calibrate === false) {
-    return { estimate: rawEst, raw, rawEstimate: rawEst, factor: 1, calibrationNote: 'not calibrated (calibrate: false): the raw model' };
+    return {
+      estimate: rawEst,
+      raw,
+      rawEstimate: rawEst,
+      factor: 1,
+      calibrationNote: 'not calibrated (calibrate: false): the raw model',
+    };
   }
   const cal = opts.calibration ?? SHIPPED_LATTICE_CALIBRATION;
   const variant = variantOf(raw) as CalibratedVariant;
@@ -110,26 +163,45 @@ export function latticeEnthalpyEstimate(
   const f = findLatticeFactor(cal, variant, cls, group);
   if (!f) {
     const kind = group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion';
-    const w = cal.withheld.find((x) => x.variant === variant && x.chargeClass === cls && x.group === group);
+    const w = cal.withheld.find(
+      (x) => x.variant === variant && x.chargeClass === cls && x.group === group,
+    );
     const why = w
       ? `on the ${cellLabel(w)} the calibrated ${variant} did no better than the raw one, leave-one-salt-out (RMS ${w.crossValidated.rmsPercent.toFixed(1)} % vs ${w.raw.rmsPercent.toFixed(1)} %)`
       : `fewer than ${cal.minSalts} ${cls} ${kind} reference salts for ${variant}`;
     const note = `not calibrated: ${why}; the raw model and its raw uncertainty`;
-    return { estimate: { ...rawEst, notes: [note, ...(rawEst.notes ?? [])] }, raw, rawEstimate: rawEst, factor: 1, calibrationNote: note };
+    return {
+      estimate: { ...rawEst, notes: [note, ...(rawEst.notes ?? [])] },
+      raw,
+      rawEstimate: rawEst,
+      factor: 1,
+      calibrationNote: note,
+    };
   }
   const u = calibratedRelU(f);
   const s = sizeRelU(raw, req);
   const rel = Math.hypot(u.rel, s);
   const value = f.factor * raw.enthalpyKJ;
   const note = `calibrated: raw ${raw.enthalpyKJ.toFixed(1)} kJ/mol × ${f.factor.toFixed(4)} (median ratio reference/model over ${cellLabel(f)})`;
-  const notes = [note, raw.detail, `uncertainty: ${u.basis}${s ? `, plus ${(s * 100).toFixed(1)} % from the estimated ion size` : ''}`];
-  if (raw.distanceFrom === 'radii') notes.push('r₀ from the sum of six-coordinate radii, not a measured cell');
+  const notes = [
+    note,
+    raw.detail,
+    `uncertainty: ${u.basis}${s ? `, plus ${(s * 100).toFixed(1)} % from the estimated ion size` : ''}`,
+  ];
+  if (raw.distanceFrom === 'radii')
+    notes.push('r₀ from the sum of six-coordinate radii, not a measured cell');
   return {
     raw,
     rawEstimate: rawEst,
     factor: f.factor,
     calibrationNote: note,
-    estimate: { value, uncertainty: value * rel, method, sources: [...METHOD_SOURCES[method], CALIBRATION_SOURCE], notes },
+    estimate: {
+      value,
+      uncertainty: value * rel,
+      method,
+      sources: [...METHOD_SOURCES[method], CALIBRATION_SOURCE],
+      notes,
+    },
   };
 }
 
@@ -145,7 +217,8 @@ function applicableMethods(req: SaltThermoRequest, p: number, q: number): Lattic
   })();
   if (vol) out.push('vbt');
   if (req.cation.radiusA && req.anion.radiusA) out.push('kapustinskii');
-  if (req.structureType && isStructureType(req.structureType) && vol && vol.from !== 'ion-volumes') out.push('born-mayer');
+  if (req.structureType && isStructureType(req.structureType) && vol && vol.from !== 'ion-volumes')
+    out.push('born-mayer');
   return out;
 }
 
@@ -168,19 +241,33 @@ function applicableMethods(req: SaltThermoRequest, p: number, q: number): Lattic
  * cancel between salts of one drug ion), is usually larger than its value. Compare counter-ions for one
  * drug ion rather than reading one absolute ΔH_sol.
  */
-export function estimateSaltThermo(req: SaltThermoRequest & LatticeCalibrationOptions): CalibratedSaltThermoResult {
-  if (!req || typeof req !== 'object') throw new ChemInputError('request', 'missing request', 'an object with cation, anion, cationsPerFormula, anionsPerFormula');
+export function estimateSaltThermo(
+  req: SaltThermoRequest & LatticeCalibrationOptions,
+): CalibratedSaltThermoResult {
+  if (!req || typeof req !== 'object')
+    throw new ChemInputError(
+      'request',
+      'missing request',
+      'an object with cation, anion, cationsPerFormula, anionsPerFormula',
+    );
   requireIon(req.cation, 'cation', 1);
   requireIon(req.anion, 'anion', -1);
   const { p, q } = requireBalanced(req);
   const requested = req.method ?? 'auto';
-  const calOpts: LatticeCalibrationOptions = { ...(req.calibrate === false ? { calibrate: false } : {}), ...(req.calibration ? { calibration: req.calibration } : {}) };
+  const calOpts: LatticeCalibrationOptions = {
+    ...(req.calibrate === false ? { calibrate: false } : {}),
+    ...(req.calibration ? { calibration: req.calibration } : {}),
+  };
   let chosen: ReturnType<typeof latticeEnthalpyEstimate>;
   let reason: string;
   if (requested === 'auto') {
     const methods = applicableMethods(req, p, q);
     if (methods.length === 0) {
-      throw new ChemInputError('cation/anion', 'no lattice method applies: give ions with radii or volumes, or a formula-unit volume or density', 'bundled ions, formula or SMILES ions, formulaUnitVolumeNm3 or densityGPerCm3');
+      throw new ChemInputError(
+        'cation/anion',
+        'no lattice method applies: give ions with radii or volumes, or a formula-unit volume or density',
+        'bundled ions, formula or SMILES ions, formulaUnitVolumeNm3 or densityGPerCm3',
+      );
     }
     const group = groupOf(req);
     const errors: unknown[] = [];
@@ -201,7 +288,11 @@ export function estimateSaltThermo(req: SaltThermoRequest & LatticeCalibrationOp
     reason = `auto: ${best.m} has the lowest ${calOpts.calibrate === false ? 'measured' : 'stated (cross-validated where calibrated)'} uncertainty (${(best.rel * 100).toFixed(1)} %) among the methods these inputs allow (${ranked.map((r) => `${r.m} ${(r.rel * 100).toFixed(1)} %`).join(', ')}), measured on the bundled ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts`;
   } else {
     if (!['kapustinskii', 'born-mayer', 'born-lande', 'vbt'].includes(requested)) {
-      throw new ChemInputError('method', `unknown method ${String(requested)}`, 'auto, kapustinskii, born-mayer, born-lande, vbt');
+      throw new ChemInputError(
+        'method',
+        `unknown method ${String(requested)}`,
+        'auto, kapustinskii, born-mayer, born-lande, vbt',
+      );
     }
     chosen = latticeEnthalpyEstimate(req, requested, calOpts);
     reason = `requested: ${requested}`;
@@ -212,7 +303,9 @@ export function estimateSaltThermo(req: SaltThermoRequest & LatticeCalibrationOp
   const ha = hydrationEnthalpyKJ(req.anion, { ...t, perIonPublishedUncertaintyKJ: perIon });
   const lat = chosen.estimate;
   const solValue = lat.value + p * hc.value + q * ha.value;
-  const solU = Math.sqrt(lat.uncertainty ** 2 + (p * hc.uncertainty) ** 2 + (q * ha.uncertainty) ** 2);
+  const solU = Math.sqrt(
+    lat.uncertainty ** 2 + (p * hc.uncertainty) ** 2 + (q * ha.uncertainty) ** 2,
+  );
   const solution: Estimate = {
     value: solValue,
     uncertainty: solU,
@@ -221,13 +314,19 @@ export function estimateSaltThermo(req: SaltThermoRequest & LatticeCalibrationOp
     notes: [
       `ΔH_sol = ΔH_L + ${p}·ΔH_hyd(${req.cation.label}) + ${q}·ΔH_hyd(${req.anion.label}): a small difference of large numbers (${lat.value.toFixed(0)} vs ${(-(p * hc.value + q * ha.value)).toFixed(0)} kJ/mol)`,
       'uncertainties combined in quadrature as if independent; differences between counter-ions for one drug ion are better determined than this absolute value',
-      chosen.factor !== 1 ? `ΔH_L ${chosen.calibrationNote}; uncalibrated ΔH_sol would be ${(chosen.raw.enthalpyKJ + p * hc.value + q * ha.value).toFixed(1)} kJ/mol` : `ΔH_L ${chosen.calibrationNote}`,
+      chosen.factor !== 1
+        ? `ΔH_L ${chosen.calibrationNote}; uncalibrated ΔH_sol would be ${(chosen.raw.enthalpyKJ + p * hc.value + q * ha.value).toFixed(1)} kJ/mol`
+        : `ΔH_L ${chosen.calibrationNote}`,
     ],
   };
   const result: CalibratedSaltThermoResult = {
     latticeEnthalpyKJ: lat,
     rawLatticeEnthalpyKJ: chosen.rawEstimate,
-    latticeCalibration: { applied: chosen.factor !== 1, factor: chosen.factor, note: chosen.calibrationNote },
+    latticeCalibration: {
+      applied: chosen.factor !== 1,
+      factor: chosen.factor,
+      note: chosen.calibrationNote,
+    },
     cationHydrationKJ: hc,
     anionHydrationKJ: ha,
     solutionEnthalpyKJ: solution,

@@ -46,7 +46,10 @@ export function derivedAnionVolumes(): Map<string, Estimate> {
   for (const { anion, salts } of ANION_VOLUME_SALTS) {
     const vs = salts.map((s) => {
       const cat = THERMO_IONS.find((i) => i.id === s.cation)!;
-      const vm = (molarMassGPerMol(parseFormula(s.formula).elements) / (s.densityGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
+      const vm =
+        (molarMassGPerMol(parseFormula(s.formula).elements) /
+          (s.densityGPerCm3 * AVOGADRO_PER_MOL)) *
+        1e21;
       return (vm - s.p * cat.volumeNm3!.value) / s.q;
     });
     const mean = vs.reduce((a, b) => a + b, 0) / vs.length;
@@ -64,19 +67,38 @@ export function derivedAnionVolumes(): Map<string, Estimate> {
 
 function recordToIon(r: ThermoIonRecord): ThermoIon {
   const sources = new Set<string>();
-  const crystal = r.shannonRadiusA ? est(r.shannonRadiusA, 'shannon-cn6', TABLE_RADIUS_REL_U) : undefined;
+  const crystal = r.shannonRadiusA
+    ? est(r.shannonRadiusA, 'shannon-cn6', TABLE_RADIUS_REL_U)
+    : undefined;
   let radius: Estimate | undefined;
   if (r.shape === 'monatomic') {
-    const src = KAPUSTINSKII_RADIUS_SET === 'goldschmidt' ? (r.goldschmidtRadiusA ?? r.shannonRadiusA) : r.shannonRadiusA;
-    if (src) radius = est(src, KAPUSTINSKII_RADIUS_SET === 'goldschmidt' && r.goldschmidtRadiusA ? 'goldschmidt' : 'shannon-cn6', TABLE_RADIUS_REL_U);
+    const src =
+      KAPUSTINSKII_RADIUS_SET === 'goldschmidt'
+        ? (r.goldschmidtRadiusA ?? r.shannonRadiusA)
+        : r.shannonRadiusA;
+    if (src)
+      radius = est(
+        src,
+        KAPUSTINSKII_RADIUS_SET === 'goldschmidt' && r.goldschmidtRadiusA
+          ? 'goldschmidt'
+          : 'shannon-cn6',
+        TABLE_RADIUS_REL_U,
+      );
   } else if (r.thermochemicalRadiusA) {
     radius = est(r.thermochemicalRadiusA, 'thermochemical-radius', THERMOCHEMICAL_RADIUS_REL_U);
   }
-  let volume: Estimate | undefined = r.volumeNm3 ? est(r.volumeNm3, 'jenkins-volume', ION_VOLUME_REL_U) : derivedAnionVolumes().get(r.id);
+  let volume: Estimate | undefined = r.volumeNm3
+    ? est(r.volumeNm3, 'jenkins-volume', ION_VOLUME_REL_U)
+    : derivedAnionVolumes().get(r.id);
   let estimatedSize = false;
   if (!radius && volume) {
     const rv = radiusFromVolumeA(volume.value);
-    radius = { value: rv, uncertainty: (rv * volume.uncertainty) / volume.value / 3, method: 'radius-from-volume', sources: volume.sources };
+    radius = {
+      value: rv,
+      uncertainty: (rv * volume.uncertainty) / volume.value / 3,
+      method: 'radius-from-volume',
+      sources: volume.sources,
+    };
   }
   if (!radius && !volume && r.shape !== 'monatomic') {
     // No published size: estimate from the formula like a drug ion (e.g. tetraethylammonium).
@@ -143,8 +165,14 @@ export function findThermoIonByFormula(formula: string, charge: number): ThermoI
   } catch {
     return undefined;
   }
-  const key = (c: Record<string, number>) => Object.entries(c).sort(([a], [b]) => a.localeCompare(b)).map(([e, n]) => `${e}${n}`).join('');
+  const key = (c: Record<string, number>) =>
+    Object.entries(c)
+      .sort(([a], [b]) => a.localeCompare(b))
+      .map(([e, n]) => `${e}${n}`)
+      .join('');
   const want = key(counts);
-  const r = THERMO_IONS.find((i) => i.charge === charge && key(parseFormula(i.formula).elements) === want);
+  const r = THERMO_IONS.find(
+    (i) => i.charge === charge && key(parseFormula(i.formula).elements) === want,
+  );
   return r ? getThermoIon(r.id) : undefined;
 }

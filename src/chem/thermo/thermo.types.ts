@@ -41,7 +41,8 @@ export interface ThermoIon {
 export type LatticeMethod = 'kapustinskii' | 'born-mayer' | 'born-lande' | 'vbt';
 
 /** Crystal structure types with a tabulated Madelung constant. */
-export type StructureType = 'rock-salt' | 'caesium-chloride' | 'zinc-blende' | 'wurtzite' | 'fluorite' | 'rutile';
+export type StructureType =
+  'rock-salt' | 'caesium-chloride' | 'zinc-blende' | 'wurtzite' | 'fluorite' | 'rutile';
 
 export interface SaltThermoRequest {
   cation: ThermoIon;

@@ -6,7 +6,18 @@ import { ChemInputError, findThermoIonByFormula, parseFormula, type ThermoIon } 
  * charge, the charge has atoms that can carry it, and a SMILES names one component only.
  */
 
-const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9' };
+const SUPERSCRIPT_DIGITS: Record<string, string> = {
+  '⁰': '0',
+  '¹': '1',
+  '²': '2',
+  '³': '3',
+  '⁴': '4',
+  '⁵': '5',
+  '⁶': '6',
+  '⁷': '7',
+  '⁸': '8',
+  '⁹': '9',
+};
 
 /**
  * The charge written at the end of a formula (`NH4+`, `SO4 2-`, `SO4^2-`, `SO4--`, `SO₄²⁻`), or
@@ -40,7 +51,23 @@ const CATION_CENTRES = ['N', 'P', 'S', 'As'];
 /** Atoms that carry an anion's charge: carboxylate/sulfonate/phosphate O, N, S, P, Se, B and the halogens. */
 const ANION_CENTRES = ['O', 'N', 'S', 'P', 'Se', 'B', 'F', 'Cl', 'Br', 'I'];
 /** Non-metals: an ion with any other element (a metal) is left to the bundled data and the core. */
-const NON_METALS = new Set(['H', 'B', 'C', 'N', 'O', 'F', 'Si', 'P', 'S', 'Cl', 'As', 'Se', 'Br', 'Te', 'I']);
+const NON_METALS = new Set([
+  'H',
+  'B',
+  'C',
+  'N',
+  'O',
+  'F',
+  'Si',
+  'P',
+  'S',
+  'Cl',
+  'As',
+  'Se',
+  'Br',
+  'Te',
+  'I',
+]);
 
 /**
  * Refuse a molecular ion whose charge has no atoms to sit on: a charge of +n needs at least n N, P, S
@@ -70,7 +97,9 @@ export function requireFormulaChargeAgrees(field: string, formula: string, charg
   if (written !== undefined && written !== charge) {
     throw new ChemInputError(
       `${field}.formula`,
-      Number.isNaN(written) ? `cannot read the charge written in "${formula}"` : `"${formula}" is written with charge ${written} but charge is ${charge}`,
+      Number.isNaN(written)
+        ? `cannot read the charge written in "${formula}"`
+        : `"${formula}" is written with charge ${written} but charge is ${charge}`,
       'the formula without a charge, or with the same charge as "charge" (e.g. "SO4 2-" with -2)',
     );
   }

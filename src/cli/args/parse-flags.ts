@@ -11,7 +11,14 @@ export type FlagSpec =
   | { type: 'string'; maxLength?: number }
   | { type: 'enum'; values: readonly string[] }
   | { type: 'number'; min: number; max: number; integer?: boolean; unit?: string }
-  | { type: 'number-list'; minItems: number; maxItems: number; min: number; max: number; unit?: string }
+  | {
+      type: 'number-list';
+      minItems: number;
+      maxItems: number;
+      min: number;
+      max: number;
+      unit?: string;
+    }
   | { type: 'string-list'; minItems: number; maxItems: number; maxLength?: number };
 
 export type FlagSpecs = Readonly<Record<string, FlagSpec>>;
@@ -47,8 +54,10 @@ export function readNumber(
   if (t === '') throw usageError(flag, 'the value is empty', accepted);
   if (!DECIMAL.test(t)) throw valueError(flag, `"${clip(text)}" is not a number`, accepted);
   const x = Number(t);
-  if (!Number.isFinite(x)) throw valueError(flag, `"${clip(text)}" is not a finite number`, accepted);
-  if (spec.integer && !Number.isInteger(x)) throw valueError(flag, `${x} is not a whole number`, accepted);
+  if (!Number.isFinite(x))
+    throw valueError(flag, `"${clip(text)}" is not a finite number`, accepted);
+  if (spec.integer && !Number.isInteger(x))
+    throw valueError(flag, `${x} is not a whole number`, accepted);
   if (x < spec.min || x > spec.max) throw valueError(flag, `${x} is out of range`, accepted);
   return x === 0 ? 0 : x; // no −0
 }
@@ -57,9 +66,18 @@ const clip = (s: string) => (s.length > 40 ? `${s.slice(0, 40)}…` : s);
 
 function splitList(flag: string, text: string, minItems: number, maxItems: number): string[] {
   const items = text.split(',').map((s) => s.trim());
-  if (items.some((s) => s === '')) throw usageError(flag, `"${clip(text)}" has an empty entry`, 'comma-separated values, none empty');
+  if (items.some((s) => s === ''))
+    throw usageError(
+      flag,
+      `"${clip(text)}" has an empty entry`,
+      'comma-separated values, none empty',
+    );
   if (items.length < minItems || items.length > maxItems) {
-    throw valueError(flag, `${items.length} value(s) given`, `${minItems} to ${maxItems} comma-separated values`);
+    throw valueError(
+      flag,
+      `${items.length} value(s) given`,
+      `${minItems} to ${maxItems} comma-separated values`,
+    );
   }
   return items;
 }
@@ -76,7 +94,8 @@ function readValue(flag: string, text: string, spec: FlagSpec): unknown {
     }
     case 'enum': {
       if (text.trim() === '') throw usageError(flag, 'the value is empty', spec.values.join(', '));
-      if (!spec.values.includes(text)) throw usageError(flag, `"${clip(text)}" is not one of the choices`, spec.values.join(', '));
+      if (!spec.values.includes(text))
+        throw usageError(flag, `"${clip(text)}" is not one of the choices`, spec.values.join(', '));
       return text;
     }
     case 'number':
@@ -89,7 +108,8 @@ function readValue(flag: string, text: string, spec: FlagSpec): unknown {
       const items = splitList(flag, text, spec.minItems, spec.maxItems);
       const max = spec.maxLength ?? 200;
       const long = items.find((s) => s.length > max);
-      if (long !== undefined) throw valueError(flag, `"${clip(long)}" is longer than ${max} characters`);
+      if (long !== undefined)
+        throw valueError(flag, `"${clip(long)}" is longer than ${max} characters`);
       return items;
     }
   }
@@ -115,7 +135,9 @@ function unknownFlag(token: string, specs: FlagSpecs): Error {
   return usageError(
     clip(token.split('=')[0]!),
     `unknown flag${near ? ` (did you mean --${near}?)` : ''}`,
-    Object.keys(specs).map((k) => `--${k}`).join(', '),
+    Object.keys(specs)
+      .map((k) => `--${k}`)
+      .join(', '),
   );
 }
 
@@ -131,14 +153,18 @@ export function parseFlags<S extends FlagSpecs>(args: readonly string[], specs: 
     if (token === '-h' && specs.help?.type === 'switch') token = '--help';
     if (!token.startsWith('--') || token === '--') {
       if (/^-[A-Za-z]/.test(token)) throw unknownFlag(token, specs);
-      throw usageError(`"${clip(token)}"`, 'unexpected argument (every value follows its flag, e.g. --dose 200)');
+      throw usageError(
+        `"${clip(token)}"`,
+        'unexpected argument (every value follows its flag, e.g. --dose 200)',
+      );
     }
     const eq = token.indexOf('=');
     const name = eq > 0 ? token.slice(2, eq) : token.slice(2);
     const spec = Object.prototype.hasOwnProperty.call(specs, name) ? specs[name] : undefined;
     if (!spec) throw unknownFlag(token, specs);
     const flag = `--${name}`;
-    if (Object.prototype.hasOwnProperty.call(out, name)) throw usageError(flag, 'is given more than once');
+    if (Object.prototype.hasOwnProperty.call(out, name))
+      throw usageError(flag, 'is given more than once');
     if (spec.type === 'switch') {
       if (eq > 0) throw usageError(flag, 'is a switch and takes no value');
       out[name] = true;
@@ -158,6 +184,12 @@ export function parseFlags<S extends FlagSpecs>(args: readonly string[], specs: 
 }
 
 /** Refuse two flags given together (exit status 2). */
-export function refuseTogether(flags: Record<string, unknown>, a: string, b: string, why: string): void {
-  if (flags[a] !== undefined && flags[b] !== undefined) throw usageError(`--${a}`, `cannot be combined with --${b}: ${why}`);
+export function refuseTogether(
+  flags: Record<string, unknown>,
+  a: string,
+  b: string,
+  why: string,
+): void {
+  if (flags[a] !== undefined && flags[b] !== undefined)
+    throw usageError(`--${a}`, `cannot be combined with --${b}: ${why}`);
 }

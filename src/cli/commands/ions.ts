@@ -14,8 +14,7 @@ export function ionsJsonDocument(ions: readonly CounterIon[]) {
   return {
     format: IONS_JSON_FORMAT,
     version: IONS_JSON_VERSION,
-    note:
-      'Bundled counter-ion library. Every value names its source; "from memory" marks values recalled rather than read from the source. Molar masses are computed from IUPAC 2021 standard atomic weights. Screening data only: experiments and the regulatory guidance in force decide.',
+    note: 'Bundled counter-ion library. Every value names its source; "from memory" marks values recalled rather than read from the source. Molar masses are computed from IUPAC 2021 standard atomic weights. Screening data only: experiments and the regulatory guidance in force decide.',
     count: ions.length,
     ions,
   };
@@ -24,7 +23,9 @@ export function ionsJsonDocument(ions: readonly CounterIon[]) {
 const pad = (s: string, n: number) => (s.length > n ? s.slice(0, n - 1) + '…' : s.padEnd(n));
 
 function charges(ion: CounterIon): string {
-  const set = [...new Set(ion.stoichiometries.map((s) => s.ionCharge))].sort((a, b) => Math.abs(a) - Math.abs(b));
+  const set = [...new Set(ion.stoichiometries.map((s) => s.ionCharge))].sort(
+    (a, b) => Math.abs(a) - Math.abs(b),
+  );
   return set.map((c) => (c > 0 ? `+${c}` : `${c}`)).join(', ');
 }
 
@@ -64,7 +65,9 @@ export const ionsCommand: CliCommand = defineCommand('ions', {
       `${pad('name', 22)} ${pad('formula', 16)} ${pad('charge', 10)} ${pad('pKa (25 °C, water)', 24)} ${pad('class', 5)} ${'M (g/mol)'.padStart(9)}\n`,
     );
     for (const ion of ions) {
-      const pkas = ion.pKas.length ? ion.pKas.map((p) => p.value.toFixed(2)).join(', ') : 'not sourced';
+      const pkas = ion.pKas.length
+        ? ion.pKas.map((p) => p.value.toFixed(2)).join(', ')
+        : 'not sourced';
       const cls = ion.acceptabilityClass === null ? '–' : String(ion.acceptabilityClass);
       const name = ion.referenceOnly ? `${ion.name} (ref.)` : ion.name;
       await writeText(

@@ -1,5 +1,12 @@
 import { defineCommand } from '../define-command';
-import { ChemInputError, estimateSaltThermo, findThermoIon, listThermoIonIds, stoichiometryFromCharges, type Estimate } from '@/chem';
+import {
+  ChemInputError,
+  estimateSaltThermo,
+  findThermoIon,
+  listThermoIonIds,
+  stoichiometryFromCharges,
+  type Estimate,
+} from '@/chem';
 import { usageError } from '../args/cli-error';
 import { helpRequested } from '../args/help';
 import { parseFlags, refuseTogether } from '../args/parse-flags';
@@ -8,7 +15,8 @@ import { writeLine, type CliCommand } from '../io';
 import { COMMAND_USAGE } from '../command-usage';
 import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from './lattice-options';
 
-const fmt = (e: Estimate, digits = 0) => `${e.value.toFixed(digits)} ± ${e.uncertainty.toFixed(digits)} kJ/mol [${e.method}]`;
+const fmt = (e: Estimate, digits = 0) =>
+  `${e.value.toFixed(digits)} ± ${e.uncertainty.toFixed(digits)} kJ/mol [${e.method}]`;
 
 const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.lattice;
 
@@ -44,26 +52,39 @@ export const latticeCommand: CliCommand = defineCommand('lattice', {
   run: async (args, io) => {
     const flags = parseFlags(args, LATTICE_FLAGS);
     if (helpRequested(flags, io, USAGE)) return 0;
-    if (flags.cation === undefined) throw usageError('--cation', 'is required', 'a bundled ion id or symbol, e.g. Na+');
-    if (flags.anion === undefined) throw usageError('--anion', 'is required', 'a bundled ion id or symbol, e.g. Cl-');
+    if (flags.cation === undefined)
+      throw usageError('--cation', 'is required', 'a bundled ion id or symbol, e.g. Na+');
+    if (flags.anion === undefined)
+      throw usageError('--anion', 'is required', 'a bundled ion id or symbol, e.g. Cl-');
     refuseTogether(flags, 'volume', 'density', 'give one measured size');
     const method = flags.method ?? 'auto';
     for (const f of ['volume', 'density', 'structure'] as const) {
       const reads = f === 'structure' ? READS[method].structure : READS[method].volume;
-      if (flags[f] !== undefined && !reads) throw usageError(`--${f}`, `is not used by --method ${method}`);
+      if (flags[f] !== undefined && !reads)
+        throw usageError(`--${f}`, `is not used by --method ${method}`);
     }
     const cat = findThermoIon(flags.cation);
     const an = findThermoIon(flags.anion);
     if (!cat || !an) {
-      throw usageError(!cat ? '--cation' : '--anion', `unknown ion "${!cat ? flags.cation : flags.anion}"`, `an id or symbol, e.g. --cation Na+ --anion Cl-. Ids: ${listThermoIonIds().join(', ')}`);
+      throw usageError(
+        !cat ? '--cation' : '--anion',
+        `unknown ion "${!cat ? flags.cation : flags.anion}"`,
+        `an id or symbol, e.g. --cation Na+ --anion Cl-. Ids: ${listThermoIonIds().join(', ')}`,
+      );
     }
-    if (cat.charge <= 0) throw new ChemInputError('cation', `${cat.label} is not a cation`, 'a positive ion');
-    if (an.charge >= 0) throw new ChemInputError('anion', `${an.label} is not an anion`, 'a negative ion');
+    if (cat.charge <= 0)
+      throw new ChemInputError('cation', `${cat.label} is not a cation`, 'a positive ion');
+    if (an.charge >= 0)
+      throw new ChemInputError('anion', `${an.label} is not an anion`, 'a negative ion');
     const st = stoichiometryFromCharges(cat.charge, an.charge);
     let molarMass: number | undefined;
     if (flags.density !== undefined) {
       if (cat.molarMassGPerMol === undefined || an.molarMassGPerMol === undefined) {
-        throw new ChemInputError('--density', 'the molar mass of this salt is not known', 'ions with a known formula');
+        throw new ChemInputError(
+          '--density',
+          'the molar mass of this salt is not known',
+          'ions with a known formula',
+        );
       }
       molarMass = st.cations * cat.molarMassGPerMol + st.anions * an.molarMassGPerMol;
     }
@@ -75,10 +96,21 @@ export const latticeCommand: CliCommand = defineCommand('lattice', {
       method,
       ...(flags.structure !== undefined ? { structureType: flags.structure } : {}),
       ...(flags.volume !== undefined ? { formulaUnitVolumeNm3: flags.volume } : {}),
-      ...(flags.density !== undefined ? { densityGPerCm3: flags.density, molarMassGPerMol: molarMass } : {}),
+      ...(flags.density !== undefined
+        ? { densityGPerCm3: flags.density, molarMassGPerMol: molarMass }
+        : {}),
     });
     if (flags.json) {
-      writeLine(io.stdout, JSON.stringify({ cation: cat.id, anion: an.id, cationsPerFormula: st.cations, anionsPerFormula: st.anions, ...r }));
+      writeLine(
+        io.stdout,
+        JSON.stringify({
+          cation: cat.id,
+          anion: an.id,
+          cationsPerFormula: st.cations,
+          anionsPerFormula: st.anions,
+          ...r,
+        }),
+      );
       return 0;
     }
     const salt = `${cat.formula ?? cat.label}${st.cations > 1 ? st.cations : ''}${an.formula ?? an.label}${st.anions > 1 ? st.anions : ''}`;

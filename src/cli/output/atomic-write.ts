@@ -9,7 +9,10 @@ import { basename, dirname, join } from 'node:path';
  * file and leaves the previous file intact.
  */
 export async function writeFileAtomic(path: string, text: string): Promise<void> {
-  const tmp = join(dirname(path), `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  const tmp = join(
+    dirname(path),
+    `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`,
+  );
   try {
     const fh = await open(tmp, 'wx', 0o644);
     try {
@@ -30,7 +33,10 @@ export async function writeFileAtomic(path: string, text: string): Promise<void>
  * flushes and renames it over the target, `abort()` removes it.
  */
 export async function openAtomicOutput(path: string) {
-  const tmp = join(dirname(path), `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  const tmp = join(
+    dirname(path),
+    `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`,
+  );
   const fh = await open(tmp, 'wx', 0o644);
   let closed = false;
   return {

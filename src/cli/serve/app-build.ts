@@ -15,7 +15,14 @@ export function findPackageRoot(from: string = dirname(fileURLToPath(import.meta
 }
 
 /** The inputs of the app build: a change to any of them makes dist/ stale. */
-const SOURCES = ['src', 'public', 'vite.config.ts', 'package.json', 'package-lock.json', 'tsconfig.json'];
+const SOURCES = [
+  'src',
+  'public',
+  'vite.config.ts',
+  'package.json',
+  'package-lock.json',
+  'tsconfig.json',
+];
 
 function newestMtimeMs(path: string): number {
   let st;
@@ -26,7 +33,8 @@ function newestMtimeMs(path: string): number {
   }
   if (!st.isDirectory()) return st.mtimeMs;
   let newest = st.mtimeMs;
-  for (const entry of readdirSync(path)) newest = Math.max(newest, newestMtimeMs(join(path, entry)));
+  for (const entry of readdirSync(path))
+    newest = Math.max(newest, newestMtimeMs(join(path, entry)));
   return newest;
 }
 
@@ -40,14 +48,22 @@ export function buildNeeded(root: string, outDir: string): string | null {
 }
 
 /** Run `vite build` in `root` (output in `outDir`); resolves with its exit status. */
-export function buildApp(root: string, outDir: string, log: (line: string) => void): Promise<number> {
+export function buildApp(
+  root: string,
+  outDir: string,
+  log: (line: string) => void,
+): Promise<number> {
   const vite = join(root, 'node_modules', 'vite', 'bin', 'vite.js');
   if (!existsSync(vite)) {
     log(`cannot build: ${vite} is missing (run npm ci in ${root})`);
     return Promise.resolve(1);
   }
   return new Promise((resolveExit) => {
-    const child = spawn(process.execPath, [vite, 'build', '--logLevel', 'warn', '--outDir', outDir, '--emptyOutDir'], { cwd: root, stdio: ['ignore', 'inherit', 'inherit'] });
+    const child = spawn(
+      process.execPath,
+      [vite, 'build', '--logLevel', 'warn', '--outDir', outDir, '--emptyOutDir'],
+      { cwd: root, stdio: ['ignore', 'inherit', 'inherit'] },
+    );
     child.on('exit', (code) => resolveExit(code ?? 1));
     child.on('error', (err) => {
       log(`cannot build: ${err.message}`);

@@ -30,12 +30,26 @@ export const serveCommand: CliCommand = defineCommand('serve', {
     const flags = parseFlags(args, SERVE_FLAGS);
     if (helpRequested(flags, io, USAGE)) return 0;
     const envPort = process.env.PORT;
-    const port = flags.port ?? (envPort !== undefined && envPort !== '' ? readNumber('PORT', envPort, SERVE_FLAGS.port) : 4173);
+    const port =
+      flags.port ??
+      (envPort !== undefined && envPort !== ''
+        ? readNumber('PORT', envPort, SERVE_FLAGS.port)
+        : 4173);
     const root = flags.dir !== undefined && flags['no-build'] ? null : findPackageRoot();
-    const dir = flags.dir !== undefined ? (isAbsolute(flags.dir) ? flags.dir : resolve(flags.dir)) : join(root!, 'dist');
-    const why = root ? buildNeeded(root, dir) : existsSync(join(dir, 'index.html')) ? null : `no index.html in ${dir}`;
+    const dir =
+      flags.dir !== undefined
+        ? isAbsolute(flags.dir)
+          ? flags.dir
+          : resolve(flags.dir)
+        : join(root!, 'dist');
+    const why = root
+      ? buildNeeded(root, dir)
+      : existsSync(join(dir, 'index.html'))
+        ? null
+        : `no index.html in ${dir}`;
     if (why) {
-      if (flags['no-build'] || !root) throw valueError('--no-build', `${why}; cannot serve without building`);
+      if (flags['no-build'] || !root)
+        throw valueError('--no-build', `${why}; cannot serve without building`);
       writeLine(io.stderr, `saltsmith serve: building the workbench (${why})…`);
       const code = await buildApp(root, dir, (l) => writeLine(io.stderr, l));
       if (code !== 0) {
@@ -48,7 +62,8 @@ export const serveCommand: CliCommand = defineCommand('serve', {
       server = await startStaticServer(dir, port);
     } catch (err) {
       const code = (err as NodeJS.ErrnoException).code;
-      if (code === 'EADDRINUSE') throw usageError('--port', `port ${port} is in use`, 'a free port (--port or PORT)');
+      if (code === 'EADDRINUSE')
+        throw usageError('--port', `port ${port} is in use`, 'a free port (--port or PORT)');
       throw err;
     }
     const address = server.address();

@@ -53,8 +53,17 @@ async function isFile(p: string): Promise<boolean> {
   }
 }
 
-function send(res: ServerResponse, status: number, body: string, type = 'text/plain; charset=utf-8') {
-  res.writeHead(status, { ...SECURITY_HEADERS, 'Content-Type': type, 'Content-Length': Buffer.byteLength(body) });
+function send(
+  res: ServerResponse,
+  status: number,
+  body: string,
+  type = 'text/plain; charset=utf-8',
+) {
+  res.writeHead(status, {
+    ...SECURITY_HEADERS,
+    'Content-Type': type,
+    'Content-Length': Buffer.byteLength(body),
+  });
   res.end(body);
 }
 
@@ -70,15 +79,26 @@ async function handle(root: string, req: IncomingMessage, res: ServerResponse) {
   if (!(await isFile(file))) {
     if (extname(urlPath) !== '') return send(res, 404, 'not found\n');
     file = join(root, 'index.html');
-    if (!(await isFile(file))) return send(res, 404, 'not found (no index.html: build the app first)\n');
+    if (!(await isFile(file)))
+      return send(res, 404, 'not found (no index.html: build the app first)\n');
   }
   const ext = extname(file).toLowerCase();
   const size = (await stat(file)).size;
-  const name = file.slice(resolve(root).length + 1).split(sep).join('/');
+  const name = file
+    .slice(resolve(root).length + 1)
+    .split(sep)
+    .join('/');
   const cache = name.startsWith('assets/') ? 'public, max-age=31536000, immutable' : 'no-cache';
-  res.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': TYPES[ext] ?? 'application/octet-stream', 'Content-Length': size, 'Cache-Control': cache });
+  res.writeHead(200, {
+    ...SECURITY_HEADERS,
+    'Content-Type': TYPES[ext] ?? 'application/octet-stream',
+    'Content-Length': size,
+    'Cache-Control': cache,
+  });
   if (req.method === 'HEAD') return res.end();
-  createReadStream(file).on('error', () => res.destroy()).pipe(res);
+  createReadStream(file)
+    .on('error', () => res.destroy())
+    .pipe(res);
 }
 
 /** Start serving `root` on host:port; resolves once listening. */

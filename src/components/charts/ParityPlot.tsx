@@ -30,7 +30,9 @@ export function ParityPlot({
   size?: number;
 }) {
   const pad = 34;
-  const all = points.flatMap((p) => [p.measured, p.predicted, ...(p.other === undefined ? [] : [p.other])]).filter(Number.isFinite);
+  const all = points
+    .flatMap((p) => [p.measured, p.predicted, ...(p.other === undefined ? [] : [p.other])])
+    .filter(Number.isFinite);
   const lo = Math.floor(Math.min(...all) - 0.25);
   const hi = Math.ceil(Math.max(...all) + 0.25);
   const s = (v: number) => pad + ((v - lo) / (hi - lo)) * (size - 2 * pad);
@@ -38,7 +40,10 @@ export function ParityPlot({
   const ticks: number[] = [];
   for (let t = lo; t <= hi; t += Math.max(1, Math.round((hi - lo) / 4))) ticks.push(t);
   const words = points
-    .map((p) => `${p.label}: measured ${sig(p.measured)}, ${modelName} ${sig(p.predicted)}${p.other === undefined || !otherName ? '' : `, ${otherName} ${sig(p.other)}`}`)
+    .map(
+      (p) =>
+        `${p.label}: measured ${sig(p.measured)}, ${modelName} ${sig(p.predicted)}${p.other === undefined || !otherName ? '' : `, ${otherName} ${sig(p.other)}`}`,
+    )
     .join('; ');
   return (
     <figure className="chart parity">
@@ -49,15 +54,38 @@ export function ParityPlot({
         <line x1={pad} y1={pad} x2={pad} y2={size - pad} stroke="#6b6355" />
         {ticks.map((t) => (
           <g key={t} fontSize="10" fill="#4a443a">
-            <text x={s(t)} y={size - pad + 13} textAnchor="middle">{t}</text>
-            <text x={pad - 5} y={y(t) + 3} textAnchor="end">{t}</text>
+            <text x={s(t)} y={size - pad + 13} textAnchor="middle">
+              {t}
+            </text>
+            <text x={pad - 5} y={y(t) + 3} textAnchor="end">
+              {t}
+            </text>
           </g>
         ))}
-        <text x={size / 2} y={size - 4} textAnchor="middle" fontSize="10">measured, {unit}</text>
-        <text x={10} y={size / 2} textAnchor="middle" fontSize="10" transform={`rotate(-90 10 ${size / 2})`}>predicted</text>
+        <text x={size / 2} y={size - 4} textAnchor="middle" fontSize="10">
+          measured, {unit}
+        </text>
+        <text
+          x={10}
+          y={size / 2}
+          textAnchor="middle"
+          fontSize="10"
+          transform={`rotate(-90 10 ${size / 2})`}
+        >
+          predicted
+        </text>
         {points.map((p) =>
           p.other === undefined ? null : (
-            <rect key={`${p.id}-o`} x={s(p.measured) - 3.5} y={y(p.other) - 3.5} width={7} height={7} fill="none" stroke="#b4621b" strokeWidth={1.4} />
+            <rect
+              key={`${p.id}-o`}
+              x={s(p.measured) - 3.5}
+              y={y(p.other) - 3.5}
+              width={7}
+              height={7}
+              fill="none"
+              stroke="#b4621b"
+              strokeWidth={1.4}
+            />
           ),
         )}
         {points.map((p) => (

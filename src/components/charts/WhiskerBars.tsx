@@ -44,8 +44,12 @@ export function WhiskerBars({
   const plotW = Math.max(120, width - labelW - valueW - 16);
   const top = 22;
   const height = top + rows.length * rowH + 24;
-  const lo = domain?.[0] ?? Math.min(0, ...rows.map((r) => Math.min(r.value - (r.uncertainty ?? 0), r.marker?.value ?? 0)));
-  const hi = domain?.[1] ?? Math.max(0, ...rows.map((r) => Math.max(r.value + (r.uncertainty ?? 0), r.marker?.value ?? 0)));
+  const lo =
+    domain?.[0] ??
+    Math.min(0, ...rows.map((r) => Math.min(r.value - (r.uncertainty ?? 0), r.marker?.value ?? 0)));
+  const hi =
+    domain?.[1] ??
+    Math.max(0, ...rows.map((r) => Math.max(r.value + (r.uncertainty ?? 0), r.marker?.value ?? 0)));
   const span = hi - lo || 1;
   const x = (v: number) => labelW + ((Math.min(hi, Math.max(lo, v)) - lo) / span) * plotW;
   const ticks = niceTicks(lo, hi, 5);
@@ -66,7 +70,14 @@ export function WhiskerBars({
             </text>
           </g>
         ))}
-        <line x1={x(0)} x2={x(0)} y1={top - 6} y2={height - 20} stroke="#1d3a4a" strokeWidth="1.5" />
+        <line
+          x1={x(0)}
+          x2={x(0)}
+          y1={top - 6}
+          y2={height - 20}
+          stroke="#1d3a4a"
+          strokeWidth="1.5"
+        />
         <text x={labelW + plotW} y={12} fontSize="11" textAnchor="end" fill="#41596a">
           {unit}
         </text>
@@ -77,14 +88,31 @@ export function WhiskerBars({
           const u = r.uncertainty ?? 0;
           return (
             <g key={r.id}>
-              <text x={labelW - 8} y={y + rowH / 2 + 4} fontSize="12" textAnchor="end" fill="#1d3a4a">
+              <text
+                x={labelW - 8}
+                y={y + rowH / 2 + 4}
+                fontSize="12"
+                textAnchor="end"
+                fill="#1d3a4a"
+              >
                 {r.label.length > maxChars ? `${r.label.slice(0, maxChars - 1)}…` : r.label}
                 <title>{r.label}</title>
               </text>
-              <rect x={x0} y={y + 6} width={Math.max(1, x1 - x0)} height={rowH - 12} fill={r.value < 0 ? '#7fb3ae' : '#e0a46b'} />
+              <rect
+                x={x0}
+                y={y + 6}
+                width={Math.max(1, x1 - x0)}
+                height={rowH - 12}
+                fill={r.value < 0 ? '#7fb3ae' : '#e0a46b'}
+              />
               {u > 0 ? (
                 <g stroke="#1d3a4a" strokeWidth="1.4">
-                  <line x1={x(r.value - u)} x2={x(r.value + u)} y1={y + rowH / 2} y2={y + rowH / 2} />
+                  <line
+                    x1={x(r.value - u)}
+                    x2={x(r.value + u)}
+                    y1={y + rowH / 2}
+                    y2={y + rowH / 2}
+                  />
                   <line x1={x(r.value - u)} x2={x(r.value - u)} y1={y + 7} y2={y + rowH - 7} />
                   <line x1={x(r.value + u)} x2={x(r.value + u)} y1={y + 7} y2={y + rowH - 7} />
                 </g>
@@ -118,8 +146,10 @@ export function niceTicks(lo: number, hi: number, count: number): number[] {
   if (!(span > 0)) return [lo];
   const raw = span / count;
   const mag = 10 ** Math.floor(Math.log10(raw));
-  const step = [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => span / s <= count + 0.5) ?? 10 * mag;
+  const step =
+    [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => span / s <= count + 0.5) ?? 10 * mag;
   const ticks: number[] = [];
-  for (let t = Math.ceil(lo / step) * step; t <= hi + step * 1e-9; t += step) ticks.push(Number(t.toPrecision(12)));
+  for (let t = Math.ceil(lo / step) * step; t <= hi + step * 1e-9; t += step)
+    ticks.push(Number(t.toPrecision(12)));
   return ticks;
 }

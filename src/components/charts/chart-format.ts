@@ -16,5 +16,14 @@ export function kjWithUncertainty(value: number, uncertainty: number): string {
 }
 
 /** Series colours of the workbench's charts (own palette, distinguishable in greyscale by dash too). */
-export const SERIES_COLOURS = ['#1f6f6b', '#b4621b', '#5b4a9e', '#a3202a', '#3d7a2a', '#8a6d00', '#2f5d8a', '#7a3b69'];
+export const SERIES_COLOURS = [
+  '#1f6f6b',
+  '#b4621b',
+  '#5b4a9e',
+  '#a3202a',
+  '#3d7a2a',
+  '#8a6d00',
+  '#2f5d8a',
+  '#7a3b69',
+];
 export const SERIES_DASHES = ['', '6 3', '2 3', '8 3 2 3', '4 4', '1 3', '10 4', '3 2 1 2'];

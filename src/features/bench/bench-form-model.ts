@@ -16,16 +16,42 @@ export interface MeasurementDraft {
 
 export type MeasurementErrors = Partial<Record<keyof MeasurementDraft, string>>;
 
-export const CRYSTALLINITY_CLASSES = ['crystalline', 'partly crystalline', 'amorphous', 'not determined'] as const;
+export const CRYSTALLINITY_CLASSES = [
+  'crystalline',
+  'partly crystalline',
+  'amorphous',
+  'not determined',
+] as const;
 export type CrystallinityClass = (typeof CRYSTALLINITY_CLASSES)[number];
 
 /** What each kind of measurement asks for, with its stored unit and accepted range. */
 export const MEASUREMENT_KINDS: Record<
   MeasurementKind,
-  { label: string; unit: string; valueLabel?: string; min?: number; max?: number; conditions: ('medium' | 'ph' | 'temperatureC')[] }
+  {
+    label: string;
+    unit: string;
+    valueLabel?: string;
+    min?: number;
+    max?: number;
+    conditions: ('medium' | 'ph' | 'temperatureC')[];
+  }
 > = {
-  solubility: { label: 'Solubility', unit: 'mg/mL', valueLabel: 'Solubility (as salt)', min: 0, max: 1000, conditions: ['medium', 'ph', 'temperatureC'] },
-  'melting-point': { label: 'Melting point', unit: '°C', valueLabel: 'Melting point (onset)', min: -50, max: 500, conditions: [] },
+  solubility: {
+    label: 'Solubility',
+    unit: 'mg/mL',
+    valueLabel: 'Solubility (as salt)',
+    min: 0,
+    max: 1000,
+    conditions: ['medium', 'ph', 'temperatureC'],
+  },
+  'melting-point': {
+    label: 'Melting point',
+    unit: '°C',
+    valueLabel: 'Melting point (onset)',
+    min: -50,
+    max: 500,
+    conditions: [],
+  },
   // DSC peak area per mole of salt formula unit; with the melting point it gives the salt's ideal
   // (Schröder–van Laar) solubility, which sharpens the salt-solubility estimate.
   'fusion-enthalpy': {
@@ -44,7 +70,14 @@ export const MEASUREMENT_KINDS: Record<
     max: 300,
     conditions: ['temperatureC'],
   },
-  'mass-gain-80rh': { label: 'Mass gain at 80 % RH', unit: '%', valueLabel: 'Mass gain after 24 h', min: 0, max: 1000, conditions: ['temperatureC'] },
+  'mass-gain-80rh': {
+    label: 'Mass gain at 80 % RH',
+    unit: '%',
+    valueLabel: 'Mass gain after 24 h',
+    min: 0,
+    max: 1000,
+    conditions: ['temperatureC'],
+  },
   crystallinity: { label: 'Crystallinity', unit: '', conditions: [] },
   note: { label: 'Note', unit: '', conditions: [] },
 };
@@ -54,7 +87,14 @@ export const emptyDraft = (kind: MeasurementKind = 'solubility'): MeasurementDra
   value: '',
   medium: kind === 'solubility' ? 'water' : '',
   ph: '',
-  temperatureC: kind === 'mass-gain-80rh' ? '25' : kind === 'solubility' ? '37' : kind === 'solution-enthalpy' ? '25' : '',
+  temperatureC:
+    kind === 'mass-gain-80rh'
+      ? '25'
+      : kind === 'solubility'
+        ? '37'
+        : kind === 'solution-enthalpy'
+          ? '25'
+          : '',
   crystallinity: 'crystalline',
   text: '',
 });
@@ -101,7 +141,8 @@ export function measurementFromDraft(
     }
     const r = finiteIn(label, unit, min, max).safeParse(x === 'bad' ? Number.NaN : x);
     if (!r.success) {
-      errors[key] = x === 'bad' ? `${label} must be a number` : (r.error.issues[0]?.message ?? 'Out of range');
+      errors[key] =
+        x === 'bad' ? `${label} must be a number` : (r.error.issues[0]?.message ?? 'Out of range');
       return null;
     }
     return r.data;
@@ -109,22 +150,38 @@ export function measurementFromDraft(
 
   let value: number | null = null;
   if (spec.valueLabel) {
-    value = number('value', spec.valueLabel.replace(/ \(.*\)$/, ''), spec.unit, spec.min ?? -1e6, spec.max ?? 1e6, true);
-    if (draft.kind === 'solubility' && value === 0) errors.value = 'Solubility must be greater than zero';
+    value = number(
+      'value',
+      spec.valueLabel.replace(/ \(.*\)$/, ''),
+      spec.unit,
+      spec.min ?? -1e6,
+      spec.max ?? 1e6,
+      true,
+    );
+    if (draft.kind === 'solubility' && value === 0)
+      errors.value = 'Solubility must be greater than zero';
   }
-  const ph = spec.conditions.includes('ph') ? number('ph', 'pH', '', 0, 14, draft.kind === 'solubility') : null;
+  const ph = spec.conditions.includes('ph')
+    ? number('ph', 'pH', '', 0, 14, draft.kind === 'solubility')
+    : null;
   const temperatureC = spec.conditions.includes('temperatureC')
     ? number('temperatureC', 'Temperature', '°C', 0, 100, draft.kind !== 'mass-gain-80rh')
     : null;
   const medium = draft.medium.trim();
-  if (spec.conditions.includes('medium') && !medium) errors.medium = 'Name the medium (e.g. water, 0.1 M HCl, FaSSIF)';
+  if (spec.conditions.includes('medium') && !medium)
+    errors.medium = 'Name the medium (e.g. water, 0.1 M HCl, FaSSIF)';
   if (medium.length > 200) errors.medium = 'At most 200 characters';
   const notes = draft.text.trim();
   if (draft.kind === 'note' && !notes) errors.text = 'Write the note';
   if (notes.length > 4000) errors.text = 'At most 4000 characters';
   if (Object.keys(errors).length > 0) return { ok: false, errors };
 
-  const text = draft.kind === 'crystallinity' ? (notes ? `${draft.crystallinity} — ${notes}` : draft.crystallinity) : notes;
+  const text =
+    draft.kind === 'crystallinity'
+      ? notes
+        ? `${draft.crystallinity} — ${notes}`
+        : draft.crystallinity
+      : notes;
   return {
     ok: true,
     measurement: {

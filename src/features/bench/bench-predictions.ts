@@ -1,4 +1,10 @@
-import { hygroscopicityClass, latticeFromSolutionEnthalpy, vantHoffFit, type Estimate, type VanTHoffFit } from '@/chem';
+import {
+  hygroscopicityClass,
+  latticeFromSolutionEnthalpy,
+  vantHoffFit,
+  type Estimate,
+  type VanTHoffFit,
+} from '@/chem';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { MeasurementRecord } from '@/persistence/records';
@@ -25,17 +31,35 @@ const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 1 ? x.toPrecision(3) 
  * enthalpy of fusion, the salt's water solubility that those data now sharpen. No model predicts
  * the melting point or crystallinity themselves, and the text says so.
  */
-export function predictionFor(m: MeasurementRecord, data: ProjectScreening | undefined): Prediction {
+export function predictionFor(
+  m: MeasurementRecord,
+  data: ProjectScreening | undefined,
+): Prediction {
   if (!data) return { text: 'screen not available', kind: 'none', basis: '' };
   const row = data.screen.rows.find((r) => r.id === m.candidateId);
-  if (!row || row.error) return { text: row?.error ? `not screened: ${row.error}` : 'not screened', kind: 'none', basis: '' };
+  if (!row || row.error)
+    return {
+      text: row?.error ? `not screened: ${row.error}` : 'not screened',
+      kind: 'none',
+      basis: '',
+    };
   switch (m.kind) {
     case 'solubility': {
-      if (m.ph === null) return { text: 'record the equilibrium pH to compare with the pH profile', kind: 'none', basis: '' };
-      const nearest = row.profile.reduce((a, b) => (Math.abs(b.pH - m.ph!) < Math.abs(a.pH - m.ph!) ? b : a), row.profile[0]!);
-      if (!nearest || Math.abs(nearest.pH - m.ph) > 0.06) return { text: `pH ${m.ph} is outside the computed range`, kind: 'none', basis: '' };
+      if (m.ph === null)
+        return {
+          text: 'record the equilibrium pH to compare with the pH profile',
+          kind: 'none',
+          basis: '',
+        };
+      const nearest = row.profile.reduce(
+        (a, b) => (Math.abs(b.pH - m.ph!) < Math.abs(a.pH - m.ph!) ? b : a),
+        row.profile[0]!,
+      );
+      if (!nearest || Math.abs(nearest.pH - m.ph) > 0.06)
+        return { text: `pH ${m.ph} is outside the computed range`, kind: 'none', basis: '' };
       // The profile is in free-form equivalents; the bench records mass of salt per mL.
-      const toSalt = row.saltMolarMassGPerMol / (row.drugPerSalt * data.drugIon.freeFormMolarMassGPerMol);
+      const toSalt =
+        row.saltMolarMassGPerMol / (row.drugPerSalt * data.drugIon.freeFormMolarMassGPerMol);
       const s = nearest.solubilityMgPerMl * toSalt;
       const u = uncertaintiesOf(row, data.screen.robustnessShared);
       const sigma = nearest.solid === 'salt' ? u.saltLogSigma : u.freeLogSigma;
@@ -46,15 +70,26 @@ export function predictionFor(m: MeasurementRecord, data: ProjectScreening | und
       const fromMeasured = nearest.solid === 'salt' && row.kspOrigin === 'measured';
       return {
         text: `≈ ${fmt(s)} mg/mL as salt at pH ${nearest.pH.toFixed(1)} (±1σ ${fmt(s / 10 ** sigma)}–${fmt(s * 10 ** sigma)}), ${nearest.solid === 'salt' ? 'salt' : 'free form'} limits${tNote}${
-          fromMeasured ? '; K_sp taken from a measured solubility of this salt, so not an independent check' : ''
+          fromMeasured
+            ? '; K_sp taken from a measured solubility of this salt, so not an independent check'
+            : ''
         }`,
         kind: fromMeasured ? 'from-measured' : 'estimate',
-        basis: fromMeasured ? 'K_sp from a measured solubility of this salt' : nearest.solid === 'salt' ? 'estimated K_sp' : 'free-form solubility from S₀',
+        basis: fromMeasured
+          ? 'K_sp from a measured solubility of this salt'
+          : nearest.solid === 'salt'
+            ? 'estimated K_sp'
+            : 'free-form solubility from S₀',
       };
     }
     case 'solution-enthalpy': {
       const t = data.energetics[m.candidateId]?.thermo;
-      if (!t) return { text: `no cycle estimate (${data.energetics[m.candidateId]?.reason ?? 'not estimated'})`, kind: 'none', basis: '' };
+      if (!t)
+        return {
+          text: `no cycle estimate (${data.energetics[m.candidateId]?.reason ?? 'not estimated'})`,
+          kind: 'none',
+          basis: '',
+        };
       return {
         text: `ΔH_sol ≈ ${t.solutionEnthalpyKJ.value.toFixed(0).replace('-', '−')} ± ${t.solutionEnthalpyKJ.uncertainty.toFixed(0)} kJ/mol (infinite dilution, 25 °C)`,
         kind: 'estimate',
@@ -66,23 +101,34 @@ export function predictionFor(m: MeasurementRecord, data: ProjectScreening | und
       const liquefied = /deliquesc|liquef/i.test(m.text);
       const cls = hygroscopicityClass(m.value, liquefied);
       const note = data.counterIons[m.candidateId]?.tradeNote;
-      return { text: `Ph. Eur. 5.11 class: ${cls}${note ? `. Library note: ${note}` : ''}`, kind: 'classification', basis: 'European Pharmacopoeia 5.11' };
+      return {
+        text: `Ph. Eur. 5.11 class: ${cls}${note ? `. Library note: ${note}` : ''}`,
+        kind: 'classification',
+        basis: 'European Pharmacopoeia 5.11',
+      };
     }
     case 'melting-point':
     case 'fusion-enthalpy': {
       const sw = row.saltWaterSolubility;
-      if (!sw) return { text: 'no salt-solubility estimate for this salt', kind: 'none', basis: '' };
+      if (!sw)
+        return { text: 'no salt-solubility estimate for this salt', kind: 'none', basis: '' };
       const sig = sw.log10DrugM.uncertainty;
       const s = sw.mgPerMlAsSalt;
-      const used = sw.origin === 'model+fusion'
-        ? 'uses your fusion data (Schröder–van Laar crystal term)'
-        : sw.origin === 'measured'
-          ? 'rests on your measured solubility'
-          : 'does not use melting data';
+      const used =
+        sw.origin === 'model+fusion'
+          ? 'uses your fusion data (Schröder–van Laar crystal term)'
+          : sw.origin === 'measured'
+            ? 'rests on your measured solubility'
+            : 'does not use melting data';
       return {
         text: `salt in water ≈ ${fmt(s)} mg/mL as salt (±1σ ${fmt(s / 10 ** sig)}–${fmt(s * 10 ** sig)}); the estimate ${used}. No model predicts the melting point itself`,
         kind: sw.origin === 'measured' ? 'from-measured' : 'estimate',
-        basis: sw.origin === 'model+fusion' ? 'salt-solubility model + fusion data' : sw.origin === 'measured' ? 'measured solubility' : 'salt-solubility model',
+        basis:
+          sw.origin === 'model+fusion'
+            ? 'salt-solubility model + fusion data'
+            : sw.origin === 'measured'
+              ? 'measured solubility'
+              : 'salt-solubility model',
       };
     }
     default:
@@ -96,10 +142,15 @@ export function backedOutLattice(
   measurements: readonly MeasurementRecord[],
   data: ProjectScreening | undefined,
 ): { measuredKJ: number; lattice: Estimate; estimate: Estimate } | { error: string } | null {
-  const last = [...measurements].reverse().find((m) => m.candidateId === candidateId && m.kind === 'solution-enthalpy' && m.value !== null);
+  const last = [...measurements]
+    .reverse()
+    .find(
+      (m) => m.candidateId === candidateId && m.kind === 'solution-enthalpy' && m.value !== null,
+    );
   if (!last) return null;
   const e = data?.energetics[candidateId];
-  if (!e?.thermo) return { error: `no hydration estimates for this salt (${e?.reason ?? 'not screened'})` };
+  if (!e?.thermo)
+    return { error: `no hydration estimates for this salt (${e?.reason ?? 'not screened'})` };
   try {
     const lattice = latticeFromSolutionEnthalpy({
       solutionEnthalpyKJ: last.value!,
@@ -120,8 +171,20 @@ export function backedOutLattice(
 export function vantHoffOf(
   candidateId: string,
   measurements: readonly MeasurementRecord[],
-): { points: { temperatureK: number; solubility: number }[]; fit: VanTHoffFit | null; reason: string | null; medium: string } | null {
-  const sol = measurements.filter((m) => m.candidateId === candidateId && m.kind === 'solubility' && m.value !== null && m.value > 0 && m.temperatureK !== null);
+): {
+  points: { temperatureK: number; solubility: number }[];
+  fit: VanTHoffFit | null;
+  reason: string | null;
+  medium: string;
+} | null {
+  const sol = measurements.filter(
+    (m) =>
+      m.candidateId === candidateId &&
+      m.kind === 'solubility' &&
+      m.value !== null &&
+      m.value > 0 &&
+      m.temperatureK !== null,
+  );
   if (sol.length === 0) return null;
   // Use the medium with the most temperatures.
   const byMedium = new Map<string, MeasurementRecord[]>();
@@ -131,6 +194,11 @@ export function vantHoffOf(
   try {
     return { points, fit: vantHoffFit(points), reason: null, medium };
   } catch (err) {
-    return { points, fit: null, reason: err instanceof Error ? err.message.replace(/^[^:]*: /, '') : String(err), medium };
+    return {
+      points,
+      fit: null,
+      reason: err instanceof Error ? err.message.replace(/^[^:]*: /, '') : String(err),
+      medium,
+    };
   }
 }

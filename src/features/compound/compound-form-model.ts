@@ -75,7 +75,8 @@ export function compoundFromDraft(
     .filter(Boolean);
   const pKaValues = pKaTexts.map((s) => Number(s.replace(',', '.')));
   if (pKaTexts.length === 0) errors.pKas = 'Give at least one pKa';
-  else if (pKaValues.some((x) => !Number.isFinite(x))) errors.pKas = 'pKa values must be numbers, separated by commas';
+  else if (pKaValues.some((x) => !Number.isFinite(x)))
+    errors.pKas = 'pKa values must be numbers, separated by commas';
 
   const ionCharge = Number(draft.ionCharge);
   const candidate = {
@@ -102,7 +103,10 @@ export function compoundFromDraft(
       const f = parseFormula(formulaText, 'formula');
       if (f.charge !== 0) errors.formula = 'Give the neutral free form, without a charge';
     } catch (err) {
-      errors.formula = err instanceof ChemInputError ? err.message.replace(/^formula: /, '') : 'Cannot read this formula';
+      errors.formula =
+        err instanceof ChemInputError
+          ? err.message.replace(/^formula: /, '')
+          : 'Cannot read this formula';
     }
   } else if (draft.smiles.trim() === '') {
     errors.formula = 'Give a SMILES or a molecular formula';
@@ -112,11 +116,17 @@ export function compoundFromDraft(
     errors[missing] ??= 'Give both the cell volume and Z, or neither';
   }
   if (candidate.logP !== null && candidate.logPOrigin === null) candidate.logPOrigin = 'measured';
-  if (Number.isInteger(ionCharge) && pKaValues.length > 0 && Math.abs(ionCharge) > pKaValues.length) {
+  if (
+    Number.isInteger(ionCharge) &&
+    pKaValues.length > 0 &&
+    Math.abs(ionCharge) > pKaValues.length
+  ) {
     errors.ionCharge = `A charge of ${Math.abs(ionCharge)} needs ${Math.abs(ionCharge)} pKa values (one per ionised group)`;
   }
-  if (draft.kind === 'base' && ionCharge < 0) errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';
-  if (draft.kind === 'acid' && ionCharge > 0) errors.ionCharge = 'An acid forms an anion: charge must be −1, −2 or −3';
+  if (draft.kind === 'base' && ionCharge < 0)
+    errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';
+  if (draft.kind === 'acid' && ionCharge > 0)
+    errors.ionCharge = 'An acid forms an anion: charge must be −1, −2 or −3';
   const parsed = compoundSchema.safeParse(candidate);
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
@@ -175,7 +185,10 @@ const FIELDS_OF: Record<keyof CompoundDraft, readonly (keyof Compound)[]> = {
  * The part of a valid compound that the edited form fields own: what a field-level save writes,
  * so that the other fields keep whatever is stored (perhaps written by another tab meanwhile).
  */
-export function changesFor(compound: Compound, edited: Iterable<keyof CompoundDraft>): Partial<Compound> {
+export function changesFor(
+  compound: Compound,
+  edited: Iterable<keyof CompoundDraft>,
+): Partial<Compound> {
   const out: Record<string, unknown> = {};
   for (const key of edited) {
     for (const field of FIELDS_OF[key]) out[field] = compound[field] ?? null;

@@ -45,7 +45,10 @@ export const useCounterIonsViewStore = create<CounterIonsViewState>()((set) => (
   ...initial,
   setQuery: (query) => set({ query }),
   setKind: (kind) => set({ kind }),
-  toggleClass: (c) => set((s) => ({ classes: s.classes.includes(c) ? s.classes.filter((x) => x !== c) : [...s.classes, c] })),
+  toggleClass: (c) =>
+    set((s) => ({
+      classes: s.classes.includes(c) ? s.classes.filter((x) => x !== c) : [...s.classes, c],
+    })),
   setCharge: (charge) => set({ charge }),
   setStoichiometry: (stoichiometry) => set({ stoichiometry }),
   setMinDeltaPka: (minDeltaPka) => set({ minDeltaPka }),

@@ -11,7 +11,9 @@ export function cancellationNote(cycle: EnergyCycle): string {
 }
 
 /** Sources behind an estimate, de-duplicated. */
-export const sourcesOf = (...es: (Estimate | undefined)[]) => [...new Set(es.flatMap((e) => e?.sources ?? []))];
+export const sourcesOf = (...es: (Estimate | undefined)[]) => [
+  ...new Set(es.flatMap((e) => e?.sources ?? [])),
+];
 
 /**
  * ΔH_sol per drug ion of each candidate relative to the median candidate. The drug ion's own

@@ -34,34 +34,63 @@ const draftSchema = z
       .string()
       .trim()
       .max(2000, 'At most 2000 characters')
-      .refine((s) => s === '' || SMILES_CHARS.test(s), 'Not a SMILES string: no spaces or other characters'),
+      .refine(
+        (s) => s === '' || SMILES_CHARS.test(s),
+        'Not a SMILES string: no spaces or other characters',
+      ),
     formula: z
       .string()
       .trim()
       .max(200)
-      .refine((s) => s === '' || FORMULA.test(s), 'Write a formula as element symbols and counts, e.g. C18H20ClN3O'),
+      .refine(
+        (s) => s === '' || FORMULA.test(s),
+        'Write a formula as element symbols and counts, e.g. C18H20ClN3O',
+      ),
     kind: z.enum(['base', 'acid']),
     pKa: z
       .string()
       .trim()
       .min(1, 'Give the pKa (you can add more later)')
       .transform((s) => Number(s.replace(',', '.')))
-      .pipe(z.number({ error: 'pKa must be a number' }).min(-10, 'pKa must be at least −10').max(20, 'pKa must be at most 20')),
+      .pipe(
+        z
+          .number({ error: 'pKa must be a number' })
+          .min(-10, 'pKa must be at least −10')
+          .max(20, 'pKa must be at most 20'),
+      ),
     ionCharge: z
       .string()
       .trim()
       .transform((s) => Number(s.replace('−', '-')))
-      .pipe(z.number({ error: 'Charge must be a whole number' }).int('Charge must be a whole number').min(-3).max(3)),
+      .pipe(
+        z
+          .number({ error: 'Charge must be a whole number' })
+          .int('Charge must be a whole number')
+          .min(-3)
+          .max(3),
+      ),
   })
   .superRefine((d, ctx) => {
     if (d.smiles === '' && d.formula === '') {
-      ctx.addIssue({ code: 'custom', path: ['smiles'], message: 'Give a SMILES string or a molecular formula' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['smiles'],
+        message: 'Give a SMILES string or a molecular formula',
+      });
     }
     if (d.kind === 'base' && d.ionCharge <= 0) {
-      ctx.addIssue({ code: 'custom', path: ['ionCharge'], message: 'A base forms a cation: charge +1, +2 or +3' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ionCharge'],
+        message: 'A base forms a cation: charge +1, +2 or +3',
+      });
     }
     if (d.kind === 'acid' && d.ionCharge >= 0) {
-      ctx.addIssue({ code: 'custom', path: ['ionCharge'], message: 'An acid forms an anion: charge −1, −2 or −3' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ionCharge'],
+        message: 'An acid forms an anion: charge −1, −2 or −3',
+      });
     }
   });
 

@@ -11,7 +11,13 @@ export interface BufferDraft {
 
 export type BufferErrors = Partial<Record<keyof BufferDraft, string>>;
 
-export const EMPTY_BUFFER: BufferDraft = { label: '', pH: '', ionId: '', concentrationM: '', ionicStrengthM: '' };
+export const EMPTY_BUFFER: BufferDraft = {
+  label: '',
+  pH: '',
+  ionId: '',
+  concentrationM: '',
+  ionicStrengthM: '',
+};
 
 const num = (t: string): number => {
   const s = t.trim().replace(',', '.').replace('−', '-');
@@ -30,7 +36,8 @@ export function bufferFromDraft(
   const errors: BufferErrors = {};
   const label = draft.label.trim();
   if (!label) errors.label = 'Give the medium a name';
-  else if (existing.some((m) => m.label.toLowerCase() === label.toLowerCase())) errors.label = 'A medium of that name exists';
+  else if (existing.some((m) => m.label.toLowerCase() === label.toLowerCase()))
+    errors.label = 'A medium of that name exists';
   const pH = num(draft.pH);
   if (!Number.isFinite(pH)) errors.pH = 'pH must be a number';
   else if (pH < 0 || pH > 14) errors.pH = 'pH must be from 0 to 14';
@@ -40,11 +47,29 @@ export function bufferFromDraft(
   else if (c < 0 || c > 20) errors.concentrationM = 'Concentration must be from 0 to 20 mol/L';
   const iText = draft.ionicStrengthM.trim();
   const ionic = iText === '' ? c : num(iText);
-  if (iText !== '' && !Number.isFinite(ionic)) errors.ionicStrengthM = 'Ionic strength must be a number';
-  else if (iText !== '' && (ionic < 0 || ionic > 5)) errors.ionicStrengthM = 'Ionic strength must be from 0 to 5 mol/L';
+  if (iText !== '' && !Number.isFinite(ionic))
+    errors.ionicStrengthM = 'Ionic strength must be a number';
+  else if (iText !== '' && (ionic < 0 || ionic > 5))
+    errors.ionicStrengthM = 'Ionic strength must be from 0 to 5 mol/L';
   if (Object.keys(errors).length > 0) return { ok: false, errors };
-  const id = `buffer-${label.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'medium'}`;
-  const parsed = mediumSchema.safeParse({ id, label, pH, ions: { [draft.ionId]: c }, ionicStrengthM: Math.min(ionic, 5) });
-  if (!parsed.success) return { ok: false, errors: { label: parsed.error.issues[0]?.message ?? 'Not a valid medium' } };
+  const id = `buffer-${
+    label
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '')
+      .slice(0, 40) || 'medium'
+  }`;
+  const parsed = mediumSchema.safeParse({
+    id,
+    label,
+    pH,
+    ions: { [draft.ionId]: c },
+    ionicStrengthM: Math.min(ionic, 5),
+  });
+  if (!parsed.success)
+    return {
+      ok: false,
+      errors: { label: parsed.error.issues[0]?.message ?? 'Not a valid medium' },
+    };
   return { ok: true, medium: parsed.data };
 }

@@ -1,4 +1,10 @@
-import { SALT_WATER_ORIGIN_BASIS, SALT_WATER_ORIGIN_LABELS, SOLUBILITY_DRIVER_WORDS, type RankedRow, type ScreenRow } from '@/chem';
+import {
+  SALT_WATER_ORIGIN_BASIS,
+  SALT_WATER_ORIGIN_LABELS,
+  SOLUBILITY_DRIVER_WORDS,
+  type RankedRow,
+  type ScreenRow,
+} from '@/chem';
 import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { candidateLabel } from '@/screening-data/candidate-label';
@@ -63,7 +69,10 @@ function saltWaterShown(row: ScreenRow): SaltWaterShown | null {
   };
 }
 
-const doseRange = (d: number, logSigma: number): [number, number] => [d / 10 ** logSigma, d * 10 ** logSigma];
+const doseRange = (d: number, logSigma: number): [number, number] => [
+  d / 10 ** logSigma,
+  d * 10 ** logSigma,
+];
 
 /** Build what the table shows from the screen and the current weighting. */
 export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]): DisplayRow[] {
@@ -73,10 +82,19 @@ export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]
     const row = rows.get(k.id);
     if (!row) return [];
     const ionName = data.ionNames[row.id] ?? row.counterIonName;
-    const label = candidateLabel({ ionId: row.counterIonId, drugPerSalt: row.drugPerSalt, counterIonPerSalt: row.counterIonPerSalt }, ionName);
+    const label = candidateLabel(
+      {
+        ionId: row.counterIonId,
+        drugPerSalt: row.drugPerSalt,
+        counterIonPerSalt: row.counterIonPerSalt,
+      },
+      ionName,
+    );
     const u = uncertaintiesOf(row, shared);
     const kspMeasured = row.kspOrigin === 'measured';
-    const kspBasis = kspMeasured ? 'K_sp from the measured salt solubility' : 'K_sp estimated (no measured salt solubility)';
+    const kspBasis = kspMeasured
+      ? 'K_sp from the measured salt solubility'
+      : 'K_sp estimated (no measured salt solubility)';
     const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
     const energetics = data.energetics[row.id];
     const measuredDH = row.measured?.solutionEnthalpyKJ ?? null;
@@ -85,7 +103,12 @@ export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]
       measuredDH !== null
         ? { value: measuredDH, origin: 'measured', basis: 'measured by solution calorimetry' }
         : vh
-          ? { value: vh.value, sigma: vh.uncertainty, origin: 'measured', basis: 'apparent ΔH_sol from the van ’t Hoff fit of measured solubilities' }
+          ? {
+              value: vh.value,
+              sigma: vh.uncertainty,
+              origin: 'measured',
+              basis: 'apparent ΔH_sol from the van ’t Hoff fit of measured solubilities',
+            }
           : energetics?.thermo
             ? {
                 value: energetics.thermo.solutionEnthalpyKJ.value,
@@ -105,7 +128,15 @@ export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]
         row,
         deltaPka: row.deltaPka,
         saltWater: saltWaterShown(row),
-        phMax: row.phMax === null ? null : { value: row.phMax, sigma: u.phMaxSigma, origin: kspMeasured ? 'measured' : 'estimated', basis: kspBasis },
+        phMax:
+          row.phMax === null
+            ? null
+            : {
+                value: row.phMax,
+                sigma: u.phMaxSigma,
+                origin: kspMeasured ? 'measured' : 'estimated',
+                basis: kspBasis,
+              },
         worstDose:
           row.worst && row.worst.doseNumber !== null
             ? {
@@ -149,7 +180,11 @@ const SORT_VALUE: Record<RankingSortKey, (r: DisplayRow) => number | string | nu
 };
 
 /** Sort display rows; rows without a value go last whatever the direction. */
-export function sortRows(rows: readonly DisplayRow[], key: RankingSortKey, dir: 'asc' | 'desc'): DisplayRow[] {
+export function sortRows(
+  rows: readonly DisplayRow[],
+  key: RankingSortKey,
+  dir: 'asc' | 'desc',
+): DisplayRow[] {
   const get = SORT_VALUE[key];
   const sign = dir === 'asc' ? 1 : -1;
   return rows
@@ -158,7 +193,10 @@ export function sortRows(rows: readonly DisplayRow[], key: RankingSortKey, dir: 
       if (a.v === null && b.v === null) return a.i - b.i;
       if (a.v === null) return 1;
       if (b.v === null) return -1;
-      const c = typeof a.v === 'string' ? a.v.localeCompare(String(b.v)) : (a.v as number) - (b.v as number);
+      const c =
+        typeof a.v === 'string'
+          ? a.v.localeCompare(String(b.v))
+          : (a.v as number) - (b.v as number);
       return c * sign || a.i - b.i;
     })
     .map((x) => x.r);

@@ -27,7 +27,10 @@ export function conditionsDraftOf(project: ProjectSettings, s: ScreeningSettings
   };
 }
 
-const RANGES: Record<Exclude<keyof ConditionsDraft, 'activityModel'>, { label: string; min: number; max: number; unit?: string }> = {
+const RANGES: Record<
+  Exclude<keyof ConditionsDraft, 'activityModel'>,
+  { label: string; min: number; max: number; unit?: string }
+> = {
   gastricChlorideM: { label: 'Chloride in gastric medium', min: 0, max: 5, unit: 'mol/L' },
   gastricPh: { label: 'Gastric pH', min: 0, max: 14 },
   microenvironmentPh: { label: 'Microenvironment pH', min: 0, max: 14 },
@@ -45,17 +48,27 @@ export function conditionsFromDraft(
   draft: ConditionsDraft,
   project: ProjectSettings,
   current: ScreeningSettings,
-): { ok: true; projectSettings: ProjectSettings; screening: ScreeningSettings } | { ok: false; errors: ConditionsErrors } {
+):
+  | { ok: true; projectSettings: ProjectSettings; screening: ScreeningSettings }
+  | { ok: false; errors: ConditionsErrors } {
   const errors: ConditionsErrors = {};
   const num: Partial<Record<keyof typeof RANGES, number>> = {};
-  for (const [key, r] of Object.entries(RANGES) as [keyof typeof RANGES, (typeof RANGES)[keyof typeof RANGES]][]) {
+  for (const [key, r] of Object.entries(RANGES) as [
+    keyof typeof RANGES,
+    (typeof RANGES)[keyof typeof RANGES],
+  ][]) {
     const t = draft[key].trim().replace(',', '.').replace('−', '-');
     const x = t === '' ? Number.NaN : Number(t);
     if (!Number.isFinite(x)) errors[key] = `${r.label} must be a number`;
-    else if (x < r.min || x > r.max) errors[key] = `${r.label} must be from ${r.min} to ${r.max}${r.unit ? ' ' + r.unit : ''}`;
+    else if (x < r.min || x > r.max)
+      errors[key] = `${r.label} must be from ${r.min} to ${r.max}${r.unit ? ' ' + r.unit : ''}`;
     else num[key] = x;
   }
-  if (num.cocrystalBelow !== undefined && num.saltAbove !== undefined && num.cocrystalBelow >= num.saltAbove) {
+  if (
+    num.cocrystalBelow !== undefined &&
+    num.saltAbove !== undefined &&
+    num.cocrystalBelow >= num.saltAbove
+  ) {
     errors.saltAbove = 'The salt band must start above the cocrystal band';
   }
   if (Object.keys(errors).length > 0) return { ok: false, errors };
@@ -72,7 +85,11 @@ export function conditionsFromDraft(
     microenvironmentPh: num.microenvironmentPh,
     temperatureK: celsiusToKelvin(num.temperatureC!),
     activityModel: draft.activityModel,
-    deltaPkaBands: { cocrystalBelow: num.cocrystalBelow, saltAbove: num.saltAbove, stableSaltMin: num.stableSaltMin },
+    deltaPkaBands: {
+      cocrystalBelow: num.cocrystalBelow,
+      saltAbove: num.saltAbove,
+      stableSaltMin: num.stableSaltMin,
+    },
   });
   return { ok: true, projectSettings, screening };
 }

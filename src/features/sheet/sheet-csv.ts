@@ -16,7 +16,8 @@ export function csvHeader(columns: readonly SheetColumn[]): string[] {
   const head = ['Rank', 'Candidate'];
   for (const c of columns) {
     head.push(withUnit(c.label, c.unit));
-    if (c.kind === 'number') head.push(withUnit(`${c.label} uncertainty (1 sigma)`, c.unit), `${c.label} origin`);
+    if (c.kind === 'number')
+      head.push(withUnit(`${c.label} uncertainty (1 sigma)`, c.unit), `${c.label} origin`);
   }
   head.push('Flags', 'Reasons');
   return head;
@@ -65,11 +66,14 @@ export function csvFooter(model: SheetModel): string[] {
  */
 export function sheetToCsv(model: SheetModel): string {
   const data: CsvValue[][] = [...sheetCsvRows(model), [''], ...csvFooter(model).map((l) => [l])];
-  return Papa.unparse(data.map((row) => row.map((v) => (v === null ? '' : v))), {
-    newline: '\r\n',
-    quotes: (value: unknown) => typeof value === 'string' && value !== '',
-    escapeFormulae: false,
-  });
+  return Papa.unparse(
+    data.map((row) => row.map((v) => (v === null ? '' : v))),
+    {
+      newline: '\r\n',
+      quotes: (value: unknown) => typeof value === 'string' && value !== '',
+      escapeFormulae: false,
+    },
+  );
 }
 
 /** A file name for the CSV download. */

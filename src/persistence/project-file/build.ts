@@ -1,4 +1,9 @@
-import type { CandidateRecord, CustomIonRecord, MeasurementRecord, ProjectRecord } from '../records';
+import type {
+  CandidateRecord,
+  CustomIonRecord,
+  MeasurementRecord,
+  ProjectRecord,
+} from '../records';
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_VERSION, appVersion } from './format';
 import { projectFileSchema, type ProjectFile } from './schema';
 
@@ -64,4 +69,5 @@ export function buildProjectFile(bundle: ProjectBundle, createdAt: string): Proj
 }
 
 /** Serialise a project file (pretty-printed, stable key order as built). */
-export const serializeProjectFile = (file: ProjectFile): string => `${JSON.stringify(file, null, 2)}\n`;
+export const serializeProjectFile = (file: ProjectFile): string =>
+  `${JSON.stringify(file, null, 2)}\n`;

@@ -15,7 +15,11 @@ export const PROJECT_FILE_VERSION = 2;
 export const PROJECT_FILE_MAX_BYTES = 5 * 1024 * 1024;
 
 /** Upper bounds on list lengths, so a hostile file cannot make the import run for minutes. */
-export const PROJECT_FILE_LIMITS = { candidates: 500, measurements: 20_000, customIons: 1_000 } as const;
+export const PROJECT_FILE_LIMITS = {
+  candidates: 500,
+  measurements: 20_000,
+  customIons: 1_000,
+} as const;
 
 /** The version of this build (from package.json at build time), or "unknown" outside a build. */
 export function appVersion(): string {

@@ -1,5 +1,10 @@
 import { ProjectFileError, invalidFileError } from './errors';
-import { PROJECT_FILE_FORMAT, PROJECT_FILE_MAX_BYTES, PROJECT_FILE_VERSION, appVersion } from './format';
+import {
+  PROJECT_FILE_FORMAT,
+  PROJECT_FILE_MAX_BYTES,
+  PROJECT_FILE_VERSION,
+  appVersion,
+} from './format';
 import { projectFileSchema, type ProjectFile } from './schema';
 import { looksTruncated } from './truncation';
 import { upgradeV1 } from './upgrade-v1';
@@ -10,7 +15,10 @@ import { upgradeV1 } from './upgrade-v1';
  */
 export function restoreProjectFile(raw: unknown): ProjectFile {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
-    throw new ProjectFileError('not-a-project-file', 'This file is JSON but not a Saltsmith project file (expected an object).');
+    throw new ProjectFileError(
+      'not-a-project-file',
+      'This file is JSON but not a Saltsmith project file (expected an object).',
+    );
   }
   const tagged = raw as { format?: unknown; version?: unknown };
   if (tagged.format !== PROJECT_FILE_FORMAT) {
@@ -21,7 +29,10 @@ export function restoreProjectFile(raw: unknown): ProjectFile {
   }
   const version = tagged.version;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
-    throw new ProjectFileError('invalid', `This project file has no valid "version" (found ${JSON.stringify(version ?? null)}).`);
+    throw new ProjectFileError(
+      'invalid',
+      `This project file has no valid "version" (found ${JSON.stringify(version ?? null)}).`,
+    );
   }
   if (version > PROJECT_FILE_VERSION) {
     throw new ProjectFileError(
@@ -55,7 +66,10 @@ export function parseProjectFileText(text: string): ProjectFile {
         'This file ends in the middle of its data — it was probably cut off while being copied or downloaded.',
       );
     }
-    throw new ProjectFileError('not-json', 'This file is not valid JSON, so it cannot be a Saltsmith project file.');
+    throw new ProjectFileError(
+      'not-json',
+      'This file is not valid JSON, so it cannot be a Saltsmith project file.',
+    );
   }
   return restoreProjectFile(raw);
 }

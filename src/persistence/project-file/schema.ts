@@ -17,7 +17,10 @@ export const isoDate = z.string().min(1).max(40);
 /** A shortlisted candidate as it appears in the file (ids are the exporting database's own). */
 const fileCandidateSchema = candidateRecordSchema.omit({ schemaVersion: true, projectId: true });
 
-const fileMeasurementSchema = measurementRecordSchema.omit({ schemaVersion: true, projectId: true });
+const fileMeasurementSchema = measurementRecordSchema.omit({
+  schemaVersion: true,
+  projectId: true,
+});
 
 const fileCustomIonSchema = customIonRecordFields
   .omit({ schemaVersion: true, projectId: true })
@@ -45,7 +48,11 @@ export const projectFileSchema = z
     const candidateIds = new Set<string>();
     file.candidates.forEach((c, i) => {
       if (candidateIds.has(c.id)) {
-        ctx.addIssue({ code: 'custom', path: ['candidates', i, 'id'], message: `duplicate candidate id ${c.id}` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['candidates', i, 'id'],
+          message: `duplicate candidate id ${c.id}`,
+        });
       }
       candidateIds.add(c.id);
     });
@@ -61,7 +68,11 @@ export const projectFileSchema = z
     const ionIds = new Set<string>();
     file.customIons.forEach((ion, i) => {
       if (ionIds.has(ion.id)) {
-        ctx.addIssue({ code: 'custom', path: ['customIons', i, 'id'], message: `duplicate ion id ${ion.id}` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['customIons', i, 'id'],
+          message: `duplicate ion id ${ion.id}`,
+        });
       }
       ionIds.add(ion.id);
     });

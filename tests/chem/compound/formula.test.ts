@@ -43,7 +43,13 @@ describe('molecular formulas', () => {
 
   it('molar masses agree with openchemlib for drug-like formulas (IUPAC standard atomic weights)', () => {
     // Reference: openchemlib's relativeWeight for the same molecule; tolerance 0.02 g/mol.
-    for (const smiles of ['CN1CCN(CC1)c1ccc(cc1)C(=O)Nc1ccc(Cl)cc1', 'CC(=O)Oc1ccccc1C(=O)O', 'OC(=O)CC(O)(CC(=O)O)C(=O)O', 'FC(F)(F)c1ccc(Br)cc1I', 'CP(=O)(O)O']) {
+    for (const smiles of [
+      'CN1CCN(CC1)c1ccc(cc1)C(=O)Nc1ccc(Cl)cc1',
+      'CC(=O)Oc1ccccc1C(=O)O',
+      'OC(=O)CC(O)(CC(=O)O)C(=O)O',
+      'FC(F)(F)c1ccc(Br)cc1I',
+      'CP(=O)(O)O',
+    ]) {
       const f = OCL.Molecule.fromSmiles(smiles).getMolecularFormula();
       expect(Math.abs(formulaMolarMassGPerMol(f.formula) - f.relativeWeight)).toBeLessThan(0.02);
     }
@@ -52,9 +58,15 @@ describe('molecular formulas', () => {
   it('Hill order round-trips for any atom counts (property)', () => {
     const syms = Object.keys(ATOMIC_WEIGHTS_G_PER_MOL);
     fc.assert(
-      fc.property(fc.dictionary(fc.constantFrom(...syms), fc.integer({ min: 1, max: 60 }), { minKeys: 1, maxKeys: 6 }), (counts) => {
-        expect(parseFormula(hillFormula(counts)).elements).toEqual(counts);
-      }),
+      fc.property(
+        fc.dictionary(fc.constantFrom(...syms), fc.integer({ min: 1, max: 60 }), {
+          minKeys: 1,
+          maxKeys: 6,
+        }),
+        (counts) => {
+          expect(parseFormula(hillFormula(counts)).elements).toEqual(counts);
+        },
+      ),
     );
   });
 
@@ -89,7 +101,10 @@ describe('structures (openchemlib, loaded lazily)', () => {
 
   it('counts fused and bridged rings as the smallest set of smallest rings', async () => {
     // Camphor: bicyclo[2.2.1] skeleton, two rings in the SSSR (cyclomatic number).
-    expect((await parseStructure('CC1(C)C2CCC1(C)C(=O)C2')).rings).toEqual({ aromatic: 0, nonAromatic: 2 });
+    expect((await parseStructure('CC1(C)C2CCC1(C)C(=O)C2')).rings).toEqual({
+      aromatic: 0,
+      nonAromatic: 2,
+    });
     expect((await parseStructure('c1ccc2ccccc2c1')).rings).toEqual({ aromatic: 2, nonAromatic: 0 });
   });
 
@@ -107,17 +122,28 @@ describe('drug ion', () => {
     // Molar mass difference = one hydrogen, IUPAC 2021 abridged H = 1.008.
     expect(anion.freeFormMolarMassGPerMol - anion.molarMassGPerMol).toBeCloseTo(1.008, 6);
     const cation = drugIon({ kind: 'base', ionCharge: 2, formula: 'C4H10N2' });
-    expect(cation).toMatchObject({ formula: 'C4H12N2', charge: 2, ringsKnown: false, formulaFrom: 'formula' });
+    expect(cation).toMatchObject({
+      formula: 'C4H12N2',
+      charge: 2,
+      ringsKnown: false,
+      formulaFrom: 'formula',
+    });
   });
 
   it('notes a typed formula that disagrees with the structure', async () => {
     const s = await parseStructure('CCO');
-    expect(drugIon({ kind: 'base', ionCharge: 1, formula: 'C2H7N' }, s).notes[0]).toMatch(/differs/);
+    expect(drugIon({ kind: 'base', ionCharge: 1, formula: 'C2H7N' }, s).notes[0]).toMatch(
+      /differs/,
+    );
   });
 
   it('refuses impossible input', () => {
-    expect(() => drugIon({ kind: 'base', ionCharge: 1, formula: '' })).toThrow(/formula: give a SMILES or a molecular formula/);
-    expect(() => drugIon({ kind: 'acid', ionCharge: -2, formula: 'CO' })).toThrow(/cannot remove 2 hydrogen/);
+    expect(() => drugIon({ kind: 'base', ionCharge: 1, formula: '' })).toThrow(
+      /formula: give a SMILES or a molecular formula/,
+    );
+    expect(() => drugIon({ kind: 'acid', ionCharge: -2, formula: 'CO' })).toThrow(
+      /cannot remove 2 hydrogen/,
+    );
     expect(() => drugIon({ kind: 'acid', ionCharge: 0, formula: 'CH4' })).toThrow(/ionCharge/);
   });
 });

@@ -6,8 +6,15 @@ describe('free-form volume per formula unit', () => {
     // NaCl: cubic a = 5.6402 Å, Z = 4; density 2.165 g/cm³ (CRC Handbook, "Physical Constants of Inorganic
     // Compounds" and crystal-structure tables — from memory). Both routes must give ≈ 0.0449 nm³.
     const a = 5.6402;
-    const cell = freeFormVolumeNm3({ molarMassGPerMol: formulaMolarMassGPerMol('NaCl'), cellVolumeA3: a ** 3, formulaUnitsPerCell: 4 })!;
-    const dens = freeFormVolumeNm3({ molarMassGPerMol: formulaMolarMassGPerMol('NaCl'), densityGPerCm3: 2.165 })!;
+    const cell = freeFormVolumeNm3({
+      molarMassGPerMol: formulaMolarMassGPerMol('NaCl'),
+      cellVolumeA3: a ** 3,
+      formulaUnitsPerCell: 4,
+    })!;
+    const dens = freeFormVolumeNm3({
+      molarMassGPerMol: formulaMolarMassGPerMol('NaCl'),
+      densityGPerCm3: 2.165,
+    })!;
     expect(cell.method).toBe('cell');
     expect(dens.method).toBe('density');
     expect(Math.abs(cell.value / dens.value - 1)).toBeLessThan(0.005);
@@ -15,9 +22,18 @@ describe('free-form volume per formula unit', () => {
   });
 
   it('prefers the cell, needs both cell volume and Z, and returns null with neither', () => {
-    expect(freeFormVolumeNm3({ molarMassGPerMol: 100, densityGPerCm3: 1.2, cellVolumeA3: 1000, formulaUnitsPerCell: 4 })!.method).toBe('cell');
+    expect(
+      freeFormVolumeNm3({
+        molarMassGPerMol: 100,
+        densityGPerCm3: 1.2,
+        cellVolumeA3: 1000,
+        formulaUnitsPerCell: 4,
+      })!.method,
+    ).toBe('cell');
     expect(() => freeFormVolumeNm3({ molarMassGPerMol: 100, cellVolumeA3: 1000 })).toThrow(/both/);
     expect(freeFormVolumeNm3({ molarMassGPerMol: 100 })).toBeNull();
-    expect(() => freeFormVolumeNm3({ molarMassGPerMol: 100, densityGPerCm3: -1 })).toThrow(/densityGPerCm3/);
+    expect(() => freeFormVolumeNm3({ molarMassGPerMol: 100, densityGPerCm3: -1 })).toThrow(
+      /densityGPerCm3/,
+    );
   });
 });

@@ -19,7 +19,8 @@ const netCharge = (m: ReturnType<typeof ocl>) => {
 /** Element map of an openchemlib formula string such as "C18H20N3OCl". */
 const elementsOf = (f: string) => {
   const out: Record<string, number> = {};
-  for (const [, el, n] of f.replace(/\(.*?\)/g, '').matchAll(/([A-Z][a-z]?)(\d*)/g)) out[el!] = (out[el!] ?? 0) + (n ? Number(n) : 1);
+  for (const [, el, n] of f.replace(/\(.*?\)/g, '').matchAll(/([A-Z][a-z]?)(\d*)/g))
+    out[el!] = (out[el!] ?? 0) + (n ? Number(n) : 1);
   return out;
 };
 
@@ -59,9 +60,17 @@ describe('bundled counter-ion library', () => {
     (_id, ion) => {
       // Reference: openchemlib MolecularFormula.relativeWeight (standard atomic weights). The 0.02 g/mol
       // tolerance covers the older atomic-weight revisions a library may ship (e.g. S 32.065 vs 32.06).
-      expect(Math.abs(ocl(ion.ionSmiles).getMolecularFormula().relativeWeight - ion.molarMassGPerMol)).toBeLessThan(0.02);
-      expect(Math.abs(ocl(ion.parent.smiles).getMolecularFormula().relativeWeight - ion.parent.molarMassGPerMol)).toBeLessThan(0.02);
-      expect(elementsOf(ocl(ion.parent.smiles).getMolecularFormula().formula)).toEqual(elementsOf(ion.parent.formula));
+      expect(
+        Math.abs(ocl(ion.ionSmiles).getMolecularFormula().relativeWeight - ion.molarMassGPerMol),
+      ).toBeLessThan(0.02);
+      expect(
+        Math.abs(
+          ocl(ion.parent.smiles).getMolecularFormula().relativeWeight - ion.parent.molarMassGPerMol,
+        ),
+      ).toBeLessThan(0.02);
+      expect(elementsOf(ocl(ion.parent.smiles).getMolecularFormula().formula)).toEqual(
+        elementsOf(ion.parent.formula),
+      );
     },
   );
 
@@ -87,7 +96,14 @@ describe('bundled counter-ion library', () => {
     let fromMemory = 0;
     for (const ion of COUNTER_IONS) {
       expect(ion.classSource.length, ion.id).toBeGreaterThan(10);
-      for (const key of ['formula', 'ionSmiles', 'molarMassGPerMol', 'pKas', 'acceptabilityClass', 'tradeNote']) {
+      for (const key of [
+        'formula',
+        'ionSmiles',
+        'molarMassGPerMol',
+        'pKas',
+        'acceptabilityClass',
+        'tradeNote',
+      ]) {
         expect(ion.sources[key], `${ion.id}.${key}`).toBeTruthy();
       }
       fromMemory += ion.pKas.filter((p) => p.source.includes('from memory')).length;
@@ -115,13 +131,19 @@ describe('pKa values against the tables they cite', () => {
     ['oxalate', [1.27, 4.26]],
   ];
   it.each(aqion)('%s matches the aqion table within 0.01', (id, expected) => {
-    expect(getCounterIon(id)!.pKas.map((p) => p.value)).toEqual(expected.map((x) => expect.closeTo(x, 2)));
+    expect(getCounterIon(id)!.pKas.map((p) => p.value)).toEqual(
+      expected.map((x) => expect.closeTo(x, 2)),
+    );
   });
 
   // J. R. Fromm, "Ionization Constants of Aqueous Polyprotic Acids" (read 2026-12-01).
   it('phosphate, carbonate, sulfate and citrate match the Fromm table within 0.01', () => {
-    expect(getCounterIon('phosphate')!.pKas.map((p) => p.value)).toEqual([2.148, 7.206, 12.342].map((x) => expect.closeTo(x, 2)));
-    expect(getCounterIon('carbonate')!.pKas.map((p) => p.value)).toEqual([6.361, 10.329].map((x) => expect.closeTo(x, 2)));
+    expect(getCounterIon('phosphate')!.pKas.map((p) => p.value)).toEqual(
+      [2.148, 7.206, 12.342].map((x) => expect.closeTo(x, 2)),
+    );
+    expect(getCounterIon('carbonate')!.pKas.map((p) => p.value)).toEqual(
+      [6.361, 10.329].map((x) => expect.closeTo(x, 2)),
+    );
     expect(getCounterIon('sulfate')!.pKas[1]!.value).toBeCloseTo(1.994, 2);
     const citric = getCounterIon('citrate')!.pKas.map((p) => p.value);
     expect(citric[0]).toBeCloseTo(3.13, 2);
@@ -163,7 +185,9 @@ describe('pKa values against the tables they cite', () => {
 
   it('citric acid step 3 matches the CRC organic table (6.40, 25 °C)', () => {
     // Same CRC copy as above: "C6H8O7 Citric acid" steps 3.13, 4.76, 6.40 at 25 °C.
-    expect(getCounterIon('citrate')!.pKas.map((p) => p.value)).toEqual([3.13, 4.76, 6.4].map((x) => expect.closeTo(x, 1)));
+    expect(getCounterIon('citrate')!.pKas.map((p) => p.value)).toEqual(
+      [3.13, 4.76, 6.4].map((x) => expect.closeTo(x, 1)),
+    );
     expect(getCounterIon('citrate')!.pKas[2]!.value).toBeCloseTo(6.4, 2);
   });
 
@@ -173,9 +197,13 @@ describe('pKa values against the tables they cite', () => {
     expect(getCounterIon('fluoride')!.pKas[0]!.value).toBeCloseTo(3.2, 2);
     expect(getCounterIon('ammonium')!.pKas[0]!.value).toBeCloseTo(9.25, 2);
     expect(getCounterIon('perchlorate')!.pKas[0]!.value).toBeCloseTo(-1.6, 2);
-    const fromHydroxide = COUNTER_IONS.filter((i) => i.pKas.length === 1 && i.pKas[0]!.source.startsWith('conjugate acid of the hydroxide'));
+    const fromHydroxide = COUNTER_IONS.filter(
+      (i) => i.pKas.length === 1 && i.pKas[0]!.source.startsWith('conjugate acid of the hydroxide'),
+    );
     // lithium … aluminium, tetramethylammonium, tetraethylammonium, choline: salts made from the hydroxide.
-    expect(fromHydroxide.map((i) => i.id)).toEqual(expect.arrayContaining(['sodium', 'potassium', 'calcium', 'magnesium', 'choline']));
+    expect(fromHydroxide.map((i) => i.id)).toEqual(
+      expect.arrayContaining(['sodium', 'potassium', 'calcium', 'magnesium', 'choline']),
+    );
     for (const ion of fromHydroxide) expect(ion.pKas[0]!.value, ion.id).toBeCloseTo(13.995, 3);
   });
 
@@ -200,8 +228,18 @@ describe('acceptability classes against the handbook', () => {
   // this session. The check guards the bundled data against accidental edits of the recalled list;
   // the class sources say "from memory" so the user sees the same caveat.
   it.each([
-    ['chloride', 1], ['sulfate', 1], ['citrate', 1], ['sodium', 1], ['calcium', 1], ['lysine', 1],
-    ['mesylate', 2], ['tosylate', 2], ['besylate', 2], ['tromethamine', 2], ['meglumine', 2], ['zinc', 2],
+    ['chloride', 1],
+    ['sulfate', 1],
+    ['citrate', 1],
+    ['sodium', 1],
+    ['calcium', 1],
+    ['lysine', 1],
+    ['mesylate', 2],
+    ['tosylate', 2],
+    ['besylate', 2],
+    ['tromethamine', 2],
+    ['meglumine', 2],
+    ['zinc', 2],
   ] as const)('%s is class %d', (id, cls) => {
     const ion = getCounterIon(id)!;
     expect(ion.acceptabilityClass).toBe(cls);

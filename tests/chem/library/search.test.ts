@@ -21,7 +21,9 @@ describe('search', () => {
     expect(searchCounterIons(COUNTER_IONS, 'methanesulfonic acid')[0]!.id).toBe('mesylate');
     expect(searchCounterIons(COUNTER_IONS, 'hydrochloride')[0]!.id).toBe('chloride');
     expect(searchCounterIons(COUNTER_IONS, 'CH3O3S').map((i) => i.id)).toEqual(['mesylate']);
-    expect(searchCounterIons(COUNTER_IONS, 'trometamol').map((i) => i.id)).toEqual(['tromethamine']);
+    expect(searchCounterIons(COUNTER_IONS, 'trometamol').map((i) => i.id)).toEqual([
+      'tromethamine',
+    ]);
     expect(searchCounterIons(COUNTER_IONS, 'no-such-ion-xyz')).toEqual([]);
   });
 
@@ -32,15 +34,23 @@ describe('search', () => {
     const class1 = searchCounterIons(COUNTER_IONS, '', { classes: [1] });
     expect(class1.every((i) => i.acceptabilityClass === 1)).toBe(true);
     const dianions = searchCounterIons(COUNTER_IONS, '', { charge: -2 }).map((i) => i.id);
-    expect(dianions).toEqual(expect.arrayContaining(['sulfate', 'maleate', 'fumarate', 'hydrogen-phosphate']));
+    expect(dianions).toEqual(
+      expect.arrayContaining(['sulfate', 'maleate', 'fumarate', 'hydrogen-phosphate']),
+    );
     expect(dianions).not.toContain('chloride');
-    const hemi = searchCounterIons(COUNTER_IONS, '', { stoichiometry: '2:1', kind: 'anion' }).map((i) => i.id);
+    const hemi = searchCounterIons(COUNTER_IONS, '', { stoichiometry: '2:1', kind: 'anion' }).map(
+      (i) => i.id,
+    );
     expect(hemi).toContain('sulfate');
     expect(hemi).not.toContain('mesylate');
   });
 
   it('filters by ΔpKa against the compound and drops ions of the wrong kind', () => {
-    const hits = searchCounterIons(COUNTER_IONS, '', { partner: base9, minDeltaPka: 5, pairedOnly: true });
+    const hits = searchCounterIons(COUNTER_IONS, '', {
+      partner: base9,
+      minDeltaPka: 5,
+      pairedOnly: true,
+    });
     expect(hits.every((i) => i.kind === 'anion')).toBe(true);
     expect(hits.map((i) => i.id)).toContain('chloride');
     expect(hits.map((i) => i.id)).not.toContain('acetate'); // 9.0 − 4.76 < 5
@@ -51,8 +61,14 @@ describe('ΔpKa = pKa(protonated base) − pKa(acid) (Stahl & Wermuth 2002)', ()
   it('uses the limiting proton of each stoichiometry', () => {
     const maleate = getCounterIon('maleate')!;
     // hydrogen maleate 1:1 uses maleic acid pKa1 1.93, the 2:1 salt its pKa2 6.58 (aqion table).
-    expect(counterIonDeltaPka(base9, maleate, maleate.stoichiometries[0])!.deltaPka).toBeCloseTo(9.0 - 1.93, 6);
-    expect(counterIonDeltaPka(base9, maleate, maleate.stoichiometries[1])!.deltaPka).toBeCloseTo(9.0 - 6.58, 6);
+    expect(counterIonDeltaPka(base9, maleate, maleate.stoichiometries[0])!.deltaPka).toBeCloseTo(
+      9.0 - 1.93,
+      6,
+    );
+    expect(counterIonDeltaPka(base9, maleate, maleate.stoichiometries[1])!.deltaPka).toBeCloseTo(
+      9.0 - 6.58,
+      6,
+    );
     expect(bestDeltaPka(base9, maleate)!.stoichiometry.label).toMatch(/1:1/);
   });
 
@@ -84,24 +100,66 @@ describe('ΔpKa = pKa(protonated base) − pKa(acid) (Stahl & Wermuth 2002)', ()
 describe('in-house ions and per-project edits', () => {
   it('builds an in-house ion, computing the molar mass from the formula', () => {
     const ion = buildCustomCounterIon(
-      { name: 'Lab sulfonate', kind: 'anion', formula: 'C7H7O3S', charge: -1, pKas: [-1.3], acceptabilityClass: null },
+      {
+        name: 'Lab sulfonate',
+        kind: 'anion',
+        formula: 'C7H7O3S',
+        charge: -1,
+        pKas: [-1.3],
+        acceptabilityClass: null,
+      },
       'inhouse-1',
     );
     // Same formula as tosylate: same mass (IUPAC 2021 weights), parent acid gains one H.
     expect(ion.molarMassGPerMol).toBeCloseTo(getCounterIon('tosylate')!.molarMassGPerMol, 6);
     expect(ion.parent.formula).toBe('C7H8O3S');
-    expect(ion.stoichiometries[0]).toMatchObject({ drugPerSalt: 1, counterIonPerSalt: 1, ionCharge: -1, pKaIndex: 0 });
+    expect(ion.stoichiometries[0]).toMatchObject({
+      drugPerSalt: 1,
+      counterIonPerSalt: 1,
+      ionCharge: -1,
+      pKaIndex: 0,
+    });
   });
 
   it('rejects impossible input with the field named', () => {
     expect(() =>
-      buildCustomCounterIon({ name: 'X', kind: 'anion', formula: 'C2H3O2', charge: 1, pKas: [], acceptabilityClass: null }, 'x'),
+      buildCustomCounterIon(
+        {
+          name: 'X',
+          kind: 'anion',
+          formula: 'C2H3O2',
+          charge: 1,
+          pKas: [],
+          acceptabilityClass: null,
+        },
+        'x',
+      ),
     ).toThrow(/charge/);
     expect(() =>
-      buildCustomCounterIon({ name: 'X', kind: 'anion', formula: 'C2Xq3', charge: -1, pKas: [], acceptabilityClass: null }, 'x'),
+      buildCustomCounterIon(
+        {
+          name: 'X',
+          kind: 'anion',
+          formula: 'C2Xq3',
+          charge: -1,
+          pKas: [],
+          acceptabilityClass: null,
+        },
+        'x',
+      ),
     ).toThrow(/formula: unknown element 'Xq'/);
     expect(() =>
-      buildCustomCounterIon({ name: 'X', kind: 'anion', formula: 'C2H3O2', charge: -1, pKas: [25], acceptabilityClass: null }, 'x'),
+      buildCustomCounterIon(
+        {
+          name: 'X',
+          kind: 'anion',
+          formula: 'C2H3O2',
+          charge: -1,
+          pKas: [25],
+          acceptabilityClass: null,
+        },
+        'x',
+      ),
     ).toThrow(/pKas/);
   });
 
@@ -116,11 +174,23 @@ describe('in-house ions and per-project edits', () => {
 
   it('merges records: project edits only for their project, invalid records rejected, not shown', () => {
     const custom = buildCustomCounterIon(
-      { name: 'Lab acid', kind: 'anion', formula: 'C3H5O2', charge: -1, pKas: [4.9], acceptabilityClass: 2 },
+      {
+        name: 'Lab acid',
+        kind: 'anion',
+        formula: 'C3H5O2',
+        charge: -1,
+        pKas: [4.9],
+        acceptabilityClass: 2,
+      },
       'inhouse-2',
     );
     const records = [
-      { id: 'r1', projectId: null, overridesIonId: null, ion: custom as unknown as Record<string, unknown> },
+      {
+        id: 'r1',
+        projectId: null,
+        overridesIonId: null,
+        ion: custom as unknown as Record<string, unknown>,
+      },
       { id: 'r2', projectId: 'p1', overridesIonId: 'acetate', ion: { acceptabilityClass: 3 } },
       { id: 'r3', projectId: null, overridesIonId: null, ion: { name: 'broken' } },
     ];
@@ -139,15 +209,25 @@ describe('counter-ion schema refuses impossible values', () => {
     const good = getCounterIon('tosylate')!;
     expect(counterIonSchema.safeParse(good).success).toBe(true);
     expect(counterIonSchema.safeParse({ ...good, molarMassGPerMol: -171 }).success).toBe(false);
-    expect(counterIonSchema.safeParse({ ...good, pKas: [{ value: 25, source: 'typo' }] }).success).toBe(false);
+    expect(
+      counterIonSchema.safeParse({ ...good, pKas: [{ value: 25, source: 'typo' }] }).success,
+    ).toBe(false);
     expect(counterIonSchema.safeParse({ ...good, charge: 0 }).success).toBe(false);
   });
 });
 
 describe('reference ions', () => {
   it('are listed by default and hidden on request', () => {
-    expect(searchCounterIons(COUNTER_IONS, 'perchlorate').map((i) => i.id)).toEqual(['perchlorate']);
-    expect(searchCounterIons(COUNTER_IONS, 'perchlorate', { includeReferenceIons: false })).toEqual([]);
-    expect(searchCounterIons(COUNTER_IONS, '', { includeReferenceIons: false }).some((i) => i.id === 'chloride')).toBe(true);
+    expect(searchCounterIons(COUNTER_IONS, 'perchlorate').map((i) => i.id)).toEqual([
+      'perchlorate',
+    ]);
+    expect(searchCounterIons(COUNTER_IONS, 'perchlorate', { includeReferenceIons: false })).toEqual(
+      [],
+    );
+    expect(
+      searchCounterIons(COUNTER_IONS, '', { includeReferenceIons: false }).some(
+        (i) => i.id === 'chloride',
+      ),
+    ).toBe(true);
   });
 });

@@ -19,7 +19,10 @@ describe('brentRoot', () => {
 describe('linearLeastSquares', () => {
   it('recovers an exact line with zero standard errors', () => {
     const x = [1, 2, 3, 4];
-    const f = linearLeastSquares(x, x.map((v) => 3 - 2 * v));
+    const f = linearLeastSquares(
+      x,
+      x.map((v) => 3 - 2 * v),
+    );
     expect(f.slope).toBeCloseTo(-2, 12);
     expect(f.intercept).toBeCloseTo(3, 12);
     expect(f.slopeStandardError).toBeLessThan(1e-12);

@@ -40,13 +40,18 @@ describe('ΔpKa rule', () => {
   it('probability rises with ΔpKa inside the uncertain band (Cruz-Cabeza 2012: roughly linear)', () => {
     fc.assert(
       fc.property(fc.double({ min: -1, max: 3.9, noNaN: true }), (d) => {
-        expect(saltFormationVerdict(d + 0.1).saltProbability).toBeGreaterThanOrEqual(saltFormationVerdict(d).saltProbability);
+        expect(saltFormationVerdict(d + 0.1).saltProbability).toBeGreaterThanOrEqual(
+          saltFormationVerdict(d).saltProbability,
+        );
       }),
     );
   });
   it('common-practice minimum (≥ 2 by default, Stahl & Wermuth 2002) is a setting', () => {
     expect(saltFormationVerdict(2.5).meetsStableSaltRule).toBe(true);
-    expect(saltFormationVerdict(2.5, { cocrystalBelow: -1, saltAbove: 4, stableSaltMin: 3 }).meetsStableSaltRule).toBe(false);
+    expect(
+      saltFormationVerdict(2.5, { cocrystalBelow: -1, saltAbove: 4, stableSaltMin: 3 })
+        .meetsStableSaltRule,
+    ).toBe(false);
   });
   it('uses the proton that makes the salt: sulfate (2−) takes sulfuric acid’s second pKa, hydrogen sulfate its first', () => {
     const drug = { pKas: [8], mostProtonatedCharge: 1 };
@@ -63,10 +68,14 @@ describe('ΔpKa rule', () => {
   it('proposes 1:1 and 2:1 for a monobasic drug with sulfuric acid, and drops a cocrystal-band pair', () => {
     const drug = { pKas: [6], mostProtonatedCharge: 1 };
     const sulfuric = { pKas: [-3, 1.99], mostProtonatedCharge: 0 };
-    const labels = sensibleStoichiometries(drug, true, sulfuric).map((s) => s.label).sort();
+    const labels = sensibleStoichiometries(drug, true, sulfuric)
+      .map((s) => s.label)
+      .sort();
     expect(labels).toStrictEqual(['1:1', '2:1']);
     const weakAcid = { pKas: [9.5], mostProtonatedCharge: 0 };
-    expect(sensibleStoichiometries({ pKas: [4], mostProtonatedCharge: 1 }, true, weakAcid)).toHaveLength(0);
+    expect(
+      sensibleStoichiometries({ pKas: [4], mostProtonatedCharge: 1 }, true, weakAcid),
+    ).toHaveLength(0);
   });
 });
 
@@ -88,7 +97,13 @@ describe('mass cost', () => {
     expect(saltMassPerDoseMg(200, f)).toBeCloseTo(200 / f, 9);
   });
   it('2:1 salt counts both drug ions', () => {
-    const f = activeFraction({ freeFormMolarMassGPerMol: 300, drugIonMolarMassGPerMol: 301, counterIonMolarMassGPerMol: 96, drugPerSalt: 2, counterIonPerSalt: 1 });
+    const f = activeFraction({
+      freeFormMolarMassGPerMol: 300,
+      drugIonMolarMassGPerMol: 301,
+      counterIonMolarMassGPerMol: 96,
+      drugPerSalt: 2,
+      counterIonPerSalt: 1,
+    });
     expect(f).toBeCloseTo(600 / 698, 12);
   });
   it('rejects a zero dose', () => {
@@ -156,7 +171,10 @@ describe('disproportionation (Serajuddin 2007)', () => {
 describe('van ’t Hoff fit', () => {
   it('recovers a known ΔH from exact synthetic data (ln S = −ΔH/RT + c)', () => {
     const dH = 25;
-    const pts = [288.15, 298.15, 310.15, 318.15].map((T) => ({ temperatureK: T, solubility: Math.exp(-dH / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 8) }));
+    const pts = [288.15, 298.15, 310.15, 318.15].map((T) => ({
+      temperatureK: T,
+      solubility: Math.exp(-dH / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 8),
+    }));
     const f = vantHoffFit(pts);
     expect(f.solutionEnthalpyKJ.value).toBeCloseTo(25, 9);
     expect(f.standardErrorKJ).toBeLessThan(1e-9);
@@ -164,21 +182,40 @@ describe('van ’t Hoff fit', () => {
   it('gives a positive standard error from noisy data that brackets the true value', () => {
     const dH = 25;
     const noise = [0.03, -0.02, 0.01, -0.03, 0.02];
-    const pts = [283.15, 293.15, 303.15, 313.15, 323.15].map((T, i) => ({ temperatureK: T, solubility: Math.exp(-dH / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 8 + noise[i]!) }));
+    const pts = [283.15, 293.15, 303.15, 313.15, 323.15].map((T, i) => ({
+      temperatureK: T,
+      solubility: Math.exp(-dH / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 8 + noise[i]!),
+    }));
     const f = vantHoffFit(pts);
     expect(f.standardErrorKJ).toBeGreaterThan(0.05);
     expect(Math.abs(f.solutionEnthalpyKJ.value - dH)).toBeLessThan(3 * f.standardErrorKJ);
   });
   it('the plotted line passes through exact data and its band has zero width for a perfect fit', () => {
-    const pts = [288.15, 298.15, 310.15].map((T) => ({ temperatureK: T, solubility: Math.exp(-30 / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 5) }));
+    const pts = [288.15, 298.15, 310.15].map((T) => ({
+      temperatureK: T,
+      solubility: Math.exp(-30 / (GAS_CONSTANT_KJ_PER_MOL_K * T) + 5),
+    }));
     const line = vantHoffLine(vantHoffFit(pts), [288.15, 310.15]);
     expect(line[0]!.lnS).toBeCloseTo(Math.log(pts[0]!.solubility), 9);
     expect(line[1]!.lnSHigh - line[1]!.lnSLow).toBeLessThan(1e-9);
   });
   it('rejects fewer than three points and a single temperature', () => {
-    expect(() => vantHoffFit([{ temperatureK: 298, solubility: 1 }, { temperatureK: 310, solubility: 2 }])).toThrow(ChemInputError);
-    expect(() => vantHoffFit([298, 298, 298].map((t) => ({ temperatureK: t, solubility: 1 })))).toThrow(/one temperature/);
-    expect(() => vantHoffFit([{ temperatureK: -1, solubility: 1 }, { temperatureK: 298, solubility: 1 }, { temperatureK: 310, solubility: 1 }])).toThrow(ChemInputError);
+    expect(() =>
+      vantHoffFit([
+        { temperatureK: 298, solubility: 1 },
+        { temperatureK: 310, solubility: 2 },
+      ]),
+    ).toThrow(ChemInputError);
+    expect(() =>
+      vantHoffFit([298, 298, 298].map((t) => ({ temperatureK: t, solubility: 1 }))),
+    ).toThrow(/one temperature/);
+    expect(() =>
+      vantHoffFit([
+        { temperatureK: -1, solubility: 1 },
+        { temperatureK: 298, solubility: 1 },
+        { temperatureK: 310, solubility: 1 },
+      ]),
+    ).toThrow(ChemInputError);
   });
 });
 
@@ -202,7 +239,10 @@ describe('activity and dispatch helpers', () => {
   });
   it('Davies: log γ = −A z² (√I/(1+√I) − 0.3 I), and γ → 1 as I → 0', () => {
     const A = debyeHuckelA(298.15);
-    expect(daviesLog10Gamma(2, 0.1)).toBeCloseTo(-A * 4 * (Math.sqrt(0.1) / (1 + Math.sqrt(0.1)) - 0.03), 12);
+    expect(daviesLog10Gamma(2, 0.1)).toBeCloseTo(
+      -A * 4 * (Math.sqrt(0.1) / (1 + Math.sqrt(0.1)) - 0.03),
+      12,
+    );
     expect(Math.abs(daviesLog10Gamma(1, 0))).toBe(0);
   });
   it('phMax dispatches to the base and acid forms', () => {

@@ -46,8 +46,12 @@ const drugAndSalt = fc
     const ionPkas = r.ionTwoPkas ? [r.ionPka1, r.ionPka1 + r.ionGap] : [r.ionPka1];
     const zXabs = r.ionTwoPkas && r.ionCharge2 ? 2 : 1;
     // a counter-acid (base drug) is neutral fully protonated; a counter-base (acid drug) carries +n
-    const counterIon = { pKas: ionPkas, mostProtonatedCharge: r.kind === 'base' ? 0 : ionPkas.length };
-    const zX = r.kind === 'base' ? -zXabs : counterIon.mostProtonatedCharge - (ionPkas.length - zXabs);
+    const counterIon = {
+      pKas: ionPkas,
+      mostProtonatedCharge: r.kind === 'base' ? 0 : ionPkas.length,
+    };
+    const zX =
+      r.kind === 'base' ? -zXabs : counterIon.mostProtonatedCharge - (ionPkas.length - zXabs);
     const a = Math.abs(zD);
     const b = Math.abs(zX);
     const g = a === b ? a : 1;
@@ -61,7 +65,10 @@ const drugAndSalt = fc
     };
     return { drug, salt, log10S0: r.log10S0 };
   })
-  .filter(({ salt }) => salt.counterIonCharge !== 0 && salt.drugPerSalt <= 4 && salt.counterIonPerSalt <= 4);
+  .filter(
+    ({ salt }) =>
+      salt.counterIonCharge !== 0 && salt.drugPerSalt <= 4 && salt.counterIonPerSalt <= 4,
+  );
 
 describe('pH_max and the salt points without a profile (ph-grid-solubility.ts)', () => {
   it('pH_max agrees with the profile-based numerical pH_max within the profile step, over random drugs and salts (fixed seed)', () => {
@@ -144,13 +151,20 @@ describe("screenCompound with profiles: 'none'", () => {
   for (const settings of [{}, { activityModel: 'davies' }]) {
     it(`leaves the profiles empty and every other number as the full screen has it (${JSON.stringify(settings)})`, () => {
       const full = screenCompound({ compound, drugIon: di, candidates, settings });
-      const none = screenCompound({ compound, drugIon: di, candidates, settings, profiles: 'none' });
+      const none = screenCompound({
+        compound,
+        drugIon: di,
+        candidates,
+        settings,
+        profiles: 'none',
+      });
       expect(full.rows.every((r) => r.error !== null || r.profile.length > 0)).toBe(true);
       expect(none.rows.every((r) => r.profile.length === 0)).toBe(true);
       expect(none.freeForm.profile).toEqual([]);
       // the dose-number series keeps the ICH M9 pH values (1.2, 4.5, 6.8) and the worst point
-      const named = <T extends { doseNumbers: { pH: number }[]; worst: { pH: number } | null }>(r: T) =>
-        r.doseNumbers.filter((d) => [1.2, 4.5, 6.8, r.worst?.pH].includes(d.pH));
+      const named = <T extends { doseNumbers: { pH: number }[]; worst: { pH: number } | null }>(
+        r: T,
+      ) => r.doseNumbers.filter((d) => [1.2, 4.5, 6.8, r.worst?.pH].includes(d.pH));
       const strip = (res: typeof full) => ({
         ...res,
         freeForm: { ...res.freeForm, profile: [], doseNumbers: named(res.freeForm) },

@@ -47,7 +47,12 @@ describe('closed-form 1:1 relations (Bogardus & Blackwood 1979; Serajuddin 2007)
     const s0 = 10 ** -5.58;
     const ksp = 1e-4;
     const pHmax = phMaxAcid(pKa, s0, ksp);
-    expect(Math.abs(Math.log10(freeAcidSolubilityM(s0, pKa, pHmax)) - Math.log10(saltLimitedAcidSolubilityM(ksp, pKa, pHmax)))).toBeLessThan(1e-9);
+    expect(
+      Math.abs(
+        Math.log10(freeAcidSolubilityM(s0, pKa, pHmax)) -
+          Math.log10(saltLimitedAcidSolubilityM(ksp, pKa, pHmax)),
+      ),
+    ).toBeLessThan(1e-9);
     expect(pHmax).toBeCloseTo(4.42 + 5.58 - 2, 12);
   });
   it('common-ion concentration solves x(x + c) = K_sp (the quadratic) and is √K_sp without added ion', () => {
@@ -59,7 +64,7 @@ describe('closed-form 1:1 relations (Bogardus & Blackwood 1979; Serajuddin 2007)
     ] as const) {
       const x = commonIonSaltIonM(ksp, c);
       const quadraticRoot = (-c + Math.sqrt(c * c + 4 * ksp)) / 2;
-      expect(Math.abs(x * (x + c) / ksp - 1)).toBeLessThan(1e-12);
+      expect(Math.abs((x * (x + c)) / ksp - 1)).toBeLessThan(1e-12);
       expect(Math.abs(x / quadraticRoot - 1)).toBeLessThan(1e-6);
     }
     expect(commonIonSaltIonM(1e-4, 0)).toBeCloseTo(1e-2, 15);
@@ -85,14 +90,17 @@ describe('published worked example: Avdeef, "Absorption and Drug Development" (W
   it('miconazole (base): log S at pH = pKa is log S₀ + log 2; slope −1 below the pKa', () => {
     const mic = base(6.07);
     expect(log10FreeFormSolubilityM(mic, -5.85, 6.07)).toBeCloseTo(-5.85 + Math.log10(2), 12);
-    const slope = log10FreeFormSolubilityM(mic, -5.85, 2.0) - log10FreeFormSolubilityM(mic, -5.85, 3.0);
+    const slope =
+      log10FreeFormSolubilityM(mic, -5.85, 2.0) - log10FreeFormSolubilityM(mic, -5.85, 3.0);
     expect(slope).toBeCloseTo(1, 3);
     expect(log10FreeFormSolubilityM(mic, -5.85, 10)).toBeCloseTo(-5.85, 3);
   });
   it('indomethacin (acid): slope +1 above the pKa, flat at log S₀ below', () => {
     const ind: Protolyte = { pKas: [4.42], mostProtonatedCharge: 0 };
     expect(log10FreeFormSolubilityM(ind, -5.58, 4.42)).toBeCloseTo(-5.58 + Math.log10(2), 12);
-    expect(log10FreeFormSolubilityM(ind, -5.58, 9) - log10FreeFormSolubilityM(ind, -5.58, 8)).toBeCloseTo(1, 3);
+    expect(
+      log10FreeFormSolubilityM(ind, -5.58, 9) - log10FreeFormSolubilityM(ind, -5.58, 8),
+    ).toBeCloseTo(1, 3);
     expect(log10FreeFormSolubilityM(ind, -5.58, 1)).toBeCloseTo(-5.58, 3);
   });
   it('ciprofloxacin (ampholyte): S = S₀(1 + 10^(pH − pKa2) + 10^(pKa1 − pH)), Avdeef eq. 6.7', () => {
@@ -104,7 +112,12 @@ describe('published worked example: Avdeef, "Absorption and Drug Development" (W
   });
 });
 
-const hclSaltOf = (pKa: number, log10Ksp: number, pH: number, commonIonM = 0): SaltEquilibriumInput => ({
+const hclSaltOf = (
+  pKa: number,
+  log10Ksp: number,
+  pH: number,
+  commonIonM = 0,
+): SaltEquilibriumInput => ({
   drug: base(pKa),
   drugIonCharge: 1,
   drugPerSalt: 1,
@@ -135,7 +148,13 @@ describe('numerical mass/charge-balance solver', () => {
   });
   it('numerical pH_max matches the closed form within 0.001 when pH_max ≤ pKa − 2', () => {
     const drug = { kind: 'base' as const, pKas: [8], ionCharge: 1 };
-    const salt = { counterIon: STRONG_MONOPROTIC, counterIonCharge: -1, drugPerSalt: 1, counterIonPerSalt: 1, log10Ksp: -3 };
+    const salt = {
+      counterIon: STRONG_MONOPROTIC,
+      counterIonCharge: -1,
+      drugPerSalt: 1,
+      counterIonPerSalt: 1,
+      log10Ksp: -3,
+    };
     const num = numericalPhMax(drug, -5, salt);
     const closed = phMaxBase(8, 1e-5, 1e-3);
     expect(num).not.toBeNull();
@@ -171,7 +190,10 @@ describe('numerical mass/charge-balance solver', () => {
   });
   it('Davies activity raises the salt’s solubility (γ < 1) and reports the ionic strength', () => {
     const ideal = solveSaltSolubility(hclSaltOf(9, -2, 2));
-    const davies = solveSaltSolubility({ ...hclSaltOf(9, -2, 2), activity: { model: 'davies', backgroundIonicStrengthM: 0.1, temperatureK: 310.15 } });
+    const davies = solveSaltSolubility({
+      ...hclSaltOf(9, -2, 2),
+      activity: { model: 'davies', backgroundIonicStrengthM: 0.1, temperatureK: 310.15 },
+    });
     expect(davies.drugTotalM).toBeGreaterThan(ideal.drugTotalM);
     expect(davies.ionicStrengthM).toBeGreaterThan(0.1);
   });
@@ -179,7 +201,13 @@ describe('numerical mass/charge-balance solver', () => {
 
 describe('profiles and bad input', () => {
   const drug = { kind: 'base' as const, pKas: [7.8], ionCharge: 1 };
-  const salt = { counterIon: STRONG_MONOPROTIC, counterIonCharge: -1, drugPerSalt: 1, counterIonPerSalt: 1, log10Ksp: -3 };
+  const salt = {
+    counterIon: STRONG_MONOPROTIC,
+    counterIonCharge: -1,
+    drugPerSalt: 1,
+    counterIonPerSalt: 1,
+    log10Ksp: -3,
+  };
   it('covers pH 1.0–8.0 in 0.1 steps with finite values and a pH_max', () => {
     const p = phSolubilityProfile(drug, -5, salt);
     expect(p.points).toHaveLength(71);
@@ -190,18 +218,32 @@ describe('profiles and bad input', () => {
   });
   it('property: the free-form branch of a base never rises with pH and nothing is NaN', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 12, noNaN: true }), fc.double({ min: -9, max: 0, noNaN: true }), fc.double({ min: -10, max: 0, noNaN: true }), (pKa, logS0, logKsp) => {
-        const p = phSolubilityProfile({ kind: 'base', pKas: [pKa], ionCharge: 1 }, logS0, { ...salt, log10Ksp: logKsp }, { phStep: 0.5 });
-        for (let i = 1; i < p.points.length; i++) {
-          expect(p.points[i]!.freeFormLimitedM).toBeLessThanOrEqual(p.points[i - 1]!.freeFormLimitedM * (1 + 1e-12));
-          expect(Number.isNaN(p.points[i]!.solubilityM)).toBe(false);
-        }
-      }),
+      fc.property(
+        fc.double({ min: 1, max: 12, noNaN: true }),
+        fc.double({ min: -9, max: 0, noNaN: true }),
+        fc.double({ min: -10, max: 0, noNaN: true }),
+        (pKa, logS0, logKsp) => {
+          const p = phSolubilityProfile(
+            { kind: 'base', pKas: [pKa], ionCharge: 1 },
+            logS0,
+            { ...salt, log10Ksp: logKsp },
+            { phStep: 0.5 },
+          );
+          for (let i = 1; i < p.points.length; i++) {
+            expect(p.points[i]!.freeFormLimitedM).toBeLessThanOrEqual(
+              p.points[i - 1]!.freeFormLimitedM * (1 + 1e-12),
+            );
+            expect(Number.isNaN(p.points[i]!.solubilityM)).toBe(false);
+          }
+        },
+      ),
       { numRuns: 50 },
     );
   });
   it('rejects pKa values out of order, pH outside 0–14 and S₀ ≤ 0', () => {
-    expect(() => phSolubilityProfile({ kind: 'base', pKas: [8, 4], ionCharge: 1 }, -5, null)).toThrow(ChemInputError);
+    expect(() =>
+      phSolubilityProfile({ kind: 'base', pKas: [8, 4], ionCharge: 1 }, -5, null),
+    ).toThrow(ChemInputError);
     expect(() => phSolubilityProfile(drug, -5, null, { phFrom: -1 })).toThrow(ChemInputError);
     expect(() => phSolubilityProfile(drug, -5, null, { phTo: 15 })).toThrow(ChemInputError);
     expect(() => freeBaseSolubilityM(0, 8, 3)).toThrow(ChemInputError);

@@ -105,8 +105,7 @@ describe('the fit', () => {
         })
         .sort((a, b) => a - b);
       const m = ratios.length / 2;
-      const median =
-        ratios.length % 2 ? ratios[Math.floor(m)]! : (ratios[m - 1]! + ratios[m]!) / 2;
+      const median = ratios.length % 2 ? ratios[Math.floor(m)]! : (ratios[m - 1]! + ratios[m]!) / 2;
       const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, 'kapustinskii', cls, group)!;
       expect(f.n).toBe(ratios.length);
       expect(f.factor).toBeCloseTo(median, 12);

@@ -1,11 +1,27 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { bornHaberCycle, ChemInputError, getThermoIon, hydrationEnthalpyKJ, latticeFromSolutionEnthalpy, solutionCycle, solveCycle } from '@/chem';
+import {
+  bornHaberCycle,
+  ChemInputError,
+  getThermoIon,
+  hydrationEnthalpyKJ,
+  latticeFromSolutionEnthalpy,
+  solutionCycle,
+  solveCycle,
+} from '@/chem';
 
 describe('Born–Haber cycle', () => {
   // NaCl: ΔfH°(NaCl,s) −411.15, ΔfH°(Na,g) 107.32, ΔfH°(Cl,g) 121.68 (Wagman et al. 1982);
   // IE(Na) 495.8, EA(Cl) 348.6 kJ/mol (CRC Handbook, NIST) — from memory.
-  const nacl = { salt: 'NaCl', metalCount: 1, nonMetalCount: 1, metalAtomisationKJ: 107.32, ionisationEnergySumKJ: 495.8, nonMetalAtomisationKJ: 121.68, electronGainKJ: -348.6 };
+  const nacl = {
+    salt: 'NaCl',
+    metalCount: 1,
+    nonMetalCount: 1,
+    metalAtomisationKJ: 107.32,
+    ionisationEnergySumKJ: 495.8,
+    nonMetalAtomisationKJ: 121.68,
+    electronGainKJ: -348.6,
+  };
 
   it('backs out NaCl’s lattice enthalpy: 787 kJ/mol as in the CRC lattice-energy table (±3)', () => {
     // CRC Handbook, "Lattice Energies" (Jenkins & Roobottom): NaCl 787 kJ/mol — from memory.
@@ -21,13 +37,25 @@ describe('Born–Haber cycle', () => {
 
   it('CaF₂ with two fluorines closes and gives the Born–Haber ≈ 2635 kJ/mol', () => {
     // Wagman 1982: ΔfH°(CaF₂) −1219.6, Ca(g) 178.2, F(g) 79.38; CRC: IE1+IE2(Ca) 1735.2, EA(F) 328.2.
-    const s = bornHaberCycle({ salt: 'CaF2', metalCount: 1, nonMetalCount: 2, metalAtomisationKJ: 178.2, ionisationEnergySumKJ: 1735.2, nonMetalAtomisationKJ: 79.38, electronGainKJ: -328.2, formationEnthalpyKJ: -1219.6, latticeEnthalpyKJ: null });
+    const s = bornHaberCycle({
+      salt: 'CaF2',
+      metalCount: 1,
+      nonMetalCount: 2,
+      metalAtomisationKJ: 178.2,
+      ionisationEnergySumKJ: 1735.2,
+      nonMetalAtomisationKJ: 79.38,
+      electronGainKJ: -328.2,
+      formationEnthalpyKJ: -1219.6,
+      latticeEnthalpyKJ: null,
+    });
     expect(-s.unknown!.value).toBeCloseTo(178.2 + 1735.2 + 2 * (79.38 - 328.2) + 1219.6, 6);
     expect(Math.abs(-s.unknown!.value - 2635)).toBeLessThan(10);
   });
 
   it('refuses two unknowns, naming the steps', () => {
-    expect(() => bornHaberCycle({ ...nacl, formationEnthalpyKJ: null, latticeEnthalpyKJ: null })).toThrow(ChemInputError);
+    expect(() =>
+      bornHaberCycle({ ...nacl, formationEnthalpyKJ: null, latticeEnthalpyKJ: null }),
+    ).toThrow(ChemInputError);
   });
 });
 
@@ -37,15 +65,38 @@ describe('solution cycle', () => {
     // hydration: Marcus 1987 K⁺ −334, Cl⁻ −367; Born–Haber 717.6 kJ/mol (Wagman 1982 + CRC IE/EA).
     const k = getThermoIon('potassium')!;
     const cl = getThermoIon('chloride')!;
-    const h = latticeFromSolutionEnthalpy({ solutionEnthalpyKJ: 17.22, solutionUncertaintyKJ: 0.1, cationHydration: hydrationEnthalpyKJ(k), anionHydration: hydrationEnthalpyKJ(cl), cationsPerFormula: 1, anionsPerFormula: 1 });
+    const h = latticeFromSolutionEnthalpy({
+      solutionEnthalpyKJ: 17.22,
+      solutionUncertaintyKJ: 0.1,
+      cationHydration: hydrationEnthalpyKJ(k),
+      anionHydration: hydrationEnthalpyKJ(cl),
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+    });
     expect(Math.abs(h.value / 717.6 - 1)).toBeLessThan(0.01);
     expect(h.uncertainty).toBeGreaterThan(0);
   });
 
   it('with everything known reports whether the data close', () => {
-    const ok = solutionCycle({ solutionEnthalpyKJ: 3.87, latticeEnthalpyKJ: 786.4, latticeUncertaintyKJ: 2, cationHydrationKJ: -416, anionHydrationKJ: -367, cationsPerFormula: 1, anionsPerFormula: 1 });
+    const ok = solutionCycle({
+      solutionEnthalpyKJ: 3.87,
+      latticeEnthalpyKJ: 786.4,
+      latticeUncertaintyKJ: 2,
+      cationHydrationKJ: -416,
+      anionHydrationKJ: -367,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+    });
     expect(ok.closes).toBe(true);
-    const bad = solutionCycle({ solutionEnthalpyKJ: 50, latticeEnthalpyKJ: 786.4, latticeUncertaintyKJ: 2, cationHydrationKJ: -416, anionHydrationKJ: -367, cationsPerFormula: 1, anionsPerFormula: 1 });
+    const bad = solutionCycle({
+      solutionEnthalpyKJ: 50,
+      latticeEnthalpyKJ: 786.4,
+      latticeUncertaintyKJ: 2,
+      cationHydrationKJ: -416,
+      anionHydrationKJ: -367,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+    });
     expect(bad.closes).toBe(false);
   });
 });
@@ -75,9 +126,22 @@ describe('solveCycle properties (fast-check)', () => {
 
   it('bad steps give a ChemInputError, never NaN', () => {
     fc.assert(
-      fc.property(fc.oneof(fc.constant(Number.NaN), fc.constant(Infinity), fc.constant(-Infinity), fc.constant(1e9)), (bad) => {
-        expect(() => solveCycle([{ label: 'a', enthalpyKJ: bad }, { label: 'b', enthalpyKJ: null }])).toThrow(ChemInputError);
-      }),
+      fc.property(
+        fc.oneof(
+          fc.constant(Number.NaN),
+          fc.constant(Infinity),
+          fc.constant(-Infinity),
+          fc.constant(1e9),
+        ),
+        (bad) => {
+          expect(() =>
+            solveCycle([
+              { label: 'a', enthalpyKJ: bad },
+              { label: 'b', enthalpyKJ: null },
+            ]),
+          ).toThrow(ChemInputError);
+        },
+      ),
     );
     expect(() => solveCycle([{ label: 'only', enthalpyKJ: 1 }])).toThrow(ChemInputError);
   });

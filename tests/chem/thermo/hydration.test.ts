@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { bornEnthalpyFactor, bornHydrationEnthalpyKJ, ChemInputError, fitBornOffsets, getThermoIon, hydrationEnthalpyKJ, organicIonFromFormula } from '@/chem';
+import {
+  bornEnthalpyFactor,
+  bornHydrationEnthalpyKJ,
+  ChemInputError,
+  fitBornOffsets,
+  getThermoIon,
+  hydrationEnthalpyKJ,
+  organicIonFromFormula,
+} from '@/chem';
 
 describe('Born hydration enthalpy', () => {
   it('water’s bracket [1 − 1/ε − (T/ε²)dε/dT] is about 1.005 at 298.15 K', () => {
@@ -35,7 +43,9 @@ describe('hydrationEnthalpyKJ', () => {
     const ion = organicIonFromFormula('C8H20N', 1, { aromatic: 0, nonAromatic: 0 });
     const h = hydrationEnthalpyKJ(ion);
     const chloride = hydrationEnthalpyKJ(getThermoIon('chloride')!, { forceBorn: true });
-    expect(h.uncertainty / Math.abs(h.value)).toBeGreaterThan(chloride.uncertainty / Math.abs(chloride.value));
+    expect(h.uncertainty / Math.abs(h.value)).toBeGreaterThan(
+      chloride.uncertainty / Math.abs(chloride.value),
+    );
     expect(Math.abs(h.value - -190)).toBeLessThanOrEqual(2 * h.uncertainty);
     expect(h.notes?.join(' ')).toMatch(/organic/);
   });

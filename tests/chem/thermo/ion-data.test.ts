@@ -1,17 +1,57 @@
 import { describe, expect, it } from 'vitest';
-import { derivedAnionVolumes, findThermoIon, getThermoIon, formulaMolarMassGPerMol, listThermoIonIds, referenceVolumeNm3 } from '@/chem';
+import {
+  derivedAnionVolumes,
+  findThermoIon,
+  getThermoIon,
+  formulaMolarMassGPerMol,
+  listThermoIonIds,
+  referenceVolumeNm3,
+} from '@/chem';
 import { LATTICE_REFERENCE_SALTS } from '@/chem/data/thermo-reference';
 import { THERMO_IONS } from '@/chem/data/thermo-ions';
 import { BONDI_RADIUS_A, ZHAO_ATOM_VOLUME_A3 } from '@/chem/data/thermo-elements';
 
 describe('bundled ion data', () => {
   it('covers the ions issue 3 lists, each value with a source', () => {
-    const need = ['lithium', 'sodium', 'potassium', 'rubidium', 'caesium', 'magnesium', 'calcium', 'strontium', 'barium', 'zinc', 'aluminium',
-      'fluoride', 'chloride', 'bromide', 'iodide', 'oxide', 'ammonium', 'nitrate', 'sulfate', 'hydrogen-sulfate', 'carbonate', 'perchlorate',
-      'phosphate', 'dihydrogen-phosphate', 'hydroxide', 'acetate', 'tetramethylammonium', 'tetraethylammonium'];
+    const need = [
+      'lithium',
+      'sodium',
+      'potassium',
+      'rubidium',
+      'caesium',
+      'magnesium',
+      'calcium',
+      'strontium',
+      'barium',
+      'zinc',
+      'aluminium',
+      'fluoride',
+      'chloride',
+      'bromide',
+      'iodide',
+      'oxide',
+      'ammonium',
+      'nitrate',
+      'sulfate',
+      'hydrogen-sulfate',
+      'carbonate',
+      'perchlorate',
+      'phosphate',
+      'dihydrogen-phosphate',
+      'hydroxide',
+      'acetate',
+      'tetramethylammonium',
+      'tetraethylammonium',
+    ];
     for (const id of need) expect(listThermoIonIds()).toContain(id);
     for (const r of THERMO_IONS) {
-      for (const v of [r.shannonRadiusA, r.goldschmidtRadiusA, r.thermochemicalRadiusA, r.volumeNm3, r.hydrationEnthalpyKJ]) {
+      for (const v of [
+        r.shannonRadiusA,
+        r.goldschmidtRadiusA,
+        r.thermochemicalRadiusA,
+        r.volumeNm3,
+        r.hydrationEnthalpyKJ,
+      ]) {
         if (v) expect(v.source).toMatch(/\d{4}|Handbook/);
         if (v?.fromMemory) expect(v.source).toContain('from memory');
       }
@@ -21,7 +61,13 @@ describe('bundled ion data', () => {
   it('Shannon radii add up to the measured nearest-neighbour distance of rock-salt alkali halides within 3 %', () => {
     // r₀ = a/2, cell edges from R. W. G. Wyckoff, Crystal Structures vol. 1 (1963) (from memory):
     // NaCl 5.640, KCl 6.293, KBr 6.600, NaF 4.634, RbCl 6.581 Å.
-    const cases: [string, string, number][] = [['sodium', 'chloride', 5.64], ['potassium', 'chloride', 6.293], ['potassium', 'bromide', 6.6], ['sodium', 'fluoride', 4.634], ['rubidium', 'chloride', 6.581]];
+    const cases: [string, string, number][] = [
+      ['sodium', 'chloride', 5.64],
+      ['potassium', 'chloride', 6.293],
+      ['potassium', 'bromide', 6.6],
+      ['sodium', 'fluoride', 4.634],
+      ['rubidium', 'chloride', 6.581],
+    ];
     for (const [c, a, edge] of cases) {
       const sum = getThermoIon(c)!.crystalRadiusA!.value + getThermoIon(a)!.crystalRadiusA!.value;
       expect(Math.abs(sum / (edge / 2) - 1)).toBeLessThan(0.03);
@@ -31,7 +77,9 @@ describe('bundled ion data', () => {
   it('Zhao atom volumes are the sphere volumes of Bondi radii (within 0.5 %)', () => {
     // Bondi 1964, J. Phys. Chem. 68, 441: radii; Zhao, Abraham & Zissimos 2003 Table 1: (4/3)πr³.
     for (const [el, r] of Object.entries(BONDI_RADIUS_A)) {
-      expect(Math.abs(ZHAO_ATOM_VOLUME_A3[el]! / ((4 / 3) * Math.PI * r ** 3) - 1)).toBeLessThan(0.005);
+      expect(Math.abs(ZHAO_ATOM_VOLUME_A3[el]! / ((4 / 3) * Math.PI * r ** 3) - 1)).toBeLessThan(
+        0.005,
+      );
     }
   });
 

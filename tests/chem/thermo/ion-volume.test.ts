@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { ChemInputError, organicIonFromFormula, organicIonFromSmiles, packingCalibration, parseFormula, radiusFromVolumeA, vanDerWaalsVolumeA3 } from '@/chem';
+import {
+  ChemInputError,
+  organicIonFromFormula,
+  organicIonFromSmiles,
+  packingCalibration,
+  parseFormula,
+  radiusFromVolumeA,
+  vanDerWaalsVolumeA3,
+} from '@/chem';
 
 describe('Zhao–Abraham–Zissimos van der Waals volumes', () => {
   it('benzene: 81 Å³, Bondi’s group-additive 48.36 cm³/mol (80.3 Å³) within 2 %', () => {
@@ -71,7 +79,9 @@ describe('organic ions', () => {
     expect(parent.formula).toBe('C3H10N');
   });
   it('refuses a multi-component SMILES (a whole salt) with a field message', async () => {
-    await expect(organicIonFromSmiles('[Na+].CC(=O)[O-]', -1)).rejects.toThrow(/smiles: .*several components/);
+    await expect(organicIonFromSmiles('[Na+].CC(=O)[O-]', -1)).rejects.toThrow(
+      /smiles: .*several components/,
+    );
   });
   it('bad SMILES or a charge clash give a ChemInputError', async () => {
     await expect(organicIonFromSmiles('C1CC', 1)).rejects.toBeInstanceOf(ChemInputError);

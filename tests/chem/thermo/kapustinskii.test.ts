@@ -37,17 +37,37 @@ describe('Kapustinskii lattice energy', () => {
   it('counts three ions for MX₂ and scales with charge', () => {
     expect(stoichiometryFromCharges(2, -1)).toEqual({ cations: 1, anions: 2 });
     expect(stoichiometryFromCharges(2, -2)).toEqual({ cations: 1, anions: 1 });
-    const mx = kapustinskiiLatticeEnergyKJ({ cationCharge: 1, anionCharge: -1, cationRadiusA: 1, anionRadiusA: 1.8 });
-    const m2x2 = kapustinskiiLatticeEnergyKJ({ cationCharge: 2, anionCharge: -2, cationRadiusA: 1, anionRadiusA: 1.8 });
+    const mx = kapustinskiiLatticeEnergyKJ({
+      cationCharge: 1,
+      anionCharge: -1,
+      cationRadiusA: 1,
+      anionRadiusA: 1.8,
+    });
+    const m2x2 = kapustinskiiLatticeEnergyKJ({
+      cationCharge: 2,
+      anionCharge: -2,
+      cationRadiusA: 1,
+      anionRadiusA: 1.8,
+    });
     expect(m2x2.value / mx.value).toBeCloseTo(4, 10);
   });
 
   it('rejects a zero or wrong-sign charge with a typed error naming the field', () => {
     expect(() =>
-      kapustinskiiLatticeEnergyKJ({ cationCharge: 0, anionCharge: -1, cationRadiusA: 1, anionRadiusA: 1 }),
+      kapustinskiiLatticeEnergyKJ({
+        cationCharge: 0,
+        anionCharge: -1,
+        cationRadiusA: 1,
+        anionRadiusA: 1,
+      }),
     ).toThrow(ChemInputError);
     expect(() =>
-      kapustinskiiLatticeEnergyKJ({ cationCharge: 1, anionCharge: 1, cationRadiusA: 1, anionRadiusA: 1 }),
+      kapustinskiiLatticeEnergyKJ({
+        cationCharge: 1,
+        anionCharge: 1,
+        cationRadiusA: 1,
+        anionRadiusA: 1,
+      }),
     ).toThrow(/anionCharge/);
   });
 });

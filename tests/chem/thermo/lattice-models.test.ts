@@ -1,7 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import {
-  bornLandePotentialKJ, bornMayerPotentialKJ, ChemInputError, COULOMB_KJ_A_PER_MOL, estimateSaltThermo, getThermoIon,
-  latticeEnthalpyCorrectionKJ, MADELUNG_CONSTANTS, nearestDistanceFromVolumeA, vbtPotentialKJ, volumeFromCellNm3,
+  bornLandePotentialKJ,
+  bornMayerPotentialKJ,
+  ChemInputError,
+  COULOMB_KJ_A_PER_MOL,
+  estimateSaltThermo,
+  getThermoIon,
+  latticeEnthalpyCorrectionKJ,
+  MADELUNG_CONSTANTS,
+  nearestDistanceFromVolumeA,
+  vbtPotentialKJ,
+  volumeFromCellNm3,
   volumeFromDensityNm3,
 } from '@/chem';
 
@@ -9,7 +18,12 @@ describe('Madelung constants and the Born–Mayer convention', () => {
   it('rock salt: Born–Mayer for NaCl at r₀ = 2.820 Å gives the textbook 755 ± 3 kJ/mol', () => {
     // r₀ = a/2 with a = 5.640 Å (Wyckoff 1963). Born–Mayer with ρ = 0.345 Å gives about 756 kJ/mol for NaCl
     // (e.g. C. E. Housecroft & A. G. Sharpe, Inorganic Chemistry, worked example on NaCl — from memory).
-    const u = bornMayerPotentialKJ({ cationCharge: 1, anionCharge: -1, structureType: 'rock-salt', nearestDistanceA: 2.82 });
+    const u = bornMayerPotentialKJ({
+      cationCharge: 1,
+      anionCharge: -1,
+      structureType: 'rock-salt',
+      nearestDistanceA: 2.82,
+    });
     expect(u).toBeGreaterThan(752);
     expect(u).toBeLessThan(759);
   });
@@ -19,7 +33,12 @@ describe('Madelung constants and the Born–Mayer convention', () => {
     // A wrong convention (M·z² with z = 2 for both, or M referred to the cell edge) would miss by > 25 %.
     const r0 = nearestDistanceFromVolumeA('fluorite', volumeFromCellNm3(5.463 ** 3, 4))!; // a = 5.463 Å (Wyckoff)
     expect(r0).toBeCloseTo((5.463 * Math.sqrt(3)) / 4, 6);
-    const u = bornMayerPotentialKJ({ cationCharge: 2, anionCharge: -1, structureType: 'fluorite', nearestDistanceA: r0 });
+    const u = bornMayerPotentialKJ({
+      cationCharge: 2,
+      anionCharge: -1,
+      structureType: 'fluorite',
+      nearestDistanceA: r0,
+    });
     const h = u + latticeEnthalpyCorrectionKJ(1, 'monatomic', 2, 'monatomic', 298.15);
     expect(Math.abs(h / 2635 - 1)).toBeLessThan(0.06);
   });
@@ -40,13 +59,26 @@ describe('Madelung constants and the Born–Mayer convention', () => {
 
   it('Born–Landé for NaCl (n = 8, Pauling) gives the textbook ≈ 753 kJ/mol', () => {
     // Pauling exponents Ne 7, Ar 9 → n = 8; Born–Landé NaCl ≈ 753 kJ/mol (standard textbook value, from memory).
-    const u = bornLandePotentialKJ({ cationCharge: 1, anionCharge: -1, structureType: 'rock-salt', nearestDistanceA: 2.82, bornExponent: 8 });
+    const u = bornLandePotentialKJ({
+      cationCharge: 1,
+      anionCharge: -1,
+      structureType: 'rock-salt',
+      nearestDistanceA: 2.82,
+      bornExponent: 8,
+    });
     expect(u).toBeGreaterThan(748);
     expect(u).toBeLessThan(758);
   });
 
   it('rejects an unknown structure type naming the field', () => {
-    expect(() => bornMayerPotentialKJ({ cationCharge: 1, anionCharge: -1, structureType: 'spinel', nearestDistanceA: 2.8 })).toThrow(/structureType/);
+    expect(() =>
+      bornMayerPotentialKJ({
+        cationCharge: 1,
+        anionCharge: -1,
+        structureType: 'spinel',
+        nearestDistanceA: 2.8,
+      }),
+    ).toThrow(/structureType/);
   });
 });
 
@@ -60,20 +92,38 @@ describe('volume-based thermodynamics', () => {
 
   it('VBT for NaCl from its measured volume is within 5 % of the Born–Haber 787 kJ/mol', () => {
     // Born–Haber from Wagman 1982 ΔfH° and CRC IE/EA: 787 kJ/mol.
-    const u = vbtPotentialKJ({ cationCharge: 1, anionCharge: -1, cationsPerFormula: 1, anionsPerFormula: 1, formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4) });
+    const u = vbtPotentialKJ({
+      cationCharge: 1,
+      anionCharge: -1,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+      formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4),
+    });
     expect(Math.abs(u.valueKJ / 787 - 1)).toBeLessThan(0.05);
   });
 
   it('switches to Glasser’s form for very large lattice energies', () => {
-    const u = vbtPotentialKJ({ cationCharge: 3, anionCharge: -2, cationsPerFormula: 2, anionsPerFormula: 3, formulaUnitVolumeNm3: 0.05 });
+    const u = vbtPotentialKJ({
+      cationCharge: 3,
+      anionCharge: -2,
+      cationsPerFormula: 2,
+      anionsPerFormula: 3,
+      formulaUnitVolumeNm3: 0.05,
+    });
     expect(u.form).toMatch(/Glasser/);
     expect(u.valueKJ).toBeGreaterThan(5000);
   });
 
   it('U_POT → ΔH_L: −RT for a 1:1 monatomic salt, +RT for KNO₃ (n = 6 nitrate)', () => {
     // Jenkins et al. 1999 eq. 2: ΔH_L = U_POT + [p(n_M/2 − 2) + q(n_X/2 − 2)]RT.
-    expect(latticeEnthalpyCorrectionKJ(1, 'monatomic', 1, 'monatomic', 298.15)).toBeCloseTo(-2 * 0.5 * 8.314462618e-3 * 298.15, 6);
-    expect(latticeEnthalpyCorrectionKJ(1, 'monatomic', 1, 'nonlinear', 298.15)).toBeCloseTo(0.5 * 8.314462618e-3 * 298.15, 6);
+    expect(latticeEnthalpyCorrectionKJ(1, 'monatomic', 1, 'monatomic', 298.15)).toBeCloseTo(
+      -2 * 0.5 * 8.314462618e-3 * 298.15,
+      6,
+    );
+    expect(latticeEnthalpyCorrectionKJ(1, 'monatomic', 1, 'nonlinear', 298.15)).toBeCloseTo(
+      0.5 * 8.314462618e-3 * 298.15,
+      6,
+    );
   });
 });
 
@@ -81,7 +131,13 @@ describe('estimateSaltThermo', () => {
   const na = getThermoIon('sodium')!;
   const cl = getThermoIon('chloride')!;
   it('auto picks VBT when a measured volume is given and says why', () => {
-    const r = estimateSaltThermo({ cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1, densityGPerCm3: 2.165 });
+    const r = estimateSaltThermo({
+      cation: na,
+      anion: cl,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+      densityGPerCm3: 2.165,
+    });
     expect(['vbt', 'kapustinskii']).toContain(r.methodChosen);
     expect(r.methodReason).toMatch(/auto/);
     expect(r.signConvention).toMatch(/dissociation/);
@@ -90,7 +146,15 @@ describe('estimateSaltThermo', () => {
   it('each named method answers NaCl within 8 % of the Born–Haber 787 kJ/mol', () => {
     // Born–Haber reference as above.
     for (const method of ['kapustinskii', 'vbt', 'born-mayer', 'born-lande'] as const) {
-      const r = estimateSaltThermo({ cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1, method, structureType: 'rock-salt', formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4) });
+      const r = estimateSaltThermo({
+        cation: na,
+        anion: cl,
+        cationsPerFormula: 1,
+        anionsPerFormula: 1,
+        method,
+        structureType: 'rock-salt',
+        formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4),
+      });
       expect(r.methodChosen).toBe(method);
       expect(Math.abs(r.latticeEnthalpyKJ.value / 787 - 1)).toBeLessThan(0.08);
       expect(r.latticeEnthalpyKJ.uncertainty).toBeGreaterThan(0);
@@ -100,16 +164,39 @@ describe('estimateSaltThermo', () => {
   it('ΔH_sol of NaCl: the stated band covers the NBS value +3.9 kJ/mol, and is wide (raw model)', () => {
     // Wagman et al. 1982: ΔfH°(Na⁺,aq) + ΔfH°(Cl⁻,aq) − ΔfH°(NaCl,s) = −240.12 − 167.16 + 411.15 = 3.87 kJ/mol.
     // The uncalibrated model; the calibrated one (narrower band) is tested in calibration.test.ts.
-    const r = estimateSaltThermo({ cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1, calibrate: false });
-    expect(Math.abs(r.solutionEnthalpyKJ.value - 3.87)).toBeLessThanOrEqual(2 * r.solutionEnthalpyKJ.uncertainty);
+    const r = estimateSaltThermo({
+      cation: na,
+      anion: cl,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+      calibrate: false,
+    });
+    expect(Math.abs(r.solutionEnthalpyKJ.value - 3.87)).toBeLessThanOrEqual(
+      2 * r.solutionEnthalpyKJ.uncertainty,
+    );
     expect(r.solutionEnthalpyKJ.uncertainty).toBeGreaterThan(10);
-    expect(r.solutionEnthalpyKJ.value).toBeCloseTo(r.latticeEnthalpyKJ.value + r.cationHydrationKJ.value + r.anionHydrationKJ.value, 9);
+    expect(r.solutionEnthalpyKJ.value).toBeCloseTo(
+      r.latticeEnthalpyKJ.value + r.cationHydrationKJ.value + r.anionHydrationKJ.value,
+      9,
+    );
   });
 
   it('rejects an unbalanced formula and a wrong-sign ion with typed errors', () => {
     const so4 = getThermoIon('sulfate')!;
-    expect(() => estimateSaltThermo({ cation: na, anion: so4, cationsPerFormula: 1, anionsPerFormula: 1 })).toThrow(ChemInputError);
-    expect(() => estimateSaltThermo({ cation: cl, anion: na, cationsPerFormula: 1, anionsPerFormula: 1 })).toThrow(/cation\.charge/);
-    expect(() => estimateSaltThermo({ cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1, method: 'born-mayer' })).toThrow(/structureType/);
+    expect(() =>
+      estimateSaltThermo({ cation: na, anion: so4, cationsPerFormula: 1, anionsPerFormula: 1 }),
+    ).toThrow(ChemInputError);
+    expect(() =>
+      estimateSaltThermo({ cation: cl, anion: na, cationsPerFormula: 1, anionsPerFormula: 1 }),
+    ).toThrow(/cation\.charge/);
+    expect(() =>
+      estimateSaltThermo({
+        cation: na,
+        anion: cl,
+        cationsPerFormula: 1,
+        anionsPerFormula: 1,
+        method: 'born-mayer',
+      }),
+    ).toThrow(/structureType/);
   });
 });

@@ -8,10 +8,34 @@ import { SOLUTION_REFERENCE_SALTS } from '@/chem/data/thermo-reference';
  * (infinite dilution, 25 °C), values in kJ/mol — from memory of that table.
  */
 const CRC_SOLUTION_KJ: Record<string, number> = {
-  LiCl: -37.03, LiBr: -48.83, LiI: -63.3, NaCl: 3.88, NaBr: -0.6, NaI: -7.53, KF: -17.73, KCl: 17.22, KBr: 19.87,
-  KI: 20.33, CsCl: 17.78, NaOH: -44.51, KOH: -57.61, NaNO3: 20.5, KNO3: 34.89, NH4Cl: 14.78, NH4NO3: 25.69,
-  KClO4: 51.04, Na2SO4: -2.42, K2SO4: 23.8, MgSO4: -91.21, CaCl2: -81.33, BaCl2: -13.22, MgCl2: -160.0,
-  NaCH3COO: -17.32, Na2CO3: -26.7, K2CO3: -30.92, KH2PO4: 19.6,
+  LiCl: -37.03,
+  LiBr: -48.83,
+  LiI: -63.3,
+  NaCl: 3.88,
+  NaBr: -0.6,
+  NaI: -7.53,
+  KF: -17.73,
+  KCl: 17.22,
+  KBr: 19.87,
+  KI: 20.33,
+  CsCl: 17.78,
+  NaOH: -44.51,
+  KOH: -57.61,
+  NaNO3: 20.5,
+  KNO3: 34.89,
+  NH4Cl: 14.78,
+  NH4NO3: 25.69,
+  KClO4: 51.04,
+  Na2SO4: -2.42,
+  K2SO4: 23.8,
+  MgSO4: -91.21,
+  CaCl2: -81.33,
+  BaCl2: -13.22,
+  MgCl2: -160.0,
+  NaCH3COO: -17.32,
+  Na2CO3: -26.7,
+  K2CO3: -30.92,
+  KH2PO4: 19.6,
 };
 
 describe('reference enthalpies of solution (NBS ΔfH°) against the CRC enthalpy-of-solution table', () => {
@@ -20,7 +44,9 @@ describe('reference enthalpies of solution (NBS ΔfH°) against the CRC enthalpy
     expect(rows.length).toBeGreaterThanOrEqual(15);
   });
   it.each(rows.map((s) => [s.formula, s] as const))('%s within 1.5 kJ/mol', (_f, s) => {
-    expect(Math.abs(referenceSolutionEnthalpyKJ(s) - CRC_SOLUTION_KJ[s.formula]!)).toBeLessThan(1.5);
+    expect(Math.abs(referenceSolutionEnthalpyKJ(s) - CRC_SOLUTION_KJ[s.formula]!)).toBeLessThan(
+      1.5,
+    );
   });
 });
 
@@ -29,25 +55,52 @@ describe('the drug-ion pipeline on salts whose organic ion is sized from its for
     // Wagman et al. 1982: ΔH_sol(NaCH₃COO) = −17.3, ΔH_sol(KCH₃COO) = −15.1 kJ/mol (from ΔfH°; CRC solution table −17.32).
     const { estimateSaltThermo, getThermoIon, organicIonFromFormula } = await import('@/chem');
     const acetate = organicIonFromFormula('C2H3O2', -1, { aromatic: 0, nonAromatic: 0 });
-    for (const [cation, ref] of [['sodium', -17.3], ['potassium', -15.1]] as const) {
-      const r = estimateSaltThermo({ cation: getThermoIon(cation)!, anion: acetate, cationsPerFormula: 1, anionsPerFormula: 1 });
-      expect(Math.abs(r.solutionEnthalpyKJ.value - ref)).toBeLessThanOrEqual(2 * r.solutionEnthalpyKJ.uncertainty);
+    for (const [cation, ref] of [
+      ['sodium', -17.3],
+      ['potassium', -15.1],
+    ] as const) {
+      const r = estimateSaltThermo({
+        cation: getThermoIon(cation)!,
+        anion: acetate,
+        cationsPerFormula: 1,
+        anionsPerFormula: 1,
+      });
+      expect(Math.abs(r.solutionEnthalpyKJ.value - ref)).toBeLessThanOrEqual(
+        2 * r.solutionEnthalpyKJ.uncertainty,
+      );
       // the organic ion's hydration carries the wide, organic-ion uncertainty
-      expect(r.anionHydrationKJ.uncertainty / Math.abs(r.anionHydrationKJ.value)).toBeGreaterThan(0.2);
+      expect(r.anionHydrationKJ.uncertainty / Math.abs(r.anionHydrationKJ.value)).toBeGreaterThan(
+        0.2,
+      );
     }
   });
 });
 
 describe('relative ΔH_sol between counter-ions of one ion', () => {
   it('the shared ion’s hydration cancels and the measured pair factor credits only the observed cancellation', async () => {
-    const { estimateSaltThermo, getThermoIon, relativePairFactor, relativeSolutionEnthalpyKJ } = await import('@/chem');
+    const { estimateSaltThermo, getThermoIon, relativePairFactor, relativeSolutionEnthalpyKJ } =
+      await import('@/chem');
     const pf = relativePairFactor();
     expect(pf.pairs).toBeGreaterThanOrEqual(50);
     expect(pf.factor).toBeGreaterThan(0.05);
     const na = getThermoIon('sodium')!;
-    const cl = estimateSaltThermo({ cation: na, anion: getThermoIon('chloride')!, cationsPerFormula: 1, anionsPerFormula: 1 });
-    const so4 = estimateSaltThermo({ cation: na, anion: getThermoIon('sulfate')!, cationsPerFormula: 2, anionsPerFormula: 1 });
-    const d = relativeSolutionEnthalpyKJ({ result: so4, drugPerFormula: 2, counterPerFormula: 1, drugIs: 'cation' }, { result: cl, drugPerFormula: 1, counterPerFormula: 1, drugIs: 'cation' }, pf.factor);
+    const cl = estimateSaltThermo({
+      cation: na,
+      anion: getThermoIon('chloride')!,
+      cationsPerFormula: 1,
+      anionsPerFormula: 1,
+    });
+    const so4 = estimateSaltThermo({
+      cation: na,
+      anion: getThermoIon('sulfate')!,
+      cationsPerFormula: 2,
+      anionsPerFormula: 1,
+    });
+    const d = relativeSolutionEnthalpyKJ(
+      { result: so4, drugPerFormula: 2, counterPerFormula: 1, drugIs: 'cation' },
+      { result: cl, drugPerFormula: 1, counterPerFormula: 1, drugIs: 'cation' },
+      pf.factor,
+    );
     // Per Na⁺: ΔH_sol(Na₂SO₄)/2 − ΔH_sol(NaCl); NBS (Wagman 1982): −2.42/2 − 3.87 = −5.1 kJ/mol.
     expect(d.value).toBeCloseTo(so4.solutionEnthalpyKJ.value / 2 - cl.solutionEnthalpyKJ.value, 9);
     expect(Math.abs(d.value - -5.1)).toBeLessThanOrEqual(2.5 * d.uncertainty);

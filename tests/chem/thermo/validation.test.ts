@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { fitBornOffsets, kapustinskiiVariants, KAPUSTINSKII_RADIUS_SET, validationReport } from '@/chem';
+import {
+  fitBornOffsets,
+  kapustinskiiVariants,
+  KAPUSTINSKII_RADIUS_SET,
+  validationReport,
+} from '@/chem';
 import { KAPUSTINSKII_SIMPLE_RMS_FRACTION } from '@/chem/thermo/models/kapustinskii/kapustinskii';
 import type { ModelValidation } from '@/chem';
 
@@ -36,14 +41,20 @@ describe('validation report: sizes of the reference sets', () => {
 });
 
 describe('lattice models against the Born–Haber halides and the polyatomic salts (bounds of issue 3)', () => {
-  it.each(['kapustinskii', 'vbt'])('%s: mean |error| ≤ 5 % on alkali + alkaline-earth halides', (model) => {
-    // Reference: Born–Haber lattice enthalpies from Wagman et al. 1982 (NBS) + CRC ionisation energies/electron affinities.
-    expect(get(model, 'halides').meanAbsPercentError).toBeLessThanOrEqual(5);
-  });
-  it.each(['kapustinskii', 'vbt'])('%s: mean |error| ≤ 8 % on salts of polyatomic ions', (model) => {
-    // Reference: solution cycle, NBS ΔfH° (Wagman et al. 1982) and Marcus 1987 hydration enthalpies.
-    expect(get(model, 'polyatomic').meanAbsPercentError).toBeLessThanOrEqual(8);
-  });
+  it.each(['kapustinskii', 'vbt'])(
+    '%s: mean |error| ≤ 5 % on alkali + alkaline-earth halides',
+    (model) => {
+      // Reference: Born–Haber lattice enthalpies from Wagman et al. 1982 (NBS) + CRC ionisation energies/electron affinities.
+      expect(get(model, 'halides').meanAbsPercentError).toBeLessThanOrEqual(5);
+    },
+  );
+  it.each(['kapustinskii', 'vbt'])(
+    '%s: mean |error| ≤ 8 % on salts of polyatomic ions',
+    (model) => {
+      // Reference: solution cycle, NBS ΔfH° (Wagman et al. 1982) and Marcus 1987 hydration enthalpies.
+      expect(get(model, 'polyatomic').meanAbsPercentError).toBeLessThanOrEqual(8);
+    },
+  );
   it('Born–Mayer and Born–Landé with measured cells are within 6 % on the halides with a cubic cell', () => {
     // Reference: as above; cells from Wyckoff, Crystal Structures (1963).
     expect(get('born-mayer', 'halides').meanAbsPercentError).toBeLessThanOrEqual(6);
@@ -54,17 +65,32 @@ describe('lattice models against the Born–Haber halides and the polyatomic sal
     const halides = v.filter((m) => m.group === 'halides');
     expect(halides.length).toBe(4);
     const chosen = halides.find((m) => m.model === `kapustinskii-${KAPUSTINSKII_RADIUS_SET}`)!;
-    for (const other of halides) expect(chosen.meanAbsPercentError).toBeLessThanOrEqual(other.meanAbsPercentError + 1e-9);
+    for (const other of halides)
+      expect(chosen.meanAbsPercentError).toBeLessThanOrEqual(other.meanAbsPercentError + 1e-9);
     // the two radius sets really differ (otherwise the comparison would prove nothing)
-    expect(get('kapustinskii-goldschmidt', 'halides').meanAbsPercentError).not.toBeCloseTo(get('kapustinskii-shannon', 'halides').meanAbsPercentError, 2);
+    expect(get('kapustinskii-goldschmidt', 'halides').meanAbsPercentError).not.toBeCloseTo(
+      get('kapustinskii-shannon', 'halides').meanAbsPercentError,
+      2,
+    );
     // the engine runs the chosen pairing
-    expect(get('kapustinskii', 'halides').meanAbsPercentError).toBeCloseTo(chosen.meanAbsPercentError, 10);
+    expect(get('kapustinskii', 'halides').meanAbsPercentError).toBeCloseTo(
+      chosen.meanAbsPercentError,
+      10,
+    );
     // K = 1214 (CRC form) beats 1202.5 with either radius set.
-    expect(get('kapustinskii-goldschmidt', 'halides').meanAbsPercentError).toBeLessThan(get('kapustinskii-goldschmidt-1202', 'halides').meanAbsPercentError);
-    expect(get('kapustinskii-shannon', 'halides').meanAbsPercentError).toBeLessThan(get('kapustinskii-shannon-1202', 'halides').meanAbsPercentError);
+    expect(get('kapustinskii-goldschmidt', 'halides').meanAbsPercentError).toBeLessThan(
+      get('kapustinskii-goldschmidt-1202', 'halides').meanAbsPercentError,
+    );
+    expect(get('kapustinskii-shannon', 'halides').meanAbsPercentError).toBeLessThan(
+      get('kapustinskii-shannon-1202', 'halides').meanAbsPercentError,
+    );
   });
   it('the bare Kapustinskii helper quotes the measured RMS error of the halides (to 1 %)', () => {
-    expect(Math.abs(KAPUSTINSKII_SIMPLE_RMS_FRACTION * 100 - get('kapustinskii', 'halides').rmsPercentError)).toBeLessThan(0.5);
+    expect(
+      Math.abs(
+        KAPUSTINSKII_SIMPLE_RMS_FRACTION * 100 - get('kapustinskii', 'halides').rmsPercentError,
+      ),
+    ).toBeLessThan(0.5);
   });
 });
 
@@ -85,14 +111,19 @@ describe('fitted Born hydration against Marcus 1987', () => {
     // Reference: Marcus 1994 (tetraalkylammonium), Marcus 1987 (acetate) — not used in the fit.
     const org = get('born-fitted', 'organic-check');
     expect(org.n).toBe(3);
-    expect(org.meanAbsPercentError).toBeGreaterThan(get('born-fitted', 'all-published').meanAbsPercentError);
+    expect(org.meanAbsPercentError).toBeGreaterThan(
+      get('born-fitted', 'all-published').meanAbsPercentError,
+    );
   });
 });
 
 describe('ΔH_sol by Hess’s law against the NBS tables', () => {
   it('the stated ±2σ band covers at least 90 % of the reference salts', () => {
     // Reference: ΔH_sol from ΔfH° of solid and aqueous ions, Wagman et al. 1982.
-    const s = get('solution-hess', 'solution') as ModelValidation & { coverage2Sigma: number; meanAbsErrorKJ: number };
+    const s = get('solution-hess', 'solution') as ModelValidation & {
+      coverage2Sigma: number;
+      meanAbsErrorKJ: number;
+    };
     expect(s.coverage2Sigma).toBeGreaterThanOrEqual(0.9);
     // A small difference of large numbers: tens of kJ/mol on average — shown, not hidden.
     expect(s.meanAbsErrorKJ).toBeGreaterThan(5);
@@ -103,7 +134,15 @@ describe('ΔH_sol by Hess’s law: raw vs calibrated lattice, leave-one-salt-out
   // Reference ΔH_sol: Σν·ΔfH°(ion, aq) − ΔfH°(salt, s) from the NBS tables (Wagman et al. 1982, J. Phys.
   // Chem. Ref. Data 11 Suppl. 2), checked against the CRC Handbook tables (fixtures/reference/
   // solution-enthalpies.csv). Calibrated figures: each salt predicted by a calibration refitted without it.
-  type S = ModelValidation & { signedBiasKJ: number; meanAbsErrorKJ: number; rmsErrorKJ: number; shareWithin20KJ: number; coverage2Sigma: number; calibrated: boolean; crossValidated: boolean };
+  type S = ModelValidation & {
+    signedBiasKJ: number;
+    meanAbsErrorKJ: number;
+    rmsErrorKJ: number;
+    shareWithin20KJ: number;
+    coverage2Sigma: number;
+    calibrated: boolean;
+    crossValidated: boolean;
+  };
   const raw = get('solution-hess', 'solution') as S;
   const cal = get('solution-hess-calibrated', 'solution') as S;
   const calSingly = get('solution-hess-calibrated', 'solution-singly-charged') as S;

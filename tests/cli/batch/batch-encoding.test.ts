@@ -11,7 +11,9 @@ import { join } from 'node:path';
 // single `screen` writes with, is the reference they must match character for character.
 describe('batch CSV fields', () => {
   it('quote and escape as papaparse does, for any text or number (fixed seed)', () => {
-    const text = fc.string({ unit: fc.constantFrom('a', ' ', ',', '"', '\n', '\r', '\uFEFF', '=', 'é', '1') });
+    const text = fc.string({
+      unit: fc.constantFrom('a', ' ', ',', '"', '\n', '\r', '\uFEFF', '=', 'é', '1'),
+    });
     fc.assert(
       fc.property(fc.oneof(text, fc.double(), fc.integer(), fc.constant(null)), (v) => {
         expect(csvField(v)).toBe(Papa.unparse([[v]], { newline: '\n' }));
@@ -30,10 +32,16 @@ describe('batch Monte Carlo', () => {
     'id,name,smiles,formula,kind,pkas,charge,s0_mg_per_ml,mp_c,logp,dose_mg,ions\nA2,Beta,,C16H19N3O2,base,6.4,,,172,2.6,100,chloride;mesylate;sulfate\n',
   );
   const pTop3 = (out: string) =>
-    Papa.parse<Record<string, string>>(out.split('\n').filter((l) => !l.startsWith('#')).join('\n'), {
-      header: true,
-      skipEmptyLines: true,
-    }).data.map((r) => r.p_top3);
+    Papa.parse<Record<string, string>>(
+      out
+        .split('\n')
+        .filter((l) => !l.startsWith('#'))
+        .join('\n'),
+      {
+        header: true,
+        skipEmptyLines: true,
+      },
+    ).data.map((r) => r.p_top3);
 
   it('runs only when --iterations asks: P(top 3) is empty by default and filled with it', async () => {
     const plain = await runCli(['screen', '--batch', file, '--jobs', '1']);

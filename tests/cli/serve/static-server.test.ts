@@ -7,7 +7,15 @@ import { CONTENT_SECURITY_POLICY } from '@/cli/serve/content-security-policy';
 import { fileFor, startStaticServer } from '@/cli/serve/static-server';
 import { buildNeeded, findPackageRoot } from '@/cli/serve/app-build';
 
-function get(port: number, path: string, method = 'GET'): Promise<{ status: number; headers: Record<string, string | string[] | undefined>; body: string }> {
+function get(
+  port: number,
+  path: string,
+  method = 'GET',
+): Promise<{
+  status: number;
+  headers: Record<string, string | string[] | undefined>;
+  body: string;
+}> {
   return new Promise((resolve, reject) => {
     const req = request({ host: '127.0.0.1', port, path, method }, (res) => {
       let body = '';
@@ -54,7 +62,9 @@ describe('saltsmith serve: the static server', () => {
     expect(route.body).toMatch(/<title>app<\/title>/);
     expect(route.headers['cache-control']).toBe('no-cache');
     expect((await get(port, '/assets/gone.js')).status).toBe(404);
-    expect((await get(port, '/manifest.webmanifest')).headers['content-type']).toMatch(/manifest\+json/);
+    expect((await get(port, '/manifest.webmanifest')).headers['content-type']).toMatch(
+      /manifest\+json/,
+    );
   });
 
   it('answers GET and HEAD only, and never leaves its folder', async () => {

@@ -45,7 +45,9 @@ const CSP_LISTENER = `document.addEventListener('securitypolicyviolation', (e) =
 });`;
 
 /** Open a persistent browser profile (so IndexedDB survives reloads) with one page watched for errors. */
-export async function openSession(opts: { viewport?: { width: number; height: number } } = {}): Promise<Session> {
+export async function openSession(
+  opts: { viewport?: { width: number; height: number } } = {},
+): Promise<Session> {
   const userDataDir = mkdtempSync(join(tmpdir(), 'saltsmith-e2e-'));
   const context = await chromium.launchPersistentContext(userDataDir, {
     executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
@@ -79,7 +81,9 @@ export async function openSession(opts: { viewport?: { width: number; height: nu
       await context.close();
       rmSync(userDataDir, { recursive: true, force: true });
       if (cspViolations.length) {
-        throw new Error(`Content-Security-Policy violations:\n${[...new Set(cspViolations)].join('\n')}`);
+        throw new Error(
+          `Content-Security-Policy violations:\n${[...new Set(cspViolations)].join('\n')}`,
+        );
       }
     },
   };

@@ -3,7 +3,11 @@
 import { existsSync } from 'node:fs';
 
 export function findChromium() {
-  const candidates = [process.env.CHROME_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].filter(Boolean);
+  const candidates = [
+    process.env.CHROME_PATH,
+    '/usr/bin/chromium',
+    '/usr/bin/chromium-browser',
+  ].filter(Boolean);
   return candidates.find((p) => existsSync(p)) ?? null;
 }
 

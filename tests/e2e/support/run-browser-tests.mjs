@@ -14,9 +14,13 @@ if (!chromium) {
 const outDir = process.env.SALTSMITH_OUT_DIR;
 const outArgs = outDir ? ['--outDir', outDir] : [];
 if (!process.env.SALTSMITH_SKIP_BUILD) {
-  const build = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--bypass-lock', ...outArgs], {
-    stdio: 'inherit',
-  });
+  const build = spawnSync(
+    process.execPath,
+    ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--bypass-lock', ...outArgs],
+    {
+      stdio: 'inherit',
+    },
+  );
   if (build.status !== 0) process.exit(build.status ?? 1);
 }
 
@@ -26,7 +30,13 @@ let status = 1;
 try {
   const run = spawnSync(
     process.execPath,
-    ['node_modules/vitest/vitest.mjs', 'run', '--config', 'tests/e2e/vitest.e2e.config.ts', ...process.argv.slice(2)],
+    [
+      'node_modules/vitest/vitest.mjs',
+      'run',
+      '--config',
+      'tests/e2e/vitest.e2e.config.ts',
+      ...process.argv.slice(2),
+    ],
     { stdio: 'inherit', env: { ...process.env, SALTSMITH_URL: server.url, CHROME_PATH: chromium } },
   );
   status = run.status ?? 1;

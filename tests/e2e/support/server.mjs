@@ -18,7 +18,17 @@ export function freePort() {
 export async function startPreview(port, extraArgs = []) {
   const child = spawn(
     process.execPath,
-    ['node_modules/vite/bin/vite.js', 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort', '--bypass-lock', ...extraArgs],
+    [
+      'node_modules/vite/bin/vite.js',
+      'preview',
+      '--host',
+      '127.0.0.1',
+      '--port',
+      String(port),
+      '--strictPort',
+      '--bypass-lock',
+      ...extraArgs,
+    ],
     { stdio: ['ignore', 'pipe', 'pipe'], detached: false },
   );
   let log = '';

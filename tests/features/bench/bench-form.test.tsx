@@ -8,13 +8,20 @@ import { candidatesRepo } from '@/persistence/candidates-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import type { ProjectRecord } from '@/persistence/records';
 import { BenchArea } from '@/features/bench/components/BenchArea';
-import { emptyDraft, measurementFromDraft, crystallinityOf } from '@/features/bench/bench-form-model';
+import {
+  emptyDraft,
+  measurementFromDraft,
+  crystallinityOf,
+} from '@/features/bench/bench-form-model';
 
 const ids = { projectId: 'p', candidateId: 'c' };
 
 describe('measurement form model', () => {
   it('requires a positive solubility, a medium and a pH in 0–14', () => {
-    const r = measurementFromDraft({ ...emptyDraft('solubility'), value: '0', medium: ' ', ph: '15' }, ids);
+    const r = measurementFromDraft(
+      { ...emptyDraft('solubility'), value: '0', medium: ' ', ph: '15' },
+      ids,
+    );
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.errors.value).toBe('Solubility must be greater than zero');
@@ -23,7 +30,10 @@ describe('measurement form model', () => {
   });
 
   it('rejects text where a number belongs and a temperature above 100 °C', () => {
-    const r = measurementFromDraft({ ...emptyDraft('solution-enthalpy'), value: 'warm', temperatureC: '120' }, ids);
+    const r = measurementFromDraft(
+      { ...emptyDraft('solution-enthalpy'), value: 'warm', temperatureC: '120' },
+      ids,
+    );
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.errors.value).toBe('ΔH_sol must be a number');
@@ -31,7 +41,10 @@ describe('measurement form model', () => {
   });
 
   it('stores temperatures in kelvin (T/K = t/°C + 273.15, SI Brochure 2019) and accepts a decimal comma', () => {
-    const r = measurementFromDraft({ ...emptyDraft('solubility'), value: '1,25', ph: '1.2', temperatureC: '37' }, ids);
+    const r = measurementFromDraft(
+      { ...emptyDraft('solubility'), value: '1,25', ph: '1.2', temperatureC: '37' },
+      ids,
+    );
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.measurement.value).toBe(1.25);
@@ -40,7 +53,10 @@ describe('measurement form model', () => {
   });
 
   it('keeps the crystallinity class readable from the stored text', () => {
-    const r = measurementFromDraft({ ...emptyDraft('crystallinity'), crystallinity: 'amorphous', text: 'XRPD halo' }, ids);
+    const r = measurementFromDraft(
+      { ...emptyDraft('crystallinity'), crystallinity: 'amorphous', text: 'XRPD halo' },
+      ids,
+    );
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.measurement.value).toBeNull();
@@ -108,9 +124,18 @@ describe('candidate salt form', () => {
     const { hydrateFromText } = await import('@/features/bench/components/CandidateForm');
     expect(hydrateFromText('')).toEqual({ ok: true, value: 0 });
     expect(hydrateFromText('0,5')).toEqual({ ok: true, value: 0.5 });
-    expect(hydrateFromText('1.3')).toMatchObject({ ok: false, error: expect.stringMatching(/half molecules/) });
-    expect(hydrateFromText('25')).toMatchObject({ ok: false, error: expect.stringMatching(/from 0 to 20/) });
-    expect(hydrateFromText('two')).toMatchObject({ ok: false, error: expect.stringMatching(/must be a number/) });
+    expect(hydrateFromText('1.3')).toMatchObject({
+      ok: false,
+      error: expect.stringMatching(/half molecules/),
+    });
+    expect(hydrateFromText('25')).toMatchObject({
+      ok: false,
+      error: expect.stringMatching(/from 0 to 20/),
+    });
+    expect(hydrateFromText('two')).toMatchObject({
+      ok: false,
+      error: expect.stringMatching(/must be a number/),
+    });
   });
 
   it('stores a hydrate and removes a candidate with its measurements after a confirmation', async () => {
@@ -118,17 +143,33 @@ describe('candidate salt form', () => {
     const p = await projectsRepo.create('Hydrate test', { ...DEMO_COMPOUND, name: 'Hydrate test' });
     const c = await candidatesRepo.add(p.id, 'chloride');
     await candidatesRepo.add(p.id, 'tosylate');
-    await measurementsRepo.add({ projectId: p.id, candidateId: c.id, kind: 'note', value: null, unit: '', ph: null, temperatureK: null, medium: '', text: 'needles' });
+    await measurementsRepo.add({
+      projectId: p.id,
+      candidateId: c.id,
+      kind: 'note',
+      value: null,
+      unit: '',
+      ph: null,
+      temperatureK: null,
+      medium: '',
+      text: 'needles',
+    });
     const user = userEvent.setup();
     render(<BenchArea project={p} extras={{ predictionFor: () => null }} />);
     const water = await screen.findByLabelText(/Water of crystallisation/);
     await user.clear(water);
     await user.type(water, '1');
-    await waitFor(async () => expect((await candidatesRepo.listForProject(p.id))[0]?.hydrateWater).toBe(1));
+    await waitFor(async () =>
+      expect((await candidatesRepo.listForProject(p.id))[0]?.hydrateWater).toBe(1),
+    );
     await user.click(screen.getByRole('button', { name: 'Remove from shortlist…' }));
-    expect(screen.getByRole('group', { name: /Confirm removing Chloride/ })).toHaveTextContent(/and its 1 measurement\?/);
+    expect(screen.getByRole('group', { name: /Confirm removing Chloride/ })).toHaveTextContent(
+      /and its 1 measurement\?/,
+    );
     await user.click(screen.getByRole('button', { name: 'Remove' }));
-    await waitFor(async () => expect((await candidatesRepo.listForProject(p.id)).map((x) => x.ionId)).toEqual(['tosylate']));
+    await waitFor(async () =>
+      expect((await candidatesRepo.listForProject(p.id)).map((x) => x.ionId)).toEqual(['tosylate']),
+    );
     expect(await measurementsRepo.listForProject(p.id)).toHaveLength(0);
   });
 });
@@ -138,7 +179,17 @@ describe('deleting a measurement', () => {
     await resetDbForTests();
     const p = await projectsRepo.create('Undo test', { ...DEMO_COMPOUND, name: 'Undo test' });
     const c = await candidatesRepo.add(p.id, 'chloride');
-    const m = await measurementsRepo.add({ projectId: p.id, candidateId: c.id, kind: 'melting-point', value: 212, unit: '°C', ph: null, temperatureK: null, medium: '', text: 'DSC onset' });
+    const m = await measurementsRepo.add({
+      projectId: p.id,
+      candidateId: c.id,
+      kind: 'melting-point',
+      value: 212,
+      unit: '°C',
+      ph: null,
+      temperatureK: null,
+      medium: '',
+      text: 'DSC onset',
+    });
     const user = userEvent.setup();
     render(<BenchArea project={p} extras={{ predictionFor: () => null }} />);
     await user.click(await screen.findByRole('button', { name: /Delete melting point 212/ }));

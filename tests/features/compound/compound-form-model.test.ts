@@ -22,9 +22,15 @@ describe('compound form model', () => {
   it('asks for the cell volume and Z together, and refuses negative volumes', () => {
     const half = compoundFromDraft({ ...draft, cellVolumeA3: '1500' }, DEMO_COMPOUND);
     expect(!half.ok && half.errors.formulaUnitsPerCell).toMatch(/both/);
-    const neg = compoundFromDraft({ ...draft, cellVolumeA3: '-5', formulaUnitsPerCell: '4' }, DEMO_COMPOUND);
+    const neg = compoundFromDraft(
+      { ...draft, cellVolumeA3: '-5', formulaUnitsPerCell: '4' },
+      DEMO_COMPOUND,
+    );
     expect(!neg.ok && neg.errors.cellVolumeA3).toMatch(/greater than zero/);
-    const ok = compoundFromDraft({ ...draft, cellVolumeA3: '1500', formulaUnitsPerCell: '4' }, DEMO_COMPOUND);
+    const ok = compoundFromDraft(
+      { ...draft, cellVolumeA3: '1500', formulaUnitsPerCell: '4' },
+      DEMO_COMPOUND,
+    );
     expect(ok.ok && ok.compound.formulaUnitsPerCell).toBe(4);
   });
 

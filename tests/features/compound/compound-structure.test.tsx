@@ -41,7 +41,9 @@ describe('Compound area: structure', () => {
   it('draws the structure and shows formula, molar mass and the drug ion', async () => {
     const project = await projectsRepo.create('Structure test', procaine);
     render(<LivePanel id={project.id} />);
-    expect(await screen.findByRole('img', { name: 'Structure of Procaine base' }, { timeout: 10000 })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('img', { name: 'Structure of Procaine base' }, { timeout: 10000 }),
+    ).toBeInTheDocument();
     expect(screen.getByText(/C13H20N2O2, 236\.31 g\/mol/)).toBeInTheDocument();
     // Protonated base: one more H, +1 (236.31 + 1.008 g/mol).
     expect(screen.getByText(/C13H21N2O2⁺, 237\.32 g\/mol/)).toBeInTheDocument();
@@ -58,7 +60,9 @@ describe('Compound area: structure', () => {
     const field = screen.getByLabelText('Structure (SMILES)');
     await user.clear(field);
     await user.type(field, 'CCN(CC)CCOC(=O)c1ccc(N)cc');
-    expect(await screen.findByText(/Cannot read this SMILES/, {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(
+      await screen.findByText(/Cannot read this SMILES/, {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
     expect(field).toHaveAttribute('aria-invalid', 'true');
     expect(screen.getByText('Not saved: fix the marked field')).toBeInTheDocument();
     expect(screen.getByRole('img', { name: 'Structure of Procaine base' })).toBeInTheDocument();
@@ -75,14 +79,20 @@ describe('Compound area: structure', () => {
     // Lidocaine base: C14H22N2O, 234.34 g/mol (pharmacopoeial monograph; from memory).
     await user.clear(field);
     await user.type(field, 'CCN(CC)CC(=O)Nc1c(C)cccc1C');
-    expect(await screen.findByText(/C14H22N2O, 234\.34 g\/mol/, {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(
+      await screen.findByText(/C14H22N2O, 234\.34 g\/mol/, {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
     expect(screen.getByLabelText('Molecular formula')).toHaveValue('C14H22N2O');
     expect((await projectsRepo.get(project.id))!.compound.formula).toBe('C14H22N2O');
   });
 
   it('a formula with an unknown element is refused at the field', async () => {
     const user = userEvent.setup();
-    const project = await projectsRepo.create('Formula test', { ...procaine, smiles: '', formula: 'C13H20N2O2' });
+    const project = await projectsRepo.create('Formula test', {
+      ...procaine,
+      smiles: '',
+      formula: 'C13H20N2O2',
+    });
     render(<LivePanel id={project.id} />);
     expect(await screen.findByText('No structure: formula only.')).toBeInTheDocument();
     expect(screen.getByText(/C13H20N2O2, 236\.31 g\/mol/)).toBeInTheDocument();

@@ -42,12 +42,18 @@ async function setup() {
 describe('Counter-ions area', () => {
   it('lists the anions for a base with ΔpKa and the verdict; the search narrows by formula', async () => {
     const { user, table } = await setup();
-    const row = within(table).getByRole('rowheader', { name: /^Mesylate/ }).closest('tr')!;
+    const row = within(table)
+      .getByRole('rowheader', { name: /^Mesylate/ })
+      .closest('tr')!;
     // 8.0 − (−1.2) = 9.2: methanesulfonic acid pKa as bundled (Stahl & Wermuth, from memory).
     expect(within(row).getByText(/9\.2 · salt expected/)).toBeInTheDocument();
     expect(within(table).queryByRole('rowheader', { name: /^Sodium/ })).toBeNull();
     await user.type(screen.getByLabelText('Search counter-ions'), 'C7H7O3S');
-    expect(within(table).getAllByRole('rowheader').map((h) => h.textContent)).toEqual(['Tosylate']);
+    expect(
+      within(table)
+        .getAllByRole('rowheader')
+        .map((h) => h.textContent),
+    ).toEqual(['Tosylate']);
   });
 
   it('filters by minimum ΔpKa and says when the filter is not a number', async () => {
@@ -62,8 +68,14 @@ describe('Counter-ions area', () => {
 
   it('adds a chosen salt form to the shortlist', async () => {
     const { user, table, project } = await setup();
-    const row = within(table).getByRole('rowheader', { name: /^Sulfate/ }).closest('tr')!;
-    await user.click(within(row).getByRole('button', { name: /Add Sulfate \(hemisulfate \(2:1\)\) to the shortlist/ }));
+    const row = within(table)
+      .getByRole('rowheader', { name: /^Sulfate/ })
+      .closest('tr')!;
+    await user.click(
+      within(row).getByRole('button', {
+        name: /Add Sulfate \(hemisulfate \(2:1\)\) to the shortlist/,
+      }),
+    );
     expect(await within(row).findByText('On shortlist')).toBeInTheDocument();
     const list = await candidatesRepo.listForProject(project.id);
     expect(list).toMatchObject([{ ionId: 'sulfate', drugPerSalt: 2, counterIonPerSalt: 1 }]);
@@ -94,7 +106,9 @@ describe('Counter-ions area', () => {
     await user.clear(pka);
     await user.type(pka, '4.5');
     await user.click(within(form).getByRole('button', { name: 'Save for this project' }));
-    const header = await within(table).findByRole('rowheader', { name: /^Acetate.*edited for this project/ });
+    const header = await within(table).findByRole('rowheader', {
+      name: /^Acetate.*edited for this project/,
+    });
     expect(within(header.closest('tr')!).getByText('4.50')).toBeInTheDocument();
     // The bundled value (4.76, aqion table) is still shown as the original.
     expect(await screen.findByText(/Bundled: pKa 4\.76/)).toBeInTheDocument();
@@ -114,7 +128,9 @@ describe('Counter-ions area: removing an in-house ion', () => {
     await user.click(await within(table).findByRole('button', { name: 'Temporary acid' }));
     await user.click(screen.getByRole('button', { name: 'Remove…' }));
     await user.click(screen.getByRole('button', { name: 'Remove in-house ion' }));
-    await waitFor(() => expect(within(table).queryByRole('rowheader', { name: /Temporary acid/ })).toBeNull());
+    await waitFor(() =>
+      expect(within(table).queryByRole('rowheader', { name: /Temporary acid/ })).toBeNull(),
+    );
     expect(await customIonsRepo.listAll()).toEqual([]);
   });
 });
@@ -132,7 +148,14 @@ describe('Counter-ions area: reference ions', () => {
 describe('an unreadable stored in-house record (issue 13)', () => {
   it('is named once with its reason; acknowledged, it is not reported again in any project', async () => {
     const { getDb } = await import('@/persistence/db');
-    await getDb().customIons.put({ id: 'inhouse_bad', schemaVersion: 1, projectId: null, overridesIonId: null, ion: { name: 5 }, updatedAt: 'x' });
+    await getDb().customIons.put({
+      id: 'inhouse_bad',
+      schemaVersion: 1,
+      projectId: null,
+      overridesIonId: null,
+      ion: { name: 5 },
+      updatedAt: 'x',
+    });
     const { user, table } = await setup();
     const alert = await screen.findByRole('alert');
     expect(alert).toHaveTextContent('inhouse_bad');

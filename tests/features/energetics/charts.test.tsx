@@ -24,7 +24,9 @@ const nacl = {
 describe('energy-level diagram', () => {
   it('draws levels to scale: equal kJ/mol give equal heights', () => {
     const { container } = render(<EnergyLevelDiagram cycle={nacl} />);
-    const levels = [...container.querySelectorAll('line[stroke-width="2.5"]')].map((l) => Number(l.getAttribute('y1')));
+    const levels = [...container.querySelectorAll('line[stroke-width="2.5"]')].map((l) =>
+      Number(l.getAttribute('y1')),
+    );
     expect(levels).toHaveLength(4);
     const [solid, gas, half, aq] = levels as [number, number, number, number];
     // SVG y grows downward: the lattice step goes up (smaller y), hydration steps go down.
@@ -79,8 +81,20 @@ describe('pH–solubility chart', () => {
       <PhSolubilityChart
         doseLineMgPerMl={0.8}
         series={[
-          { id: 'free', label: 'free base', kind: 'free-form', points: [1, 2, 7, 8].map((pH) => ({ pH, solubilityMgPerMl: 10 ** (7 - pH) * 0.01 })) },
-          { id: 's', label: 'salt', kind: 'salt', estimated: true, phMax: 5.5, points: [1, 2, 7].map((pH) => ({ pH, solubilityMgPerMl: 3 })) },
+          {
+            id: 'free',
+            label: 'free base',
+            kind: 'free-form',
+            points: [1, 2, 7, 8].map((pH) => ({ pH, solubilityMgPerMl: 10 ** (7 - pH) * 0.01 })),
+          },
+          {
+            id: 's',
+            label: 'salt',
+            kind: 'salt',
+            estimated: true,
+            phMax: 5.5,
+            points: [1, 2, 7].map((pH) => ({ pH, solubilityMgPerMl: 3 })),
+          },
         ]}
       />,
     );

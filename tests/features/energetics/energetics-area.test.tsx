@@ -16,7 +16,11 @@ beforeEach(async () => {
   await resetDbForTests();
   useRankingViewStore.setState({ focusCandidateId: null, chartIds: null });
   // Formula only (no SMILES), so the structure parser is not loaded in jsdom.
-  project = await projectsRepo.create('Energetics test', { ...DEMO_COMPOUND, name: 'Energetics test', smiles: '' });
+  project = await projectsRepo.create('Energetics test', {
+    ...DEMO_COMPOUND,
+    name: 'Energetics test',
+    smiles: '',
+  });
   await candidatesRepo.add(project.id, 'chloride');
   await candidatesRepo.add(project.id, 'sulfate', { drugPerSalt: 2, counterIonPerSalt: 1 });
 });
@@ -24,12 +28,17 @@ beforeEach(async () => {
 describe('Energetics area', () => {
   it('states the sign convention and each step of the cycle with its uncertainty', async () => {
     render(<EnergeticsArea project={project} />);
-    expect(await screen.findByText(/Sign convention\./, {}, { timeout: 15000 })).toBeInTheDocument();
+    expect(
+      await screen.findByText(/Sign convention\./, {}, { timeout: 15000 }),
+    ).toBeInTheDocument();
     const table = screen.getByRole('table', { name: /Cycle of Chloride/ });
-    for (const step of ['ΔH_L', 'ΔH_hyd,+', 'ΔH_hyd,−', 'ΔH_sol']) expect(within(table).getByText(step, { exact: false })).toBeInTheDocument();
+    for (const step of ['ΔH_L', 'ΔH_hyd,+', 'ΔH_hyd,−', 'ΔH_sol'])
+      expect(within(table).getByText(step, { exact: false })).toBeInTheDocument();
     expect(within(table).getAllByText(/±/).length).toBeGreaterThanOrEqual(4);
     // The weak point is said on screen, not hidden.
-    expect(screen.getAllByRole('note').some((n) => /difference of ΔH_L/.test(n.textContent ?? ''))).toBe(true);
+    expect(
+      screen.getAllByRole('note').some((n) => /difference of ΔH_L/.test(n.textContent ?? '')),
+    ).toBe(true);
     expect(screen.getAllByRole('img', { name: /per drug ion/ }).length).toBeGreaterThanOrEqual(2);
   });
 });
@@ -60,10 +69,16 @@ describe('lattice enthalpy backed out of a measured ΔH_sol', () => {
     if (!r || 'error' in r) return;
     const e = data.energetics[cand!.id]!;
     const t = e.thermo!;
-    const closure = r.lattice.value + e.cationsPerFormula * t.cationHydrationKJ.value + e.anionsPerFormula * t.anionHydrationKJ.value - 12.5;
+    const closure =
+      r.lattice.value +
+      e.cationsPerFormula * t.cationHydrationKJ.value +
+      e.anionsPerFormula * t.anionHydrationKJ.value -
+      12.5;
     expect(Math.abs(closure)).toBeLessThan(1e-9);
     // The measured value's stated spread and the hydration estimates' add in quadrature: never less than either.
-    expect(r.lattice.uncertainty).toBeGreaterThanOrEqual(t.cationHydrationKJ.uncertainty * e.cationsPerFormula - 1e-9);
+    expect(r.lattice.uncertainty).toBeGreaterThanOrEqual(
+      t.cationHydrationKJ.uncertainty * e.cationsPerFormula - 1e-9,
+    );
   });
 });
 

@@ -13,10 +13,16 @@ describe('Model check area', () => {
     expect(body).toHaveLength(report.length);
     const first = report[0]!;
     const row = body[0]!;
-    expect(within(row).getByText(`${first.meanAbsPercentError.toFixed(1)} %`, { selector: 'td' })).toBeInTheDocument();
+    expect(
+      within(row).getByText(`${first.meanAbsPercentError.toFixed(1)} %`, { selector: 'td' }),
+    ).toBeInTheDocument();
     expect(within(row).getByText(String(first.n), { selector: 'td' })).toBeInTheDocument();
     // the chart has one labelled figure with the same number of model/group pairs
-    expect(screen.getByRole('img', { name: new RegExp(`${report.length} model/set pairs in the table`) })).toBeInTheDocument();
+    expect(
+      screen.getByRole('img', {
+        name: new RegExp(`${report.length} model/set pairs in the table`),
+      }),
+    ).toBeInTheDocument();
   });
 
   it('opens the reference values of a model, each with its source', async () => {
@@ -27,13 +33,16 @@ describe('Model check area', () => {
     await user.click(buttons[0]!);
     const inner = screen.getByRole('table', { name: /Reference values for/ });
     expect(within(inner).getAllByRole('row')).toHaveLength(report[0]!.rows.length + 1);
-    expect(within(inner).getAllByText(report[0]!.rows[0]!.source, { selector: 'td' }).length).toBeGreaterThan(0);
+    expect(
+      within(inner).getAllByText(report[0]!.rows[0]!.source, { selector: 'td' }).length,
+    ).toBeGreaterThan(0);
   });
 });
 
 describe('Model check: the salt-solubility model on drugs it never saw (issue 10)', () => {
   it('shows the leave-one-drug-out figures of every variant with the anchor’s beside them, and one parity plot per series', async () => {
-    const { SALT_SOLUBILITY_VARIANTS, SALT_SOLUBILITY_SERIES, SALT_SOLUBILITY_MODEL } = await import('@/chem');
+    const { SALT_SOLUBILITY_VARIANTS, SALT_SOLUBILITY_SERIES, SALT_SOLUBILITY_MODEL } =
+      await import('@/chem');
     render(<ModelCheckArea />);
     const table = screen.getByRole('table', { name: /Leave-one-drug-out figures/ });
     const rows = within(table).getAllByRole('row').slice(1);

@@ -21,7 +21,11 @@ afterEach(async () => {
 describe('network and storage status', () => {
   it('asks the browser to keep the data and shows that it agreed', async () => {
     const persist = vi.fn().mockResolvedValue(true);
-    stubStorage({ persist, persisted: vi.fn().mockResolvedValue(false), estimate: vi.fn().mockResolvedValue({ usage: 2 * 1024 * 1024, quota: 100 * 1024 * 1024 }) });
+    stubStorage({
+      persist,
+      persisted: vi.fn().mockResolvedValue(false),
+      estimate: vi.fn().mockResolvedValue({ usage: 2 * 1024 * 1024, quota: 100 * 1024 * 1024 }),
+    });
     render(<OfflineStatus />);
     expect(await screen.findByText('Data kept')).toBeInTheDocument();
     expect(persist).toHaveBeenCalledTimes(1);
@@ -29,7 +33,10 @@ describe('network and storage status', () => {
   });
 
   it('says so plainly when the browser does not promise to keep the data', async () => {
-    stubStorage({ persist: vi.fn().mockResolvedValue(false), persisted: vi.fn().mockResolvedValue(false) });
+    stubStorage({
+      persist: vi.fn().mockResolvedValue(false),
+      persisted: vi.fn().mockResolvedValue(false),
+    });
     render(<OfflineStatus />);
     expect(await screen.findByText('Data not guaranteed')).toBeInTheDocument();
     expect(screen.getByTestId('persistence-status')).toHaveTextContent(/may clear it/);
@@ -75,9 +82,18 @@ describe('storage errors are shown, not swallowed', () => {
   // InvalidStateError) and Dexie 4's wrappers (DatabaseClosedError, MissingAPIError).
   it.each([
     [new DOMException('The quota has been exceeded.', 'QuotaExceededError'), 'quota'],
-    [Object.assign(new Error('Transaction aborted'), { name: 'AbortError', inner: new DOMException('x', 'QuotaExceededError') }), 'quota'],
+    [
+      Object.assign(new Error('Transaction aborted'), {
+        name: 'AbortError',
+        inner: new DOMException('x', 'QuotaExceededError'),
+      }),
+      'quota',
+    ],
     [Object.assign(new Error('upgrade blocked'), { name: 'VersionError' }), 'blocked'],
-    [Object.assign(new Error('Database has been closed'), { name: 'DatabaseClosedError' }), 'closed'],
+    [
+      Object.assign(new Error('Database has been closed'), { name: 'DatabaseClosedError' }),
+      'closed',
+    ],
     [Object.assign(new Error('IndexedDB API missing'), { name: 'MissingAPIError' }), 'unavailable'],
   ])('classifies %s as %s', (err, kind) => {
     expect(classifyStorageError(err)?.kind).toBe(kind);
@@ -93,7 +109,9 @@ describe('storage errors are shown, not swallowed', () => {
     render(<StorageErrorBanner />);
     expect(screen.queryByRole('alert')).toBeNull();
     act(() => {
-      expect(reportStorageError(new DOMException('The quota has been exceeded.', 'QuotaExceededError'))).toBe(true);
+      expect(
+        reportStorageError(new DOMException('The quota has been exceeded.', 'QuotaExceededError')),
+      ).toBe(true);
     });
     const banner = screen.getByRole('alert');
     expect(banner).toHaveTextContent(/storage quota reached/);
@@ -109,7 +127,9 @@ describe('storage errors are shown, not swallowed', () => {
 
   it('catches a storage failure nobody handled (unhandled promise rejection)', () => {
     render(<StorageErrorBanner />);
-    const reason = Object.assign(new Error('Database has been closed'), { name: 'DatabaseClosedError' });
+    const reason = Object.assign(new Error('Database has been closed'), {
+      name: 'DatabaseClosedError',
+    });
     const event = new Event('unhandledrejection', { cancelable: true }) as PromiseRejectionEvent;
     Object.defineProperty(event, 'reason', { value: reason });
     act(() => {

@@ -12,8 +12,10 @@ import { candidatesRepo } from '@/persistence/candidates-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { exportProjectText } from '@/persistence/import-project';
 
-const fixture = (name: string) => readFileSync(resolve(process.cwd(), 'fixtures/files', name), 'utf8');
-const fileOf = (text: string, name = 'project.saltsmith.json') => new File([text], name, { type: 'application/json' });
+const fixture = (name: string) =>
+  readFileSync(resolve(process.cwd(), 'fixtures/files', name), 'utf8');
+const fileOf = (text: string, name = 'project.saltsmith.json') =>
+  new File([text], name, { type: 'application/json' });
 
 async function snapshot() {
   const db = getDb();
@@ -39,7 +41,10 @@ describe('import a project file', () => {
     await candidatesRepo.add(p.id, 'chloride');
     const before = await snapshot();
     render(<ImportProjectButton replaceable={{ id: p.id, name: p.name }} />);
-    await userEvent.upload(screen.getByLabelText('Import a project file'), fileOf(fixture('project-truncated.saltsmith.json'), 'cut.json'));
+    await userEvent.upload(
+      screen.getByLabelText('Import a project file'),
+      fileOf(fixture('project-truncated.saltsmith.json'), 'cut.json'),
+    );
     const alert = await screen.findByRole('alert');
     expect(alert).toHaveTextContent('“cut.json” was not imported.');
     expect(alert).toHaveTextContent(/cut off/);
@@ -50,14 +55,20 @@ describe('import a project file', () => {
 
   it('lists every problem of an invalid file', async () => {
     render(<ImportProjectButton />);
-    await userEvent.upload(screen.getByLabelText('Import a project file'), fileOf(fixture('project-invalid.saltsmith.json')));
+    await userEvent.upload(
+      screen.getByLabelText('Import a project file'),
+      fileOf(fixture('project-invalid.saltsmith.json')),
+    );
     expect(await screen.findByRole('alert')).toHaveTextContent(/project\.compound\.pKas\.0\.value/);
   });
 
   it('shows what the file holds, then imports it as a new project', async () => {
     const onImported = vi.fn();
     render(<ImportProjectButton onImported={onImported} />);
-    await userEvent.upload(screen.getByLabelText('Import a project file'), fileOf(fixture('project-v1.saltsmith.json')));
+    await userEvent.upload(
+      screen.getByLabelText('Import a project file'),
+      fileOf(fixture('project-v1.saltsmith.json')),
+    );
     const review = await screen.findByRole('region', { name: 'File to import' });
     expect(review).toHaveTextContent('Demorazine screen (version-1 file)');
     expect(review).toHaveTextContent('3 shortlisted, 2 measurements, 0 custom ions');
@@ -72,16 +83,27 @@ describe('import a project file', () => {
     const p = await projectsRepo.create('Keep me?', DEMO_COMPOUND);
     await candidatesRepo.add(p.id, 'tosylate');
     render(<ImportProjectButton replaceable={{ id: p.id, name: p.name }} />);
-    await userEvent.upload(screen.getByLabelText('Import a project file'), fileOf(fixture('project-v1.saltsmith.json')));
+    await userEvent.upload(
+      screen.getByLabelText('Import a project file'),
+      fileOf(fixture('project-v1.saltsmith.json')),
+    );
     await userEvent.click(await screen.findByRole('button', { name: 'Replace “Keep me?”…' }));
-    expect(screen.getByRole('alertdialog', { name: 'Confirm replacement' })).toHaveTextContent('cannot be undone');
+    expect(screen.getByRole('alertdialog', { name: 'Confirm replacement' })).toHaveTextContent(
+      'cannot be undone',
+    );
     await userEvent.click(screen.getByRole('button', { name: 'No, keep it' }));
     expect((await candidatesRepo.listForProject(p.id)).map((c) => c.ionId)).toEqual(['tosylate']);
 
     await userEvent.click(screen.getByRole('button', { name: 'Replace “Keep me?”…' }));
     await userEvent.click(screen.getByRole('button', { name: 'Yes, replace “Keep me?”' }));
-    expect(await screen.findByText(/Replaced “Demorazine screen \(version-1 file\)”/)).toBeInTheDocument();
-    expect((await candidatesRepo.listForProject(p.id)).map((c) => c.ionId)).toEqual(['chloride', 'sulfate', 'mesylate']);
+    expect(
+      await screen.findByText(/Replaced “Demorazine screen \(version-1 file\)”/),
+    ).toBeInTheDocument();
+    expect((await candidatesRepo.listForProject(p.id)).map((c) => c.ionId)).toEqual([
+      'chloride',
+      'sulfate',
+      'mesylate',
+    ]);
   });
 });
 
@@ -95,10 +117,14 @@ describe('export a project file', () => {
       return 'blob:test';
     });
     Object.assign(URL, { createObjectURL, revokeObjectURL: vi.fn() });
-    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+    const click = vi
+      .spyOn(HTMLAnchorElement.prototype, 'click')
+      .mockImplementation(() => undefined);
     render(<ExportProjectButton projectId={p.id} projectName={p.name} />);
     await userEvent.click(screen.getByRole('button', { name: 'Export to file' }));
-    expect(await screen.findByRole('status')).toHaveTextContent(/Saved as To-export-\d{4}-\d{2}-\d{2}\.saltsmith\.json/);
+    expect(await screen.findByRole('status')).toHaveTextContent(
+      /Saved as To-export-\d{4}-\d{2}-\d{2}\.saltsmith\.json/,
+    );
     expect(click).toHaveBeenCalledTimes(1);
     const text = await (blob as unknown as Blob).text();
     const expected = JSON.parse(await exportProjectText(p.id)) as { createdAt: string };

@@ -21,7 +21,13 @@ describe('new-project form validation', () => {
     expect(r.errors.pKa).toMatch(/pKa/);
   });
   it('rejects a pKa outside −10…20, a malformed formula and a base with a negative charge', () => {
-    const r = newProjectFromDraft({ ...EMPTY_NEW_PROJECT, name: 'x', formula: 'c6h6', pKa: '25', ionCharge: '-1' });
+    const r = newProjectFromDraft({
+      ...EMPTY_NEW_PROJECT,
+      name: 'x',
+      formula: 'c6h6',
+      pKa: '25',
+      ionCharge: '-1',
+    });
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.errors.pKa).toBe('pKa must be at most 20');
@@ -29,7 +35,12 @@ describe('new-project form validation', () => {
     expect(r.errors.ionCharge).toMatch(/cation/);
   });
   it('accepts a SMILES alone and leaves unmeasured properties empty', () => {
-    const r = newProjectFromDraft({ ...EMPTY_NEW_PROJECT, name: 'Amine 1', smiles: 'CCN(CC)CC', pKa: '10,7' });
+    const r = newProjectFromDraft({
+      ...EMPTY_NEW_PROJECT,
+      name: 'Amine 1',
+      smiles: 'CCN(CC)CC',
+      pKa: '10,7',
+    });
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.compound.pKas[0]?.value).toBe(10.7);
@@ -74,14 +85,18 @@ describe('Projects area', () => {
 
     await user.click(screen.getByRole('button', { name: 'Archive Amine one (copy)' }));
     expect(await screen.findByText(/Project archived/)).toBeInTheDocument();
-    await waitFor(() => expect(screen.queryByRole('heading', { name: 'Amine one (copy)' })).not.toBeInTheDocument());
+    await waitFor(() =>
+      expect(screen.queryByRole('heading', { name: 'Amine one (copy)' })).not.toBeInTheDocument(),
+    );
     await user.click(screen.getByLabelText(/Show archived/));
     const archived = await screen.findByRole('article', { name: 'Amine one (copy)' });
     expect(within(archived).getByText('archived')).toBeInTheDocument();
 
     await user.click(screen.getByRole('button', { name: 'Delete Amine one' }));
     expect(await screen.findByText(/Deleted/)).toBeInTheDocument();
-    await waitFor(() => expect(screen.queryByRole('heading', { name: 'Amine one' })).not.toBeInTheDocument());
+    await waitFor(() =>
+      expect(screen.queryByRole('heading', { name: 'Amine one' })).not.toBeInTheDocument(),
+    );
     await user.click(screen.getByRole('button', { name: 'Undo delete' }));
     expect(await screen.findByRole('heading', { name: 'Amine one' })).toBeInTheDocument();
   });

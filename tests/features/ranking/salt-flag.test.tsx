@@ -15,7 +15,12 @@ import { useRankingViewStore } from '@/stores/ranking-view-store';
 describe('Ranking: the likely-poorly-soluble flag is about the salt’s own solubility', () => {
   beforeEach(async () => {
     await resetDbForTests();
-    useRankingViewStore.setState({ sortKey: 'rank', sortDir: 'asc', chartIds: null, focusCandidateId: null });
+    useRankingViewStore.setState({
+      sortKey: 'rank',
+      sortDir: 'asc',
+      chartIds: null,
+      focusCandidateId: null,
+    });
   });
 
   it('flags the salt that cannot carry the dose in 250 mL and not the one that can', async () => {
@@ -24,16 +29,32 @@ describe('Ranking: the likely-poorly-soluble flag is about the salt’s own solu
     await candidatesRepo.add(project.id, 'chloride');
     await candidatesRepo.add(project.id, 'napsylate');
     const candidates = await candidatesRepo.listForProject(project.id);
-    const probe = await computeProjectScreening({ project, candidates, measurements: [], customIons: [] });
-    const ffOf = (ion: string) => probe.screen.rows.find((r) => r.counterIonId === ion)!.saltWaterSolubility!.mgPerMlAsFreeForm;
+    const probe = await computeProjectScreening({
+      project,
+      candidates,
+      measurements: [],
+      customIons: [],
+    });
+    const ffOf = (ion: string) =>
+      probe.screen.rows.find((r) => r.counterIonId === ion)!.saltWaterSolubility!.mgPerMlAsFreeForm;
     const [hcl, nap] = [ffOf('chloride'), ffOf('napsylate')];
     expect(nap).toBeLessThan(hcl); // the aromatic sulfonate is estimated less soluble
     const doseMg = 250 * Math.sqrt(hcl * nap);
-    await projectsRepo.updateCompound(project.id, { ...compound, doseMg: Number(doseMg.toPrecision(6)) });
+    await projectsRepo.updateCompound(project.id, {
+      ...compound,
+      doseMg: Number(doseMg.toPrecision(6)),
+    });
 
     render(<RankingArea project={(await projectsRepo.get(project.id))!} />);
-    const table = await screen.findByRole('table', { name: /Ranked candidates/ }, { timeout: 15000 });
-    const rowOf = (name: RegExp) => within(table).getAllByRole('row').find((r) => name.test(r.textContent ?? ''))!;
+    const table = await screen.findByRole(
+      'table',
+      { name: /Ranked candidates/ },
+      { timeout: 15000 },
+    );
+    const rowOf = (name: RegExp) =>
+      within(table)
+        .getAllByRole('row')
+        .find((r) => name.test(r.textContent ?? ''))!;
     expect(rowOf(/napsylate/i).textContent).toMatch(/likely poorly soluble salt/);
     expect(rowOf(/chloride/i).textContent).not.toMatch(/likely poorly soluble salt/);
     expect(within(table).getByRole('columnheader', { name: /Salt in water/ })).toBeInTheDocument();

@@ -5,7 +5,11 @@ import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
 import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
-import { projectSettingsSchema, type CandidateRecord, type ProjectRecord } from '@/persistence/records';
+import {
+  projectSettingsSchema,
+  type CandidateRecord,
+  type ProjectRecord,
+} from '@/persistence/records';
 
 // The fictional demo compound (invented numbers) only drives the pipeline here: the assertions check
 // structure and consistency between sheet and CSV, never a model's value.
@@ -20,21 +24,34 @@ const project: ProjectRecord = {
   compound: DEMO_COMPOUND,
   settings: projectSettingsSchema.parse({}),
 };
-const candidates: CandidateRecord[] = [...DEMO_SHORTLIST, 'ion_deleted-in-house'].map((ionId, order) => ({
-  id: `cand_${order}`,
-  schemaVersion: 1,
-  projectId: project.id,
-  ionId,
-  drugPerSalt: ionId === 'sulfate' ? 2 : 1,
-  counterIonPerSalt: 1,
-  hydrateWater: 0,
-  addedAt: '2026-12-01T00:00:00.000Z',
-  order,
-}));
+const candidates: CandidateRecord[] = [...DEMO_SHORTLIST, 'ion_deleted-in-house'].map(
+  (ionId, order) => ({
+    id: `cand_${order}`,
+    schemaVersion: 1,
+    projectId: project.id,
+    ionId,
+    drugPerSalt: ionId === 'sulfate' ? 2 : 1,
+    counterIonPerSalt: 1,
+    hydrateWater: 0,
+    addedAt: '2026-12-01T00:00:00.000Z',
+    order,
+  }),
+);
 
 async function model() {
-  const screening = await computeProjectScreening({ project, candidates, measurements: [], customIons: [] });
-  return buildSheetModel({ project, screening, validation: validationReport(), generatedAt: '2026-12-01T12:00:00.000Z', appVersion: 'test' });
+  const screening = await computeProjectScreening({
+    project,
+    candidates,
+    measurements: [],
+    customIons: [],
+  });
+  return buildSheetModel({
+    project,
+    screening,
+    validation: validationReport(),
+    generatedAt: '2026-12-01T12:00:00.000Z',
+    appVersion: 'test',
+  });
 }
 
 describe('sheet model from a real screening', () => {
@@ -44,7 +61,8 @@ describe('sheet model from a real screening', () => {
     const ranked = m.rows.filter((r) => r.rank !== null);
     expect(ranked.map((r) => r.rank)).toEqual(ranked.map((_, i) => i + 1));
     const scores = ranked.map((r) => r.cells.score?.value as number);
-    for (let i = 1; i < scores.length; i++) expect(scores[i]).toBeLessThanOrEqual(scores[i - 1] as number);
+    for (let i = 1; i < scores.length; i++)
+      expect(scores[i]).toBeLessThanOrEqual(scores[i - 1] as number);
     const last = m.rows[m.rows.length - 1];
     expect(last?.rank).toBeNull();
     expect(last?.reasons.join(' ')).toMatch(/not in the counter-ion library/);
@@ -71,7 +89,12 @@ describe('sheet model from a real screening', () => {
   });
 
   it('shows rank robustness where it was computed, as a percentage, and says how', async () => {
-    const screening = await computeProjectScreening({ project, candidates, measurements: [], customIons: [] });
+    const screening = await computeProjectScreening({
+      project,
+      candidates,
+      measurements: [],
+      customIons: [],
+    });
     const m = buildSheetModel({
       project,
       screening,
@@ -80,7 +103,11 @@ describe('sheet model from a real screening', () => {
       appVersion: 'test',
       robustness: { results: [{ id: 'cand_0', pTop3: 0.25 }], iterations: 2000, seed: 7 },
     });
-    expect(m.rows.find((r) => r.id === 'cand_0')?.cells.pTop3).toEqual({ value: 25, origin: 'estimated', uncertainty: null });
+    expect(m.rows.find((r) => r.id === 'cand_0')?.cells.pTop3).toEqual({
+      value: 25,
+      origin: 'estimated',
+      uncertainty: null,
+    });
     expect(m.rows.find((r) => r.id === 'cand_1')?.cells.pTop3?.value).toBeNull();
     expect(m.notes.some((n) => n.includes('2000 Monte Carlo draws (seed 7)'))).toBe(true);
     expect((await model()).notes.some((n) => n.startsWith('P(top 3) was not computed'))).toBe(true);
@@ -88,7 +115,11 @@ describe('sheet model from a real screening', () => {
 
   it('writes the same numbers to the CSV, column by column', async () => {
     const m = await model();
-    const parsed = Papa.parse<unknown[]>(sheetToCsv(m), { dynamicTyping: true, delimiter: ',', newline: '\r\n' });
+    const parsed = Papa.parse<unknown[]>(sheetToCsv(m), {
+      dynamicTyping: true,
+      delimiter: ',',
+      newline: '\r\n',
+    });
     expect(parsed.errors).toEqual([]);
     const header = parsed.data[0] as string[];
     expect(header).toEqual(csvHeader(m.columns));

@@ -14,7 +14,13 @@ const HYPERLINK = '=HYPERLINK("http://x","y")';
 function model(): SheetModel {
   return {
     projectName: `Project ${IMG}`,
-    compound: { name: `Demorazine ${IMG}`, facts: [{ label: 'pKa (base)', value: 7.8 }, { label: 'Dose', value: 200, unit: 'mg' }] },
+    compound: {
+      name: `Demorazine ${IMG}`,
+      facts: [
+        { label: 'pKa (base)', value: 7.8 },
+        { label: 'Dose', value: 200, unit: 'mg' },
+      ],
+    },
     generatedAt: '2026-12-01T12:00:00.000Z',
     appVersion: '0.1.0',
     settings: [{ label: 'Gastric chloride', value: 0.12, unit: 'mol/L' }],
@@ -25,10 +31,39 @@ function model(): SheetModel {
       { key: 'solH', label: 'ΔH_sol', unit: 'kJ/mol', kind: 'number', group: 'energetics' },
     ],
     rows: [
-      { id: 'r1', rank: 1, label: HYPERLINK, cells: { score: { value: 0.8 }, phMax: { value: 4.56, uncertainty: 0.31, origin: 'estimated' }, solH: { value: 12.5, origin: 'measured' } }, flags: ['disproportionation risk'], reasons: ['low mass cost'] },
-      { id: 'r2', rank: 2, label: IMG, cells: { phMax: { value: null }, solH: { value: -30, uncertainty: 40, origin: 'estimated' } }, flags: [], reasons: [] },
+      {
+        id: 'r1',
+        rank: 1,
+        label: HYPERLINK,
+        cells: {
+          score: { value: 0.8 },
+          phMax: { value: 4.56, uncertainty: 0.31, origin: 'estimated' },
+          solH: { value: 12.5, origin: 'measured' },
+        },
+        flags: ['disproportionation risk'],
+        reasons: ['low mass cost'],
+      },
+      {
+        id: 'r2',
+        rank: 2,
+        label: IMG,
+        cells: {
+          phMax: { value: null },
+          solH: { value: -30, uncertainty: 40, origin: 'estimated' },
+        },
+        flags: [],
+        reasons: [],
+      },
     ],
-    confidence: [{ label: 'Kapustinskii, alkali halides', n: 20, meanAbsPercentError: 2.345, maxAbsPercentError: 6.1, signedBiasPercent: -1.2 }],
+    confidence: [
+      {
+        label: 'Kapustinskii, alkali halides',
+        n: 20,
+        meanAbsPercentError: 2.345,
+        maxAbsPercentError: 6.1,
+        signedBiasPercent: -1.2,
+      },
+    ],
     notes: ['Activities taken as concentrations.'],
     solubility: null,
     energyCycles: [],
@@ -40,27 +75,38 @@ describe('comparison sheet', () => {
     render(<ComparisonSheet model={model()} />);
     expect(screen.getByTestId('sheet-compound')).toHaveTextContent(`Demorazine ${IMG}`);
     expect(screen.getByText(/Saltsmith 0\.1\.0/)).toHaveTextContent('1 December 2026');
-    expect(screen.getByRole('table', { name: 'Screening settings' })).toHaveTextContent('Gastric chloride0.12 mol/L');
+    expect(screen.getByRole('table', { name: 'Screening settings' })).toHaveTextContent(
+      'Gastric chloride0.12 mol/L',
+    );
     expect(screen.getByRole('table', { name: 'Ranking weights' })).toHaveTextContent('Solubility2');
     expect(screen.getByRole('columnheader', { name: /^ΔH_sol ?\(kJ\/mol\)$/ })).toBeInTheDocument();
     const solubility = screen.getByRole('table', { name: /^Solubility across/ });
     const energetics = screen.getByRole('table', { name: /^Enthalpies/ });
     const formation = screen.getByRole('table', { name: /^Salt formation/ });
-    const rowOf = (table: HTMLElement, name: string) => within(table).getByRole('rowheader', { name }).closest('tr') as HTMLElement;
+    const rowOf = (table: HTMLElement, name: string) =>
+      within(table).getByRole('rowheader', { name }).closest('tr') as HTMLElement;
     const first = rowOf(solubility, HYPERLINK);
     expect(within(first).getByText(/4\.56 ± 0\.31/)).toBeInTheDocument();
     expect(within(first).getByTitle('model estimate')).toBeInTheDocument();
-    expect(within(rowOf(energetics, HYPERLINK)).getByTitle('measured on the bench')).toBeInTheDocument();
+    expect(
+      within(rowOf(energetics, HYPERLINK)).getByTitle('measured on the bench'),
+    ).toBeInTheDocument();
     expect(rowOf(formation, HYPERLINK)).toHaveTextContent('disproportionation risk');
     expect(first.querySelector('[data-col="phMax"]')?.getAttribute('data-value')).toBe('4.56');
     // Every candidate appears in every table, in rank order.
     for (const t of [formation, solubility, energetics]) {
-      expect(within(t).getAllByRole('rowheader').map((h) => h.textContent)).toEqual([HYPERLINK, IMG]);
+      expect(
+        within(t)
+          .getAllByRole('rowheader')
+          .map((h) => h.textContent),
+      ).toEqual([HYPERLINK, IMG]);
     }
     expect(screen.getByText('low mass cost')).toBeInTheDocument();
     const cautions = screen.getByTestId('sheet-cautions');
     for (const line of CAUTION_LINES) expect(cautions).toHaveTextContent(line);
-    expect(screen.getByRole('complementary', { name: 'Cautions' })).toHaveTextContent('Screening estimates only.');
+    expect(screen.getByRole('complementary', { name: 'Cautions' })).toHaveTextContent(
+      'Screening estimates only.',
+    );
   });
 
   it('renders hostile names as inert text (no element is created from them)', () => {

@@ -39,7 +39,11 @@ function model(label = 'Demorazine mesylate (1:1)'): SheetModel {
         id: 'b',
         rank: 2,
         label: 'Demorazine chloride (1:1)',
-        cells: { dpka: { value: 0.1 + 0.2, origin: 'input' }, solH: { value: null }, verdict: { value: null } },
+        cells: {
+          dpka: { value: 0.1 + 0.2, origin: 'input' },
+          solH: { value: null },
+          verdict: { value: null },
+        },
         flags: [],
         reasons: [],
       },
@@ -52,25 +56,50 @@ function model(label = 'Demorazine mesylate (1:1)'): SheetModel {
 }
 
 function parse(csv: string): unknown[][] {
-  const out = Papa.parse<unknown[]>(csv, { dynamicTyping: true, skipEmptyLines: false, delimiter: ',', newline: '\r\n' });
+  const out = Papa.parse<unknown[]>(csv, {
+    dynamicTyping: true,
+    skipEmptyLines: false,
+    delimiter: ',',
+    newline: '\r\n',
+  });
   expect(out.errors).toEqual([]);
   return out.data;
 }
 
 describe('formula neutralisation (OWASP "CSV Injection")', () => {
   // OWASP CSV Injection: cells beginning with =, +, -, @, tab (0x09) or carriage return (0x0D).
-  it.each(['=1+1', '+1', '-1+2', '@SUM(A1)', '\t=1', '\r=1', HYPERLINK])('prefixes a single quote to %j', (text) => {
-    expect(neutralizeCsvText(text)).toBe(`'${text}`);
-  });
+  it.each(['=1+1', '+1', '-1+2', '@SUM(A1)', '\t=1', '\r=1', HYPERLINK])(
+    'prefixes a single quote to %j',
+    (text) => {
+      expect(neutralizeCsvText(text)).toBe(`'${text}`);
+    },
+  );
 
   it('also catches U+2212 minus, full-width forms and leading spaces before a trigger (our hardening)', () => {
-    for (const t of ['\u2212 1', '\uFF1D1', '\uFF0B1', '\uFF0D1', '\uFF201', '  =1+1', '\u00A0@x']) {
+    for (const t of [
+      '\u2212 1',
+      '\uFF1D1',
+      '\uFF0B1',
+      '\uFF0D1',
+      '\uFF201',
+      '  =1+1',
+      '\u00A0@x',
+    ]) {
       expect(isFormulaLike(t)).toBe(true);
     }
   });
 
   it('leaves ordinary text alone', () => {
-    for (const t of ['', 'Mesylate', 'salt expected', '1:1', 'a=b', "'quoted", ' plain', '3-methyl']) {
+    for (const t of [
+      '',
+      'Mesylate',
+      'salt expected',
+      '1:1',
+      'a=b',
+      "'quoted",
+      ' plain',
+      '3-methyl',
+    ]) {
       expect(neutralizeCsvText(t)).toBe(t);
     }
   });
@@ -103,15 +132,41 @@ describe('comparison CSV', () => {
       'Reasons',
     ]);
     expect(csvHeader(model().columns)).toHaveLength(11);
-    expect(rows[1]).toEqual([1, 'Demorazine mesylate (1:1)', 9.7, 0.3, 'input', -12.3457, 25, 'estimated', 'salt expected', "'-low pH_max", 'large ΔpKa; light counter-ion, "cheap"']);
+    expect(rows[1]).toEqual([
+      1,
+      'Demorazine mesylate (1:1)',
+      9.7,
+      0.3,
+      'input',
+      -12.3457,
+      25,
+      'estimated',
+      'salt expected',
+      "'-low pH_max",
+      'large ΔpKa; light counter-ion, "cheap"',
+    ]);
     // Float noise is rounded away (6 significant digits); missing values are empty cells.
-    expect(rows[2]).toEqual([2, 'Demorazine chloride (1:1)', 0.3, null, 'input', null, null, null, null, null, null]);
+    expect(rows[2]).toEqual([
+      2,
+      'Demorazine chloride (1:1)',
+      0.3,
+      null,
+      'input',
+      null,
+      null,
+      null,
+      null,
+      null,
+      null,
+    ]);
   });
 
   it('writes numbers bare and text quoted, with CRLF line ends (RFC 4180 §2)', () => {
     const csv = sheetToCsv(model());
     const lines = csv.split('\r\n');
-    expect(lines[1]?.startsWith('1,"Demorazine mesylate (1:1)",9.7,0.3,"input",-12.3457,25,')).toBe(true);
+    expect(lines[1]?.startsWith('1,"Demorazine mesylate (1:1)",9.7,0.3,"input",-12.3457,25,')).toBe(
+      true,
+    );
     // RFC 4180 §2 rule 7: a double quote inside a quoted field is doubled.
     expect(lines[1]).toContain('"large ΔpKa; light counter-ion, ""cheap"""');
     expect(csv.includes('\n') && !/[^\r]\n/.test(csv)).toBe(true);
@@ -139,6 +194,8 @@ describe('comparison CSV', () => {
   });
 
   it('names the file after the project and date', () => {
-    expect(sheetCsvFileName('=cmd|"/c calc"!A1', '2026-12-01T00:00:00Z')).toBe('cmd-c-calc-A1-comparison-2026-12-01.csv');
+    expect(sheetCsvFileName('=cmd|"/c calc"!A1', '2026-12-01T00:00:00Z')).toBe(
+      'cmd-c-calc-A1-comparison-2026-12-01.csv',
+    );
   });
 });

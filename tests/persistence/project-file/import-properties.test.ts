@@ -28,7 +28,8 @@ type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
 function paths(v: Json, at: (string | number)[] = []): (string | number)[][] {
   const out: (string | number)[][] = [at];
   if (Array.isArray(v)) v.forEach((x, i) => out.push(...paths(x, [...at, i])));
-  else if (v !== null && typeof v === 'object') for (const [k, x] of Object.entries(v)) out.push(...paths(x, [...at, k]));
+  else if (v !== null && typeof v === 'object')
+    for (const [k, x] of Object.entries(v)) out.push(...paths(x, [...at, k]));
   return out;
 }
 
@@ -54,7 +55,9 @@ beforeAll(async () => {
 });
 
 const damaged = () =>
-  fc.tuple(fc.nat(), fc.jsonValue({ maxDepth: 3 })).map(([i, value]) => replaceAt(valid, allPaths[i % allPaths.length]!, value as Json));
+  fc
+    .tuple(fc.nat(), fc.jsonValue({ maxDepth: 3 }))
+    .map(([i, value]) => replaceAt(valid, allPaths[i % allPaths.length]!, value as Json));
 
 describe('project-file import under random damage (fast-check, fixed seed)', () => {
   it('reading: a valid file or a ProjectFileError with a message, nothing else (3000 runs)', () => {
@@ -74,7 +77,12 @@ describe('project-file import under random damage (fast-check, fixed seed)', () 
 
   it('importing: a refused file leaves the database untouched; an accepted one stores only valid records (300 runs)', async () => {
     const db = getDb();
-    const snapshot = async () => JSON.stringify(await Promise.all([db.projects, db.candidates, db.measurements, db.customIons].map((t) => t.toArray())));
+    const snapshot = async () =>
+      JSON.stringify(
+        await Promise.all(
+          [db.projects, db.candidates, db.measurements, db.customIons].map((t) => t.toArray()),
+        ),
+      );
     await fc.assert(
       fc.asyncProperty(damaged(), async (doc) => {
         const before = await snapshot();

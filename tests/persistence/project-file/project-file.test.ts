@@ -3,9 +3,17 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import fc from 'fast-check';
 import { inHouseIonPayload } from '../../support/in-house-ion';
-import { PROJECT_FILE_FORMAT, PROJECT_FILE_MAX_BYTES, PROJECT_FILE_VERSION } from '@/persistence/project-file/format';
+import {
+  PROJECT_FILE_FORMAT,
+  PROJECT_FILE_MAX_BYTES,
+  PROJECT_FILE_VERSION,
+} from '@/persistence/project-file/format';
 import { ProjectFileError } from '@/persistence/project-file/errors';
-import { buildProjectFile, serializeProjectFile, type ProjectBundle } from '@/persistence/project-file/build';
+import {
+  buildProjectFile,
+  serializeProjectFile,
+  type ProjectBundle,
+} from '@/persistence/project-file/build';
 import { looksTruncated } from '@/persistence/project-file/truncation';
 import { parseProjectFileText, restoreProjectFile } from '@/persistence/project-file/restore';
 import { projectFileName } from '@/persistence/project-file/file-name';
@@ -13,7 +21,8 @@ import { DEMO_COMPOUND } from '@/persistence/demo-project';
 import { projectSettingsSchema } from '@/persistence/records';
 
 /** Fixtures under fixtures/files (vitest runs from the repository root). */
-const fixture = (name: string) => readFileSync(resolve(process.cwd(), 'fixtures/files', name), 'utf8');
+const fixture = (name: string) =>
+  readFileSync(resolve(process.cwd(), 'fixtures/files', name), 'utf8');
 
 function refusal(text: string): ProjectFileError {
   try {
@@ -40,14 +49,54 @@ function bundle(): ProjectBundle {
       settings: projectSettingsSchema.parse({ extra: { weights: { solubility: 2 } } }),
     },
     candidates: [
-      { id: 'cand_b', schemaVersion: 1, projectId: 'prj_1', ionId: 'sulfate', drugPerSalt: 2, counterIonPerSalt: 1, hydrateWater: 0, addedAt: '2026-11-01T10:01:00.000Z', order: 1 },
-      { id: 'cand_a', schemaVersion: 1, projectId: 'prj_1', ionId: 'ion_x', drugPerSalt: 1, counterIonPerSalt: 1, hydrateWater: 2, addedAt: '2026-11-01T10:00:30.000Z', order: 0 },
+      {
+        id: 'cand_b',
+        schemaVersion: 1,
+        projectId: 'prj_1',
+        ionId: 'sulfate',
+        drugPerSalt: 2,
+        counterIonPerSalt: 1,
+        hydrateWater: 0,
+        addedAt: '2026-11-01T10:01:00.000Z',
+        order: 1,
+      },
+      {
+        id: 'cand_a',
+        schemaVersion: 1,
+        projectId: 'prj_1',
+        ionId: 'ion_x',
+        drugPerSalt: 1,
+        counterIonPerSalt: 1,
+        hydrateWater: 2,
+        addedAt: '2026-11-01T10:00:30.000Z',
+        order: 0,
+      },
     ],
     measurements: [
-      { id: 'meas_1', schemaVersion: 1, projectId: 'prj_1', candidateId: 'cand_a', kind: 'solubility', value: 1.2, unit: 'mg/mL', ph: 1.2, temperatureK: 310.15, medium: 'SGF', text: '', recordedAt: '2026-11-03T00:00:00.000Z' },
+      {
+        id: 'meas_1',
+        schemaVersion: 1,
+        projectId: 'prj_1',
+        candidateId: 'cand_a',
+        kind: 'solubility',
+        value: 1.2,
+        unit: 'mg/mL',
+        ph: 1.2,
+        temperatureK: 310.15,
+        medium: 'SGF',
+        text: '',
+        recordedAt: '2026-11-03T00:00:00.000Z',
+      },
     ],
     customIons: [
-      { id: 'ion_x', schemaVersion: 1, projectId: 'prj_1', overridesIonId: null, ion: inHouseIonPayload('ion_x'), updatedAt: '2026-11-01T00:00:00.000Z' },
+      {
+        id: 'ion_x',
+        schemaVersion: 1,
+        projectId: 'prj_1',
+        overridesIonId: null,
+        ion: inHouseIonPayload('ion_x'),
+        updatedAt: '2026-11-01T00:00:00.000Z',
+      },
     ],
   };
 }
@@ -71,13 +120,32 @@ describe('project file format (our own versioned JSON)', () => {
     expect(file.version).toBe(PROJECT_FILE_VERSION);
     expect(file.project.name).toBe('Demorazine screen (version-1 file)');
     expect(file.createdAt).toBe('2026-11-20T09:30:00.000Z');
-    expect(file.project.settings).toEqual({ gastricChlorideM: 0.12, microenvironmentPh: 6.5, temperatureC: 37, extra: {} });
-    expect(file.candidates.map((c) => [c.ionId, c.drugPerSalt, c.counterIonPerSalt, c.hydrateWater, c.order])).toEqual([
+    expect(file.project.settings).toEqual({
+      gastricChlorideM: 0.12,
+      microenvironmentPh: 6.5,
+      temperatureC: 37,
+      extra: {},
+    });
+    expect(
+      file.candidates.map((c) => [
+        c.ionId,
+        c.drugPerSalt,
+        c.counterIonPerSalt,
+        c.hydrateWater,
+        c.order,
+      ]),
+    ).toEqual([
       ['chloride', 1, 1, 0, 0],
       ['sulfate', 2, 1, 1, 1],
       ['mesylate', 1, 1, 0, 2],
     ]);
-    expect(file.measurements[0]).toMatchObject({ candidateId: 'c-1', kind: 'solubility', value: 1.8, ph: null, medium: '' });
+    expect(file.measurements[0]).toMatchObject({
+      candidateId: 'c-1',
+      kind: 'solubility',
+      value: 1.8,
+      ph: null,
+      medium: '',
+    });
     expect(file.customIons).toEqual([]);
   });
 
@@ -98,7 +166,9 @@ describe('project file format (our own versioned JSON)', () => {
     const e = refusal(fixture('project-invalid.saltsmith.json'));
     expect(e.code).toBe('invalid');
     expect(e.details.some((d) => d.startsWith('project.compound.pKas.0.value'))).toBe(true);
-    expect(e.details.some((d) => d.startsWith('measurements.0.candidateId') && d.includes('c-404'))).toBe(true);
+    expect(
+      e.details.some((d) => d.startsWith('measurements.0.candidateId') && d.includes('c-404')),
+    ).toBe(true);
   });
 
   it('refuses text that is not JSON, JSON of another format, an empty file and a huge file', () => {
@@ -111,8 +181,12 @@ describe('project file format (our own versioned JSON)', () => {
   });
 
   it('refuses a version that is not a positive integer', () => {
-    expect(() => restoreProjectFile({ format: PROJECT_FILE_FORMAT, version: '2' })).toThrow(/no valid "version"/);
-    expect(() => restoreProjectFile({ format: PROJECT_FILE_FORMAT, version: 1.5 })).toThrow(ProjectFileError);
+    expect(() => restoreProjectFile({ format: PROJECT_FILE_FORMAT, version: '2' })).toThrow(
+      /no valid "version"/,
+    );
+    expect(() => restoreProjectFile({ format: PROJECT_FILE_FORMAT, version: 1.5 })).toThrow(
+      ProjectFileError,
+    );
   });
 
   it('refuses duplicate candidate ids', () => {

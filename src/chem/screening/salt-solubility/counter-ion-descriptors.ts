@@ -46,12 +46,19 @@ export function withoutHydroxide(parentSmiles: string): string {
  * that the core never loads it statically (the app and the CLI load it on demand).
  * @throws ChemInputError (field `smiles`) for an unparsable SMILES.
  */
-export function counterIonDescriptorsFromSmiles(ocl: Ocl, parentSmiles: string): CounterIonDescriptors {
+export function counterIonDescriptorsFromSmiles(
+  ocl: Ocl,
+  parentSmiles: string,
+): CounterIonDescriptors {
   let mol: InstanceType<Ocl['Molecule']>;
   try {
     mol = ocl.Molecule.fromSmiles(withoutHydroxide(parentSmiles));
   } catch (err) {
-    throw new ChemInputError('smiles', `cannot read the counter-ion's parent SMILES (${err instanceof Error ? err.message : String(err)})`, 'an OpenSMILES string of the neutral parent acid or base');
+    throw new ChemInputError(
+      'smiles',
+      `cannot read the counter-ion's parent SMILES (${err instanceof Error ? err.message : String(err)})`,
+      'an OpenSMILES string of the neutral parent acid or base',
+    );
   }
   const formula = mol.getMolecularFormula().formula;
   const inorganic = !/C(?![a-z])/.test(formula);
@@ -91,7 +98,11 @@ export interface CounterIonFromParent {
  * @throws ChemInputError (field `smiles`) for an unreadable SMILES or a parent whose drawn charge is
  * neither 0 nor `charge`.
  */
-export function counterIonFromParentSmiles(ocl: Ocl, parentSmiles: string, charge: number): CounterIonFromParent {
+export function counterIonFromParentSmiles(
+  ocl: Ocl,
+  parentSmiles: string,
+  charge: number,
+): CounterIonFromParent {
   const descriptors = counterIonDescriptorsFromSmiles(ocl, parentSmiles);
   const mol = ocl.Molecule.fromSmiles(parentSmiles);
   const parentFormula = mol.getMolecularFormula().formula;
@@ -112,7 +123,11 @@ export function counterIonFromParentSmiles(ocl: Ocl, parentSmiles: string, charg
   } else if (net === 0) {
     ionFormula = hillFormula(withHydrogens(el, charge, 'smiles'));
   } else {
-    throw new ChemInputError('smiles', `the structure carries charge ${net}, the counter-ion ${charge}`, 'the neutral parent acid or base, or the ion drawn with the same charge');
+    throw new ChemInputError(
+      'smiles',
+      `the structure carries charge ${net}, the counter-ion ${charge}`,
+      'the neutral parent acid or base, or the ion drawn with the same charge',
+    );
   }
   return { ionFormula, parentFormula, rings, descriptors };
 }
@@ -128,7 +143,11 @@ export function neutralParentSmiles(ocl: Ocl, ionSmiles: string): string {
   try {
     mol = ocl.Molecule.fromSmiles(ionSmiles);
   } catch (err) {
-    throw new ChemInputError('smiles', `cannot read the ion's SMILES (${err instanceof Error ? err.message : String(err)})`, 'an OpenSMILES string of the ion');
+    throw new ChemInputError(
+      'smiles',
+      `cannot read the ion's SMILES (${err instanceof Error ? err.message : String(err)})`,
+      'an OpenSMILES string of the ion',
+    );
   }
   for (let a = 0; a < mol.getAllAtoms(); a++) {
     const z = mol.getAtomicNo(a);

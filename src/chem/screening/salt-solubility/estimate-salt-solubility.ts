@@ -1,7 +1,11 @@
 import { STANDARD_TEMPERATURE_K } from '../../constants/physical';
 import { kelvinToCelsius } from '../../units/temperature';
 import type { Estimate } from '../../result';
-import { predictSaltSolubility, type FittedSaltSolubilityModel, type SaltSolubilityModelKind } from './fit-salt-solubility';
+import {
+  predictSaltSolubility,
+  type FittedSaltSolubilityModel,
+  type SaltSolubilityModelKind,
+} from './fit-salt-solubility';
 import { ridgeContributions } from './ridge-regression';
 import {
   featureRow,
@@ -12,7 +16,11 @@ import {
   type SaltSolubilityFeature,
   type SaltSolubilityInput,
 } from './salt-solubility-features';
-import { SALT_SOLUBILITY_FUSION_MODEL, SALT_SOLUBILITY_MODEL, SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K } from './salt-solubility-model.data';
+import {
+  SALT_SOLUBILITY_FUSION_MODEL,
+  SALT_SOLUBILITY_MODEL,
+  SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K,
+} from './salt-solubility-model.data';
 
 /**
  * The salt's own solubility in pure water, estimated before the salt exists: a ridge regression in
@@ -67,7 +75,11 @@ export interface SaltWaterSolubilityEstimate {
 /** A predictor moving the estimate by at least this much is named as a driver, decades (our choice). */
 export const DRIVER_THRESHOLD_DECADES = 0.15;
 
-const ALL_FEATURES: readonly SaltSolubilityFeature[] = [...SALT_SOLUBILITY_FEATURES, THERMO_SHIFT_FEATURE, IDEAL_SOLUBILITY_FEATURE];
+const ALL_FEATURES: readonly SaltSolubilityFeature[] = [
+  ...SALT_SOLUBILITY_FEATURES,
+  THERMO_SHIFT_FEATURE,
+  IDEAL_SOLUBILITY_FEATURE,
+];
 
 interface ShippedLiteral {
   readonly id: string;
@@ -84,7 +96,10 @@ interface ShippedLiteral {
   readonly nDrugs: number;
 }
 
-function asModel(s: ShippedLiteral): { model: FittedSaltSolubilityModel; features: SaltSolubilityFeature[] } {
+function asModel(s: ShippedLiteral): {
+  model: FittedSaltSolubilityModel;
+  features: SaltSolubilityFeature[];
+} {
   const features = s.featureNames.map((name) => {
     const f = ALL_FEATURES.find((x) => x.name === name);
     if (!f) throw new Error(`salt-solubility model: unknown predictor ${name}`);
@@ -108,10 +123,13 @@ function asModel(s: ShippedLiteral): { model: FittedSaltSolubilityModel; feature
 }
 
 const MAIN = asModel(SALT_SOLUBILITY_MODEL as ShippedLiteral);
-const FUSION = SALT_SOLUBILITY_FUSION_MODEL ? asModel(SALT_SOLUBILITY_FUSION_MODEL as ShippedLiteral) : null;
+const FUSION = SALT_SOLUBILITY_FUSION_MODEL
+  ? asModel(SALT_SOLUBILITY_FUSION_MODEL as ShippedLiteral)
+  : null;
 
 /** Cross-validated 1σ of the shipped models, decades. */
-export const SALT_SOLUBILITY_CV_RMSE_LOG10 = (SALT_SOLUBILITY_MODEL as ShippedLiteral).cvRmseLog10 ?? Number.NaN;
+export const SALT_SOLUBILITY_CV_RMSE_LOG10 =
+  (SALT_SOLUBILITY_MODEL as ShippedLiteral).cvRmseLog10 ?? Number.NaN;
 
 function driverFor(name: string, c: number): SolubilityDriverId | null {
   const up = c > 0;
@@ -144,18 +162,28 @@ export interface SaltSolubilityOptions {
   log10IntrinsicSigma?: number;
 }
 
-export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: SaltSolubilityOptions = {}): SaltWaterSolubilityEstimate {
-  const hasMelt = input.meltingPointK !== null && input.meltingPointK !== undefined && Number.isFinite(input.meltingPointK);
+export function estimateSaltWaterSolubility(
+  input: SaltSolubilityInput,
+  opts: SaltSolubilityOptions = {},
+): SaltWaterSolubilityEstimate {
+  const hasMelt =
+    input.meltingPointK !== null &&
+    input.meltingPointK !== undefined &&
+    Number.isFinite(input.meltingPointK);
   const useFusion = hasMelt && FUSION !== null;
   const chosen = useFusion ? FUSION! : MAIN;
-  const literal = (useFusion ? SALT_SOLUBILITY_FUSION_MODEL : SALT_SOLUBILITY_MODEL) as ShippedLiteral;
+  const literal = (
+    useFusion ? SALT_SOLUBILITY_FUSION_MODEL : SALT_SOLUBILITY_MODEL
+  ) as ShippedLiteral;
   const row = featureRow(input, chosen.features);
   let value = predictSaltSolubility(chosen.model, row, input.drug.log10IntrinsicM);
   const T = opts.temperatureK ?? STANDARD_TEMPERATURE_K;
   let crystalShift: number | null = null;
   if (hasMelt && !useFusion && SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K.length > 0) {
     const own = log10IdealMoleFraction(input, T);
-    const refs = SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K.map((tm) => log10IdealMoleFraction({ ...input, meltingPointK: tm, fusionEnthalpyKJPerMol: null }, T));
+    const refs = SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K.map((tm) =>
+      log10IdealMoleFraction({ ...input, meltingPointK: tm, fusionEnthalpyKJPerMol: null }, T),
+    );
     crystalShift = own - refs.reduce((s, v) => s + v, 0) / refs.length;
     value += crystalShift;
   }
@@ -163,7 +191,12 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
   // Contributions relative to the average training salt, decades (the centred fit: relative to zero).
   const contributions = ridgeContributions(ridge, row);
   const s0Index = ridge.featureNames.indexOf('drugLog10IntrinsicM');
-  const slopeS0 = chosen.model.kind === 'within-series' ? 1 : s0Index >= 0 ? ridge.coefficients[s0Index]! / ridge.featureScales[s0Index]! : 0;
+  const slopeS0 =
+    chosen.model.kind === 'within-series'
+      ? 1
+      : s0Index >= 0
+        ? ridge.coefficients[s0Index]! / ridge.featureScales[s0Index]!
+        : 0;
   const cv = literal.cvRmseLog10 ?? Number.NaN;
   const sigma = Math.sqrt(cv ** 2 + (slopeS0 * (opts.log10IntrinsicSigma ?? 0)) ** 2);
   const drivers: SolubilityDriver[] = [];
@@ -174,19 +207,28 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
     if (id) drivers.push({ id, decades: c });
   });
   if (crystalShift !== null && Math.abs(crystalShift) >= DRIVER_THRESHOLD_DECADES) {
-    drivers.push({ id: crystalShift < 0 ? 'high-melting-salt' : 'low-melting-salt', decades: crystalShift });
+    drivers.push({
+      id: crystalShift < 0 ? 'high-melting-salt' : 'low-melting-salt',
+      decades: crystalShift,
+    });
   }
   drivers.sort((a, b) => Math.abs(b.decades) - Math.abs(a.decades));
   const notes = [
     `ridge regression on ${literal.nSalts} published salts of ${literal.nDrugs} drugs; 1σ = leave-one-drug-out error ${cv.toFixed(2)} decades${opts.log10IntrinsicSigma ? ` combined with S₀'s ${opts.log10IntrinsicSigma.toFixed(2)}` : ''}`,
   ];
   if (crystalShift !== null) {
-    const dh = input.fusionEnthalpyKJPerMol != null ? `ΔH_fus ${input.fusionEnthalpyKJPerMol} kJ/mol (measured)` : "ΔH_fus from Walden's rule (ΔS_m 56.5 J/(mol·K); no DSC enthalpy entered)";
+    const dh =
+      input.fusionEnthalpyKJPerMol != null
+        ? `ΔH_fus ${input.fusionEnthalpyKJPerMol} kJ/mol (measured)`
+        : "ΔH_fus from Walden's rule (ΔS_m 56.5 J/(mol·K); no DSC enthalpy entered)";
     notes.push(
       `bench fusion data: T_m ${kelvinToCelsius(input.meltingPointK!).toFixed(1)} °C, ${dh}; Schröder–van Laar (ΔC_p = 0) crystal term ${crystalShift >= 0 ? '+' : ''}${crystalShift.toFixed(2)} decades against the typical published salt, applied with slope 1 (not cross-validated)`,
     );
   }
-  if (ridge.featureNames.includes('thermoShiftDecades') && (input.thermoShiftDecades === null || input.thermoShiftDecades === undefined)) {
+  if (
+    ridge.featureNames.includes('thermoShiftDecades') &&
+    (input.thermoShiftDecades === null || input.thermoShiftDecades === undefined)
+  ) {
     notes.push('no ΔH_sol for this salt: the thermochemical term is taken as the average');
   }
   return {
@@ -194,7 +236,9 @@ export function estimateSaltWaterSolubility(input: SaltSolubilityInput, opts: Sa
       value,
       uncertainty: sigma,
       method: useFusion ? 'salt-solubility-ridge-fusion' : 'salt-solubility-ridge',
-      sources: ['Saltsmith salt-solubility model (published series in fixtures/reference/salt-solubility.csv)'],
+      sources: [
+        'Saltsmith salt-solubility model (published series in fixtures/reference/salt-solubility.csv)',
+      ],
       notes,
     },
     origin: useFusion || crystalShift !== null ? 'model+fusion' : 'model',

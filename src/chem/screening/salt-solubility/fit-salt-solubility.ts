@@ -1,6 +1,15 @@
 import { fitRidge, predictRidge, type RidgeModel } from './ridge-regression';
-import { leastSolubleAmongLowestPredicted, rootMeanSquareError, spearmanRho } from './rank-statistics';
-import { featureRow, SALT_SOLUBILITY_FEATURES, type SaltSolubilityFeature, type SaltSolubilityInput } from './salt-solubility-features';
+import {
+  leastSolubleAmongLowestPredicted,
+  rootMeanSquareError,
+  spearmanRho,
+} from './rank-statistics';
+import {
+  featureRow,
+  SALT_SOLUBILITY_FEATURES,
+  type SaltSolubilityFeature,
+  type SaltSolubilityInput,
+} from './salt-solubility-features';
 
 /**
  * Fitting and judging the salt-solubility model. Pure functions: the script
@@ -90,8 +99,11 @@ export interface FittedSaltSolubilityModel {
   level: number;
 }
 
-
-export function predictSaltSolubility(m: FittedSaltSolubilityModel, row: readonly number[], log10IntrinsicM: number): number {
+export function predictSaltSolubility(
+  m: FittedSaltSolubilityModel,
+  row: readonly number[],
+  log10IntrinsicM: number,
+): number {
   if (m.kind === 'pooled') return predictRidge(m.ridge, row);
   return log10IntrinsicM + m.level + slopePart(m.ridge, row);
 }
@@ -99,7 +111,8 @@ export function predictSaltSolubility(m: FittedSaltSolubilityModel, row: readonl
 /** Σ βⱼ·xⱼ on the raw scale (the within-series fit has no intercept; the level carries it). */
 function slopePart(r: RidgeModel, row: readonly number[]): number {
   let y = 0;
-  for (let j = 0; j < r.coefficients.length; j++) y += (r.coefficients[j]! * row[j]!) / r.featureScales[j]!;
+  for (let j = 0; j < r.coefficients.length; j++)
+    y += (r.coefficients[j]! * row[j]!) / r.featureScales[j]!;
   return y;
 }
 
@@ -109,10 +122,24 @@ function groupBy<T>(xs: readonly T[], key: (x: T) => string): Map<string, T[]> {
   return m;
 }
 
-function fitOn(rows: readonly SaltSolubilityTrainingRow[], features: readonly SaltSolubilityFeature[], lambda: number, kind: SaltSolubilityModelKind = 'pooled'): FittedSaltSolubilityModel {
+function fitOn(
+  rows: readonly SaltSolubilityTrainingRow[],
+  features: readonly SaltSolubilityFeature[],
+  lambda: number,
+  kind: SaltSolubilityModelKind = 'pooled',
+): FittedSaltSolubilityModel {
   const names = features.map((f) => f.name);
   if (kind === 'pooled') {
-    return { kind, level: 0, ridge: fitRidge(names, rows.map((r) => featureRow(r.input, features)), rows.map((r) => r.log10DrugM), lambda) };
+    return {
+      kind,
+      level: 0,
+      ridge: fitRidge(
+        names,
+        rows.map((r) => featureRow(r.input, features)),
+        rows.map((r) => r.log10DrugM),
+        lambda,
+      ),
+    };
   }
   // Centre features and (log S − log S₀) within each drug; the drug-level predictors drop out.
   const x: number[][] = [];
@@ -134,17 +161,31 @@ function fitOn(rows: readonly SaltSolubilityTrainingRow[], features: readonly Sa
   const allRows = rows.map((r) => featureRow(r.input, features));
   const allMeans = names.map((_, j) => allRows.reduce((s, v) => s + v[j]!, 0) / allRows.length);
   const centred: RidgeModel = { ...ridge, intercept: 0, featureMeans: allMeans };
-  const offsets = series.map((g) => g.reduce((s, r) => s + r.log10DrugM - r.input.drug.log10IntrinsicM - slopePart(centred, featureRow(r.input, features)), 0) / g.length);
+  const offsets = series.map(
+    (g) =>
+      g.reduce(
+        (s, r) =>
+          s +
+          r.log10DrugM -
+          r.input.drug.log10IntrinsicM -
+          slopePart(centred, featureRow(r.input, features)),
+        0,
+      ) / g.length,
+  );
   return { kind, ridge: centred, level: offsets.reduce((s, v) => s + v, 0) / offsets.length };
 }
-
 
 function drugIds(rows: readonly SaltSolubilityTrainingRow[]): string[] {
   return [...new Set(rows.map((r) => r.drugId))].sort();
 }
 
 /** λ with the lowest LODO RMSE over `rows` (ties → the larger λ, the simpler model). */
-export function chooseLambda(rows: readonly SaltSolubilityTrainingRow[], features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES, grid: readonly number[] = RIDGE_LAMBDA_GRID, kind: SaltSolubilityModelKind = 'pooled'): number {
+export function chooseLambda(
+  rows: readonly SaltSolubilityTrainingRow[],
+  features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES,
+  grid: readonly number[] = RIDGE_LAMBDA_GRID,
+  kind: SaltSolubilityModelKind = 'pooled',
+): number {
   const ids = drugIds(rows);
   let best = grid[grid.length - 1]!;
   let bestErr = Number.POSITIVE_INFINITY;
@@ -156,7 +197,9 @@ export function chooseLambda(rows: readonly SaltSolubilityTrainingRow[], feature
       const test = rows.filter((r) => r.drugId === id);
       const m = fitOn(train, features, lambda, kind);
       for (const r of test) {
-        pred.push(predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM));
+        pred.push(
+          predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM),
+        );
         meas.push(r.log10DrugM);
       }
     }
@@ -170,7 +213,12 @@ export function chooseLambda(rows: readonly SaltSolubilityTrainingRow[], feature
 }
 
 /** Nested leave-one-drug-out cross-validation of the model, with today's anchor on the same folds. */
-export function crossValidateByDrug(rows: readonly SaltSolubilityTrainingRow[], features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES, grid: readonly number[] = RIDGE_LAMBDA_GRID, kind: SaltSolubilityModelKind = 'pooled'): CrossValidationReport {
+export function crossValidateByDrug(
+  rows: readonly SaltSolubilityTrainingRow[],
+  features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES,
+  grid: readonly number[] = RIDGE_LAMBDA_GRID,
+  kind: SaltSolubilityModelKind = 'pooled',
+): CrossValidationReport {
   const ids = drugIds(rows);
   const folds: DrugFoldResult[] = [];
   for (const id of ids) {
@@ -178,7 +226,9 @@ export function crossValidateByDrug(rows: readonly SaltSolubilityTrainingRow[], 
     const test = rows.filter((r) => r.drugId === id);
     const lambda = chooseLambda(train, features, grid, kind);
     const m = fitOn(train, features, lambda, kind);
-    const predicted = test.map((r) => predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM));
+    const predicted = test.map((r) =>
+      predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM),
+    );
     const measured = test.map((r) => r.log10DrugM);
     const anchor = test.map((r) => r.anchorLog10DrugM);
     folds.push({
@@ -205,17 +255,25 @@ export function crossValidateByDrug(rows: readonly SaltSolubilityTrainingRow[], 
     rmse: rootMeanSquareError(all('predicted'), all('measured')),
     anchorRmse: rootMeanSquareError(all('anchor'), all('measured')),
     meanSpearman: ranked.reduce((s, f) => s + rho(f.spearman), 0) / Math.max(1, ranked.length),
-    anchorMeanSpearman: ranked.reduce((s, f) => s + rho(f.anchorSpearman), 0) / Math.max(1, ranked.length),
+    anchorMeanSpearman:
+      ranked.reduce((s, f) => s + rho(f.anchorSpearman), 0) / Math.max(1, ranked.length),
     medianSpearman: median(ranked.map((f) => rho(f.spearman))),
     anchorMedianSpearman: median(ranked.map((f) => rho(f.anchorSpearman))),
-    leastSolubleHitRate: ranked.filter((f) => f.leastSolubleInLowestTwo).length / Math.max(1, ranked.length),
-    anchorLeastSolubleHitRate: ranked.filter((f) => f.anchorLeastSolubleInLowestTwo).length / Math.max(1, ranked.length),
+    leastSolubleHitRate:
+      ranked.filter((f) => f.leastSolubleInLowestTwo).length / Math.max(1, ranked.length),
+    anchorLeastSolubleHitRate:
+      ranked.filter((f) => f.anchorLeastSolubleInLowestTwo).length / Math.max(1, ranked.length),
     nSalts: rows.length,
     nDrugs: ids.length,
   };
 }
 
 /** The shipped model: λ by LODO over every drug, then one fit on every salt. */
-export function fitSaltSolubilityModel(rows: readonly SaltSolubilityTrainingRow[], features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES, grid: readonly number[] = RIDGE_LAMBDA_GRID, kind: SaltSolubilityModelKind = 'pooled'): FittedSaltSolubilityModel {
+export function fitSaltSolubilityModel(
+  rows: readonly SaltSolubilityTrainingRow[],
+  features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES,
+  grid: readonly number[] = RIDGE_LAMBDA_GRID,
+  kind: SaltSolubilityModelKind = 'pooled',
+): FittedSaltSolubilityModel {
   return fitOn(rows, features, chooseLambda(rows, features, grid, kind), kind);
 }

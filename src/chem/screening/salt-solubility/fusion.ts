@@ -49,11 +49,21 @@ export function moleFractionToMolPerL(x: number): number {
 
 export function idealSolubility(input: IdealSolubilityInput): IdealSolubility {
   const tm = requireFiniteInRange('meltingPointK', input.meltingPointK, 200, 800, 'K');
-  const dh = requireFiniteInRange('fusionEnthalpyKJPerMol', input.fusionEnthalpyKJPerMol, 0.5, 300, 'kJ/mol');
+  const dh = requireFiniteInRange(
+    'fusionEnthalpyKJPerMol',
+    input.fusionEnthalpyKJPerMol,
+    0.5,
+    300,
+    'kJ/mol',
+  );
   const t = requireFiniteInRange('temperatureK', input.temperatureK, 250, 400, 'K');
   const heatCapacity = input.heatCapacity ?? 'zero';
   if (heatCapacity !== 'zero' && heatCapacity !== 'equal-to-entropy-of-melting') {
-    throw new ChemInputError('heatCapacity', `unknown assumption ${String(heatCapacity)}`, "'zero' or 'equal-to-entropy-of-melting'");
+    throw new ChemInputError(
+      'heatCapacity',
+      `unknown assumption ${String(heatCapacity)}`,
+      "'zero' or 'equal-to-entropy-of-melting'",
+    );
   }
   const r = GAS_CONSTANT_KJ_PER_MOL_K;
   let lnX: number;
@@ -62,5 +72,10 @@ export function idealSolubility(input: IdealSolubilityInput): IdealSolubility {
   else lnX = -(dh / tm / r) * Math.log(tm / t);
   // Keep x strictly below 1 for the molar conversion (a melt at or above T_m mixes completely).
   const x = Math.min(Math.exp(lnX), 0.999);
-  return { lnMoleFraction: lnX, moleFraction: x, log10MolPerL: Math.log10(moleFractionToMolPerL(x)), heatCapacity };
+  return {
+    lnMoleFraction: lnX,
+    moleFraction: x,
+    log10MolPerL: Math.log10(moleFractionToMolPerL(x)),
+    heatCapacity,
+  };
 }

@@ -21,6 +21,16 @@ export {
   type SaltSolubilityOrigin,
 } from './estimate-salt-solubility';
 export { SALT_SOLUBILITY_FEATURES, type SaltSolubilityInput } from './salt-solubility-features';
-export { SALT_SOLUBILITY_MODEL, SALT_SOLUBILITY_FUSION_MODEL, SALT_SOLUBILITY_VARIANTS, SALT_SOLUBILITY_SERIES } from './salt-solubility-model.data';
-export { idealSolubility, moleFractionToMolPerL, type IdealSolubility, type FusionHeatCapacityAssumption } from './fusion';
+export {
+  SALT_SOLUBILITY_MODEL,
+  SALT_SOLUBILITY_FUSION_MODEL,
+  SALT_SOLUBILITY_VARIANTS,
+  SALT_SOLUBILITY_SERIES,
+} from './salt-solubility-model.data';
+export {
+  idealSolubility,
+  moleFractionToMolPerL,
+  type IdealSolubility,
+  type FusionHeatCapacityAssumption,
+} from './fusion';
 export { spearmanRho } from './rank-statistics';

@@ -1,6 +1,19 @@
 import type * as OpenChemLib from 'openchemlib';
-import { crossValidateByDrug, fitSaltSolubilityModel, RIDGE_LAMBDA_GRID, type CrossValidationReport, type FittedSaltSolubilityModel, type SaltSolubilityModelKind, type SaltSolubilityTrainingRow } from './fit-salt-solubility';
-import { IDEAL_SOLUBILITY_FEATURE, SALT_SOLUBILITY_FEATURES, THERMO_SHIFT_FEATURE, type SaltSolubilityFeature } from './salt-solubility-features';
+import {
+  crossValidateByDrug,
+  fitSaltSolubilityModel,
+  RIDGE_LAMBDA_GRID,
+  type CrossValidationReport,
+  type FittedSaltSolubilityModel,
+  type SaltSolubilityModelKind,
+  type SaltSolubilityTrainingRow,
+} from './fit-salt-solubility';
+import {
+  IDEAL_SOLUBILITY_FEATURE,
+  SALT_SOLUBILITY_FEATURES,
+  THERMO_SHIFT_FEATURE,
+  type SaltSolubilityFeature,
+} from './salt-solubility-features';
 import { buildTrainingSet, type CsvRecord, type TrainingSet } from './training-rows';
 
 /**
@@ -39,7 +52,13 @@ export interface SaltSolubilityBuild {
   /** Melting points of the training salts that have one, K: the reference crystal term. */
   fusionReferenceMeltingPointsK: number[];
   report: {
-    summary: { nSalts: number; nDrugs: number; shipped: VariantId; fusionUsed: boolean; rule: string };
+    summary: {
+      nSalts: number;
+      nDrugs: number;
+      shipped: VariantId;
+      fusionUsed: boolean;
+      rule: string;
+    };
     drugs: TrainingSet['drugs'];
     excluded: TrainingSet['excluded'];
     variants: VariantResult[];
@@ -56,15 +75,39 @@ export const VARIANT_RULE =
   'of the pooled and within-series fits, the one with the higher mean within-series Spearman ρ under LODO (the screen ranks salts of one drug), the lower LODO RMSE breaking a tie within 0.05; the ΔH_sol term kept only if it raises that ρ by ≥ 0.05 without raising the RMSE by more than 0.02; the fusion variant used only if it beats the descriptors-only model on the same salts by ≥ 0.02 in RMSE';
 const MARGIN = 0.02;
 
-function variant(id: VariantId, kind: SaltSolubilityModelKind, rows: readonly SaltSolubilityTrainingRow[], features: readonly SaltSolubilityFeature[]): VariantResult {
-  return { id, kind, features: features.map((f) => f.name), cv: crossValidateByDrug(rows, features, RIDGE_LAMBDA_GRID, kind) };
+function variant(
+  id: VariantId,
+  kind: SaltSolubilityModelKind,
+  rows: readonly SaltSolubilityTrainingRow[],
+  features: readonly SaltSolubilityFeature[],
+): VariantResult {
+  return {
+    id,
+    kind,
+    features: features.map((f) => f.name),
+    cv: crossValidateByDrug(rows, features, RIDGE_LAMBDA_GRID, kind),
+  };
 }
 
-function ship(v: VariantResult, rows: readonly SaltSolubilityTrainingRow[], features: readonly SaltSolubilityFeature[]): ShippedVariant {
-  return { id: v.id, model: fitSaltSolubilityModel(rows, features, RIDGE_LAMBDA_GRID, v.kind), cvRmseLog10: v.cv.rmse, nSalts: v.cv.nSalts, nDrugs: v.cv.nDrugs };
+function ship(
+  v: VariantResult,
+  rows: readonly SaltSolubilityTrainingRow[],
+  features: readonly SaltSolubilityFeature[],
+): ShippedVariant {
+  return {
+    id: v.id,
+    model: fitSaltSolubilityModel(rows, features, RIDGE_LAMBDA_GRID, v.kind),
+    cvRmseLog10: v.cv.rmse,
+    nSalts: v.cv.nSalts,
+    nDrugs: v.cv.nDrugs,
+  };
 }
 
-export function fitAndValidateSaltSolubility(ocl: typeof OpenChemLib, saltRecords: readonly CsvRecord[], drugRecords: readonly CsvRecord[]): SaltSolubilityBuild {
+export function fitAndValidateSaltSolubility(
+  ocl: typeof OpenChemLib,
+  saltRecords: readonly CsvRecord[],
+  drugRecords: readonly CsvRecord[],
+): SaltSolubilityBuild {
   const set = buildTrainingSet(ocl, saltRecords, drugRecords);
   const rows = set.rows;
   const base = SALT_SOLUBILITY_FEATURES;
@@ -87,17 +130,28 @@ export function fitAndValidateSaltSolubility(ocl: typeof OpenChemLib, saltRecord
   const RHO_TIE = 0.05;
   const withinFirst =
     within.cv.meanSpearman > pooled.cv.meanSpearman + RHO_TIE ||
-    (Math.abs(within.cv.meanSpearman - pooled.cv.meanSpearman) <= RHO_TIE && within.cv.rmse < pooled.cv.rmse);
+    (Math.abs(within.cv.meanSpearman - pooled.cv.meanSpearman) <= RHO_TIE &&
+      within.cv.rmse < pooled.cv.rmse);
   const [plain, thermo] = withinFirst ? [within, withinThermo] : [pooled, pooledThermo];
-  const thermoHelps = thermo.cv.meanSpearman >= plain.cv.meanSpearman + RHO_TIE && thermo.cv.rmse <= plain.cv.rmse + MARGIN;
+  const thermoHelps =
+    thermo.cv.meanSpearman >= plain.cv.meanSpearman + RHO_TIE &&
+    thermo.cv.rmse <= plain.cv.rmse + MARGIN;
   const shipped = thermoHelps ? ship(thermo, rows, withThermo) : ship(plain, rows, base);
-  const fusionReferenceMeltingPointsK = fusionRows.map((r) => r.input.meltingPointK!).sort((a, b) => a - b);
+  const fusionReferenceMeltingPointsK = fusionRows
+    .map((r) => r.input.meltingPointK!)
+    .sort((a, b) => a - b);
   return {
     shipped,
     fusion,
     fusionReferenceMeltingPointsK,
     report: {
-      summary: { nSalts: rows.length, nDrugs: new Set(rows.map((r) => r.drugId)).size, shipped: shipped.id, fusionUsed: fusion !== null, rule: VARIANT_RULE },
+      summary: {
+        nSalts: rows.length,
+        nDrugs: new Set(rows.map((r) => r.drugId)).size,
+        shipped: shipped.id,
+        fusionUsed: fusion !== null,
+        rule: VARIANT_RULE,
+      },
       drugs: set.drugs,
       excluded: set.excluded,
       variants,
@@ -150,7 +204,12 @@ export function renderModelDataModule(b: SaltSolubilityBuild): string {
     spearman: r6(f.spearman),
     anchorSpearman: r6(f.anchorSpearman),
     leastSolubleInLowestTwo: f.leastSolubleInLowestTwo,
-    salts: f.labels.map((label, i) => ({ label, measured: r6(f.measured[i]!), predicted: r6(f.predicted[i]!), anchor: r6(f.anchor[i]!) })),
+    salts: f.labels.map((label, i) => ({
+      label,
+      measured: r6(f.measured[i]!),
+      predicted: r6(f.predicted[i]!),
+      anchor: r6(f.anchor[i]!),
+    })),
   }));
   return [
     '// GENERATED by fixtures/reference/fit-salt-solubility.ts from fixtures/reference/salt-solubility.csv',
@@ -171,7 +230,7 @@ export function renderModelDataModule(b: SaltSolubilityBuild): string {
     ' */',
     `export const SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K = ${JSON.stringify(b.fusionReferenceMeltingPointsK.map(r6))} as const;`,
     '',
-    '/** Nested leave-one-drug-out cross-validation of every variant, with today\'s anchor on the same folds. */',
+    "/** Nested leave-one-drug-out cross-validation of every variant, with today's anchor on the same folds. */",
     `export const SALT_SOLUBILITY_VARIANTS = ${JSON.stringify(summaries, null, 2)} as const;`,
     '',
     '/** Per-drug series of the shipped variant: each salt predicted by a model that never saw its drug. */',

@@ -44,7 +44,10 @@ export function spearmanRho(x: readonly number[], y: readonly number[]): number 
 }
 
 /** Root-mean-square of the differences predicted − measured. */
-export function rootMeanSquareError(predicted: readonly number[], measured: readonly number[]): number {
+export function rootMeanSquareError(
+  predicted: readonly number[],
+  measured: readonly number[],
+): number {
   const n = predicted.length;
   if (n === 0) return Number.NaN;
   let s = 0;
@@ -57,7 +60,11 @@ export function rootMeanSquareError(predicted: readonly number[], measured: read
  * prediction count against the model: a salt tied with others at the cut is "among the lowest" only
  * if fewer than k salts are predicted strictly lower.
  */
-export function leastSolubleAmongLowestPredicted(predicted: readonly number[], measured: readonly number[], k = 2): boolean {
+export function leastSolubleAmongLowestPredicted(
+  predicted: readonly number[],
+  measured: readonly number[],
+  k = 2,
+): boolean {
   if (predicted.length === 0) return false;
   let worst = 0;
   for (let i = 1; i < measured.length; i++) if (measured[i]! < measured[worst]!) worst = i;

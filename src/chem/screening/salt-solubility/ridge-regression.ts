@@ -21,7 +21,10 @@ export interface RidgeModel {
 }
 
 /** Solve A·x = b for a symmetric positive-definite A by Cholesky decomposition (A is k×k). */
-export function solveSymmetricPositiveDefinite(a: readonly number[][], b: readonly number[]): number[] {
+export function solveSymmetricPositiveDefinite(
+  a: readonly number[][],
+  b: readonly number[],
+): number[] {
   const k = b.length;
   const l: number[][] = Array.from({ length: k }, () => new Array<number>(k).fill(0));
   for (let i = 0; i < k; i++) {
@@ -29,7 +32,8 @@ export function solveSymmetricPositiveDefinite(a: readonly number[][], b: readon
       let sum = a[i]![j]!;
       for (let p = 0; p < j; p++) sum -= l[i]![p]! * l[j]![p]!;
       if (i === j) {
-        if (!(sum > 0)) throw new RangeError('solveSymmetricPositiveDefinite: matrix is not positive definite');
+        if (!(sum > 0))
+          throw new RangeError('solveSymmetricPositiveDefinite: matrix is not positive definite');
         l[i]![i] = Math.sqrt(sum);
       } else {
         l[i]![j] = sum / l[j]![j]!;
@@ -63,7 +67,8 @@ export function fitRidge(
 ): RidgeModel {
   const n = y.length;
   const k = featureNames.length;
-  if (n === 0 || x.length !== n) throw new RangeError('fitRidge: x and y must be non-empty and of equal length');
+  if (n === 0 || x.length !== n)
+    throw new RangeError('fitRidge: x and y must be non-empty and of equal length');
   if (!(lambda > 0)) throw new RangeError('fitRidge: lambda must be positive');
   const means = new Array<number>(k).fill(0);
   const scales = new Array<number>(k).fill(0);
@@ -88,7 +93,14 @@ export function fitRidge(
   }
   for (let a = 0; a < k; a++) ztz[a]![a] = ztz[a]![a]! + lambda;
   const coefficients = solveSymmetricPositiveDefinite(ztz, zty);
-  return { featureNames: [...featureNames], featureMeans: means, featureScales: scales, intercept: yMean, coefficients, lambda };
+  return {
+    featureNames: [...featureNames],
+    featureMeans: means,
+    featureScales: scales,
+    intercept: yMean,
+    coefficients,
+    lambda,
+  };
 }
 
 /** Predict y for one row of raw (unstandardised) predictors. */
@@ -102,5 +114,7 @@ export function predictRidge(model: RidgeModel, row: readonly number[]): number 
 
 /** The contribution of each predictor to a prediction, in units of y (coefficient × standardised value). */
 export function ridgeContributions(model: RidgeModel, row: readonly number[]): number[] {
-  return model.coefficients.map((c, j) => c * ((row[j]! - model.featureMeans[j]!) / model.featureScales[j]!));
+  return model.coefficients.map(
+    (c, j) => c * ((row[j]! - model.featureMeans[j]!) / model.featureScales[j]!),
+  );
 }

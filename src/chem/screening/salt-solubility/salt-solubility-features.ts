@@ -97,7 +97,10 @@ export const SALT_SOLUBILITY_FEATURES: readonly SaltSolubilityFeature[] = [
   },
 ];
 
-export function featureRow(input: SaltSolubilityInput, features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES): number[] {
+export function featureRow(
+  input: SaltSolubilityInput,
+  features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES,
+): number[] {
   return features.map((f) => f.value(input));
 }
 
@@ -125,13 +128,17 @@ export function log10IdealMoleFraction(input: SaltSolubilityInput, temperatureK 
   const tm = input.meltingPointK;
   if (tm === null || tm === undefined || !Number.isFinite(tm)) return Number.NaN;
   if (temperatureK >= tm) return 0;
-  const dhJ = input.fusionEnthalpyKJPerMol != null && Number.isFinite(input.fusionEnthalpyKJPerMol) ? input.fusionEnthalpyKJPerMol * 1000 : WALDEN_ENTROPY_OF_MELTING_J_PER_MOL_K * tm;
+  const dhJ =
+    input.fusionEnthalpyKJPerMol != null && Number.isFinite(input.fusionEnthalpyKJPerMol)
+      ? input.fusionEnthalpyKJPerMol * 1000
+      : WALDEN_ENTROPY_OF_MELTING_J_PER_MOL_K * tm;
   const lnX = -(dhJ / GAS_CONSTANT_J_PER_MOL_K) * (1 / temperatureK - 1 / tm);
   return lnX / Math.LN10;
 }
 
 export const IDEAL_SOLUBILITY_FEATURE: SaltSolubilityFeature = {
   name: 'log10IdealMoleFraction',
-  description: 'log₁₀ ideal mole-fraction solubility of the salt crystal (Schröder–van Laar, ΔC_p = 0; Walden’s rule without ΔH_fus)',
+  description:
+    'log₁₀ ideal mole-fraction solubility of the salt crystal (Schröder–van Laar, ΔC_p = 0; Walden’s rule without ΔH_fus)',
   value: (i) => log10IdealMoleFraction(i),
 };

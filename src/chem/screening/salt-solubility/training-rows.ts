@@ -1,7 +1,12 @@
 import type * as OpenChemLib from 'openchemlib';
 import { GAS_CONSTANT_KJ_PER_MOL_K, STANDARD_TEMPERATURE_K } from '../../constants/physical';
 import { celsiusToKelvin } from '../../units/temperature';
-import { formulaMolarMassGPerMol, hillFormula, parseFormula, withHydrogens } from '../../compound/formula';
+import {
+  formulaMolarMassGPerMol,
+  hillFormula,
+  parseFormula,
+  withHydrogens,
+} from '../../compound/formula';
 import { COUNTER_IONS } from '../../library';
 import type { CounterIon } from '../../library';
 import { estimateKsp } from '../ksp-estimate';
@@ -91,7 +96,8 @@ function parseDrug(ocl: Ocl, r: CsvRecord): DrugInfo | string {
     log10IntrinsicM,
     logP,
     pKa,
-    source: s0 !== null ? (r.s0_source ?? '').trim() : 'S₀ not read: openchemlib log S estimate used',
+    source:
+      s0 !== null ? (r.s0_source ?? '').trim() : 'S₀ not read: openchemlib log S estimate used',
   };
 }
 
@@ -117,29 +123,56 @@ function libraryIonFor(ocl: Ocl, parentSmiles: string): CounterIon | undefined {
   });
 }
 
-export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], drugRecords: readonly CsvRecord[]): TrainingSet {
+export function buildTrainingSet(
+  ocl: Ocl,
+  saltRecords: readonly CsvRecord[],
+  drugRecords: readonly CsvRecord[],
+): TrainingSet {
   const drugs = new Map<string, DrugInfo>();
   const excluded: TrainingSet['excluded'] = [];
   drugRecords.forEach((r, i) => {
     const d = parseDrug(ocl, r);
-    if (typeof d === 'string') excluded.push({ line: i + 2, label: String(r.drug_id ?? ''), reason: d });
+    if (typeof d === 'string')
+      excluded.push({ line: i + 2, label: String(r.drug_id ?? ''), reason: d });
     else drugs.set(d.id, d);
   });
-  type Pending = { line: number; drug: DrugInfo; label: string; m: number; n: number; charge: number; desc: CounterIonDescriptors; log10DrugM: number; counter: ThermoCounterIon; ionFormula: string; drugIonFormula: string; meltingPointK: number | null; fusionKJ: number | null };
+  type Pending = {
+    line: number;
+    drug: DrugInfo;
+    label: string;
+    m: number;
+    n: number;
+    charge: number;
+    desc: CounterIonDescriptors;
+    log10DrugM: number;
+    counter: ThermoCounterIon;
+    ionFormula: string;
+    drugIonFormula: string;
+    meltingPointK: number | null;
+    fusionKJ: number | null;
+  };
   const pending: Pending[] = [];
   saltRecords.forEach((r, i) => {
     const line = i + 2;
     const drug = drugs.get((r.drug_id ?? '').trim());
     const label = `${r.drug_name ?? r.drug_id} · ${r.counter_ion_name ?? '?'}`;
-    if (!drug) return excluded.push({ line, label, reason: 'drug not in the drugs file (or excluded there)' });
+    if (!drug)
+      return excluded.push({
+        line,
+        label,
+        reason: 'drug not in the drugs file (or excluded there)',
+      });
     const provenance = `${r.value_read_from ?? ''} ${r.authors ?? ''}`.toLowerCase();
-    if (provenance.includes('from memory')) return excluded.push({ line, label, reason: 'value from memory, not read from the paper' });
+    if (provenance.includes('from memory'))
+      return excluded.push({ line, label, reason: 'value from memory, not read from the paper' });
     const mgPerMl = num(r.solubility_mg_per_ml_as_salt);
-    if (mgPerMl === null || mgPerMl <= 0) return excluded.push({ line, label, reason: 'no solubility convertible to mg/mL as salt' });
+    if (mgPerMl === null || mgPerMl <= 0)
+      return excluded.push({ line, label, reason: 'no solubility convertible to mg/mL as salt' });
     const m = num(r.drug_per_salt) ?? 1;
     const n = num(r.counter_ion_per_salt) ?? 1;
     const charge = num(r.counter_ion_charge);
-    if (charge === null || charge === 0) return excluded.push({ line, label, reason: 'no counter-ion charge' });
+    if (charge === null || charge === 0)
+      return excluded.push({ line, label, reason: 'no counter-ion charge' });
     const parentSmiles = (r.counter_ion_parent_smiles ?? '').trim();
     let desc: CounterIonDescriptors;
     let ionFormula: string;
@@ -150,18 +183,51 @@ export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], dr
       ionFormula = ion.ionFormula;
       parentRings = ion.rings;
     } catch (err) {
-      return excluded.push({ line, label, reason: `counter-ion structure: ${err instanceof Error ? err.message : String(err)}` });
+      return excluded.push({
+        line,
+        label,
+        reason: `counter-ion structure: ${err instanceof Error ? err.message : String(err)}`,
+      });
     }
     const drugIonFormula = shiftHydrogens(drug.formula, drug.kind === 'base' ? 1 : -1);
     const hydrate = num(r.hydrate_water) ?? 0;
-    const saltMass = m * formulaMolarMassGPerMol(drugIonFormula) + n * formulaMolarMassGPerMol(ionFormula) + hydrate * WATER_G_PER_MOL;
+    const saltMass =
+      m * formulaMolarMassGPerMol(drugIonFormula) +
+      n * formulaMolarMassGPerMol(ionFormula) +
+      hydrate * WATER_G_PER_MOL;
     const log10DrugM = Math.log10((mgPerMl / saltMass) * m);
     const lib = libraryIonFor(ocl, parentSmiles);
     const counter: ThermoCounterIon = lib
-      ? { id: lib.id, ...(lib.thermoId ? { thermoId: lib.thermoId } : {}), formula: lib.formula, rings: lib.rings }
-      : { id: `ref-${(r.counter_ion_name ?? 'ion').trim().toLowerCase().replace(/[^a-z0-9]+/g, '-')}`, formula: ionFormula, rings: parentRings };
+      ? {
+          id: lib.id,
+          ...(lib.thermoId ? { thermoId: lib.thermoId } : {}),
+          formula: lib.formula,
+          rings: lib.rings,
+        }
+      : {
+          id: `ref-${(r.counter_ion_name ?? 'ion')
+            .trim()
+            .toLowerCase()
+            .replace(/[^a-z0-9]+/g, '-')}`,
+          formula: ionFormula,
+          rings: parentRings,
+        };
     const meltingPointC = num(r.salt_melting_point_c);
-    pending.push({ line, drug, label: `${drug.name} · ${(r.counter_ion_name ?? '').trim()} (${m}:${n})`, m, n, charge, desc, log10DrugM, counter, ionFormula, drugIonFormula, meltingPointK: meltingPointC === null ? null : celsiusToKelvin(meltingPointC), fusionKJ: num(r.salt_fusion_enthalpy_kj_per_mol) });
+    pending.push({
+      line,
+      drug,
+      label: `${drug.name} · ${(r.counter_ion_name ?? '').trim()} (${m}:${n})`,
+      m,
+      n,
+      charge,
+      desc,
+      log10DrugM,
+      counter,
+      ionFormula,
+      drugIonFormula,
+      meltingPointK: meltingPointC === null ? null : celsiusToKelvin(meltingPointC),
+      fusionKJ: num(r.salt_fusion_enthalpy_kj_per_mol),
+    });
   });
   // Today's anchor needs every candidate's ΔH_sol and their median per drug ion (as the screen does).
   const thermo = pending.map((p) => {
@@ -170,16 +236,28 @@ export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], dr
       charge: p.drug.kind === 'base' ? 1 : -1,
       rings: p.drug.rings,
     });
-    return candidateSolutionEnthalpyKJ(drugIon, p.counter, { drugPerSalt: p.m, counterIonPerSalt: p.n, ionCharge: p.charge, ionFormula: p.ionFormula }).solutionEnthalpyKJ;
+    return candidateSolutionEnthalpyKJ(drugIon, p.counter, {
+      drugPerSalt: p.m,
+      counterIonPerSalt: p.n,
+      ionCharge: p.charge,
+      ionFormula: p.ionFormula,
+    }).solutionEnthalpyKJ;
   });
   const refByDrug = new Map<string, number>();
   for (const id of new Set(pending.map((p) => p.drug.id))) {
-    const perDrug = pending.flatMap((p, i) => (p.drug.id === id && thermo[i] ? [thermo[i]!.value / p.m] : [])).sort((a, b) => a - b);
+    const perDrug = pending
+      .flatMap((p, i) => (p.drug.id === id && thermo[i] ? [thermo[i]!.value / p.m] : []))
+      .sort((a, b) => a - b);
     if (perDrug.length) refByDrug.set(id, perDrug[Math.floor((perDrug.length - 1) / 2)]!);
   }
   const rows: SaltSolubilityTrainingRow[] = pending.map((p, i) => {
     const anchor = estimateKsp({
-      log10IntrinsicM: { value: p.drug.log10IntrinsicM, uncertainty: 0.3, method: 'published', sources: [] },
+      log10IntrinsicM: {
+        value: p.drug.log10IntrinsicM,
+        uncertainty: 0.3,
+        method: 'published',
+        sources: [],
+      },
       drugPerSalt: p.m,
       counterIonPerSalt: p.n,
       solutionEnthalpyKJ: thermo[i] ?? null,
@@ -188,7 +266,11 @@ export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], dr
     });
     const dH = thermo[i];
     const ref = refByDrug.get(p.drug.id);
-    const thermoShiftDecades = dH && ref !== undefined ? -(dH.value - p.m * ref) / ((p.m + p.n) * GAS_CONSTANT_KJ_PER_MOL_K * REFERENCE_TEMPERATURE_K * Math.LN10) : null;
+    const thermoShiftDecades =
+      dH && ref !== undefined
+        ? -(dH.value - p.m * ref) /
+          ((p.m + p.n) * GAS_CONSTANT_KJ_PER_MOL_K * REFERENCE_TEMPERATURE_K * Math.LN10)
+        : null;
     return {
       drugId: p.drug.id,
       label: p.label,
@@ -205,6 +287,12 @@ export function buildTrainingSet(ocl: Ocl, saltRecords: readonly CsvRecord[], dr
       anchorLog10DrugM: anchor.log10SaltLimitedDrugM.value,
     };
   });
-  const drugList = [...drugs.values()].map((d) => ({ drugId: d.id, name: d.name, kind: d.kind, nSalts: rows.filter((r) => r.drugId === d.id).length, source: d.source }));
+  const drugList = [...drugs.values()].map((d) => ({
+    drugId: d.id,
+    name: d.name,
+    kind: d.kind,
+    nSalts: rows.filter((r) => r.drugId === d.id).length,
+    source: d.source,
+  }));
   return { rows, excluded, drugs: drugList };
 }

@@ -1,11 +1,9 @@
-import { doseNumber, ICH_M9_PH_RANGE } from '../dose-number';
+import { doseNumber } from '../dose-number';
 import type { GridSolubility } from '../ph-grid-solubility';
-import { solubilityAtPh, type PhProfile, type ProfileSalt } from '../ph-profile';
+import { solubilityAtPh, type ProfileSalt } from '../ph-profile';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
+import { ICH_M9_POINTS_PH, type IchM9PlanPoint } from './ich-m9-plan';
 import type { DoseNumberAt } from './screen.types';
-
-/** The pH points ICH M9 (2019) names for the solubility class: 1.2, 4.5 and 6.8. */
-const ICH_M9_POINTS_PH = [1.2, 4.5, 6.8];
 
 /** Solubility and dose number at one pH, with the salt (or free form when null) as the limiting solid. */
 export function doseNumberAt(
@@ -25,31 +23,6 @@ export function doseNumberAt(
     doseNumber: ctx.doseMg === null ? null : doseNumber(ctx.doseMg, mg),
     solid: p.solid,
   };
-}
-
-/** The ICH M9 points plus every profile point inside pH 1.2–6.8, ascending. */
-export function ichM9Phs(profile: Pick<PhProfile, 'points'>): number[] {
-  const ph = new Set<number>(ICH_M9_POINTS_PH);
-  for (const p of profile.points) {
-    if (p.pH >= ICH_M9_PH_RANGE[0] - 1e-9 && p.pH <= ICH_M9_PH_RANGE[1] + 1e-9) ph.add(p.pH);
-  }
-  return [...ph].sort((a, b) => a - b);
-}
-
-/** One pH of the ICH M9 series and its index on the grid (−1 when it is not a grid point). */
-export interface IchM9PlanPoint {
-  pH: number;
-  k: number;
-}
-
-/** The ICH M9 series on a grid (ichM9Phs of the grid's points), with each pH's grid index: once per compound. */
-export function ichM9Plan(phs: readonly number[]): IchM9PlanPoint[] {
-  const index = new Map<number, number>();
-  phs.forEach((pH, k) => index.set(pH, k));
-  return ichM9Phs({ points: phs.map((pH) => ({ pH })) as PhProfile['points'] }).map((pH) => ({
-    pH,
-    k: index.get(pH) ?? -1,
-  }));
 }
 
 function doseAt(ctx: ScreenContext, pH: number, solubilityM: number, salt: boolean): DoseNumberAt {
@@ -73,7 +46,9 @@ export function ichM9DoseNumbers(
   plan: readonly IchM9PlanPoint[],
 ): DoseNumberAt[] {
   return plan.map(({ pH, k }) =>
-    k < 0 ? doseNumberAt(ctx, salt, pH) : doseAt(ctx, pH, grid.solubilityM[k]!, grid.saltSolid[k] === 1),
+    k < 0
+      ? doseNumberAt(ctx, salt, pH)
+      : doseAt(ctx, pH, grid.solubilityM[k]!, grid.saltSolid[k] === 1),
   );
 }
 
@@ -98,7 +73,9 @@ export function ichM9WorstAndNamed(
   };
   const doseOf = (i: number): DoseNumberAt => {
     const { pH, k } = plan[i]!;
-    return k < 0 ? off.get(i) ?? doseNumberAt(ctx, salt, pH) : doseAt(ctx, pH, grid.solubilityM[k]!, grid.saltSolid[k] === 1);
+    return k < 0
+      ? (off.get(i) ?? doseNumberAt(ctx, salt, pH))
+      : doseAt(ctx, pH, grid.solubilityM[k]!, grid.saltSolid[k] === 1);
   };
   let w = 0;
   let wMg = mgAt(0);

@@ -4,4 +4,8 @@ export { screenCompound } from './screen-compound';
 export { counterIonProtolyte } from './counter-ion-protolyte';
 export { GASTRIC_SODIUM_M } from './media';
 export { chooseKsp, type KspChoice } from './ksp-choice';
-export { SOLUBILITY_DRIVER_WORDS, SALT_WATER_ORIGIN_LABELS, SALT_WATER_ORIGIN_BASIS } from './salt-water-words';
+export {
+  SOLUBILITY_DRIVER_WORDS,
+  SALT_WATER_ORIGIN_LABELS,
+  SALT_WATER_ORIGIN_BASIS,
+} from './salt-water-words';

@@ -65,7 +65,11 @@ export function chooseKsp(
           });
     const n = st.drugPerSalt + st.counterIonPerSalt;
     const farK = ms.temperatureK !== null && Math.abs(ms.temperatureK - T) > TEMPERATURE_NOTE_K;
-    const notes = measuredKspNotes(ms.ph, farK ? kelvinToCelsius(ms.temperatureK!) : null, kelvinToCelsius(T));
+    const notes = measuredKspNotes(
+      ms.ph,
+      farK ? kelvinToCelsius(ms.temperatureK!) : null,
+      kelvinToCelsius(T),
+    );
     return {
       log10Ksp: {
         value: logK,
@@ -95,7 +99,8 @@ export function chooseKsp(
     };
   }
   const logS0 = ctx.log10IntrinsicM;
-  const descriptors = p.cand.counterIonDescriptors ?? LIBRARY_COUNTER_ION_DESCRIPTORS[p.cand.counterIon.id] ?? null;
+  const descriptors =
+    p.cand.counterIonDescriptors ?? LIBRARY_COUNTER_ION_DESCRIPTORS[p.cand.counterIon.id] ?? null;
   const origin = p.solutionEnthalpyOrigin;
   const enthalpyReasons = origin?.startsWith('measured') ? [measuredEnthalpyReason(origin)] : [];
   if (descriptors) {
@@ -129,7 +134,13 @@ export function chooseKsp(
       sources: est.log10DrugM.sources,
       notes: ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])],
     };
-    return estimatedChoice(log10Ksp, est.log10DrugM, logS0.uncertainty, saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers), enthalpyReasons);
+    return estimatedChoice(
+      log10Ksp,
+      est.log10DrugM,
+      logS0.uncertainty,
+      saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers),
+      enthalpyReasons,
+    );
   }
   const k = estimateKsp({
     log10IntrinsicM: logS0,
@@ -143,7 +154,13 @@ export function chooseKsp(
   const log10Ksp = k.log10Ksp;
   if (origin) log10Ksp.notes = [...(log10Ksp.notes ?? []), `ΔH_sol: ${origin}`];
   const saltWater = saltWaterOf(p, ctx, k.log10SaltLimitedDrugM, 'anchor', []);
-  return estimatedChoice(log10Ksp, k.log10SaltLimitedDrugM, logS0.uncertainty, saltWater, enthalpyReasons);
+  return estimatedChoice(
+    log10Ksp,
+    k.log10SaltLimitedDrugM,
+    logS0.uncertainty,
+    saltWater,
+    enthalpyReasons,
+  );
 }
 
 /**

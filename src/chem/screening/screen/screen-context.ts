@@ -5,7 +5,7 @@ import { drugGrids, type DrugGrids } from '../ph-grid-solubility';
 import { drugProtolyte, type DrugAcidBase, type ProfileOptions } from '../ph-profile';
 import { parseScreeningSettings, type ScreeningSettings } from '../settings';
 import type { Protolyte } from '../speciation';
-import { ichM9Plan, type IchM9PlanPoint } from './dose-numbers';
+import { ichM9Plan, type IchM9PlanPoint } from './ich-m9-plan';
 import type {
   FreeFormResult,
   ScreenCompoundInput,

@@ -42,7 +42,9 @@ export function saltName(label: string, ionName: string): string {
 }
 
 /** The free form's own flag: its worst dose number over pH 1.2–6.8 (ICH M9). */
-export function freeFormPoorlySolubleFlag(worst: DoseNumberAt & { doseNumber: number }): ScreenFlag {
+export function freeFormPoorlySolubleFlag(
+  worst: DoseNumberAt & { doseNumber: number },
+): ScreenFlag {
   return {
     id: 'likely-poorly-soluble',
     text: `free form likely poorly soluble: D₀ ${fmt(worst.doseNumber)} at pH ${worst.pH}`,

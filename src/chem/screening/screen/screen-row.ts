@@ -64,7 +64,10 @@ function saltBranchFlag(ctx: ScreenContext, grid: GridSolubility): ScreenFlag | 
  * (ph-grid-solubility.ts) gives the numbers phSolubilityProfile gives, after the same input checks;
  * the Davies option takes the general solver.
  */
-function saltProfile(ctx: ScreenContext, salt: ProfileSalt): { grid: GridSolubility; phMax: number | null } {
+function saltProfile(
+  ctx: ScreenContext,
+  salt: ProfileSalt,
+): { grid: GridSolubility; phMax: number | null } {
   if (!fastPathApplies(ctx.grid)) {
     const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
     return { grid: gridFromPoints(profile.points), phMax: profile.phMax };

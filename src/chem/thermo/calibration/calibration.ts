@@ -138,7 +138,8 @@ export function fitLatticeCalibration(
       crossValidated: errorFigures(cvErr),
     };
     if (fitted.crossValidated.rmsPercent < fitted.raw.rmsPercent) factors.push(fitted);
-    else withheld.push({ ...fitted, reason: 'leave-one-salt-out RMS error not below the raw model' });
+    else
+      withheld.push({ ...fitted, reason: 'leave-one-salt-out RMS error not below the raw model' });
   }
   const order: CalibratedVariant[] = [
     'kapustinskii',

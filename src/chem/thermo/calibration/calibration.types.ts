@@ -15,11 +15,7 @@ export type ShapeGroup = 'halides' | 'polyatomic';
 
 /** A lattice method with where its volume came from (VBT: cell or density vs ion volumes). */
 export type CalibratedVariant =
-  | 'kapustinskii'
-  | 'vbt'
-  | 'vbt-ion-volumes'
-  | 'born-mayer'
-  | 'born-lande';
+  'kapustinskii' | 'vbt' | 'vbt-ion-volumes' | 'born-mayer' | 'born-lande';
 
 /** Error of one variant on one cell (charge class × shape group) of the lattice reference salts. */
 export interface LatticeErrorFigures {

@@ -4,7 +4,12 @@ import { estimateSaltThermo } from '../estimate-salt';
 import type { ModelValidation, ValidationRow } from '../thermo.types';
 import { referenceSolutionEnthalpyKJ, SOLUTION_REFERENCE_SOURCE } from './reference';
 import { relativeSolutionEnthalpyKJ } from '../models/solution/relative';
-import { hydrationValidation, latticeValidation, summarise, type LatticeVariant } from './validation';
+import {
+  hydrationValidation,
+  latticeValidation,
+  summarise,
+  type LatticeVariant,
+} from './validation';
 import { chargeClassOf } from '../calibration/calibration';
 import { solutionCrossValidation } from '../calibration/fit-calibration';
 
@@ -26,8 +31,19 @@ export interface SolutionValidation extends ModelValidation {
 
 type SolutionRow = ValidationRow & { errKJ: number; uKJ: number; singly: boolean };
 
-function summariseSolution(model: string, label: string, group: string, rows: SolutionRow[], calibrated: boolean): SolutionValidation {
-  const base = summarise(model, label, group, rows.map(({ errKJ: _e, uKJ: _u, singly: _s, ...r }) => r));
+function summariseSolution(
+  model: string,
+  label: string,
+  group: string,
+  rows: SolutionRow[],
+  calibrated: boolean,
+): SolutionValidation {
+  const base = summarise(
+    model,
+    label,
+    group,
+    rows.map(({ errKJ: _e, uKJ: _u, singly: _s, ...r }) => r),
+  );
   const n = rows.length;
   const abs = rows.map((r) => Math.abs(r.errKJ));
   return {
@@ -44,33 +60,68 @@ function summariseSolution(model: string, label: string, group: string, rows: So
 }
 
 /** The whole solution cycle over the NBS reference salts, split also by charge class. */
-function solutionSections(model: string, label: string, rows: SolutionRow[], calibrated: boolean): SolutionValidation[] {
+function solutionSections(
+  model: string,
+  label: string,
+  rows: SolutionRow[],
+  calibrated: boolean,
+): SolutionValidation[] {
   return [
     summariseSolution(model, label, 'solution', rows, calibrated),
-    summariseSolution(model, `${label}; salts of singly charged ions`, 'solution-singly-charged', rows.filter((r) => r.singly), calibrated),
-    summariseSolution(model, `${label}; salts with an ion of |z| ≥ 2`, 'solution-multiply-charged', rows.filter((r) => !r.singly), calibrated),
+    summariseSolution(
+      model,
+      `${label}; salts of singly charged ions`,
+      'solution-singly-charged',
+      rows.filter((r) => r.singly),
+      calibrated,
+    ),
+    summariseSolution(
+      model,
+      `${label}; salts with an ion of |z| ≥ 2`,
+      'solution-multiply-charged',
+      rows.filter((r) => !r.singly),
+      calibrated,
+    ),
   ];
 }
 
 let solutionCache: { raw: SolutionValidation[]; calibrated: SolutionValidation[] } | undefined;
 
-function computeSolutionSections(): { raw: SolutionValidation[]; calibrated: SolutionValidation[] } {
+function computeSolutionSections(): {
+  raw: SolutionValidation[];
+  calibrated: SolutionValidation[];
+} {
   const cv = solutionCrossValidation();
   const raw: SolutionRow[] = [];
   const cal: SolutionRow[] = [];
   SOLUTION_REFERENCE_SALTS.forEach((s, i) => {
     const r = cv.rows[i]!;
-    const singly = chargeClassOf(getThermoIon(s.cation)!.charge, getThermoIon(s.anion)!.charge) === 'singly-charged';
+    const singly =
+      chargeClassOf(getThermoIon(s.cation)!.charge, getThermoIon(s.anion)!.charge) ===
+      'singly-charged';
     const lat = referenceLatticeScale(s);
     const row = (valueKJ: number, uKJ: number): SolutionRow => ({
-      id: s.formula, label: s.formula, group: 'solution', referenceKJ: r.referenceKJ, estimateKJ: valueKJ,
-      errorPercent: ((valueKJ - r.referenceKJ) / lat) * 100, source: SOLUTION_REFERENCE_SOURCE, errKJ: valueKJ - r.referenceKJ, uKJ, singly,
+      id: s.formula,
+      label: s.formula,
+      group: 'solution',
+      referenceKJ: r.referenceKJ,
+      estimateKJ: valueKJ,
+      errorPercent: ((valueKJ - r.referenceKJ) / lat) * 100,
+      source: SOLUTION_REFERENCE_SOURCE,
+      errKJ: valueKJ - r.referenceKJ,
+      uKJ,
+      singly,
     });
     raw.push(row(r.raw.valueKJ, r.raw.uncertaintyKJ));
     cal.push(row(r.calibrated.valueKJ, r.calibrated.uncertaintyKJ));
   });
   return {
-    raw: solutionSections('solution-hess', 'ΔH_sol = ΔH_L(auto, uncalibrated) + Σν·ΔH_hyd (published); % of ΔH_L', raw, false),
+    raw: solutionSections(
+      'solution-hess',
+      'ΔH_sol = ΔH_L(auto, uncalibrated) + Σν·ΔH_hyd (published); % of ΔH_L',
+      raw,
+      false,
+    ),
     calibrated: solutionSections(
       'solution-hess-calibrated',
       'ΔH_sol = ΔH_L(auto, calibrated, refitted without the salt) + Σν·ΔH_hyd (published), leave-one-salt-out; % of ΔH_L',
@@ -82,7 +133,13 @@ function computeSolutionSections(): { raw: SolutionValidation[]; calibrated: Sol
 
 /** The uncalibrated lattice enthalpy of a reference salt, the scale for the percent errors of ΔH_sol. */
 function referenceLatticeScale(s: (typeof SOLUTION_REFERENCE_SALTS)[number]): number {
-  return estimateSaltThermo({ cation: getThermoIon(s.cation)!, anion: getThermoIon(s.anion)!, cationsPerFormula: s.p, anionsPerFormula: s.q, calibrate: false }).latticeEnthalpyKJ.value;
+  return estimateSaltThermo({
+    cation: getThermoIon(s.cation)!,
+    anion: getThermoIon(s.anion)!,
+    cationsPerFormula: s.p,
+    anionsPerFormula: s.q,
+    calibrate: false,
+  }).latticeEnthalpyKJ.value;
 }
 
 /**
@@ -123,7 +180,12 @@ let pairCache: { factor: number; pairs: number } | undefined;
 export function relativePairFactor(): { factor: number; pairs: number } {
   if (pairCache) return pairCache;
   const rows = SOLUTION_REFERENCE_SALTS.map((s) => {
-    const result = estimateSaltThermo({ cation: getThermoIon(s.cation)!, anion: getThermoIon(s.anion)!, cationsPerFormula: s.p, anionsPerFormula: s.q });
+    const result = estimateSaltThermo({
+      cation: getThermoIon(s.cation)!,
+      anion: getThermoIon(s.anion)!,
+      cationsPerFormula: s.p,
+      anionsPerFormula: s.q,
+    });
     return { s, result, ref: referenceSolutionEnthalpyKJ(s) / s.p };
   });
   let sumErr2 = 0;
@@ -134,7 +196,11 @@ export function relativePairFactor(): { factor: number; pairs: number } {
       const a = rows[i]!;
       const b = rows[j]!;
       if (a.s.cation !== b.s.cation) continue;
-      const d = relativeSolutionEnthalpyKJ({ result: a.result, drugPerFormula: a.s.p, counterPerFormula: a.s.q, drugIs: 'cation' }, { result: b.result, drugPerFormula: b.s.p, counterPerFormula: b.s.q, drugIs: 'cation' }, 1);
+      const d = relativeSolutionEnthalpyKJ(
+        { result: a.result, drugPerFormula: a.s.p, counterPerFormula: a.s.q, drugIs: 'cation' },
+        { result: b.result, drugPerFormula: b.s.p, counterPerFormula: b.s.q, drugIs: 'cation' },
+        1,
+      );
       sumErr2 += (d.value - (a.ref - b.ref)) ** 2;
       sumU2 += d.uncertainty ** 2;
       pairs++;
@@ -147,8 +213,15 @@ export function relativePairFactor(): { factor: number; pairs: number } {
 /** The four Kapustinskii radius/constant pairings on the halides (and polyatomic salts), for the cited choice. */
 export function kapustinskiiVariants(): ModelValidation[] {
   const v = latticeValidation();
-  const names: LatticeVariant[] = ['kapustinskii-goldschmidt', 'kapustinskii-goldschmidt-1202', 'kapustinskii-shannon', 'kapustinskii-shannon-1202'];
-  return names.flatMap((n) => ['halides', 'polyatomic'].map((g) => v.get(`${n}/${g}`)!).filter(Boolean));
+  const names: LatticeVariant[] = [
+    'kapustinskii-goldschmidt',
+    'kapustinskii-goldschmidt-1202',
+    'kapustinskii-shannon',
+    'kapustinskii-shannon-1202',
+  ];
+  return names.flatMap((n) =>
+    ['halides', 'polyatomic'].map((g) => v.get(`${n}/${g}`)!).filter(Boolean),
+  );
 }
 
 /**

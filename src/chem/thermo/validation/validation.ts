@@ -1,16 +1,37 @@
-import { LATTICE_REFERENCE_SALTS, SOLUTION_REFERENCE_SALTS, type LatticeReferenceSalt } from '../../data/thermo-reference';
+import {
+  LATTICE_REFERENCE_SALTS,
+  SOLUTION_REFERENCE_SALTS,
+  type LatticeReferenceSalt,
+} from '../../data/thermo-reference';
 import { THERMO_IONS } from '../../data/thermo-ions';
 import { getThermoIon, KAPUSTINSKII_RADIUS_SET } from '../ions';
-import { KAPUSTINSKII_K_ALT_KJ_A_PER_MOL, KAPUSTINSKII_K_KJ_A_PER_MOL } from '../models/kapustinskii/kapustinskii';
+import {
+  KAPUSTINSKII_K_ALT_KJ_A_PER_MOL,
+  KAPUSTINSKII_K_KJ_A_PER_MOL,
+} from '../models/kapustinskii/kapustinskii';
 import { fitBornOffsets } from '../models/hydration/hydration';
 import { rawLattice } from '../lattice';
-import type { LatticeMethod, ModelValidation, SaltThermoRequest, ValidationRow } from '../thermo.types';
-import { referenceLatticeEnthalpyKJ, referenceSolutionEnthalpyKJ, referenceVolumeNm3 } from './reference';
+import type {
+  LatticeMethod,
+  ModelValidation,
+  SaltThermoRequest,
+  ValidationRow,
+} from '../thermo.types';
+import {
+  referenceLatticeEnthalpyKJ,
+  referenceSolutionEnthalpyKJ,
+  referenceVolumeNm3,
+} from './reference';
 
 export type LatticeGroup = 'alkali-halide' | 'alkaline-earth-halide' | 'polyatomic';
 
 /** Summarise rows into a {@link ModelValidation}. */
-export function summarise(model: string, label: string, group: string, rows: ValidationRow[]): ModelValidation {
+export function summarise(
+  model: string,
+  label: string,
+  group: string,
+  rows: ValidationRow[],
+): ModelValidation {
   const n = rows.length;
   const abs = rows.map((r) => Math.abs(r.errorPercent));
   return {
@@ -27,7 +48,12 @@ export function summarise(model: string, label: string, group: string, rows: Val
 }
 
 function baseRequest(s: LatticeReferenceSalt): SaltThermoRequest {
-  return { cation: getThermoIon(s.cation)!, anion: getThermoIon(s.anion)!, cationsPerFormula: s.p, anionsPerFormula: s.q };
+  return {
+    cation: getThermoIon(s.cation)!,
+    anion: getThermoIon(s.anion)!,
+    cationsPerFormula: s.p,
+    anionsPerFormula: s.q,
+  };
 }
 
 /** Structure type of a reference salt when its cell fixes r₀. */
@@ -59,32 +85,60 @@ export const LATTICE_VARIANT_LABELS: Record<LatticeVariant, string> = {
 };
 
 /** One variant's estimate for one reference salt, or undefined if the variant does not apply. */
-export function variantEstimateKJ(variant: LatticeVariant, s: LatticeReferenceSalt): number | undefined {
+export function variantEstimateKJ(
+  variant: LatticeVariant,
+  s: LatticeReferenceSalt,
+): number | undefined {
   const req = baseRequest(s);
   const tableRadii = (set: 'shannon' | 'goldschmidt') => {
     const c = THERMO_IONS.find((i) => i.id === s.cation)!;
     const a = THERMO_IONS.find((i) => i.id === s.anion)!;
     const pick = (r: typeof c, fallback: number | undefined) =>
-      r.shape === 'monatomic' ? (set === 'shannon' ? r.shannonRadiusA?.value : (r.goldschmidtRadiusA ?? r.shannonRadiusA)?.value) : fallback;
+      r.shape === 'monatomic'
+        ? set === 'shannon'
+          ? r.shannonRadiusA?.value
+          : (r.goldschmidtRadiusA ?? r.shannonRadiusA)?.value
+        : fallback;
     const rc = pick(c, req.cation.radiusA?.value);
     const ra = pick(a, req.anion.radiusA?.value);
     return rc !== undefined && ra !== undefined ? { cation: rc, anion: ra } : undefined;
   };
-  const method: LatticeMethod = variant.startsWith('kapustinskii') ? 'kapustinskii' : variant.startsWith('vbt') ? 'vbt' : (variant as LatticeMethod);
-  const k = variant.endsWith('1202') ? KAPUSTINSKII_K_ALT_KJ_A_PER_MOL : KAPUSTINSKII_K_KJ_A_PER_MOL;
+  const method: LatticeMethod = variant.startsWith('kapustinskii')
+    ? 'kapustinskii'
+    : variant.startsWith('vbt')
+      ? 'vbt'
+      : (variant as LatticeMethod);
+  const k = variant.endsWith('1202')
+    ? KAPUSTINSKII_K_ALT_KJ_A_PER_MOL
+    : KAPUSTINSKII_K_KJ_A_PER_MOL;
   if (method === 'kapustinskii') {
-    const set = variant.includes('shannon') ? 'shannon' : variant.includes('goldschmidt') ? 'goldschmidt' : undefined;
+    const set = variant.includes('shannon')
+      ? 'shannon'
+      : variant.includes('goldschmidt')
+        ? 'goldschmidt'
+        : undefined;
     const radii = set ? tableRadii(set) : undefined;
     if (set && !radii) return undefined;
-    return rawLattice(req, 'kapustinskii', { kapustinskiiK: k, ...(radii ? { kapustinskiiRadii: radii } : {}) }).enthalpyKJ;
+    return rawLattice(req, 'kapustinskii', {
+      kapustinskiiK: k,
+      ...(radii ? { kapustinskiiRadii: radii } : {}),
+    }).enthalpyKJ;
   }
   if (method === 'born-mayer' || method === 'born-lande') {
     const st = structureOf(s);
     if (!st) return undefined;
-    if (method === 'born-lande' && (req.cation.bornExponent === undefined || req.anion.bornExponent === undefined)) return undefined;
-    return rawLattice({ ...req, structureType: st, formulaUnitVolumeNm3: referenceVolumeNm3(s) }, method).enthalpyKJ;
+    if (
+      method === 'born-lande' &&
+      (req.cation.bornExponent === undefined || req.anion.bornExponent === undefined)
+    )
+      return undefined;
+    return rawLattice(
+      { ...req, structureType: st, formulaUnitVolumeNm3: referenceVolumeNm3(s) },
+      method,
+    ).enthalpyKJ;
   }
-  if (variant === 'vbt') return rawLattice({ ...req, formulaUnitVolumeNm3: referenceVolumeNm3(s) }, 'vbt').enthalpyKJ;
+  if (variant === 'vbt')
+    return rawLattice({ ...req, formulaUnitVolumeNm3: referenceVolumeNm3(s) }, 'vbt').enthalpyKJ;
   if (!req.cation.volumeNm3 || !req.anion.volumeNm3) return undefined;
   return rawLattice(req, 'vbt').enthalpyKJ;
 }
@@ -101,7 +155,18 @@ export function latticeValidation(): Map<string, ModelValidation> {
     const rows: (ValidationRow & { g: LatticeGroup })[] = refs.flatMap(({ s, ref }) => {
       const e = variantEstimateKJ(variant, s);
       if (e === undefined) return [];
-      return [{ id: s.id, label: s.formula, group: s.group, g: s.group, referenceKJ: ref.value, estimateKJ: e, errorPercent: (e / ref.value - 1) * 100, source: ref.source }];
+      return [
+        {
+          id: s.id,
+          label: s.formula,
+          group: s.group,
+          g: s.group,
+          referenceKJ: ref.value,
+          estimateKJ: e,
+          errorPercent: (e / ref.value - 1) * 100,
+          source: ref.source,
+        },
+      ];
     });
     const groups: [string, (g: LatticeGroup) => boolean][] = [
       ['alkali-halide', (g) => g === 'alkali-halide'],
@@ -112,7 +177,11 @@ export function latticeValidation(): Map<string, ModelValidation> {
     ];
     for (const [name, pred] of groups) {
       const sub = rows.filter((r) => pred(r.g)).map(({ g: _g, ...r }) => r);
-      if (sub.length) map.set(`${variant}/${name}`, summarise(variant, LATTICE_VARIANT_LABELS[variant], name, sub));
+      if (sub.length)
+        map.set(
+          `${variant}/${name}`,
+          summarise(variant, LATTICE_VARIANT_LABELS[variant], name, sub),
+        );
     }
   }
   latticeCache = map;
@@ -129,32 +198,66 @@ export function latticeStats(variant: LatticeVariant, group: string): ModelValid
 /** The fitted Born hydration model against the published values (fit set, and the organic check set). */
 export function hydrationValidation(): ModelValidation[] {
   const fit = fitBornOffsets();
-  const toRow = (r: (typeof fit.rows)[number], group: string): ValidationRow => ({ id: r.id, label: r.label, group, referenceKJ: r.publishedKJ, estimateKJ: r.fittedKJ, errorPercent: r.errorPercent, source: r.source });
+  const toRow = (r: (typeof fit.rows)[number], group: string): ValidationRow => ({
+    id: r.id,
+    label: r.label,
+    group,
+    referenceKJ: r.publishedKJ,
+    estimateKJ: r.fittedKJ,
+    errorPercent: r.errorPercent,
+    source: r.source,
+  });
   const cat = fit.rows.filter((r) => r.charge > 0).map((r) => toRow(r, 'cations'));
   const an = fit.rows.filter((r) => r.charge < 0).map((r) => toRow(r, 'anions'));
   return [
-    summarise('born-fitted', `Born, r + ${fit.cationOffsetA.toFixed(3)} Å (cations), r + ${fit.anionOffsetA.toFixed(3)} Å (anions)`, 'all-published', [...cat, ...an]),
+    summarise(
+      'born-fitted',
+      `Born, r + ${fit.cationOffsetA.toFixed(3)} Å (cations), r + ${fit.anionOffsetA.toFixed(3)} Å (anions)`,
+      'all-published',
+      [...cat, ...an],
+    ),
     summarise('born-fitted', 'Born, fitted offsets: cations', 'cations', cat),
     summarise('born-fitted', 'Born, fitted offsets: anions', 'anions', an),
-    summarise('born-fitted', 'Born, fitted offsets, organic ions sized from their formula (not fitted)', 'organic-check', fit.organicCheck.map((r) => toRow(r, 'organic-check'))),
+    summarise(
+      'born-fitted',
+      'Born, fitted offsets, organic ions sized from their formula (not fitted)',
+      'organic-check',
+      fit.organicCheck.map((r) => toRow(r, 'organic-check')),
+    ),
   ];
 }
 
 /** Closure of the solution cycle on the Born–Haber halides: ΔH_sol(NBS) − ΔH_L(Born–Haber) − Σν·ΔH_hyd(Marcus), kJ/mol. */
-export function publishedHydrationClosure(): { rmsKJ: number; perIonKJ: number; rows: { formula: string; closureKJ: number }[] } {
+export function publishedHydrationClosure(): {
+  rmsKJ: number;
+  perIonKJ: number;
+  rows: { formula: string; closureKJ: number }[];
+} {
   closureCache ??= computeClosure();
   return closureCache;
 }
 
-function computeClosure(): { rmsKJ: number; perIonKJ: number; rows: { formula: string; closureKJ: number }[] } {
+function computeClosure(): {
+  rmsKJ: number;
+  perIonKJ: number;
+  rows: { formula: string; closureKJ: number }[];
+} {
   const rows = LATTICE_REFERENCE_SALTS.filter((s) => s.route === 'born-haber').map((s) => {
     const h = (id: string) => THERMO_IONS.find((i) => i.id === id)!.hydrationEnthalpyKJ!.value;
-    const closure = referenceSolutionEnthalpyKJ(s) - referenceLatticeEnthalpyKJ(s).value - s.p * h(s.cation) - s.q * h(s.anion);
+    const closure =
+      referenceSolutionEnthalpyKJ(s) -
+      referenceLatticeEnthalpyKJ(s).value -
+      s.p * h(s.cation) -
+      s.q * h(s.anion);
     return { formula: s.formula, closureKJ: closure, ions: s.p + s.q };
   });
   const rms = Math.sqrt(rows.reduce((a, r) => a + r.closureKJ ** 2, 0) / rows.length);
   const meanIons = rows.reduce((a, r) => a + r.ions, 0) / rows.length;
-  return { rmsKJ: rms, perIonKJ: rms / Math.sqrt(meanIons), rows: rows.map(({ formula, closureKJ }) => ({ formula, closureKJ })) };
+  return {
+    rmsKJ: rms,
+    perIonKJ: rms / Math.sqrt(meanIons),
+    rows: rows.map(({ formula, closureKJ }) => ({ formula, closureKJ })),
+  };
 }
 
 export { SOLUTION_REFERENCE_SALTS };

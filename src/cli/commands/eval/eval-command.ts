@@ -30,20 +30,46 @@ const failure = (line: number, error: LineError, id?: string | number) =>
   JSON.stringify({ line, ...(id !== undefined ? { id } : {}), ok: false, error });
 
 /** Answer one line of text: the JSON line to write and whether it failed. */
-export async function answerLine(lineNo: number, text: string): Promise<{ json: string; ok: boolean }> {
+export async function answerLine(
+  lineNo: number,
+  text: string,
+): Promise<{ json: string; ok: boolean }> {
   if (jsonNestingDepth(text) > MAX_JSON_DEPTH) {
-    return { ok: false, json: failure(lineNo, { type: 'json', field: 'line', message: `nested deeper than ${MAX_JSON_DEPTH} levels`, accepted: `JSON nested at most ${MAX_JSON_DEPTH} levels deep` }) };
+    return {
+      ok: false,
+      json: failure(lineNo, {
+        type: 'json',
+        field: 'line',
+        message: `nested deeper than ${MAX_JSON_DEPTH} levels`,
+        accepted: `JSON nested at most ${MAX_JSON_DEPTH} levels deep`,
+      }),
+    };
   }
   let value: unknown;
   try {
     value = JSON.parse(text);
   } catch (err) {
-    return { ok: false, json: failure(lineNo, { type: 'json', field: 'line', message: `not valid JSON: ${err instanceof Error ? err.message : String(err)}` }) };
+    return {
+      ok: false,
+      json: failure(lineNo, {
+        type: 'json',
+        field: 'line',
+        message: `not valid JSON: ${err instanceof Error ? err.message : String(err)}`,
+      }),
+    };
   }
   const id = echoId(value);
   try {
     const answer = await evaluateRequest(value, evalRegistry);
-    return { ok: true, json: JSON.stringify({ line: lineNo, ...(id !== undefined ? { id } : {}), ok: true, ...answer }) };
+    return {
+      ok: true,
+      json: JSON.stringify({
+        line: lineNo,
+        ...(id !== undefined ? { id } : {}),
+        ok: true,
+        ...answer,
+      }),
+    };
   } catch (err) {
     return { ok: false, json: failure(lineNo, describeError(err), id) };
   }
@@ -60,7 +86,12 @@ export const evalCommand: CliCommand = defineCommand('eval', {
       let json: string;
       if ('tooLongBytes' in line) {
         failed++;
-        json = failure(line.lineNo, { type: 'json', field: 'line', message: `the line is ${line.tooLongBytes} bytes long`, accepted: `lines of at most ${MAX_LINE_BYTES} bytes (1 MiB)` });
+        json = failure(line.lineNo, {
+          type: 'json',
+          field: 'line',
+          message: `the line is ${line.tooLongBytes} bytes long`,
+          accepted: `lines of at most ${MAX_LINE_BYTES} bytes (1 MiB)`,
+        });
       } else {
         if (line.text.trim() === '') continue;
         const a = await answerLine(line.lineNo, line.text);

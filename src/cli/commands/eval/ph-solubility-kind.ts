@@ -24,7 +24,13 @@ export const phSolubilityRequestSchema = z
       .object({
         kind: z.enum(['base', 'acid']),
         pKas: z.array(pka).min(1).max(4),
-        ionCharge: z.number().int().min(-3).max(3).refine((q) => q !== 0, 'the drug ion cannot be neutral').optional(),
+        ionCharge: z
+          .number()
+          .int()
+          .min(-3)
+          .max(3)
+          .refine((q) => q !== 0, 'the drug ion cannot be neutral')
+          .optional(),
         /** S₀ of the free form: log₁₀ mol/L, or mg/mL with molarMassGPerMol. */
         log10IntrinsicM: z.number().min(-15).max(2).optional(),
         intrinsicSolubilityMgPerMl: z.number().positive().max(1e4).optional(),
@@ -34,8 +40,17 @@ export const phSolubilityRequestSchema = z
     salt: z
       .object({
         /** A library counter-ion id, or the counter-ion's pKa values and charge. */
-        counterIon: z.union([z.string().min(1).max(80), z.object({ pKas: z.array(pka).max(4), kind: z.enum(['anion', 'cation']) }).strict()]),
-        ionCharge: z.number().int().min(-4).max(4).refine((q) => q !== 0, 'the counter-ion cannot be neutral').optional(),
+        counterIon: z.union([
+          z.string().min(1).max(80),
+          z.object({ pKas: z.array(pka).max(4), kind: z.enum(['anion', 'cation']) }).strict(),
+        ]),
+        ionCharge: z
+          .number()
+          .int()
+          .min(-4)
+          .max(4)
+          .refine((q) => q !== 0, 'the counter-ion cannot be neutral')
+          .optional(),
         drugPerSalt: z.number().int().min(1).max(4).optional(),
         counterIonPerSalt: z.number().int().min(1).max(4).optional(),
         log10Ksp: z.number().min(-60).max(10),
@@ -58,36 +73,79 @@ export const phSolubilityEvalHandler: EvalHandler = {
     const r = phSolubilityRequestSchema.parse(raw);
     const ionCharge = r.drug.ionCharge ?? (r.drug.kind === 'base' ? 1 : -1);
     if (Math.sign(ionCharge) !== (r.drug.kind === 'base' ? 1 : -1)) {
-      throw new ChemInputError('drug.ionCharge', `a ${r.drug.kind} cannot form an ion of charge ${ionCharge}`, r.drug.kind === 'base' ? '+1 to +3' : '−3 to −1');
+      throw new ChemInputError(
+        'drug.ionCharge',
+        `a ${r.drug.kind} cannot form an ion of charge ${ionCharge}`,
+        r.drug.kind === 'base' ? '+1 to +3' : '−3 to −1',
+      );
     }
     let logS0: number;
     if (r.drug.log10IntrinsicM !== undefined) logS0 = r.drug.log10IntrinsicM;
-    else if (r.drug.intrinsicSolubilityMgPerMl !== undefined && r.drug.molarMassGPerMol !== undefined) {
+    else if (
+      r.drug.intrinsicSolubilityMgPerMl !== undefined &&
+      r.drug.molarMassGPerMol !== undefined
+    ) {
       logS0 = Math.log10(r.drug.intrinsicSolubilityMgPerMl / r.drug.molarMassGPerMol);
-    } else throw new ChemInputError('drug.log10IntrinsicM', 'no intrinsic solubility', 'log10IntrinsicM, or intrinsicSolubilityMgPerMl with molarMassGPerMol');
+    } else
+      throw new ChemInputError(
+        'drug.log10IntrinsicM',
+        'no intrinsic solubility',
+        'log10IntrinsicM, or intrinsicSolubilityMgPerMl with molarMassGPerMol',
+      );
     const drug = { kind: r.drug.kind, pKas: r.drug.pKas, ionCharge };
     let salt = null;
     if (r.salt) {
       const ionSpec = r.salt.counterIon;
       const lib = typeof ionSpec === 'string' ? getCounterIon(ionSpec) : undefined;
-      if (typeof ionSpec === 'string' && !lib) throw new ChemInputError('salt.counterIon', `unknown counter-ion "${ionSpec}"`, 'a library id, or {"pKas": [...], "kind": "anion"|"cation"}');
+      if (typeof ionSpec === 'string' && !lib)
+        throw new ChemInputError(
+          'salt.counterIon',
+          `unknown counter-ion "${ionSpec}"`,
+          'a library id, or {"pKas": [...], "kind": "anion"|"cation"}',
+        );
       const counterKind = lib ? lib.kind : (ionSpec as { kind: 'anion' | 'cation' }).kind;
       const wanted = r.drug.kind === 'base' ? 'anion' : 'cation';
       if (counterKind !== wanted) {
-        throw new ChemInputError('salt.counterIon', `a ${r.drug.kind} forms salts with ${wanted}s; ${lib ? lib.name : 'this counter-ion'} is an ${counterKind === 'anion' ? 'anion' : 'cation'}`, `a counter-${wanted}`);
+        throw new ChemInputError(
+          'salt.counterIon',
+          `a ${r.drug.kind} forms salts with ${wanted}s; ${lib ? lib.name : 'this counter-ion'} is an ${counterKind === 'anion' ? 'anion' : 'cation'}`,
+          `a counter-${wanted}`,
+        );
       }
       const q = r.salt.ionCharge ?? (lib ? lib.charge : counterKind === 'cation' ? 1 : -1);
-      if (Math.sign(q) !== (counterKind === 'cation' ? 1 : -1)) throw new ChemInputError('salt.ionCharge', `charge ${q} does not fit a counter-${counterKind}`, counterKind === 'cation' ? '+1 to +4' : '−4 to −1');
+      if (Math.sign(q) !== (counterKind === 'cation' ? 1 : -1))
+        throw new ChemInputError(
+          'salt.ionCharge',
+          `charge ${q} does not fit a counter-${counterKind}`,
+          counterKind === 'cation' ? '+1 to +4' : '−4 to −1',
+        );
       const st = lib?.stoichiometries.find((s) => s.ionCharge === q);
-      const ion = lib ?? { id: 'custom', name: 'custom', kind: counterKind, charge: q, molarMassGPerMol: 1, pKas: (ionSpec as { pKas: number[] }).pKas.map((value) => ({ value })), acceptabilityClass: null };
+      const ion = lib ?? {
+        id: 'custom',
+        name: 'custom',
+        kind: counterKind,
+        charge: q,
+        molarMassGPerMol: 1,
+        pKas: (ionSpec as { pKas: number[] }).pKas.map((value) => ({ value })),
+        acceptabilityClass: null,
+      };
       const byCharges = saltStoichiometryFromCharges(ionCharge, q);
       const m = r.salt.drugPerSalt ?? byCharges.drugPerSalt;
       const n = r.salt.counterIonPerSalt ?? byCharges.counterIonPerSalt;
       if (m * ionCharge + n * q !== 0) {
-        throw new ChemInputError('salt.drugPerSalt', `${m}×(${ionCharge}) + ${n}×(${q}) ≠ 0: the salt is not neutral`, 'counts that balance the charges');
+        throw new ChemInputError(
+          'salt.drugPerSalt',
+          `${m}×(${ionCharge}) + ${n}×(${q}) ≠ 0: the salt is not neutral`,
+          'counts that balance the charges',
+        );
       }
       salt = {
-        counterIon: counterIonProtolyte(ion, { drugPerSalt: m, counterIonPerSalt: n, ionCharge: q, pKaIndex: st?.pKaIndex ?? null }),
+        counterIon: counterIonProtolyte(ion, {
+          drugPerSalt: m,
+          counterIonPerSalt: n,
+          ionCharge: q,
+          pKaIndex: st?.pKaIndex ?? null,
+        }),
         counterIonCharge: q,
         drugPerSalt: m,
         counterIonPerSalt: n,
@@ -95,7 +153,13 @@ export const phSolubilityEvalHandler: EvalHandler = {
       };
     }
     const activity =
-      r.activity === 'davies' ? { model: 'davies' as const, backgroundIonicStrengthM: r.ionicStrengthM ?? 0, temperatureK: r.temperatureK ?? 298.15 } : { model: 'ideal' as const };
+      r.activity === 'davies'
+        ? {
+            model: 'davies' as const,
+            backgroundIonicStrengthM: r.ionicStrengthM ?? 0,
+            temperatureK: r.temperatureK ?? 298.15,
+          }
+        : { model: 'ideal' as const };
     const p = phSolubilityProfile(drug, logS0, salt, {
       ...(r.phFrom !== undefined ? { phFrom: r.phFrom } : {}),
       ...(r.phTo !== undefined ? { phTo: r.phTo } : {}),
@@ -104,10 +168,18 @@ export const phSolubilityEvalHandler: EvalHandler = {
       activity,
     });
     const mw = r.drug.molarMassGPerMol;
-    const simple1to1 = salt && salt.drugPerSalt === 1 && salt.counterIonPerSalt === 1 && r.drug.pKas.length === 1;
-    const closed = simple1to1 ? (r.drug.kind === 'base' ? phMaxBase : phMaxAcid)(r.drug.pKas[0]!, 10 ** logS0, 10 ** salt!.log10Ksp) : null;
+    const simple1to1 =
+      salt && salt.drugPerSalt === 1 && salt.counterIonPerSalt === 1 && r.drug.pKas.length === 1;
+    const closed = simple1to1
+      ? (r.drug.kind === 'base' ? phMaxBase : phMaxAcid)(
+          r.drug.pKas[0]!,
+          10 ** logS0,
+          10 ** salt!.log10Ksp,
+        )
+      : null;
     return {
-      units: 'solubility mol/L of total drug (mg/mL free-form equivalents when molarMassGPerMol is given)',
+      units:
+        'solubility mol/L of total drug (mg/mL free-form equivalents when molarMassGPerMol is given)',
       points: p.points.map((pt) => ({
         pH: pt.pH,
         solubilityM: pt.solubilityM,

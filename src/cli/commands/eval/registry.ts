@@ -45,27 +45,56 @@ export type LineError = { type: string; field: string; message: string; accepted
 
 /** Turn any thrown error into the JSON error object of one line. */
 export function describeError(err: unknown): LineError {
-  if (err instanceof ChemInputError) return { type: 'input', field: err.field, message: err.message, accepted: err.accepted };
+  if (err instanceof ChemInputError)
+    return { type: 'input', field: err.field, message: err.message, accepted: err.accepted };
   if (err instanceof CliError) {
-    return { type: 'input', field: err.flag, message: err.message, ...(err.accepted ? { accepted: err.accepted } : {}) };
+    return {
+      type: 'input',
+      field: err.flag,
+      message: err.message,
+      ...(err.accepted ? { accepted: err.accepted } : {}),
+    };
   }
   if (err instanceof z.ZodError) {
     const first = err.issues[0];
     const field = first && first.path.length ? first.path.join('.') : 'request';
-    return { type: 'schema', field, message: err.issues.map((i) => `${i.path.join('.') || 'request'}: ${i.message}`).join('; ') };
+    return {
+      type: 'schema',
+      field,
+      message: err.issues.map((i) => `${i.path.join('.') || 'request'}: ${i.message}`).join('; '),
+    };
   }
-  return { type: 'internal', field: 'request', message: err instanceof Error ? err.message : String(err) };
+  return {
+    type: 'internal',
+    field: 'request',
+    message: err instanceof Error ? err.message : String(err),
+  };
 }
 
 /** Evaluate one parsed JSON value as a request of a registered kind. */
-export async function evaluateRequest(value: unknown, registry: EvalRegistry = evalRegistry): Promise<Record<string, unknown>> {
+export async function evaluateRequest(
+  value: unknown,
+  registry: EvalRegistry = evalRegistry,
+): Promise<Record<string, unknown>> {
   if (!value || typeof value !== 'object' || Array.isArray(value)) {
-    throw new ChemInputError('request', 'each line must be a JSON object', `an object with "kind": ${registry.list().map((k) => `"${k}"`).join(' or ')}`);
+    throw new ChemInputError(
+      'request',
+      'each line must be a JSON object',
+      `an object with "kind": ${registry
+        .list()
+        .map((k) => `"${k}"`)
+        .join(' or ')}`,
+    );
   }
   const kind = (value as { kind?: unknown }).kind;
   const handler = typeof kind === 'string' ? registry.get(kind) : undefined;
   if (!handler) {
-    const shown = typeof kind === 'string' ? JSON.stringify(kind.slice(0, 40)) : typeof kind === 'undefined' ? 'null' : `a ${typeof kind}`;
+    const shown =
+      typeof kind === 'string'
+        ? JSON.stringify(kind.slice(0, 40))
+        : typeof kind === 'undefined'
+          ? 'null'
+          : `a ${typeof kind}`;
     throw new ChemInputError('kind', `unknown kind ${shown}`, registry.list().join(', '));
   }
   return { kind, ...(await handler.run(value)) };

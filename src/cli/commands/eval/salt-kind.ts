@@ -10,15 +10,29 @@ import {
   stoichiometryFromCharges,
   type ThermoIon,
 } from '@/chem';
-import { refuseMultiComponent, requireBuiltIonPlausible, requireFormulaChargeAgrees } from '../../args/ion-consistency';
+import {
+  refuseMultiComponent,
+  requireBuiltIonPlausible,
+  requireFormulaChargeAgrees,
+} from '../../args/ion-consistency';
 import { LATTICE_CAUTION } from '../../output/cautions';
 import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from '../lattice-options';
 import type { EvalHandler } from './registry';
 
 /** `"kind": "salt"`: lattice, hydration and solution enthalpies of one salt. */
 
-const ringsSchema = z.object({ aromatic: z.number().int().min(0).max(50), nonAromatic: z.number().int().min(0).max(50) }).strict();
-const chargeSchema = z.number().int().min(-4).max(4).refine((z_) => z_ !== 0, 'charge must not be zero');
+const ringsSchema = z
+  .object({
+    aromatic: z.number().int().min(0).max(50),
+    nonAromatic: z.number().int().min(0).max(50),
+  })
+  .strict();
+const chargeSchema = z
+  .number()
+  .int()
+  .min(-4)
+  .max(4)
+  .refine((z_) => z_ !== 0, 'charge must not be zero');
 
 /**
  * An ion: a bundled id or symbol, a library counter-ion id, a formula with charge (a bundled ion with the same
@@ -26,8 +40,21 @@ const chargeSchema = z.number().int().min(-4).max(4).refine((z_) => z_ !== 0, 'c
  */
 export const ionSpecSchema = z.union([
   z.string().min(1).max(80),
-  z.object({ formula: z.string().min(1).max(200), charge: chargeSchema, rings: ringsSchema.optional(), label: z.string().max(80).optional() }).strict(),
-  z.object({ smiles: z.string().min(1).max(500), charge: chargeSchema, label: z.string().max(80).optional() }).strict(),
+  z
+    .object({
+      formula: z.string().min(1).max(200),
+      charge: chargeSchema,
+      rings: ringsSchema.optional(),
+      label: z.string().max(80).optional(),
+    })
+    .strict(),
+  z
+    .object({
+      smiles: z.string().min(1).max(500),
+      charge: chargeSchema,
+      label: z.string().max(80).optional(),
+    })
+    .strict(),
 ]);
 
 const ranged = (r: { min: number; max: number }) => z.number().min(r.min).max(r.max);
@@ -63,7 +90,11 @@ export const saltRequestSchema = z
 type IonSpec = z.infer<typeof ionSpecSchema>;
 
 /** Resolve an ion spec to a ThermoIon. `role` names the field in errors. */
-export async function resolveIon(spec: IonSpec, role: 'cation' | 'anion', packingCoefficient?: number): Promise<ThermoIon> {
+export async function resolveIon(
+  spec: IonSpec,
+  role: 'cation' | 'anion',
+  packingCoefficient?: number,
+): Promise<ThermoIon> {
   const opts = packingCoefficient !== undefined ? { packingCoefficient } : {};
   if (typeof spec === 'string') {
     const bundled = findThermoIon(spec);
@@ -72,16 +103,29 @@ export async function resolveIon(spec: IonSpec, role: 'cation' | 'anion', packin
     if (lib) {
       const viaThermo = lib.thermoId ? findThermoIon(lib.thermoId) : undefined;
       if (viaThermo) return viaThermo;
-      return organicIonFromFormula(lib.formula, lib.charge, lib.rings, { ...opts, label: lib.name, id: lib.id });
+      return organicIonFromFormula(lib.formula, lib.charge, lib.rings, {
+        ...opts,
+        label: lib.name,
+        id: lib.id,
+      });
     }
-    throw new ChemInputError(role, `unknown ion "${spec.slice(0, 80)}"`, 'a bundled ion id or symbol (sodium, Na+, SO4 2-), a counter-ion library id (mesylate), {"formula","charge"} or {"smiles","charge"}');
+    throw new ChemInputError(
+      role,
+      `unknown ion "${spec.slice(0, 80)}"`,
+      'a bundled ion id or symbol (sodium, Na+, SO4 2-), a counter-ion library id (mesylate), {"formula","charge"} or {"smiles","charge"}',
+    );
   }
   const label = spec.label ? { label: spec.label } : {};
   if ('formula' in spec) {
     requireFormulaChargeAgrees(role, spec.formula, spec.charge);
     const bundled = findThermoIonByFormula(spec.formula, spec.charge);
     if (bundled && !spec.rings) return bundled;
-    const ion = organicIonFromFormula(spec.formula, spec.charge, spec.rings ?? { aromatic: 0, nonAromatic: 0 }, { ...opts, ...label });
+    const ion = organicIonFromFormula(
+      spec.formula,
+      spec.charge,
+      spec.rings ?? { aromatic: 0, nonAromatic: 0 },
+      { ...opts, ...label },
+    );
     requireBuiltIonPlausible(role, ion);
     return ion;
   }
@@ -108,8 +152,18 @@ export const saltEvalHandler: EvalHandler = {
     const r = saltRequestSchema.parse(raw);
     const cation = await resolveIon(r.cation, 'cation', r.packingCoefficient);
     const anion = await resolveIon(r.anion, 'anion', r.packingCoefficient);
-    if (cation.charge <= 0) throw new ChemInputError('cation.charge', `${cation.label} has charge ${cation.charge}`, 'a positive charge');
-    if (anion.charge >= 0) throw new ChemInputError('anion.charge', `${anion.label} has charge ${anion.charge}`, 'a negative charge');
+    if (cation.charge <= 0)
+      throw new ChemInputError(
+        'cation.charge',
+        `${cation.label} has charge ${cation.charge}`,
+        'a positive charge',
+      );
+    if (anion.charge >= 0)
+      throw new ChemInputError(
+        'anion.charge',
+        `${anion.label} has charge ${anion.charge}`,
+        'a negative charge',
+      );
     const st = stoichiometryFromCharges(cation.charge, anion.charge);
     const p = r.cationsPerFormula ?? st.cations;
     const q = r.anionsPerFormula ?? st.anions;
@@ -120,7 +174,9 @@ export const saltEvalHandler: EvalHandler = {
       anionsPerFormula: q,
       ...(r.method ? { method: r.method } : {}),
       ...(r.structureType !== undefined ? { structureType: r.structureType } : {}),
-      ...(r.formulaUnitVolumeNm3 !== undefined ? { formulaUnitVolumeNm3: r.formulaUnitVolumeNm3 } : {}),
+      ...(r.formulaUnitVolumeNm3 !== undefined
+        ? { formulaUnitVolumeNm3: r.formulaUnitVolumeNm3 }
+        : {}),
       ...(r.densityGPerCm3 !== undefined ? { densityGPerCm3: r.densityGPerCm3 } : {}),
       ...(r.molarMassGPerMol !== undefined ? { molarMassGPerMol: r.molarMassGPerMol } : {}),
       ...(r.temperatureK !== undefined ? { temperatureK: r.temperatureK } : {}),

@@ -7,8 +7,20 @@ import { parseFlags } from '../../args/parse-flags';
 import { writeFileAtomic } from '../../output/atomic-write';
 import { writeLine, writeText, type CliCommand } from '../../io';
 import { runBatch } from './batch/run-batch';
-import { refuseContradictions, SCREEN_FLAGS, SCREEN_USAGE, settingsFromFlags, type ScreenFlags } from './screen-flags';
-import { compoundFileSchema, FLAG_NAMES, prepareScreen, type CompoundFile, type CompoundSpec } from './screen-input';
+import {
+  refuseContradictions,
+  SCREEN_FLAGS,
+  SCREEN_USAGE,
+  settingsFromFlags,
+  type ScreenFlags,
+} from './screen-flags';
+import {
+  compoundFileSchema,
+  FLAG_NAMES,
+  prepareScreen,
+  type CompoundFile,
+  type CompoundSpec,
+} from './screen-input';
 import { runScreen } from './screen-table';
 import { screenCsv, screenJson } from './screen-writers';
 
@@ -22,7 +34,9 @@ import { screenCsv, screenJson } from './screen-writers';
 export function specFromFlags(flags: ScreenFlags, file: CompoundFile): CompoundSpec {
   const origin = flags['pka-origin'] ?? 'measured';
   const kind = flags.kind ?? file.kind ?? 'base';
-  const pKas = flags.pka ? flags.pka.map((value) => ({ value, origin })) : (file.pKas ?? []).map((p) => (typeof p === 'number' ? { value: p, origin } : p));
+  const pKas = flags.pka
+    ? flags.pka.map((value) => ({ value, origin }))
+    : (file.pKas ?? []).map((p) => (typeof p === 'number' ? { value: p, origin } : p));
   return {
     name: flags.name ?? file.name ?? 'compound',
     smiles: flags.smiles ?? (flags.formula === undefined ? (file.smiles ?? '') : ''),
@@ -43,18 +57,30 @@ async function readCompoundFile(path: string): Promise<CompoundFile> {
   try {
     text = await readFile(path, 'utf8');
   } catch (err) {
-    throw new ChemInputError('--input', `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`, 'a readable JSON file');
+    throw new ChemInputError(
+      '--input',
+      `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
+      'a readable JSON file',
+    );
   }
   let json: unknown;
   try {
     json = JSON.parse(text);
   } catch {
-    throw new ChemInputError('--input', `${path} is not valid JSON`, 'a JSON object with the compound fields');
+    throw new ChemInputError(
+      '--input',
+      `${path} is not valid JSON`,
+      'a JSON object with the compound fields',
+    );
   }
   const r = compoundFileSchema.safeParse(json);
   if (!r.success) {
     const i = r.error.issues[0]!;
-    throw new ChemInputError(`--input ${i.path.join('.') || '(file)'}`, i.message, 'the compound fields of saltsmith screen --help');
+    throw new ChemInputError(
+      `--input ${i.path.join('.') || '(file)'}`,
+      i.message,
+      'the compound fields of saltsmith screen --help',
+    );
   }
   return r.data;
 }
@@ -78,7 +104,10 @@ export const screenCommand: CliCommand = defineCommand('screen', {
     const iterations = flags.iterations ?? 1000;
     const seed = flags.seed ?? 1;
     const { res, table } = runScreen(prepared, { iterations, seed, top: flags.top });
-    const text = flags.format === 'json' ? screenJson(res, table, prepared.skipped, { iterations, seed }) : screenCsv(table, prepared.skipped);
+    const text =
+      flags.format === 'json'
+        ? screenJson(res, table, prepared.skipped, { iterations, seed })
+        : screenCsv(table, prepared.skipped);
     if (flags.out !== undefined) {
       await writeFileAtomic(flags.out, text + '\n');
       writeLine(io.stderr, `wrote ${table.length} candidates to ${flags.out}`);

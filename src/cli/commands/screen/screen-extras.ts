@@ -24,7 +24,12 @@ export const customIonSpecSchema = z
     id: z.string().max(60).regex(ID, 'a kebab-case id, e.g. my-sulfonate'),
     name: z.string().trim().min(1).max(80).optional(),
     smiles: z.string().trim().min(1).max(2000),
-    charge: z.number().int().min(-3).max(3).refine((c) => c !== 0, 'an ion cannot be neutral'),
+    charge: z
+      .number()
+      .int()
+      .min(-3)
+      .max(3)
+      .refine((c) => c !== 0, 'an ion cannot be neutral'),
     pKas: z.array(pka).max(4).default([]),
   })
   .strict();
@@ -37,7 +42,10 @@ export const benchEntrySchema = z
     solubilityMgPerMl: z.number().positive().max(1000).optional(),
   })
   .strict()
-  .refine((b) => Object.keys(b).length > 0, 'give at least one of meltingPointC, fusionEnthalpyKJPerMol, solubilityMgPerMl');
+  .refine(
+    (b) => Object.keys(b).length > 0,
+    'give at least one of meltingPointC, fusionEnthalpyKJPerMol, solubilityMgPerMl',
+  );
 export type BenchEntry = z.infer<typeof benchEntrySchema>;
 
 /** In-house counter-ions from their SMILES, refused with the field named when they contradict themselves. */
@@ -53,23 +61,43 @@ export async function buildCustomIons(
   specs.forEach((spec, i) => {
     const field = `customIons.${i}`;
     if (getCounterIon(spec.id)) {
-      throw new ChemInputError(`${field}.id`, `"${spec.id}" is a bundled counter-ion; an in-house ion never takes a bundled id`, 'an id of your own, e.g. my-sulfonate');
+      throw new ChemInputError(
+        `${field}.id`,
+        `"${spec.id}" is a bundled counter-ion; an in-house ion never takes a bundled id`,
+        'an id of your own, e.g. my-sulfonate',
+      );
     }
-    if (ions.some((o) => o.id === spec.id)) throw new ChemInputError(`${field}.id`, `"${spec.id}" is given twice`, 'each id once');
+    if (ions.some((o) => o.id === spec.id))
+      throw new ChemInputError(`${field}.id`, `"${spec.id}" is given twice`, 'each id once');
     if (Math.sign(spec.charge) !== want) {
-      throw new ChemInputError(`${field}.charge`, `${spec.charge} does not suit a ${drugKind} (it forms salts with ${want < 0 ? 'anions' : 'cations'})`, want < 0 ? '−1, −2 or −3' : '1, 2 or 3');
+      throw new ChemInputError(
+        `${field}.charge`,
+        `${spec.charge} does not suit a ${drugKind} (it forms salts with ${want < 0 ? 'anions' : 'cations'})`,
+        want < 0 ? '−1, −2 or −3' : '1, 2 or 3',
+      );
     }
     const sorted = [...spec.pKas].sort((a, b) => a - b);
-    if (sorted.some((v, k) => v !== spec.pKas[k])) throw new ChemInputError(`${field}.pKas`, 'pKa values out of order', 'ascending pKa values');
+    if (sorted.some((v, k) => v !== spec.pKas[k]))
+      throw new ChemInputError(`${field}.pKas`, 'pKa values out of order', 'ascending pKa values');
     const nonHydroxide = spec.smiles.split('.').filter((p) => p.trim() !== '[OH-]');
     if (nonHydroxide.length > 1) {
-      throw new ChemInputError(`${field}.smiles`, 'several components (joined by ".")', 'the SMILES of the parent acid or base (a hydroxide may stand beside a quaternary cation)');
+      throw new ChemInputError(
+        `${field}.smiles`,
+        'several components (joined by ".")',
+        'the SMILES of the parent acid or base (a hydroxide may stand beside a quaternary cation)',
+      );
     }
     let parent;
     try {
       parent = counterIonFromParentSmiles(ocl, spec.smiles, spec.charge);
     } catch (err) {
-      throw new ChemInputError(`${field}.smiles`, err instanceof ChemInputError ? err.message.replace(/^smiles: /, '').replace(/ \(accepted:.*$/, '') : String(err), 'the SMILES of the neutral parent acid or base, or of the ion with the same charge');
+      throw new ChemInputError(
+        `${field}.smiles`,
+        err instanceof ChemInputError
+          ? err.message.replace(/^smiles: /, '').replace(/ \(accepted:.*$/, '')
+          : String(err),
+        'the SMILES of the neutral parent acid or base, or of the ion with the same charge',
+      );
     }
     try {
       ions.push(
@@ -90,7 +118,12 @@ export async function buildCustomIons(
         ),
       );
     } catch (err) {
-      if (err instanceof ChemInputError) throw new ChemInputError(`${field}.${err.field}`, err.message.replace(/^[^:]*: /, '').replace(/ \(accepted:.*$/, ''), err.accepted);
+      if (err instanceof ChemInputError)
+        throw new ChemInputError(
+          `${field}.${err.field}`,
+          err.message.replace(/^[^:]*: /, '').replace(/ \(accepted:.*$/, ''),
+          err.accepted,
+        );
       throw err;
     }
     descriptors[spec.id] = parent.descriptors;
@@ -107,17 +140,42 @@ export function withExtras(
   descriptors: Record<string, CounterIonDescriptors>,
   bench: Record<string, BenchEntry>,
 ): ScreeningCandidate[] {
-  const out = candidates.map((c) => (descriptors[c.counterIon.id] ? { ...c, counterIonDescriptors: descriptors[c.counterIon.id]! } : c));
+  const out = candidates.map((c) =>
+    descriptors[c.counterIon.id]
+      ? { ...c, counterIonDescriptors: descriptors[c.counterIon.id]! }
+      : c,
+  );
   for (const [ionId, entry] of Object.entries(bench)) {
     const forms = out.filter((c) => c.counterIon.id === ionId);
-    if (forms.length === 0) throw new ChemInputError(`bench.${ionId}`, `"${ionId}" is not among the screened counter-ions`, 'the id of a screened counter-ion (see "ions")');
-    const target = forms.find((c) => c.stoichiometry.drugPerSalt === 1 && c.stoichiometry.counterIonPerSalt === 1) ?? (forms.length === 1 ? forms[0] : undefined);
-    if (!target) throw new ChemInputError(`bench.${ionId}`, `${ionId} is screened in ${forms.length} salt forms and none is 1:1`, 'a counter-ion with a 1:1 salt or a single salt form');
+    if (forms.length === 0)
+      throw new ChemInputError(
+        `bench.${ionId}`,
+        `"${ionId}" is not among the screened counter-ions`,
+        'the id of a screened counter-ion (see "ions")',
+      );
+    const target =
+      forms.find(
+        (c) => c.stoichiometry.drugPerSalt === 1 && c.stoichiometry.counterIonPerSalt === 1,
+      ) ?? (forms.length === 1 ? forms[0] : undefined);
+    if (!target)
+      throw new ChemInputError(
+        `bench.${ionId}`,
+        `${ionId} is screened in ${forms.length} salt forms and none is 1:1`,
+        'a counter-ion with a 1:1 salt or a single salt form',
+      );
     const ms: MeasurementInput[] = [];
     const base = { ph: null, temperatureK: null, medium: 'water', text: 'from the --input file' };
-    if (entry.meltingPointC !== undefined) ms.push({ ...base, kind: 'melting-point', value: entry.meltingPointC, unit: '°C' });
-    if (entry.fusionEnthalpyKJPerMol !== undefined) ms.push({ ...base, kind: 'fusion-enthalpy', value: entry.fusionEnthalpyKJPerMol, unit: 'kJ/mol' });
-    if (entry.solubilityMgPerMl !== undefined) ms.push({ ...base, kind: 'solubility', value: entry.solubilityMgPerMl, unit: 'mg/mL' });
+    if (entry.meltingPointC !== undefined)
+      ms.push({ ...base, kind: 'melting-point', value: entry.meltingPointC, unit: '°C' });
+    if (entry.fusionEnthalpyKJPerMol !== undefined)
+      ms.push({
+        ...base,
+        kind: 'fusion-enthalpy',
+        value: entry.fusionEnthalpyKJPerMol,
+        unit: 'kJ/mol',
+      });
+    if (entry.solubilityMgPerMl !== undefined)
+      ms.push({ ...base, kind: 'solubility', value: entry.solubilityMgPerMl, unit: 'mg/mL' });
     const k = out.indexOf(target);
     out[k] = { ...target, measurements: [...(target.measurements ?? []), ...ms] };
   }

@@ -8,7 +8,19 @@ import { refuseTogether, type ParsedFlags } from '../../args/parse-flags';
 export const SCREEN_USAGE = COMMAND_USAGE.screen.usage;
 
 /** Flags that describe one compound; with --batch they come from the file instead. */
-export const COMPOUND_FLAGS = ['smiles', 'formula', 'name', 'kind', 'charge', 'pka', 's0', 'mp', 'logp', 'dose', 'input'] as const;
+export const COMPOUND_FLAGS = [
+  'smiles',
+  'formula',
+  'name',
+  'kind',
+  'charge',
+  'pka',
+  's0',
+  'mp',
+  'logp',
+  'dose',
+  'input',
+] as const;
 
 export const SCREEN_FLAGS = {
   help: { type: 'switch' },
@@ -47,39 +59,62 @@ export type ScreenFlags = ParsedFlags<typeof SCREEN_FLAGS>;
 
 /** Refuse combinations that cannot all be honoured (exit status 2). */
 export function refuseContradictions(flags: ScreenFlags): void {
-  refuseTogether(flags, 'smiles', 'formula', 'give the structure or the formula; the formula follows from the structure');
+  refuseTogether(
+    flags,
+    'smiles',
+    'formula',
+    'give the structure or the formula; the formula follows from the structure',
+  );
   if (flags.charge !== undefined) {
-    if (flags.charge === 0) throw usageError('--charge', 'the drug ion cannot be neutral', '±1, ±2 or ±3');
+    if (flags.charge === 0)
+      throw usageError('--charge', 'the drug ion cannot be neutral', '±1, ±2 or ±3');
     const kind = flags.kind ?? 'base';
     if ((kind === 'base') !== flags.charge > 0) {
-      throw usageError('--charge', `${flags.charge} contradicts --kind ${kind} (a base forms a cation, an acid an anion)`);
+      throw usageError(
+        '--charge',
+        `${flags.charge} contradicts --kind ${kind} (a base forms a cation, an acid an anion)`,
+      );
     }
   }
   if (flags.ions) {
     const seen = new Set<string>();
     for (const id of flags.ions.map((x) => x.toLowerCase())) {
-      if (seen.has(id)) throw usageError('--ions', `"${id}" is given twice`, 'each counter-ion once');
+      if (seen.has(id))
+        throw usageError('--ions', `"${id}" is given twice`, 'each counter-ion once');
       seen.add(id);
     }
   }
   if (flags.batch !== undefined) {
     for (const f of COMPOUND_FLAGS) {
-      if (flags[f] !== undefined) throw usageError(`--${f}`, 'cannot be combined with --batch: each compound comes from the batch file');
+      if (flags[f] !== undefined)
+        throw usageError(
+          `--${f}`,
+          'cannot be combined with --batch: each compound comes from the batch file',
+        );
     }
-    if (flags.format === 'json') throw usageError('--format', 'json is one document; a batch writes csv or jsonl (one JSON line per row)');
+    if (flags.format === 'json')
+      throw usageError(
+        '--format',
+        'json is one document; a batch writes csv or jsonl (one JSON line per row)',
+      );
   } else {
     for (const f of ['jobs', 'errors'] as const) {
       if (flags[f] !== undefined) throw usageError(`--${f}`, 'only applies with --batch');
     }
-    if (flags.format === 'jsonl') throw usageError('--format', 'jsonl is for --batch; one compound writes csv or json');
+    if (flags.format === 'jsonl')
+      throw usageError('--format', 'jsonl is for --batch; one compound writes csv or json');
   }
 }
 
 /** Screening settings given by flags, over `base` (the settings of an --input file). */
-export function settingsFromFlags(flags: ScreenFlags, base: Record<string, unknown> = {}): Record<string, unknown> {
+export function settingsFromFlags(
+  flags: ScreenFlags,
+  base: Record<string, unknown> = {},
+): Record<string, unknown> {
   const s: Record<string, unknown> = { ...base };
   if (flags['gastric-chloride'] !== undefined) s.gastricChlorideM = flags['gastric-chloride'];
   if (flags['micro-ph'] !== undefined) s.microenvironmentPh = flags['micro-ph'];
-  if (flags['temperature-c'] !== undefined) s.temperatureK = celsiusToKelvin(flags['temperature-c']);
+  if (flags['temperature-c'] !== undefined)
+    s.temperatureK = celsiusToKelvin(flags['temperature-c']);
   return s;
 }

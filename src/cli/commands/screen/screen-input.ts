@@ -15,7 +15,14 @@ import {
 } from '@/chem';
 import { usageError } from '../../args/cli-error';
 import { refuseMultiComponent } from '../../args/ion-consistency';
-import { benchEntrySchema, buildCustomIons, customIonSpecSchema, withExtras, type BenchEntry, type CustomIonSpec } from './screen-extras';
+import {
+  benchEntrySchema,
+  buildCustomIons,
+  customIonSpecSchema,
+  withExtras,
+  type BenchEntry,
+  type CustomIonSpec,
+} from './screen-extras';
 
 /**
  * The input of one screen, whatever it came from (flags, an --input file, a row of a batch file): a
@@ -42,8 +49,17 @@ export type FieldNames = Partial<Record<keyof CompoundSpec | 'settings', string>
 
 /** Flag names of the compound fields, for messages. */
 export const FLAG_NAMES: FieldNames = {
-  name: '--name', smiles: '--smiles', formula: '--formula', kind: '--kind', pKas: '--pka', ionCharge: '--charge',
-  intrinsicSolubilityMgPerMl: '--s0', meltingPointC: '--mp', logP: '--logp', doseMg: '--dose', ions: '--ions',
+  name: '--name',
+  smiles: '--smiles',
+  formula: '--formula',
+  kind: '--kind',
+  pKas: '--pka',
+  ionCharge: '--charge',
+  intrinsicSolubilityMgPerMl: '--s0',
+  meltingPointC: '--mp',
+  logP: '--logp',
+  doseMg: '--dose',
+  ions: '--ions',
 };
 
 const pka = z.number().min(-10).max(20);
@@ -56,7 +72,18 @@ export const compoundFileSchema = z
     smiles: z.string().max(2000).optional(),
     formula: z.string().max(200).optional(),
     kind: z.enum(['base', 'acid']).optional(),
-    pKas: z.array(z.union([pka, z.object({ value: pka, origin: z.enum(['measured', 'literature', 'predicted']) }).strict()])).min(1).max(4).optional(),
+    pKas: z
+      .array(
+        z.union([
+          pka,
+          z
+            .object({ value: pka, origin: z.enum(['measured', 'literature', 'predicted']) })
+            .strict(),
+        ]),
+      )
+      .min(1)
+      .max(4)
+      .optional(),
     ionCharge: z.number().int().min(-3).max(3).optional(),
     intrinsicSolubilityMgPerMl: z.number().positive().max(1e4).nullable().optional(),
     meltingPointC: z.number().min(-100).max(600).nullable().optional(),
@@ -82,7 +109,12 @@ const name = (names: FieldNames, f: keyof CompoundSpec | 'settings') => names[f]
  * Resolve counter-ion ids against the library: unknown ids, an id given twice and ions of the wrong
  * kind for the drug (a cation for a base) are refused, naming the field.
  */
-export function resolveCounterIons(ids: readonly string[] | null, kind: 'base' | 'acid', field: string, inHouse: readonly CounterIon[] = []): readonly CounterIon[] {
+export function resolveCounterIons(
+  ids: readonly string[] | null,
+  kind: 'base' | 'acid',
+  field: string,
+  inHouse: readonly CounterIon[] = [],
+): readonly CounterIon[] {
   if (ids === null) return [...COUNTER_IONS, ...inHouse];
   const seen = new Set<string>();
   const want = kind === 'base' ? 'anion' : 'cation';
@@ -91,9 +123,18 @@ export function resolveCounterIons(ids: readonly string[] | null, kind: 'base' |
     if (seen.has(id)) throw usageError(field, `"${id}" is given twice`, 'each counter-ion once');
     seen.add(id);
     const ion = getCounterIon(id) ?? inHouse.find((x) => x.id === id);
-    if (!ion) throw new ChemInputError(field, `unknown counter-ion "${raw.slice(0, 80)}"`, 'library ids, e.g. chloride,mesylate (saltsmith ions lists them), or ids of customIons');
+    if (!ion)
+      throw new ChemInputError(
+        field,
+        `unknown counter-ion "${raw.slice(0, 80)}"`,
+        'library ids, e.g. chloride,mesylate (saltsmith ions lists them), or ids of customIons',
+      );
     if (ion.kind !== want) {
-      throw new ChemInputError(field, `${ion.name} is a counter-${ion.kind}; a ${kind} forms salts with counter-${want}s`, `counter-${want}s (saltsmith ions --kind ${want})`);
+      throw new ChemInputError(
+        field,
+        `${ion.name} is a counter-${ion.kind}; a ${kind} forms salts with counter-${want}s`,
+        `counter-${want}s (saltsmith ions --kind ${want})`,
+      );
     }
     return ion;
   });
@@ -111,10 +152,15 @@ export async function prepareScreen(
   },
 ) {
   const n = opts.names;
-  if (spec.pKas.length === 0) throw new ChemInputError(name(n, 'pKas'), 'no pKa given', 'one to four pKa values, ascending');
+  if (spec.pKas.length === 0)
+    throw new ChemInputError(name(n, 'pKas'), 'no pKa given', 'one to four pKa values, ascending');
   const ionCharge = spec.ionCharge ?? (spec.kind === 'base' ? 1 : -1);
   if (ionCharge === 0 || (spec.kind === 'base') !== ionCharge > 0) {
-    throw new ChemInputError(name(n, 'ionCharge'), `${ionCharge} does not fit a ${spec.kind} (a base forms a cation, an acid an anion)`, spec.kind === 'base' ? '1, 2 or 3' : '−1, −2 or −3');
+    throw new ChemInputError(
+      name(n, 'ionCharge'),
+      `${ionCharge} does not fit a ${spec.kind} (a base forms a cation, an acid an anion)`,
+      spec.kind === 'base' ? '1, 2 or 3' : '−1, −2 or −3',
+    );
   }
   let structure;
   let formula = spec.formula.trim();
@@ -122,14 +168,30 @@ export async function prepareScreen(
     refuseMultiComponent(name(n, 'smiles'), spec.smiles.trim());
     structure = await parseStructure(spec.smiles);
     if (structure.netCharge !== 0) {
-      throw new ChemInputError(name(n, 'smiles'), `the structure carries a net charge of ${structure.netCharge}`, 'the neutral free form; the drug ion follows from --kind and --charge');
+      throw new ChemInputError(
+        name(n, 'smiles'),
+        `the structure carries a net charge of ${structure.netCharge}`,
+        'the neutral free form; the drug ion follows from --kind and --charge',
+      );
     }
-    if (formula !== '' && !sameElements(parseFormula(formula, name(n, 'formula')).elements, structure.elements)) {
-      throw new ChemInputError(name(n, 'formula'), `${formula} disagrees with the structure's ${structure.formula}`, 'the formula of the structure, or no formula');
+    if (
+      formula !== '' &&
+      !sameElements(parseFormula(formula, name(n, 'formula')).elements, structure.elements)
+    ) {
+      throw new ChemInputError(
+        name(n, 'formula'),
+        `${formula} disagrees with the structure's ${structure.formula}`,
+        'the formula of the structure, or no formula',
+      );
     }
     formula = structure.formula;
   }
-  if (formula === '') throw new ChemInputError(name(n, 'smiles'), 'no structure given', 'a SMILES or a molecular formula of the neutral free form');
+  if (formula === '')
+    throw new ChemInputError(
+      name(n, 'smiles'),
+      'no structure given',
+      'a SMILES or a molecular formula of the neutral free form',
+    );
   const compound = {
     name: spec.name,
     kind: spec.kind,
@@ -140,7 +202,14 @@ export async function prepareScreen(
     logP: spec.logP,
     doseMg: spec.doseMg,
   };
-  const checked = compoundSchema.safeParse({ ...compound, smiles: spec.smiles, formula, logPOrigin: null, densityGPerCm3: null, notes: '' });
+  const checked = compoundSchema.safeParse({
+    ...compound,
+    smiles: spec.smiles,
+    formula,
+    logPOrigin: null,
+    densityGPerCm3: null,
+    notes: '',
+  });
   if (!checked.success) {
     const issue = checked.error.issues[0]!;
     const field = String(issue.path[0] ?? 'compound') as keyof CompoundSpec;
@@ -154,7 +223,12 @@ export async function prepareScreen(
   const rings = structure ? structure.rings : { aromatic: 0, nonAromatic: 0 };
   const libraryCandidates = candidatesFromLibrary(
     ions,
-    { kind: spec.kind, ionCharge, pKas: spec.pKas.map((p) => p.value), thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings } },
+    {
+      kind: spec.kind,
+      ionCharge,
+      pKas: spec.pKas.map((p) => p.value),
+      thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings },
+    },
     { skipped, keepCocrystalBand: opts.keepCocrystalBand, bands: settings.deltaPkaBands },
   );
   const candidates = withExtras(libraryCandidates, custom.descriptors, opts.bench ?? {});

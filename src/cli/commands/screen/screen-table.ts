@@ -2,7 +2,8 @@ import { rankCandidates, rankRobustness, screenCompound, type ScreenResult } fro
 import type { PreparedScreen } from './screen-input';
 
 /** Round to `digits` significant digits for the table; null, undefined and non-finite values become an empty cell. */
-const sig = (x: number | null | undefined, digits = 3) => (x === null || x === undefined || !Number.isFinite(x) ? '' : Number(x.toPrecision(digits)));
+const sig = (x: number | null | undefined, digits = 3) =>
+  x === null || x === undefined || !Number.isFinite(x) ? '' : Number(x.toPrecision(digits));
 
 /** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
 export type ScreenTableRow = ReturnType<typeof screenTable>[number];
@@ -30,7 +31,10 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       salt_solubility_water_log10_M_sd: sig(row.saltWaterSolubility?.log10DrugM.uncertainty, 2),
       salt_solubility_water_mg_per_ml: sig(row.saltWaterSolubility?.mgPerMlAsSalt),
       salt_solubility_origin: row.saltWaterSolubility?.origin ?? '',
-      salt_solubility_drivers: row.saltWaterSolubility?.drivers.map((d) => `${d.id} ${d.decades > 0 ? '+' : ''}${d.decades.toFixed(2)}`).join('; ') ?? '',
+      salt_solubility_drivers:
+        row.saltWaterSolubility?.drivers
+          .map((d) => `${d.id} ${d.decades > 0 ? '+' : ''}${d.decades.toFixed(2)}`)
+          .join('; ') ?? '',
       log10_ksp: sig(row.log10Ksp?.value),
       log10_ksp_sd: sig(row.log10Ksp?.uncertainty, 2),
       ksp_origin: row.kspOrigin ?? '',
@@ -55,11 +59,25 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
  * column stays empty); `top` keeps the N best rows. The table draws no chart, so the screen skips the
  * pH–solubility profiles (every number of the table is the same with or without them).
  */
-export function runScreen(p: PreparedScreen, opts: { iterations: number; seed: number; top?: number | undefined }) {
-  const res = screenCompound({ compound: p.compound, drugIon: p.drugIon, candidates: p.candidates, settings: p.settings, profiles: 'none' });
+export function runScreen(
+  p: PreparedScreen,
+  opts: { iterations: number; seed: number; top?: number | undefined },
+) {
+  const res = screenCompound({
+    compound: p.compound,
+    drugIon: p.drugIon,
+    candidates: p.candidates,
+    settings: p.settings,
+    profiles: 'none',
+  });
   const robust = new Map(
     opts.iterations > 0
-      ? rankRobustness(res.rows.map((r) => r.robustness), p.settings.weights, res.robustnessShared, { iterations: opts.iterations, seed: opts.seed }).map((r) => [r.id, r.pTop3])
+      ? rankRobustness(
+          res.rows.map((r) => r.robustness),
+          p.settings.weights,
+          res.robustnessShared,
+          { iterations: opts.iterations, seed: opts.seed },
+        ).map((r) => [r.id, r.pTop3])
       : [],
   );
   return { res, table: screenTable(res, robust, opts.top) };

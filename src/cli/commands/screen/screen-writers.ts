@@ -8,9 +8,11 @@ import type { ScreenTableRow } from './screen-table';
 type Skipped = readonly { id: string; label: string; deltaPka: number }[];
 
 /** Text cells neutralised against spreadsheet formula injection. */
-export const safeRow = (row: Record<string, unknown>) => Object.fromEntries(Object.entries(row).map(([k, v]) => [k, safeCsvCell(v)]));
+export const safeRow = (row: Record<string, unknown>) =>
+  Object.fromEntries(Object.entries(row).map(([k, v]) => [k, safeCsvCell(v)]));
 
-export const KSP_NOTE = 'K_sp without a measured salt solubility is an estimate; see ksp_origin and log10_ksp_sd.';
+export const KSP_NOTE =
+  'K_sp without a measured salt solubility is an estimate; see ksp_origin and log10_ksp_sd.';
 
 export const skippedNote = (skipped: Skipped) =>
   skipped.length
@@ -23,18 +25,34 @@ export function screenCsv(table: readonly ScreenTableRow[], skipped: Skipped): s
   return `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# ${KSP_NOTE}${note ? `\n# ${note}` : ''}`;
 }
 
-export function screenJson(res: ScreenResult, table: readonly ScreenTableRow[], skipped: Skipped, robustness: { iterations: number; seed: number }): string {
+export function screenJson(
+  res: ScreenResult,
+  table: readonly ScreenTableRow[],
+  skipped: Skipped,
+  robustness: { iterations: number; seed: number },
+): string {
   return JSON.stringify(
     {
       format: 'saltsmith-screen',
       version: 1,
       compound: res.compoundName,
       drugKind: res.drugKind,
-      intrinsicSolubility: { log10M: res.freeForm.log10IntrinsicM, origin: res.freeForm.intrinsicOrigin },
-      freeForm: { worst: res.freeForm.worst, solubilityClass: res.freeForm.solubilityClass, flags: res.freeForm.flags },
+      intrinsicSolubility: {
+        log10M: res.freeForm.log10IntrinsicM,
+        origin: res.freeForm.intrinsicOrigin,
+      },
+      freeForm: {
+        worst: res.freeForm.worst,
+        solubilityClass: res.freeForm.solubilityClass,
+        flags: res.freeForm.flags,
+      },
       robustness,
       skippedCocrystalBand: skipped,
-      units: { solubility: 'mg/mL free-form equivalents', doseNumber: 'dose / 250 mL / solubility', ksp: 'log10, (mol/L)^(m+n)' },
+      units: {
+        solubility: 'mg/mL free-form equivalents',
+        doseNumber: 'dose / 250 mL / solubility',
+        ksp: 'log10, (mol/L)^(m+n)',
+      },
       assumptions: res.assumptions,
       rows: table,
       cautions: SCREENING_CAUTIONS,

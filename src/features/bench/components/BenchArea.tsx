@@ -36,7 +36,10 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
     return (
       <section className="panel" aria-labelledby="bench-title">
         <h2 id="bench-title">Bench data</h2>
-        <p>The shortlist is empty. Add counter-ions under Counter-ions, then record what the lab measured here.</p>
+        <p>
+          The shortlist is empty. Add counter-ions under Counter-ions, then record what the lab
+          measured here.
+        </p>
       </section>
     );
   }
@@ -52,7 +55,8 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
           <span className="muted">{measurements.length} measurements in this project</span>
         </header>
         <p className="muted">
-          Measured values override the estimates everywhere in the ranking and say so. Temperatures are entered in °C.
+          Measured values override the estimates everywhere in the ranking and say so. Temperatures
+          are entered in °C.
         </p>
         <div className="bench-layout">
           <nav aria-label="Shortlisted candidates" className="bench-candidates">
@@ -78,8 +82,16 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
           </nav>
           <div className="bench-main">
             <h3>{label(current)}</h3>
-            <CandidateForm candidate={current} label={label(current)} measurementCount={mine.length} />
-            <MeasurementForm projectId={project.id} candidateId={current.id} candidateLabel={label(current)} />
+            <CandidateForm
+              candidate={current}
+              label={label(current)}
+              measurementCount={mine.length}
+            />
+            <MeasurementForm
+              projectId={project.id}
+              candidateId={current.id}
+              candidateLabel={label(current)}
+            />
             <h4>Recorded for {label(current)}</h4>
             <MeasurementTable
               measurements={mine}

@@ -7,32 +7,52 @@ import { BenchArea } from './BenchArea';
 
 const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
 
-function Derived({ candidateId, measurements, data, status }: { candidateId: string; measurements: MeasurementRecord[]; data: ProjectScreening | undefined; status: string }) {
+function Derived({
+  candidateId,
+  measurements,
+  data,
+  status,
+}: {
+  candidateId: string;
+  measurements: MeasurementRecord[];
+  data: ProjectScreening | undefined;
+  status: string;
+}) {
   const lattice = backedOutLattice(candidateId, measurements, data);
   const vh = vantHoffOf(candidateId, measurements);
   const t = data?.energetics[candidateId]?.thermo;
   return (
     <section className="panel" aria-labelledby="derived-title">
       <h2 id="derived-title">From these measurements</h2>
-      {status === 'loading' && !data ? <p className="loading">Screening (for the predictions)…</p> : null}
+      {status === 'loading' && !data ? (
+        <p className="loading">Screening (for the predictions)…</p>
+      ) : null}
       <h3>Lattice enthalpy from the measured ΔH_sol</h3>
       {lattice === null ? (
-        <p className="muted">Record an enthalpy of solution (calorimetry) to back out the lattice enthalpy through the cycle.</p>
+        <p className="muted">
+          Record an enthalpy of solution (calorimetry) to back out the lattice enthalpy through the
+          cycle.
+        </p>
       ) : 'error' in lattice ? (
         <p className="field-error">{lattice.error}</p>
       ) : (
         <p>
-          ΔH_L = ΔH_sol − Σν·ΔH_hyd = {kj(lattice.measuredKJ)} − ({kj(lattice.measuredKJ - lattice.lattice.value)}) ={' '}
+          ΔH_L = ΔH_sol − Σν·ΔH_hyd = {kj(lattice.measuredKJ)} − (
+          {kj(lattice.measuredKJ - lattice.lattice.value)}) ={' '}
           <strong>
             {kj(lattice.lattice.value)} ± {lattice.lattice.uncertainty.toFixed(0)} kJ/mol
           </strong>{' '}
-          (dissociation, &gt; 0), against the model’s {kj(lattice.estimate.value)} ± {lattice.estimate.uncertainty.toFixed(0)} kJ/mol. The
-          hydration enthalpies are estimates, so this is only as good as they are; valid for ΔH_sol at infinite dilution.
+          (dissociation, &gt; 0), against the model’s {kj(lattice.estimate.value)} ±{' '}
+          {lattice.estimate.uncertainty.toFixed(0)} kJ/mol. The hydration enthalpies are estimates,
+          so this is only as good as they are; valid for ΔH_sol at infinite dilution.
         </p>
       )}
       <h3>van ’t Hoff</h3>
       {vh === null ? (
-        <p className="muted">Record solubilities at three or more temperatures (two or more distinct) in one medium for a van ’t Hoff fit.</p>
+        <p className="muted">
+          Record solubilities at three or more temperatures (two or more distinct) in one medium for
+          a van ’t Hoff fit.
+        </p>
       ) : (
         <>
           <VantHoffPlot
@@ -53,9 +73,13 @@ function Derived({ candidateId, measurements, data, status }: { candidateId: str
           />
           {vh.fit ? (
             <p>
-              Apparent ΔH_sol from the fit: {vh.fit.solutionEnthalpyKJ.value.toFixed(1)} ± {vh.fit.standardErrorKJ.toFixed(1)} kJ/mol
-              (standard error){t ? `; the cycle estimates ${kj(t.solutionEnthalpyKJ.value)} ± ${t.solutionEnthalpyKJ.uncertainty.toFixed(0)} kJ/mol at infinite dilution` : ''}.
-              An apparent enthalpy from solubilities includes speciation and activity changes with temperature.
+              Apparent ΔH_sol from the fit: {vh.fit.solutionEnthalpyKJ.value.toFixed(1)} ±{' '}
+              {vh.fit.standardErrorKJ.toFixed(1)} kJ/mol (standard error)
+              {t
+                ? `; the cycle estimates ${kj(t.solutionEnthalpyKJ.value)} ± ${t.solutionEnthalpyKJ.uncertainty.toFixed(0)} kJ/mol at infinite dilution`
+                : ''}
+              . An apparent enthalpy from solubilities includes speciation and activity changes with
+              temperature.
             </p>
           ) : (
             <p className="muted">No fit yet: {vh.reason}</p>
@@ -76,7 +100,12 @@ export function BenchWorkspace({ project }: { project: ProjectRecord }) {
       extras={{
         ionNames: data?.ionNames,
         predictionFor: (m) => {
-          if (!data) return <span className="muted">{screening.status === 'error' ? `no screen: ${screening.error}` : 'computing…'}</span>;
+          if (!data)
+            return (
+              <span className="muted">
+                {screening.status === 'error' ? `no screen: ${screening.error}` : 'computing…'}
+              </span>
+            );
           const p = predictionFor(m, data);
           return (
             <span title={p.basis}>
@@ -90,7 +119,12 @@ export function BenchWorkspace({ project }: { project: ProjectRecord }) {
           );
         },
         derived: (candidateId) => (
-          <Derived candidateId={candidateId} measurements={screening.measurements ?? []} data={data} status={screening.status} />
+          <Derived
+            candidateId={candidateId}
+            measurements={screening.measurements ?? []}
+            data={data}
+            status={screening.status}
+          />
         ),
       }}
     />

@@ -6,13 +6,17 @@ import type { CandidateRecord } from '@/persistence/records';
 const MAX_WATER = 20;
 
 /** Validate the hydrate field: a number of water molecules per formula unit, 0–20, halves allowed. */
-export function hydrateFromText(text: string): { ok: true; value: number } | { ok: false; error: string } {
+export function hydrateFromText(
+  text: string,
+): { ok: true; value: number } | { ok: false; error: string } {
   const t = text.trim().replace(',', '.');
   if (t === '') return { ok: true, value: 0 };
   const x = Number(t);
   if (!Number.isFinite(x)) return { ok: false, error: 'Water per formula unit must be a number' };
-  if (x < 0 || x > MAX_WATER) return { ok: false, error: `Water per formula unit must be from 0 to ${MAX_WATER}` };
-  if (Math.abs(x * 2 - Math.round(x * 2)) > 1e-9) return { ok: false, error: 'Use whole or half molecules (e.g. 0.5 for a hemihydrate)' };
+  if (x < 0 || x > MAX_WATER)
+    return { ok: false, error: `Water per formula unit must be from 0 to ${MAX_WATER}` };
+  if (Math.abs(x * 2 - Math.round(x * 2)) > 1e-9)
+    return { ok: false, error: 'Use whole or half molecules (e.g. 0.5 for a hemihydrate)' };
   return { ok: true, value: x };
 }
 
@@ -21,7 +25,15 @@ export function hydrateFromText(text: string): { ok: true; value: number } | { o
  * fraction and the mass per dose), and removal from the shortlist with its measurements, after a
  * confirmation.
  */
-export function CandidateForm({ candidate, label, measurementCount }: { candidate: CandidateRecord; label: string; measurementCount: number }) {
+export function CandidateForm({
+  candidate,
+  label,
+  measurementCount,
+}: {
+  candidate: CandidateRecord;
+  label: string;
+  measurementCount: number;
+}) {
   const uid = useId();
   const [text, setText] = useState(String(candidate.hydrateWater));
   const [error, setError] = useState<string | null>(null);
@@ -40,7 +52,8 @@ export function CandidateForm({ candidate, label, measurementCount }: { candidat
       return;
     }
     setError(null);
-    if (r.value !== candidate.hydrateWater) void candidatesRepo.update(candidate.id, { hydrateWater: r.value });
+    if (r.value !== candidate.hydrateWater)
+      void candidatesRepo.update(candidate.id, { hydrateWater: r.value });
   };
 
   return (
@@ -71,8 +84,15 @@ export function CandidateForm({ candidate, label, measurementCount }: { candidat
         {confirm ? (
           <span role="group" aria-label={`Confirm removing ${label}`}>
             Remove {label}
-            {measurementCount ? ` and its ${measurementCount} measurement${measurementCount === 1 ? '' : 's'}` : ''}?{' '}
-            <button type="button" className="danger" onClick={() => void candidatesRepo.remove(candidate.id)}>
+            {measurementCount
+              ? ` and its ${measurementCount} measurement${measurementCount === 1 ? '' : 's'}`
+              : ''}
+            ?{' '}
+            <button
+              type="button"
+              className="danger"
+              onClick={() => void candidatesRepo.remove(candidate.id)}
+            >
               Remove
             </button>{' '}
             <button type="button" onClick={() => setConfirm(false)}>

@@ -13,7 +13,15 @@ import {
 } from '../bench-form-model';
 
 /** Common media, offered as suggestions; any text is accepted. */
-const MEDIA = ['water', '0.1 M HCl', 'simulated gastric fluid (pH 1.2)', 'acetate buffer pH 4.5', 'phosphate buffer pH 6.8', 'FaSSIF', 'FeSSIF'];
+const MEDIA = [
+  'water',
+  '0.1 M HCl',
+  'simulated gastric fluid (pH 1.2)',
+  'acetate buffer pH 4.5',
+  'phosphate buffer pH 6.8',
+  'FaSSIF',
+  'FeSSIF',
+];
 
 /** Enter one measurement for one candidate; validated field by field before anything is stored. */
 export function MeasurementForm({
@@ -54,7 +62,12 @@ export function MeasurementForm({
     }
   };
 
-  const input = (key: 'value' | 'medium' | 'ph' | 'temperatureC' | 'text', label: string, unit?: string, hint?: string) => {
+  const input = (
+    key: 'value' | 'medium' | 'ph' | 'temperatureC' | 'text',
+    label: string,
+    unit?: string,
+    hint?: string,
+  ) => {
     const id = `${uid}-${key}`;
     const error = errors[key];
     const describedById = describedBy(id, error, hint);
@@ -90,7 +103,12 @@ export function MeasurementForm({
   };
 
   return (
-    <form className="bench-form" onSubmit={submit} noValidate aria-label={`New measurement for ${candidateLabel}`}>
+    <form
+      className="bench-form"
+      onSubmit={submit}
+      noValidate
+      aria-label={`New measurement for ${candidateLabel}`}
+    >
       <div className="form-grid">
         <div className="field">
           <label htmlFor={`${uid}-kind`}>What was measured</label>
@@ -138,8 +156,12 @@ export function MeasurementForm({
           </div>
         ) : null}
         {spec.conditions.includes('medium') ? input('medium', 'Medium') : null}
-        {spec.conditions.includes('ph') ? input('ph', 'pH at equilibrium', undefined, 'Measured in the saturated solution') : null}
-        {spec.conditions.includes('temperatureC') ? input('temperatureC', 'Temperature', '°C') : null}
+        {spec.conditions.includes('ph')
+          ? input('ph', 'pH at equilibrium', undefined, 'Measured in the saturated solution')
+          : null}
+        {spec.conditions.includes('temperatureC')
+          ? input('temperatureC', 'Temperature', '°C')
+          : null}
         {input('text', draft.kind === 'note' ? 'Note' : 'Notes (method, batch, observations)')}
       </div>
       <datalist id={`${uid}-media`}>

@@ -3,7 +3,8 @@ import { measurementsRepo } from '@/persistence/measurements-repo';
 import type { MeasurementRecord } from '@/persistence/records';
 import { CELSIUS_ZERO_K, MEASUREMENT_KINDS } from '../bench-form-model';
 
-const fmt = (x: number) => (Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 1 ? x.toPrecision(3) : x.toPrecision(2));
+const fmt = (x: number) =>
+  Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 1 ? x.toPrecision(3) : x.toPrecision(2);
 
 function conditions(m: MeasurementRecord): string {
   const parts: string[] = [];
@@ -76,7 +77,9 @@ export function MeasurementTable({
               <tr key={m.id}>
                 <th scope="row">{spec.label}</th>
                 <td>
-                  {m.value === null ? '—' : (
+                  {m.value === null ? (
+                    '—'
+                  ) : (
                     <>
                       {fmt(m.value)} <span className="unit">{m.unit}</span>
                     </>

@@ -4,9 +4,9 @@ import { measurementsRepo } from '@/persistence/measurements-repo';
 import type { CandidateRecord, MeasurementRecord } from '@/persistence/records';
 
 /** The project's shortlist and measurements, live (another tab's entries appear as they are saved). */
-export function useBenchData(projectId: string):
-  | { candidates: CandidateRecord[]; measurements: MeasurementRecord[] }
-  | undefined {
+export function useBenchData(
+  projectId: string,
+): { candidates: CandidateRecord[]; measurements: MeasurementRecord[] } | undefined {
   return useLiveQuery(async () => {
     const [candidates, measurements] = await Promise.all([
       candidatesRepo.listForProject(projectId),

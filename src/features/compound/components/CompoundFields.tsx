@@ -18,7 +18,17 @@ interface FieldProps {
   inputMode?: 'decimal' | 'text';
 }
 
-export function Field({ id, label, unit, hint, draft, errors, onChange, wide, inputMode }: FieldProps) {
+export function Field({
+  id,
+  label,
+  unit,
+  hint,
+  draft,
+  errors,
+  onChange,
+  wide,
+  inputMode,
+}: FieldProps) {
   const error = errors[id];
   const inputId = `compound-${id}`;
   return (

@@ -133,7 +133,10 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     // A changed SMILES must parse before it is stored; a bad one keeps the old structure. The stored
     // SMILES was accepted before; only a changed one needs openchemlib's verdict.
     const needsCheck =
-      keys.includes('smiles') && smiles !== '' && smiles !== stored.smiles && smiles !== structure.good?.smiles;
+      keys.includes('smiles') &&
+      smiles !== '' &&
+      smiles !== stored.smiles &&
+      smiles !== structure.good?.smiles;
     if (!needsCheck) {
       if (keys.includes('smiles') && smiles === '' && structure.good) void structure.check('');
       write(changesFor(compound, keys), keys);
@@ -154,7 +157,12 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     // The formula follows a new structure unless the user typed a different one themselves.
     const parsed = checked.structure?.parsed;
     const formula = storedRef.current.formula;
-    if (parsed && parsed.netCharge === 0 && (formula === '' || formula === previousFormula) && !edited.current.has('formula')) {
+    if (
+      parsed &&
+      parsed.netCharge === 0 &&
+      (formula === '' || formula === previousFormula) &&
+      !edited.current.has('formula')
+    ) {
       changes.formula = parsed.formula;
       const shown = draftRef.current;
       if (shown.smiles.trim() === smiles) setDraft({ ...shown, formula: parsed.formula });
@@ -186,7 +194,8 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     const next = { ...draftRef.current, ...changes } as CompoundDraft;
     setDraft(next);
     editSeq.current++;
-    for (const key of Object.keys(changes) as (keyof CompoundDraft)[]) edited.current.set(key, editSeq.current);
+    for (const key of Object.keys(changes) as (keyof CompoundDraft)[])
+      edited.current.set(key, editSeq.current);
     const result = compoundFromDraft(next, storedRef.current);
     if (timer.current) clearTimeout(timer.current);
     timer.current = null;
@@ -204,7 +213,8 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
   };
 
   const change = (id: keyof CompoundDraft, value: string) => edit({ [id]: value });
-  const applyComputedLogP = (value: number) => edit({ logP: String(value), logPOrigin: 'computed' }, 0);
+  const applyComputedLogP = (value: number) =>
+    edit({ logP: String(value), logPOrigin: 'computed' }, 0);
 
   const common = { draft, errors, onChange: change };
   return (
@@ -215,11 +225,15 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
       </header>
       {project.isDemo ? (
         <p className="demo-banner" role="note">
-          Demo project: <strong>Demorazine is fictional</strong> and every number in it is invented for
-          demonstration. Create a project for your own compound under Projects.
+          Demo project: <strong>Demorazine is fictional</strong> and every number in it is invented
+          for demonstration. Create a project for your own compound under Projects.
         </p>
       ) : null}
-      <form className="form-grid" onSubmit={(e) => e.preventDefault()} aria-label="Compound definition">
+      <form
+        className="form-grid"
+        onSubmit={(e) => e.preventDefault()}
+        aria-label="Compound definition"
+      >
         <Field id="name" label="Name" {...common} />
         <div className="field">
           <label htmlFor="compound-kind">Ionisable as</label>
@@ -232,8 +246,19 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
             <option value="acid">Weak acid (forms an anion)</option>
           </select>
         </div>
-        <Field id="smiles" label="Structure (SMILES)" wide hint="Neutral free form, OpenSMILES" {...common} />
-        <Field id="formula" label="Molecular formula" hint="Neutral free form, e.g. C18H20ClN3O" {...common} />
+        <Field
+          id="smiles"
+          label="Structure (SMILES)"
+          wide
+          hint="Neutral free form, OpenSMILES"
+          {...common}
+        />
+        <Field
+          id="formula"
+          label="Molecular formula"
+          hint="Neutral free form, e.g. C18H20ClN3O"
+          {...common}
+        />
         <Field
           id="pKas"
           label={draft.kind === 'base' ? 'pKa of the conjugate acid(s)' : 'pKa(s)'}
@@ -252,8 +277,19 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
             <option value="predicted">Predicted</option>
           </select>
         </div>
-        <Field id="ionCharge" label="Charge of the salt-forming ion" hint="e.g. +1, or +2 for a dibasic drug" {...common} />
-        <Field id="intrinsicSolubilityMgPerMl" label="Intrinsic solubility S₀" unit="mg/mL" inputMode="decimal" {...common} />
+        <Field
+          id="ionCharge"
+          label="Charge of the salt-forming ion"
+          hint="e.g. +1, or +2 for a dibasic drug"
+          {...common}
+        />
+        <Field
+          id="intrinsicSolubilityMgPerMl"
+          label="Intrinsic solubility S₀"
+          unit="mg/mL"
+          inputMode="decimal"
+          {...common}
+        />
         <Field id="meltingPointC" label="Melting point" unit="°C" inputMode="decimal" {...common} />
         <Field id="logP" label="log P" unit="octanol/water" inputMode="decimal" {...common} />
         <div className="field">
@@ -269,10 +305,33 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
             <option value="computed">Computed (openchemlib)</option>
           </select>
         </div>
-        <Field id="doseMg" label="Highest single dose" unit="mg, as free form" inputMode="decimal" {...common} />
-        <Field id="densityGPerCm3" label="Density of the free form" unit="g/cm³, measured" inputMode="decimal" {...common} />
-        <Field id="cellVolumeA3" label="Unit-cell volume" unit="Å³, free-form crystal" inputMode="decimal" {...common} />
-        <Field id="formulaUnitsPerCell" label="Molecules per cell (Z)" inputMode="decimal" {...common} />
+        <Field
+          id="doseMg"
+          label="Highest single dose"
+          unit="mg, as free form"
+          inputMode="decimal"
+          {...common}
+        />
+        <Field
+          id="densityGPerCm3"
+          label="Density of the free form"
+          unit="g/cm³, measured"
+          inputMode="decimal"
+          {...common}
+        />
+        <Field
+          id="cellVolumeA3"
+          label="Unit-cell volume"
+          unit="Å³, free-form crystal"
+          inputMode="decimal"
+          {...common}
+        />
+        <Field
+          id="formulaUnitsPerCell"
+          label="Molecules per cell (Z)"
+          inputMode="decimal"
+          {...common}
+        />
         <Field id="notes" label="Notes" wide {...common} />
       </form>
       <StructureCard

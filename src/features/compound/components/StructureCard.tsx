@@ -1,8 +1,15 @@
 import { useMemo } from 'react';
-import { drugIon, formatIonFormula, freeFormVolumeNm3, organicIonFromFormula, type Compound } from '@/chem';
+import {
+  drugIon,
+  formatIonFormula,
+  freeFormVolumeNm3,
+  organicIonFromFormula,
+  type Compound,
+} from '@/chem';
 import type { GoodStructure, StructureStatus } from '../hooks/use-structure-check';
 
-const fmtU = (v: number, u: number, digits: number) => `${v.toFixed(digits)} ± ${u.toFixed(digits)}`;
+const fmtU = (v: number, u: number, digits: number) =>
+  `${v.toFixed(digits)} ± ${u.toFixed(digits)}`;
 
 /**
  * The compound's structure picture, formula and molar mass, and the salt-forming drug ion derived from
@@ -19,7 +26,8 @@ export function StructureCard({
   status: StructureStatus;
   onUseLogP: (value: number) => void;
 }) {
-  const parsed = structure && structure.smiles === compound.smiles.trim() ? structure.parsed : undefined;
+  const parsed =
+    structure && structure.smiles === compound.smiles.trim() ? structure.parsed : undefined;
   const derived = useMemo(() => {
     try {
       const ion = drugIon(compound, parsed);
@@ -32,17 +40,28 @@ export function StructureCard({
       }
       let measuredVolume: ReturnType<typeof freeFormVolumeNm3> = null;
       try {
-        measuredVolume = freeFormVolumeNm3({ molarMassGPerMol: ion.freeFormMolarMassGPerMol, ...compound });
+        measuredVolume = freeFormVolumeNm3({
+          molarMassGPerMol: ion.freeFormMolarMassGPerMol,
+          ...compound,
+        });
       } catch {
         measuredVolume = null;
       }
       return { ion, thermo, thermoError, measuredVolume, error: null as string | null };
     } catch (err) {
-      return { ion: null, thermo: null, thermoError: null, measuredVolume: null, error: err instanceof Error ? err.message : String(err) };
+      return {
+        ion: null,
+        thermo: null,
+        thermoError: null,
+        measuredVolume: null,
+        error: err instanceof Error ? err.message : String(err),
+      };
     }
   }, [compound, parsed]);
 
-  const svgUrl = parsed ? `data:image/svg+xml;charset=utf-8,${encodeURIComponent(parsed.svg)}` : null;
+  const svgUrl = parsed
+    ? `data:image/svg+xml;charset=utf-8,${encodeURIComponent(parsed.svg)}`
+    : null;
   const ion = derived.ion;
 
   return (
@@ -65,7 +84,9 @@ export function StructureCard({
                   : 'No picture: the stored SMILES cannot be read.'}
             </p>
           )}
-          {parsed ? <figcaption className="muted">Drawn by openchemlib from the stored SMILES.</figcaption> : null}
+          {parsed ? (
+            <figcaption className="muted">Drawn by openchemlib from the stored SMILES.</figcaption>
+          ) : null}
         </figure>
         {ion ? (
           <dl className="structure-data">
@@ -76,7 +97,10 @@ export function StructureCard({
             <dt>Salt-forming drug ion</dt>
             <dd>
               {formatIonFormula(ion.formula, ion.charge)}, {ion.molarMassGPerMol.toFixed(2)} g/mol (
-              {compound.kind === 'base' ? `free base + ${ion.charge} H⁺` : `free acid − ${-ion.charge} H⁺`})
+              {compound.kind === 'base'
+                ? `free base + ${ion.charge} H⁺`
+                : `free acid − ${-ion.charge} H⁺`}
+              )
             </dd>
             <dt>Rings</dt>
             <dd>
@@ -89,7 +113,13 @@ export function StructureCard({
                 <dt>Free-form volume per molecule</dt>
                 <dd>
                   {fmtU(derived.measuredVolume.value, derived.measuredVolume.uncertainty, 3)} nm³{' '}
-                  <span className="muted">(from the {derived.measuredVolume.method === 'cell' ? 'crystal cell, V/Z' : 'measured density, M/(ρ·N_A)'})</span>
+                  <span className="muted">
+                    (from the{' '}
+                    {derived.measuredVolume.method === 'cell'
+                      ? 'crystal cell, V/Z'
+                      : 'measured density, M/(ρ·N_A)'}
+                    )
+                  </span>
                 </dd>
               </>
             ) : null}
@@ -97,15 +127,17 @@ export function StructureCard({
               <>
                 <dt>Ion volume (crystal)</dt>
                 <dd>
-                  {fmtU(derived.thermo.volumeNm3.value, derived.thermo.volumeNm3.uncertainty, 3)} nm³{' '}
-                  <span className="muted">({derived.thermo.volumeNm3.method})</span>
+                  {fmtU(derived.thermo.volumeNm3.value, derived.thermo.volumeNm3.uncertainty, 3)}{' '}
+                  nm³ <span className="muted">({derived.thermo.volumeNm3.method})</span>
                 </dd>
               </>
             ) : null}
             {derived.thermo?.radiusA ? (
               <>
                 <dt>Thermochemical radius</dt>
-                <dd>{fmtU(derived.thermo.radiusA.value, derived.thermo.radiusA.uncertainty, 2)} Å</dd>
+                <dd>
+                  {fmtU(derived.thermo.radiusA.value, derived.thermo.radiusA.uncertainty, 2)} Å
+                </dd>
               </>
             ) : null}
             {derived.thermoError ? (
@@ -118,8 +150,12 @@ export function StructureCard({
               <>
                 <dt>log P, computed</dt>
                 <dd>
-                  {fmtU(parsed.logP.value, parsed.logP.uncertainty, 1)} <span className="muted">(openchemlib increments; an estimate)</span>{' '}
-                  <button type="button" onClick={() => onUseLogP(Math.round(parsed.logP!.value * 100) / 100)}>
+                  {fmtU(parsed.logP.value, parsed.logP.uncertainty, 1)}{' '}
+                  <span className="muted">(openchemlib increments; an estimate)</span>{' '}
+                  <button
+                    type="button"
+                    onClick={() => onUseLogP(Math.round(parsed.logP!.value * 100) / 100)}
+                  >
                     Use as log P
                   </button>
                 </dd>
@@ -137,7 +173,9 @@ export function StructureCard({
       ))}
       <p className="source">
         Molar masses: IUPAC 2021 standard atomic weights.
-        {derived.thermo?.volumeNm3 ? ` Volume: ${derived.thermo.volumeNm3.sources.join('; ')}.` : ''}
+        {derived.thermo?.volumeNm3
+          ? ` Volume: ${derived.thermo.volumeNm3.sources.join('; ')}.`
+          : ''}
         {derived.thermo?.radiusA ? ` Radius: ${derived.thermo.radiusA.sources.join('; ')}.` : ''}
       </p>
     </section>

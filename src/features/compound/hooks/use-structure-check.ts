@@ -1,5 +1,10 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { ChemInputError, StructureLibraryUnavailableError, parseStructure, type ParsedStructure } from '@/chem';
+import {
+  ChemInputError,
+  StructureLibraryUnavailableError,
+  parseStructure,
+  type ParsedStructure,
+} from '@/chem';
 
 /** Longest wait for an idle moment before the stored structure is parsed, ms. */
 const IDLE_TIMEOUT_MS = 2000;
@@ -23,34 +28,49 @@ export function useStructureCheck(initialSmiles: string) {
   const [status, setStatus] = useState<StructureStatus>(initialSmiles.trim() ? 'loading' : 'idle');
   const seq = useRef(0);
 
-  const check = useCallback(async (smiles: string): Promise<{ ok: true; structure: GoodStructure | null } | { ok: false; message: string } | { ok: 'stale' }> => {
-    const text = smiles.trim();
-    const mine = ++seq.current;
-    if (text === '') {
-      setGood(null);
-      setStatus('idle');
-      return { ok: true, structure: null };
-    }
-    setStatus((s) => (s === 'ready' ? s : 'loading'));
-    try {
-      const parsed = await parseStructure(text);
-      if (mine !== seq.current) return { ok: 'stale' };
-      const structure = { smiles: text, parsed };
-      setGood(structure);
-      setStatus('ready');
-      return { ok: true, structure };
-    } catch (err) {
-      if (mine !== seq.current) return { ok: 'stale' };
-      if (err instanceof StructureLibraryUnavailableError) {
-        setStatus((s) => (s === 'ready' ? s : 'unavailable'));
-        return { ok: false, message: 'Cannot check the SMILES now: the chemistry library could not be loaded (reload the page to retry)' };
+  const check = useCallback(
+    async (
+      smiles: string,
+    ): Promise<
+      | { ok: true; structure: GoodStructure | null }
+      | { ok: false; message: string }
+      | { ok: 'stale' }
+    > => {
+      const text = smiles.trim();
+      const mine = ++seq.current;
+      if (text === '') {
+        setGood(null);
+        setStatus('idle');
+        return { ok: true, structure: null };
       }
-      setStatus((s) => (s === 'loading' ? 'error' : s));
-      const message =
-        err instanceof ChemInputError ? err.message.replace(/^smiles: /, '').replace(/ \(accepted: .*\)$/, '') : 'Cannot read this SMILES';
-      return { ok: false, message: message.charAt(0).toUpperCase() + message.slice(1) };
-    }
-  }, []);
+      setStatus((s) => (s === 'ready' ? s : 'loading'));
+      try {
+        const parsed = await parseStructure(text);
+        if (mine !== seq.current) return { ok: 'stale' };
+        const structure = { smiles: text, parsed };
+        setGood(structure);
+        setStatus('ready');
+        return { ok: true, structure };
+      } catch (err) {
+        if (mine !== seq.current) return { ok: 'stale' };
+        if (err instanceof StructureLibraryUnavailableError) {
+          setStatus((s) => (s === 'ready' ? s : 'unavailable'));
+          return {
+            ok: false,
+            message:
+              'Cannot check the SMILES now: the chemistry library could not be loaded (reload the page to retry)',
+          };
+        }
+        setStatus((s) => (s === 'loading' ? 'error' : s));
+        const message =
+          err instanceof ChemInputError
+            ? err.message.replace(/^smiles: /, '').replace(/ \(accepted: .*\)$/, '')
+            : 'Cannot read this SMILES';
+        return { ok: false, message: message.charAt(0).toUpperCase() + message.slice(1) };
+      }
+    },
+    [],
+  );
 
   // The stored structure, drawn on open (and when another project opens). The ~1 MB chemistry library
   // is fetched when the browser is idle after the first screen, and not at all if the area closes before.

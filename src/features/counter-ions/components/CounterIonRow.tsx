@@ -34,7 +34,10 @@ export function CounterIonRow({
     setBusy(true);
     setError(null);
     try {
-      await candidatesRepo.add(project.id, ion.id, { drugPerSalt: chosen.drugPerSalt, counterIonPerSalt: chosen.counterIonPerSalt });
+      await candidatesRepo.add(project.id, ion.id, {
+        drugPerSalt: chosen.drugPerSalt,
+        counterIonPerSalt: chosen.counterIonPerSalt,
+      });
     } catch (err) {
       setError(err instanceof Error ? err.message : 'Could not add to the shortlist');
     } finally {
@@ -46,17 +49,33 @@ export function CounterIonRow({
     <>
       <tr className={`ion-row origin-${ion.origin}`}>
         <th scope="row">
-          <button type="button" className="ion-name" aria-expanded={open} aria-controls={detailsId} onClick={onToggle}>
+          <button
+            type="button"
+            className="ion-name"
+            aria-expanded={open}
+            aria-controls={detailsId}
+            onClick={onToggle}
+          >
             {ion.name}
           </button>
-          {ion.referenceOnly ? <span className="ion-badge ion-badge-reference">reference only</span> : null}
+          {ion.referenceOnly ? (
+            <span className="ion-badge ion-badge-reference">reference only</span>
+          ) : null}
           {ion.origin !== 'bundled' ? (
-            <span className={`ion-badge ion-badge-${ion.origin}`}>{ion.origin === 'in-house' ? 'in-house' : 'edited for this project'}</span>
+            <span className={`ion-badge ion-badge-${ion.origin}`}>
+              {ion.origin === 'in-house' ? 'in-house' : 'edited for this project'}
+            </span>
           ) : null}
         </th>
         <td>{formatIonFormula(ion.formula, ion.charge)}</td>
         <td>{charges.map(fmtCharge).join(', ')}</td>
-        <td>{ion.pKas.length ? ion.pKas.map((p) => p.value.toFixed(2)).join(', ') : <span className="muted">not sourced</span>}</td>
+        <td>
+          {ion.pKas.length ? (
+            ion.pKas.map((p) => p.value.toFixed(2)).join(', ')
+          ) : (
+            <span className="muted">not sourced</span>
+          )}
+        </td>
         <td>{ion.acceptabilityClass ?? '–'}</td>
         <td>
           {verdict ? (
@@ -86,7 +105,12 @@ export function CounterIonRow({
                   ))}
                 </select>
               ) : null}
-              <button type="button" onClick={add} disabled={busy} aria-label={`Add ${ion.name} (${chosen.label}) to the shortlist`}>
+              <button
+                type="button"
+                onClick={add}
+                disabled={busy}
+                aria-label={`Add ${ion.name} (${chosen.label}) to the shortlist`}
+              >
                 {/* Visible text kept inside the accessible name (WCAG 2.5.3, label in name). */}
                 Add
               </button>
@@ -117,7 +141,8 @@ function IonDetails({ ion, project }: { ion: LibraryIon; project: ProjectRecord 
         <h3>{ion.name}</h3>
         {ion.synonyms.length ? <p className="muted">Also: {ion.synonyms.join(', ')}</p> : null}
         <p>
-          Made from {ion.parent.name || 'its parent'} ({ion.parent.formula}, {ion.parent.molarMassGPerMol.toFixed(2)} g/mol)
+          Made from {ion.parent.name || 'its parent'} ({ion.parent.formula},{' '}
+          {ion.parent.molarMassGPerMol.toFixed(2)} g/mol)
           {ion.ionSmiles ? (
             <>
               {' '}
@@ -169,7 +194,11 @@ function IonDetails({ ion, project }: { ion: LibraryIon; project: ProjectRecord 
               </li>
             ))}
         </ul>
-        {ion.origin !== 'in-house' ? <IonEditForm ion={ion} projectId={project.id} /> : <DeleteInHouseIon ion={ion} />}
+        {ion.origin !== 'in-house' ? (
+          <IonEditForm ion={ion} projectId={project.id} />
+        ) : (
+          <DeleteInHouseIon ion={ion} />
+        )}
       </div>
     </div>
   );
@@ -184,8 +213,15 @@ function DeleteInHouseIon({ ion }: { ion: LibraryIon }) {
     <div className="button-row">
       {asking ? (
         <>
-          <span>Remove “{ion.name}” from the library of every project? Shortlist entries that use it stay but lose its data.</span>
-          <button type="button" className="danger" onClick={() => void customIonsRepo.remove(recordId)}>
+          <span>
+            Remove “{ion.name}” from the library of every project? Shortlist entries that use it
+            stay but lose its data.
+          </span>
+          <button
+            type="button"
+            className="danger"
+            onClick={() => void customIonsRepo.remove(recordId)}
+          >
             Remove in-house ion
           </button>
           <button type="button" onClick={() => setAsking(false)}>

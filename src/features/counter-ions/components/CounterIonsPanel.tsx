@@ -29,21 +29,37 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
   const compound = project.compound;
   const pairedKind = compound.kind === 'base' ? 'anion' : 'cation';
 
-  const minDelta = view.minDeltaPka.trim() === '' ? undefined : Number(view.minDeltaPka.replace(',', '.'));
+  const minDelta =
+    view.minDeltaPka.trim() === '' ? undefined : Number(view.minDeltaPka.replace(',', '.'));
   const minDeltaInvalid = minDelta !== undefined && !Number.isFinite(minDelta);
 
   const rows = useMemo(() => {
     const filters: CounterIonFilters = {
       partner: compound,
       includeReferenceIons: view.showReference,
-      ...(view.kind === 'paired' ? { kind: pairedKind } : view.kind === 'all' ? {} : { kind: view.kind }),
+      ...(view.kind === 'paired'
+        ? { kind: pairedKind }
+        : view.kind === 'all'
+          ? {}
+          : { kind: view.kind }),
       ...(view.classes.length ? { classes: view.classes } : {}),
       ...(view.charge !== 0 ? { charge: view.charge } : {}),
       ...(view.stoichiometry ? { stoichiometry: view.stoichiometry } : {}),
       ...(minDelta !== undefined && Number.isFinite(minDelta) ? { minDeltaPka: minDelta } : {}),
     };
     return searchCounterIons<LibraryIon>(ions, view.query, filters);
-  }, [ions, view.query, view.kind, view.classes, view.charge, view.stoichiometry, view.showReference, minDelta, compound, pairedKind]);
+  }, [
+    ions,
+    view.query,
+    view.kind,
+    view.classes,
+    view.charge,
+    view.stoichiometry,
+    view.showReference,
+    minDelta,
+    compound,
+    pairedKind,
+  ]);
 
   const shortlisted = new Map((shortlist ?? []).map((c) => [c.ionId, c]));
   const pkaText = compound.pKas.map((p) => p.value).join(', ');
@@ -57,11 +73,18 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         </span>
       </header>
       <p className="ion-against">
-        ΔpKa = pKa(protonated base) − pKa(acid), against <strong>{compound.name}</strong> ({compound.kind === 'base' ? 'base, pKa of the conjugate acid' : 'acid, pKa'} {pkaText}; ion charge {compound.ionCharge > 0 ? '+' : ''}
+        ΔpKa = pKa(protonated base) − pKa(acid), against <strong>{compound.name}</strong> (
+        {compound.kind === 'base' ? 'base, pKa of the conjugate acid' : 'acid, pKa'} {pkaText}; ion
+        charge {compound.ionCharge > 0 ? '+' : ''}
         {compound.ionCharge}). Verdict bands follow the project’s screening settings.
       </p>
 
-      <form className="ion-filters" role="search" aria-label="Filter counter-ions" onSubmit={(e) => e.preventDefault()}>
+      <form
+        className="ion-filters"
+        role="search"
+        aria-label="Filter counter-ions"
+        onSubmit={(e) => e.preventDefault()}
+      >
         <div className="field ion-search">
           <label htmlFor="ion-query">Search counter-ions</label>
           <input
@@ -74,8 +97,16 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         </div>
         <div className="field">
           <label htmlFor="ion-kind">Kind</label>
-          <select id="ion-kind" value={view.kind} onChange={(e) => view.setKind(e.target.value as typeof view.kind)}>
-            <option value="paired">{compound.kind === 'base' ? 'Anions (pair with this base)' : 'Cations (pair with this acid)'}</option>
+          <select
+            id="ion-kind"
+            value={view.kind}
+            onChange={(e) => view.setKind(e.target.value as typeof view.kind)}
+          >
+            <option value="paired">
+              {compound.kind === 'base'
+                ? 'Anions (pair with this base)'
+                : 'Cations (pair with this acid)'}
+            </option>
             <option value="anion">Anions</option>
             <option value="cation">Cations</option>
             <option value="all">All ions</option>
@@ -85,13 +116,22 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
           <legend>Acceptability class</legend>
           {CLASS_OPTIONS.map((c) => (
             <label key={String(c.value)}>
-              <input type="checkbox" checked={view.classes.includes(c.value)} onChange={() => view.toggleClass(c.value)} /> {c.label}
+              <input
+                type="checkbox"
+                checked={view.classes.includes(c.value)}
+                onChange={() => view.toggleClass(c.value)}
+              />{' '}
+              {c.label}
             </label>
           ))}
         </fieldset>
         <div className="field">
           <label htmlFor="ion-charge">Charge</label>
-          <select id="ion-charge" value={view.charge} onChange={(e) => view.setCharge(Number(e.target.value))}>
+          <select
+            id="ion-charge"
+            value={view.charge}
+            onChange={(e) => view.setCharge(Number(e.target.value))}
+          >
             <option value={0}>Any</option>
             {[-1, -2, -3, 1, 2, 3].map((c) => (
               <option key={c} value={c}>
@@ -102,7 +142,11 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         </div>
         <div className="field">
           <label htmlFor="ion-stoich">Stoichiometry (drug : counter-ion)</label>
-          <select id="ion-stoich" value={view.stoichiometry} onChange={(e) => view.setStoichiometry(e.target.value)}>
+          <select
+            id="ion-stoich"
+            value={view.stoichiometry}
+            onChange={(e) => view.setStoichiometry(e.target.value)}
+          >
             <option value="">Any</option>
             {['1:1', '2:1', '3:1', '1:2'].map((s) => (
               <option key={s} value={s}>
@@ -130,8 +174,12 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         </div>
         <div className="field ion-reference">
           <label>
-            <input type="checkbox" checked={view.showReference} onChange={(e) => view.setShowReference(e.target.checked)} /> Include
-            reference ions (model checks only, not for medicines)
+            <input
+              type="checkbox"
+              checked={view.showReference}
+              onChange={(e) => view.setShowReference(e.target.checked)}
+            />{' '}
+            Include reference ions (model checks only, not for medicines)
           </label>
         </div>
         <div className="field ion-reset">
@@ -144,8 +192,8 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
       {rejected.length > 0 ? (
         <div className="field-error ion-rejected" role="alert">
           <p>
-            {rejected.length} stored in-house record(s) cannot be used and are left out of every project’s
-            library:
+            {rejected.length} stored in-house record(s) cannot be used and are left out of every
+            project’s library:
           </p>
           <ul>
             {rejected.map((r) => (
@@ -154,10 +202,16 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
               </li>
             ))}
           </ul>
-          <button type="button" onClick={() => void Promise.all(rejected.map((r) => customIonsRepo.remove(r.recordId)))}>
+          <button
+            type="button"
+            onClick={() => void Promise.all(rejected.map((r) => customIonsRepo.remove(r.recordId)))}
+          >
             Delete these records
           </button>{' '}
-          <button type="button" onClick={() => void acknowledgeRejected(rejected.map((r) => r.recordId))}>
+          <button
+            type="button"
+            onClick={() => void acknowledgeRejected(rejected.map((r) => r.recordId))}
+          >
             Keep them, stop telling me
           </button>
         </div>
@@ -195,9 +249,10 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         </table>
       </div>
       <p className="source">
-        pKa: parent acid, or conjugate acid of the parent base; metal and quaternary cations carry water’s pKa (made from
-        the hydroxide). Class: Stahl &amp; Wermuth, Handbook of Pharmaceutical Salts (2002) — recalled values are marked “from
-        memory” in each ion’s sources. Molar masses from IUPAC 2021 standard atomic weights.
+        pKa: parent acid, or conjugate acid of the parent base; metal and quaternary cations carry
+        water’s pKa (made from the hydroxide). Class: Stahl &amp; Wermuth, Handbook of
+        Pharmaceutical Salts (2002) — recalled values are marked “from memory” in each ion’s
+        sources. Molar masses from IUPAC 2021 standard atomic weights.
       </p>
       <InHouseIonForm />
       <CautionNote />

@@ -54,9 +54,13 @@ export function InHouseIonForm() {
     const errs: Errors = {};
     const charge = Number(draft.charge.replace('−', '-').replace('+', ''));
     if (!Number.isInteger(charge)) errs.charge = 'Charge must be a whole number';
-    const pkTexts = draft.pKas.split(/[;\s]+|,\s*/).map((s) => s.trim()).filter(Boolean);
+    const pkTexts = draft.pKas
+      .split(/[;\s]+|,\s*/)
+      .map((s) => s.trim())
+      .filter(Boolean);
     const pKas = pkTexts.map((t) => Number(t.replace('−', '-')));
-    if (pKas.some((v) => !Number.isFinite(v))) errs.pKas = 'pKa values must be numbers, separated by commas';
+    if (pKas.some((v) => !Number.isFinite(v)))
+      errs.pKas = 'pKa values must be numbers, separated by commas';
     if (Object.keys(errs).length) {
       setErrors(errs);
       return;
@@ -69,14 +73,24 @@ export function InHouseIonForm() {
         try {
           s = await parseStructure(draft.ionSmiles);
         } catch (err) {
-          setErrors({ ionSmiles: err instanceof ChemInputError ? err.message.replace(/^smiles: /, '') : 'Cannot read this SMILES' });
+          setErrors({
+            ionSmiles:
+              err instanceof ChemInputError
+                ? err.message.replace(/^smiles: /, '')
+                : 'Cannot read this SMILES',
+          });
           return;
         }
         let typed;
         try {
           typed = parseFormula(draft.formula, 'formula').elements;
         } catch (err) {
-          setErrors({ formula: err instanceof Error ? err.message.replace(/^formula: /, '') : 'Cannot read this formula' });
+          setErrors({
+            formula:
+              err instanceof Error
+                ? err.message.replace(/^formula: /, '')
+                : 'Cannot read this formula',
+          });
           return;
         }
         if (!sameElements(typed, s.elements)) {
@@ -98,7 +112,10 @@ export function InHouseIonForm() {
           ionSmiles: draft.ionSmiles,
           pKas,
           pKaSource: draft.pKaSource,
-          acceptabilityClass: draft.acceptabilityClass === '' ? null : (Number(draft.acceptabilityClass) as AcceptabilityClass),
+          acceptabilityClass:
+            draft.acceptabilityClass === ''
+              ? null
+              : (Number(draft.acceptabilityClass) as AcceptabilityClass),
           tradeNote: draft.tradeNote,
           aromaticRings: rings.aromatic,
           nonAromaticRings: rings.nonAromatic,
@@ -108,7 +125,9 @@ export function InHouseIonForm() {
       await customIonsRepo.saveInHouse(ion);
       setErrors({});
       setDraft({ ...EMPTY, kind: draft.kind, charge: draft.kind === 'anion' ? '-1' : '1' });
-      setStatus(`Saved “${ion.name}” (${ion.molarMassGPerMol.toFixed(2)} g/mol) as an in-house ion for every project.`);
+      setStatus(
+        `Saved “${ion.name}” (${ion.molarMassGPerMol.toFixed(2)} g/mol) as an in-house ion for every project.`,
+      );
     } catch (err) {
       if (err instanceof ChemInputError) {
         const key = (err.field in EMPTY ? err.field : 'name') as keyof Draft;
@@ -159,18 +178,31 @@ export function InHouseIonForm() {
         </div>
         {field('formula', 'Ion formula', 'Hill or any order, without the charge, e.g. C7H7O3S')}
         {field('charge', 'Ion charge', 'e.g. -1, -2, +1')}
-        {field('pKas', 'pKa values of the parent', '25 °C, water; parent acid, or conjugate acid of the base; commas between values')}
+        {field(
+          'pKas',
+          'pKa values of the parent',
+          '25 °C, water; parent acid, or conjugate acid of the base; commas between values',
+        )}
         {field('pKaSource', 'Source of the pKa values', 'e.g. in-house measurement, report no.')}
         <div className="field">
           <label htmlFor="inhouse-class">Acceptability class</label>
-          <select id="inhouse-class" value={draft.acceptabilityClass} onChange={(e) => set('acceptabilityClass', e.target.value)}>
+          <select
+            id="inhouse-class"
+            value={draft.acceptabilityClass}
+            onChange={(e) => set('acceptabilityClass', e.target.value)}
+          >
             <option value="">None</option>
             <option value="1">1</option>
             <option value="2">2</option>
             <option value="3">3</option>
           </select>
         </div>
-        {field('ionSmiles', 'Ion SMILES (optional)', 'checked against the formula; gives the ring counts', true)}
+        {field(
+          'ionSmiles',
+          'Ion SMILES (optional)',
+          'checked against the formula; gives the ring counts',
+          true,
+        )}
         {field('tradeNote', 'Note', undefined, true)}
         <div className="button-row field-wide">
           <button type="submit" className="primary" disabled={busy}>

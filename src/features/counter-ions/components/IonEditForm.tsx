@@ -2,7 +2,8 @@ import { useState, type FormEvent } from 'react';
 import type { AcceptabilityClass, CounterIonEdit, LibraryIon } from '@/chem';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 
-const sameNumbers = (a: number[], b: number[]) => a.length === b.length && a.every((x, i) => Math.abs(x - b[i]!) < 1e-9);
+const sameNumbers = (a: number[], b: number[]) =>
+  a.length === b.length && a.every((x, i) => Math.abs(x - b[i]!) < 1e-9);
 
 /**
  * Edit a bundled ion's pKa values, class or note for this project only. The bundled values stay in the
@@ -11,7 +12,9 @@ const sameNumbers = (a: number[], b: number[]) => a.length === b.length && a.eve
 export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: string }) {
   const base = ion.original ?? ion;
   const [pkas, setPkas] = useState(ion.pKas.map((p) => p.value).join(', '));
-  const [cls, setCls] = useState<string>(ion.acceptabilityClass === null ? '' : String(ion.acceptabilityClass));
+  const [cls, setCls] = useState<string>(
+    ion.acceptabilityClass === null ? '' : String(ion.acceptabilityClass),
+  );
   const [note, setNote] = useState(ion.tradeNote);
   const [error, setError] = useState<string | null>(null);
   const [status, setStatus] = useState<string | null>(null);
@@ -20,7 +23,10 @@ export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: st
   const save = async (e: FormEvent) => {
     e.preventDefault();
     setStatus(null);
-    const texts = pkas.split(/[;\s]+|,\s*/).map((s) => s.trim()).filter(Boolean);
+    const texts = pkas
+      .split(/[;\s]+|,\s*/)
+      .map((s) => s.trim())
+      .filter(Boolean);
     const values = texts.map((t) => Number(t));
     if (values.some((v) => !Number.isFinite(v) || v < -10 || v > 20)) {
       setError('pKa values must be numbers from −10 to 20, separated by commas');
@@ -29,7 +35,13 @@ export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: st
     setError(null);
     const edit: CounterIonEdit = {};
     const sorted = [...values].sort((a, b) => a - b);
-    if (!sameNumbers(sorted, base.pKas.map((p) => p.value))) edit.pKas = sorted;
+    if (
+      !sameNumbers(
+        sorted,
+        base.pKas.map((p) => p.value),
+      )
+    )
+      edit.pKas = sorted;
     const clsValue = cls === '' ? null : (Number(cls) as AcceptabilityClass);
     if (clsValue !== base.acceptabilityClass) edit.acceptabilityClass = clsValue;
     if (note !== base.tradeNote) edit.tradeNote = note;
@@ -55,8 +67,8 @@ export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: st
       <h4>Your values for this project</h4>
       {ion.origin === 'edited' ? (
         <p className="ion-original">
-          Bundled: pKa {base.pKas.map((p) => p.value.toFixed(2)).join(', ') || 'none'}; class {base.acceptabilityClass ?? 'none'}. Edited:{' '}
-          {ion.editedFields.join(', ')}.
+          Bundled: pKa {base.pKas.map((p) => p.value.toFixed(2)).join(', ') || 'none'}; class{' '}
+          {base.acceptabilityClass ?? 'none'}. Edited: {ion.editedFields.join(', ')}.
         </p>
       ) : null}
       <div className="field">
@@ -85,7 +97,12 @@ export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: st
       </div>
       <div className="field">
         <label htmlFor={`${idp}-note`}>Note</label>
-        <textarea id={`${idp}-note`} rows={2} value={note} onChange={(e) => setNote(e.target.value)} />
+        <textarea
+          id={`${idp}-note`}
+          rows={2}
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+        />
       </div>
       <div className="button-row">
         <button type="submit">Save for this project</button>

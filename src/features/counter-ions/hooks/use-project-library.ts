@@ -34,8 +34,14 @@ export function useProjectLibrary(projectId: string | null): {
     const merged = mergeLibrary(COUNTER_IONS, records ?? [], projectId);
     // Nothing is reported before the acknowledged list is read (no flash of an old report).
     const seen = new Set(Array.isArray(acknowledged) ? acknowledged : []);
-    const rejected = acknowledged === null ? [] : merged.rejected.filter((r) => !seen.has(r.recordId));
-    return { ions: merged.ions, loading: records === null, rejected, rejectedCount: rejected.length };
+    const rejected =
+      acknowledged === null ? [] : merged.rejected.filter((r) => !seen.has(r.recordId));
+    return {
+      ions: merged.ions,
+      loading: records === null,
+      rejected,
+      rejectedCount: rejected.length,
+    };
   }, [records, projectId, acknowledged]);
 }
 

@@ -8,7 +8,12 @@ import { candidateLabel } from '@/screening-data/candidate-label';
 import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/compute-screening';
 import { useProjectScreening } from '@/screening-data/use-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import { cancellationNote, energyCycleOf, relativeSolutionEnthalpies, sourcesOf } from '../energetics-model';
+import {
+  cancellationNote,
+  energyCycleOf,
+  relativeSolutionEnthalpies,
+  sourcesOf,
+} from '../energetics-model';
 import '../energetics.css';
 
 const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
@@ -16,7 +21,14 @@ const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
 function labelOf(data: ProjectScreening, id: string): string {
   const row = data.screen.rows.find((r) => r.id === id);
   if (!row) return data.ionNames[id] ?? id;
-  return candidateLabel({ ionId: row.counterIonId, drugPerSalt: row.drugPerSalt, counterIonPerSalt: row.counterIonPerSalt }, data.ionNames[id]);
+  return candidateLabel(
+    {
+      ionId: row.counterIonId,
+      drugPerSalt: row.drugPerSalt,
+      counterIonPerSalt: row.counterIonPerSalt,
+    },
+    data.ionNames[id],
+  );
 }
 
 /** Drug ions per formula unit of a candidate's salt (1 when unknown). */
@@ -48,10 +60,14 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
       </section>
     );
   }
-  const withThermo = Object.values(data.energetics).filter((e): e is CandidateEnergetics & { thermo: SaltThermoResult } => e.thermo !== null);
+  const withThermo = Object.values(data.energetics).filter(
+    (e): e is CandidateEnergetics & { thermo: SaltThermoResult } => e.thermo !== null,
+  );
   const current = withThermo.find((e) => e.candidateId === focusId) ?? withThermo[0];
   const measuredDH = new Map(
-    data.screen.rows.filter((r) => r.measured?.solutionEnthalpyKJ != null).map((r) => [r.id, r.measured!.solutionEnthalpyKJ!]),
+    data.screen.rows
+      .filter((r) => r.measured?.solutionEnthalpyKJ != null)
+      .map((r) => [r.id, r.measured!.solutionEnthalpyKJ!]),
   );
   const withoutThermo = Object.values(data.energetics).filter((e) => e.thermo === null);
 
@@ -60,19 +76,30 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
       <section className="panel" aria-labelledby="energetics-title">
         <header className="panel-head">
           <h2 id="energetics-title">Energetics</h2>
-          {screening.status === 'loading' ? <span className="muted" role="status">Recomputing…</span> : null}
+          {screening.status === 'loading' ? (
+            <span className="muted" role="status">
+              Recomputing…
+            </span>
+          ) : null}
         </header>
         <p className="convention">
           <strong>Sign convention.</strong> {SIGN_CONVENTION}
         </p>
         {withThermo.length === 0 ? (
-          <p>No candidate could be estimated: {withoutThermo.map((e) => `${labelOf(data, e.candidateId)}: ${e.reason}`).join('; ')}</p>
+          <p>
+            No candidate could be estimated:{' '}
+            {withoutThermo.map((e) => `${labelOf(data, e.candidateId)}: ${e.reason}`).join('; ')}
+          </p>
         ) : (
           <div className="energetics-layout">
             <div>
               <div className="field">
                 <label htmlFor={`${uid}-pick`}>Salt</label>
-                <select id={`${uid}-pick`} value={current?.candidateId ?? ''} onChange={(e) => focus(e.target.value)}>
+                <select
+                  id={`${uid}-pick`}
+                  value={current?.candidateId ?? ''}
+                  onChange={(e) => focus(e.target.value)}
+                >
                   {withThermo.map((e) => (
                     <option key={e.candidateId} value={e.candidateId}>
                       {labelOf(data, e.candidateId)}
@@ -80,11 +107,19 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
                   ))}
                 </select>
               </div>
-              {current ? <CycleDetails data={data} e={current} measured={measuredDH.get(current.candidateId) ?? null} /> : null}
+              {current ? (
+                <CycleDetails
+                  data={data}
+                  e={current}
+                  measured={measuredDH.get(current.candidateId) ?? null}
+                />
+              ) : null}
             </div>
             {current ? (
               <div>
-                <EnergyLevelDiagram cycle={energyCycleOf(current, labelOf(data, current.candidateId))} />
+                <EnergyLevelDiagram
+                  cycle={energyCycleOf(current, labelOf(data, current.candidateId))}
+                />
                 <p className="weak-model" role="note">
                   {cancellationNote(energyCycleOf(current, ''))}
                 </p>
@@ -97,8 +132,8 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
         <section className="panel" aria-labelledby="compare-title">
           <h2 id="compare-title">All candidates side by side</h2>
           <p className="muted">
-            ΔH<sub>sol</sub> is compared per drug ion (per formula unit ÷ drug ions in it), so that a 2:1 salt stands beside 1:1 salts on the
-            same footing.
+            ΔH<sub>sol</sub> is compared per drug ion (per formula unit ÷ drug ions in it), so that
+            a 2:1 salt stands beside 1:1 salts on the same footing.
           </p>
           <WhiskerBars
             title="Estimated enthalpy of solution per drug ion"
@@ -118,7 +153,9 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
                 label: labelOf(data, e.candidateId),
                 value: e.thermo.solutionEnthalpyKJ.value / n,
                 uncertainty: e.thermo.solutionEnthalpyKJ.uncertainty / n,
-                ...(m !== undefined ? { marker: { value: m / n, label: `measured ${kj(m / n)} kJ/mol per drug ion` } } : {}),
+                ...(m !== undefined
+                  ? { marker: { value: m / n, label: `measured ${kj(m / n)} kJ/mol per drug ion` } }
+                  : {}),
               };
             })}
             width={760}
@@ -127,7 +164,10 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
           <WhiskerBars
             title="Estimated lattice enthalpy per formula unit"
             caption={`Lattice dissociation enthalpy ΔH_L (> 0) with ±1σ whiskers: ${withThermo
-              .map((e) => `${labelOf(data, e.candidateId)} ${kj(e.thermo.latticeEnthalpyKJ.value)} ± ${e.thermo.latticeEnthalpyKJ.uncertainty.toFixed(0)} (${e.thermo.methodChosen})`)
+              .map(
+                (e) =>
+                  `${labelOf(data, e.candidateId)} ${kj(e.thermo.latticeEnthalpyKJ.value)} ± ${e.thermo.latticeEnthalpyKJ.uncertainty.toFixed(0)} (${e.thermo.methodChosen})`,
+              )
               .join('; ')}.`}
             unit="ΔH_L, kJ/mol"
             format={(x) => kj(x)}
@@ -142,7 +182,9 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
           />
           {withoutThermo.length ? (
             <p className="muted">
-              Not estimated: {withoutThermo.map((e) => `${labelOf(data, e.candidateId)} (${e.reason})`).join('; ')}.
+              Not estimated:{' '}
+              {withoutThermo.map((e) => `${labelOf(data, e.candidateId)} (${e.reason})`).join('; ')}
+              .
             </p>
           ) : null}
           <CautionNote />
@@ -153,7 +195,13 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
 }
 
 /** ΔH_sol per drug ion relative to the median candidate, with the drug ion's common error taken out. */
-function RelativeBars({ data, items }: { data: ProjectScreening; items: (CandidateEnergetics & { thermo: SaltThermoResult })[] }) {
+function RelativeBars({
+  data,
+  items,
+}: {
+  data: ProjectScreening;
+  items: (CandidateEnergetics & { thermo: SaltThermoResult })[];
+}) {
   const drugIsCation = data.drugIon.charge > 0;
   const rel = relativeSolutionEnthalpies(
     items.map((e) => {
@@ -162,7 +210,10 @@ function RelativeBars({ data, items }: { data: ProjectScreening; items: (Candida
         id: e.candidateId,
         perDrugKJ: e.thermo.solutionEnthalpyKJ.value / m,
         perDrugSigmaKJ: e.thermo.solutionEnthalpyKJ.uncertainty / m,
-        drugHydrationSigmaKJ: (drugIsCation ? e.thermo.cationHydrationKJ : e.thermo.anionHydrationKJ).uncertainty,
+        drugHydrationSigmaKJ: (drugIsCation
+          ? e.thermo.cationHydrationKJ
+          : e.thermo.anionHydrationKJ
+        ).uncertainty,
       };
     }),
   );
@@ -174,13 +225,26 @@ function RelativeBars({ data, items }: { data: ProjectScreening; items: (Candida
         .join('; ')}.`}
       unit="ΔH_sol − median, kJ/mol per drug ion"
       format={(x) => kj(x)}
-      rows={rel.map((r) => ({ id: r.id, label: labelOf(data, r.id), value: r.valueKJ, uncertainty: r.sigmaKJ }))}
+      rows={rel.map((r) => ({
+        id: r.id,
+        label: labelOf(data, r.id),
+        value: r.valueKJ,
+        uncertainty: r.sigmaKJ,
+      }))}
       width={760}
     />
   );
 }
 
-function CycleDetails({ data, e, measured }: { data: ProjectScreening; e: CandidateEnergetics & { thermo: SaltThermoResult }; measured: number | null }) {
+function CycleDetails({
+  data,
+  e,
+  measured,
+}: {
+  data: ProjectScreening;
+  e: CandidateEnergetics & { thermo: SaltThermoResult };
+  measured: number | null;
+}) {
   const t = e.thermo;
   let backed: { value: number; uncertainty: number } | null = null;
   let backedError: string | null = null;
@@ -200,8 +264,16 @@ function CycleDetails({ data, e, measured }: { data: ProjectScreening; e: Candid
   }
   const rows: [string, string, { value: number; uncertainty: number; method: string }][] = [
     ['ΔH_L', 'lattice dissociation, per formula unit', t.latticeEnthalpyKJ],
-    [`ΔH_hyd,+`, `one ${e.cationLabel}${e.cationsPerFormula > 1 ? ` (× ${e.cationsPerFormula})` : ''}`, t.cationHydrationKJ],
-    [`ΔH_hyd,−`, `one ${e.anionLabel}${e.anionsPerFormula > 1 ? ` (× ${e.anionsPerFormula})` : ''}`, t.anionHydrationKJ],
+    [
+      `ΔH_hyd,+`,
+      `one ${e.cationLabel}${e.cationsPerFormula > 1 ? ` (× ${e.cationsPerFormula})` : ''}`,
+      t.cationHydrationKJ,
+    ],
+    [
+      `ΔH_hyd,−`,
+      `one ${e.anionLabel}${e.anionsPerFormula > 1 ? ` (× ${e.anionsPerFormula})` : ''}`,
+      t.anionHydrationKJ,
+    ],
     ['ΔH_sol', 'solution at infinite dilution, per formula unit', t.solutionEnthalpyKJ],
   ];
   return (
@@ -224,7 +296,12 @@ function CycleDetails({ data, e, measured }: { data: ProjectScreening; e: Candid
               <td>
                 {kj(est.value)} ± {est.uncertainty.toFixed(0)}{' '}
                 {est.method === 'published' ? (
-                  <span className="origin origin-published" title="published single-ion value (see Sources)">pub.</span>
+                  <span
+                    className="origin origin-published"
+                    title="published single-ion value (see Sources)"
+                  >
+                    pub.
+                  </span>
                 ) : (
                   <span className="origin origin-estimated">est.</span>
                 )}
@@ -256,7 +333,9 @@ function CycleDetails({ data, e, measured }: { data: ProjectScreening; e: Candid
           ) : null}
         </tbody>
       </table>
-      {backedError ? <p className="field-error">Lattice enthalpy not backed out: {backedError}</p> : null}
+      {backedError ? (
+        <p className="field-error">Lattice enthalpy not backed out: {backedError}</p>
+      ) : null}
       <p className="muted small-note">
         Lattice method: {t.methodChosen} — {t.methodReason}
       </p>

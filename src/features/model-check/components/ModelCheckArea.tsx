@@ -9,7 +9,11 @@ const signedPct = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(1
 
 /** Extra figures the ΔH_sol validation carries (kJ/mol errors and ±2σ coverage). */
 function solutionExtras(m: ModelValidation): string | null {
-  const s = m as ModelValidation & { meanAbsErrorKJ?: number; maxAbsErrorKJ?: number; coverage2Sigma?: number };
+  const s = m as ModelValidation & {
+    meanAbsErrorKJ?: number;
+    maxAbsErrorKJ?: number;
+    coverage2Sigma?: number;
+  };
   if (typeof s.meanAbsErrorKJ !== 'number') return null;
   return `mean |error| ${s.meanAbsErrorKJ.toFixed(1)} kJ/mol, max ${s.maxAbsErrorKJ?.toFixed(1)} kJ/mol; reference inside the ±2σ band for ${((s.coverage2Sigma ?? 0) * 100).toFixed(0)} % of salts`;
 }
@@ -40,22 +44,29 @@ export function ModelCheckArea() {
   const models = report.rows;
   const key = (m: ModelValidation) => `${m.model}/${m.group}`;
   // The chart shows each model once, on its widest reference set; the table below has every set.
-  const charted = models.filter((m) => m.group === 'all' || !models.some((o) => o.model === m.model && o.group === 'all'));
-  const shortLabel = (m: ModelValidation) => `${m.label.split(' (')[0]}${m.group === 'all' ? '' : ` · ${m.group}`}`;
+  const charted = models.filter(
+    (m) => m.group === 'all' || !models.some((o) => o.model === m.model && o.group === 'all'),
+  );
+  const shortLabel = (m: ModelValidation) =>
+    `${m.label.split(' (')[0]}${m.group === 'all' ? '' : ` · ${m.group}`}`;
   return (
     <div className="confidence-area">
       <section className="panel" aria-labelledby="confidence-title">
         <h2 id="confidence-title">Model check</h2>
         <p>
-          Each model run on the salts and ions whose values are published, with the same code and data the
-          ranking uses. Errors are (estimate − reference) / reference; for ΔH<sub>sol</sub>, relative to the
-          lattice enthalpy, because ΔH<sub>sol</sub> itself is a small difference of two large numbers and
-          sits near zero — its absolute error in kJ/mol is the figure to read.
+          Each model run on the salts and ions whose values are published, with the same code and
+          data the ranking uses. Errors are (estimate − reference) / reference; for ΔH<sub>sol</sub>
+          , relative to the lattice enthalpy, because ΔH<sub>sol</sub> itself is a small difference
+          of two large numbers and sits near zero — its absolute error in kJ/mol is the figure to
+          read.
         </p>
         <WhiskerBars
           title="Mean and largest absolute error per model"
           caption={`Bars: mean absolute % error over n reference values; diamonds: the largest single error. ${charted.length} models, each on its widest reference set (${models.length} model/set pairs in the table). ${charted
-            .map((m) => `${shortLabel(m)}: ${pct(m.meanAbsPercentError)} mean, ${pct(m.maxAbsPercentError)} max, n ${m.n}`)
+            .map(
+              (m) =>
+                `${shortLabel(m)}: ${pct(m.meanAbsPercentError)} mean, ${pct(m.maxAbsPercentError)} max, n ${m.n}`,
+            )
             .join('; ')}.`}
           unit="% error"
           domain={[0, Math.min(60, Math.max(5, ...charted.map((m) => m.maxAbsPercentError)))]}
@@ -65,7 +76,10 @@ export function ModelCheckArea() {
             id: key(m),
             label: shortLabel(m),
             value: m.meanAbsPercentError,
-            marker: { value: m.maxAbsPercentError, label: `largest error ${pct(m.maxAbsPercentError)}` },
+            marker: {
+              value: m.maxAbsPercentError,
+              label: `largest error ${pct(m.maxAbsPercentError)}`,
+            },
             note: `(n ${m.n})`,
           }))}
           width={760}
@@ -76,7 +90,9 @@ export function ModelCheckArea() {
         <h2 id="confidence-table-title">Figures</h2>
         <div className="table-scroll">
           <table className="data-table">
-            <caption className="sr-only">Validation of each model against published reference values</caption>
+            <caption className="sr-only">
+              Validation of each model against published reference values
+            </caption>
             <thead>
               <tr>
                 <th scope="col">Model</th>
@@ -116,7 +132,11 @@ export function ModelCheckArea() {
                         aria-controls={`rows-${k}`}
                         onClick={() => setOpen(open === k ? null : k)}
                       >
-                        {open === k ? 'Hide' : 'Show'} {m.n} values<span className="sr-only"> for {m.label}, {m.group}</span>
+                        {open === k ? 'Hide' : 'Show'} {m.n} values
+                        <span className="sr-only">
+                          {' '}
+                          for {m.label}, {m.group}
+                        </span>
                       </button>
                     </td>
                   </tr>,
@@ -155,9 +175,9 @@ export function ModelCheckArea() {
           </table>
         </div>
         <p className="convention">
-          Lattice enthalpies are dissociation enthalpies (ΔH<sub>L</sub> &gt; 0); hydration enthalpies are negative on
-          the conventional absolute scale. Sources are named per value; the engine’s documentation gives each
-          model’s constants and their origin.
+          Lattice enthalpies are dissociation enthalpies (ΔH<sub>L</sub> &gt; 0); hydration
+          enthalpies are negative on the conventional absolute scale. Sources are named per value;
+          the engine’s documentation gives each model’s constants and their origin.
         </p>
       </section>
     </div>

@@ -2,7 +2,8 @@ import { SALT_SOLUBILITY_MODEL, SALT_SOLUBILITY_SERIES, SALT_SOLUBILITY_VARIANTS
 import { ParityPlot } from '@/components/charts/ParityPlot';
 
 const f2 = (x: number | null) => (x === null || !Number.isFinite(x) ? '—' : x.toFixed(2));
-const pct0 = (x: number | null) => (x === null || !Number.isFinite(x) ? '—' : `${Math.round(x * 100)} %`);
+const pct0 = (x: number | null) =>
+  x === null || !Number.isFinite(x) ? '—' : `${Math.round(x * 100)} %`;
 
 const VARIANT_WORDS: Record<string, string> = {
   pooled: 'one regression over all salts',
@@ -23,20 +24,27 @@ export function SaltSolubilityCheck() {
   const series = SALT_SOLUBILITY_SERIES.filter((s) => s.salts.length >= 3);
   return (
     <section className="panel" aria-labelledby="salt-solubility-check-title">
-      <h2 id="salt-solubility-check-title">Salt solubility in water: tested on drugs it never saw</h2>
+      <h2 id="salt-solubility-check-title">
+        Salt solubility in water: tested on drugs it never saw
+      </h2>
       <p>
-        The estimate of each salt’s own solubility (log₁₀ mol/L of drug) was fitted on {shipped.nSalts} published
-        salts of {shipped.nDrugs} drugs and judged by leaving each drug out in turn: its salts are predicted by a model
-        that never saw it. Leave-one-drug-out RMSE <strong>{f2(shipped.rmse)}</strong> log units (the ±1σ every estimate
-        carries), against {f2(shipped.anchorRmse)} for the old anchor; mean Spearman ρ within a drug’s series{' '}
-        <strong>{f2(shipped.meanSpearman)}</strong> (anchor {f2(shipped.anchorMeanSpearman)}); the least soluble salt is
-        among the two lowest predicted in <strong>{pct0(shipped.leastSolubleHitRate)}</strong> of series (anchor{' '}
-        {pct0(shipped.anchorLeastSolubleHitRate)}). The published record readable to us is thin — mostly pharmacopoeial
-        statements, {series.length} series of three or more salts — so treat the ranking as a hint, not a verdict.
+        The estimate of each salt’s own solubility (log₁₀ mol/L of drug) was fitted on{' '}
+        {shipped.nSalts} published salts of {shipped.nDrugs} drugs and judged by leaving each drug
+        out in turn: its salts are predicted by a model that never saw it. Leave-one-drug-out RMSE{' '}
+        <strong>{f2(shipped.rmse)}</strong> log units (the ±1σ every estimate carries), against{' '}
+        {f2(shipped.anchorRmse)} for the old anchor; mean Spearman ρ within a drug’s series{' '}
+        <strong>{f2(shipped.meanSpearman)}</strong> (anchor {f2(shipped.anchorMeanSpearman)}); the
+        least soluble salt is among the two lowest predicted in{' '}
+        <strong>{pct0(shipped.leastSolubleHitRate)}</strong> of series (anchor{' '}
+        {pct0(shipped.anchorLeastSolubleHitRate)}). The published record readable to us is thin —
+        mostly pharmacopoeial statements, {series.length} series of three or more salts — so treat
+        the ranking as a hint, not a verdict.
       </p>
       <div className="table-scroll">
         <table className="data-table">
-          <caption className="sr-only">Leave-one-drug-out figures of each model variant, with the anchor on the same folds</caption>
+          <caption className="sr-only">
+            Leave-one-drug-out figures of each model variant, with the anchor on the same folds
+          </caption>
           <thead>
             <tr>
               <th scope="col">Variant</th>
@@ -76,7 +84,13 @@ export function SaltSolubilityCheck() {
             unit="log₁₀ mol/L"
             modelName="model"
             otherName="anchor"
-            points={s.salts.map((x, i) => ({ id: `${s.drugId}-${i}`, label: x.label, measured: x.measured ?? Number.NaN, predicted: x.predicted ?? Number.NaN, other: x.anchor ?? Number.NaN }))}
+            points={s.salts.map((x, i) => ({
+              id: `${s.drugId}-${i}`,
+              label: x.label,
+              measured: x.measured ?? Number.NaN,
+              predicted: x.predicted ?? Number.NaN,
+              other: x.anchor ?? Number.NaN,
+            }))}
           />
         ))}
       </div>

@@ -21,7 +21,9 @@ const KEEP_TEXT: Record<PersistenceAnswer, { short: string; long: string }> = {
 };
 
 function formatMb(bytes: number): string {
-  return bytes < 1024 * 1024 ? `${Math.max(1, Math.round(bytes / 1024))} kB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+  return bytes < 1024 * 1024
+    ? `${Math.max(1, Math.round(bytes / 1024))} kB`
+    : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 }
 
 /** The network and storage status shown in the top bar. */
@@ -31,7 +33,9 @@ export function OfflineStatus() {
   const offlineReady = useOfflineReady();
   const updateReady = useUpdateReady();
   const keep = answer ? KEEP_TEXT[answer] : null;
-  const usageText = usage ? ` Using ${formatMb(usage.usageBytes)} of ${formatMb(usage.quotaBytes)} available.` : '';
+  const usageText = usage
+    ? ` Using ${formatMb(usage.usageBytes)} of ${formatMb(usage.quotaBytes)} available.`
+    : '';
   return (
     <div className="link-status" role="group" aria-label="Network and storage">
       <span
@@ -41,7 +45,9 @@ export function OfflineStatus() {
           (online
             ? 'Connected. Saltsmith does not need the network: everything runs and is stored in this browser.'
             : 'No network. Saltsmith keeps working from the copy stored in this browser.') +
-          (offlineReady ? ' This browser holds a copy of the whole app: it opens and works with no network.' : '')
+          (offlineReady
+            ? ' This browser holds a copy of the whole app: it opens and works with no network.'
+            : '')
         }
       >
         <span className="link-status-dot" aria-hidden="true" />
@@ -55,7 +61,11 @@ export function OfflineStatus() {
         {offlineReady && !online ? <span hidden data-testid="offline-ready" /> : null}
       </span>
       {updateReady ? (
-        <button type="button" className="link-status-item link-status-update" onClick={() => window.location.reload()}>
+        <button
+          type="button"
+          className="link-status-item link-status-update"
+          onClick={() => window.location.reload()}
+        >
           New version — reload
         </button>
       ) : null}
@@ -66,7 +76,10 @@ export function OfflineStatus() {
           data-testid="persistence-status"
         >
           {keep.short}
-          <span className="visually-hidden">. {keep.long}{usageText}</span>
+          <span className="visually-hidden">
+            . {keep.long}
+            {usageText}
+          </span>
         </span>
       ) : null}
     </div>

@@ -6,7 +6,10 @@ import { useEffect, useState } from 'react';
  */
 export function useOfflineReady(): boolean {
   const [ready, setReady] = useState(
-    () => typeof navigator !== 'undefined' && 'serviceWorker' in navigator && !!navigator.serviceWorker.controller,
+    () =>
+      typeof navigator !== 'undefined' &&
+      'serviceWorker' in navigator &&
+      !!navigator.serviceWorker.controller,
   );
   useEffect(() => {
     if (ready || typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;

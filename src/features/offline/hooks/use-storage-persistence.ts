@@ -10,7 +10,10 @@ import {
  * Ask once per page load for persistent storage and read the usage estimate. `answer` is null while
  * the browser has not answered yet.
  */
-export function useStoragePersistence(): { answer: PersistenceAnswer | null; usage: StorageUsage | null } {
+export function useStoragePersistence(): {
+  answer: PersistenceAnswer | null;
+  usage: StorageUsage | null;
+} {
   const [answer, setAnswer] = useState<PersistenceAnswer | null>(null);
   const [usage, setUsage] = useState<StorageUsage | null>(null);
   useEffect(() => {

@@ -8,8 +8,16 @@ import '../project-files.css';
  * Save one project (compound, shortlist, measurements, custom ions, settings) as a Saltsmith project
  * file. The file is validated as it is written, so every exported file can be imported again.
  */
-export function ExportProjectButton({ projectId, projectName }: { projectId: string; projectName: string }) {
-  const [state, setState] = useState<{ kind: 'idle' | 'busy' | 'done' | 'error'; text?: string }>({ kind: 'idle' });
+export function ExportProjectButton({
+  projectId,
+  projectName,
+}: {
+  projectId: string;
+  projectName: string;
+}) {
+  const [state, setState] = useState<{ kind: 'idle' | 'busy' | 'done' | 'error'; text?: string }>({
+    kind: 'idle',
+  });
   const run = async () => {
     setState({ kind: 'busy' });
     try {
@@ -18,7 +26,10 @@ export function ExportProjectButton({ projectId, projectName }: { projectId: str
       downloadText(name, text, 'application/json');
       setState({ kind: 'done', text: `Saved as ${name}` });
     } catch (err) {
-      setState({ kind: 'error', text: `Could not export: ${err instanceof Error ? err.message : String(err)}` });
+      setState({
+        kind: 'error',
+        text: `Could not export: ${err instanceof Error ? err.message : String(err)}`,
+      });
     }
   };
   return (

@@ -61,14 +61,22 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
       if (err instanceof ProjectFileError) {
         setStep({ kind: 'refused', fileName: f.name, message: err.message, details: err.details });
       } else {
-        setStep({ kind: 'refused', fileName: f.name, message: `Could not read the file: ${String(err)}`, details: [] });
+        setStep({
+          kind: 'refused',
+          fileName: f.name,
+          message: `Could not read the file: ${String(err)}`,
+          details: [],
+        });
       }
     } finally {
       if (inputRef.current) inputRef.current.value = '';
     }
   };
 
-  const write = async (file: ProjectFile, target: { mode: 'new' } | { mode: 'replace'; projectId: string }) => {
+  const write = async (
+    file: ProjectFile,
+    target: { mode: 'new' } | { mode: 'replace'; projectId: string },
+  ) => {
     setStep({ kind: 'writing' });
     try {
       const outcome = await writeProjectFile(file, target);
@@ -100,7 +108,8 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
       {step.kind === 'refused' ? (
         <div className="project-file-error" role="alert">
           <p>
-            <strong>“{step.fileName}” was not imported.</strong> {step.message} Your projects are unchanged.
+            <strong>“{step.fileName}” was not imported.</strong> {step.message} Your projects are
+            unchanged.
           </p>
           {step.details.length > 3 ? (
             <details>
@@ -122,10 +131,10 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
       {step.kind === 'ready' ? (
         <div className="project-import-review" role="region" aria-label="File to import">
           <p>
-            <strong>{step.file.project.name}</strong> — compound “{step.file.project.compound.name}”,{' '}
-            {step.file.candidates.length} shortlisted, {step.file.measurements.length} measurements,{' '}
-            {step.file.customIons.length} custom ions. Written by {step.file.app.name} {step.file.app.version} on{' '}
-            {step.file.createdAt.slice(0, 10)}.
+            <strong>{step.file.project.name}</strong> — compound “{step.file.project.compound.name}
+            ”, {step.file.candidates.length} shortlisted, {step.file.measurements.length}{' '}
+            measurements, {step.file.customIons.length} custom ions. Written by {step.file.app.name}{' '}
+            {step.file.app.version} on {step.file.createdAt.slice(0, 10)}.
           </p>
           <div className="project-import-actions">
             <button type="button" onClick={() => void write(step.file, { mode: 'new' })}>
@@ -141,12 +150,22 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
             </button>
           </div>
           {replaceable && step.confirmReplace ? (
-            <div className="project-import-confirm" role="alertdialog" aria-label="Confirm replacement">
+            <div
+              className="project-import-confirm"
+              role="alertdialog"
+              aria-label="Confirm replacement"
+            >
               <p>
-                Replace everything in “{replaceable.name}” — compound, shortlist, measurements, its custom ions and
-                settings — with the file’s contents? This cannot be undone; export the project first if you may need it.
+                Replace everything in “{replaceable.name}” — compound, shortlist, measurements, its
+                custom ions and settings — with the file’s contents? This cannot be undone; export
+                the project first if you may need it.
               </p>
-              <button type="button" onClick={() => void write(step.file, { mode: 'replace', projectId: replaceable.id })}>
+              <button
+                type="button"
+                onClick={() =>
+                  void write(step.file, { mode: 'replace', projectId: replaceable.id })
+                }
+              >
                 Yes, replace “{replaceable.name}”
               </button>
               <button type="button" onClick={() => setStep({ ...step, confirmReplace: false })}>
@@ -158,8 +177,9 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
       ) : null}
       {step.kind === 'done' ? (
         <p role="status">
-          {step.replaced ? 'Replaced' : 'Imported'} “{step.outcome.name}”: {step.outcome.candidates} candidates,{' '}
-          {step.outcome.measurements} measurements, {step.outcome.customIons} custom ions.
+          {step.replaced ? 'Replaced' : 'Imported'} “{step.outcome.name}”: {step.outcome.candidates}{' '}
+          candidates, {step.outcome.measurements} measurements, {step.outcome.customIons} custom
+          ions.
         </p>
       ) : null}
     </div>

@@ -16,18 +16,25 @@ export interface ProjectFilesPanelProps {
  * Hand a project to a colleague, or take one in: export to a Saltsmith project file, import one as a
  * new project or in place of the chosen project.
  */
-export function ProjectFilesPanel({ projects, currentProjectId, onImported }: ProjectFilesPanelProps) {
+export function ProjectFilesPanel({
+  projects,
+  currentProjectId,
+  onImported,
+}: ProjectFilesPanelProps) {
   const selectId = useId();
   const [chosen, setChosen] = useState<string | null>(null);
   const selected =
-    projects.find((p) => p.id === chosen) ?? projects.find((p) => p.id === currentProjectId) ?? projects[0] ?? null;
+    projects.find((p) => p.id === chosen) ??
+    projects.find((p) => p.id === currentProjectId) ??
+    projects[0] ??
+    null;
   return (
     <section className="panel project-files" aria-labelledby={`${selectId}-title`}>
       <h2 id={`${selectId}-title`}>Project files</h2>
       <p className="muted">
-        A project file holds the compound, shortlist, bench measurements, custom counter-ions and settings of one
-        project (Saltsmith project format, JSON). Use it to hand a project to a colleague or keep a copy outside this
-        browser.
+        A project file holds the compound, shortlist, bench measurements, custom counter-ions and
+        settings of one project (Saltsmith project format, JSON). Use it to hand a project to a
+        colleague or keep a copy outside this browser.
       </p>
       {selected ? (
         <div className="project-file-export">

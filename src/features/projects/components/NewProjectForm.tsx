@@ -66,21 +66,43 @@ export function NewProjectForm({ onCreated }: { onCreated: (projectId: string) =
   };
 
   return (
-    <form className="panel new-project" aria-labelledby={`${uid}-title`} onSubmit={submit} noValidate>
+    <form
+      className="panel new-project"
+      aria-labelledby={`${uid}-title`}
+      onSubmit={submit}
+      noValidate
+    >
       <h2 id={`${uid}-title`}>Start a project</h2>
       <div className="form-grid">
         {field('name', 'Project name')}
         <div className="field">
           <label htmlFor={`${uid}-kind`}>Ionisable as</label>
-          <select id={`${uid}-kind`} value={draft.kind} onChange={(ev) => set('kind', ev.target.value)}>
+          <select
+            id={`${uid}-kind`}
+            value={draft.kind}
+            onChange={(ev) => set('kind', ev.target.value)}
+          >
             <option value="base">Weak base (forms a cation)</option>
             <option value="acid">Weak acid (forms an anion)</option>
           </select>
         </div>
-        {field('smiles', 'Structure (SMILES)', 'Neutral free form; or give the formula instead', true)}
+        {field(
+          'smiles',
+          'Structure (SMILES)',
+          'Neutral free form; or give the formula instead',
+          true,
+        )}
         {field('formula', 'Molecular formula', 'Optional when a SMILES is given, e.g. C18H20ClN3O')}
-        {field('pKa', draft.kind === 'base' ? 'pKa of the conjugate acid' : 'pKa', '25 °C, water; more values in the Compound area')}
-        {field('ionCharge', 'Charge of the salt-forming ion', draft.kind === 'base' ? '+1, +2 or +3' : '−1, −2 or −3')}
+        {field(
+          'pKa',
+          draft.kind === 'base' ? 'pKa of the conjugate acid' : 'pKa',
+          '25 °C, water; more values in the Compound area',
+        )}
+        {field(
+          'ionCharge',
+          'Charge of the salt-forming ion',
+          draft.kind === 'base' ? '+1, +2 or +3' : '−1, −2 or −3',
+        )}
       </div>
       {failure ? (
         <p className="field-error" role="alert">

@@ -95,7 +95,8 @@ export function ProjectCard({
         <div>
           <dt>Compound</dt>
           <dd>
-            {c.name} — weak {c.kind}, ion charge {c.ionCharge > 0 ? `+${c.ionCharge}` : `−${-c.ionCharge}`}
+            {c.name} — weak {c.kind}, ion charge{' '}
+            {c.ionCharge > 0 ? `+${c.ionCharge}` : `−${-c.ionCharge}`}
           </dd>
         </div>
         <div>
@@ -109,14 +110,17 @@ export function ProjectCard({
         <div>
           <dt>Shortlist</dt>
           <dd>
-            {candidateCount} counter-ion{candidateCount === 1 ? '' : 's'}, {measurementCount} measurement
+            {candidateCount} counter-ion{candidateCount === 1 ? '' : 's'}, {measurementCount}{' '}
+            measurement
             {measurementCount === 1 ? '' : 's'}
           </dd>
         </div>
         <div>
           <dt>Last edit</dt>
           <dd>
-            <time dateTime={project.updatedAt}>{dateFormat.format(new Date(project.updatedAt))}</time>
+            <time dateTime={project.updatedAt}>
+              {dateFormat.format(new Date(project.updatedAt))}
+            </time>
           </dd>
         </div>
       </dl>
@@ -129,10 +133,18 @@ export function ProjectCard({
         >
           {isOpen ? 'Go to compound' : 'Open'}
         </button>
-        <button type="button" onClick={() => setRenaming(true)} aria-label={`Rename ${project.name}`}>
+        <button
+          type="button"
+          onClick={() => setRenaming(true)}
+          aria-label={`Rename ${project.name}`}
+        >
           Rename
         </button>
-        <button type="button" onClick={() => actions.duplicate(project.id)} aria-label={`Duplicate ${project.name}`}>
+        <button
+          type="button"
+          onClick={() => actions.duplicate(project.id)}
+          aria-label={`Duplicate ${project.name}`}
+        >
           Duplicate
         </button>
         <button

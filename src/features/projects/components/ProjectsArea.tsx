@@ -38,9 +38,12 @@ export function ProjectsArea({
   const [confirmReset, setConfirmReset] = useState(false);
   const undoTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
 
-  useEffect(() => () => {
-    if (undoTimer.current) clearTimeout(undoTimer.current);
-  }, []);
+  useEffect(
+    () => () => {
+      if (undoTimer.current) clearTimeout(undoTimer.current);
+    },
+    [],
+  );
 
   const open = (id: string) => {
     openProject(id);
@@ -59,7 +62,11 @@ export function ProjectsArea({
     setArchived: (id, archived) => {
       void projectsRepo.setArchived(id, archived).then(() => {
         if (archived) setShowArchived((s) => s);
-        setMessage(archived ? 'Project archived: find it under “Show archived”.' : 'Project back on the board.');
+        setMessage(
+          archived
+            ? 'Project archived: find it under “Show archived”.'
+            : 'Project back on the board.',
+        );
       });
     },
     remove: (id) => {
@@ -97,7 +104,11 @@ export function ProjectsArea({
           <h2 id="projects-title">Projects</h2>
           <div className="button-row">
             <label className="inline-check">
-              <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
+              <input
+                type="checkbox"
+                checked={showArchived}
+                onChange={(e) => setShowArchived(e.target.checked)}
+              />
               Show archived ({archivedCount})
             </label>
             {confirmReset ? (
@@ -118,14 +129,16 @@ export function ProjectsArea({
           </div>
         </header>
         <p className="muted">
-          Every edit is saved in this browser as you make it. Projects open in any tab of this browser; a
-          second tab sees changes as they happen.
+          Every edit is saved in this browser as you make it. Projects open in any tab of this
+          browser; a second tab sees changes as they happen.
         </p>
         <div role="status" aria-live="polite" className="projects-status">
           {deleted ? (
             <span className="undo-bar">
-              Deleted <strong>{deleted.project.name}</strong> with {deleted.candidates.length} candidate
-              {deleted.candidates.length === 1 ? '' : 's'} and {deleted.measurements.length} measurement
+              Deleted <strong>{deleted.project.name}</strong> with {deleted.candidates.length}{' '}
+              candidate
+              {deleted.candidates.length === 1 ? '' : 's'} and {deleted.measurements.length}{' '}
+              measurement
               {deleted.measurements.length === 1 ? '' : 's'}.{' '}
               <button type="button" className="primary" onClick={() => void undo()}>
                 Undo delete

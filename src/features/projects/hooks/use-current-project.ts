@@ -28,7 +28,8 @@ export function useCurrentProject(): { project: ProjectRecord | undefined; loadi
       const demoId = await projectsRepo.ensureDemo();
       const last = await settingsRepo.get<string>(LAST_PROJECT_KEY);
       const lastExists = last ? await projectsRepo.get(last) : undefined;
-      const fallback = (await projectsRepo.list())[0]?.id ?? (await projectsRepo.list(true))[0]?.id ?? null;
+      const fallback =
+        (await projectsRepo.list())[0]?.id ?? (await projectsRepo.list(true))[0]?.id ?? null;
       const id = lastExists?.id ?? demoId ?? fallback;
       if (cancelled) return;
       openProject(id);
@@ -45,7 +46,10 @@ export function useCurrentProject(): { project: ProjectRecord | undefined; loadi
 
   // The query answers with the id it was asked about, so a stale answer is never taken for this id's.
   const answer = useLiveQuery(
-    async () => ({ id: projectId, project: projectId ? await projectsRepo.get(projectId) : undefined }),
+    async () => ({
+      id: projectId,
+      project: projectId ? await projectsRepo.get(projectId) : undefined,
+    }),
     [projectId],
   );
   const current = answer && answer.id === projectId ? answer : undefined;

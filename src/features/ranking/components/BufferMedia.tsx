@@ -5,10 +5,18 @@ import { projectsRepo } from '@/persistence/projects-repo';
 import { SCREENING_SETTINGS_KEY } from '@/screening-data/screening-settings';
 import type { ProjectRecord } from '@/persistence/records';
 import type { DisplayRow } from '../ranking-rows';
-import { bufferFromDraft, EMPTY_BUFFER, type BufferDraft, type BufferErrors } from '../buffer-media-model';
+import {
+  bufferFromDraft,
+  EMPTY_BUFFER,
+  type BufferDraft,
+  type BufferErrors,
+} from '../buffer-media-model';
 
 /** Counter-ions a buffer is commonly made of are any library ion; reference-only ions are left out. */
-const ION_CHOICES = COUNTER_IONS.filter((i) => !i.referenceOnly).map((i) => ({ id: i.id, name: i.name }));
+const ION_CHOICES = COUNTER_IONS.filter((i) => !i.referenceOnly).map((i) => ({
+  id: i.id,
+  name: i.name,
+}));
 
 /** Write the media list into the project's screening block, on top of what is stored now. */
 async function saveMedia(projectId: string, media: ScreeningMedium[]): Promise<void> {
@@ -60,9 +68,18 @@ export const BufferMedia = memo(function BufferMediaView({
       setBusy(false);
     }
   };
-  const remove = (id: string) => void saveMedia(project.id, media.filter((m) => m.id !== id));
+  const remove = (id: string) =>
+    void saveMedia(
+      project.id,
+      media.filter((m) => m.id !== id),
+    );
 
-  const input = (key: Exclude<keyof BufferDraft, 'ionId'>, label: string, unit?: string, hint?: string) => {
+  const input = (
+    key: Exclude<keyof BufferDraft, 'ionId'>,
+    label: string,
+    unit?: string,
+    hint?: string,
+  ) => {
     const id = `${uid}-${key}`;
     return (
       <div className="field">
@@ -88,9 +105,9 @@ export const BufferMedia = memo(function BufferMediaView({
     <section className="panel buffer-media" aria-labelledby={`${uid}-title`}>
       <h2 id={`${uid}-title`}>Your dissolution media</h2>
       <p className="muted">
-        A buffer you use in the lab, with the counter-ion it contains: salts of that counter-ion see it as a common
-        ion. Solubility is in free-form equivalents; D₀ = (dose / 250 mL) / solubility (ICH M9). Estimates unless the
-        salt’s solubility was measured.
+        A buffer you use in the lab, with the counter-ion it contains: salts of that counter-ion see
+        it as a common ion. Solubility is in free-form equivalents; D₀ = (dose / 250 mL) /
+        solubility (ICH M9). Estimates unless the salt’s solubility was measured.
       </p>
       {media.length > 0 ? (
         <div className="table-scroll">
@@ -103,7 +120,11 @@ export const BufferMedia = memo(function BufferMediaView({
                     {m.label}
                     <br />
                     <span className="unit">
-                      pH {m.pH}; {Object.entries(m.ions).map(([ion, c]) => `${ion} ${c} M`).join(', ')} — mg/mL (D₀)
+                      pH {m.pH};{' '}
+                      {Object.entries(m.ions)
+                        .map(([ion, c]) => `${ion} ${c} M`)
+                        .join(', ')}{' '}
+                      — mg/mL (D₀)
                     </span>
                   </th>
                 ))}
@@ -121,7 +142,9 @@ export const BufferMedia = memo(function BufferMediaView({
                           <>
                             {fmt(res.solubilityMgPerMl)}
                             {res.doseNumber !== null ? ` (${fmt(res.doseNumber)})` : ''}
-                            {res.convertsTo ? <span className="muted"> → {res.convertsTo}</span> : null}
+                            {res.convertsTo ? (
+                              <span className="muted"> → {res.convertsTo}</span>
+                            ) : null}
                           </>
                         ) : (
                           '—'
@@ -140,7 +163,11 @@ export const BufferMedia = memo(function BufferMediaView({
           {media.map((m) => (
             <li key={m.id}>
               {m.label} (pH {m.pH}){' '}
-              <button type="button" onClick={() => remove(m.id)} aria-label={`Remove medium ${m.label}`}>
+              <button
+                type="button"
+                onClick={() => remove(m.id)}
+                aria-label={`Remove medium ${m.label}`}
+              >
                 Remove
               </button>
             </li>

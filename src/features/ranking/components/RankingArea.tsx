@@ -7,7 +7,11 @@ import { useProjectScreening } from '@/screening-data/use-screening';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import { useRobustness, ROBUSTNESS_ITERATIONS, type RobustnessState } from '@/screening-data/use-robustness';
+import {
+  useRobustness,
+  ROBUSTNESS_ITERATIONS,
+  type RobustnessState,
+} from '@/screening-data/use-robustness';
 import { useWeights } from '../hooks/use-weights';
 import { BufferMedia } from './BufferMedia';
 import { displayRows } from '../ranking-rows';
@@ -35,52 +39,70 @@ export const RankingCautions = memo(function RankingCautionsView() {
 });
 
 /** Rank robustness: the Monte Carlo's probabilities as bars, with its progress while it runs. */
-const RobustnessPanel = memo(function RobustnessPanelView({ robustness, labels }: { robustness: RobustnessState; labels: Record<string, string> }) {
+const RobustnessPanel = memo(function RobustnessPanelView({
+  robustness,
+  labels,
+}: {
+  robustness: RobustnessState;
+  labels: Record<string, string>;
+}) {
   // Ordered by the probability itself, so the bars change only when a new Monte Carlo run arrives.
-  const results = [...(robustness.results ?? [])].sort((a, b) => b.pTop3 - a.pTop3 || b.pFirst - a.pFirst);
+  const results = [...(robustness.results ?? [])].sort(
+    (a, b) => b.pTop3 - a.pTop3 || b.pFirst - a.pFirst,
+  );
   return (
     <section className="panel" aria-labelledby="robustness-title">
-        <header className="panel-head">
-          <h2 id="robustness-title">How firm is the order?</h2>
-          {robustness.status === 'running' ? (
-            <span className="progress-wrap">
-              <label htmlFor="robustness-progress">Monte Carlo</label>{' '}
-              <progress id="robustness-progress" max={1} value={robustness.progress} />
-            </span>
-          ) : null}
-        </header>
-        <p className="muted">
-          Probability that each candidate stays in the top three when the estimates move within their stated uncertainties (pKa, S₀,
-          each salt’s K_sp), {ROBUSTNESS_ITERATIONS} draws with a fixed seed, computed in the background with the current weights.
-        </p>
-        {robustness.status === 'error' ? <p role="alert">Robustness could not be computed: {robustness.error}</p> : null}
-        {robustness.results ? (
-          <div className={robustness.status === 'running' ? 'stale' : undefined}>
-            <WhiskerBars
-              title="Probability of staying in the top three"
-              caption={results
-                .map((x) => `${labels[x.id] ?? x.id}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first`)
-                .join('; ')}
-              unit="% of draws in the top three"
-              domain={[0, 100]}
-              format={(x) => `${x.toFixed(0)}`}
-              rows={results.map((x) => ({
-                id: x.id,
-                label: labels[x.id] ?? x.id,
-                value: x.pTop3 * 100,
-                note: `(first ${(x.pFirst * 100).toFixed(0)} %)`,
-              }))}
-            />
-          </div>
-        ) : robustness.status === 'running' ? (
-          <p className="loading">Drawing…</p>
+      <header className="panel-head">
+        <h2 id="robustness-title">How firm is the order?</h2>
+        {robustness.status === 'running' ? (
+          <span className="progress-wrap">
+            <label htmlFor="robustness-progress">Monte Carlo</label>{' '}
+            <progress id="robustness-progress" max={1} value={robustness.progress} />
+          </span>
         ) : null}
-      </section>
+      </header>
+      <p className="muted">
+        Probability that each candidate stays in the top three when the estimates move within their
+        stated uncertainties (pKa, S₀, each salt’s K_sp), {ROBUSTNESS_ITERATIONS} draws with a fixed
+        seed, computed in the background with the current weights.
+      </p>
+      {robustness.status === 'error' ? (
+        <p role="alert">Robustness could not be computed: {robustness.error}</p>
+      ) : null}
+      {robustness.results ? (
+        <div className={robustness.status === 'running' ? 'stale' : undefined}>
+          <WhiskerBars
+            title="Probability of staying in the top three"
+            caption={results
+              .map(
+                (x) =>
+                  `${labels[x.id] ?? x.id}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first`,
+              )
+              .join('; ')}
+            unit="% of draws in the top three"
+            domain={[0, 100]}
+            format={(x) => `${x.toFixed(0)}`}
+            rows={results.map((x) => ({
+              id: x.id,
+              label: labels[x.id] ?? x.id,
+              value: x.pTop3 * 100,
+              note: `(first ${(x.pFirst * 100).toFixed(0)} %)`,
+            }))}
+          />
+        </div>
+      ) : robustness.status === 'running' ? (
+        <p className="loading">Drawing…</p>
+      ) : null}
+    </section>
   );
 });
 
 /** What the screen assumed, in words; re-rendered only when the screen changes. */
-const ScreenAssumptions = memo(function ScreenAssumptionsView({ data }: { data: ProjectScreening }) {
+const ScreenAssumptions = memo(function ScreenAssumptionsView({
+  data,
+}: {
+  data: ProjectScreening;
+}) {
   return (
     <section className="panel" aria-labelledby="assumptions-title">
       <h2 id="assumptions-title">Assumptions of this screen</h2>
@@ -106,7 +128,10 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   // The table re-ranks in the same frame as the slider (its re-ordering is transform-based while the
   // slider moves, see RankingTable). What is slower to follow — the media table and the chart's top
   // three — follows when the movement ends (`settleTick`), the Monte Carlo after the weights settle.
-  const ranked = useMemo(() => (data ? rankCandidates(data.screen.rows, weights) : []), [data, weights]);
+  const ranked = useMemo(
+    () => (data ? rankCandidates(data.screen.rows, weights) : []),
+    [data, weights],
+  );
   const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
   const deferredWeights = useDeferredValue(weights);
   const [settleTick, setSettleTick] = useState(0);
@@ -118,7 +143,9 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   }, [weights, onSettle]);
   // The ranking as it stood when the last movement ended (or the screen changed).
   const settledRows = useMemo(() => rows, [data, settleTick]); // eslint-disable-line react-hooks/exhaustive-deps
-  const mediaView = useDeferredValue(useMemo(() => ({ rows: settledRows, media: data?.settings.media ?? [] }), [settledRows, data]));
+  const mediaView = useDeferredValue(
+    useMemo(() => ({ rows: settledRows, media: data?.settings.media ?? [] }), [settledRows, data]),
+  );
   const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
   const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
   const topKey = useDeferredValue(
@@ -201,8 +228,9 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
             ) : null}
             <p className="legend muted">
               <span className="origin origin-estimated">est.</span> estimate from the models;{' '}
-              <span className="origin origin-measured">meas.</span> rests on your bench data. Dose number D₀ = (dose / 250 mL) / solubility;
-              above 1 the dose does not dissolve (ICH M9). ±1σ ranges come from each estimate’s stated uncertainty.
+              <span className="origin origin-measured">meas.</span> rests on your bench data. Dose
+              number D₀ = (dose / 250 mL) / solubility; above 1 the dose does not dissolve (ICH M9).
+              ±1σ ranges come from each estimate’s stated uncertainty.
             </p>
             <div className="ranking-grid">
               <WeightSliders
@@ -221,7 +249,12 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
           <ScreeningConditions project={project} settings={data.settings} />
           <BufferMedia project={project} media={mediaView.media} rows={mediaView.rows} />
           <RobustnessPanel robustness={robustness} labels={labels} />
-          <SolubilityPanel data={data} labels={labels} topKey={topKey} doseMg={project.compound.doseMg} />
+          <SolubilityPanel
+            data={data}
+            labels={labels}
+            topKey={topKey}
+            doseMg={project.compound.doseMg}
+          />
           <ScreenAssumptions data={data} />
         </>
       ) : null}

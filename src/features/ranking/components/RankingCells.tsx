@@ -15,13 +15,25 @@ export function Origin({ n }: { n: Pick<ShownNumber, 'origin' | 'basis'> }) {
   );
 }
 
-export function Sortable({ k, children, title }: { k: RankingSortKey; children: React.ReactNode; title?: string }) {
+export function Sortable({
+  k,
+  children,
+  title,
+}: {
+  k: RankingSortKey;
+  children: React.ReactNode;
+  title?: string;
+}) {
   const sortKey = useRankingViewStore((s) => s.sortKey);
   const dir = useRankingViewStore((s) => s.sortDir);
   const sortBy = useRankingViewStore((s) => s.sortBy);
   const active = sortKey === k;
   return (
-    <th scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'} title={title}>
+    <th
+      scope="col"
+      aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'}
+      title={title}
+    >
       <button type="button" className="sort-button" onClick={() => sortBy(k)}>
         {children}
         <span aria-hidden="true" className="sort-mark">
@@ -70,7 +82,12 @@ export function DoseCell({ d }: { d: (ShownNumber & { pH?: number }) | null }) {
     <td className={d.value > 1 ? 'dose-bad' : 'dose-ok'}>
       {sig(d.value, 2)}
       {d.pH !== undefined ? <span className="unit"> at pH {d.pH}</span> : null} <Origin n={d} />
-      {d.range ? <span className="range"> ±1σ {sig(d.range[0], 2)}–{sig(d.range[1], 2)}</span> : null}
+      {d.range ? (
+        <span className="range">
+          {' '}
+          ±1σ {sig(d.range[0], 2)}–{sig(d.range[1], 2)}
+        </span>
+      ) : null}
     </td>
   );
 }

@@ -8,25 +8,34 @@ import { SaltWaterCell } from './SaltWaterCell';
 const minus = (s: string) => s.replace(/^-/, '−');
 
 /** Cells that depend on the screen only, not on the weights: re-rendered only when the screen changes. */
-const sameScreenRow = (a: { r: DisplayRow }, b: { r: DisplayRow }) => a.r.row === b.r.row && a.r.label === b.r.label;
+const sameScreenRow = (a: { r: DisplayRow }, b: { r: DisplayRow }) =>
+  a.r.row === b.r.row && a.r.label === b.r.label;
 
-const CandidateCell = memo(function CandidateCellView({ r, onFocus }: { r: DisplayRow; onFocus?: (id: string) => void }) {
-  return (
-    <th scope="row" className="cand-cell">
-      {onFocus ? (
-        <button type="button" className="link-button" onClick={() => onFocus(r.id)} title="Open its energy picture">
-          {r.label}
-        </button>
-      ) : (
-        r.label
-      )}
-      <span className="muted small-note">
-        {r.acceptabilityClass ? `class ${r.acceptabilityClass}` : 'no class'}
-        {r.row.hydrateWater ? ` · ${r.row.hydrateWater} H₂O` : ''}
-      </span>
-    </th>
-  );
-}, (a, b) => sameScreenRow(a, b) && a.onFocus === b.onFocus);
+const CandidateCell = memo(
+  function CandidateCellView({ r, onFocus }: { r: DisplayRow; onFocus?: (id: string) => void }) {
+    return (
+      <th scope="row" className="cand-cell">
+        {onFocus ? (
+          <button
+            type="button"
+            className="link-button"
+            onClick={() => onFocus(r.id)}
+            title="Open its energy picture"
+          >
+            {r.label}
+          </button>
+        ) : (
+          r.label
+        )}
+        <span className="muted small-note">
+          {r.acceptabilityClass ? `class ${r.acceptabilityClass}` : 'no class'}
+          {r.row.hydrateWater ? ` · ${r.row.hydrateWater} H₂O` : ''}
+        </span>
+      </th>
+    );
+  },
+  (a, b) => sameScreenRow(a, b) && a.onFocus === b.onFocus,
+);
 
 interface FixedCellsProps {
   r: DisplayRow;
@@ -35,78 +44,92 @@ interface FixedCellsProps {
   onToggle: (id: string) => void;
 }
 
-const FixedCells = memo(function FixedCellsView({ r, open, onToggle }: FixedCellsProps) {
-  const row = r.row;
-  const reasonsId = `why-${r.id}`;
-  return (
-    <>
-      <td>
-        {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
-        {row.saltFormation ? <span className="muted small-note">{row.saltFormation.band}</span> : null}
-      </td>
-      <SaltWaterCell s={r.saltWater} poorlySoluble={row.flags.some((f) => f.id === 'likely-poorly-soluble')} />
-      {r.phMax ? (
+const FixedCells = memo(
+  function FixedCellsView({ r, open, onToggle }: FixedCellsProps) {
+    const row = r.row;
+    const reasonsId = `why-${r.id}`;
+    return (
+      <>
         <td>
-          {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span> <Origin n={r.phMax} />
+          {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
+          {row.saltFormation ? (
+            <span className="muted small-note">{row.saltFormation.band}</span>
+          ) : null}
         </td>
-      ) : (
-        <td className="muted">none in 0–14</td>
-      )}
-      <DoseCell d={r.worstDose} />
-      <DoseCell d={r.gastricDose} />
-      {r.solutionEnthalpy ? (
+        <SaltWaterCell
+          s={r.saltWater}
+          poorlySoluble={row.flags.some((f) => f.id === 'likely-poorly-soluble')}
+        />
+        {r.phMax ? (
+          <td>
+            {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span>{' '}
+            <Origin n={r.phMax} />
+          </td>
+        ) : (
+          <td className="muted">none in 0–14</td>
+        )}
+        <DoseCell d={r.worstDose} />
+        <DoseCell d={r.gastricDose} />
+        {r.solutionEnthalpy ? (
+          <td>
+            {minus(r.solutionEnthalpy.value.toFixed(0))}
+            {r.solutionEnthalpy.sigma !== undefined ? (
+              <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span>
+            ) : null}{' '}
+            <Origin n={r.solutionEnthalpy} />
+          </td>
+        ) : (
+          <td className="muted">—</td>
+        )}
         <td>
-          {minus(r.solutionEnthalpy.value.toFixed(0))}
-          {r.solutionEnthalpy.sigma !== undefined ? <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span> : null}{' '}
-          <Origin n={r.solutionEnthalpy} />
+          {(r.activeFraction * 100).toFixed(0)} %
+          {r.saltMassPerDoseMg !== null ? (
+            <span className="muted small-note">{sig(r.saltMassPerDoseMg)} mg salt/dose</span>
+          ) : null}
         </td>
-      ) : (
-        <td className="muted">—</td>
-      )}
-      <td>
-        {(r.activeFraction * 100).toFixed(0)} %
-        {r.saltMassPerDoseMg !== null ? <span className="muted small-note">{sig(r.saltMassPerDoseMg)} mg salt/dose</span> : null}
-      </td>
-      <td className="reasons-cell">
-        {row.error ? <p className="field-error">Not screened: {row.error}</p> : null}
-        {row.flags
-          .filter((f) => f.id !== 'estimated-ksp')
-          .map((f) => (
-            <span key={f.id} className={`flag flag-${f.id}`} title={f.rule}>
-              {f.text}
-            </span>
-          ))}
-        {row.reasons.length ? (
-          <button
-            type="button"
-            className="why-button"
-            aria-expanded={open}
-            aria-controls={open ? reasonsId : undefined}
-            onClick={() => onToggle(r.id)}
-          >
-            Why ({row.reasons.length})
-          </button>
-        ) : null}
-        {open && row.reasons.length ? (
-          <ul className="reasons" id={reasonsId}>
-            {row.reasons.map((x, i) => (
-              <li key={i} className={`reason-${x.kind}`}>
-                {x.text}
-              </li>
+        <td className="reasons-cell">
+          {row.error ? <p className="field-error">Not screened: {row.error}</p> : null}
+          {row.flags
+            .filter((f) => f.id !== 'estimated-ksp')
+            .map((f) => (
+              <span key={f.id} className={`flag flag-${f.id}`} title={f.rule}>
+                {f.text}
+              </span>
             ))}
-            {row.flags.map((f) => (
-              <li key={`rule-${f.id}`} className="reason-note">
-                Rule behind “{f.text}”: {f.rule}
-              </li>
-            ))}
-          </ul>
-        ) : null}
-      </td>
-    </>
-  );
-}, (a, b) => sameScreenRow(a, b) && a.open === b.open && a.onToggle === b.onToggle);
+          {row.reasons.length ? (
+            <button
+              type="button"
+              className="why-button"
+              aria-expanded={open}
+              aria-controls={open ? reasonsId : undefined}
+              onClick={() => onToggle(r.id)}
+            >
+              Why ({row.reasons.length})
+            </button>
+          ) : null}
+          {open && row.reasons.length ? (
+            <ul className="reasons" id={reasonsId}>
+              {row.reasons.map((x, i) => (
+                <li key={i} className={`reason-${x.kind}`}>
+                  {x.text}
+                </li>
+              ))}
+              {row.flags.map((f) => (
+                <li key={`rule-${f.id}`} className="reason-note">
+                  Rule behind “{f.text}”: {f.rule}
+                </li>
+              ))}
+            </ul>
+          ) : null}
+        </td>
+      </>
+    );
+  },
+  (a, b) => sameScreenRow(a, b) && a.open === b.open && a.onToggle === b.onToggle,
+);
 
-const sameOrder = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x, i) => x === b[i]);
+const sameOrder = (a: readonly string[], b: readonly string[]) =>
+  a.length === b.length && a.every((x, i) => x === b[i]);
 
 /**
  * The ranked shortlist: sortable, each number with unit, uncertainty and origin, reasons in words
@@ -165,7 +188,11 @@ export const RankingTable = memo(function RankingTableView({
   // read), not on every weight movement: a movement changes only the rank and the score, whose boxes
   // have a fixed size (ranking.css), so no height moves.
   const body = useRef<HTMLTableSectionElement>(null);
-  const measured = useRef<{ key: readonly unknown[]; tops: number[]; pitch: Map<string, number> } | null>(null);
+  const measured = useRef<{
+    key: readonly unknown[];
+    tops: number[];
+    pitch: Map<string, number>;
+  } | null>(null);
   const measureKey = [order, openIds, ...docRows.map((r) => r.row)];
   const rowCount = docRows.length;
   useLayoutEffect(() => {
@@ -176,10 +203,19 @@ export const RankingTable = memo(function RankingTableView({
     if (trs.length === 0 || !measurable) return;
     const prev = measured.current;
     let m = prev;
-    if (!prev || prev.key.length !== measureKey.length || prev.key.some((x, i) => x !== measureKey[i])) {
+    if (
+      !prev ||
+      prev.key.length !== measureKey.length ||
+      prev.key.some((x, i) => x !== measureKey[i])
+    ) {
       for (const tr of trs) tr.style.transform = '';
       const tops = trs.map((tr) => tr.offsetTop);
-      const pitch = new Map(order.map((id, i) => [id, i + 1 < trs.length ? tops[i + 1]! - tops[i]! : trs[i]!.offsetHeight]));
+      const pitch = new Map(
+        order.map((id, i) => [
+          id,
+          i + 1 < trs.length ? tops[i + 1]! - tops[i]! : trs[i]!.offsetHeight,
+        ]),
+      );
       m = measured.current = { key: measureKey, tops, pitch };
     }
     const { tops, pitch } = m!;
@@ -199,20 +235,44 @@ export const RankingTable = memo(function RankingTableView({
     <div className="table-scroll">
       <table className="data-table ranking-table">
         <caption className="sr-only">
-          Ranked candidates. Columns: rank, candidate, score, ΔpKa, salt in water, pH_max, dose numbers, enthalpy of solution, active fraction, flags and reasons.
+          Ranked candidates. Columns: rank, candidate, score, ΔpKa, salt in water, pH_max, dose
+          numbers, enthalpy of solution, active fraction, flags and reasons.
         </caption>
         <thead>
           <tr>
             <Sortable k="rank">#</Sortable>
             <Sortable k="name">Candidate</Sortable>
             <th scope="col">Score (0–1)</th>
-            <Sortable k="deltaPka" title="pKa(protonated base) − pKa(acid)">ΔpKa</Sortable>
-            <Sortable k="saltWaterSolubility" title="The salt's own solubility in pure water (mg/mL as salt), ±1σ">Salt in water</Sortable>
-            <Sortable k="phMax" title="pH where salt and free form are both saturated">pH_max ± 1σ</Sortable>
-            <Sortable k="worstDoseNumber" title="Dose number at the worst pH in 1.2–6.8 (250 mL, ICH M9)">Worst D₀, pH 1.2–6.8</Sortable>
-            <Sortable k="gastricDoseNumber" title="Dose number in the gastric medium with its chloride">Gastric D₀</Sortable>
-            <Sortable k="solutionEnthalpy" title="ΔH_sol per formula unit, infinite dilution">ΔH_sol (kJ/mol)</Sortable>
-            <Sortable k="activeFraction" title="Mass fraction of free form in the salt">Active fraction</Sortable>
+            <Sortable k="deltaPka" title="pKa(protonated base) − pKa(acid)">
+              ΔpKa
+            </Sortable>
+            <Sortable
+              k="saltWaterSolubility"
+              title="The salt's own solubility in pure water (mg/mL as salt), ±1σ"
+            >
+              Salt in water
+            </Sortable>
+            <Sortable k="phMax" title="pH where salt and free form are both saturated">
+              pH_max ± 1σ
+            </Sortable>
+            <Sortable
+              k="worstDoseNumber"
+              title="Dose number at the worst pH in 1.2–6.8 (250 mL, ICH M9)"
+            >
+              Worst D₀, pH 1.2–6.8
+            </Sortable>
+            <Sortable
+              k="gastricDoseNumber"
+              title="Dose number in the gastric medium with its chloride"
+            >
+              Gastric D₀
+            </Sortable>
+            <Sortable k="solutionEnthalpy" title="ΔH_sol per formula unit, infinite dilution">
+              ΔH_sol (kJ/mol)
+            </Sortable>
+            <Sortable k="activeFraction" title="Mass fraction of free form in the salt">
+              Active fraction
+            </Sortable>
             <th scope="col">Flags and reasons</th>
           </tr>
         </thead>

@@ -34,7 +34,9 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
   project: ProjectRecord;
   settings: ScreeningSettings;
 }) {
-  const [draft, setDraft] = useState<ConditionsDraft>(() => conditionsDraftOf(project.settings, settings));
+  const [draft, setDraft] = useState<ConditionsDraft>(() =>
+    conditionsDraftOf(project.settings, settings),
+  );
   const [errors, setErrors] = useState<ConditionsErrors>({});
   const [state, setState] = useState<'saved' | 'pending' | 'invalid'>('saved');
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
@@ -125,14 +127,23 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
       <summary>
         <span className="conditions-title">Screening conditions</span>{' '}
         <span className="muted">
-          gastric pH {settings.gastricPh}, Cl⁻ {project.settings.gastricChlorideM} M · microenvironment pH{' '}
-          {project.settings.microenvironmentPh} · {project.settings.temperatureC} °C
+          gastric pH {settings.gastricPh}, Cl⁻ {project.settings.gastricChlorideM} M ·
+          microenvironment pH {project.settings.microenvironmentPh} ·{' '}
+          {project.settings.temperatureC} °C
         </span>{' '}
         <span className={`save-badge save-${state}`} role="status" aria-live="polite">
-          {state === 'saved' ? 'Saved' : state === 'pending' ? 'Saving…' : 'Not saved: fix the marked field'}
+          {state === 'saved'
+            ? 'Saved'
+            : state === 'pending'
+              ? 'Saving…'
+              : 'Not saved: fix the marked field'}
         </span>
       </summary>
-      <form className="form-grid" onSubmit={(e) => e.preventDefault()} aria-label="Screening conditions">
+      <form
+        className="form-grid"
+        onSubmit={(e) => e.preventDefault()}
+        aria-label="Screening conditions"
+      >
         {field('gastricPh')}
         {field('gastricChlorideM')}
         {field('microenvironmentPh')}
@@ -142,7 +153,11 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
         {field('saltAbove')}
         <div className="field">
           <label htmlFor={`${uid}-activity`}>Activities</label>
-          <select id={`${uid}-activity`} value={draft.activityModel} onChange={(e) => change('activityModel', e.target.value)}>
+          <select
+            id={`${uid}-activity`}
+            value={draft.activityModel}
+            onChange={(e) => change('activityModel', e.target.value)}
+          >
             <option value="ideal">Ideal (activity = concentration)</option>
             <option value="davies">Davies correction</option>
           </select>

@@ -28,9 +28,17 @@ export const SolubilityPanel = memo(function SolubilityPanelView({
   const top = topKey ? topKey.split('|') : [];
   const chosen = chartIds ?? top;
   const rows = data.screen.rows.filter((r) => !r.error);
-  const chosenKey = rows.filter((r) => chosen.includes(r.id)).map((r) => r.id).join('|');
+  const chosenKey = rows
+    .filter((r) => chosen.includes(r.id))
+    .map((r) => r.id)
+    .join('|');
   const series = useMemo(
-    () => seriesOf(data, rows.filter((r) => chosenKey.split('|').includes(r.id)), labels),
+    () =>
+      seriesOf(
+        data,
+        rows.filter((r) => chosenKey.split('|').includes(r.id)),
+        labels,
+      ),
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [data, chosenKey, labels],
   );
@@ -38,12 +46,20 @@ export const SolubilityPanel = memo(function SolubilityPanelView({
     <section className="panel" aria-labelledby="solubility-title">
       <h2 id="solubility-title">Solubility against pH</h2>
       <div className="solubility-layout">
-        <MemoChart series={series} doseMg={doseMg} title={`Solubility (free-form equivalents) of ${data.screen.compoundName} and its salts`} />
+        <MemoChart
+          series={series}
+          doseMg={doseMg}
+          title={`Solubility (free-form equivalents) of ${data.screen.compoundName} and its salts`}
+        />
         <fieldset className="chart-picks">
           <legend>Salts on the chart</legend>
           {rows.map((r) => (
             <label key={r.id} className="inline-check">
-              <input type="checkbox" checked={chosen.includes(r.id)} onChange={() => toggle(r.id, top)} />
+              <input
+                type="checkbox"
+                checked={chosen.includes(r.id)}
+                onChange={() => toggle(r.id, top)}
+              />
               {labels[r.id] ?? r.label}
             </label>
           ))}
@@ -54,11 +70,29 @@ export const SolubilityPanel = memo(function SolubilityPanelView({
   );
 });
 
-const MemoChart = memo(function MemoChartView({ series, doseMg, title }: { series: SolubilitySeries[]; doseMg: number | null; title: string }) {
-  return <PhSolubilityChart series={series} doseLineMgPerMl={doseMg ? doseMg / VOLUME_ML : null} title={title} />;
+const MemoChart = memo(function MemoChartView({
+  series,
+  doseMg,
+  title,
+}: {
+  series: SolubilitySeries[];
+  doseMg: number | null;
+  title: string;
+}) {
+  return (
+    <PhSolubilityChart
+      series={series}
+      doseLineMgPerMl={doseMg ? doseMg / VOLUME_ML : null}
+      title={title}
+    />
+  );
 });
 
-function seriesOf(data: ProjectScreening, chosen: ScreenRow[], labels: Record<string, string>): SolubilitySeries[] {
+function seriesOf(
+  data: ProjectScreening,
+  chosen: ScreenRow[],
+  labels: Record<string, string>,
+): SolubilitySeries[] {
   return [
     {
       id: 'free-form',
@@ -80,11 +114,15 @@ function seriesOf(data: ProjectScreening, chosen: ScreenRow[], labels: Record<st
 
 function FreeFormNote({ data }: { data: ProjectScreening }) {
   return (
-      <p className="muted">
-        Free form: {data.screen.freeForm.intrinsicOrigin === 'measured' ? 'measured S₀' : 'S₀ from the General Solubility Equation (estimate)'}, log₁₀ S₀ ={' '}
-        {data.screen.freeForm.log10IntrinsicM.value.toFixed(2)} ± {data.screen.freeForm.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L). Salt curves
-        without a measured salt solubility rest on an estimated K_sp (±1σ about one decade) — read their position relative to each other, not as
-        predictions of a measured value.
-      </p>
+    <p className="muted">
+      Free form:{' '}
+      {data.screen.freeForm.intrinsicOrigin === 'measured'
+        ? 'measured S₀'
+        : 'S₀ from the General Solubility Equation (estimate)'}
+      , log₁₀ S₀ = {data.screen.freeForm.log10IntrinsicM.value.toFixed(2)} ±{' '}
+      {data.screen.freeForm.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L). Salt curves without a
+      measured salt solubility rest on an estimated K_sp (±1σ about one decade) — read their
+      position relative to each other, not as predictions of a measured value.
+    </p>
   );
 }

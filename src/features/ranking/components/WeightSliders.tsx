@@ -32,8 +32,9 @@ export function WeightSliders({
     <fieldset className="weights" ref={box}>
       <legend>Weights</legend>
       <p className="field-hint">
-        Each criterion scores 0–1; the score is the weighted mean (its bar in the table is split in these colours). Drag to see the order
-        change. {total === 0 ? 'All weights are zero: nothing is ranked by merit.' : ''}
+        Each criterion scores 0–1; the score is the weighted mean (its bar in the table is split in
+        these colours). Drag to see the order change.{' '}
+        {total === 0 ? 'All weights are zero: nothing is ranked by merit.' : ''}
       </p>
       {CRITERIA.map((k, i) => {
         const id = `${uid}-${k}`;

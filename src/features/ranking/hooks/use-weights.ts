@@ -3,7 +3,11 @@ import { screeningWeightsSchema, type ScreeningWeights } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
 import type { ProjectRecord } from '@/persistence/records';
-import { SCREENING_SETTINGS_KEY, screeningBlockOf, screeningSettingsOf } from '@/screening-data/screening-settings';
+import {
+  SCREENING_SETTINGS_KEY,
+  screeningBlockOf,
+  screeningSettingsOf,
+} from '@/screening-data/screening-settings';
 
 /** Save this long after the last slider movement, ms. */
 const SAVE_DELAY_MS = 400;
@@ -62,7 +66,9 @@ export function useWeights(project: ProjectRecord): {
       pending.current = null;
       const p = projectRef.current;
       const block = screeningBlockOf({ ...screeningSettingsOf(p), weights: valid });
-      void projectsRepo.updateExtraSettings(p.id, SCREENING_SETTINGS_KEY, block).finally(() => setSaving(false));
+      void projectsRepo
+        .updateExtraSettings(p.id, SCREENING_SETTINGS_KEY, block)
+        .finally(() => setSaving(false));
     };
     pending.current = save;
     timer.current = setTimeout(() => {

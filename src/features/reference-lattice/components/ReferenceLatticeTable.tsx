@@ -1,4 +1,10 @@
-import { estimateSaltThermo, getThermoIon, LATTICE_REFERENCE_SALTS, referenceLatticeEnthalpyKJ, type ThermoIon } from '@/chem';
+import {
+  estimateSaltThermo,
+  getThermoIon,
+  LATTICE_REFERENCE_SALTS,
+  referenceLatticeEnthalpyKJ,
+  type ThermoIon,
+} from '@/chem';
 
 const CATIONS = ['sodium', 'potassium'];
 const ANIONS = ['chloride', 'bromide'];
@@ -19,10 +25,22 @@ export function ReferenceLatticeTable() {
     ANIONS.map((a) => {
       const cat = ion(c);
       const an = ion(a);
-      const r = estimateSaltThermo({ cation: cat, anion: an, cationsPerFormula: 1, anionsPerFormula: 1, method: 'kapustinskii' });
+      const r = estimateSaltThermo({
+        cation: cat,
+        anion: an,
+        cationsPerFormula: 1,
+        anionsPerFormula: 1,
+        method: 'kapustinskii',
+      });
       const refSalt = LATTICE_REFERENCE_SALTS.find((s) => s.cation === c && s.anion === a);
       const ref = refSalt ? referenceLatticeEnthalpyKJ(refSalt) : undefined;
-      return { salt: `${cat.formula ?? cat.label}${an.formula ?? an.label}`, cat, an, e: r.latticeEnthalpyKJ, ref };
+      return {
+        salt: `${cat.formula ?? cat.label}${an.formula ?? an.label}`,
+        cat,
+        an,
+        e: r.latticeEnthalpyKJ,
+        ref,
+      };
     }),
   );
   const radiusSource = ion('sodium').radiusA?.sources[0] ?? '';
@@ -30,8 +48,8 @@ export function ReferenceLatticeTable() {
     <section className="panel" aria-labelledby="ref-lattice-title">
       <h2 id="ref-lattice-title">Engine check: Kapustinskii lattice enthalpies</h2>
       <p className="convention">
-        Sign convention: lattice <em>dissociation</em> enthalpy ΔH<sub>L</sub> &gt; 0 for MX(s) → M⁺(g) + X⁻(g);
-        the formation (textbook) value is the same number with a minus sign.
+        Sign convention: lattice <em>dissociation</em> enthalpy ΔH<sub>L</sub> &gt; 0 for MX(s) →
+        M⁺(g) + X⁻(g); the formation (textbook) value is the same number with a minus sign.
       </p>
       <table className="data-table">
         <thead>
@@ -39,7 +57,9 @@ export function ReferenceLatticeTable() {
             <th scope="col">Salt</th>
             <th scope="col">r₊ (Å)</th>
             <th scope="col">r₋ (Å)</th>
-            <th scope="col">ΔH<sub>L</sub> (kJ/mol)</th>
+            <th scope="col">
+              ΔH<sub>L</sub> (kJ/mol)
+            </th>
             <th scope="col">Born–Haber (kJ/mol)</th>
           </tr>
         </thead>
@@ -58,9 +78,10 @@ export function ReferenceLatticeTable() {
         </tbody>
       </table>
       <p className="source">
-        Radii: {radiusSource}. Method: Kapustinskii 1956 (CRC Handbook form, K = 1214 kJ·Å/mol); uncertainty is
-        the method’s RMS error on the bundled reference salts. Born–Haber: from ΔfH° (Wagman et al. 1982, NBS
-        tables) and ionisation energies / electron affinities (CRC Handbook) — entered from memory.
+        Radii: {radiusSource}. Method: Kapustinskii 1956 (CRC Handbook form, K = 1214 kJ·Å/mol);
+        uncertainty is the method’s RMS error on the bundled reference salts. Born–Haber: from ΔfH°
+        (Wagman et al. 1982, NBS tables) and ionisation energies / electron affinities (CRC
+        Handbook) — entered from memory.
       </p>
     </section>
   );

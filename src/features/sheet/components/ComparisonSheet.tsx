@@ -37,11 +37,24 @@ function SettingsTable({ caption, items }: { caption: string; items: SheetSettin
 
 const GROUPS: { id: SheetColumnGroup; caption: string }[] = [
   { id: 'formation', caption: 'Salt formation, tablet mass and moisture' },
-  { id: 'solubility', caption: 'Solubility across pH 1.2–6.8 and in gastric fluid (ICH M9 dose numbers)' },
+  {
+    id: 'solubility',
+    caption: 'Solubility across pH 1.2–6.8 and in gastric fluid (ICH M9 dose numbers)',
+  },
   { id: 'energetics', caption: 'Enthalpies of the dissolution cycle (compare between candidates)' },
 ];
 
-function RankedTable({ model, group, caption, withFlags }: { model: SheetModel; group: SheetColumnGroup; caption: string; withFlags: boolean }) {
+function RankedTable({
+  model,
+  group,
+  caption,
+  withFlags,
+}: {
+  model: SheetModel;
+  group: SheetColumnGroup;
+  caption: string;
+  withFlags: boolean;
+}) {
   const columns = model.columns.filter((c) => c.group === group);
   if (columns.length === 0 && !withFlags) return null;
   return (
@@ -89,7 +102,9 @@ function RankedTable({ model, group, caption, withFlags }: { model: SheetModel; 
                 </td>
               );
             })}
-            {withFlags ? <td className="sheet-flags">{r.flags.length ? r.flags.join('; ') : '—'}</td> : null}
+            {withFlags ? (
+              <td className="sheet-flags">{r.flags.length ? r.flags.join('; ') : '—'}</td>
+            ) : null}
           </tr>
         ))}
       </tbody>
@@ -114,14 +129,16 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
           {model.compound.name}
         </h1>
         <p className="sheet-meta">
-          Project <strong>{model.projectName}</strong> · made {Number.isNaN(made.getTime()) ? model.generatedAt : dateFormat.format(made)} ·
-          Saltsmith {model.appVersion}
+          Project <strong>{model.projectName}</strong> · made{' '}
+          {Number.isNaN(made.getTime()) ? model.generatedAt : dateFormat.format(made)} · Saltsmith{' '}
+          {model.appVersion}
         </p>
       </header>
 
       <aside className="sheet-caution" aria-label="Cautions">
-        <strong>Screening estimates only.</strong> {CAUTION_LINES[0]} Experiments, the regulatory guidance in force
-        and your lab’s safety rules decide. See the full cautions at the end of this sheet.
+        <strong>Screening estimates only.</strong> {CAUTION_LINES[0]} Experiments, the regulatory
+        guidance in force and your lab’s safety rules decide. See the full cautions at the end of
+        this sheet.
       </aside>
 
       <section className="sheet-block sheet-inputs" aria-label="Compound and settings">
@@ -135,14 +152,26 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
         {model.rows.length === 0 ? (
           <p>No candidates are shortlisted in this project.</p>
         ) : (
-          GROUPS.map((g) => <RankedTable key={g.id} model={model} group={g.id} caption={g.caption} withFlags={g.id === 'formation'} />)
+          GROUPS.map((g) => (
+            <RankedTable
+              key={g.id}
+              model={model}
+              group={g.id}
+              caption={g.caption}
+              withFlags={g.id === 'formation'}
+            />
+          ))
         )}
         {model.rows.some((r) => r.reasons.length) ? (
           <div className="sheet-reasons-block">
             <h3>Why each candidate sits where it does</h3>
             <ol className="sheet-reasons">
               {model.rows.map((r) => (
-                <li key={r.id} value={r.rank ?? undefined} className={r.rank === null ? 'unranked' : undefined}>
+                <li
+                  key={r.id}
+                  value={r.rank ?? undefined}
+                  className={r.rank === null ? 'unranked' : undefined}
+                >
                   <strong>{r.label}</strong>
                   {r.rank === null ? ' (not ranked)' : ''}
                   {r.reasons.length ? (
@@ -158,17 +187,26 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
           </div>
         ) : null}
         <p className="sheet-legend">
-          Marks: {Object.values(ORIGIN_MARK).map((o) => `“${o.mark}” ${o.words}`).join(', ')}. “±” is one standard
-          uncertainty (1σ). Lattice enthalpy is the dissociation enthalpy (&gt; 0); hydration enthalpies are negative;
-          ΔH_sol = ΔH_L + Σ ΔH_hyd, a small difference of large numbers — compare candidates with each other rather than
-          trusting one value alone.
+          Marks:{' '}
+          {Object.values(ORIGIN_MARK)
+            .map((o) => `“${o.mark}” ${o.words}`)
+            .join(', ')}
+          . “±” is one standard uncertainty (1σ). Lattice enthalpy is the dissociation enthalpy
+          (&gt; 0); hydration enthalpies are negative; ΔH_sol = ΔH_L + Σ ΔH_hyd, a small difference
+          of large numbers — compare candidates with each other rather than trusting one value
+          alone.
         </p>
       </section>
 
       {model.solubility && model.solubility.series.length ? (
         <section className="sheet-block sheet-figure" aria-labelledby="sheet-solubility">
           <h2 id="sheet-solubility">Solubility against pH</h2>
-          <PhSolubilityChart series={model.solubility.series} doseLineMgPerMl={model.solubility.doseLineMgPerMl} width={640} height={320} />
+          <PhSolubilityChart
+            series={model.solubility.series}
+            doseLineMgPerMl={model.solubility.doseLineMgPerMl}
+            width={640}
+            height={320}
+          />
         </section>
       ) : null}
 
@@ -227,7 +265,11 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
         </section>
       ) : null}
 
-      <section className="sheet-block sheet-cautions" aria-labelledby="sheet-cautions-title" data-testid="sheet-cautions">
+      <section
+        className="sheet-block sheet-cautions"
+        aria-labelledby="sheet-cautions-title"
+        data-testid="sheet-cautions"
+      >
         <h2 id="sheet-cautions-title">Before you act on this ranking</h2>
         <ul>
           {CAUTION_LINES.map((l) => (

@@ -11,5 +11,11 @@ export function SheetContainer({ project }: { project: ProjectRecord }) {
     state.status === 'error'
       ? `The comparison could not be made: ${state.error ?? 'unknown error'}. Check the compound and the shortlist.`
       : 'Screening the shortlist…';
-  return <SheetView model={state.status === 'ready' ? (state.model ?? null) : null} status={status} onClose={close} />;
+  return (
+    <SheetView
+      model={state.status === 'ready' ? (state.model ?? null) : null}
+      status={status}
+      onClose={close}
+    />
+  );
 }

@@ -5,7 +5,9 @@ import '../sheet.css';
 
 // The sheet brings charts and the screening with it: load it when it is first opened, not with the
 // first screen (the service worker precaches the chunk, so it opens offline too).
-const SheetContainer = lazy(() => import('./SheetContainer').then((m) => ({ default: m.SheetContainer })));
+const SheetContainer = lazy(() =>
+  import('./SheetContainer').then((m) => ({ default: m.SheetContainer })),
+);
 
 /** The comparison sheet of the open project, while the sheet is open. */
 export function SheetOverlay({ project }: { project: ProjectRecord | undefined }) {

@@ -48,12 +48,19 @@ export function SheetView({
           type="button"
           disabled={!model}
           onClick={() => {
-            if (model) downloadText(sheetCsvFileName(model.projectName, model.generatedAt), sheetToCsv(model), 'text/csv;charset=utf-8');
+            if (model)
+              downloadText(
+                sheetCsvFileName(model.projectName, model.generatedAt),
+                sheetToCsv(model),
+                'text/csv;charset=utf-8',
+              );
           }}
         >
           Download CSV
         </button>
-        <span className="sheet-toolbar-note">Both carry the cautions: estimates screen, they do not establish a salt form.</span>
+        <span className="sheet-toolbar-note">
+          Both carry the cautions: estimates screen, they do not establish a salt form.
+        </span>
         <button type="button" onClick={onClose}>
           Back to the workbench
         </button>

@@ -23,8 +23,15 @@ export function useSheetModel(project: ProjectRecord | undefined): SheetModelSta
   const screening = useProjectScreening(project);
   const [generatedAt] = useState(() => new Date().toISOString());
   const screen = screening.result?.screen;
-  const robustRows = useMemo(() => screen?.rows.filter((r) => !r.error).map((r) => r.robustness), [screen]);
-  const robustness = useRobustness(robustRows, screening.result?.settings.weights ?? defaultWeights, screen?.robustnessShared);
+  const robustRows = useMemo(
+    () => screen?.rows.filter((r) => !r.error).map((r) => r.robustness),
+    [screen],
+  );
+  const robustness = useRobustness(
+    robustRows,
+    screening.result?.settings.weights ?? defaultWeights,
+    screen?.robustnessShared,
+  );
   const validation = useMemo<ModelValidation[]>(() => {
     try {
       return validationReport();
@@ -37,7 +44,8 @@ export function useSheetModel(project: ProjectRecord | undefined): SheetModelSta
     if (screening.status === 'error') return { status: 'error', error: screening.error };
     if (!screening.result) return { status: 'loading' };
     // Wait for the rank robustness (a few seconds in its worker); a failed run leaves the column empty.
-    if (robustness.status === 'running' || (robustness.status === 'idle' && robustRows?.length)) return { status: 'loading' };
+    if (robustness.status === 'running' || (robustness.status === 'idle' && robustRows?.length))
+      return { status: 'loading' };
     try {
       const model = buildSheetModel({
         project,
@@ -47,12 +55,25 @@ export function useSheetModel(project: ProjectRecord | undefined): SheetModelSta
         appVersion: __APP_VERSION__,
         robustness:
           robustness.status === 'done' && robustness.results
-            ? { results: robustness.results, iterations: robustness.iterations ?? 0, seed: ROBUSTNESS_SEED }
+            ? {
+                results: robustness.results,
+                iterations: robustness.iterations ?? 0,
+                seed: ROBUSTNESS_SEED,
+              }
             : null,
       });
       return { status: screening.status === 'ready' ? 'ready' : 'loading', model };
     } catch (err) {
       return { status: 'error', error: err instanceof Error ? err.message : String(err) };
     }
-  }, [project, screening.status, screening.result, screening.error, validation, generatedAt, robustness, robustRows]);
+  }, [
+    project,
+    screening.status,
+    screening.result,
+    screening.error,
+    validation,
+    generatedAt,
+    robustness,
+    robustRows,
+  ]);
 }

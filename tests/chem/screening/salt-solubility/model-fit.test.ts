@@ -3,8 +3,15 @@ import * as OCL from 'openchemlib';
 import Papa from 'papaparse';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { COUNTER_IONS } from '@/chem';
-import { computeLibraryDescriptors, renderLibraryDescriptorsModule } from '@/chem/screening/salt-solubility/library-descriptors';
-import { fitAndValidateSaltSolubility, renderModelDataModule, type SaltSolubilityBuild } from '@/chem/screening/salt-solubility/model-build';
+import {
+  computeLibraryDescriptors,
+  renderLibraryDescriptorsModule,
+} from '@/chem/screening/salt-solubility/library-descriptors';
+import {
+  fitAndValidateSaltSolubility,
+  renderModelDataModule,
+  type SaltSolubilityBuild,
+} from '@/chem/screening/salt-solubility/model-build';
 import type { CsvRecord } from '@/chem/screening/salt-solubility/training-rows';
 
 /**
@@ -16,20 +23,29 @@ import type { CsvRecord } from '@/chem/screening/salt-solubility/training-rows';
  * with the ridge penalty chosen inside each fold — never the training fit.
  */
 const read = (p: string) => readFileSync(new URL(`../../../../${p}`, import.meta.url), 'utf8');
-const csv = (p: string) => Papa.parse<CsvRecord>(read(p), { header: true, skipEmptyLines: true }).data;
+const csv = (p: string) =>
+  Papa.parse<CsvRecord>(read(p), { header: true, skipEmptyLines: true }).data;
 
 let built: SaltSolubilityBuild;
 beforeAll(() => {
-  built = fitAndValidateSaltSolubility(OCL, csv('fixtures/reference/salt-solubility.csv'), csv('fixtures/reference/salt-solubility-drugs.csv'));
+  built = fitAndValidateSaltSolubility(
+    OCL,
+    csv('fixtures/reference/salt-solubility.csv'),
+    csv('fixtures/reference/salt-solubility-drugs.csv'),
+  );
 }, 60_000);
 
 describe('salt-solubility model: shipped = regenerated from the published set', () => {
   it('the coefficients module is byte for byte what the fit script writes', () => {
-    expect(renderModelDataModule(built)).toBe(read('src/chem/screening/salt-solubility/salt-solubility-model.data.ts'));
+    expect(renderModelDataModule(built)).toBe(
+      read('src/chem/screening/salt-solubility/salt-solubility-model.data.ts'),
+    );
   });
 
   it('the cross-validation report is what the fit script writes', () => {
-    expect(JSON.stringify(built.report, null, 2) + '\n').toBe(read('fixtures/reference/salt-solubility-cv.json'));
+    expect(JSON.stringify(built.report, null, 2) + '\n').toBe(
+      read('fixtures/reference/salt-solubility-cv.json'),
+    );
   });
 
   it('the bundled ions’ descriptors are what openchemlib computes from their parents', () => {

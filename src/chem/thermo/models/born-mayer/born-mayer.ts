@@ -39,7 +39,11 @@ export function isStructureType(s: string): s is StructureType {
 
 export function requireStructureType(s: unknown): StructureType {
   if (typeof s !== 'string' || !isStructureType(s)) {
-    throw new ChemInputError('structureType', `unknown structure type ${String(s)}`, Object.keys(MADELUNG_CONSTANTS).join(', '));
+    throw new ChemInputError(
+      'structureType',
+      `unknown structure type ${String(s)}`,
+      Object.keys(MADELUNG_CONSTANTS).join(', '),
+    );
   }
   return s;
 }
@@ -48,7 +52,10 @@ export function requireStructureType(s: unknown): StructureType {
  * Shortest cation–anion distance r₀ (Å) of a cubic structure type from its formula-unit volume (nm³),
  * or undefined where the geometry is not fixed by the volume alone (wurtzite, rutile).
  */
-export function nearestDistanceFromVolumeA(structure: StructureType, formulaUnitVolumeNm3: number): number | undefined {
+export function nearestDistanceFromVolumeA(
+  structure: StructureType,
+  formulaUnitVolumeNm3: number,
+): number | undefined {
   const f = R0_FROM_VOLUME[structure];
   return f ? f(formulaUnitVolumeNm3 * 1000) : undefined;
 }
@@ -70,7 +77,10 @@ export function bornMayerPotentialKJ(input: BornMayerInput): number {
   const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
   const s = requireStructureType(input.structureType);
   const r0 = requireFiniteInRange('nearestDistanceA', input.nearestDistanceA, 1, 10, 'Å');
-  return ((COULOMB_KJ_A_PER_MOL * MADELUNG_CONSTANTS[s] * Math.abs(zc * za)) / r0) * (1 - BORN_MAYER_RHO_A / r0);
+  return (
+    ((COULOMB_KJ_A_PER_MOL * MADELUNG_CONSTANTS[s] * Math.abs(zc * za)) / r0) *
+    (1 - BORN_MAYER_RHO_A / r0)
+  );
 }
 
 /**

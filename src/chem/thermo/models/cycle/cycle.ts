@@ -14,13 +14,31 @@ export function solveCycle(steps: CycleStep[]): CycleSolution {
   }
   const unknowns = steps.flatMap((s, i) => (s.enthalpyKJ === null ? [i] : []));
   if (unknowns.length > 1) {
-    throw new ChemInputError('steps', `${unknowns.length} unknown steps (${unknowns.map((i) => steps[i]!.label).join(', ')})`, 'at most one unknown step');
+    throw new ChemInputError(
+      'steps',
+      `${unknowns.length} unknown steps (${unknowns.map((i) => steps[i]!.label).join(', ')})`,
+      'at most one unknown step',
+    );
   }
   const norm = steps.map((s, i) => {
     const m = requireFiniteInRange(`steps[${i}].multiplier`, s.multiplier ?? 1, -100, 100);
-    if (m === 0) throw new ChemInputError(`steps[${i}].multiplier`, 'a zero multiplier removes the step', 'non-zero, −100…100');
-    const u = requireFiniteInRange(`steps[${i}].uncertaintyKJ`, s.uncertaintyKJ ?? 0, 0, 1e6, 'kJ/mol');
-    const h = s.enthalpyKJ === null ? null : requireFiniteInRange(`steps[${i}].enthalpyKJ`, s.enthalpyKJ, -1e6, 1e6, 'kJ/mol');
+    if (m === 0)
+      throw new ChemInputError(
+        `steps[${i}].multiplier`,
+        'a zero multiplier removes the step',
+        'non-zero, −100…100',
+      );
+    const u = requireFiniteInRange(
+      `steps[${i}].uncertaintyKJ`,
+      s.uncertaintyKJ ?? 0,
+      0,
+      1e6,
+      'kJ/mol',
+    );
+    const h =
+      s.enthalpyKJ === null
+        ? null
+        : requireFiniteInRange(`steps[${i}].enthalpyKJ`, s.enthalpyKJ, -1e6, 1e6, 'kJ/mol');
     return { label: String(s.label ?? `step ${i + 1}`), h, m, u };
   });
   const knownSum = norm.reduce((a, s) => (s.h === null ? a : a + s.m * s.h), 0);
@@ -32,13 +50,25 @@ export function solveCycle(steps: CycleStep[]): CycleSolution {
     unknownValue = -knownSum / m;
     norm[unknownIndex]!.h = unknownValue;
   }
-  const filled = norm.map((s) => ({ label: s.label, enthalpyKJ: s.h!, multiplier: s.m, uncertaintyKJ: s.u }));
+  const filled = norm.map((s) => ({
+    label: s.label,
+    enthalpyKJ: s.h!,
+    multiplier: s.m,
+    uncertaintyKJ: s.u,
+  }));
   // Sum small to large to keep rounding low.
-  const terms = filled.map((s) => s.multiplier * s.enthalpyKJ).sort((a, b) => Math.abs(a) - Math.abs(b));
+  const terms = filled
+    .map((s) => s.multiplier * s.enthalpyKJ)
+    .sort((a, b) => Math.abs(a) - Math.abs(b));
   const closure = terms.reduce((a, b) => a + b, 0);
   const scale = Math.max(1, ...terms.map(Math.abs));
   const tol = unknownIndex >= 0 ? 1e-9 * scale : Math.max(1e-9 * scale, 2 * Math.sqrt(knownVar));
-  const result: CycleSolution = { unknownIndex, steps: filled, closureKJ: closure, closes: Math.abs(closure) <= tol };
+  const result: CycleSolution = {
+    unknownIndex,
+    steps: filled,
+    closureKJ: closure,
+    closes: Math.abs(closure) <= tol,
+  };
   if (unknownIndex >= 0) {
     result.unknown = {
       value: unknownValue!,
@@ -81,14 +111,25 @@ export function bornHaberCycle(input: BornHaberInput): CycleSolution {
   const p = requireFiniteInRange('metalCount', input.metalCount, 1, 6);
   const q = requireFiniteInRange('nonMetalCount', input.nonMetalCount, 1, 6);
   const src = input.source;
-  const step = (label: string, enthalpyKJ: number | null, multiplier = 1): CycleStep => ({ label, enthalpyKJ, multiplier, ...(src ? { source: src } : {}) });
+  const step = (label: string, enthalpyKJ: number | null, multiplier = 1): CycleStep => ({
+    label,
+    enthalpyKJ,
+    multiplier,
+    ...(src ? { source: src } : {}),
+  });
   return solveCycle([
     step('atomise the metal: M(s) → M(g)', input.metalAtomisationKJ, p),
     step('ionise: M(g) → Mᶻ⁺(g) + z e⁻', input.ionisationEnergySumKJ, p),
     step('atomise the non-metal: ½X₂ → X(g)', input.nonMetalAtomisationKJ, q),
     step('electron gain: X(g) + e⁻ → X⁻(g)', input.electronGainKJ, q),
-    step('ions form the lattice: gaseous ions → solid (−ΔH_L)', input.latticeEnthalpyKJ === null ? null : -input.latticeEnthalpyKJ),
-    step(`solid returns to its elements: ${input.salt}(s) → elements (−ΔfH°)`, input.formationEnthalpyKJ === null ? null : -input.formationEnthalpyKJ),
+    step(
+      'ions form the lattice: gaseous ions → solid (−ΔH_L)',
+      input.latticeEnthalpyKJ === null ? null : -input.latticeEnthalpyKJ,
+    ),
+    step(
+      `solid returns to its elements: ${input.salt}(s) → elements (−ΔfH°)`,
+      input.formationEnthalpyKJ === null ? null : -input.formationEnthalpyKJ,
+    ),
   ]);
 }
 
@@ -115,9 +156,27 @@ export function solutionCycle(input: SolutionCycleInput): CycleSolution {
   const p = requireFiniteInRange('cationsPerFormula', input.cationsPerFormula, 1, 6);
   const q = requireFiniteInRange('anionsPerFormula', input.anionsPerFormula, 1, 6);
   return solveCycle([
-    { label: 'lattice → gaseous ions (ΔH_L)', enthalpyKJ: input.latticeEnthalpyKJ, uncertaintyKJ: input.latticeUncertaintyKJ ?? 0 },
-    { label: 'hydrate the cations (ΔH_hyd,+)', enthalpyKJ: input.cationHydrationKJ, uncertaintyKJ: input.cationHydrationUncertaintyKJ ?? 0, multiplier: p },
-    { label: 'hydrate the anions (ΔH_hyd,−)', enthalpyKJ: input.anionHydrationKJ, uncertaintyKJ: input.anionHydrationUncertaintyKJ ?? 0, multiplier: q },
-    { label: 'solution → solid (−ΔH_sol)', enthalpyKJ: input.solutionEnthalpyKJ === null ? null : -input.solutionEnthalpyKJ, uncertaintyKJ: input.solutionUncertaintyKJ ?? 0 },
+    {
+      label: 'lattice → gaseous ions (ΔH_L)',
+      enthalpyKJ: input.latticeEnthalpyKJ,
+      uncertaintyKJ: input.latticeUncertaintyKJ ?? 0,
+    },
+    {
+      label: 'hydrate the cations (ΔH_hyd,+)',
+      enthalpyKJ: input.cationHydrationKJ,
+      uncertaintyKJ: input.cationHydrationUncertaintyKJ ?? 0,
+      multiplier: p,
+    },
+    {
+      label: 'hydrate the anions (ΔH_hyd,−)',
+      enthalpyKJ: input.anionHydrationKJ,
+      uncertaintyKJ: input.anionHydrationUncertaintyKJ ?? 0,
+      multiplier: q,
+    },
+    {
+      label: 'solution → solid (−ΔH_sol)',
+      enthalpyKJ: input.solutionEnthalpyKJ === null ? null : -input.solutionEnthalpyKJ,
+      uncertaintyKJ: input.solutionUncertaintyKJ ?? 0,
+    },
   ]);
 }

@@ -25,16 +25,27 @@ export function bornEnthalpyFactor(temperatureK = STANDARD_TEMPERATURE_K): numbe
  * N_A e²/8πε₀ = 694.68 kJ·Å·mol⁻¹ (half the CODATA 2018 molar Coulomb constant), r_eff in Å.
  * Source: M. Born, Z. Phys. 1 (1920) 45 (free energy); enthalpy form by Gibbs–Helmholtz.
  */
-export function bornHydrationEnthalpyKJ(charge: number, effectiveRadiusA: number, temperatureK = STANDARD_TEMPERATURE_K): number {
+export function bornHydrationEnthalpyKJ(
+  charge: number,
+  effectiveRadiusA: number,
+  temperatureK = STANDARD_TEMPERATURE_K,
+): number {
   const z = requireFiniteInRange('charge', charge, -4, 4);
-  if (z === 0) throw new ChemInputError('charge', 'an ion needs a non-zero charge', 'whole numbers −4…−1 or +1…+4');
+  if (z === 0)
+    throw new ChemInputError(
+      'charge',
+      'an ion needs a non-zero charge',
+      'whole numbers −4…−1 or +1…+4',
+    );
   const r = requireFiniteInRange('effectiveRadiusA', effectiveRadiusA, 0.3, 20, 'Å');
   return (-(COULOMB_KJ_A_PER_MOL / 2) * z * z * bornEnthalpyFactor(temperatureK)) / r;
 }
 
 /** The radius the Born model uses for an ion: Shannon crystal radius for monatomic ions, else its thermochemical radius. */
 export function bornRadiusA(ion: ThermoIon): number | undefined {
-  return ion.shape === 'monatomic' ? (ion.crystalRadiusA?.value ?? ion.radiusA?.value) : ion.radiusA?.value;
+  return ion.shape === 'monatomic'
+    ? (ion.crystalRadiusA?.value ?? ion.radiusA?.value)
+    : ion.radiusA?.value;
 }
 
 export interface HydrationFitRow {
@@ -70,9 +81,17 @@ function goldenMin(f: (x: number) => number, a: number, b: number): number {
   let f2 = f(x2);
   for (let i = 0; i < 80; i++) {
     if (f1 < f2) {
-      b = x2; x2 = x1; f2 = f1; x1 = b - g * (b - a); f1 = f(x1);
+      b = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = b - g * (b - a);
+      f1 = f(x1);
     } else {
-      a = x1; x1 = x2; f1 = f2; x2 = a + g * (b - a); f2 = f(x2);
+      a = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = a + g * (b - a);
+      f2 = f(x2);
     }
   }
   return (a + b) / 2;
@@ -87,7 +106,9 @@ function fitSet(): { ion: ThermoIon; published: number; r: number; source: strin
     const r = bornRadiusA(ion);
     if (!ion.hydrationEnthalpyKJ || r === undefined || ion.estimatedSize) return [];
     if (rec.id === 'tetramethylammonium') return []; // kept for the organic check
-    return [{ ion, published: ion.hydrationEnthalpyKJ.value, r, source: rec.hydrationEnthalpyKJ!.source }];
+    return [
+      { ion, published: ion.hydrationEnthalpyKJ.value, r, source: rec.hydrationEnthalpyKJ!.source },
+    ];
   });
 }
 
@@ -103,11 +124,24 @@ export function fitBornOffsets(): BornOffsetFit {
   const set = fitSet();
   const fitSign = (sign: 1 | -1) => {
     const sub = set.filter((s) => Math.sign(s.ion.charge) === sign);
-    const sse = (d: number) => sub.reduce((a, s) => a + (bornHydrationEnthalpyKJ(s.ion.charge, s.r + d) / s.published - 1) ** 2, 0);
+    const sse = (d: number) =>
+      sub.reduce(
+        (a, s) => a + (bornHydrationEnthalpyKJ(s.ion.charge, s.r + d) / s.published - 1) ** 2,
+        0,
+      );
     const delta = goldenMin(sse, -0.25, 2);
     const rows = sub.map((s) => {
       const fitted = bornHydrationEnthalpyKJ(s.ion.charge, s.r + delta);
-      return { id: s.ion.id!, label: s.ion.label, charge: s.ion.charge, radiusA: s.r, publishedKJ: s.published, fittedKJ: fitted, errorPercent: (fitted / s.published - 1) * 100, source: s.source };
+      return {
+        id: s.ion.id!,
+        label: s.ion.label,
+        charge: s.ion.charge,
+        radiusA: s.r,
+        publishedKJ: s.published,
+        fittedKJ: fitted,
+        errorPercent: (fitted / s.published - 1) * 100,
+        source: s.source,
+      };
     });
     const rms = Math.sqrt(rows.reduce((a, r) => a + (r.errorPercent / 100) ** 2, 0) / rows.length);
     return { delta, rows, rms };
@@ -120,14 +154,33 @@ export function fitBornOffsets(): BornOffsetFit {
     ['acetate', 'C2H3O2', -1],
   ].map(([id, formula, z]) => {
     const rec = THERMO_IONS.find((i) => i.id === id)!;
-    return { id: id as string, ion: organicIonFromFormula(formula as string, z as number, { aromatic: 0, nonAromatic: 0 }), published: rec.hydrationEnthalpyKJ!.value, source: rec.hydrationEnthalpyKJ!.source };
+    return {
+      id: id as string,
+      ion: organicIonFromFormula(formula as string, z as number, { aromatic: 0, nonAromatic: 0 }),
+      published: rec.hydrationEnthalpyKJ!.value,
+      source: rec.hydrationEnthalpyKJ!.source,
+    };
   });
   const organicCheck = organicIons.map((o) => {
     const r = o.ion.radiusA!.value;
-    const fitted = bornHydrationEnthalpyKJ(o.ion.charge, r + (o.ion.charge > 0 ? c.delta : a.delta));
-    return { id: o.id, label: `${o.ion.label} (size from formula)`, charge: o.ion.charge, radiusA: r, publishedKJ: o.published, fittedKJ: fitted, errorPercent: (fitted / o.published - 1) * 100, source: o.source };
+    const fitted = bornHydrationEnthalpyKJ(
+      o.ion.charge,
+      r + (o.ion.charge > 0 ? c.delta : a.delta),
+    );
+    return {
+      id: o.id,
+      label: `${o.ion.label} (size from formula)`,
+      charge: o.ion.charge,
+      radiusA: r,
+      publishedKJ: o.published,
+      fittedKJ: fitted,
+      errorPercent: (fitted / o.published - 1) * 100,
+      source: o.source,
+    };
   });
-  const organicRms = Math.sqrt(organicCheck.reduce((s, r) => s + (r.errorPercent / 100) ** 2, 0) / organicCheck.length);
+  const organicRms = Math.sqrt(
+    organicCheck.reduce((s, r) => s + (r.errorPercent / 100) ** 2, 0) / organicCheck.length,
+  );
   fitCache = {
     cationOffsetA: c.delta,
     anionOffsetA: a.delta,
@@ -162,14 +215,28 @@ export function hydrationEnthalpyKJ(
   opts: { temperatureK?: number; forceBorn?: boolean; perIonPublishedUncertaintyKJ?: number } = {},
 ): Estimate {
   const z = ion.charge;
-  if (!Number.isInteger(z) || z === 0 || Math.abs(z) > 4) throw new ChemInputError('charge', `charge ${z} is not a non-zero whole number`, 'whole numbers −4…−1 or +1…+4');
+  if (!Number.isInteger(z) || z === 0 || Math.abs(z) > 4)
+    throw new ChemInputError(
+      'charge',
+      `charge ${z} is not a non-zero whole number`,
+      'whole numbers −4…−1 or +1…+4',
+    );
   if (ion.hydrationEnthalpyKJ && !opts.forceBorn) {
     const pub = ion.hydrationEnthalpyKJ;
     const closure = (opts.perIonPublishedUncertaintyKJ ?? 0) * Math.abs(z);
-    const polyFloor = ion.shape === 'monatomic' ? 0 : POLYATOMIC_PUBLISHED_REL_U * Math.abs(pub.value);
-    const notes = ['absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); sums over a neutral salt do not depend on it'];
-    if (closure > 0) notes.push(`uncertainty at least ${closure.toFixed(1)} kJ/mol: the RMS closure of the solution cycle on the bundled halides, per ion`);
-    if (polyFloor > 0) notes.push(`polyatomic ion: at least ${(POLYATOMIC_PUBLISHED_REL_U * 100).toFixed(0)} % (common practice; the halide closure does not test it)`);
+    const polyFloor =
+      ion.shape === 'monatomic' ? 0 : POLYATOMIC_PUBLISHED_REL_U * Math.abs(pub.value);
+    const notes = [
+      'absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); sums over a neutral salt do not depend on it',
+    ];
+    if (closure > 0)
+      notes.push(
+        `uncertainty at least ${closure.toFixed(1)} kJ/mol: the RMS closure of the solution cycle on the bundled halides, per ion`,
+      );
+    if (polyFloor > 0)
+      notes.push(
+        `polyatomic ion: at least ${(POLYATOMIC_PUBLISHED_REL_U * 100).toFixed(0)} % (common practice; the halide closure does not test it)`,
+      );
     return {
       value: pub.value,
       uncertainty: Math.max(pub.uncertainty, closure, polyFloor),
@@ -179,23 +246,38 @@ export function hydrationEnthalpyKJ(
     };
   }
   const r = bornRadiusA(ion);
-  if (r === undefined) throw new ChemInputError('ion', `${ion.label} has no radius or volume for the Born model`, 'an ion with a radius, volume, formula or SMILES');
+  if (r === undefined)
+    throw new ChemInputError(
+      'ion',
+      `${ion.label} has no radius or volume for the Born model`,
+      'an ion with a radius, volume, formula or SMILES',
+    );
   const fit = fitBornOffsets();
   const delta = z > 0 ? fit.cationOffsetA : fit.anionOffsetA;
   const value = bornHydrationEnthalpyKJ(z, r + delta, opts.temperatureK);
   const fitRel = z > 0 ? fit.cationRmsFraction : fit.anionRmsFraction;
-  const radiusRel = ion.radiusA && ion.shape !== 'monatomic' ? ion.radiusA.uncertainty / (r + delta) : 0;
+  const radiusRel =
+    ion.radiusA && ion.shape !== 'monatomic' ? ion.radiusA.uncertainty / (r + delta) : 0;
   const modelRel = ion.estimatedSize ? Math.max(fitRel, fit.organicRmsFraction) : fitRel;
   const rel = Math.sqrt(modelRel ** 2 + radiusRel ** 2);
-  const notes = [`r_eff = r + ${delta.toFixed(2)} Å (offset fitted on published ${z > 0 ? 'cations' : 'anions'})`];
+  const notes = [
+    `r_eff = r + ${delta.toFixed(2)} Å (offset fitted on published ${z > 0 ? 'cations' : 'anions'})`,
+  ];
   if (ion.estimatedSize) {
-    notes.push('organic ion: the Born term misses cavity and hydrophobic-hydration terms; uncertainty widened to the error measured on tetraalkylammonium and acetate ions');
+    notes.push(
+      'organic ion: the Born term misses cavity and hydrophobic-hydration terms; uncertainty widened to the error measured on tetraalkylammonium and acetate ions',
+    );
   }
   return {
     value,
     uncertainty: Math.abs(value) * rel,
     method: 'born-fitted',
-    sources: [SRC.born1920, SRC.latimer1939, SRC.waterDielectric, `offsets fitted on ${SRC.marcusHydration}`],
+    sources: [
+      SRC.born1920,
+      SRC.latimer1939,
+      SRC.waterDielectric,
+      `offsets fitted on ${SRC.marcusHydration}`,
+    ],
     notes,
   };
 }

@@ -2,7 +2,8 @@ import { ChemInputError } from '../../../result';
 import type { ThermoIon } from '../../thermo.types';
 import { organicIonFromFormula } from './ion-volume';
 
-const SMILES_ACCEPTED = 'a SMILES string (OpenSMILES) of the ion, or of its neutral parent with the charge given separately; up to 500 characters';
+const SMILES_ACCEPTED =
+  'a SMILES string (OpenSMILES) of the ion, or of its neutral parent with the charge given separately; up to 500 characters';
 
 /**
  * An ion from a SMILES string, through openchemlib (loaded on demand): atom counts (with implicit
@@ -20,14 +21,22 @@ export async function organicIonFromSmiles(
     throw new ChemInputError('smiles', 'empty or too long', SMILES_ACCEPTED);
   }
   if (smiles.includes('.')) {
-    throw new ChemInputError('smiles', `"${smiles}" has several components; give one ion (the drug ion or the counter-ion) per SMILES`, SMILES_ACCEPTED);
+    throw new ChemInputError(
+      'smiles',
+      `"${smiles}" has several components; give one ion (the drug ion or the counter-ion) per SMILES`,
+      SMILES_ACCEPTED,
+    );
   }
   const { Molecule } = await import('openchemlib');
   let mol;
   try {
     mol = Molecule.fromSmiles(smiles.trim());
   } catch (err) {
-    throw new ChemInputError('smiles', `cannot parse "${smiles}": ${err instanceof Error ? err.message : String(err)}`, SMILES_ACCEPTED);
+    throw new ChemInputError(
+      'smiles',
+      `cannot parse "${smiles}": ${err instanceof Error ? err.message : String(err)}`,
+      SMILES_ACCEPTED,
+    );
   }
   const n = mol.getAllAtoms();
   if (n === 0) throw new ChemInputError('smiles', `no atoms in "${smiles}"`, SMILES_ACCEPTED);
@@ -43,13 +52,24 @@ export async function organicIonFromSmiles(
   const notes: string[] = [];
   if (formalCharge !== charge) {
     if (formalCharge !== 0) {
-      throw new ChemInputError('charge', `the SMILES carries charge ${formalCharge} but charge ${charge} was given`, 'the SMILES’s own net charge, or a neutral SMILES with the salt’s ion charge');
+      throw new ChemInputError(
+        'charge',
+        `the SMILES carries charge ${formalCharge} but charge ${charge} was given`,
+        'the SMILES’s own net charge, or a neutral SMILES with the salt’s ion charge',
+      );
     }
     const dh = charge;
-    if ((counts.H ?? 0) + dh < 0) throw new ChemInputError('charge', `cannot remove ${-dh} protons from ${smiles}`, 'no more protons than the parent has');
+    if ((counts.H ?? 0) + dh < 0)
+      throw new ChemInputError(
+        'charge',
+        `cannot remove ${-dh} protons from ${smiles}`,
+        'no more protons than the parent has',
+      );
     counts.H = (counts.H ?? 0) + dh;
     if (counts.H === 0) delete counts.H;
-    notes.push(`${dh > 0 ? 'added' : 'removed'} ${Math.abs(dh)} H to make the ${dh > 0 ? 'protonated cation' : 'deprotonated anion'} from the neutral SMILES`);
+    notes.push(
+      `${dh > 0 ? 'added' : 'removed'} ${Math.abs(dh)} H to make the ${dh > 0 ? 'protonated cation' : 'deprotonated anion'} from the neutral SMILES`,
+    );
   }
   const ringSet = mol.getRingSet();
   let aromatic = 0;
@@ -59,9 +79,18 @@ export async function organicIonFromSmiles(
     else nonAromatic++;
   }
   const formula = Object.entries(counts)
-    .sort(([a], [b]) => (a === 'C' ? -1 : b === 'C' ? 1 : a === 'H' ? -1 : b === 'H' ? 1 : a.localeCompare(b)))
+    .sort(([a], [b]) =>
+      a === 'C' ? -1 : b === 'C' ? 1 : a === 'H' ? -1 : b === 'H' ? 1 : a.localeCompare(b),
+    )
     .map(([el, c]) => `${el}${c === 1 ? '' : c}`)
     .join('');
   const ion = organicIonFromFormula(formula, charge, { aromatic, nonAromatic }, opts);
-  return { ...ion, sources: [...ion.sources, 'structure from SMILES via openchemlib (ring perception: smallest set of smallest rings)', ...notes] };
+  return {
+    ...ion,
+    sources: [
+      ...ion.sources,
+      'structure from SMILES via openchemlib (ring perception: smallest set of smallest rings)',
+      ...notes,
+    ],
+  };
 }

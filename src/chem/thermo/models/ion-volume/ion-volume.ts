@@ -19,7 +19,11 @@ export interface RingCounts {
 
 function requireRings(rings: RingCounts): RingCounts {
   if (!rings || typeof rings !== 'object') {
-    throw new ChemInputError('rings', 'ring counts missing', '{ aromatic, nonAromatic }, whole numbers 0–50');
+    throw new ChemInputError(
+      'rings',
+      'ring counts missing',
+      '{ aromatic, nonAromatic }, whole numbers 0–50',
+    );
   }
   const aromatic = requireFiniteInRange('rings.aromatic', rings.aromatic, 0, 50);
   const nonAromatic = requireFiniteInRange('rings.nonAromatic', rings.nonAromatic, 0, 50);
@@ -34,7 +38,10 @@ function requireRings(rings: RingCounts): RingCounts {
  * V_vdW = Σ atom volumes − 5.92·N_B − 14.7·R_A − 3.8·R_NR, N_B = N_atoms − 1 + R_A + R_NR.
  * Atoms: H B C N O F Si P S Cl Se Br I.
  */
-export function vanDerWaalsVolumeA3(formula: string | Record<string, number>, rings: RingCounts): number {
+export function vanDerWaalsVolumeA3(
+  formula: string | Record<string, number>,
+  rings: RingCounts,
+): number {
   const counts = typeof formula === 'string' ? parseFormula(formula).elements : formula;
   const r = requireRings(rings);
   let sum = 0;
@@ -42,16 +49,34 @@ export function vanDerWaalsVolumeA3(formula: string | Record<string, number>, ri
   for (const [el, n] of Object.entries(counts)) {
     const v = ZHAO_ATOM_VOLUME_A3[el];
     if (v === undefined) {
-      throw new ChemInputError('formula', `element ${el} has no van der Waals volume contribution`, 'H, B, C, N, O, F, Si, P, S, Cl, Se, Br, I');
+      throw new ChemInputError(
+        'formula',
+        `element ${el} has no van der Waals volume contribution`,
+        'H, B, C, N, O, F, Si, P, S, Cl, Se, Br, I',
+      );
     }
     sum += v * n;
     atoms += n;
   }
   const rings_ = r.aromatic + r.nonAromatic;
-  if (rings_ > atoms) throw new ChemInputError('rings', `${rings_} rings in ${atoms} atoms`, 'fewer rings than atoms');
+  if (rings_ > atoms)
+    throw new ChemInputError(
+      'rings',
+      `${rings_} rings in ${atoms} atoms`,
+      'fewer rings than atoms',
+    );
   const bonds = atoms - 1 + rings_;
-  const v = sum - ZHAO_BOND_A3 * bonds - ZHAO_AROMATIC_RING_A3 * r.aromatic - ZHAO_NONAROMATIC_RING_A3 * r.nonAromatic;
-  if (!(v > 0)) throw new ChemInputError('formula', 'formula and ring counts give a non-positive volume', 'a plausible molecule');
+  const v =
+    sum -
+    ZHAO_BOND_A3 * bonds -
+    ZHAO_AROMATIC_RING_A3 * r.aromatic -
+    ZHAO_NONAROMATIC_RING_A3 * r.nonAromatic;
+  if (!(v > 0))
+    throw new ChemInputError(
+      'formula',
+      'formula and ring counts give a non-positive volume',
+      'a plausible molecule',
+    );
   return v;
 }
 
@@ -99,7 +124,9 @@ export function packingCalibration(): PackingCalibration {
     const partner = THERMO_IONS.find((i) => i.id === s.partner)!;
     const vPartner = partner.volumeNm3!.value;
     const organicCounts = parseFormula(s.organicFormula).elements;
-    const saltMass = s.organicPerFormula * molarMassGPerMol(organicCounts) + s.partnerPerFormula * formulaMolarMassGPerMol(partner.formula);
+    const saltMass =
+      s.organicPerFormula * molarMassGPerMol(organicCounts) +
+      s.partnerPerFormula * formulaMolarMassGPerMol(partner.formula);
     const vm = (saltMass / (s.densityGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
     const implied = (vm - s.partnerPerFormula * vPartner) / s.organicPerFormula;
     const vdw = vanDerWaalsVolumeA3(organicCounts, s.rings);
@@ -109,7 +136,8 @@ export function packingCalibration(): PackingCalibration {
   const mean = ks.reduce((a, b) => a + b, 0) / ks.length;
   const sd = Math.sqrt(ks.reduce((a, b) => a + (b - mean) ** 2, 0) / (ks.length - 1));
   const rows = pre.map((r) => {
-    const predictedVm = r.s.organicPerFormula * (r.vdw / 1000 / mean) + r.s.partnerPerFormula * r.vPartner;
+    const predictedVm =
+      r.s.organicPerFormula * (r.vdw / 1000 / mean) + r.s.partnerPerFormula * r.vPartner;
     return {
       id: r.s.id,
       name: r.s.name,
@@ -120,7 +148,9 @@ export function packingCalibration(): PackingCalibration {
       source: r.s.source,
     };
   });
-  const rms = Math.sqrt(rows.reduce((a, r) => a + (r.volumeErrorPercent / 100) ** 2, 0) / rows.length);
+  const rms = Math.sqrt(
+    rows.reduce((a, r) => a + (r.volumeErrorPercent / 100) ** 2, 0) / rows.length,
+  );
   calibrationCache = {
     packingCoefficient: mean,
     standardDeviation: sd,
@@ -149,7 +179,12 @@ export function organicIonFromFormula(
   opts: { packingCoefficient?: number; label?: string; id?: string } = {},
 ): ThermoIon {
   const z = requireFiniteInRange('charge', charge, -4, 4);
-  if (z === 0 || !Number.isInteger(z)) throw new ChemInputError('charge', `charge ${charge} is not a non-zero whole number`, 'whole numbers −4…−1 or +1…+4');
+  if (z === 0 || !Number.isInteger(z))
+    throw new ChemInputError(
+      'charge',
+      `charge ${charge} is not a non-zero whole number`,
+      'whole numbers −4…−1 or +1…+4',
+    );
   const counts = parseFormula(formula).elements;
   const vdw = vanDerWaalsVolumeA3(counts, rings);
   const cal = packingCalibration();
@@ -164,7 +199,12 @@ export function organicIonFromFormula(
     value: vNm3,
     uncertainty: relU * vNm3,
     method: 'zhao-vdw/packing',
-    sources: [SRC.zhao2003, SRC.bondi1964, `packing coefficient ${k.toFixed(3)} (${opts.packingCoefficient === undefined ? cal.method : 'user-set'})`, SRC.kitaigorodskii],
+    sources: [
+      SRC.zhao2003,
+      SRC.bondi1964,
+      `packing coefficient ${k.toFixed(3)} (${opts.packingCoefficient === undefined ? cal.method : 'user-set'})`,
+      SRC.kitaigorodskii,
+    ],
   };
   const r = radiusFromVolumeA(vNm3);
   const radius: Estimate = {

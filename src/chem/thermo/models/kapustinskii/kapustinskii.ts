@@ -49,11 +49,18 @@ export function stoichiometryFromCharges(cationCharge: number, anionCharge: numb
 }
 
 /** Validate a pair of ion charges; returns them. */
-export function requireIonCharges(cationCharge: number, anionCharge: number): { zc: number; za: number } {
+export function requireIonCharges(
+  cationCharge: number,
+  anionCharge: number,
+): { zc: number; za: number } {
   const zc = requireFiniteInRange('cationCharge', cationCharge, 1, 4);
   const za = requireFiniteInRange('anionCharge', anionCharge, -4, -1);
   if (!Number.isInteger(zc) || !Number.isInteger(za)) {
-    throw new ChemInputError('charge', 'charges must be whole numbers', 'integers, cation +1…+4, anion −1…−4');
+    throw new ChemInputError(
+      'charge',
+      'charges must be whole numbers',
+      'integers, cation +1…+4, anion −1…−4',
+    );
   }
   return { zc, za };
 }
@@ -70,8 +77,19 @@ export function kapustinskiiPotentialKJ(input: KapustinskiiInput): number {
   const rc = requireFiniteInRange('cationRadiusA', input.cationRadiusA, 0.35, 10, 'Å');
   const ra = requireFiniteInRange('anionRadiusA', input.anionRadiusA, 0.35, 10, 'Å');
   const stoich = stoichiometryFromCharges(zc, za);
-  const nu = requireFiniteInRange('ionsPerFormulaUnit', input.ionsPerFormulaUnit ?? stoich.cations + stoich.anions, 2, 20);
-  const k = requireFiniteInRange('constantKJA', input.constantKJA ?? KAPUSTINSKII_K_KJ_A_PER_MOL, 1000, 1500, 'kJ·Å/mol');
+  const nu = requireFiniteInRange(
+    'ionsPerFormulaUnit',
+    input.ionsPerFormulaUnit ?? stoich.cations + stoich.anions,
+    2,
+    20,
+  );
+  const k = requireFiniteInRange(
+    'constantKJA',
+    input.constantKJA ?? KAPUSTINSKII_K_KJ_A_PER_MOL,
+    1000,
+    1500,
+    'kJ·Å/mol',
+  );
   const d = rc + ra;
   return ((k * nu * Math.abs(zc * za)) / d) * (1 - KAPUSTINSKII_RHO_A / d);
 }

@@ -20,11 +20,16 @@ export interface RelativeCandidate {
  * quadrature estimate on bundled reference pairs that share an ion (`relativePairFactor()` in the
  * validation), so a partial cancellation of model errors is credited only as far as it was observed.
  */
-export function relativeSolutionEnthalpyKJ(a: RelativeCandidate, b: RelativeCandidate, pairFactor: number): Estimate {
+export function relativeSolutionEnthalpyKJ(
+  a: RelativeCandidate,
+  b: RelativeCandidate,
+  pairFactor: number,
+): Estimate {
   const f = requireFiniteInRange('pairFactor', pairFactor, 0.05, 5);
   const part = (c: RelativeCandidate, field: string) => {
     const m = requireFiniteInRange(`${field}.drugPerFormula`, c.drugPerFormula, 1, 6);
-    if (c.drugIs !== 'cation' && c.drugIs !== 'anion') throw new ChemInputError(`${field}.drugIs`, `"${String(c.drugIs)}"`, 'cation or anion');
+    if (c.drugIs !== 'cation' && c.drugIs !== 'anion')
+      throw new ChemInputError(`${field}.drugIs`, `"${String(c.drugIs)}"`, 'cation or anion');
     const r = c.result;
     const counterH = c.drugIs === 'cation' ? r.anionHydrationKJ : r.cationHydrationKJ;
     // ΔH_sol = ΔH_L + m·h_drug + n·h_counter  ⇒  per drug ion: ΔH_L/m + h_drug + (n/m)·h_counter

@@ -15,7 +15,13 @@ export function latticeFromSolutionEnthalpy(input: {
   cationsPerFormula: number;
   anionsPerFormula: number;
 }): Estimate {
-  const dsol = requireFiniteInRange('solutionEnthalpyKJ', input.solutionEnthalpyKJ, -1000, 1000, 'kJ/mol');
+  const dsol = requireFiniteInRange(
+    'solutionEnthalpyKJ',
+    input.solutionEnthalpyKJ,
+    -1000,
+    1000,
+    'kJ/mol',
+  );
   const sol = solutionCycle({
     solutionEnthalpyKJ: dsol,
     solutionUncertaintyKJ: input.solutionUncertaintyKJ ?? 0,

@@ -32,7 +32,12 @@ export const VBT_SOURCES = [
 ];
 
 /** Ionic strength factor I = ½Σnᵢzᵢ² of a formula unit M_pX_q. */
-export function ionicStrengthFactor(cationCharge: number, anionCharge: number, p: number, q: number): number {
+export function ionicStrengthFactor(
+  cationCharge: number,
+  anionCharge: number,
+  p: number,
+  q: number,
+): number {
   return 0.5 * (p * cationCharge ** 2 + q * anionCharge ** 2);
 }
 
@@ -40,9 +45,12 @@ export function ionicStrengthFactor(cationCharge: number, anionCharge: number, p
 export function vbtConstantsFor(cationCharge: number, anionCharge: number, p: number, q: number) {
   const zc = Math.abs(cationCharge);
   const za = Math.abs(anionCharge);
-  if (p === 1 && q === 1 && zc === 1 && za === 1) return { key: '1:1' as const, ...VBT_CONSTANTS['1:1'] };
-  if (p === 1 && q === 2 && zc === 2 && za === 1) return { key: '2:1' as const, ...VBT_CONSTANTS['2:1'] };
-  if (p === 2 && q === 1 && zc === 1 && za === 2) return { key: '1:2' as const, ...VBT_CONSTANTS['1:2'] };
+  if (p === 1 && q === 1 && zc === 1 && za === 1)
+    return { key: '1:1' as const, ...VBT_CONSTANTS['1:1'] };
+  if (p === 1 && q === 2 && zc === 2 && za === 1)
+    return { key: '2:1' as const, ...VBT_CONSTANTS['2:1'] };
+  if (p === 2 && q === 1 && zc === 1 && za === 2)
+    return { key: '1:2' as const, ...VBT_CONSTANTS['1:2'] };
   return { key: 'general' as const, ...VBT_CONSTANTS.general };
 }
 
@@ -64,14 +72,26 @@ export function vbtPotentialKJ(input: VbtInput): { valueKJ: number; form: string
   const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
   const p = requireFiniteInRange('cationsPerFormula', input.cationsPerFormula, 1, 6);
   const q = requireFiniteInRange('anionsPerFormula', input.anionsPerFormula, 1, 6);
-  const volumeNm3 = requireFiniteInRange('formulaUnitVolumeNm3', input.formulaUnitVolumeNm3, 0.005, 10, 'nm³');
+  const volumeNm3 = requireFiniteInRange(
+    'formulaUnitVolumeNm3',
+    input.formulaUnitVolumeNm3,
+    0.005,
+    10,
+    'nm³',
+  );
   const i = ionicStrengthFactor(zc, za, p, q);
   const c = vbtConstantsFor(zc, za, p, q);
   const potentialKJ = 2 * i * (c.alphaKJNm / Math.cbrt(volumeNm3) + c.betaKJ);
   if (potentialKJ > 5000) {
-    return { valueKJ: GLASSER_A_KJ_NM * i * Math.cbrt((2 * i) / volumeNm3), form: 'Glasser A·I·(2I/V_m)^(1/3)' };
+    return {
+      valueKJ: GLASSER_A_KJ_NM * i * Math.cbrt((2 * i) / volumeNm3),
+      form: 'Glasser A·I·(2I/V_m)^(1/3)',
+    };
   }
-  return { valueKJ: potentialKJ, form: `2I(α/V_m^(1/3) + β), ${c.key} constants α = ${c.alphaKJNm}, β = ${c.betaKJ}` };
+  return {
+    valueKJ: potentialKJ,
+    form: `2I(α/V_m^(1/3) + β), ${c.key} constants α = ${c.alphaKJNm}, β = ${c.betaKJ}`,
+  };
 }
 
 /** Formula-unit volume from density: V_m = M / (ρ·N_A), nm³ (M in g/mol, ρ in g/cm³). */

@@ -7,13 +7,20 @@ import { screenOne, type BatchSettings } from './screen-one';
  * starts when run, and nothing imports it): screens the compounds it is sent, one message each, and
  * answers with the sequence number so the main thread can write the results in input order.
  */
-export type WorkerRequest = { seq: number; id: string; spec: CompoundSpec; settings: BatchSettings };
+export type WorkerRequest = {
+  seq: number;
+  id: string;
+  spec: CompoundSpec;
+  settings: BatchSettings;
+};
 
 export function startBatchWorker(): void {
   const port = parentPort;
   if (!port) throw new Error('batch-worker runs only as a worker thread');
   port.on('message', (m: WorkerRequest) => {
-    void screenOne(m.spec, m.settings, m.id).then((result) => port.postMessage({ seq: m.seq, result }));
+    void screenOne(m.spec, m.settings, m.id).then((result) =>
+      port.postMessage({ seq: m.seq, result }),
+    );
   });
 }
 

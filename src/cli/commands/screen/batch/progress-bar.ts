@@ -4,11 +4,18 @@ import type { Writable } from 'node:stream';
  * A one-line progress bar on stderr (only when stderr is a terminal): share of the input read, compounds
  * per second and the time left, estimated from the bytes still to read at the rate so far.
  */
-export function createProgressBar(stderr: Writable, totalBytes: number, now: () => number = Date.now) {
+export function createProgressBar(
+  stderr: Writable,
+  totalBytes: number,
+  now: () => number = Date.now,
+) {
   const start = now();
   let last = 0;
   let shown = false;
-  const fmtTime = (s: number) => (Number.isFinite(s) ? `${Math.floor(s / 60)}:${String(Math.round(s % 60)).padStart(2, '0')}` : '–:––');
+  const fmtTime = (s: number) =>
+    Number.isFinite(s)
+      ? `${Math.floor(s / 60)}:${String(Math.round(s % 60)).padStart(2, '0')}`
+      : '–:––';
   const render = (bytes: number, compounds: number) => {
     const seconds = Math.max((now() - start) / 1000, 1e-3);
     const share = totalBytes > 0 ? Math.min(bytes / totalBytes, 1) : 0;

@@ -11,7 +11,14 @@ import { boundedLines, jsonNestingDepth, MAX_JSON_DEPTH } from '../../eval/bound
 import { settingsFromBatchFlags } from './batch-settings';
 import type { ScreenFlags } from '../screen-flags';
 import { KSP_NOTE } from '../screen-writers';
-import { checkHeader, csvCells, rowFromJson, specFromRow, type BatchColumn, type RawRow } from './batch-row';
+import {
+  checkHeader,
+  csvCells,
+  rowFromJson,
+  specFromRow,
+  type BatchColumn,
+  type RawRow,
+} from './batch-row';
 import { createProgressBar } from './progress-bar';
 import { createScreener } from './worker-pool';
 import { describeFailure } from '../../../define-command';
@@ -26,11 +33,19 @@ import type { ScreenOneResult } from './screen-one';
  * row failed.
  */
 
-type Sink = { write: (text: string) => Promise<void>; commit: () => Promise<void>; abort: () => Promise<void> };
+type Sink = {
+  write: (text: string) => Promise<void>;
+  commit: () => Promise<void>;
+  abort: () => Promise<void>;
+};
 
 async function openSink(path: string | undefined, stream: Writable): Promise<Sink> {
   if (path === undefined) {
-    return { write: (t) => writeText(stream, t), commit: async () => undefined, abort: async () => undefined };
+    return {
+      write: (t) => writeText(stream, t),
+      commit: async () => undefined,
+      abort: async () => undefined,
+    };
   }
   return openAtomicOutput(path);
 }
@@ -38,12 +53,20 @@ async function openSink(path: string | undefined, stream: Writable): Promise<Sin
 export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
   const path = flags.batch!;
   const format = /\.csv$/i.test(path) ? 'csv' : /\.(jsonl|ndjson)$/i.test(path) ? 'jsonl' : null;
-  if (!format) throw usageError('--batch', `cannot tell the format of "${path}" from its name`, 'a .csv or .jsonl file');
+  if (!format)
+    throw usageError(
+      '--batch',
+      `cannot tell the format of "${path}" from its name`,
+      'a .csv or .jsonl file',
+    );
   let size: number;
   try {
     size = (await stat(path)).size;
   } catch (err) {
-    throw valueError('--batch', `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`);
+    throw valueError(
+      '--batch',
+      `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
+    );
   }
   const outFormat = flags.format ?? 'csv';
   const settings = settingsFromBatchFlags(flags);
@@ -60,7 +83,10 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
   let failed = 0;
   let rowsOut = 0;
   const seenIds = new Map<string, number>();
-  const pending = new Map<number, { lineNo: number; id: string; name: string; result: ScreenOneResult | null; error?: string }>();
+  const pending = new Map<
+    number,
+    { lineNo: number; id: string; name: string; result: ScreenOneResult | null; error?: string }
+  >();
   let nextToWrite = 0;
   let seq = 0;
   let inFlight = 0;
@@ -83,7 +109,11 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     rowsOut += r.rowCount;
   };
   const flush = async () => {
-    for (let p = pending.get(nextToWrite); p && (p.result !== null || p.error !== undefined); p = pending.get(nextToWrite)) {
+    for (
+      let p = pending.get(nextToWrite);
+      p && (p.result !== null || p.error !== undefined);
+      p = pending.get(nextToWrite)
+    ) {
       pending.delete(nextToWrite);
       nextToWrite++;
       if (p.error !== undefined) await reportError(p.lineNo, p.id, p.error);
@@ -103,7 +133,13 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     for await (const line of boundedLines(createReadStream(path), undefined, (n) => (bytes += n))) {
       bar?.update(bytes, compounds);
       if ('tooLongBytes' in line) {
-        pending.set(seq++, { lineNo: line.lineNo, id: '', name: '', result: null, error: `line: ${line.tooLongBytes} bytes is longer than 1 MiB` });
+        pending.set(seq++, {
+          lineNo: line.lineNo,
+          id: '',
+          name: '',
+          result: null,
+          error: `line: ${line.tooLongBytes} bytes is longer than 1 MiB`,
+        });
         await flush();
         continue;
       }
@@ -119,10 +155,12 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
       try {
         if (format === 'csv') {
           const cells = csvCells(text);
-          if (cells.length !== header.length) throw valueError('line', `has ${cells.length} cells, the header ${header.length}`);
+          if (cells.length !== header.length)
+            throw valueError('line', `has ${cells.length} cells, the header ${header.length}`);
           raw = Object.fromEntries(header.map((c, i) => [c, cells[i]]));
         } else {
-          if (jsonNestingDepth(text) > MAX_JSON_DEPTH) throw valueError('line', `nested deeper than ${MAX_JSON_DEPTH} levels`);
+          if (jsonNestingDepth(text) > MAX_JSON_DEPTH)
+            throw valueError('line', `nested deeper than ${MAX_JSON_DEPTH} levels`);
           let value: unknown;
           try {
             value = JSON.parse(text);
@@ -135,11 +173,22 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
         id = r.id;
         spec = r.spec;
         const earlier = seenIds.get(id);
-        if (earlier !== undefined) throw valueError('id', `"${id}" was already used on line ${earlier}`, 'a unique id per compound');
+        if (earlier !== undefined)
+          throw valueError(
+            'id',
+            `"${id}" was already used on line ${earlier}`,
+            'a unique id per compound',
+          );
         seenIds.set(id, line.lineNo);
       } catch (err) {
         if (id === '' && typeof raw?.id === 'string') id = raw.id.trim().slice(0, 120);
-        pending.set(seq++, { lineNo: line.lineNo, id, name: '', result: null, error: describeFailure(err).message });
+        pending.set(seq++, {
+          lineNo: line.lineNo,
+          id,
+          name: '',
+          result: null,
+          error: describeFailure(err).message,
+        });
         await flush();
         continue;
       }
@@ -149,7 +198,12 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
       // Bounded memory: at most `window` compounds in flight, and results held for ordering are bounded too.
       while (inFlight > 0 && (inFlight >= window || pending.size > 4 * window)) await collectOne();
     }
-    if (header === null) throw valueError('--batch', `${path} has no header line`, `a CSV header with the columns id, kind, pkas, smiles or formula, …`);
+    if (header === null)
+      throw valueError(
+        '--batch',
+        `${path} has no header line`,
+        `a CSV header with the columns id, kind, pkas, smiles or formula, …`,
+      );
     while (inFlight > 0) await collectOne();
     await flush();
     const closing = [...SCREENING_CAUTIONS, KSP_NOTE];
@@ -165,6 +219,9 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     await screener.close();
   }
   bar?.finish(bytes, compounds);
-  writeLine(io.stderr, `saltsmith screen --batch: ${seq - failed} of ${seq} compound(s) screened on ${screener.threads} thread(s), ${rowsOut} row(s)${failed ? `, ${failed} failed${flags.errors ? ` (see ${flags.errors})` : ''}` : ''}`);
+  writeLine(
+    io.stderr,
+    `saltsmith screen --batch: ${seq - failed} of ${seq} compound(s) screened on ${screener.threads} thread(s), ${rowsOut} row(s)${failed ? `, ${failed} failed${flags.errors ? ` (see ${flags.errors})` : ''}` : ''}`,
+  );
   return failed > 0 ? 1 : 0;
 }

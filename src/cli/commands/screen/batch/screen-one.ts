@@ -36,7 +36,9 @@ export function encodeRows(
   const keys = Object.keys(table[0]!) as (keyof ScreenTableRow)[];
   const columns = ['compound_id', 'compound_name', ...keys];
   if (format === 'jsonl') {
-    const text = table.map((row) => JSON.stringify({ compound_id: id, compound_name: name, ...row })).join('\n');
+    const text = table
+      .map((row) => JSON.stringify({ compound_id: id, compound_name: name, ...row }))
+      .join('\n');
     return { rowCount: table.length, columns, text: text + '\n' };
   }
   // CSV as Papa.unparse writes it (the header line comes from the caller), each cell through the
@@ -63,14 +65,22 @@ export function csvField(v: unknown): string {
 }
 
 /** Screen one compound of a batch with the same core and settings as a single `screen`. */
-export async function screenOne(spec: CompoundSpec, s: BatchSettings, id: string): Promise<ScreenOneResult> {
+export async function screenOne(
+  spec: CompoundSpec,
+  s: BatchSettings,
+  id: string,
+): Promise<ScreenOneResult> {
   try {
     const prepared = await prepareScreen(
       { ...spec, ions: spec.ions ?? s.ions },
       { settings: s.settings, keepCocrystalBand: s.keepCocrystalBand, names: COLUMN_NAMES },
     );
     const { table } = runScreen(prepared, { iterations: s.iterations, seed: s.seed, top: s.top });
-    return { ok: true, skipped: prepared.skipped.length, ...encodeRows(id, spec.name, table, s.outFormat) };
+    return {
+      ok: true,
+      skipped: prepared.skipped.length,
+      ...encodeRows(id, spec.name, table, s.outFormat),
+    };
   } catch (err) {
     return { ok: false, error: describeFailure(err).message };
   }

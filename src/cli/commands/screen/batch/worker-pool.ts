@@ -54,21 +54,27 @@ export function createScreener(jobs: number, settings: BatchSettings): Screener 
   if (!url) {
     return {
       threads: 1,
-      submit: (seq, spec, id) => void screenOne(spec, settings, id).then((result) => done.push({ seq, result })),
+      submit: (seq, spec, id) =>
+        void screenOne(spec, settings, id).then((result) => done.push({ seq, result })),
       next,
       close: async () => undefined,
     };
   }
   // A screening thread holds little (one compound at a time, memoised ion data): a modest old-space
   // limit makes V8 collect early instead of growing each thread's heap towards the default size.
-  const workers = Array.from({ length: jobs }, () => new Worker(url, { resourceLimits: { maxOldGenerationSizeMb: 128 } }));
+  const workers = Array.from(
+    { length: jobs },
+    () => new Worker(url, { resourceLimits: { maxOldGenerationSizeMb: 128 } }),
+  );
   const load = workers.map(() => 0);
   for (const [i, w] of workers.entries()) {
     w.on('message', (m: { seq: number; result: ScreenOneResult }) => {
       load[i]!--;
       done.push(m);
     });
-    w.on('error', (err) => done.push({ failure: new Error(`a screening thread failed: ${err.message}`) }));
+    w.on('error', (err) =>
+      done.push({ failure: new Error(`a screening thread failed: ${err.message}`) }),
+    );
   }
   return {
     threads: jobs,
