@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { captureIo } from './support/capture-io';
+import { TEST_COMPOUND_ARGS } from './support/test-compound';
 import Papa from 'papaparse';
 import { screenCommand } from '@/cli/commands/screen/screen-command';
 import { registerBuiltInEvalKinds } from '@/cli/commands/eval/built-in-kinds';
@@ -14,18 +15,7 @@ async function run(args: string[]) {
 
 // A test compound given by formula and made-up properties; assertions check structure and identities,
 // not these inputs.
-const BASE = [
-  '--formula',
-  'C17H20N2O2',
-  '--pka',
-  '8',
-  '--s0',
-  '0.02',
-  '--dose',
-  '100',
-  '--iterations',
-  '200',
-];
+const BASE = [...TEST_COMPOUND_ARGS, '--iterations', '200'];
 
 describe('saltsmith screen', () => {
   it('writes a ranked CSV with pH_max, dose numbers at pH 1.2 and 6.8, flags, reasons and the cautions', async () => {

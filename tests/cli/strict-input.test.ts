@@ -3,24 +3,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { runCli } from './support/run-cli';
+import { TEST_COMPOUND_ARGS } from './support/test-compound';
 
 // Each case below is one of the command-line failures reported in issue 13; before the fix each was
 // accepted (exit 0) or ended the run. Compound values are made up (structure checks only).
-const BASE = [
-  'screen',
-  '--formula',
-  'C17H20N2O2',
-  '--pka',
-  '8',
-  '--s0',
-  '0.02',
-  '--dose',
-  '100',
-  '--iterations',
-  '50',
-  '--ions',
-  'chloride,mesylate',
-];
+const BASE = ['screen', ...TEST_COMPOUND_ARGS, '--iterations', '50', '--ions', 'chloride,mesylate'];
 
 async function evalLines(...lines: string[]) {
   const r = await runCli(['eval'], lines.join('\n') + '\n');
