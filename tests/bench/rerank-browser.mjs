@@ -17,7 +17,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
-import { findChromium } from '../e2e/support/chromium.mjs';
+import { CHROMIUM_ARGS, findChromium } from '../e2e/support/chromium.mjs';
 import { freePort, startPreview } from '../e2e/support/server.mjs';
 
 const outDir = process.env.SALTSMITH_OUT_DIR ?? '/tmp/saltsmith-bench-dist';
@@ -43,16 +43,7 @@ const profile = mkdtempSync(join(tmpdir(), 'saltsmith-bench-'));
 const ctx = await chromium.launchPersistentContext(profile, {
   executablePath: findChromium(),
   headless: true,
-  args: [
-    '--headless=new',
-    '--no-sandbox',
-    '--disable-gpu',
-    '--disable-quic',
-    '--no-first-run',
-    '--disable-background-networking',
-    '--disable-component-update',
-    '--disable-sync',
-  ],
+  args: CHROMIUM_ARGS,
   viewport: { width: 1280, height: 800 },
 });
 try {

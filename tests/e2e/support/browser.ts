@@ -2,21 +2,12 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { CHROMIUM_ARGS } from './chromium.mjs';
 
 /** The served production build (set by run-browser-tests.mjs). */
 export const BASE_URL = process.env.SALTSMITH_URL ?? 'http://127.0.0.1:4173/';
 
-/** Chromium flags that keep it off a network this machine does not have (DEVELOPERS.md, "Commands"). */
-export const CHROMIUM_ARGS = [
-  '--headless=new',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
+export { CHROMIUM_ARGS };
 
 export interface Session {
   context: BrowserContext;
@@ -52,7 +43,7 @@ export async function openSession(
   const context = await chromium.launchPersistentContext(userDataDir, {
     executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: CHROMIUM_ARGS,
+    args: [...CHROMIUM_ARGS],
     viewport: opts.viewport ?? { width: 1280, height: 800 },
     acceptDownloads: true,
   });

@@ -2,6 +2,18 @@
 // (apt-get install -y chromium) or the binary named by CHROME_PATH.
 import { existsSync } from 'node:fs';
 
+/** Chromium flags that keep it off a network the test machines do not have (DEVELOPERS.md, "Commands"). */
+export const CHROMIUM_ARGS = [
+  '--headless=new',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
 export function findChromium() {
   const candidates = [
     process.env.CHROME_PATH,
