@@ -1,40 +1,16 @@
 import { useId } from 'react';
-import { SIGN_CONVENTION, latticeFromSolutionEnthalpy, type SaltThermoResult } from '@/chem';
+import { SIGN_CONVENTION, type SaltThermoResult } from '@/chem';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
 import { CautionNote } from '@/components/Cautions';
 import type { ProjectRecord } from '@/persistence/records';
-import { candidateLabel } from '@/screening-data/candidate-label';
 import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/compute-screening';
 import { useProjectScreening } from '@/screening-data/use-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import {
-  cancellationNote,
-  energyCycleOf,
-  relativeSolutionEnthalpies,
-  sourcesOf,
-} from '../energetics-model';
+import { cancellationNote, energyCycleOf, relativeSolutionEnthalpies } from '../energetics-model';
+import { CycleDetails } from './CycleDetails';
+import { drugsPerFormula, kj, labelOf } from './energetics-labels';
 import '../energetics.css';
-
-const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
-
-function labelOf(data: ProjectScreening, id: string): string {
-  const row = data.screen.rows.find((r) => r.id === id);
-  if (!row) return data.ionNames[id] ?? id;
-  return candidateLabel(
-    {
-      ionId: row.counterIonId,
-      drugPerSalt: row.drugPerSalt,
-      counterIonPerSalt: row.counterIonPerSalt,
-    },
-    data.ionNames[id],
-  );
-}
-
-/** Drug ions per formula unit of a candidate's salt (1 when unknown). */
-function drugsPerFormula(data: ProjectScreening, id: string): number {
-  return data.screen.rows.find((r) => r.id === id)?.drugPerSalt ?? 1;
-}
 
 /** The Energetics area: each salt's enthalpy cycle to scale, and all candidates side by side. */
 export function EnergeticsArea({ project }: { project: ProjectRecord }) {
@@ -233,127 +209,5 @@ function RelativeBars({
       }))}
       width={760}
     />
-  );
-}
-
-function CycleDetails({
-  data,
-  e,
-  measured,
-}: {
-  data: ProjectScreening;
-  e: CandidateEnergetics & { thermo: SaltThermoResult };
-  measured: number | null;
-}) {
-  const t = e.thermo;
-  let backed: { value: number; uncertainty: number } | null = null;
-  let backedError: string | null = null;
-  if (measured !== null) {
-    try {
-      backed = latticeFromSolutionEnthalpy({
-        solutionEnthalpyKJ: measured,
-        solutionUncertaintyKJ: 2,
-        cationHydration: t.cationHydrationKJ,
-        anionHydration: t.anionHydrationKJ,
-        cationsPerFormula: e.cationsPerFormula,
-        anionsPerFormula: e.anionsPerFormula,
-      });
-    } catch (err) {
-      backedError = err instanceof Error ? err.message : String(err);
-    }
-  }
-  const rows: [string, string, { value: number; uncertainty: number; method: string }][] = [
-    ['ΔH_L', 'lattice dissociation, per formula unit', t.latticeEnthalpyKJ],
-    [
-      `ΔH_hyd,+`,
-      `one ${e.cationLabel}${e.cationsPerFormula > 1 ? ` (× ${e.cationsPerFormula})` : ''}`,
-      t.cationHydrationKJ,
-    ],
-    [
-      `ΔH_hyd,−`,
-      `one ${e.anionLabel}${e.anionsPerFormula > 1 ? ` (× ${e.anionsPerFormula})` : ''}`,
-      t.anionHydrationKJ,
-    ],
-    ['ΔH_sol', 'solution at infinite dilution, per formula unit', t.solutionEnthalpyKJ],
-  ];
-  return (
-    <>
-      <table className="data-table cycle-table">
-        <caption className="sr-only">Cycle of {labelOf(data, e.candidateId)}</caption>
-        <thead>
-          <tr>
-            <th scope="col">Step</th>
-            <th scope="col">kJ/mol ± 1σ</th>
-            <th scope="col">Method</th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map(([sym, what, est]) => (
-            <tr key={sym}>
-              <th scope="row">
-                {sym} <div className="muted small-note">{what}</div>
-              </th>
-              <td>
-                {kj(est.value)} ± {est.uncertainty.toFixed(0)}{' '}
-                {est.method === 'published' ? (
-                  <span
-                    className="origin origin-published"
-                    title="published single-ion value (see Sources)"
-                  >
-                    pub.
-                  </span>
-                ) : (
-                  <span className="origin origin-estimated">est.</span>
-                )}
-              </td>
-              <td className="method">{est.method}</td>
-            </tr>
-          ))}
-          {measured !== null ? (
-            <tr>
-              <th scope="row">
-                ΔH_sol <div className="muted small-note">measured (calorimetry)</div>
-              </th>
-              <td>
-                {kj(measured)} <span className="origin origin-measured">meas.</span>
-              </td>
-              <td className="method">bench data</td>
-            </tr>
-          ) : null}
-          {backed ? (
-            <tr>
-              <th scope="row">
-                ΔH_L <div className="muted small-note">backed out of the measured ΔH_sol</div>
-              </th>
-              <td>
-                {kj(backed.value)} ± {backed.uncertainty.toFixed(0)}
-              </td>
-              <td className="method">cycle solver</td>
-            </tr>
-          ) : null}
-        </tbody>
-      </table>
-      {backedError ? (
-        <p className="field-error">Lattice enthalpy not backed out: {backedError}</p>
-      ) : null}
-      <p className="muted small-note">
-        Lattice method: {t.methodChosen} — {t.methodReason}
-      </p>
-      <details className="sources">
-        <summary>Sources</summary>
-        <ul>
-          {sourcesOf(t.latticeEnthalpyKJ, t.cationHydrationKJ, t.anionHydrationKJ).map((s) => (
-            <li key={s}>{s}</li>
-          ))}
-        </ul>
-        {(t.solutionEnthalpyKJ.notes ?? []).length ? (
-          <ul>
-            {(t.solutionEnthalpyKJ.notes ?? []).map((n) => (
-              <li key={n}>{n}</li>
-            ))}
-          </ul>
-        ) : null}
-      </details>
-    </>
   );
 }

@@ -1,0 +1,211 @@
+import { SALT_WATER_ORIGIN_LABELS, type Estimate, type ScreenRow } from '@/chem';
+import type { ProjectScreening } from '@/screening-data/compute-screening';
+import { uncertaintiesOf } from '@/screening-data/uncertainty';
+import type { SheetCell, SheetColumn, ValueOrigin } from './sheet.types';
+
+/** The ranked table's columns, in the order of the sheet and the CSV. */
+export const SHEET_COLUMNS: readonly SheetColumn[] = [
+  {
+    key: 'score',
+    label: 'Score',
+    unit: '0–1',
+    kind: 'number',
+    hint: 'weighted mean of the criterion scores (ranking weights above)',
+    group: 'formation',
+  },
+  {
+    key: 'pTop3',
+    label: 'P(top 3)',
+    unit: '%',
+    kind: 'number',
+    hint: 'share of Monte Carlo draws in which the candidate ranks in the top three',
+    group: 'formation',
+  },
+  {
+    key: 'deltaPka',
+    label: 'ΔpKa',
+    unit: null,
+    kind: 'number',
+    hint: 'pKa(protonated base) − pKa(acid)',
+    group: 'formation',
+  },
+  {
+    key: 'saltProbability',
+    label: 'P(salt)',
+    unit: '0–1',
+    kind: 'number',
+    hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend',
+    group: 'formation',
+  },
+  {
+    key: 'activeFraction',
+    label: 'Active fraction',
+    unit: '%',
+    kind: 'number',
+    hint: 'drug mass / salt mass',
+    group: 'formation',
+  },
+  {
+    key: 'saltMassPerDose',
+    label: 'Salt per dose',
+    unit: 'mg',
+    kind: 'number',
+    group: 'formation',
+  },
+  {
+    key: 'saltWaterMgPerMl',
+    label: 'Salt in water',
+    unit: 'mg/mL as salt',
+    kind: 'number',
+    hint: "the salt's own solubility in pure water (±1σ in the log₁₀ column)",
+    group: 'solubility',
+  },
+  {
+    key: 'saltWaterFreeFormMgPerMl',
+    label: 'Salt in water, as free form',
+    unit: 'mg/mL free form',
+    kind: 'number',
+    group: 'solubility',
+  },
+  {
+    key: 'saltWaterLog10M',
+    label: 'log₁₀ S(salt, water)',
+    unit: 'mol/L of drug',
+    kind: 'number',
+    hint: '±1σ: the model’s leave-one-drug-out error, or the measurement’s',
+    group: 'solubility',
+  },
+  {
+    key: 'saltWaterOrigin',
+    label: 'Salt solubility from',
+    unit: null,
+    kind: 'text',
+    hint: 'model, model + fusion data (your DSC), measured, or the 10² × S₀ anchor',
+    group: 'solubility',
+  },
+  {
+    key: 'log10Ksp',
+    label: 'log₁₀ K_sp',
+    unit: 'K_sp in (mol/L)^ν',
+    kind: 'number',
+    group: 'solubility',
+  },
+  { key: 'phMax', label: 'pH_max', unit: null, kind: 'number', group: 'solubility' },
+  {
+    key: 'worstDoseNumber',
+    label: 'Worst D₀ in pH 1.2–6.8',
+    unit: null,
+    kind: 'number',
+    hint: 'ICH M9 dose number at the least favourable pH',
+    group: 'solubility',
+  },
+  { key: 'worstPh', label: 'at pH', unit: null, kind: 'number', group: 'solubility' },
+  {
+    key: 'gastricDoseNumber',
+    label: 'Gastric D₀',
+    unit: null,
+    kind: 'number',
+    hint: 'dose number in the gastric medium with its chloride',
+    group: 'solubility',
+  },
+  {
+    key: 'solubilityClass',
+    label: 'ICH M9 solubility',
+    unit: null,
+    kind: 'text',
+    group: 'solubility',
+  },
+  {
+    key: 'phMaxMargin',
+    label: 'pH_max − microenvironment pH',
+    unit: 'pH units',
+    kind: 'number',
+    group: 'solubility',
+  },
+  {
+    key: 'latticeEnthalpy',
+    label: 'ΔH_L',
+    unit: 'kJ/mol',
+    kind: 'number',
+    hint: 'lattice dissociation enthalpy, > 0',
+    group: 'energetics',
+  },
+  {
+    key: 'solutionEnthalpy',
+    label: 'ΔH_sol',
+    unit: 'kJ/mol',
+    kind: 'number',
+    hint: 'enthalpy of solution, estimate or calorimetric',
+    group: 'energetics',
+  },
+  {
+    key: 'hygroscopicity',
+    label: 'Moisture uptake',
+    unit: null,
+    kind: 'text',
+    hint: 'Ph. Eur. 5.11 class from a measured mass gain',
+    group: 'formation',
+  },
+];
+const num = (
+  value: number | null | undefined,
+  origin: ValueOrigin | null,
+  uncertainty?: number | null,
+): SheetCell =>
+  value === null || value === undefined || !Number.isFinite(value)
+    ? { value: null }
+    : {
+        value,
+        origin,
+        uncertainty: uncertainty != null && Number.isFinite(uncertainty) ? uncertainty : null,
+      };
+const est = (e: Estimate | null | undefined, origin: ValueOrigin = 'estimated'): SheetCell =>
+  e ? num(e.value, origin, e.uncertainty) : { value: null };
+/** One screened candidate's cells, keyed by the `SHEET_COLUMNS` keys, each with its origin and 1σ. */
+export function rowCells(
+  row: ScreenRow,
+  score: number | null,
+  screening: ProjectScreening,
+  pTop3: number | null,
+): Record<string, SheetCell> {
+  const kspOrigin: ValueOrigin | null = row.kspOrigin ?? null;
+  const thermo = screening.energetics[row.id]?.thermo ?? null;
+  const measuredSol = row.measured?.solutionEnthalpyKJ ?? null;
+  const sw = row.saltWaterSolubility;
+  const swOrigin: ValueOrigin | null = sw
+    ? sw.origin === 'measured'
+      ? 'measured'
+      : 'estimated'
+    : null;
+  return {
+    score: num(score, null),
+    pTop3: num(pTop3 === null ? null : pTop3 * 100, 'estimated'),
+    deltaPka: num(row.deltaPka, 'input'),
+    saltProbability: num(row.saltFormation?.saltProbability ?? null, 'estimated'),
+    activeFraction: num(row.activeFraction * 100, 'input'),
+    saltMassPerDose: num(row.saltMassPerDoseMg, 'input'),
+    saltWaterMgPerMl: num(sw?.mgPerMlAsSalt ?? null, swOrigin),
+    saltWaterFreeFormMgPerMl: num(sw?.mgPerMlAsFreeForm ?? null, swOrigin),
+    saltWaterLog10M: sw ? est(sw.log10DrugM, swOrigin ?? 'estimated') : { value: null },
+    saltWaterOrigin: { value: sw ? SALT_WATER_ORIGIN_LABELS[sw.origin] : null },
+    log10Ksp: est(row.log10Ksp, kspOrigin ?? 'estimated'),
+    // The same 1σ the Ranking area shows (linearised as the rank-robustness draw perturbs pH_max).
+    phMax: num(
+      row.phMax,
+      kspOrigin,
+      uncertaintiesOf(row, screening.screen.robustnessShared).phMaxSigma,
+    ),
+    worstDoseNumber: num(row.worst?.doseNumber ?? null, kspOrigin),
+    worstPh: num(row.worst?.pH ?? null, null),
+    gastricDoseNumber: num(row.gastric?.doseNumber ?? null, kspOrigin),
+    solubilityClass: { value: row.solubilityClass },
+    phMaxMargin: num(row.disproportionation?.marginPh ?? null, kspOrigin),
+    latticeEnthalpy: est(thermo?.latticeEnthalpyKJ),
+    solutionEnthalpy:
+      measuredSol !== null ? num(measuredSol, 'measured') : est(thermo?.solutionEnthalpyKJ),
+    hygroscopicity: {
+      value: row.measured?.hygroscopicity ?? null,
+      origin: row.measured?.hygroscopicity ? 'measured' : null,
+    },
+  };
+}
