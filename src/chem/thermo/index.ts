@@ -1,6 +1,6 @@
 /**
  * Thermochemistry engine: lattice, hydration and solution enthalpies with sourced ion data and measured
- * uncertainty (sign conventions in estimate-salt.ts). Everything here is pure and deterministic.
+ * uncertainty (sign conventions in hess-law-assembly.ts). Everything here is pure and deterministic.
  */
 export type * from './thermo.types';
 export {

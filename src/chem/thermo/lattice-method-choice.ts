@@ -1,0 +1,84 @@
+/**
+ * Which lattice method answers a request, and why: `auto` runs every method the inputs allow and keeps
+ * the one with the lowest stated relative uncertainty; a named method is checked and used as asked.
+ */
+import { ChemInputError } from '../result';
+import { isStructureType } from './models/born-mayer/born-mayer';
+import { formulaUnitVolume } from './lattice';
+import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
+import { latticeEnthalpyEstimate, type LatticeCalibrationOptions } from './lattice-estimate';
+import { groupOf } from './lattice-uncertainty';
+
+/** The lattice estimate a request ends up with. */
+export type ChosenLattice = ReturnType<typeof latticeEnthalpyEstimate>;
+
+/** The methods that can run on a request, in order of preference for ties. */
+function applicableMethods(req: SaltThermoRequest, p: number, q: number): LatticeMethod[] {
+  const out: LatticeMethod[] = [];
+  const vol = (() => {
+    try {
+      return formulaUnitVolume(req, p, q);
+    } catch {
+      return undefined;
+    }
+  })();
+  if (vol) out.push('vbt');
+  if (req.cation.radiusA && req.anion.radiusA) out.push('kapustinskii');
+  if (req.structureType && isStructureType(req.structureType) && vol && vol.from !== 'ion-volumes')
+    out.push('born-mayer');
+  return out;
+}
+
+/**
+ * The lattice estimate for the requested method (`auto` when none is given) and the reason stated for
+ * it. `auto` ranks the applicable methods by relative uncertainty on the bundled reference salts of
+ * the same kind and names every candidate's figure in the reason.
+ */
+export function chooseLatticeEstimate(
+  req: SaltThermoRequest,
+  p: number,
+  q: number,
+  calOpts: LatticeCalibrationOptions,
+): { chosen: ChosenLattice; reason: string } {
+  const requested = req.method ?? 'auto';
+  if (requested === 'auto') {
+    const methods = applicableMethods(req, p, q);
+    if (methods.length === 0) {
+      throw new ChemInputError(
+        'cation/anion',
+        'no lattice method applies: give ions with radii or volumes, or a formula-unit volume or density',
+        'bundled ions, formula or SMILES ions, formulaUnitVolumeNm3 or densityGPerCm3',
+      );
+    }
+    const group = groupOf(req);
+    const errors: unknown[] = [];
+    const ranked = methods
+      .flatMap((m) => {
+        try {
+          const r = latticeEnthalpyEstimate(req, m, calOpts);
+          return [{ m, r, rel: r.estimate.uncertainty / r.estimate.value }];
+        } catch (err) {
+          errors.push(err);
+          return [];
+        }
+      })
+      .sort((a, b) => a.rel - b.rel);
+    const best = ranked[0];
+    if (!best) throw errors[0];
+    return {
+      chosen: best.r,
+      reason: `auto: ${best.m} has the lowest ${calOpts.calibrate === false ? 'measured' : 'stated (cross-validated where calibrated)'} uncertainty (${(best.rel * 100).toFixed(1)} %) among the methods these inputs allow (${ranked.map((r) => `${r.m} ${(r.rel * 100).toFixed(1)} %`).join(', ')}), measured on the bundled ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts`,
+    };
+  }
+  if (!['kapustinskii', 'born-mayer', 'born-lande', 'vbt'].includes(requested)) {
+    throw new ChemInputError(
+      'method',
+      `unknown method ${String(requested)}`,
+      'auto, kapustinskii, born-mayer, born-lande, vbt',
+    );
+  }
+  return {
+    chosen: latticeEnthalpyEstimate(req, requested, calOpts),
+    reason: `requested: ${requested}`,
+  };
+}
