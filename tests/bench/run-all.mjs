@@ -208,7 +208,7 @@ if (!skip.has('batch')) {
         wallMs: +r.ms.toFixed(0),
         compoundsPerSecond: +((n * 1000) / r.ms).toFixed(1),
         peakResidentMB: r.peakMB,
-        note: 'formula-only fictional compounds against the whole library, default settings (rank robustness included), CSV to a file',
+        note: 'formula-only fictional compounds against the whole library, default settings (no rank-robustness Monte Carlo: a batch runs it only with --iterations), CSV to a file',
         ...(r.code !== 0 ? { stderrTail: r.stderr } : {}),
       });
     }
