@@ -61,7 +61,7 @@ export interface CrossValidationReport {
   /** RMSE over all salts, log₁₀ units (each salt predicted by a model that never saw its drug). */
   rmse: number;
   anchorRmse: number;
-  /** Mean of the per-drug Spearman ρ over drugs with ≥ 3 salts (flat predictions count as 0). */
+  /** Mean per-drug Spearman ρ over drugs with ≥ 3 salts (flat predictions count as 0; NaN with no such drug). */
   meanSpearman: number;
   anchorMeanSpearman: number;
   /** Median of the same. */
@@ -254,15 +254,13 @@ export function crossValidateByDrug(
     folds,
     rmse: rootMeanSquareError(all('predicted'), all('measured')),
     anchorRmse: rootMeanSquareError(all('anchor'), all('measured')),
-    meanSpearman: ranked.reduce((s, f) => s + rho(f.spearman), 0) / Math.max(1, ranked.length),
-    anchorMeanSpearman:
-      ranked.reduce((s, f) => s + rho(f.anchorSpearman), 0) / Math.max(1, ranked.length),
+    meanSpearman: ranked.reduce((s, f) => s + rho(f.spearman), 0) / ranked.length,
+    anchorMeanSpearman: ranked.reduce((s, f) => s + rho(f.anchorSpearman), 0) / ranked.length,
     medianSpearman: median(ranked.map((f) => rho(f.spearman))),
     anchorMedianSpearman: median(ranked.map((f) => rho(f.anchorSpearman))),
-    leastSolubleHitRate:
-      ranked.filter((f) => f.leastSolubleInLowestTwo).length / Math.max(1, ranked.length),
+    leastSolubleHitRate: ranked.filter((f) => f.leastSolubleInLowestTwo).length / ranked.length,
     anchorLeastSolubleHitRate:
-      ranked.filter((f) => f.anchorLeastSolubleInLowestTwo).length / Math.max(1, ranked.length),
+      ranked.filter((f) => f.anchorLeastSolubleInLowestTwo).length / ranked.length,
     nSalts: rows.length,
     nDrugs: ids.length,
   };

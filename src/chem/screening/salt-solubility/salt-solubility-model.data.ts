@@ -134,12 +134,12 @@ export const SALT_SOLUBILITY_VARIANTS = [
     "nDrugs": 8,
     "rmse": 1.034718514,
     "anchorRmse": 0.8033764776,
-    "meanSpearman": 0,
-    "anchorMeanSpearman": 0,
+    "meanSpearman": null,
+    "anchorMeanSpearman": null,
     "medianSpearman": null,
     "anchorMedianSpearman": null,
-    "leastSolubleHitRate": 0,
-    "anchorLeastSolubleHitRate": 0
+    "leastSolubleHitRate": null,
+    "anchorLeastSolubleHitRate": null
   },
   {
     "id": "pooled-on-fusion-subset",
@@ -148,12 +148,12 @@ export const SALT_SOLUBILITY_VARIANTS = [
     "nDrugs": 8,
     "rmse": 0.9702336056,
     "anchorRmse": 0.8033764776,
-    "meanSpearman": 0,
-    "anchorMeanSpearman": 0,
+    "meanSpearman": null,
+    "anchorMeanSpearman": null,
     "medianSpearman": null,
     "anchorMedianSpearman": null,
-    "leastSolubleHitRate": 0,
-    "anchorLeastSolubleHitRate": 0
+    "leastSolubleHitRate": null,
+    "anchorLeastSolubleHitRate": null
   }
 ] as const;
 
