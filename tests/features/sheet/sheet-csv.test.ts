@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import fc from 'fast-check';
-import { FORMULA_TRIGGERS, isFormulaLike, neutralizeCsvText } from '@/features/sheet/csv-safety';
+import { CSV_FORMULA_TRIGGERS as FORMULA_TRIGGERS, isFormulaLike, neutralizeCsvText } from '@/chem';
 import { csvHeader, csvNumber, sheetCsvFileName, sheetToCsv } from '@/features/sheet/sheet-csv';
 import type { SheetModel } from '@/features/sheet/sheet.types';
 import { CAUTION_LINES } from '@/components/Cautions';

@@ -179,6 +179,24 @@ function drugIds(rows: readonly SaltSolubilityTrainingRow[]): string[] {
   return [...new Set(rows.map((r) => r.drugId))].sort();
 }
 
+/** One fold: fit without drug `id`, predict that drug's salts. */
+function heldOutDrug(
+  rows: readonly SaltSolubilityTrainingRow[],
+  id: string,
+  features: readonly SaltSolubilityFeature[],
+  lambda: (train: readonly SaltSolubilityTrainingRow[]) => number,
+  kind: SaltSolubilityModelKind,
+): { test: SaltSolubilityTrainingRow[]; predicted: number[]; lambda: number } {
+  const train = rows.filter((r) => r.drugId !== id);
+  const test = rows.filter((r) => r.drugId === id);
+  const l = lambda(train);
+  const m = fitOn(train, features, l, kind);
+  const predicted = test.map((r) =>
+    predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM),
+  );
+  return { test, predicted, lambda: l };
+}
+
 /** λ with the lowest LODO RMSE over `rows` (ties → the larger λ, the simpler model). */
 export function chooseLambda(
   rows: readonly SaltSolubilityTrainingRow[],
@@ -193,15 +211,9 @@ export function chooseLambda(
     const pred: number[] = [];
     const meas: number[] = [];
     for (const id of ids) {
-      const train = rows.filter((r) => r.drugId !== id);
-      const test = rows.filter((r) => r.drugId === id);
-      const m = fitOn(train, features, lambda, kind);
-      for (const r of test) {
-        pred.push(
-          predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM),
-        );
-        meas.push(r.log10DrugM);
-      }
+      const fold = heldOutDrug(rows, id, features, () => lambda, kind);
+      pred.push(...fold.predicted);
+      meas.push(...fold.test.map((r) => r.log10DrugM));
     }
     const err = rootMeanSquareError(pred, meas);
     if (err < bestErr - 1e-12) {
@@ -222,12 +234,12 @@ export function crossValidateByDrug(
   const ids = drugIds(rows);
   const folds: DrugFoldResult[] = [];
   for (const id of ids) {
-    const train = rows.filter((r) => r.drugId !== id);
-    const test = rows.filter((r) => r.drugId === id);
-    const lambda = chooseLambda(train, features, grid, kind);
-    const m = fitOn(train, features, lambda, kind);
-    const predicted = test.map((r) =>
-      predictSaltSolubility(m, featureRow(r.input, features), r.input.drug.log10IntrinsicM),
+    const { test, predicted, lambda } = heldOutDrug(
+      rows,
+      id,
+      features,
+      (train) => chooseLambda(train, features, grid, kind),
+      kind,
     );
     const measured = test.map((r) => r.log10DrugM);
     const anchor = test.map((r) => r.anchorLog10DrugM);

@@ -12,7 +12,7 @@ import {
 } from '../../data/thermo-reference';
 import { THERMO_IONS } from '../../data/thermo-ions';
 import { SRC } from '../../data/thermo-sources';
-import { molarMassGPerMol } from '../models/ion-volume/formula';
+import { formulaMolarMassGPerMol as molarMassGPerMol } from '../../compound/formula';
 import { bornHaberCycle } from '../models/cycle/cycle';
 
 const hydration = (id: string): number => {
