@@ -11,6 +11,7 @@ export * from './salt-equilibrium';
 export * from './ph-profile';
 export * from './dose-number';
 export * from './disproportionation';
+export * from './excipients';
 export * from './hygroscopicity';
 export * from './van-t-hoff';
 export * from './intrinsic-solubility';

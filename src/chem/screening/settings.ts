@@ -10,7 +10,9 @@ import { celsiusToKelvin } from '../units/temperature';
  * - ΔpKa bands: Cruz-Cabeza 2012 (−1, 4) and the common-practice minimum 2 (Stahl & Wermuth 2002);
  * - gastric medium: pH 1.2 with 0.12 M chloride (USP simulated gastric fluid composition, from memory;
  *   the project setting `gastricChlorideM` overrides it);
- * - microenvironment pH 7 (project setting), 37 °C (ICH M9 temperature);
+ * - microenvironment pH: 7 (project setting) taken as an assumption until it is stated
+ *   (`microenvironmentPhStated`) or the formulation's excipients are chosen (`excipients`, bundled ids
+ *   of excipients.data.ts), which then replace it; 37 °C (ICH M9 temperature);
  * - salt anchor 2 decades above S₀ (see ksp-estimate.ts, common practice);
  * - pKa uncertainty by origin for the rank-robustness draw: measured 0.1, literature 0.3, predicted
  *   0.7 pKa units (our assumption; predicted pKa values are commonly quoted at ±0.5–1 unit).
@@ -65,6 +67,10 @@ export const screeningSettingsSchema = z.object({
   /** Extra media the user defines (buffers with their counter-ions). */
   media: z.array(mediumSchema).max(20).default([]),
   microenvironmentPh: z.number().min(0).max(14).default(7),
+  /** True when the user gave the microenvironment pH; false: 7 (or the value) is only assumed. */
+  microenvironmentPhStated: z.boolean().default(false),
+  /** The formulation's excipients (bundled ids); when any are chosen they replace the single pH. */
+  excipients: z.array(z.string().min(1).max(60)).max(40).default([]),
   temperatureK: z
     .number()
     .min(celsiusToKelvin(0))

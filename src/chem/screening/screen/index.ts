@@ -9,3 +9,9 @@ export {
   SALT_WATER_ORIGIN_LABELS,
   SALT_WATER_ORIGIN_BASIS,
 } from './salt-water-words';
+export { uncertaintiesOf } from './row-uncertainty';
+export {
+  BIORELEVANT_MEDIA,
+  biorelevantMedium,
+  type BiorelevantMediumRecord,
+} from './biorelevant-media';

@@ -11,6 +11,7 @@ import { screenFreeForm } from './free-form';
 import { screenContext } from './screen-context';
 import { rowLabel } from './screen-reasons';
 import { screenAssumptions } from './screen-notes';
+import { microenvironmentAssumption } from './microenvironment';
 import { candidateRow, errorRow } from './screen-row';
 import type { ScreenCompoundInput, ScreenResult, ScreenRow } from './screen.types';
 
@@ -47,13 +48,19 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     }
   }
   const hcl = hydrochlorideReference(ctx, prepared, ksps);
+  const shared = {
+    drugKind: c.kind,
+    drugPkaSigma,
+    log10IntrinsicSigma: ctx.log10IntrinsicM.uncertainty,
+    bands: settings.deltaPkaBands,
+  };
 
   const rows: ScreenRow[] = prepared.map((p) => {
     const label = rowLabel(p.cand.counterIon.name, p.cand.stoichiometry);
     if (!isPrepared(p)) return errorRow(p.cand, label, p.error);
     try {
       const kspOf = () => ksps.get(p.cand.id) ?? chooseKsp(ctx, p, refPerDrugKJ);
-      return candidateRow(ctx, p, label, kspOf, media, hcl);
+      return candidateRow(ctx, p, label, kspOf, media, hcl, shared);
     } catch (err) {
       return errorRow(p.cand, label, err instanceof Error ? err.message : String(err));
     }
@@ -65,15 +72,11 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     settings,
     freeForm: freeForm.result,
     rows,
-    robustnessShared: {
-      drugKind: c.kind,
-      drugPkaSigma,
-      log10IntrinsicSigma: ctx.log10IntrinsicM.uncertainty,
-      bands: settings.deltaPkaBands,
-    },
+    robustnessShared: shared,
     assumptions: [
       ...freeForm.profile.assumptions,
       ...screenAssumptions(kelvinToCelsius(ctx.temperatureK), hcl !== null),
+      microenvironmentAssumption(settings),
     ],
     cautions: SCREENING_CAUTIONS,
   };

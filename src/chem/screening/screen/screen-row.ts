@@ -1,5 +1,4 @@
 import { saltDeltaPka, saltFormationVerdict } from '../delta-pka';
-import { disproportionationRisk } from '../disproportionation';
 import { doseNumber } from '../dose-number';
 import { activeFraction, saltMassPerDoseMg } from '../mass-cost';
 import {
@@ -10,10 +9,13 @@ import {
   type GridSolubility,
 } from '../ph-grid-solubility';
 import { checkProfileInput, phSolubilityProfile, type ProfileSalt } from '../ph-profile';
+import type { RobustnessShared } from '../rank-robustness';
 import type { CriterionInputs } from '../ranking';
 import { clearlyLower, screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
 import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
+import { microenvironmentJudgement } from './microenvironment';
+import { uncertaintiesOf } from './row-uncertainty';
 import type { PreparedCandidate } from './prepare-candidate';
 import { freeFormMgPerMl, saltMassInput, type ScreenContext } from './screen-context';
 import {
@@ -84,6 +86,7 @@ export function candidateRow(
   kspOf: () => KspChoice,
   media: readonly ScreenMedium[],
   hcl: HydrochlorideReference | null,
+  shared: RobustnessShared,
 ): ScreenRow {
   const { cand, protolyte, measured } = p;
   const c = ctx.compound;
@@ -129,7 +132,12 @@ export function candidateRow(
   const gastricWords = gastric ? gastricReason(name, gastric, cand.counterIon.id) : null;
   if (gastricWords) reasons.push(gastricWords);
 
-  const disp = disproportionationRisk(profile.phMax, ctx.settings.microenvironmentPh, c.kind);
+  const { phMaxSigma } = uncertaintiesOf(
+    { robustness: { saltLog10Sigma: ksp.saltLog10Sigma, saltAnchoredOnIntrinsic: ksp.anchored } },
+    shared,
+  );
+  const micro = microenvironmentJudgement(ctx.settings, profile.phMax, phMaxSigma, c.kind);
+  const disp = micro.disproportionation;
   const dispWords = disproportionationWords(disp);
   reasons.push(dispWords.reason);
   if (dispWords.flag) flags.push(dispWords.flag);
@@ -179,6 +187,7 @@ export function candidateRow(
     gastric,
     media: mediaResults,
     disproportionation: disp,
+    excipientRisks: micro.excipientRisks,
     measured,
     flags,
     reasons,
@@ -233,6 +242,7 @@ export function errorRow(cand: ScreeningCandidate, label: string, error: string)
     gastric: null,
     media: [],
     disproportionation: null,
+    excipientRisks: [],
     measured: null,
     flags: [],
     reasons: [notScreenedReason(error)],

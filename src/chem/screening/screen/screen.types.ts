@@ -1,6 +1,7 @@
 import type { Estimate } from '../../result';
 import type { SaltFormationVerdict } from '../delta-pka';
 import type { DisproportionationResult } from '../disproportionation';
+import type { ExcipientRisk } from '../excipients/excipient-risk';
 import type { InterpretedMeasurements, MeasurementInput } from '../measurements';
 import type { RobustnessRow, RobustnessShared } from '../rank-robustness';
 import type { CriterionInputs } from '../ranking';
@@ -170,6 +171,8 @@ export interface ScreenRow {
   gastric: MediumResult | null;
   media: MediumResult[];
   disproportionation: DisproportionationResult | null;
+  /** The salt against each chosen excipient (the salt × excipient matrix row); empty without any. */
+  excipientRisks: ExcipientRisk[];
   measured: InterpretedMeasurements | null;
   flags: ScreenFlag[];
   reasons: Reason[];
