@@ -22,6 +22,11 @@ export const projectSettingsSchema = z.object({
   gastricChlorideM: z.number().min(0).max(5).default(0.12),
   /** Microenvironment pH of the intended formulation (for the disproportionation flag). */
   microenvironmentPh: z.number().min(0).max(14).default(7),
+  /**
+   * True when the user stated the microenvironment pH, false when it is only the assumed 7. Absent in
+   * records written before it existed: read by `microenvironmentPhStatedOf` (screening-settings.ts).
+   */
+  microenvironmentPhStated: z.boolean().optional(),
   /** Temperature of the screening, °C. */
   temperatureC: z.number().min(0).max(100).default(37),
   /** Extra screening settings owned by later features (weights, bands); each validated by its owner. */

@@ -38,6 +38,9 @@ export const CRITERIA: readonly CriterionKey[] = [
   'hygroscopicity',
 ];
 
+/** The microenvironment pH assumed until the formulation's pH is stated or its excipients chosen. */
+export const ASSUMED_MICROENVIRONMENT_PH = 7;
+
 export const mediumSchema = z.object({
   id: z.string().min(1).max(60),
   label: z.string().min(1).max(120),
@@ -66,7 +69,7 @@ export const screeningSettingsSchema = z.object({
   gastricChlorideM: z.number().min(0).max(5).default(0.12),
   /** Extra media the user defines (buffers with their counter-ions). */
   media: z.array(mediumSchema).max(20).default([]),
-  microenvironmentPh: z.number().min(0).max(14).default(7),
+  microenvironmentPh: z.number().min(0).max(14).default(ASSUMED_MICROENVIRONMENT_PH),
   /** True when the user gave the microenvironment pH; false: 7 (or the value) is only assumed. */
   microenvironmentPhStated: z.boolean().default(false),
   /** The formulation's excipients (bundled ids); when any are chosen they replace the single pH. */

@@ -1,4 +1,10 @@
-import { mediumSchema, type ScreeningMedium } from '@/chem';
+import {
+  BIORELEVANT_MEDIA,
+  biorelevantMedium,
+  mediumSchema,
+  type BiorelevantMediumRecord,
+  type ScreeningMedium,
+} from '@/chem';
 
 /** The buffer form's draft: every field as typed. */
 export interface BufferDraft {
@@ -72,4 +78,41 @@ export function bufferFromDraft(
       errors: { label: parsed.error.issues[0]?.message ?? 'Not a valid medium' },
     };
   return { ok: true, medium: parsed.data };
+}
+
+/** Said beside the presets and in the README: what the workbench does not model in these media. */
+export const BIORELEVANT_NOT_MODELLED =
+  'Not modelled: solubilisation by the bile salt (sodium taurocholate) and lecithin micelles, the lipids of FeSSIF-V2 and pepsin. The workbench applies each medium’s pH and its common ions (chloride, the buffer anion — phosphate, acetate or maleate — and sodium for salts of acids); a poorly soluble drug usually dissolves better in these media than the numbers here say.';
+
+export interface PresetChoice {
+  preset: BiorelevantMediumRecord;
+  medium: ScreeningMedium;
+  /** True when the project's media already hold it (by id or by name). */
+  added: boolean;
+}
+
+/** The biorelevant presets as one-click choices, marked when already in the project's media. */
+export function presetChoices(existing: readonly ScreeningMedium[]): PresetChoice[] {
+  return BIORELEVANT_MEDIA.map((preset) => {
+    const medium = biorelevantMedium(preset);
+    const added = existing.some(
+      (m) => m.id === medium.id || m.label.toLowerCase() === medium.label.toLowerCase(),
+    );
+    return { preset, medium, added };
+  });
+}
+
+/** A preset's composition in one line (mmol/L), e.g. "phosphate 28.65, NaCl 105.85, …". */
+export function presetComposition(p: BiorelevantMediumRecord): string {
+  const parts = [
+    p.buffer.species !== 'none' ? `${p.buffer.species} ${p.buffer.mM} mM` : null,
+    p.hydrochloricAcidMM > 0 ? `HCl to pH ${p.pH} (≈ ${p.hydrochloricAcidMM.toFixed(1)} mM)` : null,
+    p.sodiumHydroxideMM > 0 ? `NaOH ${p.sodiumHydroxideMM} mM` : null,
+    `NaCl ${p.sodiumChlorideMM} mM`,
+    `sodium taurocholate ${p.sodiumTaurocholateMM} mM`,
+    `lecithin ${p.lecithinMM} mM`,
+    p.other || null,
+    `${p.osmolalityMOsmPerKg} mOsm/kg`,
+  ];
+  return parts.filter((x): x is string => x !== null).join(', ');
 }

@@ -1,5 +1,11 @@
-import { celsiusToKelvin, screeningSettingsSchema, type ScreeningSettings } from '@/chem';
+import {
+  ASSUMED_MICROENVIRONMENT_PH,
+  celsiusToKelvin,
+  screeningSettingsSchema,
+  type ScreeningSettings,
+} from '@/chem';
 import { projectSettingsSchema, type ProjectSettings } from '@/persistence/records';
+import { microenvironmentPhStatedOf } from '@/screening-data/screening-settings';
 
 /** The screening-conditions form as typed. */
 export interface ConditionsDraft {
@@ -18,7 +24,10 @@ export function conditionsDraftOf(project: ProjectSettings, s: ScreeningSettings
   return {
     gastricChlorideM: String(project.gastricChlorideM),
     gastricPh: String(s.gastricPh),
-    microenvironmentPh: String(project.microenvironmentPh),
+    // empty while the pH is not stated (the screen then assumes 7 and says so)
+    microenvironmentPh: microenvironmentPhStatedOf(project)
+      ? String(project.microenvironmentPh)
+      : '',
     temperatureC: String(project.temperatureC),
     cocrystalBelow: String(s.deltaPkaBands.cocrystalBelow),
     saltAbove: String(s.deltaPkaBands.saltAbove),
@@ -53,10 +62,13 @@ export function conditionsFromDraft(
   | { ok: false; errors: ConditionsErrors } {
   const errors: ConditionsErrors = {};
   const num: Partial<Record<keyof typeof RANGES, number>> = {};
+  // An empty microenvironment pH means "not stated": the assumed value is used and said.
+  const microStated = draft.microenvironmentPh.trim() !== '';
   for (const [key, r] of Object.entries(RANGES) as [
     keyof typeof RANGES,
     (typeof RANGES)[keyof typeof RANGES],
   ][]) {
+    if (key === 'microenvironmentPh' && !microStated) continue;
     const t = draft[key].trim().replace(',', '.').replace('−', '-');
     const x = t === '' ? Number.NaN : Number(t);
     if (!Number.isFinite(x)) errors[key] = `${r.label} must be a number`;
@@ -72,10 +84,12 @@ export function conditionsFromDraft(
     errors.saltAbove = 'The salt band must start above the cocrystal band';
   }
   if (Object.keys(errors).length > 0) return { ok: false, errors };
+  if (!microStated) num.microenvironmentPh = ASSUMED_MICROENVIRONMENT_PH;
   const projectSettings = projectSettingsSchema.parse({
     ...project,
     gastricChlorideM: num.gastricChlorideM,
     microenvironmentPh: num.microenvironmentPh,
+    microenvironmentPhStated: microStated,
     temperatureC: num.temperatureC,
   });
   const screening = screeningSettingsSchema.parse({
@@ -83,6 +97,7 @@ export function conditionsFromDraft(
     gastricPh: num.gastricPh,
     gastricChlorideM: num.gastricChlorideM,
     microenvironmentPh: num.microenvironmentPh,
+    microenvironmentPhStated: microStated,
     temperatureK: celsiusToKelvin(num.temperatureC!),
     activityModel: draft.activityModel,
     deltaPkaBands: {

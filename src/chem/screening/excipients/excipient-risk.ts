@@ -21,8 +21,30 @@ import { EXCIPIENTS, SINGLE_VALUE_HALF_WIDTH_PH, type ExcipientRecord } from './
 
 /** Words for P(conversion), our own banding (no published standard; common practice for a screen). */
 export type ConversionBand = 'unlikely' | 'possible' | 'likely';
+/** The band in words, as the app, the sheet and the CSV say it. */
+export const CONVERSION_BAND_WORDS: Record<ConversionBand | 'unknown', string> = {
+  likely: 'conversion likely',
+  possible: 'conversion possible',
+  unlikely: 'conversion unlikely',
+  unknown: 'not judged (no pH_max)',
+};
 /** P from which a pairing is "possible" and from which it is "likely" (our own choice). */
 export const CONVERSION_BAND_LIMITS = { possibleFrom: 0.1, likelyFrom: 0.5 } as const;
+
+/** Names of the excipient roles, for grouping the table. */
+export const EXCIPIENT_ROLE_NAMES: Record<ExcipientRecord['role'], string> = {
+  filler: 'Fillers',
+  disintegrant: 'Disintegrants',
+  lubricant: 'Lubricants',
+  glidant: 'Glidants',
+  binder: 'Binders',
+  acidifier: 'Acidifiers',
+  alkaliser: 'Alkalisers and buffers',
+};
+
+/** What the matrix does not model — said beside it in the app, on the sheet and in exports. */
+export const EXCIPIENT_MATRIX_LIMITS =
+  'Each excipient is judged by its published slurry pH alone: its share of the blend, its buffer capacity, the salt’s own surface pH, water content, humidity, temperature and the rate of conversion are not modelled. Measure the blend’s slurry pH and stress it before relying on a pairing.';
 
 export interface ExcipientPhEstimate {
   /** Midpoint of the published range, pH. */

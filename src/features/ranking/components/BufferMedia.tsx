@@ -6,8 +6,11 @@ import { SCREENING_SETTINGS_KEY } from '@/screening-data/screening-settings';
 import type { ProjectRecord } from '@/persistence/records';
 import type { DisplayRow } from '../ranking-rows';
 import {
+  BIORELEVANT_NOT_MODELLED,
   bufferFromDraft,
   EMPTY_BUFFER,
+  presetChoices,
+  presetComposition,
   type BufferDraft,
   type BufferErrors,
 } from '../buffer-media-model';
@@ -68,6 +71,14 @@ export const BufferMedia = memo(function BufferMediaView({
       setBusy(false);
     }
   };
+  const addPreset = async (medium: ScreeningMedium) => {
+    setBusy(true);
+    try {
+      await saveMedia(project.id, [...media, medium]);
+    } finally {
+      setBusy(false);
+    }
+  };
   const remove = (id: string) =>
     void saveMedia(
       project.id,
@@ -121,9 +132,11 @@ export const BufferMedia = memo(function BufferMediaView({
                     <br />
                     <span className="unit">
                       pH {m.pH};{' '}
-                      {Object.entries(m.ions)
-                        .map(([ion, c]) => `${ion} ${c} M`)
-                        .join(', ')}{' '}
+                      {m.id.startsWith('preset-')
+                        ? 'biorelevant, micelles not modelled'
+                        : Object.entries(m.ions)
+                            .map(([ion, c]) => `${ion} ${c} M`)
+                            .join(', ')}{' '}
                       — mg/mL (D₀)
                     </span>
                   </th>
@@ -174,6 +187,7 @@ export const BufferMedia = memo(function BufferMediaView({
           ))}
         </ul>
       ) : null}
+      <BiorelevantPresets media={media} busy={busy} onAdd={(m) => void addPreset(m)} />
       <form className="form-grid" onSubmit={add} noValidate aria-label="Add a dissolution medium">
         {input('label', 'Medium name', undefined, 'e.g. phosphate buffer pH 6.8')}
         {input('pH', 'pH')}
@@ -206,3 +220,40 @@ export const BufferMedia = memo(function BufferMediaView({
     </section>
   );
 });
+
+/** The biorelevant media as one-click presets, each with its composition, source and what is not modelled. */
+function BiorelevantPresets({
+  media,
+  busy,
+  onAdd,
+}: {
+  media: readonly ScreeningMedium[];
+  busy: boolean;
+  onAdd: (m: ScreeningMedium) => void;
+}) {
+  const uid = useId();
+  const presets = presetChoices(media);
+  return (
+    <div className="biorelevant-presets" role="group" aria-labelledby={`${uid}-presets`}>
+      <h3 id={`${uid}-presets`}>Biorelevant media</h3>
+      <ul className="preset-list">
+        {presets.map(({ preset, medium, added }) => (
+          <li key={preset.id}>
+            <button
+              type="button"
+              disabled={busy || added}
+              onClick={() => onAdd(medium)}
+              aria-label={`Add ${preset.label} (pH ${preset.pH})`}
+            >
+              {added ? `${preset.label} added` : `Add ${preset.label}`}
+            </button>{' '}
+            <span className="muted">
+              pH {preset.pH}: {presetComposition(preset)} — {preset.source}
+            </span>
+          </li>
+        ))}
+      </ul>
+      <p className="muted">{BIORELEVANT_NOT_MODELLED}</p>
+    </div>
+  );
+}

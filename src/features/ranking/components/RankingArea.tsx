@@ -14,6 +14,7 @@ import {
 } from '@/screening-data/use-robustness';
 import { useWeights } from '../hooks/use-weights';
 import { BufferMedia } from './BufferMedia';
+import { ExcipientMatrix } from './ExcipientMatrix';
 import { displayRows } from '../ranking-rows';
 import { RankingTable } from './RankingTable';
 import { ScreeningConditions } from './ScreeningConditions';
@@ -248,6 +249,11 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
         <>
           <ScreeningConditions project={project} settings={data.settings} />
           <BufferMedia project={project} media={mediaView.media} rows={mediaView.rows} />
+          <ExcipientMatrix
+            project={project}
+            chosen={data.settings.excipients}
+            rows={mediaView.rows}
+          />
           <RobustnessPanel robustness={robustness} labels={labels} />
           <SolubilityPanel
             data={data}

@@ -16,7 +16,8 @@ const SAVE_DELAY_MS = 300;
 
 const HINTS: Partial<Record<keyof ConditionsDraft, string>> = {
   gastricChlorideM: 'Default 0.12 M: simulated gastric fluid (USP, composition from memory)',
-  microenvironmentPh: 'Local pH in the intended dosage form (basic excipients raise it)',
+  microenvironmentPh:
+    'Local pH in the dose form. Leave empty while unknown: 7 is then assumed and said; chosen excipients replace it',
   temperatureC: '37 °C per ICH M9',
   stableSaltMin: 'Common practice: 2–3 (Stahl & Wermuth 2002)',
   cocrystalBelow: 'Cruz-Cabeza 2012: −1',
@@ -88,6 +89,7 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
           ...current.settings,
           gastricChlorideM: r.projectSettings.gastricChlorideM,
           microenvironmentPh: r.projectSettings.microenvironmentPh,
+          microenvironmentPhStated: r.projectSettings.microenvironmentPhStated,
           temperatureC: r.projectSettings.temperatureC,
           extra: { ...current.settings.extra, [SCREENING_SETTINGS_KEY]: block },
         });
@@ -128,8 +130,13 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
         <span className="conditions-title">Screening conditions</span>{' '}
         <span className="muted">
           gastric pH {settings.gastricPh}, Cl⁻ {project.settings.gastricChlorideM} M ·
-          microenvironment pH {project.settings.microenvironmentPh} ·{' '}
-          {project.settings.temperatureC} °C
+          microenvironment pH{' '}
+          {settings.excipients.length > 0
+            ? 'from the chosen excipients'
+            : settings.microenvironmentPhStated
+              ? project.settings.microenvironmentPh
+              : `not stated (assumed ${project.settings.microenvironmentPh})`}{' '}
+          · {project.settings.temperatureC} °C
         </span>{' '}
         <span className={`save-badge save-${state}`} role="status" aria-live="polite">
           {state === 'saved'

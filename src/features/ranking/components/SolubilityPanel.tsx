@@ -3,6 +3,8 @@ import { PhSolubilityChart, type SolubilitySeries } from '@/components/charts/Ph
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
 import type { ScreenRow } from '@/chem';
+import { downloadText } from '@/components/download-text';
+import { profileCsvFileName, profileToCsv } from '../ph-profile-csv';
 
 /** ICH M9 (2019): the highest dose must dissolve in 250 mL. */
 const VOLUME_ML = 250;
@@ -65,6 +67,26 @@ export const SolubilityPanel = memo(function SolubilityPanelView({
           ))}
         </fieldset>
       </div>
+      <p className="profile-export">
+        <button
+          type="button"
+          onClick={() => {
+            const generatedAt = new Date().toISOString();
+            const salts = rows.filter((r) => chosenKey.split('|').includes(r.id));
+            downloadText(
+              profileCsvFileName(data.screen.compoundName, generatedAt),
+              profileToCsv({ data, salts, labels, generatedAt, appVersion: __APP_VERSION__ }),
+              'text/csv;charset=utf-8',
+            );
+          }}
+        >
+          Download the profile data (CSV)
+        </button>{' '}
+        <span className="muted">
+          pH grid, the free form and the salts on the chart, in mg/mL and log₁₀ mol/L, with the
+          cautions.
+        </span>
+      </p>
       <FreeFormNote data={data} />
     </section>
   );
