@@ -23,13 +23,16 @@ export const COMMAND_USAGE = {
                   (--s0 mg/mL | --mp °C --logp X) [--dose mg] [--ions chloride,mesylate] [--input compound.json]
                   [--format csv|json] [--out file] [--top N] [--iterations 1000] [--seed 1]
                   [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
-                  [--keep-cocrystal-band]
+                  [--keep-cocrystal-band] [--excipients magnesium-stearate,mannitol]
        saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
                   [--errors file] [--out file] [--ions …] [--iterations N] [settings flags as above]
   --batch runs the P(top 3) Monte Carlo only when --iterations is given (the column is empty otherwise).
   compound.json may also hold "customIons": [{"id","smiles","charge","pKas"}] (counter-ions outside the
   library, named in "ions" by id) and "bench": {"<ion id>": {"meltingPointC", "fusionEnthalpyKJPerMol",
-  "solubilityMgPerMl"}} (that ion's 1:1 salt, or its only salt form).`,
+  "solubilityMgPerMl"}} (that ion's 1:1 salt, or its only salt form).
+  --excipients (or "settings": {"excipients": [...]}) judges each salt against the formulation's
+  excipients by their bundled ids (an unknown id is refused with the accepted ones); the last columns
+  name the excipient most likely to convert each salt and P(conversion).`,
   },
   serve: {
     summary: 'build the workbench if needed and serve it on 127.0.0.1 (npm start)',

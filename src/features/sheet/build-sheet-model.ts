@@ -6,6 +6,7 @@ import { energyCycleOf } from '@/screening-data/energy-cycle';
 import type { ProjectRecord } from '@/persistence/records';
 import { SHEET_COLUMNS, rowCells } from './sheet-columns';
 import { compoundFacts, settingsList, weightsList } from './sheet-facts';
+import { sheetExcipientMatrix, sheetWorstExcipient } from './sheet-excipients';
 import type { SheetModel, SheetRow } from './sheet.types';
 
 export { SHEET_COLUMNS } from './sheet-columns';
@@ -88,6 +89,7 @@ export function buildSheetModel({
       cells: rowCells(row, rr.score, screening, row.error ? null : (pTop3Of.get(row.id) ?? null)),
       flags: row.flags.map((f) => f.text),
       reasons,
+      worstExcipient: sheetWorstExcipient(row),
     });
   }
   for (const m of screening.missing) {
@@ -165,5 +167,10 @@ export function buildSheetModel({
       ? { series, doseLineMgPerMl: dose !== null ? dose / ICH_M9_VOLUME_ML : null }
       : null,
     energyCycles,
+    excipientMatrix: sheetExcipientMatrix(
+      screening.settings.excipients,
+      ranked.map((r) => byId.get(r.id)).filter((r): r is ScreenRow => !!r),
+      labelOf,
+    ),
   };
 }

@@ -20,6 +20,8 @@ export function csvHeader(columns: readonly SheetColumn[]): string[] {
       head.push(withUnit(`${c.label} uncertainty (1 sigma)`, c.unit), `${c.label} origin`);
   }
   head.push('Flags', 'Reasons');
+  // Added last so every earlier column keeps its place: the excipient most likely to convert the salt.
+  head.push('Worst excipient', 'Worst excipient P(conversion) (0-1)', 'Worst excipient risk');
   return head;
 }
 
@@ -41,6 +43,12 @@ export function sheetCsvRows(model: SheetModel): CsvValue[][] {
       }
     }
     line.push(neutralizeCsvText(r.flags.join('; ')), neutralizeCsvText(r.reasons.join('; ')));
+    const w = r.worstExcipient ?? null;
+    line.push(
+      w ? neutralizeCsvText(w.name) : null,
+      w ? csvNumber(w.probability) : null,
+      w ? neutralizeCsvText(w.words) : null,
+    );
     rows.push(line);
   }
   return rows;

@@ -54,7 +54,15 @@ export function settingsList(screening: ProjectScreening): SheetSetting[] {
       unit: '°C',
     },
     { label: 'Gastric medium', value: `pH ${s.gastricPh}, chloride ${s.gastricChlorideM} mol/L` },
-    { label: 'Microenvironment pH', value: s.microenvironmentPh },
+    {
+      label: 'Microenvironment pH',
+      value:
+        s.excipients.length > 0
+          ? 'from the chosen excipients (see Excipients’ microenvironment)'
+          : s.microenvironmentPhStated
+            ? s.microenvironmentPh
+            : `not stated — assumed ${s.microenvironmentPh}`,
+    },
     { label: 'ΔpKa: cocrystal below', value: s.deltaPkaBands.cocrystalBelow },
     { label: 'ΔpKa: salt above', value: s.deltaPkaBands.saltAbove },
     { label: 'ΔpKa: stable-salt minimum', value: s.deltaPkaBands.stableSaltMin },

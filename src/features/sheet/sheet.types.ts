@@ -45,6 +45,28 @@ export interface SheetRow {
   flags: string[];
   /** Why the candidate sits where it does, in words. */
   reasons: string[];
+  /** With excipients chosen: the one most likely to convert this salt (CSV's last columns). */
+  worstExcipient?: SheetWorstExcipient | null;
+}
+
+export interface SheetWorstExcipient {
+  name: string;
+  /** P(conversion), 0–1. */
+  probability: number;
+  /** The band in words, e.g. "conversion likely". */
+  words: string;
+}
+
+/** The salt × excipient matrix on the sheet (present only when excipients were chosen). */
+export interface SheetExcipientMatrix {
+  excipients: { id: string; name: string; phText: string; measuredAs: string; source: string }[];
+  rows: {
+    id: string;
+    label: string;
+    phMax: number | null;
+    cells: { percent: number | null; words: string }[];
+  }[];
+  limits: string;
 }
 
 export interface SheetSetting {
@@ -78,4 +100,6 @@ export interface SheetModel {
   solubility: { series: SolubilitySeries[]; doseLineMgPerMl: number | null } | null;
   /** One enthalpy cycle per candidate that has a thermochemical estimate, in rank order. */
   energyCycles: EnergyCycle[];
+  /** The excipients' microenvironment, when the formulation's excipients were chosen. */
+  excipientMatrix?: SheetExcipientMatrix | null;
 }

@@ -34,6 +34,11 @@ function model(label = 'Demorazine mesylate (1:1)'): SheetModel {
         },
         flags: ['-low pH_max'],
         reasons: ['large ΔpKa', 'light counter-ion, "cheap"'],
+        worstExcipient: {
+          name: 'Magnesium stearate',
+          probability: 0.987654321,
+          words: 'conversion likely',
+        },
       },
       {
         id: 'b',
@@ -130,8 +135,12 @@ describe('comparison CSV', () => {
       'Verdict',
       'Flags',
       'Reasons',
+      // added at the end so the earlier columns keep their places
+      'Worst excipient',
+      'Worst excipient P(conversion) (0-1)',
+      'Worst excipient risk',
     ]);
-    expect(csvHeader(model().columns)).toHaveLength(11);
+    expect(csvHeader(model().columns)).toHaveLength(14);
     expect(rows[1]).toEqual([
       1,
       'Demorazine mesylate (1:1)',
@@ -144,6 +153,9 @@ describe('comparison CSV', () => {
       'salt expected',
       "'-low pH_max",
       'large ΔpKa; light counter-ion, "cheap"',
+      'Magnesium stearate',
+      0.987654, // 6 significant digits
+      'conversion likely',
     ]);
     // Float noise is rounded away (6 significant digits); missing values are empty cells.
     expect(rows[2]).toEqual([
@@ -152,6 +164,9 @@ describe('comparison CSV', () => {
       0.3,
       null,
       'input',
+      null,
+      null,
+      null,
       null,
       null,
       null,

@@ -1,4 +1,4 @@
-import { celsiusToKelvin } from '@/chem';
+import { celsiusToKelvin, resolveExcipients } from '@/chem';
 import { usageError } from '../../args/cli-error';
 import { COMMAND_USAGE } from '../../command-usage';
 import { refuseTogether, type ParsedFlags } from '../../args/parse-flags';
@@ -42,6 +42,7 @@ export const SCREEN_FLAGS = {
   'keep-cocrystal-band': { type: 'switch' },
   'gastric-chloride': { type: 'number', min: 0, max: 5, unit: 'mol/L' },
   'micro-ph': { type: 'number', min: 0, max: 14 },
+  excipients: { type: 'string-list', minItems: 1, maxItems: 40, maxLength: 60 },
   'temperature-c': { type: 'number', min: 0, max: 100, unit: '°C' },
   iterations: { type: 'number', min: 1, max: 100000, integer: true },
   seed: { type: 'number', min: 0, max: 4294967295, integer: true },
@@ -114,6 +115,16 @@ export function settingsFromFlags(
   const s: Record<string, unknown> = { ...base };
   if (flags['gastric-chloride'] !== undefined) s.gastricChlorideM = flags['gastric-chloride'];
   if (flags['micro-ph'] !== undefined) s.microenvironmentPh = flags['micro-ph'];
+  // A microenvironment pH given on the command line or in the file is stated, not assumed.
+  if (s.microenvironmentPh !== undefined && s.microenvironmentPhStated === undefined)
+    s.microenvironmentPhStated = true;
+  if (flags.excipients !== undefined) {
+    const ids = flags.excipients.map((x) => x.toLowerCase());
+    resolveExcipients(ids, '--excipients'); // an unknown id is refused by name (exit 1)
+    if (new Set(ids).size !== ids.length)
+      throw usageError('--excipients', 'an excipient is given twice', 'each excipient once');
+    s.excipients = ids;
+  }
   if (flags['temperature-c'] !== undefined)
     s.temperatureK = celsiusToKelvin(flags['temperature-c']);
   return s;

@@ -8,6 +8,7 @@ import {
   getCounterIon,
   parseFormula,
   parseScreeningSettings,
+  resolveExcipients,
   parseStructure,
   sameElements,
   type CounterIon,
@@ -219,6 +220,7 @@ export async function prepareScreen(
   const custom = await buildCustomIons(opts.customIons ?? [], spec.kind);
   const ions = resolveCounterIons(spec.ions, spec.kind, name(n, 'ions'), custom.ions);
   const settings = parseScreeningSettings(opts.settings);
+  resolveExcipients(settings.excipients, 'settings.excipients');
   const skipped: { id: string; label: string; deltaPka: number }[] = [];
   const rings = structure ? structure.rings : { aromatic: 0, nonAromatic: 0 };
   const libraryCandidates = candidatesFromLibrary(

@@ -1,9 +1,18 @@
-import { rankCandidates, rankRobustness, screenCompound, type ScreenResult } from '@/chem';
+import {
+  rankCandidates,
+  rankRobustness,
+  screenCompound,
+  worstExcipient,
+  type ScreenResult,
+  type ScreenRow,
+} from '@/chem';
 import type { PreparedScreen } from './screen-input';
 
 /** Round to `digits` significant digits for the table; null, undefined and non-finite values become an empty cell. */
 const sig = (x: number | null | undefined, digits = 3) =>
   x === null || x === undefined || !Number.isFinite(x) ? '' : Number(x.toPrecision(digits));
+
+const worst = (row: ScreenRow) => worstExcipient(row.excipientRisks);
 
 /** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
 export type ScreenTableRow = ReturnType<typeof screenTable>[number];
@@ -50,6 +59,12 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       flags: row.flags.map((f) => f.text).join('; '),
       reasons: row.reasons.map((r) => r.text).join('; '),
       error: row.error ?? '',
+      // added last so every earlier column keeps its place: the chosen excipient most likely to
+      // convert the salt (empty without --excipients) and P(conversion), with its band in words
+      worst_excipient: worst(row)?.excipientId ?? '',
+      worst_excipient_p_conversion:
+        worst(row)?.probability == null ? '' : Number(worst(row)!.probability!.toFixed(3)),
+      worst_excipient_risk: worst(row) ? worst(row)!.band : '',
     };
   });
 }

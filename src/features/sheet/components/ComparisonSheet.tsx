@@ -2,6 +2,7 @@ import { CAUTION_LINES } from '@/components/Cautions';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
 import { ORIGIN_MARK, cellText, formatValue } from '../sheet-format';
+import { SheetExcipients } from './SheetExcipients';
 import type { SheetColumnGroup, SheetModel, SheetSetting } from '../sheet.types';
 import '../sheet.css';
 
@@ -209,6 +210,8 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
           />
         </section>
       ) : null}
+
+      {model.excipientMatrix ? <SheetExcipients matrix={model.excipientMatrix} /> : null}
 
       {model.energyCycles.length ? (
         <section className="sheet-block" aria-labelledby="sheet-energy">
