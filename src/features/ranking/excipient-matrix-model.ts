@@ -49,8 +49,11 @@ export function matrixRows(
       const byId = new Map(r.row.excipientRisks.map((x) => [x.excipientId, x]));
       const cells = columns.map((e): MatrixCell => {
         const risk = byId.get(e.id);
-        const p = risk?.probability ?? null;
-        const band = risk?.band ?? 'unknown';
+        // No risk yet for a just-chosen excipient: the screen is being recomputed.
+        if (!risk)
+          return { excipientId: e.id, percent: null, band: 'unknown', words: 'recomputing…' };
+        const p = risk.probability;
+        const band = risk.band;
         return {
           excipientId: e.id,
           percent: p === null ? null : Math.round(p * 100),
