@@ -1,4 +1,4 @@
-import { memo, useId, useMemo, useState } from 'react';
+import { memo, useEffect, useId, useMemo, useState } from 'react';
 import {
   EXCIPIENT_MATRIX_LIMITS,
   EXCIPIENT_ROLE_NAMES,
@@ -47,10 +47,14 @@ export const ExcipientMatrix = memo(function ExcipientMatrixView({
 }) {
   const uid = useId();
   const [busy, setBusy] = useState(false);
+  // The ticks follow the click at once; the grid follows when the screen has been recomputed.
+  const [ticked, setTicked] = useState<readonly string[]>(chosen);
+  useEffect(() => setTicked(chosen), [chosen]);
   const columns = useMemo(() => chosenInTableOrder(chosen), [chosen]);
   const matrix = useMemo(() => matrixRows(rows, columns), [rows, columns]);
   const toggle = async (id: string) => {
-    const next = chosen.includes(id) ? chosen.filter((x) => x !== id) : [...chosen, id];
+    const next = ticked.includes(id) ? ticked.filter((x) => x !== id) : [...ticked, id];
+    setTicked(next);
     setBusy(true);
     try {
       await saveExcipients(project.id, next);
@@ -133,7 +137,7 @@ export const ExcipientMatrix = memo(function ExcipientMatrixView({
                 <label key={e.id} className="inline-check" title={`${e.measuredAs}; ${e.source}`}>
                   <input
                     type="checkbox"
-                    checked={chosen.includes(e.id)}
+                    checked={ticked.includes(e.id)}
                     onChange={() => void toggle(e.id)}
                   />
                   {e.name} <span className="unit">pH {phRangeText(e)}</span>
