@@ -117,6 +117,9 @@ describe('microenvironment pH not stated', () => {
     expect(d.reason).toMatch(/would convert to the free form above pH 5\.3/);
     expect(d.reason).toMatch(/not stated, assumed 7\.0/);
     expect(d.reason).not.toMatch(/^may convert/);
+    // Hand count of the table's midpoints above 5.3: all but lactose (5.25), stearic acid (5.25),
+    // colloidal silicon dioxide (4.5), povidone (4.0), copovidone (5.0), citric and tartaric acid (2.2).
+    expect(d.reason).toMatch(/20 of 27 bundled excipients have a slurry pH above it/);
     // A stated pH keeps the firm wording.
     expect(disproportionationRisk(5.3, 7, 'base').reason).toMatch(/^may convert/);
   });
