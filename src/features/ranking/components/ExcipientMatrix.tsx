@@ -15,6 +15,7 @@ import {
   matrixRows,
   matrixSummary,
   phRangeText,
+  type MatrixRow,
 } from '../excipient-matrix-model';
 
 /** Write the chosen excipients into the project's screening block, on top of what is stored now. */
@@ -80,46 +81,7 @@ export const ExcipientMatrix = memo(function ExcipientMatrixView({
           <p id={summaryId} className="matrix-summary">
             {matrixSummary(matrix, columns)}
           </p>
-          <div className="table-scroll">
-            <table
-              className="data-table conversion-grid"
-              aria-label="Conversion risk of each salt beside each excipient"
-              aria-describedby={summaryId}
-            >
-              <thead>
-                <tr>
-                  <th scope="col">Salt (pH_max)</th>
-                  {columns.map((e) => (
-                    <th scope="col" key={e.id}>
-                      {e.name}
-                      <br />
-                      <span className="unit">pH {phRangeText(e)}</span>
-                    </th>
-                  ))}
-                  <th scope="col">Decides</th>
-                </tr>
-              </thead>
-              <tbody>
-                {matrix.map((r) => (
-                  <tr key={r.id}>
-                    <th scope="row">
-                      {r.label}{' '}
-                      <span className="unit">
-                        ({r.phMax === null ? 'no pH_max' : r.phMax.toFixed(1)})
-                      </span>
-                    </th>
-                    {r.cells.map((c) => (
-                      <td key={c.excipientId} className={`conv conv-${c.band}`}>
-                        {c.percent === null ? '—' : `${c.percent} %`}
-                        <span className="conv-word">{c.words}</span>
-                      </td>
-                    ))}
-                    <td>{r.worst ? `${r.worst.name} (${r.worst.percent} %)` : '—'}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <ConversionGrid matrix={matrix} columns={columns} summaryId={summaryId} />
         </>
       ) : (
         <p>
@@ -127,32 +89,106 @@ export const ExcipientMatrix = memo(function ExcipientMatrixView({
           (an assumption until you state it).
         </p>
       )}
-      <details className="excipient-chooser" open={columns.length === 0 ? true : undefined}>
-        <summary>Choose the formulation’s excipients ({columns.length} chosen)</summary>
-        <div className="excipient-roles">
-          {ROLES.map((role) => (
-            <fieldset key={role} disabled={busy}>
-              <legend>{EXCIPIENT_ROLE_NAMES[role]}</legend>
-              {EXCIPIENTS.filter((e) => e.role === role).map((e) => (
-                <label key={e.id} className="inline-check" title={`${e.measuredAs}; ${e.source}`}>
-                  <input
-                    type="checkbox"
-                    checked={ticked.includes(e.id)}
-                    onChange={() => void toggle(e.id)}
-                  />
-                  {e.name} <span className="unit">pH {phRangeText(e)}</span>
-                </label>
-              ))}
-            </fieldset>
-          ))}
-        </div>
-        <p className="muted">
-          Slurry pH from the Handbook of Pharmaceutical Excipients (6th ed., 2009) and papers on
-          excipient-induced disproportionation, mostly recalled rather than re-read (“from memory”,
-          shown on hover); a single published value is widened to ±0.5 pH. Check them against your
-          lots.
-        </p>
-      </details>
+      <ExcipientChooser
+        ticked={ticked}
+        busy={busy}
+        count={columns.length}
+        onToggle={(id) => void toggle(id)}
+      />
     </section>
   );
 });
+
+function ConversionGrid({
+  matrix,
+  columns,
+  summaryId,
+}: {
+  matrix: readonly MatrixRow[];
+  columns: readonly ExcipientRecord[];
+  summaryId: string;
+}) {
+  return (
+    <div className="table-scroll">
+      <table
+        className="data-table conversion-grid"
+        aria-label="Conversion risk of each salt beside each excipient"
+        aria-describedby={summaryId}
+      >
+        <thead>
+          <tr>
+            <th scope="col">Salt (pH_max)</th>
+            {columns.map((e) => (
+              <th scope="col" key={e.id}>
+                {e.name}
+                <br />
+                <span className="unit">pH {phRangeText(e)}</span>
+              </th>
+            ))}
+            <th scope="col">Decides</th>
+          </tr>
+        </thead>
+        <tbody>
+          {matrix.map((r) => (
+            <tr key={r.id}>
+              <th scope="row">
+                {r.label}{' '}
+                <span className="unit">
+                  ({r.phMax === null ? 'no pH_max' : r.phMax.toFixed(1)})
+                </span>
+              </th>
+              {r.cells.map((c) => (
+                <td key={c.excipientId} className={`conv conv-${c.band}`}>
+                  {c.percent === null ? '—' : `${c.percent} %`}
+                  <span className="conv-word">{c.words}</span>
+                </td>
+              ))}
+              <td>{r.worst ? `${r.worst.name} (${r.worst.percent} %)` : '—'}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+function ExcipientChooser({
+  ticked,
+  busy,
+  count,
+  onToggle,
+}: {
+  ticked: readonly string[];
+  busy: boolean;
+  count: number;
+  onToggle: (id: string) => void;
+}) {
+  return (
+    <details className="excipient-chooser" open={count === 0 ? true : undefined}>
+      <summary>Choose the formulation’s excipients ({count} chosen)</summary>
+      <div className="excipient-roles">
+        {ROLES.map((role) => (
+          <fieldset key={role} disabled={busy}>
+            <legend>{EXCIPIENT_ROLE_NAMES[role]}</legend>
+            {EXCIPIENTS.filter((e) => e.role === role).map((e) => (
+              <label key={e.id} className="inline-check" title={`${e.measuredAs}; ${e.source}`}>
+                <input
+                  type="checkbox"
+                  checked={ticked.includes(e.id)}
+                  onChange={() => onToggle(e.id)}
+                />
+                {e.name} <span className="unit">pH {phRangeText(e)}</span>
+              </label>
+            ))}
+          </fieldset>
+        ))}
+      </div>
+      <p className="muted">
+        Slurry pH from the Handbook of Pharmaceutical Excipients (6th ed., 2009) and papers on
+        excipient-induced disproportionation, mostly recalled rather than re-read (“from memory”,
+        shown on hover); a single published value is widened to ±0.5 pH. Check them against your
+        lots.
+      </p>
+    </details>
+  );
+}
