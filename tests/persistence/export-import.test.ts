@@ -78,7 +78,8 @@ async function seed() {
   await projectsRepo.updateSettings(p.id, {
     ...p.settings,
     microenvironmentPh: 6.2,
-    extra: { weights: { dose: 3 } },
+    microenvironmentPhStated: true,
+    extra: { weights: { dose: 3 }, screening: { excipients: ['magnesium-stearate', 'mannitol'] } },
   });
   const own = await customIonsRepo.saveInHouse(
     inHouseIon(customIonsRepo.newInHouseId(), 'In-house ion'),
