@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { BASE_URL, openSession, type Session } from './support/browser';
 import { area } from './support/navigation';
+import { axeViolations } from './support/axe';
 
 let s: Session;
 beforeEach(async () => {
@@ -31,6 +32,8 @@ describe('excipients and biorelevant media in the browser (production build)', (
     }
     expect(text).toMatch(/conversion likely/);
     await expect(panel.textContent()).resolves.toMatch(/Conversion likely: .*Magnesium stearate/);
+    // The grid and the presets pass axe-core's WCAG 2.x rules (no serious or critical violation).
+    expect(await axeViolations(page)).toEqual([]);
 
     await page.getByRole('button', { name: 'Add FaSSIF (pH 6.5)' }).click();
     const media = page.getByRole('table', { name: 'Solubility in your media' });
