@@ -3,6 +3,7 @@ import {
   EXCIPIENTS,
   excipientById,
   excipientPhEstimate,
+  probabilityPercentText,
   worstExcipient,
   type ExcipientRecord,
   type ExcipientRisk,
@@ -11,8 +12,8 @@ import type { DisplayRow } from './ranking-rows';
 
 export interface MatrixCell {
   excipientId: string;
-  /** P(conversion) in %, rounded; null when the salt has no pH_max. */
-  percent: number | null;
+  /** P(conversion) in per cent as shown ("<1 %", "37 %", ">99 %"); null when not judged. */
+  percent: string | null;
   band: ExcipientRisk['band'];
   words: string;
 }
@@ -22,7 +23,7 @@ export interface MatrixRow {
   label: string;
   phMax: number | null;
   cells: MatrixCell[];
-  worst: { name: string; percent: number; band: ExcipientRisk['band'] } | null;
+  worst: { name: string; percent: string; band: ExcipientRisk['band'] } | null;
 }
 
 /** The chosen excipients the table knows, in table order (stable columns whatever the click order). */
@@ -56,7 +57,7 @@ export function matrixRows(
         const band = risk.band;
         return {
           excipientId: e.id,
-          percent: p === null ? null : Math.round(p * 100),
+          percent: p === null ? null : probabilityPercentText(p),
           band,
           words: CONVERSION_BAND_WORDS[band],
         };
@@ -69,7 +70,11 @@ export function matrixRows(
         cells,
         worst:
           w && w.probability !== null
-            ? { name: w.excipientName, percent: Math.round(w.probability * 100), band: w.band }
+            ? {
+                name: w.excipientName,
+                percent: probabilityPercentText(w.probability),
+                band: w.band,
+              }
             : null,
       };
     });

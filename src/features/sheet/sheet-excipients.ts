@@ -3,6 +3,7 @@ import {
   EXCIPIENT_MATRIX_LIMITS,
   EXCIPIENTS,
   SINGLE_VALUE_HALF_WIDTH_PH,
+  probabilityPercentText,
   worstExcipient,
   type ScreenRow,
 } from '@/chem';
@@ -54,7 +55,7 @@ export function sheetExcipientMatrix(
             const x = byId.get(e.id);
             const p = x?.probability ?? null;
             return {
-              percent: p === null ? null : Math.round(p * 100),
+              percent: p === null ? null : probabilityPercentText(p),
               words: CONVERSION_BAND_WORDS[x?.band ?? 'unknown'],
             };
           }),

@@ -64,7 +64,7 @@ export interface SheetExcipientMatrix {
     id: string;
     label: string;
     phMax: number | null;
-    cells: { percent: number | null; words: string }[];
+    cells: { percent: string | null; words: string }[];
   }[];
   limits: string;
 }

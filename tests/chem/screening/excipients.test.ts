@@ -10,6 +10,7 @@ import {
   excipientRisks,
   getCounterIon,
   normalCdf,
+  probabilityPercentText,
   resolveExcipients,
   screenCompound,
   type ScreeningCandidate,
@@ -74,6 +75,12 @@ describe('P(conversion) of a salt beside an excipient', () => {
     expect(conversionProbability(5, 0, 6, 0, 'base')).toBe(1);
     expect(conversionProbability(5, 0, 4, 0, 'base')).toBe(0);
     expect(conversionProbability(5, 0, 5, 0, 'base')).toBe(0.5);
+  });
+
+  it('never shows a normal tail as 0 % or 100 %', () => {
+    expect(probabilityPercentText(0.9996)).toBe('>99 %');
+    expect(probabilityPercentText(3.4e-5)).toBe('<1 %');
+    expect(probabilityPercentText(0.84461)).toBe('84 %');
   });
 
   it('bands P into words at 0.1 and 0.5 (our own limits)', () => {

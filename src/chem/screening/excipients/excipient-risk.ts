@@ -28,6 +28,16 @@ export const CONVERSION_BAND_WORDS: Record<ConversionBand | 'unknown', string> =
   unlikely: 'conversion unlikely',
   unknown: 'not judged (no pH_max)',
 };
+/**
+ * A probability as per cent for display: never "0 %" or "100 %" (the normal tails never reach them),
+ * "<1 %" and ">99 %" instead.
+ */
+export function probabilityPercentText(p: number): string {
+  if (p < 0.005) return '<1 %';
+  if (p > 0.995) return '>99 %';
+  return `${Math.round(p * 100)} %`;
+}
+
 /** P from which a pairing is "possible" and from which it is "likely" (our own choice). */
 export const CONVERSION_BAND_LIMITS = { possibleFrom: 0.1, likelyFrom: 0.5 } as const;
 

@@ -139,11 +139,11 @@ function ConversionGrid({
               </th>
               {r.cells.map((c) => (
                 <td key={c.excipientId} className={`conv conv-${c.band}`}>
-                  {c.percent === null ? '—' : `${c.percent} %`}
+                  {c.percent ?? '—'}
                   <span className="conv-word">{c.words}</span>
                 </td>
               ))}
-              <td>{r.worst ? `${r.worst.name} (${r.worst.percent} %)` : '—'}</td>
+              <td>{r.worst ? `${r.worst.name} (${r.worst.percent})` : '—'}</td>
             </tr>
           ))}
         </tbody>
@@ -163,8 +163,14 @@ function ExcipientChooser({
   count: number;
   onToggle: (id: string) => void;
 }) {
+  // Open while nothing is chosen; then the user's own open/close is kept (ticking must not fold it).
+  const [open, setOpen] = useState(count === 0);
   return (
-    <details className="excipient-chooser" open={count === 0 ? true : undefined}>
+    <details
+      className="excipient-chooser"
+      open={open}
+      onToggle={(e) => setOpen(e.currentTarget.open)}
+    >
       <summary>Choose the formulation’s excipients ({count} chosen)</summary>
       <div className="excipient-roles">
         {ROLES.map((role) => (

@@ -33,7 +33,7 @@ export function SheetExcipients({ matrix }: { matrix: SheetExcipientMatrix }) {
               </th>
               {r.cells.map((c, k) => (
                 <td key={matrix.excipients[k]!.id}>
-                  {c.percent === null ? '—' : `${c.percent} %`} — {c.words}
+                  {c.percent ?? '—'} — {c.words}
                 </td>
               ))}
             </tr>
