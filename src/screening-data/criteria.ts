@@ -13,7 +13,8 @@ export const CRITERION_TEXT: Record<CriterionKey, { label: string; means: string
   },
   disproportionation: {
     label: 'Stays a salt in the tablet',
-    means: 'pH_max on the salt side of the microenvironment pH (stated, assumed, or the chosen excipients’)',
+    means:
+      'pH_max on the salt side of the microenvironment pH (stated, assumed, or the chosen excipients’)',
   },
   massCost: {
     label: 'Tablet mass',
