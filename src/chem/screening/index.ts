@@ -25,3 +25,4 @@ export * from './thermo-link';
 export * from './screen';
 export * from './library-candidates';
 export * from './salt-solubility';
+export * from './measure-next';

@@ -48,22 +48,98 @@ export interface RobustnessResult {
   medianRank: number;
 }
 
+/**
+ * One iteration's draw: the shared shifts and each candidate's shift of its salt-limited log₁₀
+ * solubility (its own spread plus, when anchored, the shared S₀ shift), decades.
+ */
+export interface RobustnessDraw {
+  dPka: number;
+  dS0: number;
+  /** Per live candidate, in the order of the rows given to {@link drawRobustnessShifts}. */
+  saltShift: Float64Array;
+}
+
+/** The generator the draws take their normals from (a seeded one: createSeededRandom). */
+export interface NormalSource {
+  normal(): number;
+}
+
+/**
+ * Draw one iteration of the Monte Carlo into `out` (the one place that knows what is drawn and in
+ * which order; rankRobustness and the value-of-information loop of measure-next/ both use it).
+ */
+export function drawRobustnessShifts(
+  rng: NormalSource,
+  live: readonly RobustnessRow[],
+  shared: RobustnessShared,
+  out: RobustnessDraw,
+): void {
+  out.dPka = rng.normal() * shared.drugPkaSigma;
+  out.dS0 = rng.normal() * shared.log10IntrinsicSigma;
+  for (let i = 0; i < live.length; i++) {
+    const r = live[i]!;
+    const ds = rng.normal() * r.saltLog10Sigma;
+    out.saltShift[i] = ds + (r.saltAnchoredOnIntrinsic ? out.dS0 : 0);
+  }
+}
+
+/**
+ * The weighted score of one candidate under a draw's shared shifts and its own salt shift
+ * (linearised as described above).
+ */
+export function scoreUnderShifts(
+  r: RobustnessRow,
+  weights: ScreeningWeights,
+  shared: RobustnessShared,
+  dPka: number,
+  dS0: number,
+  saltShift: number,
+): number {
+  const sign = shared.drugKind === 'base' ? 1 : -1;
+  const c = r.criteria;
+  const worstShift = r.worstSolid === 'salt' ? saltShift : r.worstSolid === 'free-form' ? dS0 : 0;
+  const gastricShift =
+    r.gastricSolid === 'salt' ? saltShift : r.gastricSolid === 'free-form' ? dS0 : 0;
+  // margin = pH_max − micro-pH for a base, micro-pH − pH_max for an acid.
+  const dMargin = sign * dPka + dS0 - saltShift;
+  // Field by field (not a spread): this runs a million times in a value-of-information run.
+  const perturbed: CriterionInputs = {
+    saltProbability:
+      r.deltaPka === null
+        ? c.saltProbability
+        : saltProbabilityFor(r.deltaPka + sign * dPka, shared.bands ?? DEFAULT_DELTA_PKA_BANDS),
+    log10WorstDoseNumber:
+      c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - worstShift,
+    log10GastricDoseNumber:
+      c.log10GastricDoseNumber === null ? null : c.log10GastricDoseNumber - gastricShift,
+    phMaxMarginPh: c.phMaxMarginPh === null ? null : c.phMaxMarginPh + dMargin,
+    activeFraction: c.activeFraction,
+    acceptabilityClass: c.acceptabilityClass,
+    hygroscopicity: c.hygroscopicity,
+  };
+  return weightedScore(criterionScores(perturbed), weights);
+}
+
+/** Check an iteration count (an integer from 1 to `max`), naming the field when refused. */
+export function requireIterations(field: string, n: number, max = 1e6): number {
+  if (!Number.isInteger(n) || n < 1 || n > max) {
+    throw new ChemInputError(
+      field,
+      `${n} is not allowed`,
+      `an integer from 1 to ${max.toLocaleString('en').replace(/,/g, ' ')}`,
+    );
+  }
+  return n;
+}
+
 export function rankRobustness(
   rows: readonly RobustnessRow[],
   weights: ScreeningWeights,
   shared: RobustnessShared,
   opts: { iterations?: number; seed?: number } = {},
 ): RobustnessResult[] {
-  const iterations = opts.iterations ?? 1000;
-  if (!Number.isInteger(iterations) || iterations < 1 || iterations > 1e6) {
-    throw new ChemInputError(
-      'iterations',
-      `${iterations} is not allowed`,
-      'an integer from 1 to 1 000 000',
-    );
-  }
+  const iterations = requireIterations('iterations', opts.iterations ?? 1000);
   const rng = createSeededRandom(opts.seed ?? 1);
-  const bands = shared.bands ?? DEFAULT_DELTA_PKA_BANDS;
   const live = rows.filter((r) => !r.error);
   const n = live.length;
   const top3 = new Float64Array(n);
@@ -71,34 +147,18 @@ export function rankRobustness(
   const rankCounts = live.map(() => new Uint32Array(n + 1));
   const scores = new Float64Array(n);
   const order = Array.from({ length: n }, (_, i) => i);
-  const sign = shared.drugKind === 'base' ? 1 : -1;
+  const draw: RobustnessDraw = { dPka: 0, dS0: 0, saltShift: new Float64Array(n) };
   for (let it = 0; it < iterations; it++) {
-    const dPka = rng.normal() * shared.drugPkaSigma;
-    const dS0 = rng.normal() * shared.log10IntrinsicSigma;
+    drawRobustnessShifts(rng, live, shared, draw);
     for (let i = 0; i < n; i++) {
-      const r = live[i]!;
-      const ds = rng.normal() * r.saltLog10Sigma;
-      const saltShift = ds + (r.saltAnchoredOnIntrinsic ? dS0 : 0);
-      const c = r.criteria;
-      const shiftFor = (solid: 'salt' | 'free-form' | null) =>
-        solid === 'salt' ? saltShift : solid === 'free-form' ? dS0 : 0;
-      // margin = pH_max − micro-pH for a base, micro-pH − pH_max for an acid.
-      const dMargin = sign * dPka + dS0 - saltShift;
-      const perturbed: CriterionInputs = {
-        ...c,
-        saltProbability:
-          r.deltaPka === null
-            ? c.saltProbability
-            : saltProbabilityFor(r.deltaPka + sign * dPka, bands),
-        log10WorstDoseNumber:
-          c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - shiftFor(r.worstSolid),
-        log10GastricDoseNumber:
-          c.log10GastricDoseNumber === null
-            ? null
-            : c.log10GastricDoseNumber - shiftFor(r.gastricSolid),
-        phMaxMarginPh: c.phMaxMarginPh === null ? null : c.phMaxMarginPh + dMargin,
-      };
-      scores[i] = weightedScore(criterionScores(perturbed), weights);
+      scores[i] = scoreUnderShifts(
+        live[i]!,
+        weights,
+        shared,
+        draw.dPka,
+        draw.dS0,
+        draw.saltShift[i]!,
+      );
     }
     order.sort((a, b) => scores[b]! - scores[a]! || a - b);
     for (let k = 0; k < n; k++) {
