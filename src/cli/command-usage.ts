@@ -27,6 +27,8 @@ export const COMMAND_USAGE = {
        saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
                   [--errors file] [--out file] [--ions …] [--iterations N] [settings flags as above]
   --batch runs the P(top 3) Monte Carlo only when --iterations is given (the column is empty otherwise).
+  --format json adds "measure_next": [{"counter_ion","measurement","value"}], the bench measurement that
+  would most reduce the doubt about first place first (same Monte Carlo: --iterations draws, --seed).
   compound.json may also hold "customIons": [{"id","smiles","charge","pKas"}] (counter-ions outside the
   library, named in "ions" by id) and "bench": {"<ion id>": {"meltingPointC", "fusionEnthalpyKJPerMol",
   "solubilityMgPerMl"}} (that ion's 1:1 salt, or its only salt form).

@@ -22,6 +22,7 @@ import {
   type CompoundSpec,
 } from './screen-input';
 import { runScreen } from './screen-table';
+import { measureNextEntries } from './screen-measure-next';
 import { screenCsv, screenJson } from './screen-writers';
 
 /**
@@ -106,7 +107,13 @@ export const screenCommand: CliCommand = defineCommand('screen', {
     const { res, table } = runScreen(prepared, { iterations, seed, top: flags.top });
     const text =
       flags.format === 'json'
-        ? screenJson(res, table, prepared.skipped, { iterations, seed })
+        ? screenJson(
+            res,
+            table,
+            prepared.skipped,
+            { iterations, seed },
+            measureNextEntries(res, prepared.settings.weights, { iterations, seed }),
+          )
         : screenCsv(table, prepared.skipped);
     if (flags.out !== undefined) {
       await writeFileAtomic(flags.out, text + '\n');

@@ -2,6 +2,7 @@ import Papa from 'papaparse';
 import { safeCsvCell, type ScreenResult } from '@/chem';
 import { SCREENING_CAUTIONS } from '../../output/cautions';
 import type { ScreenTableRow } from './screen-table';
+import type { MeasureNextEntry } from './screen-measure-next';
 
 /** The two output formats of one screen: CSV with the cautions as # lines, or one JSON document. */
 
@@ -30,6 +31,7 @@ export function screenJson(
   table: readonly ScreenTableRow[],
   skipped: Skipped,
   robustness: { iterations: number; seed: number },
+  measureNext?: readonly MeasureNextEntry[],
 ): string {
   return JSON.stringify(
     {
@@ -55,6 +57,7 @@ export function screenJson(
       },
       assumptions: res.assumptions,
       rows: table,
+      ...(measureNext ? { measure_next: measureNext } : {}),
       cautions: SCREENING_CAUTIONS,
     },
     null,
