@@ -79,6 +79,8 @@ export interface MeasureNextOptions {
   seed?: number;
   /** Variance the fusion path removes, decades² (default: from the shipped model). */
   fusionExplainedVariance?: number;
+  /** Called after each candidate's measurements are valued (done, total). */
+  onProgress?: (done: number, total: number) => void;
 }
 
 const KINDS: readonly BenchMeasurement[] = ['solubility', 'melting-point'];
@@ -176,6 +178,7 @@ export function measureNext(
         note: gain > 0 ? null : variance > 0 ? 'fusion-path-not-validated' : 'no-uncertainty',
       });
     }
+    opts.onProgress?.(j + 1, live.length);
   });
   const order = new Map(live.map((r, i) => [r.id, i]));
   result.items.sort(

@@ -19,6 +19,7 @@ import { displayRows } from '../ranking-rows';
 import { RankingTable } from './RankingTable';
 import { ScreeningConditions } from './ScreeningConditions';
 import { SolubilityPanel } from './SolubilityPanel';
+import { MeasureNextPanel } from './MeasureNextPanel';
 import { WeightSliders } from './WeightSliders';
 import '../ranking.css';
 
@@ -255,6 +256,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
             rows={mediaView.rows}
           />
           <RobustnessPanel robustness={robustness} labels={labels} />
+          <MeasureNextPanel data={data} weights={deferredWeights} labels={labels} />
           <SolubilityPanel
             data={data}
             labels={labels}

@@ -1,0 +1,111 @@
+import { useEffect, useRef, useState } from 'react';
+import type {
+  MeasureNextResult,
+  MeasureNextStatus,
+  RobustnessRow,
+  RobustnessShared,
+  ScreeningWeights,
+} from '@/chem';
+import {
+  runMeasureNext,
+  type MeasureNextMessage,
+  type MeasureNextRequest,
+} from './measure-next-protocol';
+import { ROBUSTNESS_SEED } from './use-robustness';
+
+export interface MeasureNextState {
+  status: 'idle' | 'running' | 'done' | 'error';
+  /** 0–1 while running. */
+  progress: number;
+  result?: MeasureNextResult;
+  /** Time the worker took for the last result, ms. */
+  ms?: number;
+  error?: string;
+}
+
+/** Kept Monte Carlo draws and outcome strata per run; the seed is the robustness run's. */
+export const MEASURE_NEXT_ITERATIONS = 1000;
+export const MEASURE_NEXT_OUTCOMES = 16;
+/** Wait this long after the last change before starting a run, ms (short: the list should follow). */
+const SETTLE_MS = 120;
+
+/**
+ * "Measure next" in its own Web Worker, restarted when the screen rows, the bench status or the
+ * weights change. A run still going when the inputs change is abandoned (the worker is ended and a
+ * fresh one started), so a stale computation never delays the new one. Without Worker (tests) the
+ * same function runs on the main thread after the settle delay.
+ */
+export function useMeasureNext(
+  rows: RobustnessRow[] | undefined,
+  status: MeasureNextStatus[] | undefined,
+  weights: ScreeningWeights,
+  shared: RobustnessShared | undefined,
+): MeasureNextState {
+  const [state, setState] = useState<MeasureNextState>({ status: 'idle', progress: 0 });
+  const workerRef = useRef<Worker | null>(null);
+  const busyRef = useRef(false);
+  const runRef = useRef(0);
+
+  useEffect(() => () => workerRef.current?.terminate(), []);
+
+  useEffect(() => {
+    if (!rows || !status || !shared || rows.length === 0) {
+      setState({ status: 'idle', progress: 0 });
+      return;
+    }
+    const runId = ++runRef.current;
+    const req: MeasureNextRequest = {
+      runId,
+      rows,
+      status,
+      weights,
+      shared,
+      iterations: MEASURE_NEXT_ITERATIONS,
+      outcomes: MEASURE_NEXT_OUTCOMES,
+      seed: ROBUSTNESS_SEED,
+    };
+    setState((s) => (s.status === 'running' ? s : { ...s, status: 'running', progress: 0 }));
+    let cancelled = false;
+    const timer = setTimeout(() => {
+      if (typeof Worker === 'undefined') {
+        try {
+          const { result, ms } = runMeasureNext(req, undefined, () => performance.now());
+          if (!cancelled) setState({ status: 'done', progress: 1, result, ms });
+        } catch (err) {
+          if (!cancelled) setState({ status: 'error', progress: 0, error: String(err) });
+        }
+        return;
+      }
+      if (workerRef.current && busyRef.current) {
+        workerRef.current.terminate();
+        workerRef.current = null;
+      }
+      const worker = (workerRef.current ??= new Worker(
+        new URL('./measure-next.worker.ts', import.meta.url),
+        { type: 'module' },
+      ));
+      worker.onmessage = (e: MessageEvent<MeasureNextMessage>) => {
+        const m = e.data;
+        if (m.type !== 'progress') busyRef.current = false;
+        if (m.runId !== runRef.current) return;
+        if (m.type === 'progress')
+          setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
+        else if (m.type === 'result')
+          setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
+        else setState({ status: 'error', progress: 0, error: m.message });
+      };
+      worker.onerror = (e) => {
+        busyRef.current = false;
+        setState({ status: 'error', progress: 0, error: e.message || 'The worker failed' });
+      };
+      busyRef.current = true;
+      worker.postMessage(req);
+    }, SETTLE_MS);
+    return () => {
+      cancelled = true;
+      clearTimeout(timer);
+    };
+  }, [rows, status, weights, shared]);
+
+  return state;
+}
