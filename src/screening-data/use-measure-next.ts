@@ -26,7 +26,7 @@ export interface MeasureNextState {
 /** Kept Monte Carlo draws and outcome strata per run; the seed is the robustness run's. */
 export const MEASURE_NEXT_ITERATIONS = 1000;
 export const MEASURE_NEXT_OUTCOMES = 16;
-/** Wait this long after the last change before starting a run, ms (short: the list should follow). */
+/** Wait this long after the last change before starting a run (not the first), ms. */
 const SETTLE_MS = 120;
 
 /**
@@ -35,6 +35,9 @@ const SETTLE_MS = 120;
  * fresh one started), so a stale computation never delays the new one. Without Worker (tests) the
  * same function runs on the main thread after the settle delay.
  */
+const spawn = () =>
+  new Worker(new URL('./measure-next.worker.ts', import.meta.url), { type: 'module' });
+
 export function useMeasureNext(
   rows: RobustnessRow[] | undefined,
   status: MeasureNextStatus[] | undefined,
@@ -46,7 +49,14 @@ export function useMeasureNext(
   const busyRef = useRef(false);
   const runRef = useRef(0);
 
-  useEffect(() => () => workerRef.current?.terminate(), []);
+  // Start the worker at once (its module loads while the screen is still computing).
+  useEffect(() => {
+    if (typeof Worker !== 'undefined' && !workerRef.current) workerRef.current = spawn();
+    return () => {
+      workerRef.current?.terminate();
+      workerRef.current = null;
+    };
+  }, []);
 
   useEffect(() => {
     if (!rows || !status || !shared || rows.length === 0) {
@@ -54,6 +64,7 @@ export function useMeasureNext(
       return;
     }
     const runId = ++runRef.current;
+    const first = runId === 1;
     const req: MeasureNextRequest = {
       runId,
       rows,
@@ -66,41 +77,41 @@ export function useMeasureNext(
     };
     setState((s) => (s.status === 'running' ? s : { ...s, status: 'running', progress: 0 }));
     let cancelled = false;
-    const timer = setTimeout(() => {
-      if (typeof Worker === 'undefined') {
-        try {
-          const { result, ms } = runMeasureNext(req, undefined, () => performance.now());
-          if (!cancelled) setState({ status: 'done', progress: 1, result, ms });
-        } catch (err) {
-          if (!cancelled) setState({ status: 'error', progress: 0, error: String(err) });
+    const timer = setTimeout(
+      () => {
+        if (typeof Worker === 'undefined') {
+          try {
+            const { result, ms } = runMeasureNext(req, undefined, () => performance.now());
+            if (!cancelled) setState({ status: 'done', progress: 1, result, ms });
+          } catch (err) {
+            if (!cancelled) setState({ status: 'error', progress: 0, error: String(err) });
+          }
+          return;
         }
-        return;
-      }
-      if (workerRef.current && busyRef.current) {
-        workerRef.current.terminate();
-        workerRef.current = null;
-      }
-      const worker = (workerRef.current ??= new Worker(
-        new URL('./measure-next.worker.ts', import.meta.url),
-        { type: 'module' },
-      ));
-      worker.onmessage = (e: MessageEvent<MeasureNextMessage>) => {
-        const m = e.data;
-        if (m.type !== 'progress') busyRef.current = false;
-        if (m.runId !== runRef.current) return;
-        if (m.type === 'progress')
-          setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
-        else if (m.type === 'result')
-          setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
-        else setState({ status: 'error', progress: 0, error: m.message });
-      };
-      worker.onerror = (e) => {
-        busyRef.current = false;
-        setState({ status: 'error', progress: 0, error: e.message || 'The worker failed' });
-      };
-      busyRef.current = true;
-      worker.postMessage(req);
-    }, SETTLE_MS);
+        if (workerRef.current && busyRef.current) {
+          workerRef.current.terminate();
+          workerRef.current = null;
+        }
+        const worker = (workerRef.current ??= spawn());
+        worker.onmessage = (e: MessageEvent<MeasureNextMessage>) => {
+          const m = e.data;
+          if (m.type !== 'progress') busyRef.current = false;
+          if (m.runId !== runRef.current) return;
+          if (m.type === 'progress')
+            setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
+          else if (m.type === 'result')
+            setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
+          else setState({ status: 'error', progress: 0, error: m.message });
+        };
+        worker.onerror = (e) => {
+          busyRef.current = false;
+          setState({ status: 'error', progress: 0, error: e.message || 'The worker failed' });
+        };
+        busyRef.current = true;
+        worker.postMessage(req);
+      },
+      first ? 0 : SETTLE_MS,
+    );
     return () => {
       cancelled = true;
       clearTimeout(timer);

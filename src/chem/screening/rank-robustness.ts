@@ -1,4 +1,4 @@
-import { createSeededRandom } from '../numerics/prng';
+import { createSeededRandom, type SeededRandom } from '../numerics/prng';
 import { ChemInputError } from '../result';
 import { DEFAULT_DELTA_PKA_BANDS, saltProbabilityFor, type DeltaPkaBands } from './delta-pka';
 import { criterionScores, weightedScore, type CriterionInputs } from './ranking';
@@ -15,6 +15,9 @@ import type { ScreeningWeights } from './settings';
  *   salt-limited ones whose K_sp is anchored on S₀;
  * - per candidate, an independent shift of its salt-limited log solubility (the K_sp estimate's own
  *   spread, or the measurement's) — moves its salt-limited dose numbers and its pH_max.
+ * The draw is one function, {@link drawRobustnessPerturbation}, and its effect on a candidate's
+ * criteria another, {@link perturbedCriteria}, so other Monte Carlo users (measure-next/) sample
+ * exactly the same way.
  * Linearised propagation (our simplification): a dose number moves by −Δlog S on the branch that
  * limits it at the worst pH; pH_max moves by Δ(pKa) + Δ(log S₀) − Δ(log s_salt) for a base and by
  * Δ(pKa) − Δ(log S₀) + Δ(log s_salt) for an acid. Criteria without an uncertainty (mass cost, acceptability, measured hygroscopicity) stay fixed.
@@ -48,66 +51,66 @@ export interface RobustnessResult {
   medianRank: number;
 }
 
-/**
- * One iteration's draw: the shared shifts and each candidate's shift of its salt-limited log₁₀
- * solubility (its own spread plus, when anchored, the shared S₀ shift), decades.
- */
+/** One Monte Carlo draw of every uncertain input the criteria rest on. */
 export interface RobustnessDraw {
+  /** Shift of the drug's pKa (shared by every candidate). */
   dPka: number;
-  dS0: number;
-  /** Per live candidate, in the order of the rows given to {@link drawRobustnessShifts}. */
+  /** Shift of log₁₀ S₀ (shared). */
+  dLog10S0: number;
+  /** Per row (same order as the rows drawn for): total shift of its salt-limited log₁₀ solubility. */
   saltShift: Float64Array;
 }
 
-/** The generator the draws take their normals from (a seeded one: createSeededRandom). */
-export interface NormalSource {
-  normal(): number;
-}
-
 /**
- * Draw one iteration of the Monte Carlo into `out` (the one place that knows what is drawn and in
- * which order; rankRobustness and the value-of-information loop of measure-next/ both use it).
+ * Draw one perturbation for the given rows: the pKa shift, the S₀ shift, then each row's own salt
+ * shift (plus the S₀ shift when the estimate is anchored on S₀). Consumes 2 + rows.length normal
+ * deviates, in that order. `out` may be passed to reuse its array.
  */
-export function drawRobustnessShifts(
-  rng: NormalSource,
-  live: readonly RobustnessRow[],
+export function drawRobustnessPerturbation(
+  rows: readonly RobustnessRow[],
   shared: RobustnessShared,
-  out: RobustnessDraw,
-): void {
-  out.dPka = rng.normal() * shared.drugPkaSigma;
-  out.dS0 = rng.normal() * shared.log10IntrinsicSigma;
-  for (let i = 0; i < live.length; i++) {
-    const r = live[i]!;
-    const ds = rng.normal() * r.saltLog10Sigma;
-    out.saltShift[i] = ds + (r.saltAnchoredOnIntrinsic ? out.dS0 : 0);
+  rng: SeededRandom,
+  out?: RobustnessDraw,
+): RobustnessDraw {
+  const d: RobustnessDraw = out ?? {
+    dPka: 0,
+    dLog10S0: 0,
+    saltShift: new Float64Array(rows.length),
+  };
+  d.dPka = rng.normal() * shared.drugPkaSigma;
+  d.dLog10S0 = rng.normal() * shared.log10IntrinsicSigma;
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i]!;
+    d.saltShift[i] = rng.normal() * r.saltLog10Sigma + (r.saltAnchoredOnIntrinsic ? d.dLog10S0 : 0);
   }
+  return d;
 }
 
-/**
- * The weighted score of one candidate under a draw's shared shifts and its own salt shift
- * (linearised as described above).
- */
-export function scoreUnderShifts(
+/** A row's criteria under one draw (linearised as described above); `i` is its index in the draw. */
+export function perturbedCriteria(
   r: RobustnessRow,
-  weights: ScreeningWeights,
+  draw: RobustnessDraw,
+  i: number,
   shared: RobustnessShared,
-  dPka: number,
-  dS0: number,
-  saltShift: number,
-): number {
+): CriterionInputs {
   const sign = shared.drugKind === 'base' ? 1 : -1;
+  const saltShift = draw.saltShift[i]!;
+  const dS0 = draw.dLog10S0;
   const c = r.criteria;
   const worstShift = r.worstSolid === 'salt' ? saltShift : r.worstSolid === 'free-form' ? dS0 : 0;
   const gastricShift =
     r.gastricSolid === 'salt' ? saltShift : r.gastricSolid === 'free-form' ? dS0 : 0;
   // margin = pH_max − micro-pH for a base, micro-pH − pH_max for an acid.
-  const dMargin = sign * dPka + dS0 - saltShift;
-  // Field by field (not a spread): this runs a million times in a value-of-information run.
-  const perturbed: CriterionInputs = {
+  const dMargin = sign * draw.dPka + dS0 - saltShift;
+  // Field by field (not a spread): this runs about a million times in a measure-next run.
+  return {
     saltProbability:
       r.deltaPka === null
         ? c.saltProbability
-        : saltProbabilityFor(r.deltaPka + sign * dPka, shared.bands ?? DEFAULT_DELTA_PKA_BANDS),
+        : saltProbabilityFor(
+            r.deltaPka + sign * draw.dPka,
+            shared.bands ?? DEFAULT_DELTA_PKA_BANDS,
+          ),
     log10WorstDoseNumber:
       c.log10WorstDoseNumber === null ? null : c.log10WorstDoseNumber - worstShift,
     log10GastricDoseNumber:
@@ -117,19 +120,6 @@ export function scoreUnderShifts(
     acceptabilityClass: c.acceptabilityClass,
     hygroscopicity: c.hygroscopicity,
   };
-  return weightedScore(criterionScores(perturbed), weights);
-}
-
-/** Check an iteration count (an integer from 1 to `max`), naming the field when refused. */
-export function requireIterations(field: string, n: number, max = 1e6): number {
-  if (!Number.isInteger(n) || n < 1 || n > max) {
-    throw new ChemInputError(
-      field,
-      `${n} is not allowed`,
-      `an integer from 1 to ${max.toLocaleString('en').replace(/,/g, ' ')}`,
-    );
-  }
-  return n;
 }
 
 export function rankRobustness(
@@ -138,7 +128,14 @@ export function rankRobustness(
   shared: RobustnessShared,
   opts: { iterations?: number; seed?: number } = {},
 ): RobustnessResult[] {
-  const iterations = requireIterations('iterations', opts.iterations ?? 1000);
+  const iterations = opts.iterations ?? 1000;
+  if (!Number.isInteger(iterations) || iterations < 1 || iterations > 1e6) {
+    throw new ChemInputError(
+      'iterations',
+      `${iterations} is not allowed`,
+      'an integer from 1 to 1 000 000',
+    );
+  }
   const rng = createSeededRandom(opts.seed ?? 1);
   const live = rows.filter((r) => !r.error);
   const n = live.length;
@@ -147,17 +144,13 @@ export function rankRobustness(
   const rankCounts = live.map(() => new Uint32Array(n + 1));
   const scores = new Float64Array(n);
   const order = Array.from({ length: n }, (_, i) => i);
-  const draw: RobustnessDraw = { dPka: 0, dS0: 0, saltShift: new Float64Array(n) };
+  let draw: RobustnessDraw | undefined;
   for (let it = 0; it < iterations; it++) {
-    drawRobustnessShifts(rng, live, shared, draw);
+    draw = drawRobustnessPerturbation(live, shared, rng, draw);
     for (let i = 0; i < n; i++) {
-      scores[i] = scoreUnderShifts(
-        live[i]!,
+      scores[i] = weightedScore(
+        criterionScores(perturbedCriteria(live[i]!, draw, i, shared)),
         weights,
-        shared,
-        draw.dPka,
-        draw.dS0,
-        draw.saltShift[i]!,
       );
     }
     order.sort((a, b) => scores[b]! - scores[a]! || a - b);

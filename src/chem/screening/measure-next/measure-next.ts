@@ -1,6 +1,7 @@
 import { createSeededRandom } from '../../numerics/prng';
 import { normalQuantile } from '../../numerics/normal-quantile';
-import { requireIterations, type RobustnessRow, type RobustnessShared } from '../rank-robustness';
+import { ChemInputError } from '../../result';
+import type { RobustnessRow, RobustnessShared } from '../rank-robustness';
 import type { ScreeningWeights } from '../settings';
 import {
   fusionPathExplainedVariance,
@@ -85,6 +86,13 @@ export interface MeasureNextOptions {
 
 const KINDS: readonly BenchMeasurement[] = ['solubility', 'melting-point'];
 
+/** Check a count (an integer from 1 to `max`), naming the field when refused. */
+function requireCount(field: string, n: number, max: number): number {
+  if (!Number.isInteger(n) || n < 1 || n > max)
+    throw new ChemInputError(field, `${n} is not allowed`, `an integer from 1 to ${max}`);
+  return n;
+}
+
 function outcomePoints(k: number, seed: number): Float64Array {
   const rng = createSeededRandom(seed);
   return Float64Array.from({ length: k }, (_, i) => normalQuantile((i + rng.uniform()) / k) || 0);
@@ -119,8 +127,8 @@ export function measureNext(
   shared: RobustnessShared,
   opts: MeasureNextOptions = {},
 ): MeasureNextResult {
-  const iterations = requireIterations('iterations', opts.iterations ?? 1000, 100_000);
-  const outcomes = requireIterations('outcomes', opts.outcomes ?? 16, 256);
+  const iterations = requireCount('iterations', opts.iterations ?? 1000, 100000);
+  const outcomes = requireCount('outcomes', opts.outcomes ?? 16, 256);
   const seed = opts.seed ?? 1;
   const explained = opts.fusionExplainedVariance ?? fusionPathExplainedVariance();
   const live = rows.filter((r) => !r.error);

@@ -1,4 +1,3 @@
-import { MEASURED_LOG10_S_SIGMA } from '../screen/ksp-choice';
 import type { ScreenRow } from '../screen/screen.types';
 import {
   SALT_SOLUBILITY_FUSION_MODEL,
@@ -9,9 +8,9 @@ import {
  * What one bench measurement would tell the screen about one candidate, as the share of that
  * candidate's salt-solubility variance it resolves (its Kalman gain, 0–1) and the outcome's own noise.
  *
- * - **Solubility** of the salt: measured to 1σ = {@link MEASURED_LOG10_S_SIGMA} decades — common
- *   practice (about ±10 % for a shake-flask value; the same σ the screen carries once a measured
- *   solubility replaces the estimate, screen/ksp-choice.ts). Gain V/(V + σ²).
+ * - **Solubility** of the salt: measured to 1σ = {@link MEASUREMENT_LOG10_SOLUBILITY_SIGMA} decades —
+ *   common practice (about ±10 % for a shake-flask value; the same 0.05 decades the screen carries
+ *   once a measured solubility replaces the estimate, MEASURED_LOG10_S_SIGMA). Gain V/(V + σ²).
  * - **Melting point with ΔH_fus** (DSC): moves the estimate only through the fusion path of the
  *   shipped salt-solubility model. It resolves the variance that path is shown by leave-one-drug-out
  *   cross-validation to remove, cv(model)² − cv(fusion variant)²; with no fusion variant shipped, or
@@ -21,8 +20,8 @@ import {
  */
 export type BenchMeasurement = 'solubility' | 'melting-point';
 
-/** Solubility 1σ after a measurement, decades (common practice; see above). */
-export const MEASUREMENT_LOG10_SOLUBILITY_SIGMA = MEASURED_LOG10_S_SIGMA;
+/** Solubility 1σ of a measurement, decades (common practice: about ±10 %; see above). */
+export const MEASUREMENT_LOG10_SOLUBILITY_SIGMA = 0.05;
 
 /**
  * A measurement already taken is proposed again only while the candidate's salt-solubility 1σ is

@@ -1,16 +1,17 @@
 import { createSeededRandom } from '../../numerics/prng';
 import {
-  drawRobustnessShifts,
-  scoreUnderShifts,
+  drawRobustnessPerturbation,
+  perturbedCriteria,
   type RobustnessDraw,
   type RobustnessRow,
   type RobustnessShared,
 } from '../rank-robustness';
+import { criterionScores, weightedScore } from '../ranking';
 import type { ScreeningWeights } from '../settings';
 
 /**
  * The preposterior step of measure-next: one set of Monte Carlo draws (the rank-robustness draw,
- * drawRobustnessShifts — the same sampler, not a copy) kept in memory, and for a measurement on
+ * drawRobustnessPerturbation and perturbedCriteria — the same sampler, not a copy) kept in memory, and for a measurement on
  * candidate j the probability that the best-looking candidate is truly first once its outcome is
  * known, averaged over the outcomes.
  *
@@ -27,16 +28,23 @@ export interface KeptDraws {
   n: number;
   /** Number of draws. */
   m: number;
-  dPka: Float64Array;
-  dS0: Float64Array;
-  /** Salt shift of candidate i in draw d at d·n + i, decades. */
-  shift: Float64Array;
+  /** The draws themselves, as the sampler made them. */
+  draws: RobustnessDraw[];
   /** Score of candidate i in draw d at d·n + i. */
   score: Float64Array;
   /** Index of the first and second candidate in each draw (ties: lower index first, as rankRobustness). */
   first: Int32Array;
   second: Int32Array;
 }
+
+/** A candidate's weighted score under a draw. */
+export const scoreInDraw = (
+  row: RobustnessRow,
+  draw: RobustnessDraw,
+  i: number,
+  weights: ScreeningWeights,
+  shared: RobustnessShared,
+) => weightedScore(criterionScores(perturbedCriteria(row, draw, i, shared)), weights);
 
 export function keepDraws(
   live: readonly RobustnessRow[],
@@ -50,30 +58,18 @@ export function keepDraws(
   const d: KeptDraws = {
     n,
     m: iterations,
-    dPka: new Float64Array(iterations),
-    dS0: new Float64Array(iterations),
-    shift: new Float64Array(iterations * n),
+    draws: [],
     score: new Float64Array(iterations * n),
     first: new Int32Array(iterations),
     second: new Int32Array(iterations),
   };
-  const draw: RobustnessDraw = { dPka: 0, dS0: 0, saltShift: new Float64Array(n) };
   for (let it = 0; it < iterations; it++) {
-    drawRobustnessShifts(rng, live, shared, draw);
-    d.dPka[it] = draw.dPka;
-    d.dS0[it] = draw.dS0;
+    const draw = drawRobustnessPerturbation(live, shared, rng);
+    d.draws.push(draw);
     let a = -1;
     let b = -1;
     for (let i = 0; i < n; i++) {
-      const s = scoreUnderShifts(
-        live[i]!,
-        weights,
-        shared,
-        draw.dPka,
-        draw.dS0,
-        draw.saltShift[i]!,
-      );
-      d.shift[it * n + i] = draw.saltShift[i]!;
+      const s = scoreInDraw(live[i]!, draw, i, weights, shared);
       d.score[it * n + i] = s;
       if (a < 0 || s > d.score[it * n + a]!) {
         b = a;
@@ -98,7 +94,7 @@ export function shiftVariance(d: KeptDraws, j: number): number {
   let s = 0;
   let s2 = 0;
   for (let it = 0; it < d.m; it++) {
-    const x = d.shift[it * d.n + j]!;
+    const x = d.draws[it]!.saltShift[j]!;
     s += x;
     s2 += x * x;
   }
@@ -135,9 +131,12 @@ export function bestShareAfter(p: PreposteriorInput): Float64Array {
     counts.fill(0);
     for (let it = 0; it < d.m; it++) {
       const base = it * d.n;
-      const t = d.shift[base + j]!;
-      const moved = t + k * (y - t - p.noiseSd * p.noiseZ[it]!);
-      const s = scoreUnderShifts(row, p.weights, p.shared, d.dPka[it]!, d.dS0[it]!, moved);
+      const draw = d.draws[it]!;
+      const t = draw.saltShift[j]!;
+      // Only candidate j moves; the draw is restored at once (every other number stays shared).
+      draw.saltShift[j] = t + k * (y - t - p.noiseSd * p.noiseZ[it]!);
+      const s = scoreInDraw(row, draw, j, p.weights, p.shared);
+      draw.saltShift[j] = t;
       const other = d.first[it] === j ? d.second[it]! : d.first[it]!;
       const so = other < 0 ? Number.NEGATIVE_INFINITY : d.score[base + other]!;
       counts[s > so || (s === so && j < other) ? j : other]! += 1;

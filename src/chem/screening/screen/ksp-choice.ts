@@ -13,7 +13,7 @@ import { estimateSaltWaterSolubility } from '../salt-solubility/estimate-salt-so
 import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 
 /** Measured-solubility spread carried into K_sp, decades per ion (our assumption: ~±10 % in solubility). */
-export const MEASURED_LOG10_S_SIGMA = 0.05;
+const MEASURED_LOG10_S_SIGMA = 0.05;
 /** A measurement this far from the screening temperature, K, is noted (our choice). */
 const TEMPERATURE_NOTE_K = 2;
 
