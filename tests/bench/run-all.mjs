@@ -1,7 +1,7 @@
 // `npm run bench`: every benchmark, one JSON summary (not part of `npm test`; nothing here is a
 // timed test, and no figure makes it fail — only a benchmark that cannot run does).
 //
-//   node tests/bench/run-all.mjs [--out file] [--skip core,cli,batch,browser] [--batch-sizes 1000,10000]
+//   node tests/bench/run-all.mjs [--out file] [--skip core,cli,batch,browser,measure-next] [--batch-sizes 1000,10000]
 //                                [--batch-max-s 300]
 //
 // Runs, in order:
@@ -16,6 +16,9 @@
 //            its estimated time written down
 //   browser  tests/bench/rerank-browser.mjs: weight slider → re-ranked table painted in Chromium, and
 //            the first screen's gzipped JavaScript of the same build (tests/bench/check-budget.mjs)
+//   measure-next  tests/bench/measure-next.bench.ts (the value-of-information computation for 12
+//            candidates, one thread) and tests/bench/measure-next-browser.mjs (table on screen → the
+//            "Measure next" list on screen in Chromium, worker included; goal < 1 s on 2 cores)
 // The summary (default tests/bench/out/summary.json, git-ignored) carries medians, p95 and the
 // machine's core count and load, so figures from different machines can be read side by side.
 import { spawn, spawnSync } from 'node:child_process';
@@ -236,6 +239,44 @@ if (!skip.has('browser')) {
     summary.skipped.rerankBrowser = `tests/bench/rerank-browser.mjs exited ${r.status} (Chromium missing or the page failed; see its output)`;
   }
 } else summary.skipped.rerankBrowser = 'skipped by --skip';
+
+// ---- measure next (value of information) ----------------------------------------------------------
+if (!skip.has('measure-next')) {
+  log('measure next: core computation for 12 candidates (tsx)…');
+  const coreJson = join(work, 'measure-next.json');
+  const c = spawnSync(
+    process.execPath,
+    [
+      'node_modules/tsx/dist/cli.mjs',
+      '--tsconfig',
+      'tsconfig.json',
+      'tests/bench/measure-next.bench.ts',
+      '--json',
+      coreJson,
+    ],
+    { stdio: ['ignore', 'ignore', 'inherit'] },
+  );
+  if (c.status === 0 && existsSync(coreJson))
+    summary.results.measureNextCore = JSON.parse(readFileSync(coreJson, 'utf8'));
+  else summary.skipped.measureNextCore = `tests/bench/measure-next.bench.ts exited ${c.status}`;
+  log('measure next in Chromium (table → list)…');
+  const json = join(work, 'measure-next-browser.json');
+  const distDir = process.env.SALTSMITH_OUT_DIR ?? join(work, 'dist');
+  const built = existsSync(join(distDir, 'index.html'));
+  const r = spawnSync(process.execPath, ['tests/bench/measure-next-browser.mjs'], {
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: {
+      ...process.env,
+      SALTSMITH_OUT_DIR: distDir,
+      SALTSMITH_BENCH_JSON: json,
+      ...(built ? { SALTSMITH_SKIP_BUILD: '1' } : {}),
+    },
+  });
+  if (r.status === 0 && existsSync(json))
+    summary.results.measureNextBrowser = JSON.parse(readFileSync(json, 'utf8'));
+  else
+    summary.skipped.measureNextBrowser = `tests/bench/measure-next-browser.mjs exited ${r.status} (Chromium missing, the page failed, or the list came before the table; see its output)`;
+} else summary.skipped.measureNext = 'skipped by --skip';
 
 summary.machine.loadAverage1mAtEnd = +loadavg()[0].toFixed(2);
 summary.finishedAt = new Date().toISOString();
