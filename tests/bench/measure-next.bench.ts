@@ -59,7 +59,7 @@ function time(f: () => unknown) {
   };
 }
 
-const di = drugIon({ ...DEMO_COMPOUND, smiles: '' });
+const di = drugIon(DEMO_COMPOUND);
 const candidates = candidatesFromLibrary(
   IONS.map((id) => getCounterIon(id)!),
   { kind: 'base', ionCharge: 1 },
