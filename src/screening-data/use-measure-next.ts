@@ -38,6 +38,32 @@ const SETTLE_MS = 120;
 const spawn = () =>
   new Worker(new URL('./measure-next.worker.ts', import.meta.url), { type: 'module' });
 
+type SetState = (next: MeasureNextState | ((s: MeasureNextState) => MeasureNextState)) => void;
+
+/** Without a Worker (tests): the same function on the main thread. */
+function runInline(req: MeasureNextRequest, set: (s: MeasureNextState) => void) {
+  try {
+    const { result, ms } = runMeasureNext(req, undefined, () => performance.now());
+    set({ status: 'done', progress: 1, result, ms });
+  } catch (err) {
+    set({ status: 'error', progress: 0, error: String(err) });
+  }
+}
+
+/** The worker's messages into state; a stale run's are ignored (but still free the worker). */
+function handleMessages(currentRun: () => number, release: () => void, setState: SetState) {
+  return (e: MessageEvent<MeasureNextMessage>) => {
+    const m = e.data;
+    if (m.type !== 'progress') release();
+    if (m.runId !== currentRun()) return;
+    if (m.type === 'progress')
+      setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
+    else if (m.type === 'result')
+      setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
+    else setState({ status: 'error', progress: 0, error: m.message });
+  };
+}
+
 export function useMeasureNext(
   rows: RobustnessRow[] | undefined,
   status: MeasureNextStatus[] | undefined,
@@ -80,12 +106,7 @@ export function useMeasureNext(
     const timer = setTimeout(
       () => {
         if (typeof Worker === 'undefined') {
-          try {
-            const { result, ms } = runMeasureNext(req, undefined, () => performance.now());
-            if (!cancelled) setState({ status: 'done', progress: 1, result, ms });
-          } catch (err) {
-            if (!cancelled) setState({ status: 'error', progress: 0, error: String(err) });
-          }
+          runInline(req, (next) => !cancelled && setState(next));
           return;
         }
         if (workerRef.current && busyRef.current) {
@@ -93,18 +114,10 @@ export function useMeasureNext(
           workerRef.current = null;
         }
         const worker = (workerRef.current ??= spawn());
-        worker.onmessage = (e: MessageEvent<MeasureNextMessage>) => {
-          const m = e.data;
-          if (m.type !== 'progress') busyRef.current = false;
-          if (m.runId !== runRef.current) return;
-          if (m.type === 'progress')
-            setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
-          else if (m.type === 'result')
-            setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
-          else setState({ status: 'error', progress: 0, error: m.message });
-        };
+        const release = () => (busyRef.current = false);
+        worker.onmessage = handleMessages(() => runRef.current, release, setState);
         worker.onerror = (e) => {
-          busyRef.current = false;
+          release();
           setState({ status: 'error', progress: 0, error: e.message || 'The worker failed' });
         };
         busyRef.current = true;
