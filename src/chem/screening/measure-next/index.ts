@@ -2,6 +2,8 @@
 export * from './measure-next';
 export {
   fusionPathExplainedVariance,
+  shippedFusionPath,
+  type FusionPathCheck,
   measureNextStatusOf,
   measurementGain,
   MEASUREMENT_LOG10_SOLUBILITY_SIGMA,

@@ -29,18 +29,35 @@ export const MEASUREMENT_LOG10_SOLUBILITY_SIGMA = 0.05;
  */
 export const STILL_WIDE_LOG10_SIGMA = 0.3;
 
-interface ShippedCv {
-  readonly cvRmseLog10: number | null;
+/** What the shipped model says of its fusion (melting-point) path, leave-one-drug-out. */
+export interface FusionPathCheck {
+  /** The path is applied to estimates (cross-validation favoured it). */
+  applies: boolean;
+  /** Cross-validated RMSE without and with the path, decades (null: not measured). */
+  rmseWithout: number | null;
+  rmseWith: number | null;
+}
+
+/**
+ * The shipped model's fusion path: a fusion variant is shipped only when cross-validation favoured it
+ * (SALT_SOLUBILITY_FUSION_MODEL, null otherwise). The one place measure-next reads it.
+ */
+export function shippedFusionPath(): FusionPathCheck {
+  const main = SALT_SOLUBILITY_MODEL as { readonly cvRmseLog10: number | null };
+  const fusion = SALT_SOLUBILITY_FUSION_MODEL as { readonly cvRmseLog10: number | null } | null;
+  return {
+    applies: fusion !== null,
+    rmseWithout: main.cvRmseLog10,
+    rmseWith: fusion?.cvRmseLog10 ?? null,
+  };
 }
 
 /** Variance of log₁₀ solubility the fusion path removes by cross-validation, decades² (0 if none). */
-export function fusionPathExplainedVariance(
-  main: ShippedCv | null = SALT_SOLUBILITY_MODEL as ShippedCv,
-  fusion: ShippedCv | null = SALT_SOLUBILITY_FUSION_MODEL as ShippedCv | null,
-): number {
-  const a = main?.cvRmseLog10;
-  const b = fusion?.cvRmseLog10;
-  if (a == null || b == null || !Number.isFinite(a) || !Number.isFinite(b)) return 0;
+export function fusionPathExplainedVariance(check: FusionPathCheck = shippedFusionPath()): number {
+  const a = check.rmseWithout;
+  const b = check.rmseWith;
+  if (!check.applies || a == null || b == null || !Number.isFinite(a) || !Number.isFinite(b))
+    return 0;
   return Math.max(0, a * a - b * b);
 }
 

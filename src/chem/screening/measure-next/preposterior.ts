@@ -22,6 +22,10 @@ import type { ScreeningWeights } from '../settings';
  * solubility replaces that candidate's estimate and nobody else's); every other number of the draw
  * stays — common random numbers for every candidate and measurement, so a measurement that tells
  * nothing (k = 0) gives exactly the prior picture and a value of exactly zero.
+ * Our simplification: the measured candidate's shift, once known, no longer moves with the shared
+ * shifts it was tied to (S₀ when its estimate was anchored on S₀), exactly as after a real measurement;
+ * the shared shifts are not themselves updated from it. So a measured candidate's pH_max starts to move
+ * with S₀'s own uncertainty, which can make a measurement look very slightly worse than useless (read 0).
  */
 export interface KeptDraws {
   /** Live candidates (no error), in row order. */

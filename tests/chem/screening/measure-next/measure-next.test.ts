@@ -75,12 +75,15 @@ describe('measurementGain', () => {
   });
   it('a melting point resolves what the fusion path removes by cross-validation, else nothing', () => {
     // Hand computation: cv 0.86 without, 0.60 with the fusion path → 0.86² − 0.60² = 0.3796.
-    expect(fusionPathExplainedVariance({ cvRmseLog10: 0.86 }, { cvRmseLog10: 0.6 })).toBeCloseTo(
-      0.3796,
-      10,
-    );
-    expect(fusionPathExplainedVariance({ cvRmseLog10: 0.86 }, { cvRmseLog10: 0.9 })).toBe(0);
-    expect(fusionPathExplainedVariance({ cvRmseLog10: 0.86 }, null)).toBe(0);
+    const check = (applies: boolean, rmseWith: number | null) => ({
+      applies,
+      rmseWithout: 0.86,
+      rmseWith,
+    });
+    expect(fusionPathExplainedVariance(check(true, 0.6))).toBeCloseTo(0.3796, 10);
+    expect(fusionPathExplainedVariance(check(true, 0.9))).toBe(0);
+    expect(fusionPathExplainedVariance(check(false, 0.6))).toBe(0); // not applied: worth nothing
+    expect(fusionPathExplainedVariance(check(true, null))).toBe(0);
     // Gain = explained / V: 0.045 / 0.09 = 0.5.
     expect(measurementGain('melting-point', 0.09, 0.045).gain).toBeCloseTo(0.5, 12);
     expect(measurementGain('melting-point', 0.09, 0).gain).toBe(0);
