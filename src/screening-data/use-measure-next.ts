@@ -23,9 +23,13 @@ export interface MeasureNextState {
   error?: string;
 }
 
-/** Kept Monte Carlo draws and outcome strata per run; the seed is the robustness run's. */
+/**
+ * Kept Monte Carlo draws and outcome strata per run; the seed is the robustness run's. 12 strata:
+ * on the 12-candidate benchmark the values move by about 0.02 from seed to seed with 12, 16 or 64
+ * strata alike (the draws' own noise dominates), and 12 take a quarter less time than 16.
+ */
 export const MEASURE_NEXT_ITERATIONS = 1000;
-export const MEASURE_NEXT_OUTCOMES = 16;
+export const MEASURE_NEXT_OUTCOMES = 12;
 /** Wait this long after the last change before starting a run (not the first), ms. */
 const SETTLE_MS = 120;
 

@@ -7,7 +7,7 @@
  *   npx tsx --tsconfig tsconfig.json tests/bench/measure-next.bench.ts [--json out.json]
  *
  * Input: the fictional demo compound (invented numbers, a workload here) given by formula against 12
- * library counter-ions, 1000 kept draws × 16 outcome strata (the app's setting), seed 20261201.
+ * library counter-ions, 1000 kept draws × 12 outcome strata (the app's setting), seed 20261201.
  */
 import { writeFileSync } from 'node:fs';
 import { availableParallelism, loadavg } from 'node:os';
@@ -69,11 +69,11 @@ const res = screenCompound({ compound: DEMO_COMPOUND, drugIon: di, candidates, p
 const rows = res.rows.map((r) => r.robustness);
 const status = res.rows.map(measureNextStatusOf);
 const weights = defaultScreeningSettings().weights;
-const opts = { iterations: 1000, outcomes: 16, seed: 20261201 };
+const opts = { iterations: 1000, outcomes: 12, seed: 20261201 };
 let last = measureNext(rows, status, weights, res.robustnessShared, opts);
 const result = {
   shortlist: rows.filter((r) => !r.error).length,
-  setting: '1000 draws × 16 outcomes, seed 20261201, one thread (as in the worker)',
+  setting: '1000 draws × 12 outcomes, seed 20261201, one thread (as in the worker)',
   cores: availableParallelism(),
   loadAverage1mAtStart: +loadavg()[0]!.toFixed(2),
   measureNext: time(() => (last = measureNext(rows, status, weights, res.robustnessShared, opts))),
