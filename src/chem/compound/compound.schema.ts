@@ -5,7 +5,8 @@ import { z } from 'zod';
  * models use. Validated with zod at every trust boundary (form input, stored records, files, CLI).
  * Units live in field names: mg/mL, °C, mg, g/cm³.
  */
-export const pkaOriginSchema = z.enum(['measured', 'literature', 'predicted']);
+/** Where a pKa comes from; 'not-stated' (the default of a new compound) is screened with the predicted σ. */
+export const pkaOriginSchema = z.enum(['measured', 'literature', 'predicted', 'not-stated']);
 export type PkaOrigin = z.infer<typeof pkaOriginSchema>;
 
 export const pkaEntrySchema = z.object({
@@ -14,6 +15,15 @@ export const pkaEntrySchema = z.object({
   origin: pkaOriginSchema,
 });
 export type PkaEntry = z.infer<typeof pkaEntrySchema>;
+
+/** Where an entered S₀ comes from. */
+export const intrinsicSolubilityOriginSchema = z.enum([
+  'measured',
+  'literature',
+  'predicted',
+  'not-stated',
+]);
+export type IntrinsicSolubilityOrigin = z.infer<typeof intrinsicSolubilityOriginSchema>;
 
 const positiveOrNull = (what: string, max: number) =>
   z
@@ -37,8 +47,13 @@ export const compoundSchema = z.object({
     .min(-3)
     .max(3)
     .refine((charge) => charge !== 0, 'The drug ion cannot be neutral'),
-  /** Intrinsic solubility S₀ of the free form, mg/mL, when measured. */
+  /** Intrinsic solubility S₀ of the free form, mg/mL, when known (else the General Solubility Equation). */
   intrinsicSolubilityMgPerMl: positiveOrNull('Intrinsic solubility', 1e4),
+  /**
+   * Where S₀ comes from (its σ follows: screen-context.ts). Absent or null: not stated — never read as
+   * measured (added after version 1 records).
+   */
+  intrinsicSolubilityOrigin: intrinsicSolubilityOriginSchema.nullable().optional(),
   /** Melting point of the free form, °C. */
   meltingPointC: z.number().min(-100).max(600).nullable(),
   /** log P (octanol/water) of the neutral form. */

@@ -31,7 +31,10 @@ export function compoundFacts(project: ProjectRecord, screening: ProjectScreenin
     value:
       c.intrinsicSolubilityMgPerMl ??
       `log₁₀ S₀ = ${s0.log10IntrinsicM.value.toFixed(2)} ± ${s0.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L, estimate)`,
-    unit: c.intrinsicSolubilityMgPerMl !== null ? 'mg/mL (measured)' : undefined,
+    unit:
+      c.intrinsicSolubilityMgPerMl !== null
+        ? `mg/mL (${(c.intrinsicSolubilityOrigin ?? 'not-stated').replace('-', ' ')})`
+        : undefined,
   });
   if (c.meltingPointC !== null)
     facts.push({ label: 'Melting point', value: c.meltingPointC, unit: '°C' });

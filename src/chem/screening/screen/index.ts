@@ -15,3 +15,10 @@ export {
   biorelevantMedium,
   type BiorelevantMediumRecord,
 } from './biorelevant-media';
+export { S0_LOG10_SIGMA_BY_ORIGIN } from './screen-context';
+export { decideLimitingSolid, LIMITING_SOLID_MARGIN_SIGMA } from './bench-solubility';
+export {
+  temperatureTransfer,
+  UNCORRECTED_LOG10_PER_K,
+  type TemperatureTransfer,
+} from './bench-temperature';
