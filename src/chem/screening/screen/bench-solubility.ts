@@ -12,7 +12,8 @@ import type { BenchSolubilityReading, LimitingSolid } from './screen.types';
 /**
  * Which solid limited a measured solubility. A saturated solution is in equilibrium with one solid
  * (two only at pH_max). For a base whose salt is BH⁺X⁻ (1:1, no added counter-ion), below pH_max the
- * salt is the solid and S_total = √K_sp·(1 + 10^(pH − pKa)); above it the free base is, and
+ * salt is the solid and S_total = √K_sp·(1 + 10^(pH − pKa)) (where [X⁻] ≈ [BH⁺]; the screen solves the
+ * full mass balance, salt-equilibrium.ts); above it the free base is, and
  * S_total = S₀·(1 + 10^(pKa − pH)); an acid mirrors this (Kramer & Flynn 1972, J. Pharm. Sci. 61,
  * 1896; Bogardus & Blackwood 1979, J. Pharm. Sci. 68, 188; Serajuddin 2007, Adv. Drug Deliv. Rev. 59,
  * 603). A slurry ends at its own equilibrium pH, so a value measured above pH_max is the free form's
