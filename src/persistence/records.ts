@@ -89,6 +89,11 @@ export const measurementRecordSchema = z.object({
   temperatureK: z.number().positive().max(600).nullable(),
   medium: z.string().max(200),
   text: z.string().max(5000),
+  /**
+   * Solubility only: the solid the lab found left at equilibrium (e.g. XRPD of the residue); null or
+   * absent: not stated. Optional and not indexed, so records written before it stay valid.
+   */
+  solidForm: z.enum(['salt', 'free-form', 'unknown']).nullable().optional(),
   recordedAt: isoDate,
 });
 export type MeasurementRecord = z.infer<typeof measurementRecordSchema>;

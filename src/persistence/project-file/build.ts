@@ -54,6 +54,7 @@ export function buildProjectFile(bundle: ProjectBundle, createdAt: string): Proj
       temperatureK: m.temperatureK,
       medium: m.medium,
       text: m.text,
+      ...(m.solidForm ? { solidForm: m.solidForm } : {}),
       recordedAt: m.recordedAt,
     })),
     customIons: bundle.customIons.map((ion) => ({
