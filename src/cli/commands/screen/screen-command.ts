@@ -33,7 +33,7 @@ import { screenCsv, screenJson } from './screen-writers';
 
 /** The compound from flags, each flag over the --input file's value. */
 export function specFromFlags(flags: ScreenFlags, file: CompoundFile): CompoundSpec {
-  const origin = flags['pka-origin'] ?? 'measured';
+  const origin = flags['pka-origin'] ?? 'not-stated';
   const kind = flags.kind ?? file.kind ?? 'base';
   const pKas = flags.pka
     ? flags.pka.map((value) => ({ value, origin }))
@@ -46,6 +46,9 @@ export function specFromFlags(flags: ScreenFlags, file: CompoundFile): CompoundS
     pKas,
     ionCharge: flags.charge ?? file.ionCharge ?? null,
     intrinsicSolubilityMgPerMl: flags.s0 ?? file.intrinsicSolubilityMgPerMl ?? null,
+    intrinsicSolubilityOrigin:
+      flags['s0-origin'] ??
+      (flags.s0 === undefined ? (file.intrinsicSolubilityOrigin ?? null) : null),
     meltingPointC: flags.mp ?? file.meltingPointC ?? null,
     logP: flags.logp ?? file.logP ?? null,
     doseMg: flags.dose ?? file.doseMg ?? null,

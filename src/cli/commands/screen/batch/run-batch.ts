@@ -169,7 +169,7 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
           }
           raw = rowFromJson(value);
         }
-        const r = specFromRow(raw, flags['pka-origin'] ?? 'measured');
+        const r = specFromRow(raw, flags['pka-origin'] ?? 'not-stated', flags['s0-origin'] ?? null);
         id = r.id;
         spec = r.spec;
         const earlier = seenIds.get(id);
