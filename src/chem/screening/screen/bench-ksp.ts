@@ -111,6 +111,40 @@ export function benchKspChoice(
   });
 }
 
+/** The structured record of a van ’t Hoff transfer (null when the value was not carried). */
+function adjustedRecord(
+  t: TemperatureTransfer,
+  screenC: number,
+): BenchSolubilityUse['temperatureAdjusted'] {
+  if (t.method !== 'van-t-hoff-fit' && t.method !== 'calorimetric') return null;
+  return {
+    fromC: kelvinToCelsius(t.fromK),
+    toC: screenC,
+    method: t.method,
+    solutionEnthalpyKJ: t.apparentEnthalpyKJ!,
+    log10Shift: t.log10Shift,
+  };
+}
+
+/** The 1σ a value behind K_sp carries: measurement, undecided solid, temperature; and why it was widened. */
+function widenedSigma(
+  used: BenchSolubilityReading,
+  estimate: KspChoice,
+  t: TemperatureTransfer,
+  tWords: string | null,
+): { sigma: number; widenedBecause: string[] } {
+  const widenedBecause: string[] = [];
+  let undecidedSigma = 0;
+  if (used.limitedBy === 'unknown') {
+    undecidedSigma = used.restPhMax?.sigma ?? estimate.saltWater.log10DrugM.uncertainty;
+    widenedBecause.push(
+      `which solid limited it is undecided: ±${undecidedSigma.toFixed(2)} decades (the 1σ of the pH_max it was judged against)`,
+    );
+  }
+  if (t.method === 'widened' && tWords) widenedBecause.push(tWords);
+  return { sigma: Math.hypot(MEASURED_LOG10_S_SIGMA, undecidedSigma, t.sigma), widenedBecause };
+}
+
 /** The K_sp choice resting on one measured value (salt-limited or undecided). */
 function measuredChoice(
   ctx: ScreenContext,
@@ -125,17 +159,8 @@ function measuredChoice(
   const t = transferOf(ctx, p, s);
   const formulaUnitsM = s.formulaUnitsM * 10 ** t.log10Shift;
   const logK = log10KspFromValue(ctx, p, s.ph, formulaUnitsM);
-  const widenedBecause: string[] = [];
-  let undecidedSigma = 0;
-  if (used.limitedBy === 'unknown') {
-    undecidedSigma = used.restPhMax?.sigma ?? estimate.saltWater.log10DrugM.uncertainty;
-    widenedBecause.push(
-      `which solid limited it is undecided: ±${undecidedSigma.toFixed(2)} decades (the 1σ of the pH_max it was judged against)`,
-    );
-  }
   const tWords = temperatureWords(t);
-  if (t.method === 'widened' && tWords) widenedBecause.push(tWords);
-  const sigma = Math.hypot(MEASURED_LOG10_S_SIGMA, undecidedSigma, t.sigma);
+  const { sigma, widenedBecause } = widenedSigma(used, estimate, t, tWords);
   const n = st.drugPerSalt + st.counterIonPerSalt;
   const phMax = phMaxWith(ctx, p, logK);
   const conflict =
@@ -151,16 +176,6 @@ function measuredChoice(
     ...(conflict ? [conflict] : []),
   ];
   const source = ['measured salt solubility (user data)'];
-  const temperatureAdjusted: BenchSolubilityUse['temperatureAdjusted'] =
-    t.method === 'van-t-hoff-fit' || t.method === 'calorimetric'
-      ? {
-          fromC: kelvinToCelsius(t.fromK),
-          toC: screenC,
-          method: t.method,
-          solutionEnthalpyKJ: t.apparentEnthalpyKJ!,
-          log10Shift: t.log10Shift,
-        }
-      : null;
   return {
     log10Ksp: {
       value: logK,
@@ -198,7 +213,7 @@ function measuredChoice(
       limitedBy: used.limitedBy,
       readings: found.readings,
       impliedS0: found.impliedS0,
-      temperatureAdjusted,
+      temperatureAdjusted: adjustedRecord(t, screenC),
       widenedBecause,
       conflict,
     },

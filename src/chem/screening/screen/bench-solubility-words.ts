@@ -57,15 +57,14 @@ export function usedReadingReason(r: BenchSolubilityReading, sigma: number): Rea
 /** The note of a K_sp carried or widened for temperature. */
 export function temperatureWords(t: TemperatureTransfer): string | null {
   const from = t.assumedTemperature
-    ? `${c(t.fromK)} (not recorded; taken as ${c(t.fromK)})`
+    ? `a temperature not recorded (taken as ${c(t.fromK)})`
     : c(t.fromK);
-  if (t.method === null)
-    return t.assumedTemperature
-      ? `measured at a temperature not recorded; taken as ${c(t.fromK)}`
-      : null;
+  if (t.method === null) return t.assumedTemperature ? `measured at ${from}` : null;
   if (t.method === 'widened')
     return `measured at ${from}, used at ${c(t.toK)} without an enthalpy of solution: σ widened by ${t.sigma.toFixed(2)} decades (salts commonly change 1.5–3× between 25 and 37 °C)`;
-  return `carried from ${from} to ${c(t.toK)} by van ’t Hoff with ΔH_sol,app ${t.apparentEnthalpyKJ!.toFixed(1)} kJ/mol (${t.method === 'van-t-hoff-fit' ? 'your van ’t Hoff fit' : 'your calorimetric ΔH_sol per ion'}): ×${fmt(10 ** t.log10Shift)}`;
+  const basis =
+    t.method === 'van-t-hoff-fit' ? 'your van ’t Hoff fit' : 'your calorimetric ΔH_sol per ion';
+  return `carried from ${from} to ${c(t.toK)} by van ’t Hoff with ΔH_sol,app ${t.apparentEnthalpyKJ!.toFixed(1)} kJ/mol (${basis}): ×${fmt(10 ** t.log10Shift)}`;
 }
 
 export function temperatureFlag(t: TemperatureTransfer): ScreenFlag {
