@@ -153,6 +153,20 @@ describe('bench solubility in the screen', () => {
     expect(row.benchSolubility!.conflict).toBeNull();
   });
 
+  it('a value read as salt-limited (not stated) is the rest of the evidence for another value', () => {
+    // A as above, without a statement: at pH 5 the free form alone dissolves S₀·(1 + 10^2.8) = 631.96·S₀,
+    // and A is 4.45662·S₀ — log₁₀(4.45662/631.96) = −2.15, far below: the free form cannot be the solid.
+    // B is then read against A's pH_max (7.2 ± 0.15), not against the estimate.
+    const row = screenWith('besylate', [sol(0.0668492, 5), sol(0.0387734, 7.6)]);
+    const [a, b] = row.benchSolubility!.readings;
+    expect(a!.limitedBy).toBe('salt');
+    expect(a!.overFreeFormLog10!.value).toBeCloseTo(-2.1516, 3);
+    expect(b).toMatchObject({ limitedBy: 'free-form', decidedBy: 'ph-max' });
+    expect(b!.restPhMax!.basis).toBe('measured');
+    expect(b!.restPhMax!.value).toBeCloseTo(7.2, 2);
+    expect(row.kspOrigin).toBe('measured');
+  });
+
   it('a value the lab says was salt-limited but whose pH_max lies below its pH carries a visible conflict', () => {
     const row = screenWith('besylate', [sol(BESYLATE_PH76_MG, 7.6, { solidForm: 'salt' })]);
     expect(row.kspOrigin).toBe('measured');

@@ -174,10 +174,39 @@ function restPhMaxOf(
   return { value, sigma, basis: rest.basis };
 }
 
+/** One value read against one body of other evidence. */
+function readOne(
+  ctx: ScreenContext,
+  p: PreparedCandidate,
+  s: MeasuredSolubility,
+  rest: RestEvidence,
+): BenchSolubilityReading {
+  const restPhMax = restPhMaxOf(ctx, p, rest);
+  const ff = freeFormSide(ctx, p, s);
+  const d = decideLimitingSolid({
+    stated: s.solidForm,
+    ph: s.ph,
+    restPhMax,
+    overFreeFormLog10: ff?.over ?? null,
+  });
+  return {
+    index: s.index,
+    ...d,
+    ph: s.ph,
+    temperatureC: s.temperatureK === null ? null : kelvinToCelsius(s.temperatureK),
+    restPhMax,
+    overFreeFormLog10: ff?.over ?? null,
+    impliedS0: ff?.impliedS0 ?? null,
+    usedForKsp: false,
+  };
+}
+
 /**
- * Read every measured solubility of a candidate. The rest of the evidence for one value is a value of
- * the same salt that the lab stated was salt-limited (nearest the screening temperature), else the
- * estimate made without any measured solubility.
+ * Read every measured solubility of a candidate, in two passes. First each value is read against the
+ * estimate made without any measured solubility (or against a value the lab stated was salt-limited).
+ * Then each is read again against the rest of the evidence: another value of the same salt read as
+ * salt-limited in the first pass (nearest the screening temperature), if there is one, else the
+ * estimate — never against itself.
  */
 export function readBenchSolubilities(
   ctx: ScreenContext,
@@ -187,35 +216,32 @@ export function readBenchSolubilities(
   const all = p.measured?.allSolubilities ?? [];
   const T = ctx.temperatureK;
   const dT = (s: MeasuredSolubility) => Math.abs((s.temperatureK ?? T) - T);
-  return all.map((s) => {
-    const stated = all
-      .filter((o) => o !== s && o.solidForm === 'salt')
-      .sort((a, b) => dT(a) - dT(b))[0];
-    const rest: RestEvidence = stated
+  const restFrom = (s: MeasuredSolubility, saltLimited: (o: MeasuredSolubility) => boolean) => {
+    const other = all.filter((o) => o !== s && saltLimited(o)).sort((a, b) => dT(a) - dT(b))[0];
+    return other
       ? {
-          log10Ksp: log10KspFromValue(ctx, p, stated.ph, stated.formulaUnitsM),
+          log10Ksp: log10KspFromValue(ctx, p, other.ph, other.formulaUnitsM),
           saltLog10Sigma: MEASURED_LOG10_S_SIGMA,
           anchored: false,
-          basis: 'measured',
+          basis: 'measured' as const,
         }
       : estimate;
-    const restPhMax = restPhMaxOf(ctx, p, rest);
-    const ff = freeFormSide(ctx, p, s);
-    const d = decideLimitingSolid({
-      stated: s.solidForm,
-      ph: s.ph,
-      restPhMax,
-      overFreeFormLog10: ff?.over ?? null,
-    });
-    return {
-      index: s.index,
-      ...d,
-      ph: s.ph,
-      temperatureC: s.temperatureK === null ? null : kelvinToCelsius(s.temperatureK),
-      restPhMax,
-      overFreeFormLog10: ff?.over ?? null,
-      impliedS0: ff?.impliedS0 ?? null,
-      usedForKsp: false,
-    };
-  });
+  };
+  const first = all.map((s) =>
+    readOne(
+      ctx,
+      p,
+      s,
+      restFrom(s, (o) => o.solidForm === 'salt'),
+    ),
+  );
+  const salt = new Set(first.filter((r) => r.limitedBy === 'salt').map((r) => r.index));
+  return all.map((s) =>
+    readOne(
+      ctx,
+      p,
+      s,
+      restFrom(s, (o) => salt.has(o.index)),
+    ),
+  );
 }
