@@ -11,7 +11,7 @@ export function compoundFacts(project: ProjectRecord, screening: ProjectScreenin
     { label: 'Ionisable as', value: c.kind === 'base' ? 'weak base' : 'weak acid' },
     {
       label: c.kind === 'base' ? 'pKa (conjugate acid)' : 'pKa',
-      value: c.pKas.map((p) => `${p.value} (${p.origin})`).join(', '),
+      value: c.pKas.map((p) => `${p.value} (${p.origin.replace('-', ' ')})`).join(', '),
     },
     {
       label: 'Drug ion',
