@@ -1,4 +1,6 @@
 import { getDb } from './db';
+import { changesSetting } from './field-stamps';
+import { patchRecord } from './stamped-writes';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, measurementRecordSchema, type MeasurementRecord } from './records';
 
@@ -24,14 +26,12 @@ export const measurementsRepo = {
     return record;
   },
 
-  /** Replace a measurement's fields after validation; an invalid edit throws and nothing changes. */
+  /**
+   * Store the given fields of a measurement, each stamped (field-stamps.ts): a field another tab wrote
+   * later is kept. An invalid result throws and nothing changes.
+   */
   update: async (id: string, patch: Partial<NewMeasurement>): Promise<void> => {
-    const db = getDb();
-    await db.transaction('rw', db.measurements, async () => {
-      const current = await db.measurements.get(id);
-      if (!current) throw new Error(`No measurement with id ${id}`);
-      await db.measurements.put(measurementRecordSchema.parse({ ...current, ...patch }));
-    });
+    await patchRecord('measurements', id, changesSetting([], patch));
   },
 
   /** Count of measurements per project (projectId → count), for the project overview. */

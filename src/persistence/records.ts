@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { compoundSchema, counterIonEditSchema, counterIonSchema } from '@/chem';
+import { stampFieldsSchema } from './field-stamps';
 
 /**
  * Stored record shapes. Every record carries `schemaVersion` so that a later version of Saltsmith
@@ -45,6 +46,8 @@ export const projectRecordSchema = z.object({
   isDemo: z.boolean(),
   compound: compoundSchema,
   settings: projectSettingsSchema,
+  /** Per-field stamps of the last write (field-stamps.ts). */
+  ...stampFieldsSchema,
 });
 export type ProjectRecord = z.infer<typeof projectRecordSchema>;
 
@@ -61,6 +64,7 @@ export const candidateRecordSchema = z.object({
   hydrateWater: z.number().min(0).max(20),
   addedAt: isoDate,
   order: z.number(),
+  ...stampFieldsSchema,
 });
 export type CandidateRecord = z.infer<typeof candidateRecordSchema>;
 
@@ -95,6 +99,7 @@ export const measurementRecordSchema = z.object({
    */
   solidForm: z.enum(['salt', 'free-form', 'unknown']).nullable().optional(),
   recordedAt: isoDate,
+  ...stampFieldsSchema,
 });
 export type MeasurementRecord = z.infer<typeof measurementRecordSchema>;
 
@@ -109,6 +114,7 @@ export const customIonRecordFields = z.object({
   /** The ion's data: a whole ion (counterIonSchema) or, for an override, the edit (counterIonEditSchema). */
   ion: z.record(z.string(), z.unknown()),
   updatedAt: isoDate,
+  ...stampFieldsSchema,
 });
 
 /**
