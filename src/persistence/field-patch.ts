@@ -33,7 +33,8 @@ function blockingStamp(stamps: Record<string, string>, floor: string, pointer: s
 function parentOf(root: Obj, path: FieldPath): Obj {
   let node: Obj = root;
   for (const segment of path.slice(0, -1)) {
-    if (segment.startsWith('#')) throw new Error(`A list element has no fields: ${pointerOf(path)}`);
+    if (segment.startsWith('#'))
+      throw new Error(`A list element has no fields: ${pointerOf(path)}`);
     if (!isObj(node[segment])) node[segment] = {};
     node = node[segment] as Obj;
   }
@@ -58,7 +59,8 @@ function writeAt(root: Obj, change: FieldChange): void {
 /** Apply one change to a keyed-list element: `parent[listKey]` is the list. */
 function writeItem(parent: Obj, listKey: string, id: string, change: FieldChange): void {
   const current = parent[listKey];
-  const list = Array.isArray(current) && (current.length === 0 || isKeyedList(current)) ? current : [];
+  const list =
+    Array.isArray(current) && (current.length === 0 || isKeyedList(current)) ? current : [];
   const at = list.findIndex((e: { id: string }) => e.id === id);
   const next = [...list] as unknown[];
   if ('removed' in change) {

@@ -54,36 +54,52 @@ export interface Stamped {
 
 const MS_DIGITS = 15;
 const COUNTER_DIGITS = 6;
-const pageId = Math.random().toString(36).slice(2, 10).padEnd(8, '0');
-let lastMs = 0;
-let lastCounter = 0;
 
 const format = (ms: number, counter: number, id: string) =>
   `${String(ms).padStart(MS_DIGITS, '0')}.${String(counter).padStart(COUNTER_DIGITS, '0')}.${id}`;
 
-/** The next stamp of this page (strictly greater than every stamp it issued or observed). */
-export function nextStamp(now: number = Date.now()): string {
-  if (now > lastMs) {
-    lastMs = now;
-    lastCounter = 0;
-  } else {
-    lastCounter++;
-  }
-  return format(lastMs, lastCounter, pageId);
+export interface StampClock {
+  /** The next stamp (strictly greater than every stamp issued or observed). */
+  next(now?: number): string;
+  /** Take note of a stamp read from storage, so that the next stamp is greater. */
+  observe(stamp: string | undefined): void;
 }
 
-/** Take note of a stamp read from storage, so that this page's next stamp is greater. */
-export function observeStamp(stamp: string | undefined): void {
-  if (!stamp) return;
-  const [msText, counterText] = stamp.split('.');
-  const ms = Number(msText);
-  const counter = Number(counterText);
-  if (!Number.isFinite(ms) || !Number.isFinite(counter)) return;
-  if (ms > lastMs || (ms === lastMs && counter > lastCounter)) {
-    lastMs = ms;
-    lastCounter = counter;
-  }
+/** A hybrid logical clock for one page (`id`: the tie-breaker between pages, 8 characters). */
+export function createStampClock(id: string): StampClock {
+  let lastMs = 0;
+  let lastCounter = 0;
+  return {
+    next(now = Date.now()) {
+      if (now > lastMs) {
+        lastMs = now;
+        lastCounter = 0;
+      } else {
+        lastCounter++;
+      }
+      return format(lastMs, lastCounter, id);
+    },
+    observe(stamp) {
+      if (!stamp) return;
+      const [msText, counterText] = stamp.split('.');
+      const ms = Number(msText);
+      const counter = Number(counterText);
+      if (!Number.isFinite(ms) || !Number.isFinite(counter)) return;
+      if (ms > lastMs || (ms === lastMs && counter > lastCounter)) {
+        lastMs = ms;
+        lastCounter = counter;
+      }
+    },
+  };
 }
+
+const pageClock = createStampClock(Math.random().toString(36).slice(2, 10).padEnd(8, '0'));
+
+/** The next stamp of this page (strictly greater than every stamp it issued or observed). */
+export const nextStamp = (now?: number): string => pageClock.next(now);
+
+/** Take note of a stamp read from storage, so that this page's next stamp is greater. */
+export const observeStamp = (stamp: string | undefined): void => pageClock.observe(stamp);
 
 /** The stamp that loses to every other: writes kept aside by a version without stamps carry it. */
 export const OLDEST_STAMP = '0';

@@ -1,6 +1,7 @@
 import { COUNTER_IONS } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
+import { nextStamp } from './field-stamps';
 import {
   RECORD_SCHEMA_VERSION,
   candidateRecordSchema,
@@ -208,6 +209,8 @@ export async function writeProjectFile(
         isDemo: false,
         compound: file.project.compound,
         settings: file.project.settings,
+        // Imported now: a write kept aside from before (a replay) is older than every field.
+        stampFloor: nextStamp(),
       });
 
       await db.projects.put(project);

@@ -1,10 +1,5 @@
 import { z } from 'zod';
-import {
-  OLDEST_STAMP,
-  fieldChangeSchema,
-  type FieldChange,
-  type FieldPatch,
-} from './field-stamps';
+import { OLDEST_STAMP, fieldChangeSchema, type FieldChange, type FieldPatch } from './field-stamps';
 
 /**
  * Edits that must survive the page going away. An IndexedDB write takes a few round trips between
@@ -61,7 +56,14 @@ const unsavedEditSchema = z.union([
       e.kind === 'compound'
         ? Object.entries(e.changes).map(([k, value]) => ({ path: ['compound', k], value }))
         : [{ path: ['settings', 'extra', e.key], value: e.value }];
-    return { id: e.id, kind: 'patch', table: 'projects', recordId: e.projectId, patch, stamp: OLDEST_STAMP };
+    return {
+      id: e.id,
+      kind: 'patch',
+      table: 'projects',
+      recordId: e.projectId,
+      patch,
+      stamp: OLDEST_STAMP,
+    };
   }),
 ]);
 /** A write kept aside: one stamped field patch of one record. */

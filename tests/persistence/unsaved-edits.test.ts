@@ -34,7 +34,9 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     // A write the page could not finish (the tab closed mid-transaction): it never settles.
     void first.trackWrite(first.compoundEdit(p.id, { meltingPointC: 150 }), never);
     expect(first.stashUnsavedEdits()).toBe(1);
-    expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toContain('"path":["compound","meltingPointC"],"value":150');
+    expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toContain(
+      '"path":["compound","meltingPointC"],"value":150',
+    );
 
     const second = await newPage();
     await expect(second.repo.replayUnsavedEdits()).resolves.toBe(1);
@@ -129,5 +131,24 @@ describe('a replay never writes an old value over a newer one (issue 18)', () =>
     const reload = await newPage();
     await reload.repo.replayUnsavedEdits();
     expect((await reload.repo.get(p.id))!.compound.meltingPointC).toBe(160);
+  });
+});
+
+describe('a replay after a project was replaced by an import', () => {
+  it('does not write the old edit over the imported project', async () => {
+    const tabA = await newPage();
+    const p = await tabA.repo.create('P', DEMO_COMPOUND);
+    void tabA.trackWrite(tabA.compoundEdit(p.id, { meltingPointC: 150 }), never);
+    tabA.stashUnsavedEdits();
+    const { exportProjectText, importProjectText } = await import('@/persistence/import-project');
+    const text = (await exportProjectText(p.id)).replace(
+      `"meltingPointC": ${DEMO_COMPOUND.meltingPointC}`,
+      '"meltingPointC": 200',
+    );
+    await importProjectText(text, { mode: 'replace', projectId: p.id });
+
+    const reload = await newPage();
+    await reload.repo.replayUnsavedEdits();
+    expect((await reload.repo.get(p.id))!.compound.meltingPointC).toBe(200);
   });
 });

@@ -16,7 +16,12 @@ export const isoDate = z.string().min(1).max(40);
 
 /** A shortlisted candidate as it appears in the file (ids are the exporting database's own). */
 /** What a file never carries: the importing database assigns these (stamps: field-stamps.ts). */
-const ASSIGNED = { schemaVersion: true, projectId: true, fieldStamps: true, stampFloor: true } as const;
+const ASSIGNED = {
+  schemaVersion: true,
+  projectId: true,
+  fieldStamps: true,
+  stampFloor: true,
+} as const;
 
 const fileCandidateSchema = candidateRecordSchema.omit(ASSIGNED);
 
