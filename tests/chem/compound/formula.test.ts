@@ -110,7 +110,7 @@ describe('structures (openchemlib, loaded lazily)', () => {
 
   it('turns a bad SMILES into a field message', async () => {
     await expect(parseStructure('C1CC(')).rejects.toThrow(
-      /smiles: "C1CC(" is not a complete SMILES/,
+      /smiles: "C1CC\(" is not a complete SMILES/,
     );
     await expect(parseStructure('   ')).rejects.toThrow(/empty/);
   });

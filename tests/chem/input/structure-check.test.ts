@@ -68,7 +68,7 @@ describe('readSmilesStrictly', () => {
         skipEmptyLines: true,
       }).data;
     const smiles = [
-      ...COUNTER_IONS.flatMap((i) => [i.smiles, i.parent.smiles]),
+      ...COUNTER_IONS.flatMap((i) => [i.ionSmiles, i.parent.smiles]),
       ...rows('salt-solubility.csv').map((r) => r.counter_ion_parent_smiles),
       ...rows('salt-solubility-drugs.csv').map((r) => r.drug_smiles),
     ].filter((s): s is string => typeof s === 'string' && s.trim() !== '');
