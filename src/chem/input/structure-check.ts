@@ -132,7 +132,7 @@ export function readSmilesStrictly(
   } catch (err) {
     const raw = err instanceof Error ? err.message : String(err);
     const reason = raw.replace(/^.*SmilesParser:\s*/i, '').trim() || 'not a valid SMILES';
-    throw new ChemInputError(field, `cannot read ${shown(text)} (${reason})`, SMILES_ACCEPTED);
+    throw new ChemInputError(field, `cannot read this SMILES (${reason})`, SMILES_ACCEPTED);
   }
   const read = mol.getAllAtoms();
   if (read === 0) throw new ChemInputError(field, 'no atoms found', SMILES_ACCEPTED);
