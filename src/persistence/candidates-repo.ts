@@ -2,6 +2,7 @@ import { saltStoichiometryFromCharges } from '@/chem';
 import { getDb } from './db';
 import { changesSetting } from './field-stamps';
 import { patchRecord } from './stamped-writes';
+import { requireRoomInProject } from './project-limits';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, candidateRecordSchema, type CandidateRecord } from './records';
 
@@ -37,6 +38,9 @@ export const candidatesRepo = {
     },
   ): Promise<CandidateRecord> => {
     const db = getDb();
+    const already = await db.candidates.where({ projectId, ionId }).first();
+    if (already) return already;
+    await requireRoomInProject(projectId, 'candidates', { ionId, ...stoichiometry });
     return db.transaction('rw', db.candidates, async () => {
       const existing = await db.candidates.where({ projectId, ionId }).first();
       if (existing) return existing;

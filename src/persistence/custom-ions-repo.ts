@@ -7,6 +7,7 @@ import {
 import { getDb } from './db';
 import { changesBetween } from './field-stamps';
 import { patchRecord } from './stamped-writes';
+import { requireRoomInProject } from './project-limits';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, customIonRecordSchema, type CustomIonRecord } from './records';
 
@@ -26,6 +27,10 @@ export const customIonsRepo = {
       schemaVersion: RECORD_SCHEMA_VERSION,
       updatedAt: nowIso(),
     });
+    const isNew = !(await getDb().customIons.get(record.id));
+    if (isNew && record.projectId !== null) {
+      await requireRoomInProject(record.projectId, 'customIons', record);
+    }
     await getDb().customIons.put(record);
     return record;
   },

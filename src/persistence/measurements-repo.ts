@@ -1,6 +1,7 @@
 import { getDb } from './db';
 import { changesSetting } from './field-stamps';
 import { patchRecord } from './stamped-writes';
+import { requireRoomInProject } from './project-limits';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, measurementRecordSchema, type MeasurementRecord } from './records';
 
@@ -14,7 +15,10 @@ export const measurementsRepo = {
   listForCandidate: (candidateId: string): Promise<MeasurementRecord[]> =>
     getDb().measurements.where('candidateId').equals(candidateId).toArray(),
 
-  /** Validate and store a measurement; an invalid one throws and nothing is stored. */
+  /**
+   * Validate and store a measurement; an invalid one, or one the project has no room for
+   * (project-limits.ts), throws and nothing is stored.
+   */
   add: async (m: NewMeasurement): Promise<MeasurementRecord> => {
     const record = measurementRecordSchema.parse({
       ...m,
@@ -22,6 +26,7 @@ export const measurementsRepo = {
       schemaVersion: RECORD_SCHEMA_VERSION,
       recordedAt: nowIso(),
     });
+    await requireRoomInProject(record.projectId, 'measurements', record);
     await getDb().measurements.add(record);
     return record;
   },
