@@ -11,8 +11,18 @@ export const RECORD_SCHEMA_VERSION = 1;
 
 /** A record id; bounded so that a hostile project file cannot carry megabyte-long ids. */
 const recordId = z.string().min(1).max(200);
-/** An ISO 8601 date-time as written by `new Date().toISOString()`. */
-const isoDate = z.string().min(1).max(40);
+/**
+ * An ISO 8601 date-time as `Date.prototype.toISOString` writes it (UTC, or with an offset), and a real
+ * date ("not a date" and 2026-13-45 are refused).
+ */
+export const isoDate = z
+  .string()
+  .max(40)
+  .regex(
+    /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})$/,
+    'must be an ISO 8601 date-time, e.g. 2026-12-03T07:00:00.000Z',
+  )
+  .refine((s) => Number.isFinite(Date.parse(s)), 'is not a real date');
 
 export const projectSettingsSchema = z.object({
   /**

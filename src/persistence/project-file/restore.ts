@@ -9,6 +9,7 @@ import {
 } from './format';
 import { projectFileSchema, type ProjectFile } from './schema';
 import { looksTruncated } from './truncation';
+import { checkFileRules } from './file-rules';
 import { upgradeV1 } from './upgrade-v1';
 
 /**
@@ -46,6 +47,7 @@ export function restoreProjectFile(raw: unknown): ProjectFile {
   if (version === 1) current = upgradeV1(current);
   const result = projectFileSchema.safeParse(current);
   if (!result.success) throw invalidFileError(result.error);
+  checkFileRules(raw, result.data);
   return result.data;
 }
 

@@ -3,13 +3,14 @@ import {
   candidateRecordSchema,
   checkCustomIonPayload,
   customIonRecordFields,
+  isoDate,
   measurementRecordSchema,
   projectRecordSchema,
 } from '../records';
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_LIMITS, PROJECT_FILE_VERSION } from './format';
 
-/** An ISO 8601 date-time (bounded). */
-export const isoDate = z.string().min(1).max(40);
+/** An ISO 8601 date-time (bounded, a real date): the one rule of the stored records. */
+export { isoDate };
 
 // Every record in a file is checked by the schema of the stored record it becomes (records.ts), minus
 // the fields the importing database assigns (schemaVersion, projectId); nothing is declared twice.
