@@ -15,6 +15,7 @@ import {
 } from './records';
 import { buildProjectFile, serializeProjectFile, type ProjectBundle } from './project-file/build';
 import { parseProjectFileText } from './project-file/restore';
+import { checkFileStructures } from './project-file/file-rules';
 import type { ProjectFile } from './project-file/schema';
 
 /** Read everything a project file holds for one project. */
@@ -235,5 +236,6 @@ export async function writeProjectFile(
  */
 export async function importProjectText(text: string, target: ImportMode): Promise<ImportOutcome> {
   const file = parseProjectFileText(text);
+  await checkFileStructures(file);
   return writeProjectFile(file, target);
 }

@@ -1,4 +1,9 @@
-import { getCounterIon, saltStoichiometryFromCharges } from '@/chem';
+import {
+  ChemInputError,
+  getCounterIon,
+  parseStructure,
+  saltStoichiometryFromCharges,
+} from '@/chem';
 import { ProjectFileError } from './errors';
 import type { ProjectFile } from './schema';
 
@@ -80,6 +85,27 @@ export function checkFileRules(raw: unknown, file: ProjectFile): void {
       'invalid',
       `This project file does not pass validation: ${problems.slice(0, 3).join('; ')}${problems.length > 3 ? ' …' : ''}`,
       problems.slice(0, 20),
+    );
+  }
+}
+
+/**
+ * The one structure check on the file's compound SMILES (openchemlib, loaded on demand): a SMILES it
+ * cannot read completely, or with several components (`C1CC((((`, `CCN.Cl`), is refused with the
+ * field named. Throws {@link ProjectFileError}.
+ */
+export async function checkFileStructures(file: ProjectFile): Promise<void> {
+  const smiles = file.project.compound.smiles.trim();
+  if (smiles === '') return;
+  const field = 'project.compound.smiles';
+  try {
+    await parseStructure(smiles, { field });
+  } catch (err) {
+    if (!(err instanceof ChemInputError)) throw err;
+    throw new ProjectFileError(
+      'invalid',
+      `This project file does not pass validation: ${field}: ${err.message}`,
+      [`${field}: ${err.message}`],
     );
   }
 }

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
-import { exportProjectText } from '@/persistence/import-project';
+import { exportProjectText, importProjectText } from '@/persistence/import-project';
 import { ProjectFileError } from '@/persistence/project-file/errors';
 import { parseProjectFile } from '@/persistence/project-file/restore';
 import { projectsRepo } from '@/persistence/projects-repo';
@@ -107,6 +107,18 @@ describe('a project file that breaks a rule of the forms is refused, the field n
     const err = refusal(edit((d) => (d.project.name = 'Salt \u202Egnp.exe')));
     expect(err.message).toMatch(/project\.name: contains a hidden text-direction control/);
   });
+});
+
+describe('the structure check on import', () => {
+  it.each(['C1CC((((', 'CCN.Cl', 'CN1CCN(CC1)c1ccc(cc1)C('])(
+    'refuses the SMILES %s, the field named',
+    async (smiles) => {
+      const bad = edit((d) => (d.project.compound.smiles = smiles));
+      await expect(importProjectText(bad, { mode: 'new' })).rejects.toThrow(
+        /project\.compound\.smiles/,
+      );
+    },
+  );
 });
 
 describe('random damage to a project file (fast-check, fixed seed)', () => {

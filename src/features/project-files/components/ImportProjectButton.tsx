@@ -2,6 +2,7 @@ import { useId, useRef, useState } from 'react';
 import { ProjectFileError } from '@/persistence/project-file/errors';
 import { PROJECT_FILE_MAX_BYTES } from '@/persistence/project-file/format';
 import { parseProjectFile } from '@/persistence/project-file/restore';
+import { checkFileStructures } from '@/persistence/project-file/file-rules';
 import type { ProjectFile } from '@/persistence/project-file/schema';
 import { writeProjectFile, type ImportOutcome } from '@/persistence/import-project';
 import '../project-files.css';
@@ -57,6 +58,7 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
     setStep({ kind: 'reading' });
     try {
       const file = parseProjectFile(await readFileBytes(f));
+      await checkFileStructures(file);
       setStep({ kind: 'ready', fileName: f.name, file, confirmReplace: false });
     } catch (err) {
       if (err instanceof ProjectFileError) {
