@@ -135,4 +135,61 @@ describe('two pages of one browser on one project (Chromium, production build)',
     await c.getByRole('button', { name: 'Remove medium Buffer from B' }).waitFor();
     expect(s.errors).toEqual([]);
   });
+
+  it('bench data: A sets a hydrate; B, opened before, records a measurement and another hydrate: all kept', async () => {
+    const { page: a } = s;
+    await openDemo(a);
+    const b = await freshPage();
+    const water = (p: Page) => p.getByLabel(/Water of crystallisation/);
+    const pick = async (p: Page, name: RegExp) =>
+      p
+        .getByRole('navigation', { name: 'Shortlisted candidates' })
+        .getByRole('button', { name })
+        .click();
+    for (const p of [a, b]) await area(p, 'Bench data');
+    await pick(a, /Mesylate/);
+    await pick(b, /Mesylate/);
+    await water(a).fill('0.5');
+    const form = b.getByRole('form', { name: /New measurement for Mesylate/ });
+    await form.getByLabel(/^Solubility/).fill('4.2');
+    await form.getByLabel('pH at equilibrium').fill('3.1');
+    await form.getByRole('button', { name: 'Save measurement' }).click();
+    await b.getByText(/Saved: solubility for Mesylate/).waitFor();
+    await pick(b, /Chloride/);
+    await water(b).fill('1');
+    await b.waitForTimeout(800);
+    const c = await freshPage();
+    await area(c, 'Bench data');
+    await pick(c, /Mesylate/);
+    await expect(water(c).inputValue()).resolves.toBe('0.5');
+    await c.getByText(/4\.2/).first().waitFor();
+    await pick(c, /Chloride/);
+    await expect(water(c).inputValue()).resolves.toBe('1');
+    expect(s.errors).toEqual([]);
+  });
+
+  it('counter-ion edits: A keeps a note, B (form opened before) changes the pKa values: both kept', async () => {
+    const { page: a } = s;
+    await openDemo(a);
+    const b = await freshPage();
+    const openMesylate = async (p: Page) => {
+      await area(p, 'Counter-ions');
+      await p.getByLabel('Search counter-ions').fill('Mesylate');
+      await p.getByRole('button', { name: 'Mesylate', exact: true }).click();
+      return p.getByRole('form', { name: 'Edit Mesylate for this project' });
+    };
+    const formA = await openMesylate(a);
+    const formB = await openMesylate(b);
+    await formA.getByLabel('Note').fill('Note kept by tab A');
+    await formA.getByRole('button', { name: 'Save for this project' }).click();
+    await a.getByText('Saved for this project.', { exact: false }).waitFor();
+    await formB.getByLabel('pKa values').fill('-1.5');
+    await formB.getByRole('button', { name: 'Save for this project' }).click();
+    await b.getByText('Saved for this project.', { exact: false }).waitFor();
+    const c = await freshPage();
+    const formC = await openMesylate(c);
+    await expect(formC.getByLabel('Note').inputValue()).resolves.toBe('Note kept by tab A');
+    await expect(formC.getByLabel('pKa values').inputValue()).resolves.toBe('-1.5');
+    expect(s.errors).toEqual([]);
+  });
 });
