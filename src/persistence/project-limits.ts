@@ -28,6 +28,7 @@ export async function requireRoomInProject(
       `This project already holds ${count.toLocaleString('en')} ${words[kind]}, the most one project can hold (${PROJECT_LIMITS[kind].toLocaleString('en')}). Start another project for more.`,
     );
   }
+  if (!(await db.projects.get(projectId))) return; // no project, no file to keep importable
   const bytes =
     utf8ByteLength(await exportProjectText(projectId)) + utf8ByteLength(JSON.stringify(added)) + 1;
   if (bytes > PROJECT_LIMITS.exportBytes) {

@@ -142,9 +142,10 @@ describe('a replay after a project was replaced by an import', () => {
     tabA.stashUnsavedEdits();
     const { exportProjectText, importProjectText } = await import('@/persistence/import-project');
     const text = (await exportProjectText(p.id)).replace(
-      `"meltingPointC": ${DEMO_COMPOUND.meltingPointC}`,
-      '"meltingPointC": 200',
+      `"meltingPointC":${DEMO_COMPOUND.meltingPointC}`,
+      '"meltingPointC":200',
     );
+    expect(text).toContain('"meltingPointC":200');
     await importProjectText(text, { mode: 'replace', projectId: p.id });
 
     const reload = await newPage();
