@@ -2,7 +2,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { SALT_SOLUBILITY_FUSION_MODEL } from '@/chem';
+import { SALT_SOLUBILITY_FUSION_CHECK } from '@/chem';
 import { screenCommand } from '@/cli/commands/screen/screen-command';
 import { captureIo } from './support/capture-io';
 import { TEST_COMPOUND_ARGS } from './support/test-compound';
@@ -75,7 +75,8 @@ describe('saltsmith screen --format json: measure_next', () => {
     const list = JSON.parse((await run(BASE)).out).measure_next as Entry[];
     const mp = list.filter((e) => e.measurement === 'melting-point');
     expect(mp.length).toBeGreaterThan(0);
-    if (SALT_SOLUBILITY_FUSION_MODEL === null) for (const e of mp) expect(e.value).toBe(0);
+    if (!SALT_SOLUBILITY_FUSION_CHECK.fusionCorrectionApplies)
+      for (const e of mp) expect(e.value).toBe(0);
   });
 
   it('does not propose again a solubility already measured (its σ is narrow)', async () => {

@@ -13,8 +13,13 @@ import type { ScreeningWeights } from './settings';
  * - one shared shift of the drug's pKa (σ by the pKa's origin) — moves every ΔpKa and pH_max together;
  * - one shared shift of log S₀ (measured or GSE) — moves free-form-limited dose numbers, and the
  *   salt-limited ones whose K_sp is anchored on S₀;
- * - per candidate, an independent shift of its salt-limited log solubility (the K_sp estimate's own
- *   spread, or the measurement's) — moves its salt-limited dose numbers and its pH_max.
+ * - one shared level of the salt-solubility model (σ `saltSharedLog10Sigma`): about half of the
+ *   model's cross-validated error is a level common to every salt of one drug (salt-solubility/
+ *   model-evidence.ts), so it is drawn ONCE per drug per iteration and moves every model-estimated
+ *   salt of the drug together;
+ * - per candidate, an independent shift of its salt-limited log solubility (σ `saltLog10Sigma`: the
+ *   model's within-series part, or the measurement's spread) — moves its salt-limited dose numbers
+ *   and its pH_max.
  * The draw is one function, {@link drawRobustnessPerturbation}, and its effect on a candidate's
  * criteria another, {@link perturbedCriteria}, so other Monte Carlo users (measure-next/) sample
  * exactly the same way.
@@ -29,8 +34,13 @@ export interface RobustnessRow {
   deltaPka: number | null;
   worstSolid: 'salt' | 'free-form' | null;
   gastricSolid: 'salt' | 'free-form' | null;
-  /** Independent 1σ of the salt-limited log₁₀ solubility, decades. */
+  /** Independent (per-candidate) 1σ of the salt-limited log₁₀ solubility, decades. */
   saltLog10Sigma: number;
+  /**
+   * 1σ of the salt-solubility model's level shared by every salt of the drug, decades: drawn once per
+   * drug per iteration (absent or 0 for measured and anchored values).
+   */
+  saltSharedLog10Sigma?: number;
   /** True when the salt-limited solubility is anchored on S₀ (estimated K_sp). */
   saltAnchoredOnIntrinsic: boolean;
 }
@@ -57,13 +67,16 @@ export interface RobustnessDraw {
   dPka: number;
   /** Shift of log₁₀ S₀ (shared). */
   dLog10S0: number;
+  /** Standard normal deviate of the salt-solubility model's shared per-drug level (0 if not drawn). */
+  zSaltShared?: number;
   /** Per row (same order as the rows drawn for): total shift of its salt-limited log₁₀ solubility. */
   saltShift: Float64Array;
 }
 
 /**
- * Draw one perturbation for the given rows: the pKa shift, the S₀ shift, then each row's own salt
- * shift (plus the S₀ shift when the estimate is anchored on S₀). Consumes 2 + rows.length normal
+ * Draw one perturbation for the given rows: the pKa shift, the S₀ shift, the salt model's shared
+ * per-drug level (once), then each row's own salt shift = within part + shared level × the row's
+ * shared σ + the S₀ shift when the estimate is anchored on S₀. Consumes 3 + rows.length normal
  * deviates, in that order. `out` may be passed to reuse its array.
  */
 export function drawRobustnessPerturbation(
@@ -79,9 +92,14 @@ export function drawRobustnessPerturbation(
   };
   d.dPka = rng.normal() * shared.drugPkaSigma;
   d.dLog10S0 = rng.normal() * shared.log10IntrinsicSigma;
+  const z = rng.normal();
+  d.zSaltShared = z;
   for (let i = 0; i < rows.length; i++) {
     const r = rows[i]!;
-    d.saltShift[i] = rng.normal() * r.saltLog10Sigma + (r.saltAnchoredOnIntrinsic ? d.dLog10S0 : 0);
+    d.saltShift[i] =
+      rng.normal() * r.saltLog10Sigma +
+      z * (r.saltSharedLog10Sigma ?? 0) +
+      (r.saltAnchoredOnIntrinsic ? d.dLog10S0 : 0);
   }
   return d;
 }

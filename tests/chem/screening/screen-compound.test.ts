@@ -329,7 +329,7 @@ describe('rankRobustness (Monte Carlo)', () => {
     expect(a.reduce((s, x) => s + x.pTop3, 0)).toBeCloseTo(3, 9);
   });
   it('without uncertainty the deterministic top three stay there every time', () => {
-    const fixed = rows.map((x) => ({ ...x, saltLog10Sigma: 0 }));
+    const fixed = rows.map((x) => ({ ...x, saltLog10Sigma: 0, saltSharedLog10Sigma: 0 }));
     const a = rankRobustness(
       fixed,
       w,

@@ -1,8 +1,5 @@
 import type { ScreenRow } from '../screen/screen.types';
-import {
-  SALT_SOLUBILITY_FUSION_MODEL,
-  SALT_SOLUBILITY_MODEL,
-} from '../salt-solubility/salt-solubility-model.data';
+import { SALT_SOLUBILITY_FUSION_CHECK } from '../salt-solubility/salt-solubility-model.data';
 
 /**
  * What one bench measurement would tell the screen about one candidate, as the share of that
@@ -39,16 +36,20 @@ export interface FusionPathCheck {
 }
 
 /**
- * The shipped model's fusion path: a fusion variant is shipped only when cross-validation favoured it
- * (SALT_SOLUBILITY_FUSION_MODEL, null otherwise). The one place measure-next reads it.
+ * The shipped model's fusion path: the melting-point correction is applied only when its generated
+ * leave-one-drug-out check on the published salts with a melting point favoured it
+ * (SALT_SOLUBILITY_FUSION_CHECK, salt-solubility/model-evidence.ts). The one place measure-next reads it.
  */
 export function shippedFusionPath(): FusionPathCheck {
-  const main = SALT_SOLUBILITY_MODEL as { readonly cvRmseLog10: number | null };
-  const fusion = SALT_SOLUBILITY_FUSION_MODEL as { readonly cvRmseLog10: number | null } | null;
+  const c = SALT_SOLUBILITY_FUSION_CHECK as {
+    readonly fusionCorrectionApplies: boolean;
+    readonly rmseWithout: number | null;
+    readonly rmseWith: number | null;
+  };
   return {
-    applies: fusion !== null,
-    rmseWithout: main.cvRmseLog10,
-    rmseWith: fusion?.cvRmseLog10 ?? null,
+    applies: c.fusionCorrectionApplies,
+    rmseWithout: c.rmseWithout,
+    rmseWith: c.rmseWith,
   };
 }
 

@@ -14,6 +14,8 @@ export { LIBRARY_COUNTER_ION_DESCRIPTORS } from './library-descriptors.data';
 export {
   estimateSaltWaterSolubility,
   SALT_SOLUBILITY_CV_RMSE_LOG10,
+  SALT_SOLUBILITY_SHARED_LOG10_SD,
+  SALT_SOLUBILITY_WITHIN_LOG10_SD,
   DRIVER_THRESHOLD_DECADES,
   type SaltWaterSolubilityEstimate,
   type SolubilityDriver,
@@ -23,7 +25,10 @@ export {
 export { SALT_SOLUBILITY_FEATURES, type SaltSolubilityInput } from './salt-solubility-features';
 export {
   SALT_SOLUBILITY_MODEL,
-  SALT_SOLUBILITY_FUSION_MODEL,
+  SALT_SOLUBILITY_SELECTION,
+  SALT_SOLUBILITY_FUSION_CHECK,
+  SALT_SOLUBILITY_DIVALENT_CATIONS,
+  SALT_SOLUBILITY_DOMAIN,
   SALT_SOLUBILITY_VARIANTS,
   SALT_SOLUBILITY_SERIES,
 } from './salt-solubility-model.data';
@@ -34,3 +39,9 @@ export {
   type FusionHeatCapacityAssumption,
 } from './fusion';
 export { spearmanRho } from './rank-statistics';
+export {
+  descriptorGainWords,
+  sigmaSplitWords,
+  fusionCheckWords,
+  divalentCationWords,
+} from './evidence-words';

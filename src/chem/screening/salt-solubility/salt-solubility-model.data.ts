@@ -3,7 +3,12 @@
 // Do not edit: change the data or the method and run the script; tests/chem/screening/salt-solubility
 // fails when this file is not what the script produces.
 
-/** The shipped water-solubility model (ridge regression in log₁₀ units; rule: of the pooled and within-series fits, the one with the higher mean within-series Spearman ρ under LODO (the screen ranks salts of one drug), the lower LODO RMSE breaking a tie within 0.05; the ΔH_sol term kept only if it raises that ρ by ≥ 0.05 without raising the RMSE by more than 0.02; the fusion variant used only if it beats the descriptors-only model on the same salts by ≥ 0.02 in RMSE). */
+/**
+ * The shipped water-solubility model (ridge regression in log₁₀ units). cvRmseLog10 is the
+ * leave-one-drug-out error of the whole procedure with the variant chosen inside each outer fold;
+ * sharedLog10Sd (one level per drug) and withinLog10Sd (salt by salt) split it (model-evidence.ts).
+ * Rule: pooled or within-series: the higher leave-one-drug-out mean within-series Spearman ρ (the screen ranks salts of one drug), the lower RMSE breaking a tie within 0.05; the ΔH_sol term kept, and then the counter-ion descriptors kept over the no-descriptor baseline, only if they beat the simpler model: ρ higher by ≥ 0.05 with RMSE worse by ≤ 0.02, or RMSE lower by ≥ 0.02 with ρ no lower. Applied inside every outer fold on its training drugs (fully nested) and once on every drug for the shipped model.
+ */
 export const SALT_SOLUBILITY_MODEL = {
   "id": "within-series",
   "kind": "within-series",
@@ -55,114 +60,199 @@ export const SALT_SOLUBILITY_MODEL = {
   ],
   "lambda": 300,
   "cvRmseLog10": 0.8594392127,
+  "sharedLog10Sd": 0.5068717332,
+  "withinLog10Sd": 0.6940582154,
   "nSalts": 48,
   "nDrugs": 22
 } as const;
 
-/** The fusion variant for salts with bench melting data, or null when cross-validation did not favour it. */
-export const SALT_SOLUBILITY_FUSION_MODEL = null;
+/** The whole procedure cross-validated fully nested, with the no-descriptor baseline and the old anchor on the same folds. */
+export const SALT_SOLUBILITY_SELECTION = {
+  "id": "within-series",
+  "kind": "nested selection",
+  "nSalts": 48,
+  "nDrugs": 22,
+  "nRankedSeries": 5,
+  "rmse": 0.8594392127,
+  "meanSpearman": 0.4641834896,
+  "medianSpearman": 0.5,
+  "leastSolubleHits": 4,
+  "baselineRmse": 0.8610679416,
+  "baselineMeanSpearman": 0,
+  "baselineLeastSolubleHits": 0,
+  "anchorRmse": 0.9378827592,
+  "anchorMeanSpearman": -0.3095228723,
+  "anchorLeastSolubleHits": 1
+} as const;
 
-/**
- * Melting points of the published training salts that report one, K. Their mean Schröder–van Laar
- * crystal term is the 'typical salt' the model's estimate stands for; a salt whose bench melting data
- * give a different crystal term is shifted by the difference (estimate-salt-solubility.ts).
- */
-export const SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K = [413.15,450.65,458.65,471.15,471.65,479.15,491.65,499.95] as const;
-
-/** Nested leave-one-drug-out cross-validation of every variant, with today's anchor on the same folds. */
+/** Every variant, leave-one-drug-out with λ chosen inside each fold, beside the baseline and the anchor on the same folds. */
 export const SALT_SOLUBILITY_VARIANTS = [
+  {
+    "id": "no-descriptor",
+    "kind": "within-series",
+    "nSalts": 48,
+    "nDrugs": 22,
+    "nRankedSeries": 5,
+    "rmse": 0.8610679416,
+    "meanSpearman": 0,
+    "medianSpearman": 0,
+    "leastSolubleHits": 0,
+    "baselineRmse": 0.8610679416,
+    "baselineMeanSpearman": 0,
+    "baselineLeastSolubleHits": 0,
+    "anchorRmse": 0.9378827592,
+    "anchorMeanSpearman": -0.3095228723,
+    "anchorLeastSolubleHits": 1
+  },
   {
     "id": "pooled",
     "kind": "pooled",
     "nSalts": 48,
     "nDrugs": 22,
+    "nRankedSeries": 5,
     "rmse": 0.9326578156,
-    "anchorRmse": 0.9378827592,
     "meanSpearman": 0.3509087297,
-    "anchorMeanSpearman": -0.3095228723,
     "medianSpearman": 0.5,
-    "anchorMedianSpearman": -0.372934927,
-    "leastSolubleHitRate": 0.8,
-    "anchorLeastSolubleHitRate": 0.2
+    "leastSolubleHits": 4,
+    "baselineRmse": 0.8610679416,
+    "baselineMeanSpearman": 0,
+    "baselineLeastSolubleHits": 0,
+    "anchorRmse": 0.9378827592,
+    "anchorMeanSpearman": -0.3095228723,
+    "anchorLeastSolubleHits": 1
   },
   {
     "id": "pooled+thermo",
     "kind": "pooled",
     "nSalts": 48,
     "nDrugs": 22,
+    "nRankedSeries": 5,
     "rmse": 0.8462796028,
-    "anchorRmse": 0.9378827592,
     "meanSpearman": 0.1791290969,
-    "anchorMeanSpearman": -0.3095228723,
     "medianSpearman": 0.5,
-    "anchorMedianSpearman": -0.372934927,
-    "leastSolubleHitRate": 0.6,
-    "anchorLeastSolubleHitRate": 0.2
+    "leastSolubleHits": 3,
+    "baselineRmse": 0.8610679416,
+    "baselineMeanSpearman": 0,
+    "baselineLeastSolubleHits": 0,
+    "anchorRmse": 0.9378827592,
+    "anchorMeanSpearman": -0.3095228723,
+    "anchorLeastSolubleHits": 1
   },
   {
     "id": "within-series",
     "kind": "within-series",
     "nSalts": 48,
     "nDrugs": 22,
+    "nRankedSeries": 5,
     "rmse": 0.8594392127,
-    "anchorRmse": 0.9378827592,
     "meanSpearman": 0.4641834896,
-    "anchorMeanSpearman": -0.3095228723,
     "medianSpearman": 0.5,
-    "anchorMedianSpearman": -0.372934927,
-    "leastSolubleHitRate": 0.8,
-    "anchorLeastSolubleHitRate": 0.2
+    "leastSolubleHits": 4,
+    "baselineRmse": 0.8610679416,
+    "baselineMeanSpearman": 0,
+    "baselineLeastSolubleHits": 0,
+    "anchorRmse": 0.9378827592,
+    "anchorMeanSpearman": -0.3095228723,
+    "anchorLeastSolubleHits": 1
   },
   {
     "id": "within-series+thermo",
     "kind": "within-series",
     "nSalts": 48,
     "nDrugs": 22,
+    "nRankedSeries": 5,
     "rmse": 0.8606062161,
-    "anchorRmse": 0.9378827592,
     "meanSpearman": 0.3521069611,
-    "anchorMeanSpearman": -0.3095228723,
     "medianSpearman": 0.5,
-    "anchorMedianSpearman": -0.372934927,
-    "leastSolubleHitRate": 0.8,
-    "anchorLeastSolubleHitRate": 0.2
-  },
-  {
-    "id": "pooled+fusion",
-    "kind": "pooled",
-    "nSalts": 8,
-    "nDrugs": 8,
-    "rmse": 1.034718514,
-    "anchorRmse": 0.8033764776,
-    "meanSpearman": null,
-    "anchorMeanSpearman": null,
-    "medianSpearman": null,
-    "anchorMedianSpearman": null,
-    "leastSolubleHitRate": null,
-    "anchorLeastSolubleHitRate": null
-  },
-  {
-    "id": "pooled-on-fusion-subset",
-    "kind": "pooled",
-    "nSalts": 8,
-    "nDrugs": 8,
-    "rmse": 0.9702336056,
-    "anchorRmse": 0.8033764776,
-    "meanSpearman": null,
-    "anchorMeanSpearman": null,
-    "medianSpearman": null,
-    "anchorMedianSpearman": null,
-    "leastSolubleHitRate": null,
-    "anchorLeastSolubleHitRate": null
+    "leastSolubleHits": 4,
+    "baselineRmse": 0.8610679416,
+    "baselineMeanSpearman": 0,
+    "baselineLeastSolubleHits": 0,
+    "anchorRmse": 0.9378827592,
+    "anchorMeanSpearman": -0.3095228723,
+    "anchorLeastSolubleHits": 1
   }
 ] as const;
 
-/** Per-drug series of the shipped variant: each salt predicted by a model that never saw its drug. */
+/**
+ * The melting-point (Schröder–van Laar, Walden’s rule without ΔH_fus) correction judged leave-one-drug-out
+ * on every published salt with a melting point; applied to estimates only when fusionCorrectionApplies.
+ */
+export const SALT_SOLUBILITY_FUSION_CHECK = {
+  "nSalts": 8,
+  "nDrugs": 8,
+  "rmseWithout": 0.9653338282,
+  "rmseWith": 0.9116075972,
+  "nImproved": 3,
+  "nWorsened": 5,
+  "fusionCorrectionApplies": false
+} as const;
+
+/**
+ * Melting points of the published training salts that report one, K: their mean crystal term is the
+ * 'typical salt' the model's estimate stands for (the reference of the fusion correction).
+ */
+export const SALT_SOLUBILITY_REFERENCE_MELTING_POINTS_K = [413.15,450.65,458.65,471.15,471.65,479.15,491.65,499.95] as const;
+
+/** What the published set says about divalent cations with acids (model-evidence.ts, checkDivalentCations). */
+export const SALT_SOLUBILITY_DIVALENT_CATIONS = {
+  "pairs": [
+    {
+      "drugId": "salicylic-acid",
+      "label": "salicylic acid · strontium (2:1)",
+      "contrastDecades": -1.140109981,
+      "predictedContrastDecades": -0.1276050992
+    },
+    {
+      "drugId": "benzoic-acid",
+      "label": "benzoic acid · calcium (2:1)",
+      "contrastDecades": -0.9973259699,
+      "predictedContrastDecades": -0.04283602025
+    }
+  ],
+  "offsetDecades": -0.9834974157,
+  "rmseWithout": 0.9839250987,
+  "rmseWith": 0.05801493207,
+  "offsetApplies": true,
+  "extraWithinLog10Sd": 0.6940582154
+} as const;
+
+/** Range of each counter-ion predictor over the training salts: the applicability domain (OECD 2007, principle 3). */
+export const SALT_SOLUBILITY_DOMAIN = [
+  {
+    "name": "counterIonLogPParent",
+    "min": -2.710200012,
+    "max": 2.060199946,
+    "sd": 0.653937541
+  },
+  {
+    "name": "counterIonAromaticRings",
+    "min": 0,
+    "max": 1,
+    "sd": 0.1998263135
+  },
+  {
+    "name": "counterIonHBondDonorsAcceptors",
+    "min": 0,
+    "max": 11,
+    "sd": 3.032162663
+  },
+  {
+    "name": "counterIonHeavyAtoms",
+    "min": 1,
+    "max": 14,
+    "sd": 3.872479019
+  }
+] as const;
+
+/** Per-drug series, each salt predicted by the nested procedure without its drug, with the baseline and the anchor. */
 export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "apomorphine",
     "name": "apomorphine",
+    "variant": "within-series",
     "rmse": 0.2930036395,
+    "baselineRmse": 0.3930557564,
     "anchorRmse": 0.05230827314,
     "spearman": null,
     "anchorSpearman": null,
@@ -172,6 +262,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "apomorphine · chloride (1:1)",
         "measured": -1.145308216,
         "predicted": -1.438311855,
+        "baseline": -1.538363972,
         "anchor": -1.092999943
       }
     ]
@@ -179,7 +270,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "atropine",
     "name": "atropine",
+    "variant": "within-series",
     "rmse": 0.5434862194,
+    "baselineRmse": 0.6250990676,
     "anchorRmse": 0.5215871521,
     "spearman": 1,
     "anchorSpearman": 1,
@@ -189,12 +282,14 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "atropine · sulfate (2:1)",
         "measured": 0.2944859839,
         "predicted": -0.4473051127,
+        "baseline": -0.3693775641,
         "anchor": 0.05994069086
       },
       {
         "label": "atropine · salicylate (1:1)",
         "measured": -0.9531436803,
         "predicted": -0.7518962944,
+        "baseline": -0.3693775641,
         "anchor": -0.2537905363
       }
     ]
@@ -202,7 +297,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "barbital",
     "name": "barbital",
+    "variant": "within-series",
     "rmse": 0.4969105491,
+    "baselineRmse": 0.2957248105,
     "anchorRmse": 0.7097806325,
     "spearman": null,
     "anchorSpearman": null,
@@ -212,6 +309,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "barbital · sodium (1:1)",
         "measured": -0.09230461626,
         "predicted": 0.4046059328,
+        "baseline": 0.2034201942,
         "anchor": 0.6174760162
       }
     ]
@@ -219,7 +317,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "benzoic-acid",
     "name": "benzoic acid",
+    "variant": "within-series",
     "rmse": 0.4120075747,
+    "baselineRmse": 0.4550498977,
     "anchorRmse": 0.4847779599,
     "spearman": 0.894427191,
     "anchorSpearman": null,
@@ -229,30 +329,35 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "benzoic acid · sodium (1:1)",
         "measured": 0.3641562639,
         "predicted": -0.02422785762,
+        "baseline": -0.1148448871,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · lithium (1:1)",
         "measured": 0.1936334552,
         "predicted": -0.02422785762,
+        "baseline": -0.1148448871,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · potassium (1:1)",
         "measured": 0.4233845083,
         "predicted": -0.02422785762,
+        "baseline": -0.1148448871,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · ammonium (1:1)",
         "measured": 0.1010288169,
         "predicted": -0.03661276029,
+        "baseline": -0.1148448871,
         "anchor": 0.321104356
       },
       {
         "label": "benzoic acid · calcium (2:1)",
         "measured": -0.7267752089,
         "predicted": -0.07016010354,
+        "baseline": -0.1148448871,
         "anchor": 0.321104356
       }
     ]
@@ -260,7 +365,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "cinchonidine",
     "name": "cinchonidine",
+    "variant": "within-series",
     "rmse": 0.008769391372,
+    "baselineRmse": 0.06973004302,
     "anchorRmse": 0.4940583544,
     "spearman": null,
     "anchorSpearman": null,
@@ -270,6 +377,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "cinchonidine · sulfate (2:1)",
         "measured": -1.573058159,
         "predicted": -1.564288767,
+        "baseline": -1.503328116,
         "anchor": -1.078999804
       }
     ]
@@ -277,7 +385,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "cinchonine",
     "name": "cinchonine",
+    "variant": "within-series",
     "rmse": 0.07565911391,
+    "baselineRmse": 0.01469846226,
     "anchorRmse": 0.4134675085,
     "spearman": null,
     "anchorSpearman": null,
@@ -287,6 +397,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "cinchonine · sulfate (2:1)",
         "measured": -1.492467313,
         "predicted": -1.568126427,
+        "baseline": -1.507165775,
         "anchor": -1.078999804
       }
     ]
@@ -294,7 +405,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "cocaine",
     "name": "cocaine",
+    "variant": "within-series",
     "rmse": 0.9590226577,
+    "baselineRmse": 1.059074775,
     "anchorRmse": 0.5834371533,
     "spearman": null,
     "anchorSpearman": null,
@@ -304,6 +417,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "cocaine · chloride (1:1)",
         "measured": 0.3226368267,
         "predicted": -0.636385831,
+        "baseline": -0.7364379479,
         "anchor": -0.2608003266
       }
     ]
@@ -311,7 +425,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "codeine",
     "name": "codeine",
+    "variant": "within-series",
     "rmse": 0.983465131,
+    "baselineRmse": 0.9557995601,
     "anchorRmse": 1.338778251,
     "spearman": 0.5,
     "anchorSpearman": -1,
@@ -321,18 +437,21 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "codeine · dihydrogen phosphate (1:1)",
         "measured": -0.1110610225,
         "predicted": 0.1694058998,
+        "baseline": 0.1863994003,
         "anchor": 0.4420284038
       },
       {
         "label": "codeine · sulfate (2:1)",
         "measured": -1.033421262,
         "predicted": 0.04671497562,
+        "baseline": 0.1863994003,
         "anchor": 0.6749556354
       },
       {
         "label": "codeine · chloride (1:1)",
         "measured": -0.8925877381,
         "predicted": 0.3943679738,
+        "baseline": 0.1863994003,
         "anchor": 0.5745598618
       }
     ]
@@ -340,7 +459,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "ephedrine",
     "name": "ephedrine ((-)-(1R,2S))",
+    "variant": "within-series",
     "rmse": 1.004511991,
+    "baselineRmse": 0.8033262527,
     "anchorRmse": 1.194309282,
     "spearman": null,
     "anchorSpearman": null,
@@ -350,6 +471,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "ephedrine ((-)-(1R,2S)) · chloride (1:1)",
         "measured": -0.003662983334,
         "predicted": 1.000849008,
+        "baseline": 0.7996632694,
         "anchor": 1.190646299
       }
     ]
@@ -357,7 +479,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "haloperidol",
     "name": "haloperidol",
+    "variant": "within-series",
     "rmse": 0.6524396355,
+    "baselineRmse": 0.7524917524,
     "anchorRmse": 0.290789723,
     "spearman": null,
     "anchorSpearman": null,
@@ -367,6 +491,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "haloperidol · chloride (1:1)",
         "measured": -2.138119466,
         "predicted": -2.790559102,
+        "baseline": -2.890611219,
         "anchor": -2.428909189
       }
     ]
@@ -374,7 +499,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "homatropine",
     "name": "homatropine",
+    "variant": "within-series",
     "rmse": 0.1620651011,
+    "baselineRmse": 0.03912063749,
     "anchorRmse": 0.3901554321,
     "spearman": null,
     "anchorSpearman": null,
@@ -384,6 +511,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "homatropine · bromide (1:1)",
         "measured": -0.5931554058,
         "predicted": -0.4310903047,
+        "baseline": -0.6322760433,
         "anchor": -0.2029999737
       }
     ]
@@ -391,7 +519,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "hyoscine",
     "name": "hyoscine (scopolamine)",
+    "variant": "within-series",
     "rmse": 0.5476685281,
+    "baselineRmse": 0.647720645,
     "anchorRmse": 0.1907809387,
     "spearman": null,
     "anchorSpearman": null,
@@ -401,6 +531,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "hyoscine (scopolamine) · bromide (1:1)",
         "measured": -0.1042190762,
         "predicted": -0.6518876043,
+        "baseline": -0.7519397212,
         "anchor": -0.2950000148
       }
     ]
@@ -408,7 +539,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "hyoscyamine",
     "name": "hyoscyamine",
+    "variant": "within-series",
     "rmse": 1.380366031,
+    "baselineRmse": 1.397949003,
     "anchorRmse": 1.075087015,
     "spearman": 1,
     "anchorSpearman": -1,
@@ -418,12 +551,14 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "hyoscyamine · sulfate (2:1)",
         "measured": 0.2719610784,
         "predicted": -1.165241511,
+        "baseline": -1.103032608,
         "anchor": -0.6120000426
       },
       {
         "label": "hyoscyamine · bromide (1:1)",
         "measured": 0.3175008104,
         "predicted": -1.003585665,
+        "baseline": -1.103032608,
         "anchor": -0.9195266408
       }
     ]
@@ -431,7 +566,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "ibuprofen",
     "name": "ibuprofen (racemic)",
+    "variant": "within-series",
     "rmse": 0.2769173108,
+    "baselineRmse": 0.3563942071,
     "anchorRmse": 0.706626317,
     "spearman": 0.9,
     "anchorSpearman": -0.9746794345,
@@ -441,30 +578,35 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "ibuprofen (racemic) · L-valine ethyl ester (1:1)",
         "measured": -1.802242746,
         "predicted": -1.948336167,
+        "baseline": -1.85041669,
         "anchor": -1.434403618
       },
       {
         "label": "ibuprofen (racemic) · L-valine propyl ester (1:1)",
         "measured": -1.937488664,
         "predicted": -1.960778901,
+        "baseline": -1.85041669,
         "anchor": -1.433651783
       },
       {
         "label": "ibuprofen (racemic) · L-valine isopropyl ester (1:1)",
         "measured": -2.022824927,
         "predicted": -1.960764098,
+        "baseline": -1.85041669,
         "anchor": -1.433651783
       },
       {
         "label": "ibuprofen (racemic) · L-valine butyl ester (1:1)",
         "measured": -2.084408676,
         "predicted": -1.973221635,
+        "baseline": -1.85041669,
         "anchor": -1.432644651
       },
       {
         "label": "ibuprofen (racemic) · L-valine hexyl ester (1:1)",
         "measured": -2.58574318,
         "predicted": -1.998107104,
+        "baseline": -1.85041669,
         "anchor": -1.430093927
       }
     ]
@@ -472,7 +614,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "morphine",
     "name": "morphine",
+    "variant": "within-series",
     "rmse": 1.094896012,
+    "baselineRmse": 0.9531845657,
     "anchorRmse": 0.5497530417,
     "spearman": -0.4,
     "anchorSpearman": 0.8,
@@ -482,24 +626,28 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "morphine · chloride (1:1)",
         "measured": -0.9729499412,
         "predicted": -1.333694653,
+        "baseline": -1.562185015,
         "anchor": -1.270578925
       },
       {
         "label": "morphine · sulfate (2:1)",
         "measured": -0.9215823259,
         "predicted": -1.705148351,
+        "baseline": -1.562185015,
         "anchor": -1.094015464
       },
       {
         "label": "morphine · acetate (1:1)",
         "measured": -0.1455413127,
         "predicted": -1.623329295,
+        "baseline": -1.562185015,
         "anchor": -1.059949373
       },
       {
         "label": "morphine · L-tartrate (2:1)",
         "measured": -0.6295574874,
         "predicted": -1.996019829,
+        "baseline": -1.562185015,
         "anchor": -1.13399314
       }
     ]
@@ -507,7 +655,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "physostigmine",
     "name": "physostigmine",
+    "variant": "within-series",
     "rmse": 1.186395875,
+    "baselineRmse": 1.180001165,
     "anchorRmse": 0.9520631956,
     "spearman": 1,
     "anchorSpearman": 1,
@@ -517,12 +667,14 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "physostigmine · sulfate (2:1)",
         "measured": 0.3920252069,
         "predicted": -1.233867547,
+        "baseline": -1.144631808,
         "anchor": -0.6969999634
       },
       {
         "label": "physostigmine · salicylate (1:1)",
         "measured": -1.79539345,
         "predicted": -1.381215836,
+        "baseline": -1.144631808,
         "anchor": -1.003640436
       }
     ]
@@ -530,7 +682,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "pilocarpine",
     "name": "pilocarpine",
+    "variant": "within-series",
     "rmse": 0.8580392249,
+    "baselineRmse": 0.7963944377,
     "anchorRmse": 1.187692549,
     "spearman": null,
     "anchorSpearman": null,
@@ -540,6 +694,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "pilocarpine · nitrate (1:1)",
         "measured": -0.3876925113,
         "predicted": 0.4703467136,
+        "baseline": 0.4087019263,
         "anchor": 0.800000038
       }
     ]
@@ -547,7 +702,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "piperazine",
     "name": "piperazine",
+    "variant": "within-series",
     "rmse": 2.662660591,
+    "baselineRmse": 2.785134081,
     "anchorRmse": 3.086034936,
     "spearman": null,
     "anchorSpearman": null,
@@ -557,6 +714,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "piperazine · hydrogen adipate (1:1)",
         "measured": -0.6232866861,
         "predicted": 2.039373905,
+        "baseline": 2.161847395,
         "anchor": 2.46274825
       }
     ]
@@ -564,7 +722,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "quinidine",
     "name": "quinidine",
+    "variant": "within-series",
     "rmse": 0.313261777,
+    "baselineRmse": 0.3742224287,
     "anchorRmse": 0.7847101771,
     "spearman": null,
     "anchorSpearman": null,
@@ -574,6 +734,7 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "quinidine · sulfate (2:1)",
         "measured": -1.597024972,
         "predicted": -1.283763195,
+        "baseline": -1.222802544,
         "anchor": -0.8123147952
       }
     ]
@@ -581,7 +742,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "quinine",
     "name": "quinine",
+    "variant": "within-series",
     "rmse": 0.9014558382,
+    "baselineRmse": 0.9096294009,
     "anchorRmse": 1.133762946,
     "spearman": 0.4264902571,
     "anchorSpearman": -0.372934927,
@@ -591,54 +754,63 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "quinine · sulfate (2:1)",
         "measured": -2.548240007,
         "predicted": -1.139311262,
+        "baseline": -1.155338756,
         "anchor": -0.4844004499
       },
       {
         "label": "quinine · chloride (1:1)",
         "measured": -1.211482429,
         "predicted": -1.075719472,
+        "baseline": -1.155338756,
         "anchor": -0.467552417
       },
       {
         "label": "quinine · chloride (1:2)",
         "measured": 0.04539380062,
         "predicted": -1.075719472,
+        "baseline": -1.155338756,
         "anchor": -0.7341194621
       },
       {
         "label": "quinine · bromide (1:1)",
         "measured": -1.28944105,
         "predicted": -1.075719472,
+        "baseline": -1.155338756,
         "anchor": -0.5885796606
       },
       {
         "label": "quinine · bromide (1:2)",
         "measured": -0.6349083277,
         "predicted": -1.075719472,
+        "baseline": -1.155338756,
         "anchor": -0.7341194621
       },
       {
         "label": "quinine · hydrogen sulfate (1:1)",
         "measured": -0.8184552131,
         "predicted": -1.081438816,
+        "baseline": -1.155338756,
         "anchor": -0.7799746882
       },
       {
         "label": "quinine · citrate (2:1)",
         "measured": -2.730364397,
         "predicted": -1.16575081,
+        "baseline": -1.155338756,
         "anchor": -0.7341194621
       },
       {
         "label": "quinine · hypophosphite (1:1)",
         "measured": -1.991212727,
         "predicted": -1.078579144,
+        "baseline": -1.155338756,
         "anchor": -0.7506981723
       },
       {
         "label": "quinine · lactate (1:1)",
         "measured": -0.4624944016,
         "predicted": -1.14303052,
+        "baseline": -1.155338756,
         "anchor": -0.8115771563
       }
     ]
@@ -646,7 +818,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "salicylic-acid",
     "name": "salicylic acid",
+    "variant": "within-series",
     "rmse": 0.5157190721,
+    "baselineRmse": 0.5708122198,
     "anchorRmse": 0.6960721096,
     "spearman": 1,
     "anchorSpearman": null,
@@ -656,12 +830,14 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "salicylic acid · sodium (1:1)",
         "measured": 0.5403600547,
         "predicted": 0.1324672976,
+        "baseline": -0.05908707873,
         "anchor": 0.3697467866
       },
       {
         "label": "salicylic acid · strontium (2:1)",
         "measured": -0.5997499262,
         "predicted": 0.004862198413,
+        "baseline": -0.05908707873,
         "anchor": 0.3697467866
       }
     ]
@@ -669,7 +845,9 @@ export const SALT_SOLUBILITY_SERIES = [
   {
     "drugId": "strychnine",
     "name": "strychnine",
+    "variant": "within-series",
     "rmse": 0.5099104224,
+    "baselineRmse": 0.4678700084,
     "anchorRmse": 0.3510772328,
     "spearman": 1,
     "anchorSpearman": -1,
@@ -679,12 +857,14 @@ export const SALT_SOLUBILITY_SERIES = [
         "label": "strychnine · sulfate (2:1)",
         "measured": -1.357351164,
         "predicted": -1.93494751,
+        "baseline": -1.799254009,
         "anchor": -1.350520407
       },
       {
         "label": "strychnine · nitrate (1:1)",
         "measured": -1.306784146,
         "predicted": -1.738524507,
+        "baseline": -1.799254009,
         "anchor": -1.803235339
       }
     ]

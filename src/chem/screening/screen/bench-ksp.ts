@@ -63,7 +63,8 @@ export function benchKspChoice(
   const all = p.measured!.allSolubilities;
   const readings = readBenchSolubilities(ctx, p, {
     log10Ksp: estimate.log10Ksp.value,
-    saltLog10Sigma: estimate.saltLog10Sigma,
+    // the estimate's whole spread: its per-salt part and the model's shared per-drug level
+    saltLog10Sigma: Math.hypot(estimate.saltLog10Sigma, estimate.saltSharedLog10Sigma ?? 0),
     anchored: estimate.anchored,
     basis: 'estimate',
   });

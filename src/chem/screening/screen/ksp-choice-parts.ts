@@ -7,8 +7,13 @@ import type { BenchSolubilityUse, Reason, SaltWaterSolubility, ScreenFlag } from
 export interface KspChoice {
   log10Ksp: Estimate;
   kspOrigin: 'measured' | 'estimated';
-  /** Spread of the salt's own log₁₀ solubility beyond that of S₀, decades (rank robustness draws it). */
+  /**
+   * Spread of the salt's own log₁₀ solubility beyond that of S₀, decades, drawn per candidate by the
+   * rank robustness; for a model estimate its within-series part only.
+   */
   saltLog10Sigma: number;
+  /** The model estimate's level shared by every salt of the drug, decades (drawn once per drug); absent or 0 otherwise. */
+  saltSharedLog10Sigma?: number;
   /** True when the salt's solubility is anchored on S₀ (so it moves with S₀ in the robustness draw). */
   anchored: boolean;
   reasons: Reason[];

@@ -75,13 +75,28 @@ function estimatedKsp(
       sources: est.log10DrugM.sources,
       notes: ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])],
     };
-    return estimatedChoice(
-      log10Ksp,
-      est.log10DrugM,
-      logS0.uncertainty,
-      saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers),
-      enthalpyReasons,
-    );
+    const saltWater: SaltWaterSolubility = {
+      ...saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers),
+      sharedLog10Sd: est.sharedLog10Sd,
+      withinLog10Sd: est.withinLog10Sd,
+      outsideTrainingRange: est.domain.outside,
+    };
+    // The estimate's remarks (outside the training range, divalent cation, melting data) as reasons.
+    const remarks: Reason[] = est.remarks.map((text) => ({
+      kind: 'note',
+      criterion: 'solubility',
+      text,
+    }));
+    const choice = estimatedChoice(log10Ksp, est.log10DrugM, logS0.uncertainty, saltWater, [
+      ...remarks,
+      ...enthalpyReasons,
+    ]);
+    // The shared per-drug level is drawn once per drug by the robustness Monte Carlo, the rest per salt.
+    return {
+      ...choice,
+      saltLog10Sigma: est.withinLog10Sd,
+      saltSharedLog10Sigma: est.sharedLog10Sd,
+    };
   }
   const k = estimateKsp({
     log10IntrinsicM: logS0,

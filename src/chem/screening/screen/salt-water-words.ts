@@ -24,6 +24,7 @@ export const SOLUBILITY_DRIVER_WORDS: Record<SolubilityDriverId, string> = {
   'exothermic-dissolution': 'less endothermic dissolution (ΔH_sol)',
   'high-melting-salt': 'high-melting salt',
   'low-melting-salt': 'low-melting salt',
+  'divalent-cation': 'divalent cation (published calcium and strontium salts of acids)',
 };
 
 /** Where a salt's water solubility came from, as a short label (tables, CSV). */

@@ -201,6 +201,7 @@ export function candidateRow(
       worstSolid: worst.solid,
       gastricSolid: gastric?.solid ?? null,
       saltLog10Sigma: ksp.saltLog10Sigma,
+      saltSharedLog10Sigma: ksp.saltSharedLog10Sigma,
       saltAnchoredOnIntrinsic: ksp.anchored,
     },
   };

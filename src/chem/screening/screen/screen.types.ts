@@ -147,6 +147,14 @@ export interface SaltWaterSolubility {
   origin: 'model' | 'model+fusion' | 'measured' | 'anchor';
   /** Counter-ion properties that moved the model's estimate, largest first (empty when measured). */
   drivers: SolubilityDriver[];
+  /**
+   * The model estimate's 1σ split (decades): a level shared by every salt of the drug, and this
+   * salt's own part (widened outside the training range); absent for measured and anchored values.
+   */
+  sharedLog10Sd?: number;
+  withinLog10Sd?: number;
+  /** Counter-ion descriptors outside the model's training range, in words (empty or absent inside it). */
+  outsideTrainingRange?: string[];
 }
 
 /** Which solid limited a measured solubility (bench-solubility.ts): the salt, the free form, or undecided. */

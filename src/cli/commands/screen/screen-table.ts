@@ -38,6 +38,9 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       salt_mass_per_dose_mg: sig(row.saltMassPerDoseMg, 4),
       salt_solubility_water_log10_M: sig(row.saltWaterSolubility?.log10DrugM.value),
       salt_solubility_water_log10_M_sd: sig(row.saltWaterSolubility?.log10DrugM.uncertainty, 2),
+      // the model's 1σ split: a level shared by every salt of the drug, and this salt's own part
+      salt_solubility_water_log10_M_sd_shared: sig(row.saltWaterSolubility?.sharedLog10Sd, 2),
+      salt_solubility_water_log10_M_sd_within: sig(row.saltWaterSolubility?.withinLog10Sd, 2),
       salt_solubility_water_mg_per_ml: sig(row.saltWaterSolubility?.mgPerMlAsSalt),
       salt_solubility_origin: row.saltWaterSolubility?.origin ?? '',
       bench_solubility_limited_by: row.benchSolubility?.limitedBy ?? '',
