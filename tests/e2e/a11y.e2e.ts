@@ -13,7 +13,7 @@ const AREAS = [
   { id: 'ranking', ready: /candidates ranked/ },
   { id: 'energetics', ready: 'Sign convention.' },
   { id: 'bench', ready: 'Recorded for' },
-  { id: 'model-check', ready: 'Figures' },
+  { id: 'model-check', ready: /tested on drugs it never saw/ },
   { id: 'projects', ready: 'Start a project' },
 ] as const;
 
