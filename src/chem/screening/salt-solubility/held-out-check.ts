@@ -1,7 +1,7 @@
 import type * as OpenChemLib from 'openchemlib';
 import { counterIonFromParentSmiles } from './counter-ion-descriptors';
 import { estimateSaltWaterSolubility } from './estimate-salt-solubility';
-import { moleFractionToMolPerL } from './fusion';
+import { idealSolubility, moleFractionToMolPerL } from './fusion';
 import {
   leastSolubleAmongLowestPredicted,
   rootMeanSquareError,
@@ -31,14 +31,70 @@ export interface HeldOutSeriesCheck {
   baselineWithinRmse: number;
   /** Share of salts whose centred residual lies inside ± the estimate's within-series 1σ. */
   withinCoverage1Sigma: number;
-  /** With the paper's ideal solubility as crystal term (null without it). */
-  withFusion: { spearman: number; withinRmse: number } | null;
+  /**
+   * On the salts with an ideal solubility (the paper's own, or Schröder–van Laar from its melting point
+   * and ΔH_fus at 298.15 K), without and with it as crystal term (centred on those salts); null when
+   * fewer than three salts have one.
+   */
+  withFusion: {
+    n: number;
+    spearmanWithout: number;
+    spearmanWith: number;
+    withinRmseWithout: number;
+    withinRmseWith: number;
+  } | null;
 }
 
 const centred = (xs: readonly number[]) => {
   const m = xs.reduce((a, b) => a + b, 0) / xs.length;
   return xs.map((x) => x - m);
 };
+const centredRms = (xs: readonly number[]) =>
+  rootMeanSquareError(
+    centred(xs),
+    xs.map(() => 0),
+  );
+
+/** Measured log₁₀ mol/L of drug: from a mole fraction (dilute, per litre of water) or from mM. */
+function measuredLog10(r: CsvRecord): number {
+  const m = Number(r.drug_per_salt);
+  const x = Number(r.measured_mole_fraction);
+  if (r.measured_mole_fraction && x > 0) return Math.log10(moleFractionToMolPerL(x) * m);
+  return Math.log10((Number(r.solubility_mM) / 1000) * m);
+}
+
+/** log₁₀ of the ideal mole fraction: the paper's own, else from T_m and ΔH_fus; null without either. */
+function idealLog10(r: CsvRecord): number | null {
+  const x = Number(r.ideal_mole_fraction);
+  if (r.ideal_mole_fraction && x > 0) return Math.log10(x);
+  if (!r.salt_melting_point_c || !r.fusion_enthalpy_kj_per_mol) return null;
+  const ideal = idealSolubility({
+    meltingPointK: Number(r.salt_melting_point_c) + 273.15,
+    fusionEnthalpyKJPerMol: Number(r.fusion_enthalpy_kj_per_mol),
+    temperatureK: 298.15,
+  });
+  return ideal.lnMoleFraction / Math.LN10;
+}
+
+function fusionFigures(
+  predicted: readonly number[],
+  measured: readonly number[],
+  ideal: readonly (number | null)[],
+): HeldOutSeriesCheck['withFusion'] {
+  const idx = ideal.flatMap((v, i) => (v === null ? [] : [i]));
+  if (idx.length < 3) return null;
+  const p = idx.map((i) => predicted[i]!);
+  const m = idx.map((i) => measured[i]!);
+  const shift = centred(idx.map((i) => ideal[i]!));
+  const p2 = p.map((v, k) => v + shift[k]!);
+  return {
+    n: idx.length,
+    spearmanWithout: spearmanRho(p, m),
+    spearmanWith: spearmanRho(p2, m),
+    withinRmseWithout: centredRms(p.map((v, k) => v - m[k]!)),
+    withinRmseWith: centredRms(p2.map((v, k) => v - m[k]!)),
+  };
+}
 
 export function checkHeldOutSeries(
   ocl: typeof OpenChemLib,
@@ -59,24 +115,8 @@ export function checkHeldOutSeries(
       });
     });
     const predicted = est.map((e) => e.log10DrugM.value);
-    const measured = rs.map((r) =>
-      Math.log10(moleFractionToMolPerL(Number(r.measured_mole_fraction)) * Number(r.drug_per_salt)),
-    );
+    const measured = rs.map(measuredLog10);
     const resid = centred(predicted.map((p, i) => p - measured[i]!));
-    const ideal = rs.map((r) => Number(r.ideal_mole_fraction));
-    const withFusion = ideal.every((x) => x > 0)
-      ? (() => {
-          const shift = centred(ideal.map((x) => Math.log10(x)));
-          const p2 = predicted.map((p, i) => p + shift[i]!);
-          return {
-            spearman: spearmanRho(p2, measured),
-            withinRmse: rootMeanSquareError(
-              centred(p2.map((p, i) => p - measured[i]!)),
-              resid.map(() => 0),
-            ),
-          };
-        })()
-      : null;
     return {
       drugId,
       n: rs.length,
@@ -95,7 +135,7 @@ export function checkHeldOutSeries(
       ),
       withinCoverage1Sigma:
         resid.filter((e, i) => Math.abs(e) <= est[i]!.withinLog10Sd).length / resid.length,
-      withFusion,
+      withFusion: fusionFigures(predicted, measured, rs.map(idealLog10)),
     };
   });
 }
