@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   drawRobustnessPerturbation,
   perturbedCriteria,
+  uncertaintiesOf,
   type RobustnessRow,
   type RobustnessShared,
 } from '@/chem';
@@ -83,5 +84,14 @@ describe('the robustness draw: the salt model’s shared level once per drug, th
     const c = perturbedCriteria(rows[0]!, d, 0, sharedInputs);
     expect(c.log10WorstDoseNumber).toBeCloseTo(0.5 - d.saltShift[0]!, 14);
     expect(c.phMaxMarginPh).toBeCloseTo(1 - d.saltShift[0]!, 14);
+  });
+
+  it('the 1σ shown for a salt and its pH_max include the shared level (√(0.5² + 0.7² + 0.2²) by hand)', () => {
+    const u = uncertaintiesOf(
+      { robustness: modelRow('a', 0.7, 0.5) },
+      { drugPkaSigma: 0, log10IntrinsicSigma: 0.2 },
+    );
+    expect(u.saltLogSigma).toBeCloseTo(Math.sqrt(0.25 + 0.49 + 0.04), 12);
+    expect(u.phMaxSigma).toBeCloseTo(Math.sqrt(0.25 + 0.49), 12);
   });
 });

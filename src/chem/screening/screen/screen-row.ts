@@ -133,7 +133,13 @@ export function candidateRow(
   if (gastricWords) reasons.push(gastricWords);
 
   const { phMaxSigma } = uncertaintiesOf(
-    { robustness: { saltLog10Sigma: ksp.saltLog10Sigma, saltAnchoredOnIntrinsic: ksp.anchored } },
+    {
+      robustness: {
+        saltLog10Sigma: ksp.saltLog10Sigma,
+        saltSharedLog10Sigma: ksp.saltSharedLog10Sigma,
+        saltAnchoredOnIntrinsic: ksp.anchored,
+      },
+    },
     shared,
   );
   const micro = microenvironmentJudgement(ctx.settings, profile.phMax, phMaxSigma, c.kind);
