@@ -42,7 +42,7 @@ describe('the robustness draw: the salt model’s shared level once per drug, th
     for (let k = 0; k < 50; k++) {
       const d = drawRobustnessPerturbation(rows, sharedInputs, rng);
       expect(d.saltShift[0]).toBe(d.saltShift[1]);
-      expect(d.saltShift[0]).toBeCloseTo(0.5 * d.zSaltShared, 14);
+      expect(d.saltShift[0]).toBeCloseTo(0.5 * d.zSaltShared!, 14);
     }
   });
 
