@@ -11,7 +11,9 @@ import {
   type CustomIonRecord,
   type MeasurementRecord,
   type ProjectRecord,
+  screenPlanRecordSchema,
 } from './records';
+import { renameScreenPlanIons } from './screen-plan-record';
 import { buildProjectFile, serializeProjectFile, type ProjectBundle } from './project-file/build';
 import { parseProjectFileText } from './project-file/restore';
 import type { ProjectFile } from './project-file/schema';
@@ -21,7 +23,7 @@ export async function loadProjectBundle(projectId: string): Promise<ProjectBundl
   const db = getDb();
   return db.transaction(
     'r',
-    [db.projects, db.candidates, db.measurements, db.customIons],
+    [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
     async () => {
       const project = await db.projects.get(projectId);
       if (!project) throw new Error(`No project with id ${projectId}`);
@@ -35,7 +37,8 @@ export async function loadProjectBundle(projectId: string): Promise<ProjectBundl
             (usedIonIds.has(ion.id) ||
               (ion.overridesIonId !== null && usedIonIds.has(ion.overridesIonId)))),
       );
-      return { project, candidates, measurements, customIons };
+      const screenPlans = await db.screenPlans.where('projectId').equals(projectId).toArray();
+      return { project, candidates, measurements, customIons, screenPlans };
     },
   );
 }
@@ -157,7 +160,7 @@ export async function writeProjectFile(
   const db = getDb();
   return db.transaction(
     'rw',
-    [db.projects, db.candidates, db.measurements, db.customIons],
+    [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
     async () => {
       const now = nowIso();
       let projectId: string;
@@ -171,6 +174,7 @@ export async function writeProjectFile(
         await db.measurements.where('projectId').equals(projectId).delete();
         await db.candidates.where('projectId').equals(projectId).delete();
         await db.customIons.where('projectId').equals(projectId).delete();
+        await db.screenPlans.where('projectId').equals(projectId).delete();
       } else {
         projectId = newId('prj');
       }
@@ -214,6 +218,19 @@ export async function writeProjectFile(
       if (ions.length) await db.customIons.bulkAdd(ions);
       if (candidates.length) await db.candidates.bulkAdd(candidates);
       if (measurements.length) await db.measurements.bulkAdd(measurements);
+      // One plan per project: the file's first plan, its in-house ions renamed like the shortlist's.
+      const plan = file.screenPlans[0];
+      if (plan) {
+        await db.screenPlans.add(
+          screenPlanRecordSchema.parse({
+            ...renameScreenPlanIons(
+              { ...plan, projectId, schemaVersion: RECORD_SCHEMA_VERSION },
+              (ionId) => ionIdMap.get(ionId) ?? ionId,
+            ),
+            id: newId('plan'),
+          }),
+        );
+      }
       return {
         projectId,
         name: project.name,

@@ -8,8 +8,11 @@
 /** The `format` tag every project file carries. */
 export const PROJECT_FILE_FORMAT = 'saltsmith-project';
 
-/** The version this build writes. Version 1 is read through `upgradeV1` (upgrade-v1.ts). */
-export const PROJECT_FILE_VERSION = 2;
+/**
+ * The version this build writes. Version 1 is read through `upgradeV1` (upgrade-v1.ts), version 2
+ * (before the salt-screen plan) through `upgradeV2` (upgrade-v2.ts).
+ */
+export const PROJECT_FILE_VERSION = 3;
 
 /** Largest file accepted, in bytes (UTF-16 code units of the text, a close upper bound for ASCII JSON). */
 export const PROJECT_FILE_MAX_BYTES = 5 * 1024 * 1024;
@@ -19,6 +22,7 @@ export const PROJECT_FILE_LIMITS = {
   candidates: 500,
   measurements: 20_000,
   customIons: 1_000,
+  screenPlans: 10,
 } as const;
 
 /** The version of this build (from package.json at build time), or "unknown" outside a build. */

@@ -8,6 +8,7 @@ import {
 import { projectFileSchema, type ProjectFile } from './schema';
 import { looksTruncated } from './truncation';
 import { upgradeV1 } from './upgrade-v1';
+import { upgradeV2 } from './upgrade-v2';
 
 /**
  * The single restore/upgrade path: take any parsed JSON value, check the format tag and version,
@@ -42,6 +43,7 @@ export function restoreProjectFile(raw: unknown): ProjectFile {
   }
   let current: unknown = raw;
   if (version === 1) current = upgradeV1(current);
+  if (version <= 2) current = upgradeV2(current);
   const result = projectFileSchema.safeParse(current);
   if (!result.success) throw invalidFileError(result.error);
   return result.data;
