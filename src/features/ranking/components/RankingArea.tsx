@@ -2,6 +2,7 @@ import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } fro
 import { rankCandidates, screeningWeightsSchema } from '@/chem';
 import { CAUTION_LINES } from '@/components/Cautions';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
+import { ScreenOutcomesPanel } from '@/components/ScreenOutcomesPanel';
 import type { ProjectRecord } from '@/persistence/records';
 import { useProjectScreening } from '@/screening-data/use-screening';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
@@ -198,6 +199,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
           </span>
         </header>
         <RankingCautions />
+        <ScreenOutcomesPanel project={project} />
         {screening.status === 'error' ? (
           <div role="alert" className="screen-error">
             <p>
