@@ -34,7 +34,7 @@ export function PlateMap({
     <figure className="plate-map">
       <svg
         viewBox={`0 0 ${width} ${height}`}
-        role="img"
+        role="group"
         aria-label={`Plate map, ${plan.plate} wells`}
       >
         {Array.from({ length: columns }, (_, c) => (
