@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
+import { DEMO_SCREEN_PLAN } from '@/persistence/demo-project';
 import { runCli } from './support/run-cli';
 
 /**
@@ -152,6 +153,18 @@ describe('saltsmith plan --input', () => {
     expect((await runCli(['plan'])).code).toBe(2);
     expect((await runCli(['plan', '--input', 'x.json', '--solvents'])).code).toBe(2);
     expect((await runCli(['plan', '--solvents', '--format', 'xml'])).code).toBe(2);
+  });
+});
+
+describe('the README example (the fictional demo plan)', () => {
+  it("mirrors the demo project's plan and gives 16 wells, A1 … C4", async () => {
+    const path = 'fixtures/demo/demorazine-plan.json';
+    expect(JSON.parse(readFileSync(path, 'utf8')).plan).toEqual(DEMO_SCREEN_PLAN);
+    const r = await runCli(['plan', '--input', path, '--format', 'json']);
+    expect(r.code).toBe(0);
+    const rows = JSON.parse(r.out).rows as { well: string }[];
+    expect(rows.map((x) => x.well)).toHaveLength(16); // 4 counter-ions × 4 solvents
+    expect(rows.at(-1)!.well).toBe('C4');
   });
 });
 
