@@ -53,7 +53,7 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
           <BenchWorkspace project={project} />
         </AreaBoundary>
       );
-    case 'screen-plan':
+    case 'salt-screen':
       return (
         <AreaBoundary>
           <ScreenPlanArea project={project} />

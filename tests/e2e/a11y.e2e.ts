@@ -13,7 +13,7 @@ const AREAS = [
   { id: 'ranking', ready: /candidates ranked/ },
   { id: 'energetics', ready: 'Sign convention.' },
   { id: 'bench', ready: 'Recorded for' },
-  { id: 'screen-plan', ready: /wells on a 24-well plate/ },
+  { id: 'salt-screen', ready: /wells on a 24-well plate/ },
   { id: 'model-check', ready: 'Figures' },
   { id: 'projects', ready: 'Start a project' },
 ] as const;
