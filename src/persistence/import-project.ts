@@ -148,6 +148,25 @@ async function placeImportedIons(
   return { ions, ionIdMap };
 }
 
+/** One plan per project: the file's first plan, its in-house ions renamed like the shortlist's. */
+async function addImportedPlan(
+  file: ProjectFile,
+  projectId: string,
+  ionIdMap: ReadonlyMap<string, string>,
+): Promise<void> {
+  const plan = file.screenPlans[0];
+  if (!plan) return;
+  await getDb().screenPlans.add(
+    screenPlanRecordSchema.parse({
+      ...renameScreenPlanIons(
+        { ...plan, projectId, schemaVersion: RECORD_SCHEMA_VERSION },
+        (ionId) => ionIdMap.get(ionId) ?? ionId,
+      ),
+      id: newId('plan'),
+    }),
+  );
+}
+
 /**
  * Write a validated project file into the database in ONE transaction: either every record lands or
  * none does. Candidate, measurement and project-scoped ion ids are fresh, so a file can be imported
@@ -218,19 +237,7 @@ export async function writeProjectFile(
       if (ions.length) await db.customIons.bulkAdd(ions);
       if (candidates.length) await db.candidates.bulkAdd(candidates);
       if (measurements.length) await db.measurements.bulkAdd(measurements);
-      // One plan per project: the file's first plan, its in-house ions renamed like the shortlist's.
-      const plan = file.screenPlans[0];
-      if (plan) {
-        await db.screenPlans.add(
-          screenPlanRecordSchema.parse({
-            ...renameScreenPlanIons(
-              { ...plan, projectId, schemaVersion: RECORD_SCHEMA_VERSION },
-              (ionId) => ionIdMap.get(ionId) ?? ionId,
-            ),
-            id: newId('plan'),
-          }),
-        );
-      }
+      await addImportedPlan(file, projectId, ionIdMap);
       return {
         projectId,
         name: project.name,

@@ -1,6 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
-import type {
-  ChemInputError} from '@/chem';
+import type { ChemInputError } from '@/chem';
 import {
   COUNTER_IONS,
   buildPlatePlan,

@@ -126,6 +126,30 @@ function IonsAndSolvents({ draft, candidates, ionNames, onChange }: FormProps) {
   );
 }
 
+function Methods({ draft, onChange }: Pick<FormProps, 'draft' | 'onChange'>) {
+  return (
+    <fieldset>
+      <legend>Methods</legend>
+      {CRYSTALLISATION_METHODS.map((m) => (
+        <label key={m} className="plan-check">
+          <input
+            type="checkbox"
+            checked={(draft.methods ?? ['slurry']).includes(m)}
+            onChange={(e) => {
+              const next = toggle(draft.methods ?? ['slurry'], m, e.target.checked);
+              onChange({
+                ...draft,
+                methods: CRYSTALLISATION_METHODS.filter((x) => next.includes(x)),
+              });
+            }}
+          />
+          {m}
+        </label>
+      ))}
+    </fieldset>
+  );
+}
+
 function MethodsAndAmounts({ draft, onChange }: FormProps) {
   const set = (patch: Partial<PlatePlanInput>) => onChange({ ...draft, ...patch });
   const [eqText, setEqText] = useState(
@@ -138,22 +162,7 @@ function MethodsAndAmounts({ draft, onChange }: FormProps) {
   const eqParsed = parseEquivalents(eqText);
   return (
     <>
-      <fieldset>
-        <legend>Methods</legend>
-        {CRYSTALLISATION_METHODS.map((m) => (
-          <label key={m} className="plan-check">
-            <input
-              type="checkbox"
-              checked={(draft.methods ?? ['slurry']).includes(m)}
-              onChange={(e) => {
-                const next = toggle(draft.methods ?? ['slurry'], m, e.target.checked);
-                set({ methods: CRYSTALLISATION_METHODS.filter((x) => next.includes(x)) });
-              }}
-            />
-            {m}
-          </label>
-        ))}
-      </fieldset>
+      <Methods draft={draft} onChange={onChange} />
       <fieldset className="plan-amounts">
         <legend>Amounts and plate</legend>
         <NumberField
