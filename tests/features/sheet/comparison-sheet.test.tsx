@@ -127,6 +127,13 @@ describe('comparison sheet', () => {
     print.mockRestore();
   });
 
+  it('prints the blocks other areas add below the sheet (the salt screen’s outcomes)', () => {
+    render(
+      <SheetView model={model()} onClose={() => undefined} extra={<p>screen outcomes block</p>} />,
+    );
+    expect(screen.getByText('screen outcomes block').closest('.sheet-overlay')).not.toBeNull();
+  });
+
   it('formats a value to the uncertainty (at most two significant digits in the uncertainty, JCGM 100:2008 §7.2.6)', () => {
     expect(formatValue(-12.3456, 25)).toBe('\u221212 ± 25');
     expect(formatValue(4.5612, 0.31)).toBe('4.56 ± 0.31');
