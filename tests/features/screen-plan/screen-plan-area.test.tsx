@@ -62,7 +62,7 @@ describe('salt screen area', () => {
     const project = await demo();
     const user = userEvent.setup();
     render(<ScreenPlanArea project={project} />);
-    await screen.findByRole('heading', { name: /16 wells/ });
+    await screen.findByRole('heading', { name: /16 wells/ }, { timeout: 5000 });
     await user.click(screen.getByLabelText('cooling'));
     expect((await screen.findByRole('alert')).textContent).toMatch(
       /^plan\.plate: the plan needs 32 wells/,
@@ -98,7 +98,7 @@ describe('outcome summary beside the ranking', () => {
         solventId: w.solventId,
       });
     }
-    const row = await screen.findByRole('row', { name: /Maleate/ });
+    const row = await screen.findByRole('row', { name: /Maleate/ }, { timeout: 5000 });
     expect(row.textContent).toMatch(/4 of 4/);
     expect(row.textContent).toMatch(/no crystalline salt yet/);
   });
