@@ -1,5 +1,5 @@
 import {
-  SALT_WATER_ORIGIN_BASIS,
+  saltSolubilityBasisWords,
   SALT_WATER_ORIGIN_LABELS,
   SOLUBILITY_DRIVER_WORDS,
   type RankedRow,
@@ -46,7 +46,7 @@ export interface SaltWaterShown extends ShownNumber {
   freeFormMgPerMl: number;
   log10DrugM: number;
   log10Sigma: number;
-  /** 'model', 'model + fusion data', 'measured' or 'anchor 10² × S₀'. */
+  /** 'model', 'model + fusion data', 'measured' or 'anchor on S₀'. */
   originWord: string;
   /** The drivers of the estimate in words, largest first. */
   drivers: string;
@@ -60,7 +60,7 @@ function saltWaterShown(row: ScreenRow): SaltWaterShown | null {
     value: sw.mgPerMlAsSalt,
     range: doseRange(sw.mgPerMlAsSalt, sigma),
     origin: sw.origin === 'measured' ? 'measured' : 'estimated',
-    basis: SALT_WATER_ORIGIN_BASIS[sw.origin],
+    basis: saltSolubilityBasisWords(sw.basis),
     freeFormMgPerMl: sw.mgPerMlAsFreeForm,
     log10DrugM: sw.log10DrugM.value,
     log10Sigma: sigma,

@@ -80,7 +80,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     label: 'Salt solubility from',
     unit: null,
     kind: 'text',
-    hint: 'model, model + fusion data (your DSC), measured, or the 10² × S₀ anchor',
+    hint: 'model, model + fusion data (your DSC), measured, or the anchor on S₀ (each basis in words: see the notes)',
     group: 'solubility',
   },
   {

@@ -6,6 +6,7 @@ import type { PreparedCandidate } from './prepare-candidate';
 import type { ScreenContext } from './screen-context';
 import { estimatedKspFlag, measuredEnthalpyReason, measuredKspReason } from './screen-reasons';
 import { saltWaterReason } from './salt-water-words';
+import { saltSolubilityBasis } from './salt-water-basis';
 import { measuredKspNotes } from './screen-notes';
 import type { Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
 import { GAS_CONSTANT_KJ_PER_MOL_K } from '../../constants/physical';
@@ -181,7 +182,7 @@ function estimatedChoice(
     saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - log10IntrinsicSigma ** 2)),
     anchored: true,
     reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
-    flags: [estimatedKspFlag(sigma)],
+    flags: [estimatedKspFlag(sigma, saltWater.basis)],
     saltWater,
   };
 }
@@ -195,11 +196,13 @@ function saltWaterOf(
   drivers: SaltWaterSolubility['drivers'],
 ): SaltWaterSolubility {
   const drugM = 10 ** log10DrugM.value;
+  const anchorDecades = ctx.settings.saltAnchorLog10;
   return {
     log10DrugM,
     mgPerMlAsSalt: (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol,
     mgPerMlAsFreeForm: drugM * ctx.freeFormMolarMassGPerMol,
     origin,
     drivers,
+    basis: saltSolubilityBasis({ origin, log10DrugM }, { anchorDecades }),
   };
 }
