@@ -31,10 +31,10 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   },
   {
     key: 'saltProbability',
-    label: 'P(salt)',
+    label: 'P(salt) from ΔpKa',
     unit: '0–1',
     kind: 'number',
-    hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend',
+    hint: 'share of salts (not cocrystals) among published crystal structures at this ΔpKa: 0.17·ΔpKa + 0.28, clamped to 0–1 (Cruz-Cabeza 2012 trend, coefficients from memory); at least 0.95 above the salt band, so it is 1 for most strong acids',
     group: 'formation',
   },
   {
@@ -125,7 +125,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   {
     key: 'latticeEnthalpy',
     label: 'ΔH_L',
-    unit: 'kJ/mol',
+    unit: 'kJ/mol per formula unit',
     kind: 'number',
     hint: 'lattice dissociation enthalpy, > 0',
     group: 'energetics',
@@ -133,9 +133,9 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   {
     key: 'solutionEnthalpy',
     label: 'ΔH_sol',
-    unit: 'kJ/mol',
+    unit: 'kJ/mol per drug ion',
     kind: 'number',
-    hint: 'enthalpy of solution, estimate or calorimetric',
+    hint: 'enthalpy of solution per mole of drug ion (formula unit ÷ drug ions), estimate or calorimetric; "not informative" when its 1σ exceeds it or an estimate lies outside ±70 kJ/mol (a threefold solubility change from 25 to 37 °C)',
     group: 'energetics',
   },
   {
@@ -170,7 +170,7 @@ export function rowCells(
 ): Record<string, SheetCell> {
   const kspOrigin: ValueOrigin | null = row.kspOrigin ?? null;
   const thermo = screening.energetics[row.id]?.thermo ?? null;
-  const measuredSol = row.measured?.solutionEnthalpyKJ ?? null;
+  const dh = row.solutionEnthalpyPerDrugIon;
   const sw = row.saltWaterSolubility;
   const swOrigin: ValueOrigin | null = sw
     ? sw.origin === 'measured'
@@ -201,11 +201,41 @@ export function rowCells(
     solubilityClass: { value: row.solubilityClass },
     phMaxMargin: num(row.disproportionation?.marginPh ?? null, kspOrigin),
     latticeEnthalpy: est(thermo?.latticeEnthalpyKJ),
-    solutionEnthalpy:
-      measuredSol !== null ? num(measuredSol, 'measured') : est(thermo?.solutionEnthalpyKJ),
+    solutionEnthalpy: !dh
+      ? { value: null }
+      : dh.notInformative
+        ? { value: 'not informative', origin: dh.origin }
+        : num(dh.valueKJPerMolDrugIon, dh.origin, dh.sigmaKJPerMolDrugIon),
     hygroscopicity: {
       value: row.measured?.hygroscopicity ?? null,
       origin: row.measured?.hygroscopicity ? 'measured' : null,
     },
+  };
+}
+
+/**
+ * The free form's cells in the same columns, read against the salts (not ranked): S₀ in the
+ * salt-in-water columns, its own dose numbers, 100 % active, the dose itself per dose.
+ */
+export function freeFormCells(
+  screening: ProjectScreening,
+  doseMg: number | null,
+): Record<string, SheetCell> {
+  const ff = screening.screen.freeForm;
+  const origin: ValueOrigin = ff.intrinsicOrigin === 'measured' ? 'input' : 'estimated';
+  const mg = 10 ** ff.log10IntrinsicM.value * screening.drugIon.freeFormMolarMassGPerMol;
+  return {
+    activeFraction: num(100, 'input'),
+    saltMassPerDose: num(doseMg, 'input'),
+    saltWaterMgPerMl: num(mg, origin),
+    saltWaterFreeFormMgPerMl: num(mg, origin),
+    saltWaterLog10M: est(ff.log10IntrinsicM, origin),
+    saltWaterOrigin: {
+      value: ff.intrinsicOrigin === 'measured' ? 'free form: S₀ entered' : 'free form: S₀ from GSE',
+    },
+    worstDoseNumber: num(ff.worst?.doseNumber ?? null, origin),
+    worstPh: num(ff.worst?.pH ?? null, null),
+    gastricDoseNumber: num(ff.gastric?.doseNumber ?? null, origin),
+    solubilityClass: { value: ff.solubilityClass },
   };
 }

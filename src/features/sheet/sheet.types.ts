@@ -93,6 +93,10 @@ export interface SheetModel {
   weights: SheetSetting[];
   columns: SheetColumn[];
   rows: SheetRow[];
+  /** The free form in the same columns, read against the salts (not ranked), when screened. */
+  freeForm?: SheetRow | null;
+  /** What separates the shortlist (the core's separationSummary), in one line and its details. */
+  separation?: { headline: string; details: string[] } | null;
   confidence: SheetConfidenceRow[];
   /** Extra remarks (assumptions, model limits). */
   notes: string[];

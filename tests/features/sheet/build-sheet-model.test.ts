@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
-import { CRITERIA, defaultScreeningSettings, validationReport } from '@/chem';
+import { CRITERIA, defaultScreeningSettings, roundToUncertainty, validationReport } from '@/chem';
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
@@ -78,8 +78,11 @@ describe('sheet model from a real screening', () => {
     }
     const first = m.rows[0];
     expect(first?.cells.phMax?.uncertainty).toBeGreaterThan(0);
-    expect(first?.cells.solutionEnthalpy?.origin).toBe('estimated');
-    expect(first?.cells.solutionEnthalpy?.uncertainty).toBeGreaterThan(0);
+    // ΔH_sol per drug ion: a number with its 1σ, or "not informative" in words (never a bare number).
+    const dh = first?.cells.solutionEnthalpy;
+    expect(dh?.origin).toBe('estimated');
+    if (dh?.value === 'not informative') expect(dh.uncertainty ?? null).toBeNull();
+    else expect(dh?.uncertainty).toBeGreaterThan(0);
     expect(m.energyCycles.length).toBeGreaterThan(0);
     expect(m.solubility?.series[0]?.kind).toBe('free-form');
     expect(m.confidence.length).toBeGreaterThan(0);
@@ -123,13 +126,22 @@ describe('sheet model from a real screening', () => {
     expect(parsed.errors).toEqual([]);
     const header = parsed.data[0] as string[];
     expect(header).toEqual(csvHeader(m.columns));
-    m.rows.forEach((r, i) => {
+    // The free form comes first (not ranked, read against), then the ranked candidates.
+    const all = [m.freeForm!, ...m.rows];
+    expect((parsed.data[1] as unknown[])[1]).toMatch(
+      /free base \(no salt; read against, not ranked\)/,
+    );
+    all.forEach((r, i) => {
       const line = parsed.data[i + 1] as unknown[];
       expect(line[1]).toBe(r.label);
       for (const c of m.columns) {
-        const v = r.cells[c.key]?.value ?? null;
+        const cell = r.cells[c.key];
+        const v = cell?.value ?? null;
+        const u = cell?.uncertainty;
         const col = header.indexOf(c.unit ? `${c.label} (${c.unit})` : c.label);
-        expect(line[col]).toBe(typeof v === 'number' ? csvNumber(v) : v);
+        // The CSV writes each value at the precision of its 1σ (the same rule the sheet prints).
+        const shown = typeof v === 'number' && u ? roundToUncertainty(v, u).value : v;
+        expect(line[col]).toBe(typeof shown === 'number' ? csvNumber(shown) : shown);
       }
     });
   });

@@ -75,8 +75,12 @@ function RankedTable({
         </tr>
       </thead>
       <tbody>
-        {model.rows.map((r) => (
-          <tr key={r.id} data-candidate-id={r.id}>
+        {[...(model.freeForm ? [model.freeForm] : []), ...model.rows].map((r) => (
+          <tr
+            key={r.id}
+            data-candidate-id={r.id}
+            className={r === model.freeForm ? 'sheet-free-form' : undefined}
+          >
             <td className="num">{r.rank ?? '—'}</td>
             <th scope="row" className="sheet-candidate">
               {r.label}
@@ -150,6 +154,24 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
 
       <section className="sheet-block" aria-labelledby="sheet-ranking">
         <h2 id="sheet-ranking">Ranked candidates</h2>
+        {model.separation ? (
+          <div className="sheet-separation">
+            <p>
+              <strong>What separates the candidates:</strong> {model.separation.headline}
+            </p>
+            <ul>
+              {model.separation.details.map((d) => (
+                <li key={d}>{d}</li>
+              ))}
+            </ul>
+          </div>
+        ) : null}
+        {model.freeForm ? (
+          <p className="sheet-note">
+            The first row is the free form itself, in the same columns: not ranked, read each salt
+            against it.
+          </p>
+        ) : null}
         {model.rows.length === 0 ? (
           <p>No candidates are shortlisted in this project.</p>
         ) : (
