@@ -114,7 +114,7 @@ export const screenCommand: CliCommand = defineCommand('screen', {
             { iterations, seed },
             measureNextEntries(res, prepared.settings.weights, { iterations, seed }),
           )
-        : screenCsv(table, prepared.skipped);
+        : screenCsv(table, prepared.skipped, res);
     if (flags.out !== undefined) {
       await writeFileAtomic(flags.out, text + '\n');
       writeLine(io.stderr, `wrote ${table.length} candidates to ${flags.out}`);
