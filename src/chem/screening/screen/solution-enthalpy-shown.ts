@@ -56,12 +56,13 @@ export function solutionEnthalpyShown(
       ? perFormulaUnit.uncertainty / drugPerSalt
       : null;
   const measured = origin?.startsWith('measured') ?? false;
+  const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
   let notInformative: string | null = null;
   if (sigma !== null && sigma > Math.abs(value)) {
-    notInformative = `1σ ${sigma.toFixed(0)} kJ/mol exceeds the value (${value.toFixed(0)}): not even its sign is known`;
+    notInformative = `1σ ${sigma.toFixed(0)} kJ/mol exceeds the value (${kj(value)}): not even its sign is known`;
   } else if (!measured && Math.abs(value) > PLAUSIBLE_SOLUTION_ENTHALPY_PER_DRUG_ION_KJ) {
     const f = solubilityFactor25To37C(value);
-    notInformative = `${value.toFixed(0)} kJ/mol per drug ion would make the salt ${f >= 1 ? `${f.toFixed(0)}× more` : `${(1 / f).toFixed(0)}× less`} soluble at 37 °C than at 25 °C — outside ±${PLAUSIBLE_SOLUTION_ENTHALPY_PER_DRUG_ION_KJ.toFixed(0)} kJ/mol (a threefold change, van 't Hoff)`;
+    notInformative = `${kj(value)} kJ/mol per drug ion would make the salt ${f >= 1 ? `${f.toFixed(0)}× more` : `${(1 / f).toFixed(0)}× less`} soluble at 37 °C than at 25 °C — outside ±${PLAUSIBLE_SOLUTION_ENTHALPY_PER_DRUG_ION_KJ.toFixed(0)} kJ/mol (a threefold change, van 't Hoff)`;
   }
   return {
     valueKJPerMolDrugIon: value,
