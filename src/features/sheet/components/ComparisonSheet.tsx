@@ -1,7 +1,7 @@
 import { CAUTION_LINES } from '@/components/Cautions';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
-import { ORIGIN_MARK, cellText, formatValue } from '../sheet-format';
+import { ORIGIN_MARK, cellNumber, cellText, formatValue } from '../sheet-format';
 import { SheetExcipients } from './SheetExcipients';
 import type { SheetColumnGroup, SheetModel, SheetSetting } from '../sheet.types';
 import '../sheet.css';
@@ -93,7 +93,9 @@ function RankedTable({
                   key={c.key}
                   className={c.kind === 'number' ? 'num' : undefined}
                   data-col={c.key}
-                  data-value={typeof cell?.value === 'number' ? String(cell.value) : undefined}
+                  data-value={
+                    typeof cell?.value === 'number' ? String(cellNumber(cell)) : undefined
+                  }
                 >
                   {cellText(cell)}
                   {origin && cell?.value !== null ? (
