@@ -1,5 +1,4 @@
 import { SALT_SOLUBILITY_MODEL } from '../salt-solubility/salt-solubility-model.data';
-import type { SaltWaterSolubility } from './screen.types';
 
 /**
  * What a salt's water solubility actually rests on, as data: the one source every explanation of it
@@ -8,8 +7,11 @@ import type { SaltWaterSolubility } from './screen.types';
  * method) and from the shipped model's own description (salt-solubility-model.data.ts), never from
  * a fixed sentence.
  */
+/** Where a salt's water solubility came from (SaltWaterSolubility.origin). */
+export type SaltWaterOrigin = 'model' | 'model+fusion' | 'measured' | 'anchor';
+
 export interface SaltSolubilityBasis {
-  origin: SaltWaterSolubility['origin'];
+  origin: SaltWaterOrigin;
   /** The fitted model behind an estimate (origin model or model+fusion), from the shipped model file. */
   model: {
     id: string;
@@ -92,7 +94,7 @@ export function benchReadingPhrases(b: BenchReadingFields | undefined): string[]
 
 /** The basis of one salt's water solubility, from the estimate the screen used. */
 export function saltSolubilityBasis(
-  s: Pick<SaltWaterSolubility, 'origin' | 'log10DrugM'>,
+  s: { origin: SaltWaterOrigin; log10DrugM: { method: string } },
   opts: { anchorDecades?: number; bench?: BenchReadingFields } = {},
 ): SaltSolubilityBasis {
   const method = s.log10DrugM.method;
