@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { CAUTION_LINES } from '@/components/Cautions';
 import { neutralizeCsvText, roundToUncertainty } from '@/chem';
+import { cellNumber } from './sheet-format';
 import type { SheetColumn, SheetModel } from './sheet.types';
 
 /** Rounds to 6 significant digits so float noise (0.30000000000000004) never reaches a file. */
@@ -16,7 +17,13 @@ export function csvHeader(columns: readonly SheetColumn[]): string[] {
   const head = ['Rank', 'Candidate'];
   for (const c of columns) {
     head.push(withUnit(c.label, c.unit));
-    if (c.kind === 'number')
+    if (c.kind === 'number' && c.range)
+      head.push(
+        withUnit(`${c.label} low (-1 sigma)`, c.unit),
+        withUnit(`${c.label} high (+1 sigma)`, c.unit),
+        `${c.label} origin`,
+      );
+    else if (c.kind === 'number')
       head.push(withUnit(`${c.label} uncertainty (1 sigma)`, c.unit), `${c.label} origin`);
   }
   head.push('Flags', 'Reasons');
@@ -39,14 +46,16 @@ export function sheetCsvRows(model: SheetModel): CsvValue[][] {
       const hasU = typeof u === 'number' && Number.isFinite(u) && u > 0;
       // Precision that follows the uncertainty (roundToUncertainty), else 6 significant digits.
       const rounded = typeof v === 'number' && hasU ? roundToUncertainty(v, u) : null;
+      const shown = typeof v === 'number' ? cellNumber(cell) : null;
       line.push(
-        typeof v === 'number'
-          ? csvNumber(rounded ? rounded.value : v)
-          : v === null
-            ? null
-            : neutralizeCsvText(v),
+        shown !== null ? csvNumber(shown) : typeof v === 'string' ? neutralizeCsvText(v) : null,
       );
-      if (c.kind === 'number') {
+      if (c.kind === 'number' && c.range) {
+        const range = cell?.range;
+        line.push(range ? csvNumber(Number(range[0].toPrecision(2))) : null);
+        line.push(range ? csvNumber(Number(range[1].toPrecision(2))) : null);
+        line.push(cell?.origin ?? null);
+      } else if (c.kind === 'number') {
         line.push(
           rounded
             ? csvNumber(rounded.sigma)

@@ -24,6 +24,11 @@ export interface SheetColumn {
   hint?: string;
   /** Which of the sheet's tables shows the column (the CSV shows all in one table). */
   group: SheetColumnGroup;
+  /**
+   * The column's 1σ is multiplicative (dose numbers, solubilities: a ±1σ range, as the Ranking shows
+   * it): the CSV gives its low and high ends instead of a symmetric 1σ.
+   */
+  range?: boolean;
 }
 
 export interface SheetCell {
@@ -31,6 +36,8 @@ export interface SheetCell {
   value: number | string | null;
   /** Standard uncertainty (1σ) in the column's unit, when known. */
   uncertainty?: number | null;
+  /** The ±1σ range, for a column whose uncertainty is multiplicative (SheetColumn.range). */
+  range?: [number, number] | null;
   origin?: ValueOrigin | null;
 }
 

@@ -4,6 +4,7 @@ import { CRITERIA, defaultScreeningSettings, roundToUncertainty, validationRepor
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
+import { cellNumber } from '@/features/sheet/sheet-format';
 import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
 import {
   projectSettingsSchema,
@@ -78,6 +79,10 @@ describe('sheet model from a real screening', () => {
     }
     const first = m.rows[0];
     expect(first?.cells.phMax?.uncertainty).toBeGreaterThan(0);
+    // The dose numbers carry the ±1σ range the Ranking shows (low < value < high).
+    const d0 = first?.cells.worstDoseNumber;
+    expect(d0?.range?.[0]).toBeLessThan(d0?.value as number);
+    expect(d0?.range?.[1]).toBeGreaterThan(d0?.value as number);
     // ΔH_sol per drug ion: a number with its 1σ, or "not informative" in words (never a bare number).
     const dh = first?.cells.solutionEnthalpy;
     expect(dh?.origin).toBe('estimated');
@@ -137,11 +142,15 @@ describe('sheet model from a real screening', () => {
       for (const c of m.columns) {
         const cell = r.cells[c.key];
         const v = cell?.value ?? null;
-        const u = cell?.uncertainty;
         const col = header.indexOf(c.unit ? `${c.label} (${c.unit})` : c.label);
-        // The CSV writes each value at the precision of its 1σ (the same rule the sheet prints).
-        const shown = typeof v === 'number' && u ? roundToUncertainty(v, u).value : v;
-        expect(line[col]).toBe(typeof shown === 'number' ? csvNumber(shown) : shown);
+        // The CSV writes each value at the precision the sheet prints (cellNumber: to its 1σ).
+        expect(line[col]).toBe(typeof v === 'number' ? csvNumber(cellNumber(cell)!) : v);
+        // A ±1σ range the app shows (dose numbers, solubilities) is in the CSV too, low and high.
+        if (c.range && cell?.range) {
+          const lo = header.indexOf(`${c.label} low (-1 sigma)${c.unit ? ` (${c.unit})` : ''}`);
+          expect(line[lo]).toBe(Number(cell.range[0].toPrecision(2)));
+          expect(line[lo + 1]).toBe(Number(cell.range[1].toPrecision(2)));
+        }
       }
     });
   });
