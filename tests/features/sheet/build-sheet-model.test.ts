@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
-import { CRITERIA, defaultScreeningSettings, roundToUncertainty, validationReport } from '@/chem';
+import { CRITERIA, defaultScreeningSettings, validationReport } from '@/chem';
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
