@@ -56,21 +56,27 @@ function gastricWhy(rows: readonly ScreenRow[]): string {
   return '';
 }
 
-/** The disproportionation flag on most salts reflects the assumed microenvironment pH, and says so. */
-function microPhWords(rows: readonly ScreenRow[], microPh: number | null): string | null {
+/**
+ * When the disproportionation flag stands on most salts, say what it rests on (the structured basis
+ * of the disproportionation result): an assumed microenvironment pH is an assumption, not a difference
+ * between the salts; a stated pH or the chosen excipients are the user's formulation.
+ */
+function microPhWords(rows: readonly ScreenRow[]): string | null {
   const n = rows.length;
-  const high = rows.filter((r) => r.disproportionation?.risk === 'high').length;
-  if (n < 2 || high < 2 || high * 2 < n) return null;
-  const at =
-    microPh === null
-      ? ''
-      : ` at the microenvironment pH ${microPh} assumed in Screening conditions`;
-  return `“may convert to the free form” stands on ${high} of ${n} salts${at}: it reflects that assumption until the formulation is known, not a difference between the salts`;
+  const high = rows.filter((r) => r.disproportionation?.risk === 'high');
+  if (n < 2 || high.length < 2 || high.length * 2 < n) return null;
+  const d = high[0]!.disproportionation!;
+  const at = d.judgedAtPh === null ? '' : ` ${d.judgedAtPh}`;
+  const stands = `the free-form conversion risk stands on ${high.length} of ${n} salts`;
+  if (d.basis === 'assumed')
+    return `${stands} at the microenvironment pH${at} assumed until the formulation is known (Screening conditions): it reflects that assumption, not a difference between the salts`;
+  if (d.basis === 'stated') return `${stands} at the stated microenvironment pH${at}`;
+  return `${stands} against the chosen excipients`;
 }
 
 /** The summary of one screen under the given weights (the Ranking area's current ones). */
 export function separationSummary(
-  screen: Pick<ScreenResult, 'rows' | 'robustnessShared' | 'settings'>,
+  screen: Pick<ScreenResult, 'rows' | 'robustnessShared'>,
   weights: ScreeningWeights,
 ): SeparationSummary | null {
   const rows = screen.rows.filter((r) => !r.error);
@@ -112,7 +118,7 @@ export function separationSummary(
     details.push(
       `Not weighted: ${unweighted.map((c) => CRITERION_SHORT_WORDS[c.key]).join(', ')}.`,
     );
-  const micro = microPhWords(rows, screen.settings.microenvironmentPh);
+  const micro = microPhWords(rows);
   if (micro) details.push(`${micro.charAt(0).toUpperCase()}${micro.slice(1)}.`);
   return { ...sep, headline: `${head}${water}.`, details };
 }

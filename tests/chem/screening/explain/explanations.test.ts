@@ -220,12 +220,15 @@ describe('the separation line says what the screen shares across salts', () => {
       .filter((x) => x.counterIonId !== 'chloride')
       .every((x) => x.gastric?.convertsTo);
     const gastric = s.criteria.find((c) => c.key === 'gastric')!;
-    if (allConvert && gastric.verdict === 'same-for-all')
-      expect(s.details.join(' ')).toMatch(/every salt converts to the hydrochloride/);
+    expect(allConvert && gastric.verdict === 'same-for-all').toBe(true);
+    expect(s.details.join(' ')).toMatch(/every salt converts to the hydrochloride/);
     const high = r.rows.filter((x) => x.disproportionation?.risk === 'high').length;
-    if (high * 2 >= r.rows.length && high >= 2)
-      expect(s.details.join(' ')).toMatch(
-        new RegExp(`stands on ${high} of ${r.rows.length} salts at the microenvironment pH 7`),
-      );
+    // At the assumed pH 7 every salt of this pKa-8 base sits above its pH_max (the case of issue 16).
+    expect(high * 2).toBeGreaterThanOrEqual(r.rows.length);
+    expect(s.details.join(' ')).toMatch(
+      new RegExp(
+        `stands on ${high} of ${r.rows.length} salts at the microenvironment pH 7 assumed`,
+      ),
+    );
   });
 });
