@@ -62,7 +62,7 @@ export function solutionEnthalpyShown(
     notInformative = `1σ ${sigma.toFixed(0)} kJ/mol exceeds the value (${kj(value)}): not even its sign is known`;
   } else if (!measured && Math.abs(value) > PLAUSIBLE_SOLUTION_ENTHALPY_PER_DRUG_ION_KJ) {
     const f = solubilityFactor25To37C(value);
-    notInformative = `${kj(value)} kJ/mol per drug ion would make the salt ${f >= 1 ? `${f.toFixed(0)}× more` : `${(1 / f).toFixed(0)}× less`} soluble at 37 °C than at 25 °C — outside ±${PLAUSIBLE_SOLUTION_ENTHALPY_PER_DRUG_ION_KJ.toFixed(0)} kJ/mol (a threefold change, van 't Hoff)`;
+    notInformative = `at ${kj(value)} kJ/mol per drug ion the salt would be ${f >= 1 ? `${f.toFixed(0)}× more` : `${(1 / f).toFixed(0)}× less`} soluble at 37 °C than at 25 °C — outside ±${PLAUSIBLE_SOLUTION_ENTHALPY_PER_DRUG_ION_KJ.toFixed(0)} kJ/mol (a threefold change, van 't Hoff)`;
   }
   return {
     valueKJPerMolDrugIon: value,
