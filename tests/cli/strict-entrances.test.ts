@@ -10,12 +10,12 @@ import { runCli } from './support/run-cli';
 const dir = mkdtempSync(join(tmpdir(), 'saltsmith-strict-'));
 const SCREEN = ['screen', '--pka', '7.8', '--s0', '0.015', '--dose', '200', '--iterations', '20'];
 
-const jsonLines = (out: string) =>
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+const jsonLines = (out: string): any[] =>
   out
     .trim()
     .split('\n')
-    // eslint-disable-next-line @typescript-eslint/no-explicit-any
-    .map((l) => JSON.parse(l) as Record<string, any>);
+    .map((l) => JSON.parse(l) as unknown);
 
 describe('a SMILES that is not read completely, or has several components, is refused everywhere', () => {
   it.each(['CN1CCN(CC1)c1ccc(cc1)C(', 'CCN(', 'CCN[', 'CCN%', 'CCN garbage', 'C1CC((((', 'CCN.Cl'])(
