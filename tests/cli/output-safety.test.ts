@@ -200,7 +200,7 @@ describe('--input is size-capped before it is read', () => {
     );
     expect(r.status).toBe(1);
     expect(r.stderr).toContain('--input: ');
-    expect(r.stderr).toContain('is 314572800 bytes, larger than 1048576');
+    expect(r.stderr).toContain('is 314572800 bytes, larger than 1048576 bytes');
     // Peak memory (kB, GNU time): far below the file's 300 MB (it was 939 MB before).
     const peakKb = Number(r.stderr.trim().split('\n').at(-1));
     expect(peakKb).toBeLessThan(200_000);

@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -144,5 +144,24 @@ describe('invalid UTF-8 is refused, never read as U+FFFD', () => {
     ]);
     expect(s.code).toBe(1);
     expect(s.err).toMatch(/--input: is not valid UTF-8/);
+  });
+});
+
+describe('files that are not what they should be (cases beyond the issue)', () => {
+  it('--input a folder or an endless device, --batch a folder: one line naming the flag, exit 1', async () => {
+    const a = await runCli([...SCREEN, '--formula', 'C10H15N', '--input', dir]);
+    expect(a.code).toBe(1);
+    expect(a.err.trim()).toBe(
+      `saltsmith screen: --input: ${dir} is a folder (accepted: a JSON file)`,
+    );
+    // /dev/zero has no size to check: it is read only up to the cap plus one byte.
+    const b = await runCli([...SCREEN, '--formula', 'C10H15N', '--input', '/dev/zero']);
+    expect(b.code).toBe(1);
+    expect(b.err).toMatch(/--input: \/dev\/zero is larger than 1048576 bytes/);
+    const folder = join(dir, 'folder.csv');
+    mkdirSync(folder);
+    const c = await runCli(['screen', '--batch', folder, '--jobs', '1']);
+    expect(c.code).toBe(1);
+    expect(c.err.trim()).toMatch(/^saltsmith screen: --batch: .* is a folder/);
   });
 });

@@ -19,10 +19,10 @@ export async function readJsonFile(
 ): Promise<unknown> {
   const maxBytes = opts.maxBytes ?? MAX_INPUT_FILE_BYTES;
   const flag = opts.flag;
-  const tooLarge = (size: string) =>
+  const tooLarge = (size: number | null) =>
     valueError(
       flag,
-      `${path} is ${size} bytes, larger than ${maxBytes}`,
+      `${path} is ${size === null ? '' : `${size} bytes, `}larger than ${maxBytes} bytes`,
       `a file of at most ${maxBytes} bytes`,
     );
   const code = (err: unknown) => (err as NodeJS.ErrnoException).code ?? String(err);
@@ -35,7 +35,7 @@ export async function readJsonFile(
   try {
     const st = await fh.stat();
     if (st.isDirectory()) throw valueError(flag, `${path} is a folder`, 'a JSON file');
-    if (st.isFile() && st.size > maxBytes) throw tooLarge(String(st.size));
+    if (st.isFile() && st.size > maxBytes) throw tooLarge(st.size);
     const buf = Buffer.alloc(Math.min(maxBytes + 1, st.isFile() ? st.size + 1 : maxBytes + 1));
     let got = 0;
     for (;;) {
@@ -45,7 +45,7 @@ export async function readJsonFile(
       if (got === buf.length) break;
     }
     // A file that grew after its size was read, or a pipe, is cut at the cap + 1 and refused here.
-    if (got > maxBytes) throw tooLarge('more than ' + String(maxBytes));
+    if (got > maxBytes) throw tooLarge(null);
     return parseStrictJson(buf.subarray(0, got), { maxBytes, field: flag, pathPrefix: `${flag} ` });
   } catch (err) {
     if (err instanceof Error && 'code' in err && typeof err.code === 'string')

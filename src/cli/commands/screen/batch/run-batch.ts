@@ -3,7 +3,7 @@ import type { Writable } from 'node:stream';
 import { stat } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import Papa from 'papaparse';
-import { usageError, valueError } from '../../../args/cli-error';
+import { CliError, usageError, valueError } from '../../../args/cli-error';
 import { parseStrictJson } from '@/chem';
 import { openAtomicOutput } from '../../../output/atomic-write';
 import { checkRunFiles, type OutputTarget } from '../../../output/output-target';
@@ -89,8 +89,12 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     );
   let size: number;
   try {
-    size = (await stat(path)).size;
+    const st = await stat(path);
+    if (st.isDirectory())
+      throw valueError('--batch', `${path} is a folder`, 'a .csv or .jsonl file');
+    size = st.size;
   } catch (err) {
+    if (err instanceof CliError) throw err;
     throw valueError(
       '--batch',
       `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
@@ -244,6 +248,10 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
   } catch (err) {
     await out.abort();
     await errors?.abort();
+    // A read error of the batch file (a disk error, a file removed under us) is one line naming it.
+    const e = err as NodeJS.ErrnoException;
+    if (!(err instanceof CliError) && e.syscall === 'read')
+      throw valueError('--batch', `cannot read ${path} (${e.code ?? e.message})`);
     throw err;
   } finally {
     await screener.close();
