@@ -10,3 +10,4 @@ export * from './compound';
 export * from './library';
 export * from './screening';
 export * from './report';
+export * from './input';

@@ -22,7 +22,8 @@ export const COMMAND_USAGE = {
     usage: `saltsmith screen (--smiles S | --formula F) --pka 7.8[,3.1] [--kind base|acid] [--charge 1]
                   (--s0 mg/mL | --mp °C --logp X) [--dose mg] [--ions chloride,mesylate] [--input compound.json]
                   [--format csv|json] [--out file] [--top N] [--iterations 1000] [--seed 1]
-                  [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted]
+                  [--gastric-chloride 0.12] [--micro-ph 7] [--temperature-c 37] [--pka-origin measured|literature|predicted|not-stated]
+                  [--s0-origin measured|literature|predicted|not-stated]
                   [--keep-cocrystal-band] [--excipients magnesium-stearate,mannitol]
        saltsmith screen --batch compounds.csv|compounds.jsonl [--format csv|jsonl] [--top N] [--jobs N]
                   [--errors file] [--out file] [--ions …] [--iterations N] [settings flags as above]
@@ -31,7 +32,9 @@ export const COMMAND_USAGE = {
   would most reduce the doubt about first place first (same Monte Carlo: --iterations draws, --seed).
   compound.json may also hold "customIons": [{"id","smiles","charge","pKas"}] (counter-ions outside the
   library, named in "ions" by id) and "bench": {"<ion id>": {"meltingPointC", "fusionEnthalpyKJPerMol",
-  "solubilityMgPerMl"}} (that ion's 1:1 salt, or its only salt form).
+  "solubilityMgPerMl", "solubilityPh", "solubilityTemperatureC", "solidForm"}} (that ion's 1:1 salt, or
+  its only salt form; solidForm salt|free-form|unknown). An S₀ whose origin is not given is screened as
+  "not stated" (the predicted σ), never as measured.
   --excipients (or "settings": {"excipients": [...]}) judges each salt against the formulation's
   excipients by their bundled ids (an unknown id is refused with the accepted ones); the last columns
   name the excipient most likely to convert each salt and P(conversion).`,

@@ -16,6 +16,8 @@ export const DEMO_COMPOUND: Compound = {
   pKas: [{ value: 7.8, origin: 'measured' }],
   ionCharge: 1,
   intrinsicSolubilityMgPerMl: 0.015,
+  // The fictional story: the demo's pKa and S₀ were "measured" in its invented lab (the numbers are invented).
+  intrinsicSolubilityOrigin: 'measured',
   meltingPointC: 184,
   logP: 3.3,
   logPOrigin: 'measured',

@@ -210,6 +210,7 @@ export async function computeProjectScreening(inputs: ScreeningInputs): Promise<
         temperatureK: m.temperatureK,
         medium: m.medium,
         text: m.text,
+        solidForm: m.solidForm ?? null,
       })),
       solutionEnthalpyKJ: thermo?.solutionEnthalpyKJ ?? null,
     });
@@ -266,6 +267,7 @@ export function screeningInputsKey(inputs: ScreeningInputs): string {
       m.temperatureK,
       m.medium,
       m.text,
+      m.solidForm ?? null,
     ]),
     inputs.customIons.map((i) => [i.id, i.updatedAt, i.projectId]),
   ]);

@@ -91,7 +91,15 @@ describe('saltsmith screen --format json: measure_next', () => {
         intrinsicSolubilityMgPerMl: 0.02,
         doseMg: 100,
         ions: ['chloride', 'mesylate', 'tosylate'],
-        bench: { mesylate: { solubilityMgPerMl: 30 } },
+        // measured at the screening temperature with the salt left (stated), so its σ is narrow
+        bench: {
+          mesylate: {
+            solubilityMgPerMl: 30,
+            solubilityPh: 4,
+            solubilityTemperatureC: 37,
+            solidForm: 'salt',
+          },
+        },
       }),
     );
     const { code, out } = await run(['--input', file, '--iterations', '300', '--format', 'json']);

@@ -5,7 +5,8 @@ import { z } from 'zod';
  * models use. Validated with zod at every trust boundary (form input, stored records, files, CLI).
  * Units live in field names: mg/mL, °C, mg, g/cm³.
  */
-export const pkaOriginSchema = z.enum(['measured', 'literature', 'predicted']);
+/** Where a pKa comes from; 'not-stated' (the default of a new compound) is screened with the predicted σ. */
+export const pkaOriginSchema = z.enum(['measured', 'literature', 'predicted', 'not-stated']);
 export type PkaOrigin = z.infer<typeof pkaOriginSchema>;
 
 export const pkaEntrySchema = z.object({
@@ -14,6 +15,15 @@ export const pkaEntrySchema = z.object({
   origin: pkaOriginSchema,
 });
 export type PkaEntry = z.infer<typeof pkaEntrySchema>;
+
+/** Where an entered S₀ comes from. */
+export const intrinsicSolubilityOriginSchema = z.enum([
+  'measured',
+  'literature',
+  'predicted',
+  'not-stated',
+]);
+export type IntrinsicSolubilityOrigin = z.infer<typeof intrinsicSolubilityOriginSchema>;
 
 const positiveOrNull = (what: string, max: number) =>
   z
@@ -37,15 +47,26 @@ export const compoundSchema = z.object({
     .min(-3)
     .max(3)
     .refine((charge) => charge !== 0, 'The drug ion cannot be neutral'),
-  /** Intrinsic solubility S₀ of the free form, mg/mL, when measured. */
+  /** Intrinsic solubility S₀ of the free form, mg/mL, when known (else the General Solubility Equation). */
   intrinsicSolubilityMgPerMl: positiveOrNull('Intrinsic solubility', 1e4),
+  /**
+   * Where S₀ comes from (its σ follows: screen-context.ts). Absent or null: not stated — never read as
+   * measured (added after version 1 records).
+   */
+  intrinsicSolubilityOrigin: intrinsicSolubilityOriginSchema.nullable().optional(),
   /** Melting point of the free form, °C. */
   meltingPointC: z.number().min(-100).max(600).nullable(),
   /** log P (octanol/water) of the neutral form. */
   logP: z.number().min(-10).max(15).nullable(),
   logPOrigin: z.enum(['measured', 'computed', 'literature']).nullable(),
-  /** Highest single therapeutic dose, mg (as free form). */
-  doseMg: positiveOrNull('Dose', 1e5),
+  /**
+   * Highest single therapeutic dose, mg (as free form), from 0.000001 to 100000 mg: the range `saltsmith screen --dose` accepts (a dose of 1e-320 mg is a
+   * number but no dose; the bounds are common practice, far outside any medicine).
+   */
+  doseMg: positiveOrNull('Dose', 1e5).refine(
+    (v) => v === null || v >= 1e-6,
+    'Dose must be at least 0.000001 mg',
+  ),
   /** Measured true density of the free form, g/cm³. */
   densityGPerCm3: positiveOrNull('Density', 30),
   /** Unit-cell volume of the free form's crystal structure, Å³ (optional; added after version 1 records). */

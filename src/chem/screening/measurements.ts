@@ -20,6 +20,12 @@ export type MeasurementKind =
   | 'crystallinity'
   | 'note';
 
+/**
+ * The solid the lab found in equilibrium with a saturated solution (e.g. by XRPD of the residue):
+ * the salt, the free form, or not known. Null or absent: not stated.
+ */
+export type SolidForm = 'salt' | 'free-form' | 'unknown';
+
 export interface MeasurementInput {
   kind: MeasurementKind;
   value: number | null;
@@ -28,18 +34,27 @@ export interface MeasurementInput {
   temperatureK: number | null;
   medium: string;
   text: string;
+  /** Solubility only: the solid left at equilibrium, when the lab says (optional). */
+  solidForm?: SolidForm | null;
 }
 
 export interface MeasuredSolubility {
-  /** Formula units dissolved, mol/L. */
+  /** Formula units dissolved, mol/L (read as if the salt were the solid). */
   formulaUnitsM: number;
   ph: number | null;
   temperatureK: number | null;
   medium: string;
+  /** What the lab said about the solid left; null when not stated. */
+  solidForm: SolidForm | null;
+  /** Position among the candidate's solubility measurements, in input order. */
+  index: number;
 }
 
 export interface InterpretedMeasurements {
-  /** Solubility closest to the screening temperature (for K_sp), if any. */
+  /**
+   * Solubility closest to the screening temperature, whatever solid limited it (the screen decides
+   * which solid limits each value and which one K_sp rests on: screen/bench-solubility.ts).
+   */
   solubility: MeasuredSolubility | null;
   allSolubilities: MeasuredSolubility[];
   /** van 't Hoff fit when ≥ 3 solubilities at ≥ 2 temperatures exist; otherwise null with a reason. */
@@ -126,6 +141,8 @@ export function interpretMeasurements(
           ph: m.ph,
           temperatureK: m.temperatureK,
           medium: m.medium,
+          solidForm: m.solidForm ?? null,
+          index: out.allSolubilities.length,
         });
         break;
       case 'melting-point':

@@ -15,7 +15,8 @@ import { celsiusToKelvin } from '../units/temperature';
  *   of excipients.data.ts), which then replace it; 37 °C (ICH M9 temperature);
  * - salt anchor 2 decades above S₀ (see ksp-estimate.ts, common practice);
  * - pKa uncertainty by origin for the rank-robustness draw: measured 0.1, literature 0.3, predicted
- *   0.7 pKa units (our assumption; predicted pKa values are commonly quoted at ±0.5–1 unit).
+ *   0.7 pKa units (our assumption; predicted pKa values are commonly quoted at ±0.5–1 unit); a pKa whose
+ *   origin is not stated gets the predicted σ (nothing says it is better than a prediction).
  */
 export const screeningWeightsSchema = z.object({
   saltFormation: z.number().min(0).max(10).default(1),
@@ -95,8 +96,9 @@ export const screeningSettingsSchema = z.object({
       measured: z.number().min(0).max(3).default(0.1),
       literature: z.number().min(0).max(3).default(0.3),
       predicted: z.number().min(0).max(3).default(0.7),
+      'not-stated': z.number().min(0).max(3).default(0.7),
     })
-    .default({ measured: 0.1, literature: 0.3, predicted: 0.7 }),
+    .default({ measured: 0.1, literature: 0.3, predicted: 0.7, 'not-stated': 0.7 }),
 });
 export type ScreeningSettings = z.infer<typeof screeningSettingsSchema>;
 

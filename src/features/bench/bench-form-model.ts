@@ -11,8 +11,21 @@ export interface MeasurementDraft {
   ph: string;
   temperatureC: string;
   crystallinity: CrystallinityClass;
+  /** Solubility: the solid found left at equilibrium; '' not stated. */
+  solidForm: '' | SolidFormStated;
   text: string;
 }
+
+/** The solid left at equilibrium as the lab states it (stored in `MeasurementRecord.solidForm`). */
+export type SolidFormStated = 'salt' | 'free-form' | 'unknown';
+
+/** The choices of the "solid left" field, in order, with their words. */
+export const SOLID_FORM_CHOICES: readonly { value: '' | SolidFormStated; label: string }[] = [
+  { value: '', label: 'Not checked' },
+  { value: 'salt', label: 'Salt' },
+  { value: 'free-form', label: 'Free form' },
+  { value: 'unknown', label: 'Checked, unclear' },
+];
 
 export type MeasurementErrors = Partial<Record<keyof MeasurementDraft, string>>;
 
@@ -33,7 +46,7 @@ export const MEASUREMENT_KINDS: Record<
     valueLabel?: string;
     min?: number;
     max?: number;
-    conditions: ('medium' | 'ph' | 'temperatureC')[];
+    conditions: ('medium' | 'ph' | 'temperatureC' | 'solidForm')[];
   }
 > = {
   solubility: {
@@ -42,7 +55,7 @@ export const MEASUREMENT_KINDS: Record<
     valueLabel: 'Solubility (as salt)',
     min: 0,
     max: 1000,
-    conditions: ['medium', 'ph', 'temperatureC'],
+    conditions: ['medium', 'ph', 'temperatureC', 'solidForm'],
   },
   'melting-point': {
     label: 'Melting point',
@@ -96,6 +109,7 @@ export const emptyDraft = (kind: MeasurementKind = 'solubility'): MeasurementDra
           ? '25'
           : '',
   crystallinity: 'crystalline',
+  solidForm: '',
   text: '',
 });
 
@@ -193,6 +207,9 @@ export function measurementFromDraft(
       temperatureK: temperatureC === null ? null : temperatureC + CELSIUS_ZERO_K,
       medium: spec.conditions.includes('medium') ? medium : '',
       text,
+      ...(spec.conditions.includes('solidForm') && draft.solidForm
+        ? { solidForm: draft.solidForm }
+        : {}),
     },
   };
 }

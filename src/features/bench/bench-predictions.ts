@@ -202,3 +202,73 @@ export function vantHoffOf(
     };
   }
 }
+
+/** How the screen read one measured solubility, ready to show beside the record. */
+export interface BenchReadingView {
+  limitedBy: 'salt' | 'free-form' | 'unknown';
+  /** "limits: salt", "limits: free form" or "limits: undecided". */
+  label: string;
+  /** Why, in a sentence. */
+  why: string;
+  /** S₀ the value implies if the free form limited it, mg/mL (null without a pH). */
+  impliedS0MgPerMl: number | null;
+  usedForKsp: boolean;
+  /** The conflict note when the value behind K_sp sits above the pH_max it gives. */
+  conflict: string | null;
+  /** Temperature handling of the value behind K_sp, in words (null when none was needed). */
+  temperature: string | null;
+}
+
+const LIMIT_LABEL = {
+  salt: 'limits: salt',
+  'free-form': 'limits: free form',
+  unknown: 'limits: undecided',
+} as const;
+
+const DECIDED_WORDS = {
+  user: 'you stated the solid left',
+  'ph-max': 'the equilibrium pH against pH_max from the rest of the evidence',
+  'free-form-saturation': 'the value against what the free form dissolves at that pH',
+  'no-ph': 'no equilibrium pH recorded',
+  'within-margin': 'pH and value both within 1σ of the free-form limit',
+} as const;
+
+/**
+ * The screen's reading of a solubility record (ScreenRow.benchSolubility), found by the record's
+ * position among its candidate's solubility records — the order the screen received them in.
+ */
+export function benchReadingOf(
+  m: MeasurementRecord,
+  measurements: readonly MeasurementRecord[],
+  data: ProjectScreening | undefined,
+): BenchReadingView | null {
+  if (m.kind !== 'solubility' || !data) return null;
+  const row = data.screen.rows.find((r) => r.id === m.candidateId);
+  const use = row?.benchSolubility;
+  if (!use) return null;
+  const index = measurements
+    .filter((x) => x.candidateId === m.candidateId && x.kind === 'solubility')
+    .findIndex((x) => x.id === m.id);
+  const r = use.readings.find((x) => x.index === index);
+  if (!r) return null;
+  const pm = r.restPhMax;
+  const pmText = pm
+    ? `; pH_max ≈ ${pm.value.toFixed(1)} ± ${pm.sigma.toFixed(1)} without this value`
+    : '';
+  const t = use.temperatureAdjusted;
+  return {
+    limitedBy: r.limitedBy,
+    label: LIMIT_LABEL[r.limitedBy],
+    why: `${DECIDED_WORDS[r.decidedBy]}${pmText}${
+      r.usedForKsp ? '; K_sp rests on it' : r.limitedBy === 'free-form' ? '; not used for K_sp' : ''
+    }`,
+    impliedS0MgPerMl: r.impliedS0?.mgPerMl ?? null,
+    usedForKsp: r.usedForKsp,
+    conflict: r.usedForKsp ? use.conflict : null,
+    temperature: !r.usedForKsp
+      ? null
+      : t
+        ? `carried from ${t.fromC.toFixed(0)} to ${t.toC.toFixed(0)} °C by van ’t Hoff (ΔH ${t.solutionEnthalpyKJ.toFixed(1)} kJ/mol)`
+        : (use.widenedBecause.find((w) => /°C/.test(w)) ?? null),
+  };
+}

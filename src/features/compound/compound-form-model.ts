@@ -7,9 +7,11 @@ export interface CompoundDraft {
   formula: string;
   kind: 'base' | 'acid';
   pKas: string;
-  pKaOrigin: 'measured' | 'literature' | 'predicted';
+  pKaOrigin: 'measured' | 'literature' | 'predicted' | 'not-stated';
   ionCharge: string;
   intrinsicSolubilityMgPerMl: string;
+  /** Where S₀ comes from; '' is not stated (screened with the predicted σ, never shown as measured). */
+  intrinsicSolubilityOrigin: '' | 'measured' | 'literature' | 'predicted';
   meltingPointC: string;
   logP: string;
   logPOrigin: '' | 'measured' | 'computed' | 'literature';
@@ -28,9 +30,13 @@ export function draftFromCompound(c: Compound): CompoundDraft {
     formula: c.formula,
     kind: c.kind,
     pKas: c.pKas.map((p) => p.value).join(', '),
-    pKaOrigin: c.pKas[0]?.origin ?? 'measured',
+    pKaOrigin: c.pKas[0]?.origin ?? 'not-stated',
     ionCharge: String(c.ionCharge),
     intrinsicSolubilityMgPerMl: num(c.intrinsicSolubilityMgPerMl),
+    intrinsicSolubilityOrigin:
+      !c.intrinsicSolubilityOrigin || c.intrinsicSolubilityOrigin === 'not-stated'
+        ? ''
+        : c.intrinsicSolubilityOrigin,
     meltingPointC: num(c.meltingPointC),
     logP: num(c.logP),
     logPOrigin: c.logPOrigin ?? '',
@@ -88,6 +94,8 @@ export function compoundFromDraft(
     pKas: pKaValues.map((value) => ({ value, origin: draft.pKaOrigin })),
     ionCharge,
     intrinsicSolubilityMgPerMl: numberField('intrinsicSolubilityMgPerMl', 'Intrinsic solubility'),
+    intrinsicSolubilityOrigin:
+      draft.intrinsicSolubilityOrigin === '' ? null : draft.intrinsicSolubilityOrigin,
     meltingPointC: numberField('meltingPointC', 'Melting point'),
     logP: numberField('logP', 'log P'),
     logPOrigin: draft.logPOrigin === '' ? null : draft.logPOrigin,
@@ -148,6 +156,7 @@ export const DRAFT_KEYS: readonly (keyof CompoundDraft)[] = [
   'pKaOrigin',
   'ionCharge',
   'intrinsicSolubilityMgPerMl',
+  'intrinsicSolubilityOrigin',
   'meltingPointC',
   'logP',
   'logPOrigin',
@@ -171,6 +180,7 @@ const FIELDS_OF: Record<keyof CompoundDraft, readonly (keyof Compound)[]> = {
   pKaOrigin: ['pKas'],
   ionCharge: ['ionCharge'],
   intrinsicSolubilityMgPerMl: ['intrinsicSolubilityMgPerMl'],
+  intrinsicSolubilityOrigin: ['intrinsicSolubilityOrigin'],
   meltingPointC: ['meltingPointC'],
   logP: ['logP', 'logPOrigin'],
   logPOrigin: ['logPOrigin'],

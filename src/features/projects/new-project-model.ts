@@ -116,7 +116,7 @@ export function newProjectFromDraft(
     smiles: d.smiles,
     formula: d.formula,
     kind: d.kind,
-    pKas: [{ value: d.pKa, origin: 'measured' }],
+    pKas: [{ value: d.pKa, origin: 'not-stated' }],
     ionCharge: d.ionCharge,
     intrinsicSolubilityMgPerMl: null,
     meltingPointC: null,

@@ -11,7 +11,7 @@ export function compoundFacts(project: ProjectRecord, screening: ProjectScreenin
     { label: 'Ionisable as', value: c.kind === 'base' ? 'weak base' : 'weak acid' },
     {
       label: c.kind === 'base' ? 'pKa (conjugate acid)' : 'pKa',
-      value: c.pKas.map((p) => `${p.value} (${p.origin})`).join(', '),
+      value: c.pKas.map((p) => `${p.value} (${p.origin.replace('-', ' ')})`).join(', '),
     },
     {
       label: 'Drug ion',
@@ -31,7 +31,10 @@ export function compoundFacts(project: ProjectRecord, screening: ProjectScreenin
     value:
       c.intrinsicSolubilityMgPerMl ??
       `log₁₀ S₀ = ${s0.log10IntrinsicM.value.toFixed(2)} ± ${s0.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L, estimate)`,
-    unit: c.intrinsicSolubilityMgPerMl !== null ? 'mg/mL (measured)' : undefined,
+    unit:
+      c.intrinsicSolubilityMgPerMl !== null
+        ? `mg/mL (${(c.intrinsicSolubilityOrigin ?? 'not-stated').replace('-', ' ')})`
+        : undefined,
   });
   if (c.meltingPointC !== null)
     facts.push({ label: 'Melting point', value: c.meltingPointC, unit: '°C' });

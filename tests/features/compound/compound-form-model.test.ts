@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { compoundFromDraft, draftFromCompound } from '@/features/compound/compound-form-model';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
+import { EMPTY_NEW_PROJECT, newProjectFromDraft } from '@/features/projects/new-project-model';
 
 describe('compound form model', () => {
   const draft = draftFromCompound(DEMO_COMPOUND);
@@ -39,5 +40,26 @@ describe('compound form model', () => {
     expect(!r.ok && r.errors.ionCharge).toMatch(/needs 2 pKa values/);
     const ok = compoundFromDraft({ ...draft, ionCharge: '2', pKas: '7.8, 3.1' }, DEMO_COMPOUND);
     expect(ok.ok).toBe(true);
+  });
+
+  it('S₀ origin: absent reads "not stated" and is stored as null; a stated origin is kept', () => {
+    const { intrinsicSolubilityOrigin: _o, ...noOrigin } = DEMO_COMPOUND;
+    const d = draftFromCompound(noOrigin);
+    expect(d.intrinsicSolubilityOrigin).toBe('');
+    const r = compoundFromDraft(d, noOrigin);
+    expect(r.ok && r.compound.intrinsicSolubilityOrigin).toBeNull();
+    const lit = compoundFromDraft({ ...d, intrinsicSolubilityOrigin: 'literature' }, noOrigin);
+    expect(lit.ok && lit.compound.intrinsicSolubilityOrigin).toBe('literature');
+  });
+
+  it('a new project’s pKa origin is "not stated", not "measured"', () => {
+    const r = newProjectFromDraft({
+      ...EMPTY_NEW_PROJECT,
+      name: 'New',
+      formula: 'C10H15N',
+      pKa: '9.1',
+    });
+    expect(r.ok && r.compound.pKas[0]!.origin).toBe('not-stated');
+    expect(r.ok && draftFromCompound(r.compound).pKaOrigin).toBe('not-stated');
   });
 });

@@ -28,3 +28,10 @@ export {
   CRITERION_SHORT_WORDS,
   type SeparationSummary,
 } from './separation-words';
+export { S0_LOG10_SIGMA_BY_ORIGIN } from './screen-context';
+export { decideLimitingSolid, LIMITING_SOLID_MARGIN_SIGMA } from './bench-solubility';
+export {
+  temperatureTransfer,
+  UNCORRECTED_LOG10_PER_K,
+  type TemperatureTransfer,
+} from './bench-temperature';

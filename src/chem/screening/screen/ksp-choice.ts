@@ -1,104 +1,44 @@
-import { celsiusToKelvin, kelvinToCelsius } from '../../units/temperature';
+import { celsiusToKelvin } from '../../units/temperature';
 import type { Estimate } from '../../result';
 import { estimateKsp, log10KspFromFormulaUnits } from '../ksp-estimate';
-import { log10KspFromSaltSolubility } from '../salt-equilibrium';
 import type { PreparedCandidate } from './prepare-candidate';
 import type { ScreenContext } from './screen-context';
-import { estimatedKspFlag, measuredEnthalpyReason, measuredKspReason } from './screen-reasons';
+import { estimatedKspFlag, measuredEnthalpyReason } from './screen-reasons';
 import { saltWaterReason } from './salt-water-words';
-import { saltSolubilityBasis } from './salt-water-basis';
-import { measuredKspNotes } from './screen-notes';
-import type { Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
+import type { Reason, SaltWaterSolubility } from './screen.types';
+import { benchKspChoice } from './bench-ksp';
+import { saltWaterOf, type KspChoice } from './ksp-choice-parts';
 import { GAS_CONSTANT_KJ_PER_MOL_K } from '../../constants/physical';
 import { estimateSaltWaterSolubility } from '../salt-solubility/estimate-salt-solubility';
 import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 
-/** Measured-solubility spread carried into K_sp, decades per ion (our assumption: ~±10 % in solubility). */
-const MEASURED_LOG10_S_SIGMA = 0.05;
-/** A measurement this far from the screening temperature, K, is noted (our choice). */
-const TEMPERATURE_NOTE_K = 2;
-
-/** The K_sp a candidate is screened with, where it came from, and what is said about it. */
-export interface KspChoice {
-  log10Ksp: Estimate;
-  kspOrigin: 'measured' | 'estimated';
-  /** Spread of the salt's own log₁₀ solubility beyond that of S₀, decades (rank robustness draws it). */
-  saltLog10Sigma: number;
-  /** True when the salt's solubility is anchored on S₀ (so it moves with S₀ in the robustness draw). */
-  anchored: boolean;
-  reasons: Reason[];
-  flags: ScreenFlag[];
-  /** The salt's own solubility in water behind this K_sp. */
-  saltWater: SaltWaterSolubility;
-}
+export type { KspChoice } from './ksp-choice-parts';
 
 /**
- * K_sp of one prepared candidate: from the measured salt solubility when there is one, else the
- * labelled estimate: the calibrated salt-solubility model (salt-solubility/) when the counter-ion
- * has descriptors, else the common-practice anchor (ksp-estimate.ts). This is the one place that
- * chooses.
+ * K_sp of one prepared candidate: from a measured salt solubility when the bench has one that the
+ * salt limited (or one whose limiting solid cannot be told, with a widened σ) — bench-ksp.ts decides —
+ * else the labelled estimate: the calibrated salt-solubility model (salt-solubility/) when the
+ * counter-ion has descriptors, else the common-practice anchor (ksp-estimate.ts). This is the one
+ * place that chooses.
  */
 export function chooseKsp(
   ctx: ScreenContext,
   p: PreparedCandidate,
   referenceSolutionEnthalpyPerDrugKJ: number | null,
 ): KspChoice {
+  const estimate = estimatedKsp(ctx, p, referenceSolutionEnthalpyPerDrugKJ);
+  if (!p.measured?.allSolubilities.length) return estimate;
+  return benchKspChoice(ctx, p, estimate);
+}
+
+/** The estimate without any measured solubility: also "the rest of the evidence" a value is read against. */
+function estimatedKsp(
+  ctx: ScreenContext,
+  p: PreparedCandidate,
+  referenceSolutionEnthalpyPerDrugKJ: number | null,
+): KspChoice {
   const st = p.cand.stoichiometry;
   const T = ctx.temperatureK;
-  const ms = p.measured?.solubility ?? null;
-  if (ms) {
-    const logK =
-      ms.ph === null
-        ? log10KspFromFormulaUnits(
-            Math.log10(ms.formulaUnitsM),
-            st.drugPerSalt,
-            st.counterIonPerSalt,
-          )
-        : log10KspFromSaltSolubility({
-            drug: ctx.drugProtolyte,
-            drugIonCharge: ctx.compound.ionCharge,
-            drugPerSalt: st.drugPerSalt,
-            counterIon: p.protolyte,
-            counterIonCharge: st.ionCharge,
-            counterIonPerSalt: st.counterIonPerSalt,
-            pH: ms.ph,
-            formulaUnitsM: ms.formulaUnitsM,
-          });
-    const n = st.drugPerSalt + st.counterIonPerSalt;
-    const farK = ms.temperatureK !== null && Math.abs(ms.temperatureK - T) > TEMPERATURE_NOTE_K;
-    const notes = measuredKspNotes(
-      ms.ph,
-      farK ? kelvinToCelsius(ms.temperatureK!) : null,
-      kelvinToCelsius(T),
-    );
-    return {
-      log10Ksp: {
-        value: logK,
-        uncertainty: n * MEASURED_LOG10_S_SIGMA,
-        method: 'measured-salt-solubility',
-        sources: ['measured salt solubility (user data)'],
-        notes,
-      },
-      kspOrigin: 'measured',
-      saltLog10Sigma: MEASURED_LOG10_S_SIGMA,
-      anchored: false,
-      reasons: [measuredKspReason(ms.formulaUnitsM * p.saltMolarMassGPerMol)],
-      flags: [],
-      saltWater: saltWaterOf(
-        p,
-        ctx,
-        {
-          value: Math.log10(ms.formulaUnitsM * st.drugPerSalt),
-          uncertainty: MEASURED_LOG10_S_SIGMA,
-          method: 'measured-salt-solubility',
-          sources: ['measured salt solubility (user data)'],
-          notes,
-        },
-        'measured',
-        [],
-      ),
-    };
-  }
   const logS0 = ctx.log10IntrinsicM;
   const descriptors =
     p.cand.counterIonDescriptors ?? LIBRARY_COUNTER_ION_DESCRIPTORS[p.cand.counterIon.id] ?? null;
@@ -184,25 +124,6 @@ function estimatedChoice(
     reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
     flags: [estimatedKspFlag(sigma, saltWater.basis)],
     saltWater,
-  };
-}
-
-/** The salt's water solubility in the three units the workbench shows. */
-function saltWaterOf(
-  p: PreparedCandidate,
-  ctx: ScreenContext,
-  log10DrugM: Estimate,
-  origin: SaltWaterSolubility['origin'],
-  drivers: SaltWaterSolubility['drivers'],
-): SaltWaterSolubility {
-  const drugM = 10 ** log10DrugM.value;
-  const anchorDecades = ctx.settings.saltAnchorLog10;
-  return {
-    log10DrugM,
-    mgPerMlAsSalt: (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol,
-    mgPerMlAsFreeForm: drugM * ctx.freeFormMolarMassGPerMol,
-    origin,
-    drivers,
-    basis: saltSolubilityBasis({ origin, log10DrugM }, { anchorDecades }),
+    benchSolubility: null,
   };
 }

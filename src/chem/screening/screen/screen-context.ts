@@ -1,5 +1,5 @@
 import { ChemInputError, requireFiniteInRange, type Estimate } from '../../result';
-import { gseLog10IntrinsicSolubilityM } from '../intrinsic-solubility';
+import { GSE_UNCERTAINTY_LOG10, gseLog10IntrinsicSolubilityM } from '../intrinsic-solubility';
 import type { SaltMassInput } from '../mass-cost';
 import { drugGrids, type DrugGrids } from '../ph-grid-solubility';
 import { drugProtolyte, type DrugAcidBase, type ProfileOptions } from '../ph-profile';
@@ -13,8 +13,19 @@ import type {
   ScreeningCompound,
 } from './screen.types';
 
-/** Measured S₀ spread, decades (our assumption, shake-flask repeatability). */
-const MEASURED_S0_LOG10_SIGMA = 0.1;
+/**
+ * 1σ of an entered S₀ by its stated origin, decades. Measured: 0.1 (our assumption, shake-flask
+ * repeatability). Literature: 0.3 (our assumption: wider than the ≈0.17 interlaboratory SD of log S₀
+ * that Avdeef 2020, ADMET & DMPK 8, 29 reports — from memory — because a published value's solid form
+ * and temperature are often not given). Predicted, or not stated: the General Solubility Equation's
+ * σ (intrinsic-solubility.ts) — nothing says such a value is better than a prediction.
+ */
+export const S0_LOG10_SIGMA_BY_ORIGIN = {
+  measured: 0.1,
+  literature: 0.3,
+  predicted: GSE_UNCERTAINTY_LOG10,
+  'not-stated': GSE_UNCERTAINTY_LOG10,
+} as const;
 
 /**
  * What every step of the screen reads: the checked inputs and the quantities derived once from them
@@ -41,7 +52,10 @@ export interface ScreenContext {
   ichM9Plan: IchM9PlanPoint[];
 }
 
-/** Intrinsic solubility S₀ of the free form: measured when given, else the General Solubility Equation. */
+/**
+ * Intrinsic solubility S₀ of the free form: the entered value with the σ of its stated origin (not
+ * stated when absent), else the General Solubility Equation.
+ */
 export function intrinsicSolubility(
   c: ScreeningCompound,
   freeFormMolarMassGPerMol: number,
@@ -55,13 +69,18 @@ export function intrinsicSolubility(
         'S₀ > 0 mg/mL',
       );
     }
+    const origin = c.intrinsicSolubilityOrigin ?? 'not-stated';
     return {
-      origin: 'measured',
+      origin,
       est: {
         value: Math.log10(s / freeFormMolarMassGPerMol),
-        uncertainty: MEASURED_S0_LOG10_SIGMA,
-        method: 'measured',
-        sources: ['measured intrinsic solubility (user data)'],
+        uncertainty: S0_LOG10_SIGMA_BY_ORIGIN[origin],
+        method: origin === 'measured' ? 'measured' : `entered S₀ (${origin.replace('-', ' ')})`,
+        sources: [
+          origin === 'measured'
+            ? 'measured intrinsic solubility (user data)'
+            : `intrinsic solubility entered by the user, origin ${origin.replace('-', ' ')}`,
+        ],
       },
     };
   }

@@ -173,6 +173,7 @@ export function candidateRow(
     saltWaterSolubility: ksp.saltWater,
     log10Ksp: ksp.log10Ksp,
     kspOrigin: ksp.kspOrigin,
+    benchSolubility: ksp.benchSolubility,
     phMax: profile.phMax,
     profile:
       ctx.profiles === 'none'
@@ -240,6 +241,7 @@ export function errorRow(cand: ScreeningCandidate, label: string, error: string)
     saltWaterSolubility: null,
     log10Ksp: null,
     kspOrigin: null,
+    benchSolubility: null,
     phMax: null,
     profile: [],
     doseNumbers: [],

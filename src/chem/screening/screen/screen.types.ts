@@ -19,9 +19,14 @@ import type { SolutionEnthalpyShown } from './solution-enthalpy-shown';
 export interface ScreeningCompound {
   name: string;
   kind: 'base' | 'acid';
-  pKas: readonly { value: number; origin: 'measured' | 'literature' | 'predicted' }[];
+  pKas: readonly {
+    value: number;
+    origin: 'measured' | 'literature' | 'predicted' | 'not-stated';
+  }[];
   ionCharge: number;
   intrinsicSolubilityMgPerMl: number | null;
+  /** Where the entered S₀ comes from; absent or null: not stated (screened with the predicted σ). */
+  intrinsicSolubilityOrigin?: 'measured' | 'literature' | 'predicted' | 'not-stated' | null;
   meltingPointC: number | null;
   logP: number | null;
   doseMg: number | null;
@@ -97,7 +102,9 @@ export interface ScreenFlag {
     | 'salt-poorly-soluble'
     | 'disproportionation'
     | 'cocrystal-risk'
-    | 'estimated-ksp';
+    | 'estimated-ksp'
+    | 'bench-temperature'
+    | 'bench-solid-conflict';
   text: string;
   /** The rule that raised it, with its source. */
   rule: string;
@@ -146,6 +153,60 @@ export interface SaltWaterSolubility {
   basis: SaltSolubilityBasis;
 }
 
+/** Which solid limited a measured solubility (bench-solubility.ts): the salt, the free form, or undecided. */
+export type LimitingSolid = 'salt' | 'free-form' | 'unknown';
+
+/** How one measured solubility of a candidate was read. */
+export interface BenchSolubilityReading {
+  /** Position among the candidate's solubility measurements, in input order. */
+  index: number;
+  limitedBy: LimitingSolid;
+  /**
+   * What decided: the lab's statement of the solid left ('user'); the measured pH against the pH_max
+   * the rest of the evidence gives ('ph-max'); the value against the free form's own solubility at its
+   * pH ('free-form-saturation'); nothing ('no-ph': the equilibrium pH was not recorded;
+   * 'within-margin': neither test is beyond its 1σ margin).
+   */
+  decidedBy: 'user' | 'ph-max' | 'free-form-saturation' | 'no-ph' | 'within-margin';
+  ph: number | null;
+  temperatureC: number | null;
+  /** pH_max that the rest of the evidence gives (this value left out), ±1σ; null if none found. */
+  restPhMax: { value: number; sigma: number; basis: 'estimate' | 'measured' } | null;
+  /**
+   * log₁₀ of the measured total drug over the free form's solubility at the measured pH (S₀ and pKa
+   * of the compound), ±1σ: ≈ 0 when the free form is saturated, clearly < 0 when it cannot be the solid.
+   */
+  overFreeFormLog10: { value: number; sigma: number } | null;
+  /** S₀ the value implies if the free form limited it (null without a pH). */
+  impliedS0: { mgPerMl: number; log10M: number } | null;
+  /** True for the value K_sp rests on. */
+  usedForKsp: boolean;
+}
+
+/**
+ * What a candidate's measured solubilities were taken for: the structured record wt/explain and the
+ * bench area phrase. Null on a row without a measured solubility.
+ */
+export interface BenchSolubilityUse {
+  /** Solid behind the value K_sp rests on ('salt' or 'unknown'); 'free-form' when none is used. */
+  limitedBy: LimitingSolid;
+  readings: BenchSolubilityReading[];
+  /** S₀ implied by the free-form-limited value nearest the screening temperature (null if none). */
+  impliedS0: { mgPerMl: number; log10M: number; temperatureC: number | null; ph: number } | null;
+  /** The van ’t Hoff transfer of the value behind K_sp to the screening temperature, when made. */
+  temperatureAdjusted: {
+    fromC: number;
+    toC: number;
+    method: 'van-t-hoff-fit' | 'calorimetric';
+    solutionEnthalpyKJ: number;
+    log10Shift: number;
+  } | null;
+  /** Why the 1σ of the value behind K_sp was widened, in words (empty when it was not). */
+  widenedBecause: string[];
+  /** Set when the resulting pH_max lies below the pH the value was measured at. */
+  conflict: string | null;
+}
+
 export interface ScreenRow {
   id: string;
   label: string;
@@ -166,6 +227,8 @@ export interface ScreenRow {
   /** log₁₀ K_sp with uncertainty (decades); method says measured or estimate. */
   log10Ksp: Estimate | null;
   kspOrigin: 'measured' | 'estimated' | null;
+  /** How the measured solubilities were read (null without one). */
+  benchSolubility: BenchSolubilityUse | null;
   phMax: number | null;
   /** Profile in mg/mL of free-form equivalents (pH 1–8 by default). */
   profile: { pH: number; solubilityMgPerMl: number; solid: 'salt' | 'free-form' }[];
@@ -190,7 +253,9 @@ export interface ScreenRow {
 
 export interface FreeFormResult {
   log10IntrinsicM: Estimate;
-  intrinsicOrigin: 'measured' | 'general-solubility-equation';
+  /** The stated origin of an entered S₀, or the General Solubility Equation when none was entered. */
+  intrinsicOrigin:
+    'measured' | 'literature' | 'predicted' | 'not-stated' | 'general-solubility-equation';
   profile: { pH: number; solubilityMgPerMl: number }[];
   doseNumbers: DoseNumberAt[];
   worst: DoseNumberAt | null;

@@ -1,9 +1,11 @@
 import { z } from 'zod';
 import {
   buildCustomCounterIon,
+  celsiusToKelvin,
   ChemInputError,
   counterIonFromParentSmiles,
   getCounterIon,
+  readSmilesStrictly,
   type CounterIon,
   type CounterIonDescriptors,
   type MeasurementInput,
@@ -13,8 +15,8 @@ import {
 /**
  * What `screen --input F` adds for the salt's own solubility: counter-ions outside the library
  * (`customIons`, built from the parent's SMILES, their descriptors computed by openchemlib) and bench
- * data per counter-ion (`bench`: melting point, DSC enthalpy of fusion, measured solubility), for that
- * counter-ion's 1:1 salt or its only salt form.
+ * data per counter-ion (`bench`: melting point, DSC enthalpy of fusion, measured solubility with its
+ * equilibrium pH, temperature and the solid left), for that counter-ion's 1:1 salt or its only salt form.
  */
 const ID = /^[a-z0-9]+(-[a-z0-9]+)*$/;
 const pka = z.number().min(-10).max(20);
@@ -40,12 +42,30 @@ export const benchEntrySchema = z
     meltingPointC: z.number().min(-50).max(500).optional(),
     fusionEnthalpyKJPerMol: z.number().min(0.5).max(300).optional(),
     solubilityMgPerMl: z.number().positive().max(1000).optional(),
+    /** Equilibrium pH of the saturated solution the solubility was measured in. */
+    solubilityPh: z.number().min(0).max(14).optional(),
+    /** Temperature of the solubility measurement, °C (not given: taken as 25 °C, and said). */
+    solubilityTemperatureC: z.number().min(0).max(100).optional(),
+    /** The solid left at equilibrium, when the lab checked it. */
+    solidForm: z.enum(['salt', 'free-form', 'unknown']).optional(),
   })
   .strict()
-  .refine(
-    (b) => Object.keys(b).length > 0,
-    'give at least one of meltingPointC, fusionEnthalpyKJPerMol, solubilityMgPerMl',
-  );
+  .superRefine((b, ctx) => {
+    if (Object.keys(b).length === 0)
+      ctx.addIssue({
+        code: 'custom',
+        message: 'give at least one of meltingPointC, fusionEnthalpyKJPerMol, solubilityMgPerMl',
+      });
+    if (b.solubilityMgPerMl !== undefined) return;
+    for (const key of ['solubilityPh', 'solubilityTemperatureC', 'solidForm'] as const) {
+      if (b[key] !== undefined)
+        ctx.addIssue({
+          code: 'custom',
+          path: [key],
+          message: 'describes a solubility: give solubilityMgPerMl with it',
+        });
+    }
+  });
 export type BenchEntry = z.infer<typeof benchEntrySchema>;
 
 /** In-house counter-ions from their SMILES, refused with the field named when they contradict themselves. */
@@ -79,14 +99,10 @@ export async function buildCustomIons(
     const sorted = [...spec.pKas].sort((a, b) => a - b);
     if (sorted.some((v, k) => v !== spec.pKas[k]))
       throw new ChemInputError(`${field}.pKas`, 'pKa values out of order', 'ascending pKa values');
-    const nonHydroxide = spec.smiles.split('.').filter((p) => p.trim() !== '[OH-]');
-    if (nonHydroxide.length > 1) {
-      throw new ChemInputError(
-        `${field}.smiles`,
-        'several components (joined by ".")',
-        'the SMILES of the parent acid or base (a hydroxide may stand beside a quaternary cation)',
-      );
-    }
+    // The one structure check; a hydroxide may stand beside a quaternary cation ("C[N+](C)(C)C.[OH-]").
+    readSmilesStrictly(ocl, spec.smiles, `${field}.smiles`, {
+      allowComponents: (part) => part === '[OH-]',
+    });
     let parent;
     try {
       parent = counterIonFromParentSmiles(ocl, spec.smiles, spec.charge);
@@ -175,7 +191,18 @@ export function withExtras(
         unit: 'kJ/mol',
       });
     if (entry.solubilityMgPerMl !== undefined)
-      ms.push({ ...base, kind: 'solubility', value: entry.solubilityMgPerMl, unit: 'mg/mL' });
+      ms.push({
+        ...base,
+        kind: 'solubility',
+        value: entry.solubilityMgPerMl,
+        unit: 'mg/mL',
+        ph: entry.solubilityPh ?? null,
+        temperatureK:
+          entry.solubilityTemperatureC === undefined
+            ? null
+            : celsiusToKelvin(entry.solubilityTemperatureC),
+        solidForm: entry.solidForm ?? null,
+      });
     const k = out.indexOf(target);
     out[k] = { ...target, measurements: [...(target.measurements ?? []), ...ms] };
   }

@@ -6,16 +6,18 @@ import {
   COUNTER_IONS,
   drugIon,
   getCounterIon,
+  intrinsicSolubilityOriginSchema,
   parseFormula,
+  pkaOriginSchema,
   parseScreeningSettings,
   resolveExcipients,
   parseStructure,
   sameElements,
   type CounterIon,
+  type IntrinsicSolubilityOrigin,
   type PkaEntry,
 } from '@/chem';
 import { usageError } from '../../args/cli-error';
-import { refuseMultiComponent } from '../../args/ion-consistency';
 import {
   benchEntrySchema,
   buildCustomIons,
@@ -38,6 +40,8 @@ export interface CompoundSpec {
   /** Charge of the drug ion; default +1 for a base, −1 for an acid. */
   ionCharge: number | null;
   intrinsicSolubilityMgPerMl: number | null;
+  /** Where S₀ comes from; null or absent: not stated (screened with the predicted σ). */
+  intrinsicSolubilityOrigin?: IntrinsicSolubilityOrigin | null;
   meltingPointC: number | null;
   logP: number | null;
   doseMg: number | null;
@@ -74,19 +78,13 @@ export const compoundFileSchema = z
     formula: z.string().max(200).optional(),
     kind: z.enum(['base', 'acid']).optional(),
     pKas: z
-      .array(
-        z.union([
-          pka,
-          z
-            .object({ value: pka, origin: z.enum(['measured', 'literature', 'predicted']) })
-            .strict(),
-        ]),
-      )
+      .array(z.union([pka, z.object({ value: pka, origin: pkaOriginSchema }).strict()]))
       .min(1)
       .max(4)
       .optional(),
     ionCharge: z.number().int().min(-3).max(3).optional(),
     intrinsicSolubilityMgPerMl: z.number().positive().max(1e4).nullable().optional(),
+    intrinsicSolubilityOrigin: intrinsicSolubilityOriginSchema.nullable().optional(),
     meltingPointC: z.number().min(-100).max(600).nullable().optional(),
     logP: z.number().min(-10).max(15).nullable().optional(),
     doseMg: z.number().positive().max(1e5).nullable().optional(),
@@ -166,8 +164,7 @@ export async function prepareScreen(
   let structure;
   let formula = spec.formula.trim();
   if (spec.smiles.trim() !== '') {
-    refuseMultiComponent(name(n, 'smiles'), spec.smiles.trim());
-    structure = await parseStructure(spec.smiles);
+    structure = await parseStructure(spec.smiles, { field: name(n, 'smiles') });
     if (structure.netCharge !== 0) {
       throw new ChemInputError(
         name(n, 'smiles'),
@@ -199,6 +196,7 @@ export async function prepareScreen(
     pKas: spec.pKas,
     ionCharge,
     intrinsicSolubilityMgPerMl: spec.intrinsicSolubilityMgPerMl,
+    intrinsicSolubilityOrigin: spec.intrinsicSolubilityOrigin ?? null,
     meltingPointC: spec.meltingPointC,
     logP: spec.logP,
     doseMg: spec.doseMg,

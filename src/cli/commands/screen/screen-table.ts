@@ -40,6 +40,7 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       salt_solubility_water_log10_M_sd: sig(row.saltWaterSolubility?.log10DrugM.uncertainty, 2),
       salt_solubility_water_mg_per_ml: sig(row.saltWaterSolubility?.mgPerMlAsSalt),
       salt_solubility_origin: row.saltWaterSolubility?.origin ?? '',
+      bench_solubility_limited_by: row.benchSolubility?.limitedBy ?? '',
       salt_solubility_drivers:
         row.saltWaterSolubility?.drivers
           .map((d) => `${d.id} ${d.decades > 0 ? '+' : ''}${d.decades.toFixed(2)}`)

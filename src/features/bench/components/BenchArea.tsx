@@ -12,6 +12,8 @@ export interface BenchExtras {
   predictionFor: (m: MeasurementRecord) => ReactNode;
   /** Panels derived from the selected candidate's measurements (lattice back-out, van 't Hoff). */
   derived?: (candidateId: string, measurements: MeasurementRecord[]) => ReactNode;
+  /** How a measured solubility was read (limiting solid, implied S₀), under its conditions. */
+  readingFor?: (m: MeasurementRecord) => ReactNode;
   /** Display names of the counter-ions by candidate id. */
   ionNames?: Record<string, string>;
 }
@@ -97,6 +99,7 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
               measurements={mine}
               caption={`Measurements for ${label(current)}`}
               predictionFor={extras.predictionFor}
+              {...(extras.readingFor ? { readingFor: extras.readingFor } : {})}
             />
           </div>
         </div>

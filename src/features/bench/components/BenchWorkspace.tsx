@@ -2,8 +2,9 @@ import type { ProjectRecord, MeasurementRecord } from '@/persistence/records';
 import { useProjectScreening } from '@/screening-data/use-screening';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { VantHoffPlot } from '@/components/charts/VantHoffPlot';
-import { backedOutLattice, predictionFor, vantHoffOf } from '../bench-predictions';
+import { backedOutLattice, benchReadingOf, predictionFor, vantHoffOf } from '../bench-predictions';
 import { BenchArea } from './BenchArea';
+import { BenchReading } from './BenchReading';
 
 const kj = (x: number) => x.toFixed(0).replace(/^-/, '−');
 
@@ -117,6 +118,12 @@ export function BenchWorkspace({ project }: { project: ProjectRecord }) {
               ) : null}
             </span>
           );
+        },
+        readingFor: (m) => {
+          const view = benchReadingOf(m, screening.measurements ?? [], data);
+          return view ? (
+            <BenchReading view={view} projectId={project.id} measurementId={m.id} />
+          ) : null;
         },
         derived: (candidateId) => (
           <Derived

@@ -5,6 +5,7 @@ import type { MeasurementKind } from '@/persistence/records';
 import {
   CRYSTALLINITY_CLASSES,
   MEASUREMENT_KINDS,
+  SOLID_FORM_CHOICES,
   emptyDraft,
   measurementFromDraft,
   type CrystallinityClass,
@@ -162,6 +163,26 @@ export function MeasurementForm({
         {spec.conditions.includes('temperatureC')
           ? input('temperatureC', 'Temperature', '°C')
           : null}
+        {spec.conditions.includes('solidForm') ? (
+          <div className="field">
+            <label htmlFor={`${uid}-solid`}>Solid left at equilibrium</label>
+            <select
+              id={`${uid}-solid`}
+              value={draft.solidForm}
+              aria-describedby={`${uid}-solid-hint`}
+              onChange={(e) => set('solidForm', e.target.value as MeasurementDraft['solidForm'])}
+            >
+              {SOLID_FORM_CHOICES.map((c) => (
+                <option key={c.value} value={c.value}>
+                  {c.label}
+                </option>
+              ))}
+            </select>
+            <p id={`${uid}-solid-hint`} className="field-hint">
+              E.g. by XRPD of the residue. Not checked: the workbench reads it from the pH.
+            </p>
+          </div>
+        ) : null}
         {input('text', draft.kind === 'note' ? 'Note' : 'Notes (method, batch, observations)')}
       </div>
       <datalist id={`${uid}-media`}>

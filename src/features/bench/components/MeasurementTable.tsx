@@ -3,6 +3,8 @@ import { measurementsRepo } from '@/persistence/measurements-repo';
 import type { MeasurementRecord } from '@/persistence/records';
 import { CELSIUS_ZERO_K, MEASUREMENT_KINDS } from '../bench-form-model';
 
+const SOLID_WORDS = { salt: 'salt', 'free-form': 'free form', unknown: 'unclear' } as const;
+
 const fmt = (x: number) =>
   Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 1 ? x.toPrecision(3) : x.toPrecision(2);
 
@@ -11,6 +13,7 @@ function conditions(m: MeasurementRecord): string {
   if (m.medium) parts.push(m.medium);
   if (m.ph !== null) parts.push(`pH ${m.ph}`);
   if (m.temperatureK !== null) parts.push(`${(m.temperatureK - CELSIUS_ZERO_K).toFixed(1)} °C`);
+  if (m.solidForm) parts.push(`solid left: ${SOLID_WORDS[m.solidForm]}`);
   return parts.join(', ') || '—';
 }
 
@@ -19,10 +22,13 @@ export function MeasurementTable({
   measurements,
   caption,
   predictionFor,
+  readingFor,
 }: {
   measurements: MeasurementRecord[];
   caption: string;
   predictionFor: (m: MeasurementRecord) => ReactNode;
+  /** How the workbench read a solubility (which solid limited it), shown under its conditions. */
+  readingFor?: (m: MeasurementRecord) => ReactNode;
 }) {
   const [removed, setRemoved] = useState<MeasurementRecord | null>(null);
   const undoBar = (
@@ -89,7 +95,10 @@ export function MeasurementTable({
                     measured
                   </span>
                 </td>
-                <td>{conditions(m)}</td>
+                <td>
+                  {conditions(m)}
+                  {readingFor ? readingFor(m) : null}
+                </td>
                 <td className="prediction">{predictionFor(m)}</td>
                 <td className="notes-cell">{m.text || '—'}</td>
                 <td>

@@ -1,3 +1,4 @@
+import { S0_LOG10_SIGMA_BY_ORIGIN as S0_SIGMA } from '@/chem';
 import type { ProjectRecord } from '@/persistence/records';
 import { useStorageProblemStore } from '@/stores/storage-problem-store';
 import { useCompoundAutosave } from '../hooks/use-compound-autosave';
@@ -76,6 +77,7 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
             value={draft.pKaOrigin}
             onChange={(e) => change('pKaOrigin', e.target.value)}
           >
+            <option value="not-stated">Not stated (screened as predicted)</option>
             <option value="measured">Measured</option>
             <option value="literature">Literature</option>
             <option value="predicted">Predicted</option>
@@ -92,8 +94,24 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
           label="Intrinsic solubility S₀"
           unit="mg/mL"
           inputMode="decimal"
+          hint="Empty: estimated from melting point and log P (General Solubility Equation)"
           {...common}
         />
+        <div className="field">
+          <label htmlFor="compound-intrinsicSolubilityOrigin">
+            S₀ origin <span className="unit">(1σ, decades)</span>
+          </label>
+          <select
+            id="compound-intrinsicSolubilityOrigin"
+            value={draft.intrinsicSolubilityOrigin}
+            onChange={(e) => change('intrinsicSolubilityOrigin', e.target.value)}
+          >
+            <option value="">Not stated (screened as predicted, ±{S0_SIGMA['not-stated']})</option>
+            <option value="measured">Measured (±{S0_SIGMA.measured})</option>
+            <option value="literature">Literature (±{S0_SIGMA.literature})</option>
+            <option value="predicted">Predicted (±{S0_SIGMA.predicted})</option>
+          </select>
+        </div>
         <Field id="meltingPointC" label="Melting point" unit="°C" inputMode="decimal" {...common} />
         <Field id="logP" label="log P" unit="octanol/water" inputMode="decimal" {...common} />
         <div className="field">

@@ -140,7 +140,9 @@ function FreeFormNote({ data }: { data: ProjectScreening }) {
       Free form:{' '}
       {data.screen.freeForm.intrinsicOrigin === 'measured'
         ? 'measured S₀'
-        : 'S₀ from the General Solubility Equation (estimate)'}
+        : data.screen.freeForm.intrinsicOrigin === 'general-solubility-equation'
+          ? 'S₀ from the General Solubility Equation (estimate)'
+          : `S₀ entered, origin ${data.screen.freeForm.intrinsicOrigin.replace('-', ' ')}`}
       , log₁₀ S₀ = {data.screen.freeForm.log10IntrinsicM.value.toFixed(2)} ±{' '}
       {data.screen.freeForm.log10IntrinsicM.uncertainty.toFixed(2)} (mol/L). Salt curves without a
       measured salt solubility rest on an estimated K_sp (±1σ about one decade) — read their

@@ -3,6 +3,7 @@ import { CliError, valueError } from '../../../args/cli-error';
 import { readNumber } from '../../../args/parse-flags';
 import { SCREEN_FLAGS } from '../screen-flags';
 import type { CompoundSpec, FieldNames } from '../screen-input';
+import type { IntrinsicSolubilityOrigin } from '@/chem';
 
 /**
  * One compound of a batch file, read from a CSV record or a JSON Lines object into the same
@@ -108,7 +109,8 @@ const list = (col: string, v: unknown, min: number, max: number): string[] | nul
 /** The compound of one row; throws CliError (or ChemInputError) naming the column. */
 export function specFromRow(
   row: RawRow,
-  pkaOrigin: 'measured' | 'literature' | 'predicted',
+  pkaOrigin: 'measured' | 'literature' | 'predicted' | 'not-stated',
+  s0Origin: IntrinsicSolubilityOrigin | null = null,
 ): { id: string; spec: CompoundSpec } {
   const id = text('id', row.id, 120);
   if (id === '') throw valueError('id', 'is empty', 'a compound id');
@@ -132,6 +134,7 @@ export function specFromRow(
       pKas,
       ionCharge: charge,
       intrinsicSolubilityMgPerMl: number('s0_mg_per_ml', row.s0_mg_per_ml, SCREEN_FLAGS.s0),
+      intrinsicSolubilityOrigin: s0Origin,
       meltingPointC: number('mp_c', row.mp_c, SCREEN_FLAGS.mp),
       logP: number('logp', row.logp, SCREEN_FLAGS.logp),
       doseMg: number('dose_mg', row.dose_mg, SCREEN_FLAGS.dose),

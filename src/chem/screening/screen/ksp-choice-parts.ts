@@ -1,0 +1,42 @@
+import type { Estimate } from '../../result';
+import type { PreparedCandidate } from './prepare-candidate';
+import type { ScreenContext } from './screen-context';
+import { saltSolubilityBasis, type BenchReadingFields } from './salt-water-basis';
+import type { BenchSolubilityUse, Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
+
+/** The K_sp a candidate is screened with, where it came from, and what is said about it. */
+export interface KspChoice {
+  log10Ksp: Estimate;
+  kspOrigin: 'measured' | 'estimated';
+  /** Spread of the salt's own log₁₀ solubility beyond that of S₀, decades (rank robustness draws it). */
+  saltLog10Sigma: number;
+  /** True when the salt's solubility is anchored on S₀ (so it moves with S₀ in the robustness draw). */
+  anchored: boolean;
+  reasons: Reason[];
+  flags: ScreenFlag[];
+  /** The salt's own solubility in water behind this K_sp. */
+  saltWater: SaltWaterSolubility;
+  /** How the candidate's measured solubilities were read (null without one). */
+  benchSolubility: BenchSolubilityUse | null;
+}
+
+/** The salt's water solubility in the three units the workbench shows. */
+export function saltWaterOf(
+  p: PreparedCandidate,
+  ctx: ScreenContext,
+  log10DrugM: Estimate,
+  origin: SaltWaterSolubility['origin'],
+  drivers: SaltWaterSolubility['drivers'],
+  bench?: BenchReadingFields,
+): SaltWaterSolubility {
+  const drugM = 10 ** log10DrugM.value;
+  const anchorDecades = ctx.settings.saltAnchorLog10;
+  return {
+    log10DrugM,
+    mgPerMlAsSalt: (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol,
+    mgPerMlAsFreeForm: drugM * ctx.freeFormMolarMassGPerMol,
+    origin,
+    drivers,
+    basis: saltSolubilityBasis({ origin, log10DrugM }, { anchorDecades, bench }),
+  };
+}
