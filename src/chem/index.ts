@@ -11,3 +11,4 @@ export * from './library';
 export * from './screening';
 export * from './report';
 export * from './plate-plan';
+export * from './input';

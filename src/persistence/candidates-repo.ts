@@ -1,5 +1,8 @@
 import { saltStoichiometryFromCharges } from '@/chem';
 import { getDb } from './db';
+import { changesSetting } from './field-stamps';
+import { patchRecord } from './stamped-writes';
+import { requireRoomInProject } from './project-limits';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, candidateRecordSchema, type CandidateRecord } from './records';
 
@@ -35,6 +38,9 @@ export const candidatesRepo = {
     },
   ): Promise<CandidateRecord> => {
     const db = getDb();
+    const already = await db.candidates.where({ projectId, ionId }).first();
+    if (already) return already;
+    await requireRoomInProject(projectId, 'candidates', { ionId, ...stoichiometry });
     return db.transaction('rw', db.candidates, async () => {
       const existing = await db.candidates.where({ projectId, ionId }).first();
       if (existing) return existing;
@@ -54,13 +60,9 @@ export const candidatesRepo = {
     });
   },
 
+  /** Store the given fields, each stamped (field-stamps.ts); an invalid result throws, nothing stored. */
   update: async (id: string, patch: Partial<Omit<CandidateRecord, 'id' | 'projectId'>>) => {
-    const db = getDb();
-    await db.transaction('rw', db.candidates, async () => {
-      const current = await db.candidates.get(id);
-      if (!current) throw new Error(`No candidate with id ${id}`);
-      await db.candidates.put(candidateRecordSchema.parse({ ...current, ...patch }));
-    });
+    await patchRecord('candidates', id, changesSetting([], patch));
   },
 
   /** The shortlisted counter-ion ids of every project, for the project overview (projectId → count). */

@@ -5,6 +5,9 @@ import {
   type CounterIonEdit,
 } from '@/chem';
 import { getDb } from './db';
+import { changesBetween } from './field-stamps';
+import { patchRecord } from './stamped-writes';
+import { requireRoomInProject } from './project-limits';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, customIonRecordSchema, type CustomIonRecord } from './records';
 
@@ -24,6 +27,10 @@ export const customIonsRepo = {
       schemaVersion: RECORD_SCHEMA_VERSION,
       updatedAt: nowIso(),
     });
+    const isNew = !(await getDb().customIons.get(record.id));
+    if (isNew && record.projectId !== null) {
+      await requireRoomInProject(record.projectId, 'customIons', record);
+    }
     await getDb().customIons.put(record);
     return record;
   },
@@ -46,22 +53,34 @@ export const customIonsRepo = {
   },
 
   /**
-   * Record this project's edits of a bundled ion (replacing earlier edits of the same ion); the bundled
-   * value itself is never changed.
+   * Record this project's edits of a bundled ion; the bundled value itself is never changed. `before`
+   * is the edit the form started from: when the project already has an edit of this ion, only the
+   * fields that differ from `before` are written, each stamped (field-stamps.ts), so a field another
+   * tab edited meanwhile is kept.
    */
   saveEdit: async (
     projectId: string,
     ionId: string,
     edit: CounterIonEdit,
+    before: CounterIonEdit = {},
   ): Promise<CustomIonRecord> => {
     const db = getDb();
+    const merged = counterIonEditSchema.parse(edit);
+    const found = await db.customIons
+      .where('overridesIonId')
+      .equals(ionId)
+      .filter((r) => r.projectId === projectId)
+      .first();
+    if (found) {
+      const patch = changesBetween(['ion'], before, merged);
+      return (await patchRecord('customIons', found.id, patch)).record as CustomIonRecord;
+    }
     return db.transaction('rw', db.customIons, async () => {
       const existing = await db.customIons
         .where('overridesIonId')
         .equals(ionId)
         .filter((r) => r.projectId === projectId)
         .first();
-      const merged = counterIonEditSchema.parse(edit);
       const record = customIonRecordSchema.parse({
         id: existing?.id ?? newId('ionedit'),
         schemaVersion: RECORD_SCHEMA_VERSION,

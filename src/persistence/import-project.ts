@@ -1,6 +1,7 @@
 import { COUNTER_IONS } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
+import { nextStamp } from './field-stamps';
 import {
   RECORD_SCHEMA_VERSION,
   candidateRecordSchema,
@@ -16,6 +17,7 @@ import {
 import { renameScreenPlanIons } from './screen-plan-record';
 import { buildProjectFile, serializeProjectFile, type ProjectBundle } from './project-file/build';
 import { parseProjectFileText } from './project-file/restore';
+import { checkFileStructures } from './project-file/file-rules';
 import type { ProjectFile } from './project-file/schema';
 
 /** Read everything a project file holds for one project. */
@@ -231,6 +233,8 @@ export async function writeProjectFile(
         isDemo: false,
         compound: file.project.compound,
         settings: file.project.settings,
+        // Imported now: a write kept aside from before (a replay) is older than every field.
+        stampFloor: nextStamp(),
       });
 
       await db.projects.put(project);
@@ -256,5 +260,6 @@ export async function writeProjectFile(
  */
 export async function importProjectText(text: string, target: ImportMode): Promise<ImportOutcome> {
   const file = parseProjectFileText(text);
+  await checkFileStructures(file);
   return writeProjectFile(file, target);
 }

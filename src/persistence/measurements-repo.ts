@@ -1,4 +1,7 @@
 import { getDb } from './db';
+import { changesSetting } from './field-stamps';
+import { patchRecord } from './stamped-writes';
+import { requireRoomInProject } from './project-limits';
 import { newId, nowIso } from './ids';
 import { RECORD_SCHEMA_VERSION, measurementRecordSchema, type MeasurementRecord } from './records';
 
@@ -12,7 +15,10 @@ export const measurementsRepo = {
   listForCandidate: (candidateId: string): Promise<MeasurementRecord[]> =>
     getDb().measurements.where('candidateId').equals(candidateId).toArray(),
 
-  /** Validate and store a measurement; an invalid one throws and nothing is stored. */
+  /**
+   * Validate and store a measurement; an invalid one, or one the project has no room for
+   * (project-limits.ts), throws and nothing is stored.
+   */
   add: async (m: NewMeasurement): Promise<MeasurementRecord> => {
     const record = measurementRecordSchema.parse({
       ...m,
@@ -20,18 +26,17 @@ export const measurementsRepo = {
       schemaVersion: RECORD_SCHEMA_VERSION,
       recordedAt: nowIso(),
     });
+    await requireRoomInProject(record.projectId, 'measurements', record);
     await getDb().measurements.add(record);
     return record;
   },
 
-  /** Replace a measurement's fields after validation; an invalid edit throws and nothing changes. */
+  /**
+   * Store the given fields of a measurement, each stamped (field-stamps.ts): a field another tab wrote
+   * later is kept. An invalid result throws and nothing changes.
+   */
   update: async (id: string, patch: Partial<NewMeasurement>): Promise<void> => {
-    const db = getDb();
-    await db.transaction('rw', db.measurements, async () => {
-      const current = await db.measurements.get(id);
-      if (!current) throw new Error(`No measurement with id ${id}`);
-      await db.measurements.put(measurementRecordSchema.parse({ ...current, ...patch }));
-    });
+    await patchRecord('measurements', id, changesSetting([], patch));
   },
 
   /** Count of measurements per project (projectId → count), for the project overview. */

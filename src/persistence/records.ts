@@ -6,6 +6,7 @@ import {
   platePlanSchema,
   wellOutcomeSchema,
 } from '@/chem';
+import { stampFieldsSchema } from './field-stamps';
 
 /**
  * Stored record shapes. Every record carries `schemaVersion` so that a later version of Saltsmith
@@ -16,8 +17,18 @@ export const RECORD_SCHEMA_VERSION = 1;
 
 /** A record id; bounded so that a hostile project file cannot carry megabyte-long ids. */
 const recordId = z.string().min(1).max(200);
-/** An ISO 8601 date-time as written by `new Date().toISOString()`. */
-const isoDate = z.string().min(1).max(40);
+/**
+ * An ISO 8601 date-time as `Date.prototype.toISOString` writes it (UTC, or with an offset), and a real
+ * date ("not a date" and 2026-13-45 are refused).
+ */
+export const isoDate = z
+  .string()
+  .max(40)
+  .regex(
+    /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})$/,
+    'must be an ISO 8601 date-time, e.g. 2026-12-03T07:00:00.000Z',
+  )
+  .refine((s) => Number.isFinite(Date.parse(s)), 'is not a real date');
 
 export const projectSettingsSchema = z.object({
   /**
@@ -51,6 +62,8 @@ export const projectRecordSchema = z.object({
   isDemo: z.boolean(),
   compound: compoundSchema,
   settings: projectSettingsSchema,
+  /** Per-field stamps of the last write (field-stamps.ts). */
+  ...stampFieldsSchema,
 });
 export type ProjectRecord = z.infer<typeof projectRecordSchema>;
 
@@ -67,6 +80,7 @@ export const candidateRecordSchema = z.object({
   hydrateWater: z.number().min(0).max(20),
   addedAt: isoDate,
   order: z.number(),
+  ...stampFieldsSchema,
 });
 export type CandidateRecord = z.infer<typeof candidateRecordSchema>;
 
@@ -101,6 +115,7 @@ export const measurementRecordSchema = z.object({
    */
   solidForm: z.enum(['salt', 'free-form', 'unknown']).nullable().optional(),
   recordedAt: isoDate,
+  ...stampFieldsSchema,
 });
 export type MeasurementRecord = z.infer<typeof measurementRecordSchema>;
 
@@ -115,6 +130,7 @@ export const customIonRecordFields = z.object({
   /** The ion's data: a whole ion (counterIonSchema) or, for an override, the edit (counterIonEditSchema). */
   ion: z.record(z.string(), z.unknown()),
   updatedAt: isoDate,
+  ...stampFieldsSchema,
 });
 
 /**

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { OLDEST_STAMP, fieldChangeSchema, type FieldChange, type FieldPatch } from './field-stamps';
 
 /**
  * Edits that must survive the page going away. An IndexedDB write takes a few round trips between
@@ -6,8 +7,10 @@ import { z } from 'zod';
  * So every field-level write of a project is tracked here until IndexedDB confirms it, and when the
  * page is hidden or goes away (`pagehide`, `visibilitychange` → hidden) the writes still in flight are
  * copied synchronously into localStorage. The next start replays them ({@link replayUnsavedEdits})
- * through the same validated repository calls. A copy whose write does complete is removed again, so
- * a replay never writes an old value over a newer one from another tab.
+ * through the same validated, stamped write (stamped-writes.ts). Each copy keeps the stamp its write
+ * was given, so a replay never writes an old value over a newer one from another tab: a field written
+ * later carries a greater stamp and the old change is dropped (field-stamps.ts). A copy whose write
+ * does complete is also removed again (when the page lives long enough to see it complete).
  *
  * Debounced writers (the ranking weights) register a flush with {@link flushBeforeLeaving}: it runs
  * before the copy is taken, so their last change is in flight, and therefore in the copy, too.
@@ -16,7 +19,21 @@ import { z } from 'zod';
 /** localStorage key of the copies (one JSON list). */
 export const UNSAVED_EDITS_KEY = 'saltsmith.unsaved-edits';
 
-const unsavedEditSchema = z.discriminatedUnion('kind', [
+/** One stamped field patch of one record (see stamped-writes.ts). */
+const patchEditSchema = z.object({
+  id: z.string(),
+  kind: z.literal('patch'),
+  table: z.enum(['projects', 'candidates', 'measurements', 'customIons']),
+  recordId: z.string().min(1),
+  patch: z.array(fieldChangeSchema),
+  stamp: z.string().min(1).max(64),
+});
+
+/**
+ * Copies left by a version before field stamps: read as patches with the oldest stamp, so they only
+ * fill a field nothing stamped has written since.
+ */
+const legacyEditSchema = z.discriminatedUnion('kind', [
   z.object({
     id: z.string(),
     kind: z.literal('compound'),
@@ -31,12 +48,34 @@ const unsavedEditSchema = z.discriminatedUnion('kind', [
     value: z.unknown(),
   }),
 ]);
-export type UnsavedEdit = z.infer<typeof unsavedEditSchema>;
-type NewEdit = UnsavedEdit extends infer E
-  ? E extends UnsavedEdit
-    ? Omit<E, 'id'>
-    : never
-  : never;
+
+const unsavedEditSchema = z.union([
+  patchEditSchema,
+  legacyEditSchema.transform((e): UnsavedEdit => {
+    const patch: FieldChange[] =
+      e.kind === 'compound'
+        ? Object.entries(e.changes).map(([k, value]) => ({ path: ['compound', k], value }))
+        : [{ path: ['settings', 'extra', e.key], value: e.value }];
+    return {
+      id: e.id,
+      kind: 'patch',
+      table: 'projects',
+      recordId: e.projectId,
+      patch,
+      stamp: OLDEST_STAMP,
+    };
+  }),
+]);
+/** A write kept aside: one stamped field patch of one record. */
+export interface UnsavedEdit {
+  id: string;
+  kind: 'patch';
+  table: z.infer<typeof patchEditSchema>['table'];
+  recordId: string;
+  patch: FieldPatch;
+  stamp: string;
+}
+type NewEdit = Omit<UnsavedEdit, 'id'>;
 
 const inFlight = new Map<string, UnsavedEdit>();
 const flushers = new Set<() => void>();
@@ -56,7 +95,7 @@ function readCopies(): UnsavedEdit[] {
   if (!text) return [];
   try {
     const parsed = z.array(unsavedEditSchema).safeParse(JSON.parse(text));
-    return parsed.success ? parsed.data : [];
+    return parsed.success ? (parsed.data as UnsavedEdit[]) : [];
   } catch {
     return [];
   }
@@ -76,7 +115,7 @@ function writeCopies(list: UnsavedEdit[]): void {
 /** Track a write until it settles; resolves and rejects like `write`. */
 export function trackWrite<T>(edit: NewEdit, write: () => Promise<T>): Promise<T> {
   const id = `${pageToken}-${++seq}`;
-  inFlight.set(id, { ...edit, id } as UnsavedEdit);
+  inFlight.set(id, { ...edit, id });
   const settle = (stored: boolean) => {
     inFlight.delete(id);
     // Stored: a copy taken when the page was hidden is obsolete. Failed: the copy stays, because a
@@ -137,18 +176,18 @@ export function guardUnsavedEdits(): () => void {
 
 /**
  * Replay the copies a page left behind (oldest first) with `apply`, then forget them. A copy that
- * no longer applies (its project deleted, a value now invalid) is dropped. Returns how many applied.
+ * no longer applies (its project deleted, a value now invalid, every field written since) is dropped.
+ * Returns how many applied (`apply` says whether anything was stored).
  */
 export async function replayUnsavedEdits(
-  apply: (edit: UnsavedEdit) => Promise<void>,
+  apply: (edit: UnsavedEdit) => Promise<boolean>,
 ): Promise<number> {
   const copies = readCopies().filter((e) => !inFlight.has(e.id));
   if (copies.length === 0) return 0;
   let applied = 0;
   for (const edit of copies) {
     try {
-      await apply(edit);
-      applied++;
+      if (await apply(edit)) applied++;
     } catch {
       /* dropped: see the doc comment */
     }

@@ -85,7 +85,7 @@ describe('saltsmith eval', () => {
     expect(lines[0]!.error.type).toBe('json');
     expect(lines[1]!.error.field).toBe('anion');
     expect(lines[2]!.error.field).toBe('stoichiometry');
-    expect(lines[3]!.error.field).toBe('smiles');
+    expect(lines[3]!.error.field).toBe('cation.smiles'); // the structure check names the ion's field;
     expect(lines[4]!.error.message).toMatch(/charge/);
     expect(lines[5]!.error.field).toBe('densityGPerCm3');
     expect(lines[6]!.error.field).toBe('kind');

@@ -7,7 +7,16 @@ async function newPage() {
   vi.resetModules();
   const repo = (await import('@/persistence/projects-repo')).projectsRepo;
   const edits = await import('@/persistence/unsaved-edits');
-  return { repo, ...edits };
+  const { nextStamp } = await import('@/persistence/field-stamps');
+  /** A tracked write of compound fields, as projectsRepo.patchCompound makes it. */
+  const compoundEdit = (projectId: string, changes: Record<string, unknown>) => ({
+    kind: 'patch' as const,
+    table: 'projects' as const,
+    recordId: projectId,
+    patch: Object.entries(changes).map(([k, value]) => ({ path: ['compound', k], value })),
+    stamp: nextStamp(),
+  });
+  return { repo, compoundEdit, nextStamp, ...edits };
 }
 
 const never = () => new Promise<never>(() => undefined);
@@ -23,12 +32,11 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);
     // A write the page could not finish (the tab closed mid-transaction): it never settles.
-    void first.trackWrite(
-      { kind: 'compound', projectId: p.id, changes: { meltingPointC: 150 } },
-      never,
-    );
+    void first.trackWrite(first.compoundEdit(p.id, { meltingPointC: 150 }), never);
     expect(first.stashUnsavedEdits()).toBe(1);
-    expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toContain('"meltingPointC":150');
+    expect(localStorage.getItem(first.UNSAVED_EDITS_KEY)).toContain(
+      '"path":["compound","meltingPointC"],"value":150',
+    );
 
     const second = await newPage();
     await expect(second.repo.replayUnsavedEdits()).resolves.toBe(1);
@@ -55,7 +63,7 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     const p = await first.repo.create('P', DEMO_COMPOUND);
     let abort: (e: Error) => void = () => undefined;
     const write = first.trackWrite(
-      { kind: 'compound', projectId: p.id, changes: { notes: 'typed last' } },
+      first.compoundEdit(p.id, { notes: 'typed last' }),
       () => new Promise<never>((_, reject) => (abort = reject)),
     );
     first.stashUnsavedEdits();
@@ -72,7 +80,13 @@ describe('edits in flight when the page goes away (issue 13)', () => {
     const p = await first.repo.create('P', DEMO_COMPOUND);
     first.flushBeforeLeaving(() => {
       void first.trackWrite(
-        { kind: 'extra-settings', projectId: p.id, key: 'screening', value: { x: 1 } },
+        {
+          kind: 'patch',
+          table: 'projects',
+          recordId: p.id,
+          patch: [{ path: ['settings', 'extra', 'screening', 'x'], value: 1 }],
+          stamp: first.nextStamp(),
+        },
         never,
       );
     });
@@ -86,15 +100,56 @@ describe('edits in flight when the page goes away (issue 13)', () => {
   it('drops a copy that no longer validates instead of storing it', async () => {
     const first = await newPage();
     const p = await first.repo.create('P', DEMO_COMPOUND);
-    void first.trackWrite(
-      { kind: 'compound', projectId: p.id, changes: { meltingPointC: 'hot' } },
-      never,
-    );
+    void first.trackWrite(first.compoundEdit(p.id, { meltingPointC: 'hot' }), never);
     first.stashUnsavedEdits();
 
     const second = await newPage();
     await expect(second.repo.replayUnsavedEdits()).resolves.toBe(0);
     expect((await second.repo.get(p.id))!.compound.meltingPointC).toBe(DEMO_COMPOUND.meltingPointC);
     expect(localStorage.getItem(second.UNSAVED_EDITS_KEY)).toBeNull();
+  });
+});
+
+describe('a replay never writes an old value over a newer one (issue 18)', () => {
+  it('a copy whose write landed just before its page died loses to a later edit in another tab', async () => {
+    // Tab A sets the melting point to 150 and is closed at once: the copy is taken, the write
+    // commits, and the page dies before it can remove the copy (simulated by putting it back).
+    const tabA = await newPage();
+    const p = await tabA.repo.create('P', DEMO_COMPOUND);
+    const write = tabA.repo.patchCompound(p.id, { meltingPointC: 150 });
+    tabA.stashUnsavedEdits();
+    const leftBehind = localStorage.getItem(tabA.UNSAVED_EDITS_KEY);
+    expect(leftBehind).toContain('150');
+    await write;
+    localStorage.setItem(tabA.UNSAVED_EDITS_KEY, leftBehind!);
+
+    // Tab B, still showing the old value, types 160 and it is stored.
+    const tabB = await newPage();
+    await tabB.repo.patchCompound(p.id, { meltingPointC: 160 });
+
+    // A reload replays what tab A left behind: 160 stays.
+    const reload = await newPage();
+    await reload.repo.replayUnsavedEdits();
+    expect((await reload.repo.get(p.id))!.compound.meltingPointC).toBe(160);
+  });
+});
+
+describe('a replay after a project was replaced by an import', () => {
+  it('does not write the old edit over the imported project', async () => {
+    const tabA = await newPage();
+    const p = await tabA.repo.create('P', DEMO_COMPOUND);
+    void tabA.trackWrite(tabA.compoundEdit(p.id, { meltingPointC: 150 }), never);
+    tabA.stashUnsavedEdits();
+    const { exportProjectText, importProjectText } = await import('@/persistence/import-project');
+    const text = (await exportProjectText(p.id)).replace(
+      `"meltingPointC":${DEMO_COMPOUND.meltingPointC}`,
+      '"meltingPointC":200',
+    );
+    expect(text).toContain('"meltingPointC":200');
+    await importProjectText(text, { mode: 'replace', projectId: p.id });
+
+    const reload = await newPage();
+    await reload.repo.replayUnsavedEdits();
+    expect((await reload.repo.get(p.id))!.compound.meltingPointC).toBe(200);
   });
 });

@@ -59,8 +59,14 @@ export const compoundSchema = z.object({
   /** log P (octanol/water) of the neutral form. */
   logP: z.number().min(-10).max(15).nullable(),
   logPOrigin: z.enum(['measured', 'computed', 'literature']).nullable(),
-  /** Highest single therapeutic dose, mg (as free form). */
-  doseMg: positiveOrNull('Dose', 1e5),
+  /**
+   * Highest single therapeutic dose, mg (as free form), from 0.000001 to 100000 mg: the range `saltsmith screen --dose` accepts (a dose of 1e-320 mg is a
+   * number but no dose; the bounds are common practice, far outside any medicine).
+   */
+  doseMg: positiveOrNull('Dose', 1e5).refine(
+    (v) => v === null || v >= 1e-6,
+    'Dose must be at least 0.000001 mg',
+  ),
   /** Measured true density of the free form, g/cm³. */
   densityGPerCm3: positiveOrNull('Density', 30),
   /** Unit-cell volume of the free form's crystal structure, Å³ (optional; added after version 1 records). */

@@ -1,6 +1,7 @@
 import type * as OpenChemLib from 'openchemlib';
 import { ChemInputError, type Estimate } from '../result';
 import { molarMassGPerMol, parseFormula, type ElementCounts } from './formula';
+import { readSmilesStrictly } from '../input/structure-check';
 
 /** What the workbench reads from a structure (SMILES). */
 export interface ParsedStructure {
@@ -43,36 +44,32 @@ const OCL_LOGP_UNCERTAINTY = 0.5;
  * Parse a SMILES string with openchemlib, loaded on first use (`await import`) so the first screen
  * never waits for the ~1 MB library. Ring counts: SSSR size = bonds − atoms + fragments; aromatic
  * rings as openchemlib perceives them.
- * @throws ChemInputError (field `smiles`) for an empty or unparsable SMILES.
+ * @throws ChemInputError (field `smiles`, or `opts.field`) for an empty, unparsable, incomplete or
+ *   several-component SMILES (see {@link readSmilesStrictly}).
  */
 export async function parseStructure(
   smiles: string,
-  opts: { widthPx?: number; heightPx?: number } = {},
+  opts: { widthPx?: number; heightPx?: number; field?: string } = {},
 ): Promise<ParsedStructure> {
+  const field = opts.field ?? 'smiles';
   const text = typeof smiles === 'string' ? smiles.trim() : '';
-  if (text === '') throw new ChemInputError('smiles', 'the SMILES is empty', ACCEPTED);
+  if (text === '') throw new ChemInputError(field, 'the SMILES is empty', ACCEPTED);
   if (text.length > 2000)
-    throw new ChemInputError('smiles', 'the SMILES is longer than 2000 characters', ACCEPTED);
+    throw new ChemInputError(field, 'the SMILES is longer than 2000 characters', ACCEPTED);
   let ocl: typeof OpenChemLib;
   try {
     ocl = await import('openchemlib');
   } catch (err) {
     throw new StructureLibraryUnavailableError(err);
   }
-  const { Molecule, MoleculeProperties } = ocl;
-  let mol: InstanceType<typeof Molecule>;
-  try {
-    mol = Molecule.fromSmiles(text);
-  } catch (err) {
-    const raw = err instanceof Error ? err.message : String(err);
-    const reason = raw.replace(/^.*SmilesParser:\s*/i, '').trim() || 'not a valid SMILES';
-    throw new ChemInputError('smiles', `cannot read this SMILES (${reason})`, ACCEPTED);
-  }
+  const { MoleculeProperties } = ocl;
+  // The one structure check (input/structure-check.ts): whole text, complete parse, one component.
+  const mol = readSmilesStrictly(ocl, text, field);
   const heavyAtoms = mol.getAllAtoms();
   if (heavyAtoms === 0) throw new ChemInputError('smiles', 'no atoms found', ACCEPTED);
 
   const oclFormula = mol.getMolecularFormula().formula;
-  const parsed = parseFormula(oclFormula.replace(/[()+-]/g, ''), 'smiles');
+  const parsed = parseFormula(oclFormula.replace(/[()+-]/g, ''), field);
   let netCharge = 0;
   for (let a = 0; a < heavyAtoms; a++) netCharge += mol.getAtomCharge(a);
   const fragments = mol.getFragments().length;

@@ -3,7 +3,8 @@ import { ChemInputError, findThermoIonByFormula, parseFormula, type ThermoIon } 
 /**
  * Checks that an ion written by hand adds up before the core estimates anything from it: the charge
  * written in a formula agrees with the charge given, a formula that is a bundled ion keeps that ion's
- * charge, the charge has atoms that can carry it, and a SMILES names one component only.
+ * charge, and the charge has atoms that can carry it. (SMILES are checked by the core's one structure
+ * check, `readSmilesStrictly`.)
  */
 
 const SUPERSCRIPT_DIGITS: Record<string, string> = {
@@ -113,17 +114,6 @@ export function requireFormulaChargeAgrees(field: string, formula: string, charg
         `charge ${other} for ${formula}`,
       );
     }
-  }
-}
-
-/** One message for a SMILES with several components, the same in every command. */
-export function refuseMultiComponent(field: string, smiles: string): void {
-  if (smiles.includes('.')) {
-    throw new ChemInputError(
-      field,
-      `"${smiles.length > 60 ? `${smiles.slice(0, 60)}…` : smiles}" has several components (a salt or a mixture, joined by "."); Saltsmith screens one component`,
-      'the SMILES of one component: the neutral free form of the drug, or one ion',
-    );
   }
 }
 

@@ -110,3 +110,27 @@ export function conditionsFromDraft(
 }
 
 export const CONDITION_FIELDS = RANGES;
+
+/**
+ * The fields this form owns, shaped like the stored project settings (three at the top level, the rest
+ * in the screening block): what `projectsRepo.changeSettings` compares, so only the fields that differ
+ * from what the form started from are written.
+ */
+export function conditionsSettingsShape(
+  r: { projectSettings: ProjectSettings; screening: ScreeningSettings },
+  screeningKey: string,
+) {
+  return {
+    gastricChlorideM: r.projectSettings.gastricChlorideM,
+    microenvironmentPh: r.projectSettings.microenvironmentPh,
+    microenvironmentPhStated: r.projectSettings.microenvironmentPhStated,
+    temperatureC: r.projectSettings.temperatureC,
+    extra: {
+      [screeningKey]: {
+        gastricPh: r.screening.gastricPh,
+        activityModel: r.screening.activityModel,
+        deltaPkaBands: { ...r.screening.deltaPkaBands },
+      },
+    },
+  };
+}

@@ -78,6 +78,8 @@ export function buildProjectFile(bundle: ProjectBundle, createdAt: string): Proj
   return projectFileSchema.parse(file);
 }
 
-/** Serialise a project file (pretty-printed, stable key order as built). */
-export const serializeProjectFile = (file: ProjectFile): string =>
-  `${JSON.stringify(file, null, 2)}\n`;
+/**
+ * Serialise a project file: compact JSON (no indentation — 11,500 measurements took 5.8 MB
+ * pretty-printed), stable key order as built, one final newline.
+ */
+export const serializeProjectFile = (file: ProjectFile): string => `${JSON.stringify(file)}\n`;

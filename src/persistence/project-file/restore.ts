@@ -1,12 +1,15 @@
+import { StrictJsonError, parseStrictJson } from '@/chem';
 import { ProjectFileError, invalidFileError } from './errors';
 import {
   PROJECT_FILE_FORMAT,
   PROJECT_FILE_MAX_BYTES,
+  PROJECT_FILE_MAX_DEPTH,
   PROJECT_FILE_VERSION,
   appVersion,
 } from './format';
 import { projectFileSchema, type ProjectFile } from './schema';
 import { looksTruncated } from './truncation';
+import { checkFileRules } from './file-rules';
 import { upgradeV1 } from './upgrade-v1';
 import { upgradeV2 } from './upgrade-v2';
 
@@ -46,32 +49,78 @@ export function restoreProjectFile(raw: unknown): ProjectFile {
   if (version <= 2) current = upgradeV2(current);
   const result = projectFileSchema.safeParse(current);
   if (!result.success) throw invalidFileError(result.error);
+  checkFileRules(raw, result.data);
   return result.data;
 }
 
-/** Parse the text of a file (size, JSON, truncation checks) and restore it. Throws {@link ProjectFileError}. */
-export function parseProjectFileText(text: string): ProjectFile {
-  if (text.length > PROJECT_FILE_MAX_BYTES) {
-    throw new ProjectFileError(
-      'too-large',
-      `This file is ${(text.length / 1024 / 1024).toFixed(1)} MB; project files are limited to ${PROJECT_FILE_MAX_BYTES / 1024 / 1024} MB.`,
-    );
+/** A strict reader's refusal in the words of the project-file messages. */
+function fromStrictJson(err: StrictJsonError, text: string | null): ProjectFileError {
+  const where = err.path ? ` at ${err.path}` : '';
+  switch (err.problem) {
+    case 'too-large':
+      return new ProjectFileError(
+        'too-large',
+        `This file is larger than ${PROJECT_FILE_MAX_BYTES / 1024 / 1024} MB, the most an export of the largest project Saltsmith holds can be.`,
+      );
+    case 'utf8':
+      return new ProjectFileError(
+        'not-json',
+        'This file is not valid UTF-8 text (damaged bytes), so it cannot be a Saltsmith project file.',
+      );
+    case 'syntax':
+      return text !== null && looksTruncated(text)
+        ? new ProjectFileError(
+            'truncated',
+            'This file ends in the middle of its data — it was probably cut off while being copied or downloaded.',
+          )
+        : new ProjectFileError(
+            'not-json',
+            'This file is not valid JSON, so it cannot be a Saltsmith project file.',
+          );
+    case 'duplicate-key':
+      return new ProjectFileError(
+        'invalid',
+        `This file gives the same field twice${where}; Saltsmith will not guess which one you meant.`,
+        [`${err.path || '(file)'}: given twice`],
+      );
+    case 'too-deep':
+      return new ProjectFileError(
+        'invalid',
+        `This file is nested deeper than ${PROJECT_FILE_MAX_DEPTH} levels${where}; a project file never is.`,
+        [`${err.path || '(file)'}: nested too deep`],
+      );
+    default:
+      return new ProjectFileError('invalid', `This file cannot be read${where}: ${err.message}`, [
+        `${err.path || '(file)'}: ${err.message}`,
+      ]);
   }
-  if (text.trim() === '') throw new ProjectFileError('empty', 'This file is empty.');
+}
+
+/**
+ * Parse a file's bytes (or its text) with the one strict JSON reader (size cap, UTF-8, duplicate
+ * keys, nesting) and restore it. Throws {@link ProjectFileError}.
+ */
+export function parseProjectFile(input: string | Uint8Array): ProjectFile {
+  if ((typeof input === 'string' ? input.trim() : input.length === 0 ? '' : 'x') === '') {
+    throw new ProjectFileError('empty', 'This file is empty.');
+  }
   let raw: unknown;
   try {
-    raw = JSON.parse(text);
-  } catch {
-    if (looksTruncated(text)) {
-      throw new ProjectFileError(
-        'truncated',
-        'This file ends in the middle of its data — it was probably cut off while being copied or downloaded.',
-      );
-    }
-    throw new ProjectFileError(
-      'not-json',
-      'This file is not valid JSON, so it cannot be a Saltsmith project file.',
-    );
+    raw = parseStrictJson(input, {
+      maxBytes: PROJECT_FILE_MAX_BYTES,
+      maxDepth: PROJECT_FILE_MAX_DEPTH,
+      field: 'file',
+    });
+  } catch (err) {
+    if (!(err instanceof StrictJsonError)) throw err;
+    const text = typeof input === 'string' ? input : new TextDecoder().decode(input.slice(-4096));
+    throw fromStrictJson(err, text);
+  }
+  if (typeof input !== 'string' && raw === undefined) {
+    throw new ProjectFileError('empty', 'This file is empty.');
   }
   return restoreProjectFile(raw);
 }
+
+/** Parse the text of a file and restore it (see {@link parseProjectFile}). */
+export const parseProjectFileText = (text: string): ProjectFile => parseProjectFile(text);

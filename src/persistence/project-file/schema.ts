@@ -3,35 +3,46 @@ import {
   candidateRecordSchema,
   checkCustomIonPayload,
   customIonRecordFields,
+  isoDate,
   measurementRecordSchema,
   projectRecordSchema,
   screenPlanRecordSchema,
 } from '../records';
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_LIMITS, PROJECT_FILE_VERSION } from './format';
 
-/** An ISO 8601 date-time (bounded). */
-export const isoDate = z.string().min(1).max(40);
+/** An ISO 8601 date-time (bounded, a real date): the one rule of the stored records. */
+export { isoDate };
 
 // Every record in a file is checked by the schema of the stored record it becomes (records.ts), minus
 // the fields the importing database assigns (schemaVersion, projectId); nothing is declared twice.
 
 /** A shortlisted candidate as it appears in the file (ids are the exporting database's own). */
-const fileCandidateSchema = candidateRecordSchema.omit({ schemaVersion: true, projectId: true });
-
-const fileMeasurementSchema = measurementRecordSchema.omit({
+/** What a file never carries: the importing database assigns these (stamps: field-stamps.ts). */
+const ASSIGNED = {
   schemaVersion: true,
   projectId: true,
-});
+  fieldStamps: true,
+  stampFloor: true,
+} as const;
+
+const fileCandidateSchema = candidateRecordSchema.omit(ASSIGNED);
+
+const fileMeasurementSchema = measurementRecordSchema.omit(ASSIGNED);
 
 const fileCustomIonSchema = customIonRecordFields
-  .omit({ schemaVersion: true, projectId: true })
+  .omit(ASSIGNED)
   .extend({
     /** 'project': belonged to the exported project; 'shared': available to every project there. */
     scope: z.enum(['project', 'shared']),
   })
   .superRefine(checkCustomIonPayload);
 
-const fileProjectSchema = projectRecordSchema.omit({ id: true, schemaVersion: true });
+const fileProjectSchema = projectRecordSchema.omit({
+  id: true,
+  schemaVersion: true,
+  fieldStamps: true,
+  stampFloor: true,
+});
 
 /** A salt-screen plan with its recorded well outcomes (version 3 on). */
 const fileScreenPlanSchema = screenPlanRecordSchema.omit({ schemaVersion: true, projectId: true });

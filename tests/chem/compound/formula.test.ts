@@ -109,7 +109,9 @@ describe('structures (openchemlib, loaded lazily)', () => {
   });
 
   it('turns a bad SMILES into a field message', async () => {
-    await expect(parseStructure('C1CC(')).rejects.toThrow(/smiles: cannot read this SMILES/);
+    await expect(parseStructure('C1CC(')).rejects.toThrow(
+      /smiles: "C1CC\(" is not a complete SMILES/,
+    );
     await expect(parseStructure('   ')).rejects.toThrow(/empty/);
   });
 });

@@ -5,6 +5,7 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { ImportProjectButton } from '@/features/project-files/components/ImportProjectButton';
 import { ExportProjectButton } from '@/features/project-files/components/ExportProjectButton';
+import { ProjectFilesPanel } from '@/features/project-files/components/ProjectFilesPanel';
 import { getDb } from '@/persistence/db';
 import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
@@ -51,6 +52,35 @@ describe('import a project file', () => {
     expect(alert).toHaveTextContent('Your projects are unchanged.');
     expect(screen.queryByRole('button', { name: 'Import as a new project' })).toBeNull();
     expect(await snapshot()).toStrictEqual(before);
+  });
+
+  it('refuses an export with "doseMg" given twice and one whose SMILES has two components, naming the field', async () => {
+    const p = await projectsRepo.create('Source', DEMO_COMPOUND);
+    const text = await exportProjectText(p.id);
+    const { unmount } = render(<ImportProjectButton />);
+    await userEvent.upload(
+      screen.getByLabelText('Import a project file'),
+      fileOf(text.replace('"doseMg":', '"doseMg":1,"doseMg":')),
+    );
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      /same field twice at project\.compound\.doseMg/,
+    );
+    unmount();
+    render(<ImportProjectButton />);
+    await userEvent.upload(
+      screen.getByLabelText('Import a project file'),
+      fileOf(text.replace(/"smiles":"[^"]*"/, '"smiles":"CCN.Cl"')),
+    );
+    expect(await screen.findByRole('alert', {}, { timeout: 15_000 })).toHaveTextContent(
+      /project\.compound\.smiles/,
+    );
+  }, 30_000);
+
+  it('says how large a project can be', () => {
+    render(<ProjectFilesPanel projects={[]} currentProjectId={null} />);
+    expect(screen.getByTestId('project-limits')).toHaveTextContent(
+      'One project holds at most 500 shortlisted counter-ions, 20,000 measurements and 1,000 in-house ions, so that its file (at most 32 MB) can always be imported back.',
+    );
   });
 
   it('lists every problem of an invalid file', async () => {

@@ -141,3 +141,39 @@ describe('comparison sheet', () => {
     expect(formatValue(123.456)).toBe('123.5');
   });
 });
+
+describe('comparison sheet: the free form and what separates the candidates', () => {
+  const extras = (): SheetModel => ({
+    ...model(),
+    freeForm: {
+      id: 'free-form',
+      rank: null,
+      label: 'Demorazine free base (no salt; read against, not ranked)',
+      cells: {},
+      flags: ['free form likely poorly soluble'],
+      reasons: [],
+    },
+    separation: {
+      headline:
+        'The order rests on tablet mass; the salts’ solubilities in water are not separable.',
+      details: ['Same for every candidate: gastric D₀.'],
+    },
+  });
+
+  it('prints the separation line above the tables and the free form as the first row of each table', () => {
+    const { container } = render(<ComparisonSheet model={extras()} />);
+    expect(screen.getByText(/The order rests on tablet mass/)).toBeTruthy();
+    const tables = container.querySelectorAll('table.sheet-ranking');
+    expect(tables.length).toBeGreaterThan(0);
+    for (const t of tables) {
+      const first = t.querySelector('tbody tr')!;
+      expect(first.classList.contains('sheet-free-form')).toBe(true);
+      expect(first.textContent).toMatch(/free base \(no salt; read against, not ranked\)/);
+    }
+    // Above the tables in document order.
+    const line = screen.getByText(/The order rests on tablet mass/);
+    expect(
+      line.compareDocumentPosition(tables[0]!) & Node.DOCUMENT_POSITION_FOLLOWING,
+    ).toBeTruthy();
+  });
+});

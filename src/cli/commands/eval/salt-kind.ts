@@ -10,11 +10,7 @@ import {
   stoichiometryFromCharges,
   type ThermoIon,
 } from '@/chem';
-import {
-  refuseMultiComponent,
-  requireBuiltIonPlausible,
-  requireFormulaChargeAgrees,
-} from '../../args/ion-consistency';
+import { requireBuiltIonPlausible, requireFormulaChargeAgrees } from '../../args/ion-consistency';
 import { LATTICE_CAUTION } from '../../output/cautions';
 import { LATTICE_METHODS, SIZE_RANGES, STRUCTURE_TYPES } from '../lattice-options';
 import type { EvalHandler } from './registry';
@@ -129,8 +125,11 @@ export async function resolveIon(
     requireBuiltIonPlausible(role, ion);
     return ion;
   }
-  refuseMultiComponent(`${role}.smiles`, spec.smiles);
-  const ion = await organicIonFromSmiles(spec.smiles, spec.charge, { ...opts, ...label });
+  const ion = await organicIonFromSmiles(spec.smiles, spec.charge, {
+    ...opts,
+    ...label,
+    field: `${role}.smiles`,
+  });
   requireBuiltIonPlausible(role, ion);
   return ion;
 }

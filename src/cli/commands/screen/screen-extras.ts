@@ -5,6 +5,7 @@ import {
   ChemInputError,
   counterIonFromParentSmiles,
   getCounterIon,
+  readSmilesStrictly,
   type CounterIon,
   type CounterIonDescriptors,
   type MeasurementInput,
@@ -98,14 +99,10 @@ export async function buildCustomIons(
     const sorted = [...spec.pKas].sort((a, b) => a - b);
     if (sorted.some((v, k) => v !== spec.pKas[k]))
       throw new ChemInputError(`${field}.pKas`, 'pKa values out of order', 'ascending pKa values');
-    const nonHydroxide = spec.smiles.split('.').filter((p) => p.trim() !== '[OH-]');
-    if (nonHydroxide.length > 1) {
-      throw new ChemInputError(
-        `${field}.smiles`,
-        'several components (joined by ".")',
-        'the SMILES of the parent acid or base (a hydroxide may stand beside a quaternary cation)',
-      );
-    }
+    // The one structure check; a hydroxide may stand beside a quaternary cation ("C[N+](C)(C)C.[OH-]").
+    readSmilesStrictly(ocl, spec.smiles, `${field}.smiles`, {
+      allowComponents: (part) => part === '[OH-]',
+    });
     let parent;
     try {
       parent = counterIonFromParentSmiles(ocl, spec.smiles, spec.charge);

@@ -18,7 +18,6 @@ import {
   type PkaEntry,
 } from '@/chem';
 import { usageError } from '../../args/cli-error';
-import { refuseMultiComponent } from '../../args/ion-consistency';
 import {
   benchEntrySchema,
   buildCustomIons,
@@ -165,8 +164,7 @@ export async function prepareScreen(
   let structure;
   let formula = spec.formula.trim();
   if (spec.smiles.trim() !== '') {
-    refuseMultiComponent(name(n, 'smiles'), spec.smiles.trim());
-    structure = await parseStructure(spec.smiles);
+    structure = await parseStructure(spec.smiles, { field: name(n, 'smiles') });
     if (structure.netCharge !== 0) {
       throw new ChemInputError(
         name(n, 'smiles'),

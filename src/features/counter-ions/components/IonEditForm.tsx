@@ -17,6 +17,20 @@ export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: st
   );
   const [note, setNote] = useState(ion.tradeNote);
   const [error, setError] = useState<string | null>(null);
+  /** The edit this form started from: only what differs from it is written (two tabs keep both). */
+  const [startEdit] = useState<CounterIonEdit>(() => ({
+    ...(ion.origin === 'edited' &&
+    !sameNumbers(
+      ion.pKas.map((p) => p.value),
+      base.pKas.map((p) => p.value),
+    )
+      ? { pKas: ion.pKas.map((p) => p.value) }
+      : {}),
+    ...(ion.acceptabilityClass !== base.acceptabilityClass
+      ? { acceptabilityClass: ion.acceptabilityClass }
+      : {}),
+    ...(ion.tradeNote !== base.tradeNote ? { tradeNote: ion.tradeNote } : {}),
+  }));
   const [status, setStatus] = useState<string | null>(null);
   const idp = `ion-edit-${ion.id}`;
 
@@ -50,7 +64,7 @@ export function IonEditForm({ ion, projectId }: { ion: LibraryIon; projectId: st
       setStatus('Same as the bundled values: nothing to keep as an edit.');
       return;
     }
-    await customIonsRepo.saveEdit(projectId, ion.id, edit);
+    await customIonsRepo.saveEdit(projectId, ion.id, edit, startEdit);
     setStatus('Saved for this project. The bundled values are kept.');
   };
 

@@ -1,7 +1,8 @@
 import { useId, useRef, useState } from 'react';
 import { ProjectFileError } from '@/persistence/project-file/errors';
 import { PROJECT_FILE_MAX_BYTES } from '@/persistence/project-file/format';
-import { parseProjectFileText } from '@/persistence/project-file/restore';
+import { parseProjectFile } from '@/persistence/project-file/restore';
+import { checkFileStructures } from '@/persistence/project-file/file-rules';
 import type { ProjectFile } from '@/persistence/project-file/schema';
 import { writeProjectFile, type ImportOutcome } from '@/persistence/import-project';
 import '../project-files.css';
@@ -22,13 +23,14 @@ export interface ImportProjectButtonProps {
   onImported?: (outcome: ImportOutcome) => void;
 }
 
-async function readFileText(f: File): Promise<string> {
-  if (typeof f.text === 'function') return f.text();
+/** The file's bytes (the strict reader checks the UTF-8 itself: damaged bytes are refused, not replaced). */
+async function readFileBytes(f: File): Promise<Uint8Array> {
+  if (typeof f.arrayBuffer === 'function') return new Uint8Array(await f.arrayBuffer());
   return new Promise((resolve, reject) => {
     const r = new FileReader();
-    r.onload = () => resolve(String(r.result));
+    r.onload = () => resolve(new Uint8Array(r.result as ArrayBuffer));
     r.onerror = () => reject(r.error ?? new Error('could not read the file'));
-    r.readAsText(f);
+    r.readAsArrayBuffer(f);
   });
 }
 
@@ -48,14 +50,15 @@ export function ImportProjectButton({ replaceable = null, onImported }: ImportPr
       setStep({
         kind: 'refused',
         fileName: f.name,
-        message: `This file is ${(f.size / 1024 / 1024).toFixed(1)} MB; project files are limited to ${PROJECT_FILE_MAX_BYTES / 1024 / 1024} MB.`,
+        message: `This file is ${(f.size / 1024 / 1024).toFixed(1)} MB; the export of the largest project Saltsmith holds is at most ${PROJECT_FILE_MAX_BYTES / 1024 / 1024} MB.`,
         details: [],
       });
       return;
     }
     setStep({ kind: 'reading' });
     try {
-      const file = parseProjectFileText(await readFileText(f));
+      const file = parseProjectFile(await readFileBytes(f));
+      await checkFileStructures(file);
       setStep({ kind: 'ready', fileName: f.name, file, confirmReplace: false });
     } catch (err) {
       if (err instanceof ProjectFileError) {

@@ -1,5 +1,6 @@
 import { useId, useState } from 'react';
 import type { ImportOutcome } from '@/persistence/import-project';
+import { PROJECT_FILE_MAX_BYTES, PROJECT_LIMITS } from '@/persistence/project-file/format';
 import { ExportProjectButton } from './ExportProjectButton';
 import { ImportProjectButton } from './ImportProjectButton';
 import '../project-files.css';
@@ -35,6 +36,12 @@ export function ProjectFilesPanel({
         A project file holds the compound, shortlist, bench measurements, custom counter-ions and
         settings of one project (Saltsmith project format, JSON). Use it to hand a project to a
         colleague or keep a copy outside this browser.
+      </p>
+      <p className="muted" data-testid="project-limits">
+        One project holds at most {PROJECT_LIMITS.candidates.toLocaleString('en')} shortlisted
+        counter-ions, {PROJECT_LIMITS.measurements.toLocaleString('en')} measurements and{' '}
+        {PROJECT_LIMITS.customIons.toLocaleString('en')} in-house ions, so that its file (at most{' '}
+        {PROJECT_FILE_MAX_BYTES / 1024 / 1024} MB) can always be imported back.
       </p>
       {selected ? (
         <div className="project-file-export">

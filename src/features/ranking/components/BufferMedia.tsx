@@ -21,16 +21,19 @@ const ION_CHOICES = COUNTER_IONS.filter((i) => !i.referenceOnly).map((i) => ({
   name: i.name,
 }));
 
-/** Write the media list into the project's screening block, on top of what is stored now. */
-async function saveMedia(projectId: string, media: ScreeningMedium[]): Promise<void> {
-  const current = await projectsRepo.get(projectId);
-  if (!current) return;
-  const stored = current.settings.extra[SCREENING_SETTINGS_KEY];
-  const block = { ...(stored && typeof stored === 'object' ? stored : {}), media };
-  await projectsRepo.updateSettings(projectId, {
-    ...current.settings,
-    extra: { ...current.settings.extra, [SCREENING_SETTINGS_KEY]: block },
+/**
+ * Store the change from the list shown (`before`) to `after`: media are stored one by one (keyed by
+ * id, persistence/field-stamps.ts), so a medium another tab added or removed meanwhile is kept.
+ */
+async function saveMedia(
+  projectId: string,
+  before: readonly ScreeningMedium[],
+  after: readonly ScreeningMedium[],
+): Promise<void> {
+  const shape = (media: readonly ScreeningMedium[]) => ({
+    extra: { [SCREENING_SETTINGS_KEY]: { media } },
   });
+  await projectsRepo.changeSettings(projectId, shape(before), shape(after));
 }
 
 const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 1 ? x.toFixed(2) : x.toPrecision(2));
@@ -65,7 +68,7 @@ export const BufferMedia = memo(function BufferMediaView({
     setErrors({});
     setBusy(true);
     try {
-      await saveMedia(project.id, [...media, r.medium]);
+      await saveMedia(project.id, media, [...media, r.medium]);
       setDraft(EMPTY_BUFFER);
     } finally {
       setBusy(false);
@@ -74,7 +77,7 @@ export const BufferMedia = memo(function BufferMediaView({
   const addPreset = async (medium: ScreeningMedium) => {
     setBusy(true);
     try {
-      await saveMedia(project.id, [...media, medium]);
+      await saveMedia(project.id, media, [...media, medium]);
     } finally {
       setBusy(false);
     }
@@ -82,6 +85,7 @@ export const BufferMedia = memo(function BufferMediaView({
   const remove = (id: string) =>
     void saveMedia(
       project.id,
+      media,
       media.filter((m) => m.id !== id),
     );
 

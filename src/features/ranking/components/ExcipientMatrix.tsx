@@ -18,16 +18,19 @@ import {
   type MatrixRow,
 } from '../excipient-matrix-model';
 
-/** Write the chosen excipients into the project's screening block, on top of what is stored now. */
-async function saveExcipients(projectId: string, excipients: string[]): Promise<void> {
-  const current = await projectsRepo.get(projectId);
-  if (!current) return;
-  const stored = current.settings.extra[SCREENING_SETTINGS_KEY];
-  const block = { ...(stored && typeof stored === 'object' ? stored : {}), excipients };
-  await projectsRepo.updateSettings(projectId, {
-    ...current.settings,
-    extra: { ...current.settings.extra, [SCREENING_SETTINGS_KEY]: block },
+/**
+ * Write the chosen excipients (one stamped field, persistence/field-stamps.ts): only this list is
+ * written, never the rest of the screening block from a copy.
+ */
+async function saveExcipients(
+  projectId: string,
+  before: readonly string[],
+  excipients: string[],
+): Promise<void> {
+  const shape = (list: readonly string[]) => ({
+    extra: { [SCREENING_SETTINGS_KEY]: { excipients: list } },
   });
+  await projectsRepo.changeSettings(projectId, shape(before), shape(excipients));
 }
 
 const ROLES = Object.keys(EXCIPIENT_ROLE_NAMES) as ExcipientRecord['role'][];
@@ -58,7 +61,7 @@ export const ExcipientMatrix = memo(function ExcipientMatrixView({
     setTicked(next);
     setBusy(true);
     try {
-      await saveExcipients(project.id, next);
+      await saveExcipients(project.id, ticked, next);
     } finally {
       setBusy(false);
     }

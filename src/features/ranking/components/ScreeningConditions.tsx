@@ -2,17 +2,32 @@ import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { memo, useEffect, useId, useRef, useState } from 'react';
 import type { ScreeningSettings } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
+import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
 import type { ProjectRecord } from '@/persistence/records';
 import { SCREENING_SETTINGS_KEY } from '@/screening-data/screening-settings';
 import {
   CONDITION_FIELDS,
   conditionsDraftOf,
   conditionsFromDraft,
+  conditionsSettingsShape,
   type ConditionsDraft,
   type ConditionsErrors,
 } from '../settings-form-model';
 
 const SAVE_DELAY_MS = 300;
+
+/** The fields of `stored` to take into the base: those not being edited here (shown equals base). */
+function diffTaken(
+  base: ConditionsDraft,
+  shown: ConditionsDraft,
+  stored: ConditionsDraft,
+): Partial<ConditionsDraft> {
+  const out: Partial<ConditionsDraft> = {};
+  for (const key of Object.keys(stored) as (keyof ConditionsDraft)[]) {
+    if (shown[key] === base[key]) (out as Record<string, string>)[key] = stored[key];
+  }
+  return out;
+}
 
 const HINTS: Partial<Record<keyof ConditionsDraft, string>> = {
   gastricChlorideM: 'Default 0.12 M: simulated gastric fluid (USP, composition from memory)',
@@ -42,13 +57,35 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
   const [state, setState] = useState<'saved' | 'pending' | 'invalid'>('saved');
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const uid = useId();
+  /** The values as last stored or taken over: a field whose draft differs from it was edited here. */
+  const base = useRef<ConditionsDraft>(draft);
+  const draftRef = useRef(draft);
+  draftRef.current = draft;
 
   useEffect(() => {
-    setDraft(conditionsDraftOf(project.settings, settings));
+    const stored = conditionsDraftOf(project.settings, settings);
+    base.current = stored;
+    setDraft(stored);
     setErrors({});
     setState('saved');
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [project.id]);
+
+  // A field changed elsewhere (another tab) is taken over unless it is being edited here.
+  const storedKey = JSON.stringify(conditionsDraftOf(project.settings, settings));
+  useEffect(() => {
+    const stored = JSON.parse(storedKey) as ConditionsDraft;
+    const shown = draftRef.current;
+    const next = { ...shown };
+    let changed = false;
+    for (const key of Object.keys(stored) as (keyof ConditionsDraft)[]) {
+      if (shown[key] !== base.current[key] || shown[key] === stored[key]) continue;
+      (next as Record<string, string>)[key] = stored[key];
+      changed = true;
+    }
+    base.current = { ...base.current, ...diffTaken(base.current, shown, stored) };
+    if (changed) setDraft(next);
+  }, [storedKey]);
   const pending = useRef<(() => void) | null>(null);
   // Closing the area must not lose an edit still waiting for its save: save it now.
   useEffect(
@@ -58,9 +95,20 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
     },
     [],
   );
+  // The page being hidden, reloaded or closed starts the waiting save at once (unsaved-edits.ts).
+  useEffect(
+    () =>
+      flushBeforeLeaving(() => {
+        if (timer.current) clearTimeout(timer.current);
+        timer.current = null;
+        pending.current?.();
+      }),
+    [],
+  );
 
   const change = (key: keyof ConditionsDraft, value: string) => {
-    const next = { ...draft, [key]: value } as ConditionsDraft;
+    const next = { ...draftRef.current, [key]: value } as ConditionsDraft;
+    draftRef.current = next;
     setDraft(next);
     const r = conditionsFromDraft(next, project.settings, settings);
     if (timer.current) clearTimeout(timer.current);
@@ -74,27 +122,18 @@ export const ScreeningConditions = memo(function ScreeningConditionsView({
     setState('pending');
     const save = () => {
       pending.current = null;
-      void (async () => {
-        // Write only the fields this form owns, on top of what is stored now (weights may have moved).
-        const current = await projectsRepo.get(project.id);
-        if (!current) return;
-        const stored = current.settings.extra[SCREENING_SETTINGS_KEY];
-        const block = {
-          ...(stored && typeof stored === 'object' ? stored : {}),
-          gastricPh: r.screening.gastricPh,
-          activityModel: r.screening.activityModel,
-          deltaPkaBands: r.screening.deltaPkaBands,
-        };
-        await projectsRepo.updateSettings(project.id, {
-          ...current.settings,
-          gastricChlorideM: r.projectSettings.gastricChlorideM,
-          microenvironmentPh: r.projectSettings.microenvironmentPh,
-          microenvironmentPhStated: r.projectSettings.microenvironmentPhStated,
-          temperatureC: r.projectSettings.temperatureC,
-          extra: { ...current.settings.extra, [SCREENING_SETTINGS_KEY]: block },
-        });
-        setState('saved');
-      })();
+      // Write only the fields edited here (they differ from `base`), each stamped: a field another
+      // tab changed meanwhile is left as stored (persistence/field-stamps.ts). Read at save time, so
+      // a field taken over from another tab since the keystroke is not written back.
+      const shown = draftRef.current;
+      const now = conditionsFromDraft(shown, project.settings, settings);
+      const from = conditionsFromDraft(base.current, project.settings, settings);
+      if (!now.ok) return;
+      const before = from.ok ? conditionsSettingsShape(from, SCREENING_SETTINGS_KEY) : undefined;
+      base.current = shown;
+      void projectsRepo
+        .changeSettings(project.id, before, conditionsSettingsShape(now, SCREENING_SETTINGS_KEY))
+        .then(() => setState('saved'));
     };
     pending.current = save;
     timer.current = setTimeout(save, SAVE_DELAY_MS);

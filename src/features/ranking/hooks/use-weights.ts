@@ -3,11 +3,7 @@ import { screeningWeightsSchema, type ScreeningWeights } from '@/chem';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { flushBeforeLeaving } from '@/persistence/unsaved-edits';
 import type { ProjectRecord } from '@/persistence/records';
-import {
-  SCREENING_SETTINGS_KEY,
-  screeningBlockOf,
-  screeningSettingsOf,
-} from '@/screening-data/screening-settings';
+import { SCREENING_SETTINGS_KEY, screeningSettingsOf } from '@/screening-data/screening-settings';
 
 /** Save this long after the last slider movement, ms. */
 const SAVE_DELAY_MS = 400;
@@ -28,9 +24,16 @@ export function useWeights(project: ProjectRecord): {
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const projectRef = useRef(project);
   projectRef.current = project;
+  /** The weights as last stored or taken over: a save writes only the weights that differ from it. */
+  const base = useRef<ScreeningWeights>(stored);
 
   useEffect(() => {
-    if (!timer.current) setLocal(JSON.parse(storedKey) as ScreeningWeights);
+    const fresh = JSON.parse(storedKey) as ScreeningWeights;
+    // Another tab's move of a slider not being moved here is taken over at once.
+    if (!timer.current) {
+      base.current = fresh;
+      setLocal(fresh);
+    }
   }, [storedKey, project.id]);
 
   const pending = useRef<(() => void) | null>(null);
@@ -65,9 +68,15 @@ export function useWeights(project: ProjectRecord): {
     const save = () => {
       pending.current = null;
       const p = projectRef.current;
-      const block = screeningBlockOf({ ...screeningSettingsOf(p), weights: valid });
+      // Only the sliders moved here are written, each stamped (persistence/field-stamps.ts): a slider
+      // moved in another tab meanwhile keeps its value.
+      const shape = (ws: ScreeningWeights) => ({
+        extra: { [SCREENING_SETTINGS_KEY]: { weights: ws } },
+      });
+      const before = base.current;
+      base.current = valid;
       void projectsRepo
-        .updateExtraSettings(p.id, SCREENING_SETTINGS_KEY, block)
+        .changeSettings(p.id, shape(before), shape(valid))
         .finally(() => setSaving(false));
     };
     pending.current = save;

@@ -1,6 +1,7 @@
 import { ChemInputError } from '../../../result';
 import type { ThermoIon } from '../../thermo.types';
 import { organicIonFromFormula } from './ion-volume';
+import { readSmilesStrictly } from '../../../input/structure-check';
 
 const SMILES_ACCEPTED =
   'a SMILES string (OpenSMILES) of the ion, or of its neutral parent with the charge given separately; up to 500 characters';
@@ -15,31 +16,17 @@ const SMILES_ACCEPTED =
 export async function organicIonFromSmiles(
   smiles: string,
   charge: number,
-  opts: { packingCoefficient?: number; label?: string } = {},
+  opts: { packingCoefficient?: number; label?: string; field?: string } = {},
 ): Promise<ThermoIon> {
+  const field = opts.field ?? 'smiles';
   if (typeof smiles !== 'string' || smiles.trim() === '' || smiles.length > 500) {
-    throw new ChemInputError('smiles', 'empty or too long', SMILES_ACCEPTED);
+    throw new ChemInputError(field, 'empty or too long', SMILES_ACCEPTED);
   }
-  if (smiles.includes('.')) {
-    throw new ChemInputError(
-      'smiles',
-      `"${smiles}" has several components; give one ion (the drug ion or the counter-ion) per SMILES`,
-      SMILES_ACCEPTED,
-    );
-  }
-  const { Molecule } = await import('openchemlib');
-  let mol;
-  try {
-    mol = Molecule.fromSmiles(smiles.trim());
-  } catch (err) {
-    throw new ChemInputError(
-      'smiles',
-      `cannot parse "${smiles}": ${err instanceof Error ? err.message : String(err)}`,
-      SMILES_ACCEPTED,
-    );
-  }
+  // The one structure check (input/structure-check.ts): whole text, complete parse, one component.
+  const ocl = await import('openchemlib');
+  const mol = readSmilesStrictly(ocl, smiles, field);
   const n = mol.getAllAtoms();
-  if (n === 0) throw new ChemInputError('smiles', `no atoms in "${smiles}"`, SMILES_ACCEPTED);
+  if (n === 0) throw new ChemInputError(field, `no atoms in "${smiles}"`, SMILES_ACCEPTED);
   const counts: Record<string, number> = {};
   let formalCharge = 0;
   for (let i = 0; i < n; i++) {
