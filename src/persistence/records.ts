@@ -196,5 +196,6 @@ export const screenPlanRecordSchema = z.object({
   plan: platePlanSchema,
   outcomes: z.record(wellName, storedWellOutcomeSchema),
   updatedAt: isoDate,
+  ...stampFieldsSchema,
 });
 export type ScreenPlanRecord = z.infer<typeof screenPlanRecordSchema>;

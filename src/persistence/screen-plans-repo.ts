@@ -1,9 +1,9 @@
-import type { UpdateSpec } from 'dexie';
 import type { PlatePlanInput, WellOutcome } from '@/chem';
 import { getDb } from './db';
 import { nowIso } from './ids';
 import { screenPlanRecordSchema, storedWellOutcomeSchema, type ScreenPlanRecord } from './records';
 import { buildScreenPlanRecord } from './screen-plan-record';
+import { patchRecord } from './stamped-writes';
 
 export { buildScreenPlanRecord, renameScreenPlanIons } from './screen-plan-record';
 
@@ -38,29 +38,16 @@ export const screenPlansRepo = {
   ): Promise<void> => {
     if (!/^[A-H](?:[1-9]|1[0-2])$/.test(well)) throw new Error(`"${well}" is not a well name`);
     const stored = storedWellOutcomeSchema.parse({ ...outcome, recordedAt: nowIso() });
-    // A key path update (Dexie "outcomes.B3") writes this one well inside the stored record.
-    const changes: Record<string, unknown> = {
-      [`outcomes.${well}`]: stored,
-      updatedAt: stored.recordedAt,
-    };
-    const changed = await getDb().screenPlans.update(
-      planId,
-      changes as UpdateSpec<ScreenPlanRecord>,
-    );
-    if (changed === 0) throw new Error(`No screen plan with id ${planId}`);
+    // A stamped field patch of this one well: other wells' outcomes are not rewritten, and an older
+    // write (another tab, a replay) never lands over a newer outcome of the same well.
+    await patchRecord('screenPlans', planId, [{ path: ['outcomes', well], value: stored }]);
   },
 
   /** Forget the outcome of one well. */
   clearOutcome: async (planId: string, well: string): Promise<void> => {
     const db = getDb();
-    await db.transaction('rw', db.screenPlans, async () => {
-      const current = await db.screenPlans.get(planId);
-      if (!current) return;
-      const outcomes = { ...current.outcomes };
-      delete outcomes[well];
-      await db.screenPlans.put(
-        screenPlanRecordSchema.parse({ ...current, outcomes, updatedAt: nowIso() }),
-      );
-    });
+    const current = await db.screenPlans.get(planId);
+    if (!current) return;
+    await patchRecord('screenPlans', planId, [{ path: ['outcomes', well], removed: true }]);
   },
 };

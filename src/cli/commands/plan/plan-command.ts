@@ -12,6 +12,7 @@ import { usageError } from '../../args/cli-error';
 import { COMMAND_USAGE } from '../../command-usage';
 import { parseFlags, refuseTogether } from '../../args/parse-flags';
 import { writeFileAtomic } from '../../output/atomic-write';
+import { checkRunFiles } from '../../output/output-target';
 import { writeLine, writeText, type CliCommand } from '../../io';
 import { safeRow } from '../screen/screen-writers';
 import { planFromFile, readPlanFile } from './plan-input';
@@ -92,6 +93,10 @@ export const planCommand: CliCommand = defineCommand('plan', {
       'input',
       'one lists the solvent table, the other builds a plan',
     );
+    const [out] = await checkRunFiles({
+      inputs: [{ flag: '--input', path: flags.input }],
+      outputs: [{ flag: '--out', path: flags.out }],
+    });
     let text: string;
     let what: string;
     if (flags.solvents) {
@@ -108,8 +113,8 @@ export const planCommand: CliCommand = defineCommand('plan', {
       text = flags.format === 'json' ? planJson(name, plan) : planCsv(plan);
       what = `${plan.wells.length} wells`;
     }
-    if (flags.out !== undefined) {
-      await writeFileAtomic(flags.out, text + '\n');
+    if (out !== undefined) {
+      await writeFileAtomic(out, text + '\n');
       writeLine(io.stderr, `wrote ${what} to ${flags.out}`);
     } else await writeText(io.stdout, text + '\n');
     return 0;

@@ -1,4 +1,3 @@
-import { readFile } from 'node:fs/promises';
 import { z } from 'zod';
 import {
   buildPlatePlan,
@@ -8,6 +7,7 @@ import {
   platePlanSchema,
   type PlatePlan,
 } from '@/chem';
+import { readJsonFile } from '../../input/read-json-file';
 import { specFromFlags } from '../screen/screen-command';
 import { compoundFileSchema, FLAG_NAMES, prepareScreen } from '../screen/screen-input';
 
@@ -24,28 +24,12 @@ export const planFileSchema = z
   .strict();
 export type PlanFile = z.infer<typeof planFileSchema>;
 
-/** Read and validate a plan file; a bad field is refused with its path (`--input plan.plate`). */
+/**
+ * Read and validate a plan file through the CLI's one JSON file reader (size-capped before it is
+ * read, strict JSON); a bad field is refused with its path (`--input plan.plate`).
+ */
 export async function readPlanFile(path: string): Promise<PlanFile> {
-  let text: string;
-  try {
-    text = await readFile(path, 'utf8');
-  } catch (err) {
-    throw new ChemInputError(
-      '--input',
-      `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
-      'a readable JSON file',
-    );
-  }
-  let json: unknown;
-  try {
-    json = JSON.parse(text);
-  } catch {
-    throw new ChemInputError(
-      '--input',
-      `${path} is not valid JSON`,
-      '{"compound": {…}, "plan": {…}}',
-    );
-  }
+  const json = await readJsonFile(path, { flag: '--input' });
   const r = planFileSchema.safeParse(json);
   if (!r.success) {
     const i = r.error.issues[0]!;
