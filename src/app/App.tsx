@@ -27,6 +27,11 @@ const EnergeticsArea = lazy(() =>
 const BenchWorkspace = lazy(() =>
   import('@/features/bench/components/BenchWorkspace').then((m) => ({ default: m.BenchWorkspace })),
 );
+const ScreenPlanArea = lazy(() =>
+  import('@/features/screen-plan/components/ScreenPlanArea').then((m) => ({
+    default: m.ScreenPlanArea,
+  })),
+);
 const ModelCheckArea = lazy(() =>
   import('@/features/model-check/components/ModelCheckArea').then((m) => ({
     default: m.ModelCheckArea,
@@ -46,6 +51,12 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
       return (
         <AreaBoundary>
           <BenchWorkspace project={project} />
+        </AreaBoundary>
+      );
+    case 'salt-screen':
+      return (
+        <AreaBoundary>
+          <ScreenPlanArea project={project} />
         </AreaBoundary>
       );
     case 'model-check':

@@ -10,4 +10,5 @@ export * from './compound';
 export * from './library';
 export * from './screening';
 export * from './report';
+export * from './plate-plan';
 export * from './input';

@@ -39,6 +39,17 @@ export const COMMAND_USAGE = {
   excipients by their bundled ids (an unknown id is refused with the accepted ones); the last columns
   name the excipient most likely to convert each salt and P(conversion).`,
   },
+  plan: {
+    summary:
+      'a salt-screen plate plan: per-well amounts of drug, counter-ion and solvent (pick list)',
+    usage: `saltsmith plan --input plan.json [--format csv|json] [--out file]
+       saltsmith plan --solvents [--format csv|json]
+  plan.json = {"compound": <the screen --input object>, "plan": {"counterIons": ["mesylate", …],
+    "solvents": ["ethanol", …], "equivalents": 1.05 | [0.5, 1.0] | {"<ion id>": n}, "methods": ["slurry",
+    "cooling", "evaporation", "anti-solvent"], "apiMgPerWell": 10, "solventUlPerWell": 200, "plate": 24|48|96,
+    "stock": {"<ion id>": {"solvent": "<id>", "molar": 1.0}}, "allowClass1": false}}
+  A Class 1 solvent (ICH Q3C) is refused unless "allowClass1": true. --solvents lists the solvent table.`,
+  },
   serve: {
     summary: 'build the workbench if needed and serve it on 127.0.0.1 (npm start)',
     usage: 'saltsmith serve [--port 4173] [--dir dist] [--no-build]   (PORT sets the default port)',

@@ -18,6 +18,7 @@ const LOADERS: Record<CommandName, () => Promise<CliCommand>> = {
     return (await import('./commands/eval/eval-command')).evalCommand;
   },
   screen: async () => (await import('./commands/screen/screen-command')).screenCommand,
+  plan: async () => (await import('./commands/plan/plan-command')).planCommand,
   serve: async () => (await import('./serve/serve-command')).serveCommand,
 };
 

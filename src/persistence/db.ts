@@ -1,9 +1,12 @@
 import Dexie, { type Table } from 'dexie';
+import { DEMO_SCREEN_PLAN } from './demo-project';
+import { buildScreenPlanRecord } from './screen-plan-record';
 import type {
   CandidateRecord,
   CustomIonRecord,
   MeasurementRecord,
   ProjectRecord,
+  ScreenPlanRecord,
   SettingRecord,
 } from './records';
 
@@ -20,6 +23,7 @@ export class SaltsmithDb extends Dexie {
   measurements!: Table<MeasurementRecord, string>;
   customIons!: Table<CustomIonRecord, string>;
   settings!: Table<SettingRecord, string>;
+  screenPlans!: Table<ScreenPlanRecord, string>;
 
   constructor(name = DB_NAME) {
     super(name);
@@ -30,6 +34,20 @@ export class SaltsmithDb extends Dexie {
       customIons: 'id, projectId, overridesIonId',
       settings: 'key',
     });
+    // Version 2 (the salt-screen plan): one new table, one plan record per project with its well
+    // outcomes. No existing record changes; the upgrade gives an existing demo project the demo's
+    // example plan, as a freshly seeded demo gets (tests/persistence/db-migration.test.ts).
+    this.version(2)
+      .stores({ screenPlans: 'id, &projectId' })
+      .upgrade(async (tx) => {
+        const demos = await tx
+          .table<ProjectRecord, string>('projects')
+          .filter((p) => p.isDemo)
+          .toArray();
+        for (const p of demos) {
+          await tx.table('screenPlans').add(buildScreenPlanRecord(p.id, DEMO_SCREEN_PLAN));
+        }
+      });
   }
 }
 

@@ -1,4 +1,4 @@
-import type { Compound } from '@/chem';
+import type { Compound, PlatePlanInput } from '@/chem';
 
 /**
  * The demo scenario. Everything here is INVENTED for demonstration: "Demorazine" is a fictional weakly
@@ -36,3 +36,17 @@ export const DEMO_SHORTLIST = [
   'tosylate',
   'napsylate',
 ];
+
+/**
+ * The demo's example salt-screen plan (invented, like everything in the demo): four of its shortlisted
+ * counter-ions in four solvents on a 24-well plate, hydrogen chloride from a 1 M stock in 2-propanol.
+ */
+export const DEMO_SCREEN_PLAN: PlatePlanInput = {
+  counterIons: ['chloride', 'mesylate', 'sulfate', 'maleate'],
+  solvents: ['ethanol', 'acetone', '2-propanol', 'ethyl-acetate'],
+  methods: ['slurry'],
+  apiMgPerWell: 10,
+  solventUlPerWell: 200,
+  plate: 24,
+  stock: { chloride: { solvent: '2-propanol', molar: 1 } },
+};

@@ -12,7 +12,9 @@ import {
   type CustomIonRecord,
   type MeasurementRecord,
   type ProjectRecord,
+  screenPlanRecordSchema,
 } from './records';
+import { renameScreenPlanIons } from './screen-plan-record';
 import { buildProjectFile, serializeProjectFile, type ProjectBundle } from './project-file/build';
 import { parseProjectFileText } from './project-file/restore';
 import { checkFileStructures } from './project-file/file-rules';
@@ -23,7 +25,7 @@ export async function loadProjectBundle(projectId: string): Promise<ProjectBundl
   const db = getDb();
   return db.transaction(
     'r',
-    [db.projects, db.candidates, db.measurements, db.customIons],
+    [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
     async () => {
       const project = await db.projects.get(projectId);
       if (!project) throw new Error(`No project with id ${projectId}`);
@@ -37,7 +39,8 @@ export async function loadProjectBundle(projectId: string): Promise<ProjectBundl
             (usedIonIds.has(ion.id) ||
               (ion.overridesIonId !== null && usedIonIds.has(ion.overridesIonId)))),
       );
-      return { project, candidates, measurements, customIons };
+      const screenPlans = await db.screenPlans.where('projectId').equals(projectId).toArray();
+      return { project, candidates, measurements, customIons, screenPlans };
     },
   );
 }
@@ -147,6 +150,25 @@ async function placeImportedIons(
   return { ions, ionIdMap };
 }
 
+/** One plan per project: the file's first plan, its in-house ions renamed like the shortlist's. */
+async function addImportedPlan(
+  file: ProjectFile,
+  projectId: string,
+  ionIdMap: ReadonlyMap<string, string>,
+): Promise<void> {
+  const plan = file.screenPlans[0];
+  if (!plan) return;
+  await getDb().screenPlans.add(
+    screenPlanRecordSchema.parse({
+      ...renameScreenPlanIons(
+        { ...plan, projectId, schemaVersion: RECORD_SCHEMA_VERSION },
+        (ionId) => ionIdMap.get(ionId) ?? ionId,
+      ),
+      id: newId('plan'),
+    }),
+  );
+}
+
 /**
  * Write a validated project file into the database in ONE transaction: either every record lands or
  * none does. Candidate, measurement and project-scoped ion ids are fresh, so a file can be imported
@@ -159,7 +181,7 @@ export async function writeProjectFile(
   const db = getDb();
   return db.transaction(
     'rw',
-    [db.projects, db.candidates, db.measurements, db.customIons],
+    [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
     async () => {
       const now = nowIso();
       let projectId: string;
@@ -173,6 +195,7 @@ export async function writeProjectFile(
         await db.measurements.where('projectId').equals(projectId).delete();
         await db.candidates.where('projectId').equals(projectId).delete();
         await db.customIons.where('projectId').equals(projectId).delete();
+        await db.screenPlans.where('projectId').equals(projectId).delete();
       } else {
         projectId = newId('prj');
       }
@@ -218,6 +241,7 @@ export async function writeProjectFile(
       if (ions.length) await db.customIons.bulkAdd(ions);
       if (candidates.length) await db.candidates.bulkAdd(candidates);
       if (measurements.length) await db.measurements.bulkAdd(measurements);
+      await addImportedPlan(file, projectId, ionIdMap);
       return {
         projectId,
         name: project.name,

@@ -1,7 +1,8 @@
 import { compoundSchema, getCounterIon, type Compound } from '@/chem';
 import { getDb } from './db';
 import { newId, nowIso } from './ids';
-import { DEMO_COMPOUND, DEMO_PROJECT_NAME, DEMO_SHORTLIST } from './demo-project';
+import { DEMO_COMPOUND, DEMO_PROJECT_NAME, DEMO_SCREEN_PLAN, DEMO_SHORTLIST } from './demo-project';
+import { buildScreenPlanRecord, renameScreenPlanIons } from './screen-plan-record';
 import {
   RECORD_SCHEMA_VERSION,
   candidateRecordSchema,
@@ -11,6 +12,7 @@ import {
   type CustomIonRecord,
   type MeasurementRecord,
   type ProjectRecord,
+  type ScreenPlanRecord,
 } from './records';
 import { saltStoichiometry } from './candidates-repo';
 
@@ -20,6 +22,8 @@ export interface ProjectBundle {
   candidates: CandidateRecord[];
   measurements: MeasurementRecord[];
   customIons: CustomIonRecord[];
+  /** The project's salt-screen plan with its outcomes (absent in bundles made before version 2). */
+  screenPlans?: ScreenPlanRecord[];
 }
 
 /**
@@ -76,11 +80,12 @@ export const projectBundleOps = {
     const db = getDb();
     await db.transaction(
       'rw',
-      [db.projects, db.candidates, db.measurements, db.customIons],
+      [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
       async () => {
         await db.candidates.where('projectId').equals(id).delete();
         await db.measurements.where('projectId').equals(id).delete();
         await db.customIons.where('projectId').equals(id).delete();
+        await db.screenPlans.where('projectId').equals(id).delete();
         await db.projects.delete(id);
       },
     );
@@ -92,15 +97,20 @@ export const projectBundleOps = {
    */
   ensureDemo: async (): Promise<string | null> => {
     const db = getDb();
-    return db.transaction('rw', [db.projects, db.settings, db.candidates], async () => {
-      const seeded = await db.settings.get(DEMO_SEEDED_KEY);
-      if (seeded) return null;
-      const record = buildProject(DEMO_PROJECT_NAME, DEMO_COMPOUND, true);
-      await db.projects.add(record);
-      await db.candidates.bulkAdd(demoCandidates(record.id));
-      await db.settings.put({ key: DEMO_SEEDED_KEY, value: true });
-      return record.id;
-    });
+    return db.transaction(
+      'rw',
+      [db.projects, db.settings, db.candidates, db.screenPlans],
+      async () => {
+        const seeded = await db.settings.get(DEMO_SEEDED_KEY);
+        if (seeded) return null;
+        const record = buildProject(DEMO_PROJECT_NAME, DEMO_COMPOUND, true);
+        await db.projects.add(record);
+        await db.candidates.bulkAdd(demoCandidates(record.id));
+        await db.screenPlans.add(buildScreenPlanRecord(record.id, DEMO_SCREEN_PLAN));
+        await db.settings.put({ key: DEMO_SEEDED_KEY, value: true });
+        return record.id;
+      },
+    );
   },
 
   /** Put back a fresh demo project with its shortlist (the old demo, if any, is replaced). */
@@ -108,13 +118,14 @@ export const projectBundleOps = {
     const db = getDb();
     return db.transaction(
       'rw',
-      [db.projects, db.candidates, db.measurements, db.customIons, db.settings],
+      [db.projects, db.candidates, db.measurements, db.customIons, db.settings, db.screenPlans],
       async () => {
         const old = await db.projects.filter((p) => p.isDemo).toArray();
         for (const p of old) await projectBundleOps.remove(p.id);
         const record = buildProject(DEMO_PROJECT_NAME, DEMO_COMPOUND, true);
         await db.projects.add(record);
         await db.candidates.bulkAdd(demoCandidates(record.id));
+        await db.screenPlans.add(buildScreenPlanRecord(record.id, DEMO_SCREEN_PLAN));
         await db.settings.put({ key: DEMO_SEEDED_KEY, value: true });
         return record.id;
       },
@@ -126,7 +137,7 @@ export const projectBundleOps = {
     const db = getDb();
     return db.transaction(
       'r',
-      [db.projects, db.candidates, db.measurements, db.customIons],
+      [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
       async () => {
         const project = await db.projects.get(id);
         if (!project) return undefined;
@@ -135,6 +146,7 @@ export const projectBundleOps = {
           candidates: await db.candidates.where('projectId').equals(id).toArray(),
           measurements: await db.measurements.where('projectId').equals(id).toArray(),
           customIons: await db.customIons.where('projectId').equals(id).toArray(),
+          screenPlans: await db.screenPlans.where('projectId').equals(id).toArray(),
         };
       },
     );
@@ -145,7 +157,7 @@ export const projectBundleOps = {
     const db = getDb();
     return db.transaction(
       'rw',
-      [db.projects, db.candidates, db.measurements, db.customIons],
+      [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
       async () => {
         const bundle = await projectBundleOps.bundle(id);
         if (bundle) await projectBundleOps.remove(id);
@@ -159,12 +171,13 @@ export const projectBundleOps = {
     const db = getDb();
     await db.transaction(
       'rw',
-      [db.projects, db.candidates, db.measurements, db.customIons],
+      [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
       async () => {
         await db.projects.put(projectRecordSchema.parse(bundle.project));
         await db.candidates.bulkPut(bundle.candidates);
         await db.measurements.bulkPut(bundle.measurements);
         await db.customIons.bulkPut(bundle.customIons);
+        await db.screenPlans.bulkPut(bundle.screenPlans ?? []);
       },
     );
   },
@@ -177,7 +190,7 @@ export const projectBundleOps = {
     const db = getDb();
     return db.transaction(
       'rw',
-      [db.projects, db.candidates, db.measurements, db.customIons],
+      [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
       async () => {
         const source = await projectBundleOps.bundle(id);
         if (!source) throw new Error(`No project with id ${id}`);
@@ -217,6 +230,13 @@ export const projectBundleOps = {
         await db.candidates.bulkAdd(candidates);
         await db.measurements.bulkAdd(measurements);
         await db.customIons.bulkAdd(customIons);
+        await db.screenPlans.bulkAdd(
+          (source.screenPlans ?? []).map((p) => ({
+            ...renameScreenPlanIons(p, (ionId) => ionIds.get(ionId) ?? ionId),
+            id: newId('plan'),
+            projectId: project.id,
+          })),
+        );
         return project;
       },
     );

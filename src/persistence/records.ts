@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { compoundSchema, counterIonEditSchema, counterIonSchema } from '@/chem';
+import {
+  compoundSchema,
+  counterIonEditSchema,
+  counterIonSchema,
+  platePlanSchema,
+  wellOutcomeSchema,
+} from '@/chem';
 import { stampFieldsSchema } from './field-stamps';
 
 /**
@@ -167,3 +173,29 @@ export const settingRecordSchema = z.object({
   value: z.unknown(),
 });
 export type SettingRecord = z.infer<typeof settingRecordSchema>;
+
+/** A well name on a plate of up to 96 wells (A1 … H12). */
+const wellName = z.string().regex(/^[A-H](?:[1-9]|1[0-2])$/, 'a well name A1 … H12');
+
+/**
+ * What the lab recorded for one well, with the counter-ion and solvent the well held when it was
+ * recorded (so an outcome is not read against a well whose contents changed with a later plan edit).
+ */
+export const storedWellOutcomeSchema = wellOutcomeSchema.extend({
+  counterIonId: recordId,
+  solventId: recordId,
+  recordedAt: isoDate,
+});
+export type StoredWellOutcome = z.infer<typeof storedWellOutcomeSchema>;
+
+/** A project's salt-screen plan (one per project) and the outcomes recorded per well (Dexie version 2). */
+export const screenPlanRecordSchema = z.object({
+  id: recordId,
+  schemaVersion: z.number().int(),
+  projectId: recordId,
+  plan: platePlanSchema,
+  outcomes: z.record(wellName, storedWellOutcomeSchema),
+  updatedAt: isoDate,
+  ...stampFieldsSchema,
+});
+export type ScreenPlanRecord = z.infer<typeof screenPlanRecordSchema>;

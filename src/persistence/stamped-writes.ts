@@ -8,6 +8,7 @@ import {
   customIonRecordSchema,
   measurementRecordSchema,
   projectRecordSchema,
+  screenPlanRecordSchema,
 } from './records';
 import { trackWrite } from './unsaved-edits';
 
@@ -17,11 +18,16 @@ const TABLE_SCHEMAS = {
   candidates: candidateRecordSchema,
   measurements: measurementRecordSchema,
   customIons: customIonRecordSchema,
+  screenPlans: screenPlanRecordSchema,
 } satisfies Record<string, z.ZodType>;
 export type StampedTable = keyof typeof TABLE_SCHEMAS;
 
 /** Tables whose records carry an `updatedAt` that every stored change refreshes. */
-const HAS_UPDATED_AT: ReadonlySet<StampedTable> = new Set(['projects', 'customIons']);
+const HAS_UPDATED_AT: ReadonlySet<StampedTable> = new Set([
+  'projects',
+  'customIons',
+  'screenPlans',
+]);
 
 /**
  * Apply a stamped patch to one stored record in one transaction: read it, lay the changes that are

@@ -23,7 +23,7 @@ export const UNSAVED_EDITS_KEY = 'saltsmith.unsaved-edits';
 const patchEditSchema = z.object({
   id: z.string(),
   kind: z.literal('patch'),
-  table: z.enum(['projects', 'candidates', 'measurements', 'customIons']),
+  table: z.enum(['projects', 'candidates', 'measurements', 'customIons', 'screenPlans']),
   recordId: z.string().min(1),
   patch: z.array(fieldChangeSchema),
   stamp: z.string().min(1).max(64),

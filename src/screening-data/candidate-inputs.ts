@@ -74,7 +74,7 @@ export async function inHouseIonDescriptors(
   for (const i of mine)
     if (!withSmiles.includes(i))
       notes.push(
-        `${i.name}: no SMILES, so its salt solubility rests on the 10² × S₀ anchor, not the model.`,
+        `${i.name}: no SMILES, so its salt solubility rests on the anchor on S₀ (see the assumptions), not the model.`,
       );
   if (withSmiles.length === 0) return out;
   const ocl = await import('openchemlib');

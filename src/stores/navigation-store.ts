@@ -6,6 +6,7 @@ export const AREAS = [
   { id: 'counter-ions', label: 'Counter-ions' },
   { id: 'ranking', label: 'Ranking' },
   { id: 'energetics', label: 'Energetics' },
+  { id: 'salt-screen', label: 'Salt screen' },
   { id: 'bench', label: 'Bench data' },
   { id: 'model-check', label: 'Model check' },
   { id: 'projects', label: 'Projects' },

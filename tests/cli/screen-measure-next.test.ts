@@ -56,6 +56,7 @@ describe('saltsmith screen --format json: measure_next', () => {
       'robustness',
       'skippedCocrystalBand',
       'units',
+      'separation',
       'assumptions',
       'rows',
       'measure_next',

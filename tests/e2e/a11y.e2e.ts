@@ -13,6 +13,7 @@ const AREAS = [
   { id: 'ranking', ready: /candidates ranked/ },
   { id: 'energetics', ready: 'Sign convention.' },
   { id: 'bench', ready: 'Recorded for' },
+  { id: 'salt-screen', ready: /wells on a 24-well plate/ },
   { id: 'model-check', ready: /tested on drugs it never saw/ },
   { id: 'projects', ready: 'Start a project' },
 ] as const;

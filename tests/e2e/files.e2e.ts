@@ -90,7 +90,7 @@ describe('project files in Chromium', () => {
       candidates: unknown[];
     };
     expect(parsed.format).toBe('saltsmith-project');
-    expect(parsed.version).toBe(2);
+    expect(parsed.version).toBe(3); // format 3: with the salt-screen plan
     // The demo project comes with a shortlist, so the round trip carries candidates, not just a name.
     expect(parsed.candidates.length).toBeGreaterThan(0);
 

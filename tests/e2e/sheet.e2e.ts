@@ -183,7 +183,9 @@ describe('comparison sheet in Chromium', () => {
       .getByRole('table', { name: /^Salt formation/ })
       .getByRole('rowheader')
       .allTextContents();
-    expect(labels).toHaveLength(list.length);
+    // Every shortlisted candidate, after the free form (its own row, not ranked, read against).
+    expect(labels).toHaveLength(list.length + 1);
+    expect(labels[0]).toMatch(/free base \(no salt; read against, not ranked\)/);
     for (const l of labels) expect(text).toContain(squash(l));
     for (const line of CAUTION_LINES) expect(text).toContain(squash(line));
     // Letter paper works as well (the page size follows the print dialog).
@@ -207,12 +209,14 @@ describe('comparison sheet in Chromium', () => {
     const blank = rest.findIndex((r) => r.length === 1 && r[0] === null);
     const rows = rest.slice(0, blank);
     expect(header).toContain('Salt per dose (mg)');
-    expect(header).toContain('ΔH_sol (kJ/mol)');
-    expect(header).toContain('ΔH_sol uncertainty (1 sigma) (kJ/mol)');
+    expect(header).toContain('ΔH_sol (kJ/mol per drug ion)');
+    expect(header).toContain('ΔH_sol uncertainty (1 sigma) (kJ/mol per drug ion)');
     // Rank robustness comes from the Monte Carlo worker: every ranked demo candidate has a P(top 3).
     const pCol = (header ?? []).indexOf('P(top 3) (%)');
     expect(pCol).toBeGreaterThan(1);
-    for (const r of rows) expect(typeof r[pCol]).toBe('number');
+    // (The free form, first, is not ranked and has none.)
+    expect(rows[0]?.[1]).toMatch(/free base/);
+    for (const r of rows.slice(1)) expect(typeof r[pCol]).toBe('number');
 
     // Every numeric cell of the sheet (data-value) is the same number in the CSV, in the column with
     // the same heading (label and unit), to 6 significant digits.

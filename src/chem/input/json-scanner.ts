@@ -120,11 +120,12 @@ class JsonScanner {
     if (ch === '{' || ch === '[') {
       const path = this.childPath();
       if (this.stack.length + 1 > this.maxDepth) {
+        // Named as the whole input: the path down to this depth would be as long as the nesting.
         throw new StrictJsonError(
           'too-deep',
-          path === '' ? this.field : this.pathPrefix + path,
+          this.field,
           path,
-          `is nested deeper than ${this.maxDepth} levels`,
+          `nested deeper than ${this.maxDepth} levels`,
           `JSON nested at most ${this.maxDepth} levels deep`,
         );
       }

@@ -18,3 +18,14 @@ export const SCREENING_CAUTION_SUMMARY =
 /** Closes a single estimate (one lattice or salt answer) where a ranking's full list would be too much. */
 export const SINGLE_ESTIMATE_CAUTION =
   'Screening estimate: it does not establish a salt form. Experiments, the regulatory guidance in force and the lab’s safety rules decide.';
+
+/**
+ * Closes a salt-screen plan wherever it is read or exported (the app's plan, its pick-list CSV, the
+ * command line's `plan`): the corrosives sentence of {@link SCREENING_CAUTIONS} and two lines of the
+ * plan's own (common practice in a salt-screening lab).
+ */
+export const PLATE_PLAN_CAUTIONS = [
+  SCREENING_CAUTIONS[3]!,
+  'The amounts are computed from the entered masses and the bundled molar masses, densities and solvent data (each with its source): check every reagent’s assay, concentration and label before dispensing.',
+  'ICH Q3C classes and limits are shown for orientation; the guideline in force decides which solvent residues are acceptable.',
+];

@@ -20,6 +20,7 @@ export * from './measurements';
 export * from './settings';
 export * from './ranking';
 export * from './rank-robustness';
+export * from './separation';
 export * from '../numerics';
 export * from './thermo-link';
 export * from './screen';

@@ -11,6 +11,9 @@ import { startStaticServer } from './static-server';
 
 const { summary: SUMMARY, usage: USAGE } = COMMAND_USAGE.serve;
 
+/** How long answers already being sent may take after Ctrl+C before every connection is closed (common practice). */
+const SHUTDOWN_GRACE_MS = 500;
+
 export const SERVE_FLAGS = {
   help: { type: 'switch' },
   port: { type: 'number', min: 0, max: 65535, integer: true, unit: '(0 picks a free port)' },
@@ -70,7 +73,14 @@ export const serveCommand: CliCommand = defineCommand('serve', {
     const actual = typeof address === 'object' && address ? address.port : port;
     writeLine(io.stdout, `Saltsmith is running at http://127.0.0.1:${actual}/  (Ctrl+C to stop)`);
     await new Promise<void>((done) => {
-      const stop = () => server.close(() => done());
+      // close() stops accepting and waits for open connections; a client that holds one open without
+      // finishing its request would keep the process alive, so idle ones are closed at once and the
+      // rest after a short grace for answers already on their way.
+      const stop = () => {
+        server.close(() => done());
+        server.closeIdleConnections();
+        setTimeout(() => server.closeAllConnections(), SHUTDOWN_GRACE_MS).unref();
+      };
       process.once('SIGINT', stop);
       process.once('SIGTERM', stop);
       server.on('close', () => done());

@@ -1,5 +1,5 @@
 import {
-  SALT_WATER_ORIGIN_BASIS,
+  saltSolubilityBasisWords,
   SALT_WATER_ORIGIN_LABELS,
   SOLUBILITY_DRIVER_WORDS,
   type RankedRow,
@@ -36,7 +36,8 @@ export interface DisplayRow {
   phMax: ShownNumber | null;
   worstDose: (ShownNumber & { pH: number; solid: string }) | null;
   gastricDose: (ShownNumber & { solid: string }) | null;
-  solutionEnthalpy: ShownNumber | null;
+  /** ΔH_sol per drug ion, kJ/mol; `notInformative` says why a value is shown as words instead. */
+  solutionEnthalpy: (ShownNumber & { notInformative: string | null }) | null;
   activeFraction: number;
   saltMassPerDoseMg: number | null;
   acceptabilityClass: 1 | 2 | 3 | null;
@@ -46,7 +47,7 @@ export interface SaltWaterShown extends ShownNumber {
   freeFormMgPerMl: number;
   log10DrugM: number;
   log10Sigma: number;
-  /** 'model', 'model + fusion data', 'measured' or 'anchor 10² × S₀'. */
+  /** 'model', 'model + fusion data', 'measured' or 'anchor on S₀'. */
   originWord: string;
   /** The drivers of the estimate in words, largest first. */
   drivers: string;
@@ -60,12 +61,87 @@ function saltWaterShown(row: ScreenRow): SaltWaterShown | null {
     value: sw.mgPerMlAsSalt,
     range: doseRange(sw.mgPerMlAsSalt, sigma),
     origin: sw.origin === 'measured' ? 'measured' : 'estimated',
-    basis: SALT_WATER_ORIGIN_BASIS[sw.origin],
+    basis: saltSolubilityBasisWords(sw.basis),
     freeFormMgPerMl: sw.mgPerMlAsFreeForm,
     log10DrugM: sw.log10DrugM.value,
     log10Sigma: sigma,
     originWord: SALT_WATER_ORIGIN_LABELS[sw.origin],
     drivers: sw.drivers.map((d) => SOLUBILITY_DRIVER_WORDS[d.id]).join(', '),
+  };
+}
+
+/** ΔH_sol per drug ion as the core states it (screen row), with the engine's words where it estimated it. */
+function solutionEnthalpyOf(
+  row: ScreenRow,
+  data: ProjectScreening,
+): DisplayRow['solutionEnthalpy'] {
+  const h = row.solutionEnthalpyPerDrugIon;
+  if (!h) return null;
+  const thermo = data.energetics[row.id]?.thermo;
+  const basis =
+    h.origin === 'estimated' && thermo
+      ? `Hess cycle: ${thermo.methodChosen} lattice + hydration (${thermo.methodReason}); per drug ion (formula unit ÷ ${row.drugPerSalt})`
+      : h.basis;
+  return {
+    value: h.valueKJPerMolDrugIon,
+    ...(h.sigmaKJPerMolDrugIon !== null ? { sigma: h.sigmaKJPerMolDrugIon } : {}),
+    origin: h.origin,
+    basis,
+    notInformative: h.notInformative,
+  };
+}
+
+/** The free form as a row of the same columns, read against the salts (not ranked). */
+export interface FreeFormShown {
+  label: string;
+  /** S₀ in mg/mL with its ±1σ range (the free form's own solubility in water, at its own pH). */
+  intrinsic: ShownNumber;
+  worstDose: (ShownNumber & { pH: number; solid: string }) | null;
+  gastricDose: (ShownNumber & { solid: string }) | null;
+  /** The dose itself: the free form carries no counter-ion mass. */
+  doseMg: number | null;
+  flags: string[];
+}
+
+export function freeFormShown(
+  data: ProjectScreening,
+  drugName: string,
+  doseMg: number | null,
+): FreeFormShown {
+  const ff = data.screen.freeForm;
+  const s0 = ff.log10IntrinsicM;
+  const mgPerMl = 10 ** s0.value * data.drugIon.freeFormMolarMassGPerMol;
+  const measured = ff.intrinsicOrigin === 'measured';
+  const basis = measured
+    ? 'S₀ entered in the Compound area'
+    : 'S₀ from the General Solubility Equation';
+  const origin = measured ? 'measured' : 'estimated';
+  return {
+    label: `${drugName || 'Drug'} free ${data.screen.drugKind} (no salt)`,
+    intrinsic: { value: mgPerMl, range: doseRange(mgPerMl, s0.uncertainty), origin, basis },
+    worstDose:
+      ff.worst && ff.worst.doseNumber !== null
+        ? {
+            value: ff.worst.doseNumber,
+            range: doseRange(ff.worst.doseNumber, s0.uncertainty),
+            origin,
+            basis: `free form at pH ${ff.worst.pH}; ${basis}`,
+            pH: ff.worst.pH,
+            solid: 'free-form',
+          }
+        : null,
+    gastricDose:
+      ff.gastric && ff.gastric.doseNumber !== null
+        ? {
+            value: ff.gastric.doseNumber,
+            range: doseRange(ff.gastric.doseNumber, s0.uncertainty),
+            origin,
+            basis: `${ff.gastric.label}${ff.gastric.convertsTo ? `; the ${ff.gastric.convertsTo} limits it` : ''}`,
+            solid: ff.gastric.solid,
+          }
+        : null,
+    doseMg,
+    flags: ff.flags.map((f) => f.text),
   };
 }
 
@@ -96,27 +172,7 @@ export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]
       ? 'K_sp from the measured salt solubility'
       : 'K_sp estimated (no measured salt solubility)';
     const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
-    const energetics = data.energetics[row.id];
-    const measuredDH = row.measured?.solutionEnthalpyKJ ?? null;
-    const vh = row.measured?.vantHoff?.solutionEnthalpyKJ ?? null;
-    const solutionEnthalpy: ShownNumber | null =
-      measuredDH !== null
-        ? { value: measuredDH, origin: 'measured', basis: 'measured by solution calorimetry' }
-        : vh
-          ? {
-              value: vh.value,
-              sigma: vh.uncertainty,
-              origin: 'measured',
-              basis: 'apparent ΔH_sol from the van ’t Hoff fit of measured solubilities',
-            }
-          : energetics?.thermo
-            ? {
-                value: energetics.thermo.solutionEnthalpyKJ.value,
-                sigma: energetics.thermo.solutionEnthalpyKJ.uncertainty,
-                origin: 'estimated',
-                basis: `Hess cycle: ${energetics.thermo.methodChosen} lattice + hydration (${energetics.thermo.methodReason})`,
-              }
-            : null;
+    const solutionEnthalpy = solutionEnthalpyOf(row, data);
     return [
       {
         id: row.id,

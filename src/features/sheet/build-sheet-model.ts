@@ -1,10 +1,16 @@
-import { ICH_M9_VOLUME_ML, rankCandidates, type ModelValidation, type ScreenRow } from '@/chem';
+import {
+  ICH_M9_VOLUME_ML,
+  rankCandidates,
+  separationSummary,
+  type ModelValidation,
+  type ScreenRow,
+} from '@/chem';
 import type { EnergyCycle } from '@/components/charts/EnergyLevelDiagram';
 import type { SolubilitySeries } from '@/components/charts/PhSolubilityChart';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { energyCycleOf } from '@/screening-data/energy-cycle';
 import type { ProjectRecord } from '@/persistence/records';
-import { SHEET_COLUMNS, rowCells } from './sheet-columns';
+import { SHEET_COLUMNS, freeFormCells, rowCells } from './sheet-columns';
 import { compoundFacts, settingsList, weightsList } from './sheet-facts';
 import { sheetExcipientMatrix, sheetWorstExcipient } from './sheet-excipients';
 import type { SheetModel, SheetRow } from './sheet.types';
@@ -155,6 +161,15 @@ export function buildSheetModel({
     weights: weightsList(screening),
     columns: [...SHEET_COLUMNS],
     rows,
+    freeForm: {
+      id: 'free-form',
+      rank: null,
+      label: `${drugName} free ${project.compound.kind} (no salt; read against, not ranked)`,
+      cells: freeFormCells(screening, project.compound.doseMg),
+      flags: screen.freeForm.flags.map((f) => f.text),
+      reasons: [],
+    },
+    separation: separationSummary(screen, weights),
     confidence: validation.map((m) => ({
       label: `${m.label}${m.group ? ` — ${m.group}` : ''}`,
       n: m.n,

@@ -31,10 +31,10 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   },
   {
     key: 'saltProbability',
-    label: 'P(salt)',
+    label: 'P(salt) from ΔpKa',
     unit: '0–1',
     kind: 'number',
-    hint: 'probability of proton transfer, Cruz-Cabeza 2012 trend',
+    hint: 'share of salts (not cocrystals) among published crystal structures at this ΔpKa: 0.17·ΔpKa + 0.28, clamped to 0–1 (Cruz-Cabeza 2012 trend, coefficients from memory); at least 0.95 above the salt band, so it is 1 for most strong acids',
     group: 'formation',
   },
   {
@@ -59,6 +59,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     kind: 'number',
     hint: "the salt's own solubility in pure water (±1σ in the log₁₀ column)",
     group: 'solubility',
+    range: true,
   },
   {
     key: 'saltWaterFreeFormMgPerMl',
@@ -66,6 +67,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     unit: 'mg/mL free form',
     kind: 'number',
     group: 'solubility',
+    range: true,
   },
   {
     key: 'saltWaterLog10M',
@@ -80,7 +82,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     label: 'Salt solubility from',
     unit: null,
     kind: 'text',
-    hint: 'model, model + fusion data (your DSC), measured, or the 10² × S₀ anchor',
+    hint: 'model, model + fusion data (your DSC), measured, or the anchor on S₀ (each basis in words: see the notes)',
     group: 'solubility',
   },
   {
@@ -98,6 +100,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     kind: 'number',
     hint: 'ICH M9 dose number at the least favourable pH',
     group: 'solubility',
+    range: true,
   },
   { key: 'worstPh', label: 'at pH', unit: null, kind: 'number', group: 'solubility' },
   {
@@ -107,6 +110,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     kind: 'number',
     hint: 'dose number in the gastric medium with its chloride',
     group: 'solubility',
+    range: true,
   },
   {
     key: 'solubilityClass',
@@ -125,7 +129,7 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   {
     key: 'latticeEnthalpy',
     label: 'ΔH_L',
-    unit: 'kJ/mol',
+    unit: 'kJ/mol per formula unit',
     kind: 'number',
     hint: 'lattice dissociation enthalpy, > 0',
     group: 'energetics',
@@ -133,9 +137,9 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
   {
     key: 'solutionEnthalpy',
     label: 'ΔH_sol',
-    unit: 'kJ/mol',
+    unit: 'kJ/mol per drug ion',
     kind: 'number',
-    hint: 'enthalpy of solution, estimate or calorimetric',
+    hint: 'enthalpy of solution per mole of drug ion (formula unit ÷ drug ions), estimate or calorimetric; "not informative" when its 1σ exceeds it or an estimate lies outside ±70 kJ/mol (a threefold solubility change from 25 to 37 °C)',
     group: 'energetics',
   },
   {
@@ -161,6 +165,11 @@ const num = (
       };
 const est = (e: Estimate | null | undefined, origin: ValueOrigin = 'estimated'): SheetCell =>
   e ? num(e.value, origin, e.uncertainty) : { value: null };
+/** A cell with the ±1σ range of a log-normal quantity (value ÷ 10^σ to value × 10^σ). */
+const ranged = (cell: SheetCell, log10Sigma: number | undefined): SheetCell =>
+  typeof cell.value === 'number' && log10Sigma !== undefined && log10Sigma > 0
+    ? { ...cell, range: [cell.value / 10 ** log10Sigma, cell.value * 10 ** log10Sigma] }
+    : cell;
 /** One screened candidate's cells, keyed by the `SHEET_COLUMNS` keys, each with its origin and 1σ. */
 export function rowCells(
   row: ScreenRow,
@@ -170,8 +179,12 @@ export function rowCells(
 ): Record<string, SheetCell> {
   const kspOrigin: ValueOrigin | null = row.kspOrigin ?? null;
   const thermo = screening.energetics[row.id]?.thermo ?? null;
-  const measuredSol = row.measured?.solutionEnthalpyKJ ?? null;
+  const dh = row.solutionEnthalpyPerDrugIon;
   const sw = row.saltWaterSolubility;
+  const u = uncertaintiesOf(row, screening.screen.robustnessShared);
+  // The same ±1σ ranges the Ranking shows: the limiting solid's log σ (salt or free form).
+  const logSigmaOf = (solid: string | undefined) =>
+    solid === 'salt' ? u.saltLogSigma : solid ? u.freeLogSigma : undefined;
   const swOrigin: ValueOrigin | null = sw
     ? sw.origin === 'measured'
       ? 'measured'
@@ -184,28 +197,69 @@ export function rowCells(
     saltProbability: num(row.saltFormation?.saltProbability ?? null, 'estimated'),
     activeFraction: num(row.activeFraction * 100, 'input'),
     saltMassPerDose: num(row.saltMassPerDoseMg, 'input'),
-    saltWaterMgPerMl: num(sw?.mgPerMlAsSalt ?? null, swOrigin),
-    saltWaterFreeFormMgPerMl: num(sw?.mgPerMlAsFreeForm ?? null, swOrigin),
+    saltWaterMgPerMl: ranged(num(sw?.mgPerMlAsSalt ?? null, swOrigin), sw?.log10DrugM.uncertainty),
+    saltWaterFreeFormMgPerMl: ranged(
+      num(sw?.mgPerMlAsFreeForm ?? null, swOrigin),
+      sw?.log10DrugM.uncertainty,
+    ),
     saltWaterLog10M: sw ? est(sw.log10DrugM, swOrigin ?? 'estimated') : { value: null },
     saltWaterOrigin: { value: sw ? SALT_WATER_ORIGIN_LABELS[sw.origin] : null },
     log10Ksp: est(row.log10Ksp, kspOrigin ?? 'estimated'),
     // The same 1σ the Ranking area shows (linearised as the rank-robustness draw perturbs pH_max).
-    phMax: num(
-      row.phMax,
-      kspOrigin,
-      uncertaintiesOf(row, screening.screen.robustnessShared).phMaxSigma,
+    phMax: num(row.phMax, kspOrigin, u.phMaxSigma),
+    worstDoseNumber: ranged(
+      num(row.worst?.doseNumber ?? null, kspOrigin),
+      logSigmaOf(row.worst?.solid),
     ),
-    worstDoseNumber: num(row.worst?.doseNumber ?? null, kspOrigin),
     worstPh: num(row.worst?.pH ?? null, null),
-    gastricDoseNumber: num(row.gastric?.doseNumber ?? null, kspOrigin),
+    gastricDoseNumber: ranged(
+      num(row.gastric?.doseNumber ?? null, kspOrigin),
+      logSigmaOf(row.gastric?.solid),
+    ),
     solubilityClass: { value: row.solubilityClass },
     phMaxMargin: num(row.disproportionation?.marginPh ?? null, kspOrigin),
     latticeEnthalpy: est(thermo?.latticeEnthalpyKJ),
-    solutionEnthalpy:
-      measuredSol !== null ? num(measuredSol, 'measured') : est(thermo?.solutionEnthalpyKJ),
+    solutionEnthalpy: !dh
+      ? { value: null }
+      : dh.notInformative
+        ? { value: 'not informative', origin: dh.origin }
+        : num(dh.valueKJPerMolDrugIon, dh.origin, dh.sigmaKJPerMolDrugIon),
     hygroscopicity: {
       value: row.measured?.hygroscopicity ?? null,
       origin: row.measured?.hygroscopicity ? 'measured' : null,
     },
+  };
+}
+
+/**
+ * The free form's cells in the same columns, read against the salts (not ranked): S₀ in the
+ * salt-in-water columns, its own dose numbers, 100 % active, the dose itself per dose.
+ */
+export function freeFormCells(
+  screening: ProjectScreening,
+  doseMg: number | null,
+): Record<string, SheetCell> {
+  const ff = screening.screen.freeForm;
+  const origin: ValueOrigin = ff.intrinsicOrigin === 'measured' ? 'input' : 'estimated';
+  const mg = 10 ** ff.log10IntrinsicM.value * screening.drugIon.freeFormMolarMassGPerMol;
+  return {
+    activeFraction: num(100, 'input'),
+    saltMassPerDose: num(doseMg, 'input'),
+    saltWaterMgPerMl: ranged(num(mg, origin), ff.log10IntrinsicM.uncertainty),
+    saltWaterFreeFormMgPerMl: ranged(num(mg, origin), ff.log10IntrinsicM.uncertainty),
+    saltWaterLog10M: est(ff.log10IntrinsicM, origin),
+    saltWaterOrigin: {
+      value: ff.intrinsicOrigin === 'measured' ? 'free form: S₀ entered' : 'free form: S₀ from GSE',
+    },
+    worstDoseNumber: ranged(
+      num(ff.worst?.doseNumber ?? null, origin),
+      ff.log10IntrinsicM.uncertainty,
+    ),
+    worstPh: num(ff.worst?.pH ?? null, null),
+    gastricDoseNumber: ranged(
+      num(ff.gastric?.doseNumber ?? null, origin),
+      ff.log10IntrinsicM.uncertainty,
+    ),
+    solubilityClass: { value: ff.solubilityClass },
   };
 }

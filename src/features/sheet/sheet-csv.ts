@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { CAUTION_LINES } from '@/components/Cautions';
-import { neutralizeCsvText } from '@/chem';
+import { neutralizeCsvText, roundToUncertainty } from '@/chem';
+import { cellNumber } from './sheet-format';
 import type { SheetColumn, SheetModel } from './sheet.types';
 
 /** Rounds to 6 significant digits so float noise (0.30000000000000004) never reaches a file. */
@@ -16,7 +17,13 @@ export function csvHeader(columns: readonly SheetColumn[]): string[] {
   const head = ['Rank', 'Candidate'];
   for (const c of columns) {
     head.push(withUnit(c.label, c.unit));
-    if (c.kind === 'number')
+    if (c.kind === 'number' && c.range)
+      head.push(
+        withUnit(`${c.label} low (-1 sigma)`, c.unit),
+        withUnit(`${c.label} high (+1 sigma)`, c.unit),
+        `${c.label} origin`,
+      );
+    else if (c.kind === 'number')
       head.push(withUnit(`${c.label} uncertainty (1 sigma)`, c.unit), `${c.label} origin`);
   }
   head.push('Flags', 'Reasons');
@@ -30,15 +37,32 @@ type CsvValue = string | number | null;
 /** The table as rows of typed values (numbers as numbers, text neutralised), header first. */
 export function sheetCsvRows(model: SheetModel): CsvValue[][] {
   const rows: CsvValue[][] = [csvHeader(model.columns).map(neutralizeCsvText)];
-  for (const r of model.rows) {
+  for (const r of [...(model.freeForm ? [model.freeForm] : []), ...model.rows]) {
     const line: CsvValue[] = [r.rank, neutralizeCsvText(r.label)];
     for (const c of model.columns) {
       const cell = r.cells[c.key];
       const v = cell?.value ?? null;
-      line.push(typeof v === 'number' ? csvNumber(v) : v === null ? null : neutralizeCsvText(v));
-      if (c.kind === 'number') {
-        const u = cell?.uncertainty;
-        line.push(typeof u === 'number' && Number.isFinite(u) ? csvNumber(u) : null);
+      const u = cell?.uncertainty;
+      const hasU = typeof u === 'number' && Number.isFinite(u) && u > 0;
+      // Precision that follows the uncertainty (roundToUncertainty), else 6 significant digits.
+      const rounded = typeof v === 'number' && hasU ? roundToUncertainty(v, u) : null;
+      const shown = typeof v === 'number' ? cellNumber(cell) : null;
+      line.push(
+        shown !== null ? csvNumber(shown) : typeof v === 'string' ? neutralizeCsvText(v) : null,
+      );
+      if (c.kind === 'number' && c.range) {
+        const range = cell?.range;
+        line.push(range ? csvNumber(Number(range[0].toPrecision(2))) : null);
+        line.push(range ? csvNumber(Number(range[1].toPrecision(2))) : null);
+        line.push(cell?.origin ?? null);
+      } else if (c.kind === 'number') {
+        line.push(
+          rounded
+            ? csvNumber(rounded.sigma)
+            : typeof u === 'number' && Number.isFinite(u)
+              ? csvNumber(u)
+              : null,
+        );
         line.push(cell?.origin ?? null);
       }
     }
@@ -61,6 +85,13 @@ export function sheetCsvRows(model: SheetModel): CsvValue[][] {
 export function csvFooter(model: SheetModel): string[] {
   return [
     `Comparison of ${model.compound.name} (project ${model.projectName}), made ${model.generatedAt} with Saltsmith ${model.appVersion}. Origin: estimated = model estimate, measured = bench data, input = entered by the user.`,
+    ...(model.freeForm
+      ? ['The first row is the free form itself (not ranked): read each salt against it.']
+      : []),
+    ...(model.separation
+      ? [`What separates the candidates: ${model.separation.headline}`, ...model.separation.details]
+      : []),
+    ...model.notes.map((n) => `Note: ${n}`),
     ...CAUTION_LINES.map((l) => `Caution: ${l}`),
   ].map(neutralizeCsvText);
 }

@@ -1,3 +1,4 @@
+import { roundToUncertainty, formatWithUncertainty } from '@/chem';
 import type { SheetCell, ValueOrigin } from './sheet.types';
 
 /** Short marks printed beside a number, explained in the sheet's legend (our own marks). */
@@ -18,8 +19,7 @@ const typographic = (s: string) => s.replace(/^-/, '\u2212');
 export function formatValue(value: number, uncertainty?: number | null): string {
   if (!Number.isFinite(value)) return '—';
   if (uncertainty != null && Number.isFinite(uncertainty) && uncertainty > 0) {
-    const decimals = Math.max(0, Math.min(6, 1 - Math.floor(Math.log10(uncertainty))));
-    return `${typographic(value.toFixed(decimals))} ± ${uncertainty.toFixed(decimals)}`;
+    return formatWithUncertainty(value, uncertainty);
   }
   const a = Math.abs(value);
   if (a !== 0 && (a < 1e-3 || a >= 1e6)) return typographic(value.toExponential(3));
@@ -29,6 +29,23 @@ export function formatValue(value: number, uncertainty?: number | null): string 
 /** A cell's printed text (without its origin mark). */
 export function cellText(cell: SheetCell | undefined): string {
   if (!cell || cell.value === null || cell.value === undefined) return '—';
-  if (typeof cell.value === 'number') return formatValue(cell.value, cell.uncertainty);
+  if (typeof cell.value === 'number') {
+    if (cell.range) {
+      const [lo, hi] = cell.range.map((x) => formatValue(Number(x.toPrecision(2))));
+      return `${formatValue(cellNumber(cell)!)} (±1σ ${lo}–${hi})`;
+    }
+    return formatValue(cell.value, cell.uncertainty);
+  }
   return cell.value;
+}
+
+/** A numeric cell's value as printed and exported: at the precision of its 1σ when it has one. */
+export function cellNumber(cell: SheetCell | undefined): number | null {
+  if (!cell || typeof cell.value !== 'number') return null;
+  // A ±1σ range of a factor of 1.2 or more supports two significant digits, as the Ranking shows.
+  if (cell.range) return Number(cell.value.toPrecision(2));
+  const u = cell.uncertainty;
+  return u != null && Number.isFinite(u) && u > 0
+    ? roundToUncertainty(cell.value, u).value
+    : cell.value;
 }

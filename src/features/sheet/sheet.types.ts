@@ -24,6 +24,11 @@ export interface SheetColumn {
   hint?: string;
   /** Which of the sheet's tables shows the column (the CSV shows all in one table). */
   group: SheetColumnGroup;
+  /**
+   * The column's 1σ is multiplicative (dose numbers, solubilities: a ±1σ range, as the Ranking shows
+   * it): the CSV gives its low and high ends instead of a symmetric 1σ.
+   */
+  range?: boolean;
 }
 
 export interface SheetCell {
@@ -31,6 +36,8 @@ export interface SheetCell {
   value: number | string | null;
   /** Standard uncertainty (1σ) in the column's unit, when known. */
   uncertainty?: number | null;
+  /** The ±1σ range, for a column whose uncertainty is multiplicative (SheetColumn.range). */
+  range?: [number, number] | null;
   origin?: ValueOrigin | null;
 }
 
@@ -93,6 +100,10 @@ export interface SheetModel {
   weights: SheetSetting[];
   columns: SheetColumn[];
   rows: SheetRow[];
+  /** The free form in the same columns, read against the salts (not ranked), when screened. */
+  freeForm?: SheetRow | null;
+  /** What separates the shortlist (the core's separationSummary), in one line and its details. */
+  separation?: { headline: string; details: string[] } | null;
   confidence: SheetConfidenceRow[];
   /** Extra remarks (assumptions, model limits). */
   notes: string[];

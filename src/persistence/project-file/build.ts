@@ -3,6 +3,7 @@ import type {
   CustomIonRecord,
   MeasurementRecord,
   ProjectRecord,
+  ScreenPlanRecord,
 } from '../records';
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_VERSION, appVersion } from './format';
 import { projectFileSchema, type ProjectFile } from './schema';
@@ -14,6 +15,8 @@ export interface ProjectBundle {
   measurements: MeasurementRecord[];
   /** Custom ions of the project and the shared custom ions its shortlist uses. */
   customIons: CustomIonRecord[];
+  /** The project's salt-screen plans with their outcomes (none before version 3). */
+  screenPlans?: ScreenPlanRecord[];
 }
 
 /** Build the file object for a project (pure: the caller supplies the date). */
@@ -63,6 +66,12 @@ export function buildProjectFile(bundle: ProjectBundle, createdAt: string): Proj
       overridesIonId: ion.overridesIonId,
       ion: ion.ion,
       updatedAt: ion.updatedAt,
+    })),
+    screenPlans: (bundle.screenPlans ?? []).map((p) => ({
+      id: p.id,
+      plan: p.plan,
+      outcomes: p.outcomes,
+      updatedAt: p.updatedAt,
     })),
   };
   // Validate what we write, so a file we export is always one we can read back.

@@ -8,8 +8,11 @@
 /** The `format` tag every project file carries. */
 export const PROJECT_FILE_FORMAT = 'saltsmith-project';
 
-/** The version this build writes. Version 1 is read through `upgradeV1` (upgrade-v1.ts). */
-export const PROJECT_FILE_VERSION = 2;
+/**
+ * The version this build writes. Version 1 is read through `upgradeV1` (upgrade-v1.ts), version 2
+ * (before the salt-screen plan) through `upgradeV2` (upgrade-v2.ts).
+ */
+export const PROJECT_FILE_VERSION = 3;
 
 /**
  * The largest project Saltsmith holds, enforced where data are created (a measurement, a shortlisted
@@ -22,6 +25,7 @@ export const PROJECT_LIMITS = {
   candidates: 500,
   measurements: 20_000,
   customIons: 1_000,
+  screenPlans: 10,
   /** UTF-8 bytes of the project's export (compact JSON), checked when data are added. */
   exportBytes: 32 * 1024 * 1024 - 64 * 1024,
 } as const;

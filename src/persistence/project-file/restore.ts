@@ -11,6 +11,7 @@ import { projectFileSchema, type ProjectFile } from './schema';
 import { looksTruncated } from './truncation';
 import { checkFileRules } from './file-rules';
 import { upgradeV1 } from './upgrade-v1';
+import { upgradeV2 } from './upgrade-v2';
 
 /**
  * The single restore/upgrade path: take any parsed JSON value, check the format tag and version,
@@ -45,6 +46,7 @@ export function restoreProjectFile(raw: unknown): ProjectFile {
   }
   let current: unknown = raw;
   if (version === 1) current = upgradeV1(current);
+  if (version <= 2) current = upgradeV2(current);
   const result = projectFileSchema.safeParse(current);
   if (!result.success) throw invalidFileError(result.error);
   checkFileRules(raw, result.data);

@@ -40,7 +40,7 @@ const v1Schema = z.object({
   ),
 });
 
-/** Upgrade a version-1 object to the version-2 shape (validated afterwards like any file). */
+/** Upgrade a version-1 object to the version-2 shape (then upgraded to version 3 like any version-2 file). */
 export function upgradeV1(raw: unknown): unknown {
   const parsed = v1Schema.safeParse(raw);
   if (!parsed.success) throw invalidFileError(parsed.error, 'This version-1 project file');

@@ -56,10 +56,10 @@ const COMPOUNDS: { line: string; flags: string[] | null }[] = [
     ],
   },
   {
-    line: 'A3,Gamma,CC(C)Cc1ccc(cc1)C(C)C(=O)O,,acid,4.6,,0.03,,,400,sodium;calcium;meglumine',
+    line: 'A3,Gamma,CC(C(=O)O)c1ccc(OCC2CC2)c(F)c1,,acid,4.6,,0.03,,,400,sodium;calcium;meglumine',
     flags: [
       '--smiles',
-      'CC(C)Cc1ccc(cc1)C(C)C(=O)O',
+      'CC(C(=O)O)c1ccc(OCC2CC2)c(F)c1',
       '--kind',
       'acid',
       '--pka',

@@ -2,7 +2,11 @@ import { PassThrough } from 'node:stream';
 import type { CliIo } from '@/cli/io';
 
 /** In-memory streams for running a CLI command in-process; `input` is what stdin delivers. */
-export function captureIo(input?: string): { io: CliIo; out: () => string; err: () => string } {
+export function captureIo(input?: string | Uint8Array): {
+  io: CliIo;
+  out: () => string;
+  err: () => string;
+} {
   const stdin = new PassThrough();
   const stdout = new PassThrough();
   const stderr = new PassThrough();

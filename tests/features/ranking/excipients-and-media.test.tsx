@@ -78,7 +78,11 @@ describe('Ranking: excipients, biorelevant presets and the profile CSV', () => {
     const user = userEvent.setup();
     const view = render(<RankingArea project={project} />);
     const panel = (
-      await screen.findByRole('heading', { name: 'Excipients’ microenvironment' })
+      await screen.findByRole(
+        'heading',
+        { name: 'Excipients’ microenvironment' },
+        { timeout: 15000 },
+      )
     ).closest('section')!;
     expect(within(panel).getByText(/No excipients chosen/)).toBeInTheDocument();
     await user.click(within(panel).getByRole('checkbox', { name: /Magnesium stearate/ }));
@@ -87,7 +91,11 @@ describe('Ranking: excipients, biorelevant presets and the profile CSV', () => {
       expect(screeningSettingsOf(stored).excipients).toEqual(['magnesium-stearate']);
     });
     view.rerender(<RankingArea project={(await projectsRepo.get(project.id))!} />);
-    const grid = await within(panel).findByRole('table', { name: /Conversion risk of each salt/ });
+    const grid = await within(panel).findByRole(
+      'table',
+      { name: /Conversion risk of each salt/ },
+      { timeout: 15000 },
+    );
     expect(
       within(grid).getByRole('columnheader', { name: /Magnesium stearate/ }),
     ).toHaveTextContent('pH 8.0–10.0');
@@ -106,7 +114,11 @@ describe('Ranking: excipients, biorelevant presets and the profile CSV', () => {
   it('adds FaSSIF in one click, with its composition and bile-salt solubilisation said as not modelled', async () => {
     const user = userEvent.setup();
     const view = render(<RankingArea project={project} />);
-    const add = await screen.findByRole('button', { name: 'Add FaSSIF (pH 6.5)' });
+    const add = await screen.findByRole(
+      'button',
+      { name: 'Add FaSSIF (pH 6.5)' },
+      { timeout: 15000 },
+    );
     expect(
       screen.getAllByText(/Not modelled: solubilisation by the bile salt/).length,
     ).toBeGreaterThan(0);

@@ -4,6 +4,7 @@ import { CRITERIA, defaultScreeningSettings, validationReport } from '@/chem';
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
+import { cellNumber } from '@/features/sheet/sheet-format';
 import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
 import {
   projectSettingsSchema,
@@ -78,8 +79,15 @@ describe('sheet model from a real screening', () => {
     }
     const first = m.rows[0];
     expect(first?.cells.phMax?.uncertainty).toBeGreaterThan(0);
-    expect(first?.cells.solutionEnthalpy?.origin).toBe('estimated');
-    expect(first?.cells.solutionEnthalpy?.uncertainty).toBeGreaterThan(0);
+    // The dose numbers carry the ±1σ range the Ranking shows (low < value < high).
+    const d0 = first?.cells.worstDoseNumber;
+    expect(d0?.range?.[0]).toBeLessThan(d0?.value as number);
+    expect(d0?.range?.[1]).toBeGreaterThan(d0?.value as number);
+    // ΔH_sol per drug ion: a number with its 1σ, or "not informative" in words (never a bare number).
+    const dh = first?.cells.solutionEnthalpy;
+    expect(dh?.origin).toBe('estimated');
+    if (dh?.value === 'not informative') expect(dh.uncertainty ?? null).toBeNull();
+    else expect(dh?.uncertainty).toBeGreaterThan(0);
     expect(m.energyCycles.length).toBeGreaterThan(0);
     expect(m.solubility?.series[0]?.kind).toBe('free-form');
     expect(m.confidence.length).toBeGreaterThan(0);
@@ -123,13 +131,26 @@ describe('sheet model from a real screening', () => {
     expect(parsed.errors).toEqual([]);
     const header = parsed.data[0] as string[];
     expect(header).toEqual(csvHeader(m.columns));
-    m.rows.forEach((r, i) => {
+    // The free form comes first (not ranked, read against), then the ranked candidates.
+    const all = [m.freeForm!, ...m.rows];
+    expect((parsed.data[1] as unknown[])[1]).toMatch(
+      /free base \(no salt; read against, not ranked\)/,
+    );
+    all.forEach((r, i) => {
       const line = parsed.data[i + 1] as unknown[];
       expect(line[1]).toBe(r.label);
       for (const c of m.columns) {
-        const v = r.cells[c.key]?.value ?? null;
+        const cell = r.cells[c.key];
+        const v = cell?.value ?? null;
         const col = header.indexOf(c.unit ? `${c.label} (${c.unit})` : c.label);
-        expect(line[col]).toBe(typeof v === 'number' ? csvNumber(v) : v);
+        // The CSV writes each value at the precision the sheet prints (cellNumber: to its 1σ).
+        expect(line[col]).toBe(typeof v === 'number' ? csvNumber(cellNumber(cell)!) : v);
+        // A ±1σ range the app shows (dose numbers, solubilities) is in the CSV too, low and high.
+        if (c.range && cell?.range) {
+          const lo = header.indexOf(`${c.label} low (-1 sigma)${c.unit ? ` (${c.unit})` : ''}`);
+          expect(line[lo]).toBe(Number(cell.range[0].toPrecision(2)));
+          expect(line[lo + 1]).toBe(Number(cell.range[1].toPrecision(2)));
+        }
       }
     });
   });

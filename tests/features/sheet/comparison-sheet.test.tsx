@@ -127,10 +127,53 @@ describe('comparison sheet', () => {
     print.mockRestore();
   });
 
+  it('prints the blocks other areas add below the sheet (the salt screen’s outcomes)', () => {
+    render(
+      <SheetView model={model()} onClose={() => undefined} extra={<p>screen outcomes block</p>} />,
+    );
+    expect(screen.getByText('screen outcomes block').closest('.sheet-overlay')).not.toBeNull();
+  });
+
   it('formats a value to the uncertainty (at most two significant digits in the uncertainty, JCGM 100:2008 §7.2.6)', () => {
     expect(formatValue(-12.3456, 25)).toBe('\u221212 ± 25');
     expect(formatValue(4.5612, 0.31)).toBe('4.56 ± 0.31');
     expect(formatValue(0.000012346)).toBe('1.235e-5');
     expect(formatValue(123.456)).toBe('123.5');
+  });
+});
+
+describe('comparison sheet: the free form and what separates the candidates', () => {
+  const extras = (): SheetModel => ({
+    ...model(),
+    freeForm: {
+      id: 'free-form',
+      rank: null,
+      label: 'Demorazine free base (no salt; read against, not ranked)',
+      cells: {},
+      flags: ['free form likely poorly soluble'],
+      reasons: [],
+    },
+    separation: {
+      headline:
+        'The order rests on tablet mass; the salts’ solubilities in water are not separable.',
+      details: ['Same for every candidate: gastric D₀.'],
+    },
+  });
+
+  it('prints the separation line above the tables and the free form as the first row of each table', () => {
+    const { container } = render(<ComparisonSheet model={extras()} />);
+    expect(screen.getByText(/The order rests on tablet mass/)).toBeTruthy();
+    const tables = container.querySelectorAll('table.sheet-ranking');
+    expect(tables.length).toBeGreaterThan(0);
+    for (const t of tables) {
+      const first = t.querySelector('tbody tr')!;
+      expect(first.classList.contains('sheet-free-form')).toBe(true);
+      expect(first.textContent).toMatch(/free base \(no salt; read against, not ranked\)/);
+    }
+    // Above the tables in document order.
+    const line = screen.getByText(/The order rests on tablet mass/);
+    expect(
+      line.compareDocumentPosition(tables[0]!) & Node.DOCUMENT_POSITION_FOLLOWING,
+    ).toBeTruthy();
   });
 });

@@ -147,7 +147,9 @@ describe('comparison CSV', () => {
       9.7,
       0.3,
       'input',
-      -12.3457,
+      // Precision follows the 1σ (roundToUncertainty): σ 25 starts with a 2, so two significant
+      // figures → whole units, and the value to the same place: −12.345678901 → −12 (by hand).
+      -12,
       25,
       'estimated',
       'salt expected',
@@ -179,7 +181,7 @@ describe('comparison CSV', () => {
   it('writes numbers bare and text quoted, with CRLF line ends (RFC 4180 §2)', () => {
     const csv = sheetToCsv(model());
     const lines = csv.split('\r\n');
-    expect(lines[1]?.startsWith('1,"Demorazine mesylate (1:1)",9.7,0.3,"input",-12.3457,25,')).toBe(
+    expect(lines[1]?.startsWith('1,"Demorazine mesylate (1:1)",9.7,0.3,"input",-12,25,')).toBe(
       true,
     );
     // RFC 4180 §2 rule 7: a double quote inside a quoted field is doubled.
@@ -212,5 +214,40 @@ describe('comparison CSV', () => {
     expect(sheetCsvFileName('=cmd|"/c calc"!A1', '2026-12-01T00:00:00Z')).toBe(
       'cmd-c-calc-A1-comparison-2026-12-01.csv',
     );
+  });
+});
+
+describe('comparison CSV: the free form and what separates the candidates', () => {
+  const withExtras = (): SheetModel => ({
+    ...model(),
+    freeForm: {
+      id: 'free-form',
+      rank: null,
+      label: 'Demorazine free base (no salt; read against, not ranked)',
+      cells: { dpka: { value: null }, solH: { value: null }, verdict: { value: null } },
+      flags: [],
+      reasons: [],
+    },
+    separation: {
+      headline: 'The order rests on tablet mass.',
+      details: ['Same for every candidate: gastric D₀.'],
+    },
+    notes: ['salt solubility without a measurement: model estimate'],
+  });
+
+  it('writes the free form as the first row, unranked, before the ranked candidates', () => {
+    const rows = parse(sheetToCsv(withExtras()));
+    expect(rows[1]![0]).toBeNull();
+    expect(rows[1]![1]).toBe('Demorazine free base (no salt; read against, not ranked)');
+    expect(rows[2]![0]).toBe(1);
+  });
+
+  it('carries the separation line, its details and the notes after the table, before the cautions', () => {
+    const csv = sheetToCsv(withExtras());
+    const sep = csv.indexOf('What separates the candidates: The order rests on tablet mass.');
+    expect(sep).toBeGreaterThan(0);
+    expect(csv).toContain('Same for every candidate: gastric D₀.');
+    expect(csv).toContain('Note: salt solubility without a measurement: model estimate');
+    expect(csv.indexOf(CAUTION_LINES[0]!)).toBeGreaterThan(sep);
   });
 });

@@ -209,6 +209,11 @@ function measuredChoice(
       },
       'measured',
       [],
+      {
+        limitedBy: used.limitedBy,
+        impliedS0MgPerMl: found.impliedS0?.mgPerMl ?? null,
+        temperatureAdjustment: tWords ?? null,
+      },
     ),
     benchSolubility: {
       limitedBy: used.limitedBy,

@@ -1,9 +1,11 @@
-import { phSolubilityProfile, type PhProfile } from '../ph-profile';
+import { phSolubilityProfile, solubilityAtPh, type PhProfile } from '../ph-profile';
+import { doseNumber } from '../dose-number';
+import type { HydrochlorideReference, ScreenMedium } from './media';
 import { gridFromPoints } from '../ph-grid-solubility';
 import { screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import { freeFormPoorlySolubleFlag } from './screen-reasons';
-import type { FreeFormResult, ScreenFlag } from './screen.types';
+import type { FreeFormResult, MediumResult, ScreenFlag } from './screen.types';
 
 /** The free form on its own: its pH–solubility profile, dose numbers across ICH M9 pH and its flag. */
 export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; profile: PhProfile } {
@@ -26,7 +28,51 @@ export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; pr
     doseNumbers: doses,
     worst,
     solubilityClass: solubilityClassOf(worst),
+    gastric: null,
     flags,
   };
   return { result, profile };
+}
+
+/**
+ * The free form in the gastric medium, read against the salts: a base dissolves there as its cation,
+ * and when a 1:1 hydrochloride is among the candidates, gastric chloride can precipitate it (the same
+ * check every salt gets, media.ts).
+ */
+export function freeFormGastric(
+  ctx: ScreenContext,
+  gastric: ScreenMedium | undefined,
+  hcl: HydrochlorideReference | null,
+): MediumResult | null {
+  if (!gastric) return null;
+  const logS0 = ctx.log10IntrinsicM.value;
+  const activity =
+    ctx.activity?.model === 'davies'
+      ? { ...ctx.activity, backgroundIonicStrengthM: gastric.ionicStrengthM }
+      : ctx.activity;
+  const own = solubilityAtPh(ctx.drug, logS0, null, gastric.pH, { activity });
+  let solubilityM = own.solubilityM;
+  let convertsTo: string | null = null;
+  const chlorideM = gastric.ions.chloride ?? 0;
+  if (hcl && chlorideM > 0) {
+    const h = solubilityAtPh(ctx.drug, logS0, hcl.salt, gastric.pH, {
+      activity,
+      commonIonM: chlorideM,
+    });
+    if (h.solid === 'salt' && h.solubilityM < solubilityM) {
+      solubilityM = h.solubilityM;
+      convertsTo = hcl.cand.stoichiometry.label ?? 'hydrochloride';
+    }
+  }
+  const mg = freeFormMgPerMl(ctx, solubilityM);
+  return {
+    id: gastric.id,
+    label: gastric.label,
+    pH: gastric.pH,
+    commonIonM: 0,
+    solubilityMgPerMl: mg,
+    doseNumber: ctx.doseMg === null ? null : doseNumber(ctx.doseMg, mg),
+    solid: convertsTo ? 'salt' : 'free-form',
+    convertsTo,
+  };
 }

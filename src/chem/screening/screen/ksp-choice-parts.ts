@@ -1,6 +1,7 @@
 import type { Estimate } from '../../result';
 import type { PreparedCandidate } from './prepare-candidate';
 import type { ScreenContext } from './screen-context';
+import { saltSolubilityBasis, type BenchReadingFields } from './salt-water-basis';
 import type { BenchSolubilityUse, Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
 
 /** The K_sp a candidate is screened with, where it came from, and what is said about it. */
@@ -31,13 +32,16 @@ export function saltWaterOf(
   log10DrugM: Estimate,
   origin: SaltWaterSolubility['origin'],
   drivers: SaltWaterSolubility['drivers'],
+  bench?: BenchReadingFields,
 ): SaltWaterSolubility {
   const drugM = 10 ** log10DrugM.value;
+  const anchorDecades = ctx.settings.saltAnchorLog10;
   return {
     log10DrugM,
     mgPerMlAsSalt: (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol,
     mgPerMlAsFreeForm: drugM * ctx.freeFormMolarMassGPerMol,
     origin,
     drivers,
+    basis: saltSolubilityBasis({ origin, log10DrugM }, { anchorDecades, bench }),
   };
 }

@@ -137,7 +137,7 @@ function estimatedChoice(
     saltLog10Sigma: Math.sqrt(Math.max(0, sigma ** 2 - log10IntrinsicSigma ** 2)),
     anchored: true,
     reasons: [saltWaterReason(saltWater), ...enthalpyReasons],
-    flags: [estimatedKspFlag(sigma)],
+    flags: [estimatedKspFlag(sigma, saltWater.basis)],
     saltWater,
     benchSolubility: null,
   };

@@ -1,6 +1,7 @@
 import type { SolubilityDriverId } from '../salt-solubility/estimate-salt-solubility';
 import { fmt } from './screen-reasons';
 import type { Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
+import { basisShortWords, basisWords } from './salt-water-basis';
 
 /**
  * The words for the salt's own solubility in water (the salt-solubility estimate): what drives it,
@@ -32,18 +33,8 @@ export const SALT_WATER_ORIGIN_LABELS: Record<SaltWaterSolubility['origin'], str
   model: 'model',
   'model+fusion': 'model + fusion data',
   measured: 'measured',
-  anchor: 'anchor 10² × S₀',
+  anchor: 'anchor on S₀',
 };
-
-/** The same in a sentence: what the number rests on. */
-export const SALT_WATER_ORIGIN_BASIS: Record<SaltWaterSolubility['origin'], string> = {
-  model: 'model estimate from published salt series, ±1σ from leaving whole drugs out',
-  'model+fusion': 'model estimate shifted by your melting data (Schröder–van Laar)',
-  measured: 'your measured solubility of this salt',
-  anchor: 'common-practice anchor 10² × S₀ (no descriptors for this counter-ion)',
-};
-
-const ORIGIN_WORDS = SALT_WATER_ORIGIN_BASIS;
 
 /** The drivers in words with their signed size, e.g. "hydrophobic counter-ion (−0.6)". */
 export function driverWords(drivers: SaltWaterSolubility['drivers']): string {
@@ -61,7 +52,7 @@ export function saltWaterReason(s: SaltWaterSolubility): Reason {
   return {
     kind: s.origin === 'measured' ? 'measured' : 'note',
     criterion: 'solubility',
-    text: `salt in water: ${fmt(s.mgPerMlAsSalt)} mg/mL as salt (${ORIGIN_WORDS[s.origin]}, ±${s.log10DrugM.uncertainty.toFixed(1)} decades)${drivers}`,
+    text: `salt in water: ${fmt(s.mgPerMlAsSalt)} mg/mL as salt (${basisShortWords(s.basis)}, ±${s.log10DrugM.uncertainty.toFixed(1)} decades)${drivers}`,
   };
 }
 
@@ -79,6 +70,6 @@ export function poorlySolubleFlag(s: SaltWaterSolubility, doseNumberInWater: num
   return {
     id: 'likely-poorly-soluble',
     text: `likely poorly soluble salt: ${fmt(s.mgPerMlAsFreeForm)} mg/mL in water as free form, D₀ ${fmt(doseNumberInWater)}${why}`,
-    rule: `the salt's own solubility in water (${ORIGIN_WORDS[s.origin]}) below the highest dose in 250 mL, the ICH M9 (2019) volume (D₀ > 1)`,
+    rule: `the salt's own solubility in water (${basisWords(s.basis)}) below the highest dose in 250 mL, the ICH M9 (2019) volume (D₀ > 1)`,
   };
 }

@@ -7,7 +7,7 @@ import {
   prepareCandidate,
   referenceSolutionEnthalpyPerDrugKJ,
 } from './prepare-candidate';
-import { screenFreeForm } from './free-form';
+import { freeFormGastric, screenFreeForm } from './free-form';
 import { screenContext } from './screen-context';
 import { rowLabel } from './screen-reasons';
 import { screenAssumptions } from './screen-notes';
@@ -70,12 +70,16 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     compoundName: c.name,
     drugKind: c.kind,
     settings,
-    freeForm: freeForm.result,
+    freeForm: { ...freeForm.result, gastric: freeFormGastric(ctx, media[0], hcl) },
     rows,
     robustnessShared: shared,
     assumptions: [
       ...freeForm.profile.assumptions,
-      ...screenAssumptions(kelvinToCelsius(ctx.temperatureK), hcl !== null),
+      ...screenAssumptions(
+        kelvinToCelsius(ctx.temperatureK),
+        hcl !== null,
+        rows.flatMap((r) => (r.saltWaterSolubility ? [r.saltWaterSolubility.basis] : [])),
+      ),
       microenvironmentAssumption(settings),
     ],
     cautions: SCREENING_CAUTIONS,

@@ -10,6 +10,7 @@ import type {
   ScreenFlag,
   ScreeningCounterIon,
 } from './screen.types';
+import { basisWords, type SaltSolubilityBasis } from './salt-water-basis';
 
 /**
  * The words of the screen: every reason, flag, note and assumption it writes, built from numbers the
@@ -110,11 +111,11 @@ export function measuredKspReason(saltSolubilityMgPerMl: number): Reason {
   };
 }
 
-export function estimatedKspFlag(saltLog10Sigma: number): ScreenFlag {
+export function estimatedKspFlag(saltLog10Sigma: number, basis: SaltSolubilityBasis): ScreenFlag {
   return {
     id: 'estimated-ksp',
     text: `K_sp estimated (±${saltLog10Sigma.toFixed(1)} decades in salt solubility), not measured`,
-    rule: 'Saltsmith K_sp estimate: salt-limited solubility anchored 10²× above S₀ (common practice) with a relative thermochemical shift',
+    rule: `K_sp from the salt's estimated solubility in water, fully ionised: ${basisWords(basis)}`,
   };
 }
 

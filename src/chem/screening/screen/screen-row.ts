@@ -31,6 +31,7 @@ import {
   worstSolubilityReason,
 } from './screen-reasons';
 import { poorlySolubleFlag } from './salt-water-words';
+import { solutionEnthalpyShown } from './solution-enthalpy-shown';
 import type { Reason, ScreenFlag, ScreeningCandidate, ScreenRow } from './screen.types';
 
 /** ΔpKa against each of the counter-ion's pKa values, from the drug's pKa that forms the salt. */
@@ -195,6 +196,11 @@ export function candidateRow(
     media: mediaResults,
     disproportionation: disp,
     excipientRisks: micro.excipientRisks,
+    solutionEnthalpyPerDrugIon: solutionEnthalpyShown(
+      p.solutionEnthalpyKJ,
+      st.drugPerSalt,
+      p.solutionEnthalpyOrigin,
+    ),
     measured,
     flags,
     reasons,
@@ -252,6 +258,7 @@ export function errorRow(cand: ScreeningCandidate, label: string, error: string)
     media: [],
     disproportionation: null,
     excipientRisks: [],
+    solutionEnthalpyPerDrugIon: null,
     measured: null,
     flags: [],
     reasons: [notScreenedReason(error)],

@@ -8,6 +8,8 @@ import type { CriterionInputs } from '../ranking';
 import type { ScreeningSettings } from '../settings';
 import type { CounterIonDescriptors } from '../salt-solubility/counter-ion-descriptors';
 import type { SolubilityDriver } from '../salt-solubility/estimate-salt-solubility';
+import type { SaltSolubilityBasis } from './salt-water-basis';
+import type { SolutionEnthalpyShown } from './solution-enthalpy-shown';
 
 /**
  * The shapes the screen reads and returns. Inputs are structural subsets of the library's CounterIon,
@@ -142,7 +144,7 @@ export interface SaltWaterSolubility {
   mgPerMlAsFreeForm: number;
   /**
    * Where it comes from: the calibrated model, the model with the bench's fusion data, the lab's
-   * measurement, or the common-practice anchor (10² × S₀) when the counter-ion has no descriptors.
+   * measurement, or the common-practice anchor on S₀ when the counter-ion has no descriptors.
    */
   origin: 'model' | 'model+fusion' | 'measured' | 'anchor';
   /** Counter-ion properties that moved the model's estimate, largest first (empty when measured). */
@@ -155,6 +157,8 @@ export interface SaltWaterSolubility {
   withinLog10Sd?: number;
   /** Counter-ion descriptors outside the model's training range, in words (empty or absent inside it). */
   outsideTrainingRange?: string[];
+  /** What the number rests on, as data: every explanation of it is written from this (salt-water-basis.ts). */
+  basis: SaltSolubilityBasis;
 }
 
 /** Which solid limited a measured solubility (bench-solubility.ts): the salt, the free form, or undecided. */
@@ -244,6 +248,8 @@ export interface ScreenRow {
   disproportionation: DisproportionationResult | null;
   /** The salt against each chosen excipient (the salt × excipient matrix row); empty without any. */
   excipientRisks: ExcipientRisk[];
+  /** ΔH_sol per drug ion as every area shows it, with its plausibility verdict (null without one). */
+  solutionEnthalpyPerDrugIon: SolutionEnthalpyShown | null;
   measured: InterpretedMeasurements | null;
   flags: ScreenFlag[];
   reasons: Reason[];
@@ -262,6 +268,8 @@ export interface FreeFormResult {
   doseNumbers: DoseNumberAt[];
   worst: DoseNumberAt | null;
   solubilityClass: 'high' | 'low' | null;
+  /** The free form in the gastric medium (the hydrochloride may limit it, as for every salt). */
+  gastric: MediumResult | null;
   flags: ScreenFlag[];
 }
 

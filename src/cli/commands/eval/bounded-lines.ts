@@ -1,14 +1,19 @@
 import type { Readable } from 'node:stream';
+import { decodeUtf8Strict, StrictJsonError } from '@/chem';
 
 /** Longest request line `eval` reads, bytes (1 MiB): a longer line gets an error and is skipped. */
 export const MAX_LINE_BYTES = 1024 * 1024;
-/** Deepest nesting of arrays and objects in one request line. */
+/** Deepest nesting of arrays and objects in one request line (common practice). */
 export const MAX_JSON_DEPTH = 64;
 
-/** One input line: its text, or its length when it was longer than the limit (its text is dropped). */
-export type InputLine = { lineNo: number; text: string } | { lineNo: number; tooLongBytes: number };
-
-const decoder = new TextDecoder('utf-8');
+/**
+ * One input line: its text; or its length when it was longer than the limit (its text is dropped); or
+ * the refusal of its bytes when they are not valid UTF-8 (never replaced by U+FFFD).
+ */
+export type InputLine =
+  | { lineNo: number; text: string }
+  | { lineNo: number; tooLongBytes: number }
+  | { lineNo: number; invalid: StrictJsonError };
 
 /**
  * Split a byte stream into lines (LF or CRLF) without ever holding more than `maxBytes` of one line:
@@ -27,7 +32,13 @@ export async function* boundedLines(
   const finish = (): InputLine => {
     lineNo++;
     if (overflow) return { lineNo, tooLongBytes: size };
-    let text = decoder.decode(parts.length === 1 ? parts[0]! : Buffer.concat(parts));
+    let text: string;
+    try {
+      text = decodeUtf8Strict(parts.length === 1 ? parts[0]! : Buffer.concat(parts), 'line');
+    } catch (err) {
+      if (err instanceof StrictJsonError) return { lineNo, invalid: err };
+      throw err;
+    }
     if (text.endsWith('\r')) text = text.slice(0, -1);
     return { lineNo, text };
   };
@@ -53,30 +64,4 @@ export async function* boundedLines(
     }
   }
   if (size > 0) yield finish();
-}
-
-/**
- * Nesting depth of arrays and objects in JSON text (strings skipped), counted without parsing; stops
- * counting once `limit` is passed and returns limit + 1.
- */
-export function jsonNestingDepth(text: string, limit = MAX_JSON_DEPTH): number {
-  let depth = 0;
-  let max = 0;
-  let inString = false;
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
-    if (inString) {
-      if (c === 92)
-        i++; // backslash: skip the escaped character
-      else if (c === 34) inString = false;
-    } else if (c === 34) inString = true;
-    else if (c === 123 || c === 91) {
-      depth++;
-      if (depth > max) {
-        max = depth;
-        if (max > limit) return limit + 1;
-      }
-    } else if (c === 125 || c === 93) depth--;
-  }
-  return max;
 }

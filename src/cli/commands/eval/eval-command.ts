@@ -3,7 +3,8 @@ import { HELP_FLAG_SPEC, helpRequested } from '../../args/help';
 import { COMMAND_USAGE } from '../../command-usage';
 import { parseFlags } from '../../args/parse-flags';
 import { writeLine, writeText, type CliCommand } from '../../io';
-import { boundedLines, jsonNestingDepth, MAX_JSON_DEPTH, MAX_LINE_BYTES } from './bounded-lines';
+import { parseStrictJson, StrictJsonError } from '@/chem';
+import { boundedLines, MAX_JSON_DEPTH, MAX_LINE_BYTES } from './bounded-lines';
 import { describeError, evalRegistry, evaluateRequest, type LineError } from './registry';
 
 /**
@@ -11,7 +12,8 @@ import { describeError, evalRegistry, evaluateRequest, type LineError } from './
  *
  * Every request has a `"kind"` (see registry.ts and built-in-kinds.ts). A line that fails gets
  * `{"line": n, "ok": false, "error": {...}}` and the run goes on; the exit status is 1 if any line
- * failed. Lines longer than 1 MiB or nested deeper than 64 levels are refused line by line. Output waits
+ * failed. Every line is read by the core's strict JSON reader: lines longer than 1 MiB, not valid
+ * UTF-8, nested deeper than 64 levels or naming a key twice are refused line by line. Output waits
  * for a slow reader.
  */
 
@@ -26,6 +28,14 @@ function echoId(value: unknown): string | number | undefined {
   return undefined;
 }
 
+/** A refusal by the JSON reader as an error object: the field is the key path where it happened. */
+const jsonError = (err: StrictJsonError): LineError => ({
+  type: 'json',
+  field: err.field,
+  message: err.message,
+  accepted: err.accepted,
+});
+
 const failure = (line: number, error: LineError, id?: string | number) =>
   JSON.stringify({ line, ...(id !== undefined ? { id } : {}), ok: false, error });
 
@@ -34,29 +44,17 @@ export async function answerLine(
   lineNo: number,
   text: string,
 ): Promise<{ json: string; ok: boolean }> {
-  if (jsonNestingDepth(text) > MAX_JSON_DEPTH) {
-    return {
-      ok: false,
-      json: failure(lineNo, {
-        type: 'json',
-        field: 'line',
-        message: `nested deeper than ${MAX_JSON_DEPTH} levels`,
-        accepted: `JSON nested at most ${MAX_JSON_DEPTH} levels deep`,
-      }),
-    };
-  }
   let value: unknown;
   try {
-    value = JSON.parse(text);
+    // The one JSON reader: a key twice, nesting deeper than 64, __proto__ are refused here.
+    value = parseStrictJson(text, {
+      maxBytes: MAX_LINE_BYTES,
+      maxDepth: MAX_JSON_DEPTH,
+      field: 'line',
+    });
   } catch (err) {
-    return {
-      ok: false,
-      json: failure(lineNo, {
-        type: 'json',
-        field: 'line',
-        message: `not valid JSON: ${err instanceof Error ? err.message : String(err)}`,
-      }),
-    };
+    if (!(err instanceof StrictJsonError)) throw err;
+    return { ok: false, json: failure(lineNo, jsonError(err)) };
   }
   const id = echoId(value);
   try {
@@ -84,7 +82,10 @@ export const evalCommand: CliCommand = defineCommand('eval', {
     let failed = 0;
     for await (const line of boundedLines(io.stdin, MAX_LINE_BYTES)) {
       let json: string;
-      if ('tooLongBytes' in line) {
+      if ('invalid' in line) {
+        failed++;
+        json = failure(line.lineNo, jsonError(line.invalid));
+      } else if ('tooLongBytes' in line) {
         failed++;
         json = failure(line.lineNo, {
           type: 'json',

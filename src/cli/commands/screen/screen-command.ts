@@ -1,10 +1,11 @@
-import { readFile } from 'node:fs/promises';
 import { ChemInputError } from '@/chem';
 import { defineCommand } from '../../define-command';
 import { helpRequested } from '../../args/help';
 import { COMMAND_USAGE } from '../../command-usage';
 import { parseFlags } from '../../args/parse-flags';
 import { writeFileAtomic } from '../../output/atomic-write';
+import { checkRunFiles } from '../../output/output-target';
+import { readJsonFile } from '../../input/read-json-file';
 import { writeLine, writeText, type CliCommand } from '../../io';
 import { runBatch } from './batch/run-batch';
 import {
@@ -57,26 +58,8 @@ export function specFromFlags(flags: ScreenFlags, file: CompoundFile): CompoundS
 }
 
 async function readCompoundFile(path: string): Promise<CompoundFile> {
-  let text: string;
-  try {
-    text = await readFile(path, 'utf8');
-  } catch (err) {
-    throw new ChemInputError(
-      '--input',
-      `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
-      'a readable JSON file',
-    );
-  }
-  let json: unknown;
-  try {
-    json = JSON.parse(text);
-  } catch {
-    throw new ChemInputError(
-      '--input',
-      `${path} is not valid JSON`,
-      'a JSON object with the compound fields',
-    );
-  }
+  // Size-capped before reading, then the core's strict JSON reader (read-json-file.ts).
+  const json = await readJsonFile(path, { flag: '--input' });
   const r = compoundFileSchema.safeParse(json);
   if (!r.success) {
     const i = r.error.issues[0]!;
@@ -97,6 +80,11 @@ export const screenCommand: CliCommand = defineCommand('screen', {
     if (helpRequested(flags, io, SCREEN_USAGE)) return 0;
     refuseContradictions(flags);
     if (flags.batch !== undefined) return runBatch(flags, io);
+    // The output is checked before the work: never the --input file, a folder or a device.
+    const [out] = await checkRunFiles({
+      inputs: [{ flag: '--input', path: flags.input }],
+      outputs: [{ flag: '--out', path: flags.out }],
+    });
     const file = flags.input !== undefined ? await readCompoundFile(flags.input) : {};
     const prepared = await prepareScreen(specFromFlags(flags, file), {
       settings: settingsFromFlags(flags, file.settings),
@@ -117,9 +105,9 @@ export const screenCommand: CliCommand = defineCommand('screen', {
             { iterations, seed },
             measureNextEntries(res, prepared.settings.weights, { iterations, seed }),
           )
-        : screenCsv(table, prepared.skipped);
-    if (flags.out !== undefined) {
-      await writeFileAtomic(flags.out, text + '\n');
+        : screenCsv(table, prepared.skipped, res);
+    if (out !== undefined) {
+      await writeFileAtomic(out, text + '\n');
       writeLine(io.stderr, `wrote ${table.length} candidates to ${flags.out}`);
     } else await writeText(io.stdout, text + '\n');
     return 0;

@@ -232,7 +232,15 @@ export async function prepareScreen(
     { skipped, keepCocrystalBand: opts.keepCocrystalBand, bands: settings.deltaPkaBands },
   );
   const candidates = withExtras(libraryCandidates, custom.descriptors, opts.bench ?? {});
-  return { compound, drugIon: di, candidates, settings, skipped };
+  return {
+    compound,
+    drugIon: di,
+    candidates,
+    settings,
+    skipped,
+    freeFormFormula: formula,
+    customIons: custom.ions,
+  };
 }
 
 export type PreparedScreen = Awaited<ReturnType<typeof prepareScreen>>;

@@ -60,6 +60,14 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       worst_dose_number: sig(row.worst?.doseNumber),
       ich_m9_class: row.solubilityClass ?? '',
       disproportionation: row.disproportionation?.risk ?? '',
+      // ΔH_sol per mole of drug ion, as every area shows it; empty when not informative (the reason says why).
+      solution_enthalpy_kj_per_mol_drug_ion: row.solutionEnthalpyPerDrugIon?.notInformative
+        ? ''
+        : sig(row.solutionEnthalpyPerDrugIon?.valueKJPerMolDrugIon),
+      solution_enthalpy_kj_per_mol_drug_ion_sd: row.solutionEnthalpyPerDrugIon?.notInformative
+        ? ''
+        : sig(row.solutionEnthalpyPerDrugIon?.sigmaKJPerMolDrugIon, 2),
+      solution_enthalpy_not_informative: row.solutionEnthalpyPerDrugIon?.notInformative ?? '',
       flags: row.flags.map((f) => f.text).join('; '),
       reasons: row.reasons.map((r) => r.text).join('; '),
       error: row.error ?? '',

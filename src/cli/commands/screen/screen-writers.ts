@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { safeCsvCell, type ScreenResult } from '@/chem';
+import { safeCsvCell, separationSummary, type ScreenResult } from '@/chem';
 import { SCREENING_CAUTIONS } from '../../output/cautions';
 import type { ScreenTableRow } from './screen-table';
 import type { MeasureNextEntry } from './screen-measure-next';
@@ -20,10 +20,28 @@ export const skippedNote = (skipped: Skipped) =>
     ? `Left out (ΔpKa in the cocrystal band, Cruz-Cabeza 2012; --keep-cocrystal-band keeps them): ${skipped.map((x) => `${x.label} ΔpKa ${x.deltaPka.toFixed(1)}`).join('; ')}`
     : '';
 
-export function screenCsv(table: readonly ScreenTableRow[], skipped: Skipped): string {
+/**
+ * The notes a screen's CSV closes with, from the screen itself: what separates the candidates (the
+ * core's separationSummary, the same line the app and the sheet show) and the assumptions, which
+ * name the salt-solubility basis each row actually used.
+ */
+export function screenNotes(res: ScreenResult): string[] {
+  const sep = separationSummary(res, res.settings.weights);
+  return [
+    ...(sep ? [`What separates the candidates: ${sep.headline}`, ...sep.details] : []),
+    ...res.assumptions.map((a) => `Assumption: ${a}`),
+  ];
+}
+
+export function screenCsv(
+  table: readonly ScreenTableRow[],
+  skipped: Skipped,
+  res?: ScreenResult,
+): string {
   const csv = Papa.unparse(table.map(safeRow), { newline: '\n' });
   const note = skippedNote(skipped);
-  return `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# ${KSP_NOTE}${note ? `\n# ${note}` : ''}`;
+  const notes = res ? screenNotes(res).map((n) => `\n# ${n}`) : [];
+  return `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# ${KSP_NOTE}${note ? `\n# ${note}` : ''}${notes.join('')}`;
 }
 
 export function screenJson(
@@ -54,7 +72,9 @@ export function screenJson(
         solubility: 'mg/mL free-form equivalents',
         doseNumber: 'dose / 250 mL / solubility',
         ksp: 'log10, (mol/L)^(m+n)',
+        solutionEnthalpy: 'kJ per mol of drug ion',
       },
+      separation: separationSummary(res, res.settings.weights),
       assumptions: res.assumptions,
       rows: table,
       ...(measureNext ? { measure_next: measureNext } : {}),

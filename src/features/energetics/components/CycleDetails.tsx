@@ -1,4 +1,4 @@
-import { latticeFromSolutionEnthalpy, type SaltThermoResult } from '@/chem';
+import { formatWithUncertainty, latticeFromSolutionEnthalpy, type SaltThermoResult } from '@/chem';
 import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/compute-screening';
 import { sourcesOf } from '../energetics-model';
 import { kj, labelOf } from './energetics-labels';
@@ -14,6 +14,9 @@ export function CycleDetails({
   measured: number | null;
 }) {
   const t = e.thermo;
+  const screened = data.screen.rows.find((r) => r.id === e.candidateId);
+  const perDrug = screened?.solutionEnthalpyPerDrugIon ?? null;
+  const drugIons = screened?.drugPerSalt ?? 1;
   let backed: { value: number; uncertainty: number } | null = null;
   let backedError: string | null = null;
   if (measured !== null) {
@@ -77,6 +80,30 @@ export function CycleDetails({
               <td className="method">{est.method}</td>
             </tr>
           ))}
+          {perDrug ? (
+            <tr>
+              <th scope="row">
+                ΔH_sol per drug ion
+                <div className="muted small-note">
+                  ÷ {drugIons}, as the Ranking, the sheet and the CSV show it
+                </div>
+              </th>
+              <td
+                className={perDrug.notInformative ? 'muted not-informative' : undefined}
+                title={perDrug.notInformative ?? undefined}
+              >
+                {perDrug.notInformative
+                  ? 'not informative'
+                  : perDrug.sigmaKJPerMolDrugIon !== null
+                    ? formatWithUncertainty(
+                        perDrug.valueKJPerMolDrugIon,
+                        perDrug.sigmaKJPerMolDrugIon,
+                      )
+                    : kj(perDrug.valueKJPerMolDrugIon)}
+              </td>
+              <td className="method">{perDrug.notInformative ?? perDrug.basis}</td>
+            </tr>
+          ) : null}
           {measured !== null ? (
             <tr>
               <th scope="row">

@@ -1,7 +1,8 @@
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from 'react';
-import { rankCandidates, screeningWeightsSchema } from '@/chem';
+import { rankCandidates, screeningWeightsSchema, separationSummary } from '@/chem';
 import { CAUTION_LINES } from '@/components/Cautions';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
+import { ScreenOutcomesPanel } from '@/components/ScreenOutcomesPanel';
 import type { ProjectRecord } from '@/persistence/records';
 import { useProjectScreening } from '@/screening-data/use-screening';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
@@ -15,7 +16,8 @@ import {
 import { useWeights } from '../hooks/use-weights';
 import { BufferMedia } from './BufferMedia';
 import { ExcipientMatrix } from './ExcipientMatrix';
-import { displayRows } from '../ranking-rows';
+import { displayRows, freeFormShown } from '../ranking-rows';
+import { SeparationLine } from './SeparationLine';
 import { RankingTable } from './RankingTable';
 import { ScreeningConditions } from './ScreeningConditions';
 import { SolubilityPanel } from './SolubilityPanel';
@@ -136,6 +138,14 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   );
   const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
   const deferredWeights = useDeferredValue(weights);
+  const separation = useMemo(
+    () => (data ? separationSummary(data.screen, deferredWeights) : null),
+    [data, deferredWeights],
+  );
+  const freeForm = useMemo(
+    () => (data ? freeFormShown(data, project.compound.name, project.compound.doseMg) : null),
+    [data, project.compound.name, project.compound.doseMg],
+  );
   const [settleTick, setSettleTick] = useState(0);
   const onSettle = useCallback(() => setSettleTick((t) => t + 1), []);
   // A movement also ends when the weights stand still for a moment (a reset, another tab, no `change`).
@@ -198,6 +208,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
           </span>
         </header>
         <RankingCautions />
+        <ScreenOutcomesPanel project={project} />
         {screening.status === 'error' ? (
           <div role="alert" className="screen-error">
             <p>
@@ -234,6 +245,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
               number D₀ = (dose / 250 mL) / solubility; above 1 the dose does not dissolve (ICH M9).
               ±1σ ranges come from each estimate’s stated uncertainty.
             </p>
+            <SeparationLine summary={separation} />
             <div className="ranking-grid">
               <WeightSliders
                 weights={weights}
@@ -241,7 +253,12 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
                 onReset={() => (setWeights(screeningWeightsSchema.parse({})), onSettle())}
                 onSettle={onSettle}
               />
-              <RankingTable rows={rows} onFocus={onFocus} settleTick={settleTick} />
+              <RankingTable
+                rows={rows}
+                onFocus={onFocus}
+                settleTick={settleTick}
+                freeForm={freeForm}
+              />
             </div>
           </>
         ) : null}

@@ -1,12 +1,14 @@
 import { memo, useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { sig } from '@/components/charts/chart-format';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import { sortRows, type DisplayRow } from '../ranking-rows';
+import { formatWithUncertainty } from '@/chem';
+import { sortRows, type DisplayRow, type FreeFormShown } from '../ranking-rows';
+import { FreeFormRow } from './FreeFormRow';
+import { SolutionEnthalpyCell } from './SolutionEnthalpyCell';
 import { DoseCell, Origin, ScoreBar, Sortable } from './RankingCells';
 import { SaltWaterCell } from './SaltWaterCell';
 
 const minus = (s: string) => s.replace(/^-/, '−');
-
 /** Cells that depend on the screen only, not on the weights: re-rendered only when the screen changes. */
 const sameScreenRow = (a: { r: DisplayRow }, b: { r: DisplayRow }) =>
   a.r.row === b.r.row && a.r.label === b.r.label;
@@ -62,7 +64,9 @@ const FixedCells = memo(
         />
         {r.phMax ? (
           <td>
-            {r.phMax.value.toFixed(1)} <span className="range">± {r.phMax.sigma?.toFixed(1)}</span>{' '}
+            {r.phMax.sigma !== undefined
+              ? formatWithUncertainty(r.phMax.value, r.phMax.sigma)
+              : r.phMax.value.toFixed(1)}{' '}
             <Origin n={r.phMax} />
           </td>
         ) : (
@@ -70,17 +74,7 @@ const FixedCells = memo(
         )}
         <DoseCell d={r.worstDose} />
         <DoseCell d={r.gastricDose} />
-        {r.solutionEnthalpy ? (
-          <td>
-            {minus(r.solutionEnthalpy.value.toFixed(0))}
-            {r.solutionEnthalpy.sigma !== undefined ? (
-              <span className="range"> ± {r.solutionEnthalpy.sigma.toFixed(0)}</span>
-            ) : null}{' '}
-            <Origin n={r.solutionEnthalpy} />
-          </td>
-        ) : (
-          <td className="muted">—</td>
-        )}
+        <SolutionEnthalpyCell h={r.solutionEnthalpy} />
         <td>
           {(r.activeFraction * 100).toFixed(0)} %
           {r.saltMassPerDoseMg !== null ? (
@@ -147,8 +141,11 @@ export const RankingTable = memo(function RankingTableView({
   rows,
   onFocus,
   settleTick,
+  freeForm,
 }: {
   rows: DisplayRow[];
+  /** The free form as a row of the same columns, not ranked (read against). */
+  freeForm?: FreeFormShown | null;
   onFocus?: (id: string) => void;
   /** Changes when a weight movement ends: the document order catches up with the shown order. */
   settleTick?: number;
@@ -235,8 +232,8 @@ export const RankingTable = memo(function RankingTableView({
     <div className="table-scroll">
       <table className="data-table ranking-table">
         <caption className="sr-only">
-          Ranked candidates. Columns: rank, candidate, score, ΔpKa, salt in water, pH_max, dose
-          numbers, enthalpy of solution, active fraction, flags and reasons.
+          Ranked candidates, read against the free form (not ranked): rank, score, ΔpKa, salt in
+          water, pH_max, dose numbers, ΔH_sol per drug ion, active fraction, flags and reasons.
         </caption>
         <thead>
           <tr>
@@ -267,8 +264,11 @@ export const RankingTable = memo(function RankingTableView({
             >
               Gastric D₀
             </Sortable>
-            <Sortable k="solutionEnthalpy" title="ΔH_sol per formula unit, infinite dilution">
-              ΔH_sol (kJ/mol)
+            <Sortable
+              k="solutionEnthalpy"
+              title="ΔH_sol per mole of drug ion (formula unit ÷ drug ions), infinite dilution"
+            >
+              ΔH_sol (kJ/mol per drug ion)
             </Sortable>
             <Sortable k="activeFraction" title="Mass fraction of free form in the salt">
               Active fraction
@@ -276,6 +276,7 @@ export const RankingTable = memo(function RankingTableView({
             <th scope="col">Flags and reasons</th>
           </tr>
         </thead>
+        {freeForm ? <FreeFormRow f={freeForm} /> : null}
         <tbody ref={body}>
           {docRows.map((r) => (
             <tr key={r.id} className={r.row.error ? 'row-error' : undefined}>

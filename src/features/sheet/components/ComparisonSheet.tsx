@@ -1,7 +1,7 @@
 import { CAUTION_LINES } from '@/components/Cautions';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
-import { ORIGIN_MARK, cellText, formatValue } from '../sheet-format';
+import { ORIGIN_MARK, cellNumber, cellText, formatValue } from '../sheet-format';
 import { SheetExcipients } from './SheetExcipients';
 import type { SheetColumnGroup, SheetModel, SheetSetting } from '../sheet.types';
 import '../sheet.css';
@@ -75,8 +75,12 @@ function RankedTable({
         </tr>
       </thead>
       <tbody>
-        {model.rows.map((r) => (
-          <tr key={r.id} data-candidate-id={r.id}>
+        {[...(model.freeForm ? [model.freeForm] : []), ...model.rows].map((r) => (
+          <tr
+            key={r.id}
+            data-candidate-id={r.id}
+            className={r === model.freeForm ? 'sheet-free-form' : undefined}
+          >
             <td className="num">{r.rank ?? '—'}</td>
             <th scope="row" className="sheet-candidate">
               {r.label}
@@ -89,7 +93,9 @@ function RankedTable({
                   key={c.key}
                   className={c.kind === 'number' ? 'num' : undefined}
                   data-col={c.key}
-                  data-value={typeof cell?.value === 'number' ? String(cell.value) : undefined}
+                  data-value={
+                    typeof cell?.value === 'number' ? String(cellNumber(cell)) : undefined
+                  }
                 >
                   {cellText(cell)}
                   {origin && cell?.value !== null ? (
@@ -150,6 +156,24 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
 
       <section className="sheet-block" aria-labelledby="sheet-ranking">
         <h2 id="sheet-ranking">Ranked candidates</h2>
+        {model.separation ? (
+          <div className="sheet-separation">
+            <p>
+              <strong>What separates the candidates:</strong> {model.separation.headline}
+            </p>
+            <ul>
+              {model.separation.details.map((d) => (
+                <li key={d}>{d}</li>
+              ))}
+            </ul>
+          </div>
+        ) : null}
+        {model.freeForm ? (
+          <p className="sheet-note">
+            The first row is the free form itself, in the same columns: not ranked, read each salt
+            against it.
+          </p>
+        ) : null}
         {model.rows.length === 0 ? (
           <p>No candidates are shortlisted in this project.</p>
         ) : (

@@ -1,4 +1,5 @@
 import type { ProjectRecord } from '@/persistence/records';
+import { ScreenOutcomesPanel } from '@/components/ScreenOutcomesPanel';
 import { useSheetModel } from '../hooks/use-sheet-model';
 import { useSheetStore } from '../sheet-store';
 import { SheetView } from './SheetView';
@@ -16,6 +17,7 @@ export function SheetContainer({ project }: { project: ProjectRecord }) {
       model={state.status === 'ready' ? (state.model ?? null) : null}
       status={status}
       onClose={close}
+      extra={<ScreenOutcomesPanel project={project} />}
     />
   );
 }

@@ -1,4 +1,4 @@
-import { useEffect } from 'react';
+import { useEffect, type ReactNode } from 'react';
 import { downloadText } from '@/components/download-text';
 import { sheetCsvFileName, sheetToCsv } from '../sheet-csv';
 import type { SheetModel } from '../sheet.types';
@@ -14,8 +14,11 @@ export function SheetView({
   model,
   status,
   onClose,
+  extra,
 }: {
   model: SheetModel | null;
+  /** Blocks other areas add below the sheet (the salt screen's outcomes). */
+  extra?: ReactNode;
   /** Shown instead of the sheet while the ranking is computed or when it failed. */
   status?: string | null;
   onClose: () => void;
@@ -66,7 +69,10 @@ export function SheetView({
         </button>
       </div>
       {model ? (
-        <ComparisonSheet model={model} />
+        <>
+          <ComparisonSheet model={model} />
+          {extra ? <div className="comparison-sheet sheet-extra">{extra}</div> : null}
+        </>
       ) : (
         <p className="comparison-sheet" role="status">
           {status ?? 'Preparing the comparison…'}

@@ -3,11 +3,13 @@ import type { Writable } from 'node:stream';
 import { stat } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import Papa from 'papaparse';
-import { usageError, valueError } from '../../../args/cli-error';
+import { CliError, usageError, valueError } from '../../../args/cli-error';
+import { parseStrictJson } from '@/chem';
 import { openAtomicOutput } from '../../../output/atomic-write';
+import { checkRunFiles, type OutputTarget } from '../../../output/output-target';
 import { SCREENING_CAUTIONS } from '../../../output/cautions';
 import { writeLine, writeText, type CliIo } from '../../../io';
-import { boundedLines, jsonNestingDepth, MAX_JSON_DEPTH } from '../../eval/bounded-lines';
+import { boundedLines, MAX_JSON_DEPTH, MAX_LINE_BYTES } from '../../eval/bounded-lines';
 import { settingsFromBatchFlags } from './batch-settings';
 import type { ScreenFlags } from '../screen-flags';
 import { KSP_NOTE } from '../screen-writers';
@@ -39,15 +41,41 @@ type Sink = {
   abort: () => Promise<void>;
 };
 
-async function openSink(path: string | undefined, stream: Writable): Promise<Sink> {
-  if (path === undefined) {
+async function openSink(target: OutputTarget | undefined, stream: Writable): Promise<Sink> {
+  if (target === undefined) {
     return {
       write: (t) => writeText(stream, t),
       commit: async () => undefined,
       abort: async () => undefined,
     };
   }
-  return openAtomicOutput(path);
+  return openAtomicOutput(target);
+}
+
+/**
+ * The batch's outputs, checked before anything is read or written (never the batch file, never each
+ * other: output-target.ts) and opened; if the second cannot be opened the first is removed.
+ */
+async function openBatchOutputs(path: string, flags: ScreenFlags, stdout: Writable) {
+  const targets = await checkRunFiles({
+    inputs: [{ flag: '--batch', path }],
+    outputs: [
+      { flag: '--out', path: flags.out },
+      { flag: '--errors', path: flags.errors },
+    ],
+  });
+  const errorsTarget = targets.find((x) => x.flag === '--errors');
+  const out = await openSink(
+    targets.find((x) => x.flag === '--out'),
+    stdout,
+  );
+  try {
+    const errors: Sink | null = errorsTarget ? await openAtomicOutput(errorsTarget) : null;
+    return { out, errors };
+  } catch (err) {
+    await out.abort();
+    throw err;
+  }
 }
 
 export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
@@ -61,8 +89,12 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
     );
   let size: number;
   try {
-    size = (await stat(path)).size;
+    const st = await stat(path);
+    if (st.isDirectory())
+      throw valueError('--batch', `${path} is a folder`, 'a .csv or .jsonl file');
+    size = st.size;
   } catch (err) {
+    if (err instanceof CliError) throw err;
     throw valueError(
       '--batch',
       `cannot read ${path} (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
@@ -71,9 +103,9 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
   const outFormat = flags.format ?? 'csv';
   const settings = settingsFromBatchFlags(flags);
   const jobs = flags.jobs ?? availableParallelism();
+  const { out, errors } = await openBatchOutputs(path, flags, io.stdout);
+  // The worker threads start only once every output is open, and are stopped on every way out (below).
   const screener = createScreener(jobs, settings);
-  const out = await openSink(flags.out, io.stdout);
-  const errors = flags.errors !== undefined ? await openAtomicOutput(flags.errors) : null;
   const bar = io.stderrIsTty ? createProgressBar(io.stderr, size) : null;
 
   let header: BatchColumn[] | null = format === 'jsonl' ? [] : null;
@@ -132,13 +164,16 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
   try {
     for await (const line of boundedLines(createReadStream(path), undefined, (n) => (bytes += n))) {
       bar?.update(bytes, compounds);
-      if ('tooLongBytes' in line) {
+      if ('invalid' in line || 'tooLongBytes' in line) {
         pending.set(seq++, {
           lineNo: line.lineNo,
           id: '',
           name: '',
           result: null,
-          error: `line: ${line.tooLongBytes} bytes is longer than 1 MiB`,
+          error:
+            'invalid' in line
+              ? line.invalid.message
+              : `line: ${line.tooLongBytes} bytes is longer than 1 MiB`,
         });
         await flush();
         continue;
@@ -159,15 +194,14 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
             throw valueError('line', `has ${cells.length} cells, the header ${header.length}`);
           raw = Object.fromEntries(header.map((c, i) => [c, cells[i]]));
         } else {
-          if (jsonNestingDepth(text) > MAX_JSON_DEPTH)
-            throw valueError('line', `nested deeper than ${MAX_JSON_DEPTH} levels`);
-          let value: unknown;
-          try {
-            value = JSON.parse(text);
-          } catch {
-            throw valueError('line', 'is not valid JSON');
-          }
-          raw = rowFromJson(value);
+          // The one JSON reader: a key twice, too deep nesting and __proto__ are refused.
+          raw = rowFromJson(
+            parseStrictJson(text, {
+              maxBytes: MAX_LINE_BYTES,
+              maxDepth: MAX_JSON_DEPTH,
+              field: 'line',
+            }),
+          );
         }
         const r = specFromRow(raw, flags['pka-origin'] ?? 'not-stated', flags['s0-origin'] ?? null);
         id = r.id;
@@ -214,6 +248,10 @@ export async function runBatch(flags: ScreenFlags, io: CliIo): Promise<number> {
   } catch (err) {
     await out.abort();
     await errors?.abort();
+    // A read error of the batch file (a disk error, a file removed under us) is one line naming it.
+    const e = err as NodeJS.ErrnoException;
+    if (!(err instanceof CliError) && e.syscall === 'read')
+      throw valueError('--batch', `cannot read ${path} (${e.code ?? e.message})`);
     throw err;
   } finally {
     await screener.close();
