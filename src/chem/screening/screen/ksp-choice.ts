@@ -75,8 +75,11 @@ function estimatedKsp(
       sources: est.log10DrugM.sources,
       notes: ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])],
     };
+    const base = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers);
+    // Melting data that the check did not let shift the estimate are shown beside it, not applied.
+    if (est.fusion && !est.fusion.applied) base.basis = { ...base.basis, fusion: 'shown' };
     const saltWater: SaltWaterSolubility = {
-      ...saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers),
+      ...base,
       sharedLog10Sd: est.sharedLog10Sd,
       withinLog10Sd: est.withinLog10Sd,
       outsideTrainingRange: est.domain.outside,

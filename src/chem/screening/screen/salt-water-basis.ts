@@ -28,7 +28,8 @@ export interface SaltSolubilityBasis {
   /** The anchor behind an estimate for a counter-ion without descriptors (origin anchor). */
   anchor: { decadesAboveS0: number; solutionEnthalpyShift: boolean } | null;
   /** Whether the bench's melting data moved the estimate ('applied'), or none was used. */
-  fusion: 'applied' | 'none';
+  /** 'shown': melting data gave an ideal solubility that is shown beside the estimate, not applied. */
+  fusion: 'applied' | 'shown' | 'none';
   /**
    * What the bench reading says about a measured value (wt/bench's structured fields: which solid
    * limits it, the temperature step). Empty when nothing is known; each entry is one phrase.
