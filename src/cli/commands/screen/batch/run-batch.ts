@@ -55,8 +55,8 @@ async function feedLines(
   let header: BatchColumn[] | null = format === 'jsonl' ? [] : null;
   const seenIds = new Map<string, number>();
   const st = { bytes: 0, compounds: 0, seq: 0, inFlight: 0 };
-  // Bounded memory: at most two chunks per thread in flight, and results held for ordering bounded too.
-  const window = Math.max(4, screener.threads * screener.chunkSize * 2);
+  // Bounded memory: at most four chunks per thread in flight, and results held for ordering bounded too.
+  const window = Math.max(4, screener.threads * screener.chunkSize * 4);
   const collectOne = async () => {
     const { seq: s, result } = await screener.next();
     st.inFlight--;
