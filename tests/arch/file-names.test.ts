@@ -11,7 +11,7 @@ import { describe, expect, it } from 'vitest';
 const ROOT = join(import.meta.dirname, '..', '..');
 const KEBAB = /^[a-z0-9]+(-[a-z0-9]+)*$/;
 const FILE =
-  /^[a-z0-9]+(-[a-z0-9]+)*(\.[a-z0-9]+(-[a-z0-9]+)*)*\.(ts|tsx|mts|mjs|cjs|js|css|json|csv|md|html|txt|svg|png|webmanifest)$/;
+  /^[a-z0-9]+(-[a-z0-9]+)*(\.[a-z0-9]+(-[a-z0-9]+)*)*\.(ts|tsx|mts|mjs|cjs|js|css|json|csv|jsonl|md|html|txt|svg|png|webmanifest)$/;
 const COMPONENT = /^[A-Z][A-Za-z0-9]*\.tsx$/;
 
 export function nameProblems(paths: readonly string[]): string[] {

@@ -10,10 +10,11 @@
 //            process, with the screen's overhead over it as a ratio
 //   cli      `saltsmith lattice --cation Na+ --anion Cl-` wall time, 12 runs (2 warm-up), beside a bare
 //            `node -e 0` start on the same machine
-//   batch    `saltsmith screen --batch` on generated fictional compounds (formula only, whole library),
-//            compounds per second and peak resident memory (GNU time), when the command has --batch; a
-//            size the previous size's rate says would take longer than --batch-max-s is left out, with
-//            its estimated time written down
+//   batch    `saltsmith screen --batch … --top 3` on generated fictional compounds (formula only, whole
+//            library), CSV and JSON Lines: compounds per second, peak resident memory (GNU time), the
+//            load average before each run, and the ratio to the core benchmark's bare closed-form loop
+//            (run `core` too for it); a run the previous rate says would take longer than
+//            --batch-max-s is left out, with its estimated time written down
 //   browser  tests/bench/rerank-browser.mjs: weight slider → re-ranked table painted in Chromium, and
 //            the first screen's gzipped JavaScript of the same build (tests/bench/check-budget.mjs)
 //   measure-next  tests/bench/measure-next.bench.ts (the value-of-information computation for 12
@@ -154,6 +155,7 @@ function runTimed(argv) {
   const memFile = join(work, 'mem.txt');
   const cmd = gnuTime ? '/usr/bin/time' : process.execPath;
   const full = gnuTime ? ['-f', '%M', '-o', memFile, process.execPath, ...argv] : argv;
+  const loadBefore = +loadavg()[0].toFixed(2);
   return new Promise((done, fail) => {
     const t0 = process.hrtime.bigint();
     const child = spawn(cmd, full, { stdio: ['ignore', 'ignore', 'pipe'] });
@@ -169,11 +171,25 @@ function runTimed(argv) {
       done({
         code,
         ms,
+        loadBefore,
         peakMB: peakKB ? +(peakKB / 1024).toFixed(0) : null,
         stderr: err.slice(-2000),
       });
     });
   });
+}
+/**
+ * The batch's rate beside the bare closed-form loop of the core benchmark (the same equations on plain
+ * numbers, one loop = one compound's salts, on one core): compounds per second of each, and their ratio.
+ */
+function batchOverBaseline(batchPerS) {
+  const perLoopMs = summary.results.core?.baseline?.medianMsPerLoop;
+  if (!perLoopMs) return { bareLoopOverBatch: null };
+  const bare = 1000 / perLoopMs;
+  return {
+    bareClosedFormLoopCompoundsPerSecond: +bare.toFixed(0),
+    bareLoopOverBatch: +(bare / batchPerS).toFixed(0),
+  };
 }
 if (!skip.has('batch')) {
   if (!hasBatch()) {
@@ -182,38 +198,49 @@ if (!skip.has('batch')) {
     summary.results.batch = [];
     let rate = null;
     for (const n of batchSizes) {
-      if (rate && n / rate > batchMaxS) {
+      for (const format of ['csv', 'jsonl']) {
+        if (rate && n / rate > batchMaxS) {
+          summary.results.batch.push({
+            compounds: n,
+            format,
+            notRun: `estimated ${Math.round(n / rate)} s at the previous run's ${rate.toFixed(1)} compounds/s, over --batch-max-s ${batchMaxS}`,
+          });
+          continue;
+        }
+        log(`batch of ${n} generated compounds, --top 3, ${format}…`);
+        const file = join(work, `compounds-${n}.csv`);
+        if (!existsSync(file)) writeFileSync(file, fictionalCompounds(n));
+        const out = join(work, `batch-${n}.${format}`);
+        const r = await runTimed([
+          CLI,
+          'screen',
+          '--batch',
+          file,
+          '--top',
+          '3',
+          '--format',
+          format,
+          '--out',
+          out,
+          '--errors',
+          join(work, `errors-${n}.txt`),
+        ]);
+        if (r.code === 0) rate = (n * 1000) / r.ms;
         summary.results.batch.push({
           compounds: n,
-          notRun: `estimated ${Math.round(n / rate)} s at the previous size's ${rate.toFixed(1)} compounds/s, over --batch-max-s ${batchMaxS}`,
+          format,
+          top: 3,
+          jobs: `default (${availableParallelism()} cores)`,
+          loadAverage1mBefore: r.loadBefore,
+          exitCode: r.code,
+          wallMs: +r.ms.toFixed(0),
+          compoundsPerSecond: +((n * 1000) / r.ms).toFixed(1),
+          peakResidentMB: r.peakMB,
+          ...batchOverBaseline((n * 1000) / r.ms),
+          note: 'formula-only fictional compounds against the whole library, --top 3, default settings (no rank-robustness Monte Carlo: a batch runs it only with --iterations), written to a file',
+          ...(r.code !== 0 ? { stderrTail: r.stderr } : {}),
         });
-        continue;
       }
-      log(`batch of ${n} generated compounds…`);
-      const file = join(work, `compounds-${n}.csv`);
-      writeFileSync(file, fictionalCompounds(n));
-      const out = join(work, `batch-${n}.csv`);
-      const r = await runTimed([
-        CLI,
-        'screen',
-        '--batch',
-        file,
-        '--out',
-        out,
-        '--errors',
-        join(work, `errors-${n}.txt`),
-      ]);
-      if (r.code === 0) rate = (n * 1000) / r.ms;
-      summary.results.batch.push({
-        compounds: n,
-        jobs: `default (${availableParallelism()} cores)`,
-        exitCode: r.code,
-        wallMs: +r.ms.toFixed(0),
-        compoundsPerSecond: +((n * 1000) / r.ms).toFixed(1),
-        peakResidentMB: r.peakMB,
-        note: 'formula-only fictional compounds against the whole library, default settings (no rank-robustness Monte Carlo: a batch runs it only with --iterations), CSV to a file',
-        ...(r.code !== 0 ? { stderrTail: r.stderr } : {}),
-      });
     }
   }
 } else summary.skipped.batch = 'skipped by --skip';

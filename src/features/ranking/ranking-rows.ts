@@ -150,77 +150,93 @@ const doseRange = (d: number, logSigma: number): [number, number] => [
   d * 10 ** logSigma,
 ];
 
+type ScreenPart = Omit<DisplayRow, 'rank' | 'score' | 'contributions'>;
+
+/**
+ * What a row shows that depends on the screen only (not on the weights), built once per screen and
+ * candidate: a weight change then builds only the rank, score and score parts of each row, and the
+ * table's memoised cells see the same objects as before.
+ */
+const screenParts = new WeakMap<ProjectScreening, Map<string, ScreenPart>>();
+
+function screenPartsOf(data: ProjectScreening): Map<string, ScreenPart> {
+  let parts = screenParts.get(data);
+  if (!parts) {
+    parts = new Map(data.screen.rows.map((row) => [row.id, screenPart(data, row)]));
+    screenParts.set(data, parts);
+  }
+  return parts;
+}
+
 /** Build what the table shows from the screen and the current weighting. */
 export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]): DisplayRow[] {
-  const rows = new Map(data.screen.rows.map((r) => [r.id, r]));
-  const shared = data.screen.robustnessShared;
+  const parts = screenPartsOf(data);
   return ranked.flatMap((k) => {
-    const row = rows.get(k.id);
-    if (!row) return [];
-    const ionName = data.ionNames[row.id] ?? row.counterIonName;
-    const label = candidateLabel(
-      {
-        ionId: row.counterIonId,
-        drugPerSalt: row.drugPerSalt,
-        counterIonPerSalt: row.counterIonPerSalt,
-      },
-      ionName,
-    );
-    const u = uncertaintiesOf(row, shared);
-    const kspMeasured = row.kspOrigin === 'measured';
-    const kspBasis = kspMeasured
-      ? 'K_sp from the measured salt solubility'
-      : 'K_sp estimated (no measured salt solubility)';
-    const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
-    const solutionEnthalpy = solutionEnthalpyOf(row, data);
-    return [
-      {
-        id: row.id,
-        label,
-        ionName,
-        rank: k.rank,
-        score: k.score,
-        contributions: k.contributions,
-        row,
-        deltaPka: row.deltaPka,
-        saltWater: saltWaterShown(row),
-        phMax:
-          row.phMax === null
-            ? null
-            : {
-                value: row.phMax,
-                sigma: u.phMaxSigma,
-                origin: kspMeasured ? 'measured' : 'estimated',
-                basis: kspBasis,
-              },
-        worstDose:
-          row.worst && row.worst.doseNumber !== null
-            ? {
-                value: row.worst.doseNumber,
-                range: doseRange(row.worst.doseNumber, logSigmaFor(row.worst.solid)),
-                origin: row.worst.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
-                basis: `${row.worst.solid === 'salt' ? 'salt' : 'free form'} limits at pH ${row.worst.pH}; ${row.worst.solid === 'salt' ? kspBasis : 'free-form solubility from S₀'}`,
-                pH: row.worst.pH,
-                solid: row.worst.solid,
-              }
-            : null,
-        gastricDose:
-          row.gastric && row.gastric.doseNumber !== null
-            ? {
-                value: row.gastric.doseNumber,
-                range: doseRange(row.gastric.doseNumber, logSigmaFor(row.gastric.solid)),
-                origin: row.gastric.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
-                basis: `${row.gastric.label}${row.gastric.commonIonM > 0 ? `; common ion ${row.gastric.commonIonM.toFixed(3)} M` : ''}`,
-                solid: row.gastric.solid,
-              }
-            : null,
-        solutionEnthalpy,
-        activeFraction: row.activeFraction,
-        saltMassPerDoseMg: row.saltMassPerDoseMg,
-        acceptabilityClass: data.counterIons[row.id]?.acceptabilityClass ?? null,
-      },
-    ];
+    const part = parts.get(k.id);
+    return part ? [{ ...part, rank: k.rank, score: k.score, contributions: k.contributions }] : [];
   });
+}
+
+function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
+  const shared = data.screen.robustnessShared;
+  const ionName = data.ionNames[row.id] ?? row.counterIonName;
+  const label = candidateLabel(
+    {
+      ionId: row.counterIonId,
+      drugPerSalt: row.drugPerSalt,
+      counterIonPerSalt: row.counterIonPerSalt,
+    },
+    ionName,
+  );
+  const u = uncertaintiesOf(row, shared);
+  const kspMeasured = row.kspOrigin === 'measured';
+  const kspBasis = kspMeasured
+    ? 'K_sp from the measured salt solubility'
+    : 'K_sp estimated (no measured salt solubility)';
+  const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
+  const solutionEnthalpy = solutionEnthalpyOf(row, data);
+  return {
+    id: row.id,
+    label,
+    ionName,
+    row,
+    deltaPka: row.deltaPka,
+    saltWater: saltWaterShown(row),
+    phMax:
+      row.phMax === null
+        ? null
+        : {
+            value: row.phMax,
+            sigma: u.phMaxSigma,
+            origin: kspMeasured ? 'measured' : 'estimated',
+            basis: kspBasis,
+          },
+    worstDose:
+      row.worst && row.worst.doseNumber !== null
+        ? {
+            value: row.worst.doseNumber,
+            range: doseRange(row.worst.doseNumber, logSigmaFor(row.worst.solid)),
+            origin: row.worst.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+            basis: `${row.worst.solid === 'salt' ? 'salt' : 'free form'} limits at pH ${row.worst.pH}; ${row.worst.solid === 'salt' ? kspBasis : 'free-form solubility from S₀'}`,
+            pH: row.worst.pH,
+            solid: row.worst.solid,
+          }
+        : null,
+    gastricDose:
+      row.gastric && row.gastric.doseNumber !== null
+        ? {
+            value: row.gastric.doseNumber,
+            range: doseRange(row.gastric.doseNumber, logSigmaFor(row.gastric.solid)),
+            origin: row.gastric.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+            basis: `${row.gastric.label}${row.gastric.commonIonM > 0 ? `; common ion ${row.gastric.commonIonM.toFixed(3)} M` : ''}`,
+            solid: row.gastric.solid,
+          }
+        : null,
+    solutionEnthalpy,
+    activeFraction: row.activeFraction,
+    saltMassPerDoseMg: row.saltMassPerDoseMg,
+    acceptabilityClass: data.counterIons[row.id]?.acceptabilityClass ?? null,
+  };
 }
 
 const SORT_VALUE: Record<RankingSortKey, (r: DisplayRow) => number | string | null> = {

@@ -1,26 +1,26 @@
-import { parentPort } from 'node:worker_threads';
+import { parentPort, workerData } from 'node:worker_threads';
 import type { CompoundSpec } from '../screen-input';
-import { screenOne, type BatchSettings } from './screen-one';
+import { screenOne, type BatchSettings, type ScreenOneResult } from './screen-one';
 
 /**
  * Entry file of the worker threads of `saltsmith screen --batch` (an entry, like src/cli/entry.ts: it
- * starts when run, and nothing imports it): screens the compounds it is sent, one message each, and
- * answers with the sequence number so the main thread can write the results in input order.
+ * starts when run, and nothing imports it): screens the compounds it is sent, a chunk per message, and
+ * answers with one message per chunk carrying each compound's sequence number so the main thread can
+ * write the results in input order. The settings come once, with the thread (workerData), not with
+ * every compound.
  */
-export type WorkerRequest = {
-  seq: number;
-  id: string;
-  spec: CompoundSpec;
-  settings: BatchSettings;
-};
+export type WorkerJob = { seq: number; id: string; spec: CompoundSpec };
+export type WorkerRequest = WorkerJob[];
+export type WorkerAnswer = { seq: number; result: ScreenOneResult }[];
 
 export function startBatchWorker(): void {
   const port = parentPort;
   if (!port) throw new Error('batch-worker runs only as a worker thread');
-  port.on('message', (m: WorkerRequest) => {
-    void screenOne(m.spec, m.settings, m.id).then((result) =>
-      port.postMessage({ seq: m.seq, result }),
-    );
+  const settings = workerData as BatchSettings;
+  port.on('message', (jobs: WorkerRequest) => {
+    void Promise.all(
+      jobs.map(async (j) => ({ seq: j.seq, result: await screenOne(j.spec, settings, j.id) })),
+    ).then((answer: WorkerAnswer) => port.postMessage(answer));
   });
 }
 
