@@ -98,9 +98,15 @@ describe('outcome summary beside the ranking', () => {
         solventId: w.solventId,
       });
     }
-    const row = await screen.findByRole('row', { name: /Maleate/ }, { timeout: 5000 });
-    expect(row.textContent).toMatch(/4 of 4/);
-    expect(row.textContent).toMatch(/no crystalline salt yet/);
+    // The summary follows the stored outcomes live: wait until it has seen all four.
+    await waitFor(
+      () => {
+        const row = screen.getByRole('row', { name: /Maleate/ });
+        expect(row.textContent).toMatch(/4 of 4/);
+        expect(row.textContent).toMatch(/no crystalline salt yet/);
+      },
+      { timeout: 10000 },
+    );
   });
 });
 
