@@ -2,7 +2,6 @@ import { lazy, useEffect, useState } from 'react';
 import { AREAS, areaFromHash, useNavigationStore, type AreaId } from '@/stores/navigation-store';
 import { CautionNote, CautionsDialog } from '@/components/Cautions';
 import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
-import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
 import { ProjectFilesPanel } from '@/features/project-files/components/ProjectFilesPanel';
@@ -36,12 +35,7 @@ const ModelCheckArea = lazy(() =>
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
   switch (area) {
     case 'compound':
-      return (
-        <>
-          <CompoundPanel project={project} />
-          <ReferenceLatticeTable />
-        </>
-      );
+      return <CompoundPanel project={project} />;
     case 'bench':
       return (
         <AreaBoundary>

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { validationReport, type ModelValidation } from '@/chem';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
 import { SaltSolubilityCheck } from './SaltSolubilityCheck';
+import { EngineCheck } from './EngineCheck';
 import '../model-check.css';
 
 const pct = (x: number) => `${x.toFixed(1)} %`;
@@ -180,6 +181,7 @@ export function ModelCheckArea() {
           the engine’s documentation gives each model’s constants and their origin.
         </p>
       </section>
+      <EngineCheck />
     </div>
   );
 }
