@@ -152,7 +152,8 @@ export function App() {
         )}
       </main>
       <footer className="footer">
-        <CautionNote />
+        {/* Once per screen: the Ranking area carries the cautions in full beside the ranking. */}
+        {area === 'ranking' && project ? null : <CautionNote />}
         <span className="muted">Saltsmith {__APP_VERSION__} · data stays in this browser</span>
       </footer>
       <CautionsDialog open={cautionsOpen} onClose={() => setCautionsOpen(false)} />

@@ -1,7 +1,6 @@
 import { useMemo } from 'react';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { searchCounterIons, type CounterIonFilters, type LibraryIon } from '@/chem';
-import { CautionNote } from '@/components/Cautions';
 import { candidatesRepo } from '@/persistence/candidates-repo';
 import type { ProjectRecord } from '@/persistence/records';
 import { useCounterIonsViewStore, type ClassFilter } from '../counter-ions-store';
@@ -255,7 +254,6 @@ export function CounterIonsPanel({ project }: { project: ProjectRecord }) {
         sources. Molar masses from IUPAC 2021 standard atomic weights.
       </p>
       <InHouseIonForm />
-      <CautionNote />
     </section>
   );
 }
