@@ -181,7 +181,7 @@ export function interpretMeasurements(
         withT.map((s) => ({ temperatureK: s.temperatureK!, solubility: s.formulaUnitsM })),
       );
     } else if (withT.length > 0) {
-      out.vantHoffNote = `van ’t Hoff fit needs at least three solubilities at two or more temperatures (have ${withT.length} at ${temps.size})`;
+      out.vantHoffNote = `van ’t Hoff fit needs at least three solubilities at two or more temperatures (have ${withT.length} solubilit${withT.length === 1 ? 'y' : 'ies'} at ${temps.size} temperature${temps.size === 1 ? '' : 's'})`;
     }
   }
   return out;
