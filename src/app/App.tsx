@@ -2,7 +2,6 @@ import { lazy, useEffect, useState } from 'react';
 import { AREAS, areaFromHash, useNavigationStore, type AreaId } from '@/stores/navigation-store';
 import { CautionNote, CautionsDialog } from '@/components/Cautions';
 import { CompoundPanel } from '@/features/compound/components/CompoundPanel';
-import { ReferenceLatticeTable } from '@/features/reference-lattice/components/ReferenceLatticeTable';
 import { useCurrentProject } from '@/features/projects/hooks/use-current-project';
 import { ProjectsArea } from '@/features/projects/components/ProjectsArea';
 import { ProjectFilesPanel } from '@/features/project-files/components/ProjectFilesPanel';
@@ -41,12 +40,7 @@ const ModelCheckArea = lazy(() =>
 function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }) {
   switch (area) {
     case 'compound':
-      return (
-        <>
-          <CompoundPanel project={project} />
-          <ReferenceLatticeTable />
-        </>
-      );
+      return <CompoundPanel project={project} />;
     case 'bench':
       return (
         <AreaBoundary>
@@ -169,7 +163,8 @@ export function App() {
         )}
       </main>
       <footer className="footer">
-        <CautionNote />
+        {/* Once per screen: the Ranking area carries the cautions in full beside the ranking. */}
+        {area === 'ranking' && project ? null : <CautionNote />}
         <span className="muted">Saltsmith {__APP_VERSION__} · data stays in this browser</span>
       </footer>
       <CautionsDialog open={cautionsOpen} onClose={() => setCautionsOpen(false)} />

@@ -4,7 +4,9 @@ import { SCREENING_CAUTIONS } from '@/chem';
 /**
  * The cautions every ranking is read with: the core's sentences (SCREENING_CAUTIONS in
  * src/chem/report/cautions.ts), shared with the CSV export and the command line. Shown in full in a
- * dialog reachable from every screen, and as a one-line reminder beside rankings and exports.
+ * dialog reachable from every screen, and ONCE per screen: the shell's footer note on every area but
+ * Ranking, which lists them in full beside the ranking (tests/app/cautions-once.test.tsx counts them).
+ * In full on the sheet and in every export.
  */
 export const CAUTION_LINES: readonly string[] = SCREENING_CAUTIONS;
 

@@ -19,6 +19,7 @@ import { buildProjectFile, serializeProjectFile, type ProjectBundle } from './pr
 import { parseProjectFileText } from './project-file/restore';
 import { checkFileStructures } from './project-file/file-rules';
 import type { ProjectFile } from './project-file/schema';
+import { importedProjectName } from './imported-name';
 
 /** Read everything a project file holds for one project. */
 export async function loadProjectBundle(projectId: string): Promise<ProjectBundle> {
@@ -226,7 +227,10 @@ export async function writeProjectFile(
       const project: ProjectRecord = projectRecordSchema.parse({
         id: projectId,
         schemaVersion: RECORD_SCHEMA_VERSION,
-        name: file.project.name,
+        name: importedProjectName(
+          file.project.name,
+          (await db.projects.toArray()).filter((p) => p.id !== projectId).map((p) => p.name),
+        ),
         createdAt,
         updatedAt: now,
         archived: false,

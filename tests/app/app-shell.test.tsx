@@ -11,7 +11,7 @@ beforeEach(async () => {
 });
 
 describe('workbench shell', () => {
-  it('opens the fictional demo project with a computed lattice table and every area named', async () => {
+  it('opens the fictional demo project on the compound form, every area named, no engine check', async () => {
     render(<App />);
     expect(await screen.findByText(/Demorazine is fictional/)).toBeInTheDocument();
     const nav = screen.getByRole('navigation', { name: 'Workbench areas' });
@@ -25,9 +25,10 @@ describe('workbench shell', () => {
     ]) {
       expect(within(nav).getByRole('link', { name: label })).toBeInTheDocument();
     }
-    const table = screen.getByRole('table');
-    expect(within(table).getByRole('rowheader', { name: 'NaCl' })).toBeInTheDocument();
-    expect(screen.getAllByText(/kJ\/mol/).length).toBeGreaterThan(0);
+    // The Compound area opens with what a formulator acts on: the compound, not the NaCl/KBr engine check.
+    expect(screen.getByLabelText('Name')).toBeInTheDocument();
+    expect(screen.queryByText(/Engine check/)).not.toBeInTheDocument();
+    expect(screen.queryByRole('rowheader', { name: 'NaCl' })).not.toBeInTheDocument();
   });
 
   it('keeps a compound edit after the app is closed and opened again', async () => {

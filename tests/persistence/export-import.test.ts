@@ -154,7 +154,16 @@ describe('export and import of a project', () => {
     expect(after.candidates).toHaveLength(8);
     // The shared custom ion is already here with the same content: not duplicated.
     expect(after.customIons.filter((i) => i.projectId === null)).toHaveLength(1);
-    expect(await content(outcome.projectId)).toStrictEqual(await content(project.id));
+    // Same content under a name that tells the two cards apart (issue 19).
+    const { name: importedName, ...importedContent } = await content(outcome.projectId);
+    const { name: originalName, ...originalContent } = await content(project.id);
+    expect(importedContent).toStrictEqual(originalContent);
+    expect(originalName).toBe(project.name);
+    expect(importedName).toBe(`${project.name} (imported)`);
+    expect(outcome.name).toBe(importedName);
+    // A second import of the same file takes the next free name.
+    const again = await importProjectText(await exportProjectText(project.id), { mode: 'new' });
+    expect(again.name).toBe(`${project.name} (imported 2)`);
   });
 
   it('replaces an existing project after confirmation, keeping its id and creation date', async () => {

@@ -51,6 +51,33 @@ export function logTick(v: number): string {
 const BAND: [number, number] = [1.2, 6.8];
 
 /**
+ * The y-axis of the pH chart, sized to its data: from the decade at or below the lowest value to the
+ * decade at or above the highest salt value or dose line (the free form's curve climbs without bound at low pH for a
+ * base, so it alone does not set the top).
+ */
+export function solubilityAxis(
+  series: SolubilitySeries[],
+  doseLineMgPerMl: number | null,
+): { lo: number; hi: number; ticks: number[] } {
+  const positive = (xs: number[]) => xs.filter((x) => x > 0 && Number.isFinite(x));
+  const all = positive(series.flatMap((s) => s.points.map((p) => p.solubilityMgPerMl)));
+  if (doseLineMgPerMl && doseLineMgPerMl > 0) all.push(doseLineMgPerMl);
+  const salts = positive(
+    series
+      .filter((s) => s.kind === 'salt')
+      .flatMap((s) => s.points.map((p) => p.solubilityMgPerMl)),
+  );
+  const lo = all.length ? 10 ** Math.floor(Math.log10(Math.min(...all))) : 1e-3;
+  const top = Math.max(...(salts.length ? salts : all), doseLineMgPerMl ?? 0);
+  const hi = all.length
+    ? Math.max(lo * 10, 10 ** Math.ceil(Math.log10(Math.min(Math.max(...all), top))))
+    : 1e3;
+  const ticks: number[] = [];
+  for (let t = lo; t <= hi * 1.0001; t *= 10) ticks.push(t);
+  return { lo, hi, ticks };
+}
+
+/**
  * Solubility against pH on a log axis: the free form and each chosen salt, pH_max marked, the
  * dose-number line (dose / 250 mL, ICH M9 2019) and the pH 1.2–6.8 band shaded. Recharts; the list
  * under the chart is its text alternative.
@@ -68,20 +95,7 @@ export function PhSolubilityChart({
   height?: number;
   title?: string;
 }) {
-  const all = series
-    .flatMap((s) => s.points.map((p) => p.solubilityMgPerMl))
-    .filter((x) => x > 0 && Number.isFinite(x));
-  if (doseLineMgPerMl && doseLineMgPerMl > 0) all.push(doseLineMgPerMl);
-  const salts = series
-    .filter((s) => s.kind === 'salt')
-    .flatMap((s) => s.points.map((p) => p.solubilityMgPerMl))
-    .filter((x) => x > 0 && Number.isFinite(x));
-  const lo = all.length ? 10 ** Math.floor(Math.log10(Math.min(...all))) : 1e-3;
-  // The free form's curve climbs without bound at low pH (for a base); keep the axis about the salts.
-  const top = Math.max(...(salts.length ? salts : all), doseLineMgPerMl ?? 0) * 1000;
-  const hi = all.length ? 10 ** Math.ceil(Math.log10(Math.min(Math.max(...all), top))) : 1e3;
-  const ticks: number[] = [];
-  for (let t = lo; t <= hi * 1.0001; t *= 10) ticks.push(t);
+  const { lo, hi, ticks } = solubilityAxis(series, doseLineMgPerMl);
   const summary = series.map((s) => {
     const inBand = s.points.filter((p) => p.pH >= BAND[0] - 1e-9 && p.pH <= BAND[1] + 1e-9);
     const worst = inBand.reduce(

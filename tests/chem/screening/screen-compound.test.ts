@@ -123,6 +123,15 @@ describe('screenCompound', () => {
       r.rows.find((row) => row.id === id)!.flags.some((f) => f.id === 'salt-poorly-soluble');
     expect(flagged('mesylate')).toBe(true);
     expect(flagged('chloride')).toBe(false);
+    // The flag cites a pH inside the ICH M9 (2019) window, pH 1.2–6.8, where dose numbers are judged,
+    // to the grid's 0.1 pH unit (not "pH 3.40").
+    const flag = r.rows
+      .find((row) => row.id === 'mesylate')!
+      .flags.find((f) => f.id === 'salt-poorly-soluble')!;
+    expect(flag.text).toMatch(/at pH \d+\.\d where/);
+    const cited = Number(/at pH ([\d.]+)/.exec(flag.text)![1]);
+    expect(cited).toBeGreaterThanOrEqual(1.2);
+    expect(cited).toBeLessThanOrEqual(6.8);
   });
 
   it('an unmeasured K_sp is labelled an estimate with its spread', () => {

@@ -81,6 +81,40 @@ describe('Counter-ions area', () => {
     expect(list).toMatchObject([{ ionId: 'sulfate', drugPerSalt: 2, counterIonPerSalt: 1 }]);
   });
 
+  it('shows a shortlisted salt form with its stoichiometry, and takes it off after a second yes (issue 19)', async () => {
+    const { user, table, project } = await setup();
+    const row = () =>
+      within(table)
+        .getByRole('rowheader', { name: /^Sulfate/ })
+        .closest('tr')!;
+    await user.click(
+      within(row()).getByRole('button', {
+        name: /Add Sulfate \(hemisulfate \(2:1\)\) to the shortlist/,
+      }),
+    );
+    // Two drug ions per sulfate: the order of the numbers is said in words.
+    expect(
+      await within(row()).findByText('hemisulfate, 2:1 (drug:counter-ion)'),
+    ).toBeInTheDocument();
+    await user.click(within(row()).getByRole('button', { name: /Remove Sulfate .* shortlist/ }));
+    await user.click(within(row()).getByRole('button', { name: 'Keep' }));
+    expect(await candidatesRepo.listForProject(project.id)).toHaveLength(1);
+    await user.click(within(row()).getByRole('button', { name: /Remove Sulfate .* shortlist/ }));
+    await user.click(within(row()).getByRole('button', { name: 'Remove' }));
+    await waitFor(async () => expect(await candidatesRepo.listForProject(project.id)).toEqual([]));
+    expect(
+      await within(row()).findByRole('button', { name: /Add Sulfate .* to the shortlist/ }),
+    ).toBeInTheDocument();
+  });
+
+  it('writes a 1:1 form as "1:1" and a 2:1 form with the order named', async () => {
+    const { stoichiometryWords } = await import('@/features/counter-ions/components/ShortlistCell');
+    expect(stoichiometryWords({ drugPerSalt: 1, counterIonPerSalt: 1 })).toBe('1:1');
+    expect(stoichiometryWords({ drugPerSalt: 2, counterIonPerSalt: 1 })).toBe(
+      '2:1 (drug:counter-ion)',
+    );
+  });
+
   it('adds an in-house ion (validated) and marks it in-house', async () => {
     const { user, table } = await setup();
     await user.click(screen.getByText('Add an in-house counter-ion'));

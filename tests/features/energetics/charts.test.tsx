@@ -102,3 +102,37 @@ describe('pH–solubility chart', () => {
     expect(screen.getByText(/salt \(estimated\): pH_max 5.50/)).toBeInTheDocument();
   });
 });
+
+describe('pH chart axis sized to its data (issue 19)', () => {
+  it('tops the y-axis at the decade above the salts and the dose line, not three decades higher', async () => {
+    const { solubilityAxis } = await import('@/components/charts/PhSolubilityChart');
+    // Hand-made curves (inputs, not results): a free form climbing to 500 mg/mL at pH 1, a salt
+    // plateau at 0.6 mg/mL, and the dose line 100 mg / 250 mL = 0.4 mg/mL (ICH M9 2019 volume).
+    const axis = solubilityAxis(
+      [
+        {
+          id: 'free',
+          label: 'free form',
+          kind: 'free-form',
+          points: [
+            { pH: 1, solubilityMgPerMl: 500 },
+            { pH: 8, solubilityMgPerMl: 0.02 },
+          ],
+        },
+        {
+          id: 'salt',
+          label: 'salt',
+          kind: 'salt',
+          points: [
+            { pH: 1, solubilityMgPerMl: 0.6 },
+            { pH: 8, solubilityMgPerMl: 0.02 },
+          ],
+        },
+      ],
+      0.4,
+    );
+    expect(axis.lo).toBeCloseTo(0.01, 12);
+    expect(axis.hi).toBeCloseTo(1, 12);
+    expect(axis.ticks).toHaveLength(3);
+  });
+});

@@ -81,3 +81,28 @@ describe('Model check: the salt-solubility evidence leads, with the no-descripto
     expect(details.open).toBe(false);
   });
 });
+
+describe('Model check: the engine check, folded at the end (issue 19)', () => {
+  it('keeps the NaCl/KBr lattice enthalpies folded after the salt-solubility evidence, beside their Born–Haber values', async () => {
+    const user = userEvent.setup();
+    const { container } = render(<ModelCheckArea />);
+    const fold = container.querySelector('details.engine-check') as HTMLDetailsElement;
+    expect(fold).not.toBeNull();
+    expect(fold.open).toBe(false);
+    // It comes after every other section: the evidence the ranking rests on reads first.
+    const sections = Array.from(container.querySelectorAll('.confidence-area > *'));
+    expect(sections[sections.length - 1]).toBe(fold);
+    await user.click(within(fold).getByText(/Engine check/));
+    expect(fold.open).toBe(true);
+    const table = within(fold).getByRole('table', { name: /Engine check/ });
+    const nacl = within(table).getByRole('rowheader', { name: 'NaCl' }).closest('tr')!;
+    const cells = within(nacl).getAllByRole('cell');
+    // Born–Haber ΔH_L(NaCl) = 787 kJ/mol (CRC Handbook, "Lattice energies" table); Kapustinskii's
+    // equation is good to a few per cent on alkali halides (Kapustinskii 1956), so the engine's figure
+    // shown beside it must fall within 5 % of it.
+    const bornHaber = Number(cells[3]!.textContent);
+    expect(Math.abs(bornHaber - 787)).toBeLessThanOrEqual(3);
+    const estimate = Number(cells[2]!.textContent!.split('±')[0]);
+    expect(Math.abs(estimate - 787) / 787).toBeLessThan(0.05);
+  });
+});

@@ -153,7 +153,7 @@ export function worstSolubilityReason(name: string, worst: DoseNumberAt): Reason
 export function saltPoorlySolubleFlag(mgPerMl: number, pH: number, doseNumber: number): ScreenFlag {
   return {
     id: 'salt-poorly-soluble',
-    text: `salt poorly soluble in itself: ${fmt(mgPerMl)} mg/mL at pH ${fmt(pH)} where the salt is the solid (D₀ ${fmt(doseNumber)})`,
+    text: `salt poorly soluble in itself: ${fmt(mgPerMl)} mg/mL at pH ${pH.toFixed(1)} where the salt is the solid (D₀ ${fmt(doseNumber)})`,
     rule: 'salt-limited solubility below the highest dose in 250 mL (the ICH M9 (2019) volume) on the salt branch, below pH_max — a screening rule of our own (common practice)',
   };
 }

@@ -1,5 +1,5 @@
 import { saltDeltaPka, saltFormationVerdict } from '../delta-pka';
-import { doseNumber } from '../dose-number';
+import { doseNumber, ICH_M9_PH_RANGE } from '../dose-number';
 import { activeFraction, saltMassPerDoseMg } from '../mass-cost';
 import {
   fastPathApplies,
@@ -47,13 +47,16 @@ function deltaPkaEach(ctx: ScreenContext, p: PreparedCandidate): number[] {
 /**
  * The lowest solubility on the salt branch (below pH_max, where the salt is the solid), as a flag when
  * even there the salt cannot carry the dose — unlike the free-form limit above pH_max, which every salt
- * of this drug shares and so does not tell one salt from another.
+ * of this drug shares and so does not tell one salt from another. Judged over the ICH M9 window
+ * (pH 1.2–6.8) only, like every dose number, so the flag never cites a pH outside it.
  */
 function saltBranchFlag(ctx: ScreenContext, grid: GridSolubility): ScreenFlag | null {
   if (ctx.doseMg === null) return null;
   let lowest = -1;
   for (let k = 0; k < grid.phs.length; k++) {
     if (grid.saltSolid[k] !== 1) continue;
+    const pH = grid.phs[k]!;
+    if (pH < ICH_M9_PH_RANGE[0] - 1e-9 || pH > ICH_M9_PH_RANGE[1] + 1e-9) continue;
     if (lowest < 0 || clearlyLower(grid.solubilityM[k]!, grid.solubilityM[lowest]!)) lowest = k;
   }
   if (lowest < 0) return null;

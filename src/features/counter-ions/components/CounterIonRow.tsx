@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import { formatIonFormula, stoichiometryKey, type LibraryIon } from '@/chem';
-import { candidatesRepo } from '@/persistence/candidates-repo';
-import type { ProjectRecord } from '@/persistence/records';
+import type { CandidateRecord, ProjectRecord } from '@/persistence/records';
 import { bestVerdictFor, verdictFor } from '../counter-ion-verdict';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
 import { IonEditForm } from './IonEditForm';
+import { ShortlistCell } from './ShortlistCell';
 
 const fmtCharge = (c: number) => (c > 0 ? `+${c}` : `−${-c}`);
 
@@ -12,116 +12,24 @@ const fmtCharge = (c: number) => (c > 0 ? `+${c}` : `−${-c}`);
 export function CounterIonRow({
   ion,
   project,
-  onShortlist,
+  candidate,
   open,
   onToggle,
 }: {
   ion: LibraryIon;
   project: ProjectRecord;
-  onShortlist: boolean;
+  /** The shortlist entry of this ion, if it is on the shortlist. */
+  candidate: CandidateRecord | null;
   open: boolean;
   onToggle: () => void;
 }) {
-  const [stoichIndex, setStoichIndex] = useState(0);
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const verdict = bestVerdictFor(project, ion);
-  const charges = [...new Set(ion.stoichiometries.map((s) => s.ionCharge))];
   const detailsId = `ion-details-${ion.id}`;
-  const chosen = ion.stoichiometries[stoichIndex] ?? ion.stoichiometries[0]!;
-
-  const add = async () => {
-    setBusy(true);
-    setError(null);
-    try {
-      await candidatesRepo.add(project.id, ion.id, {
-        drugPerSalt: chosen.drugPerSalt,
-        counterIonPerSalt: chosen.counterIonPerSalt,
-      });
-    } catch (err) {
-      setError(err instanceof Error ? err.message : 'Could not add to the shortlist');
-    } finally {
-      setBusy(false);
-    }
-  };
-
   return (
     <>
       <tr className={`ion-row origin-${ion.origin}`}>
-        <th scope="row">
-          <button
-            type="button"
-            className="ion-name"
-            aria-expanded={open}
-            aria-controls={detailsId}
-            onClick={onToggle}
-          >
-            {ion.name}
-          </button>
-          {ion.referenceOnly ? (
-            <span className="ion-badge ion-badge-reference">reference only</span>
-          ) : null}
-          {ion.origin !== 'bundled' ? (
-            <span className={`ion-badge ion-badge-${ion.origin}`}>
-              {ion.origin === 'in-house' ? 'in-house' : 'edited for this project'}
-            </span>
-          ) : null}
-        </th>
-        <td>{formatIonFormula(ion.formula, ion.charge)}</td>
-        <td>{charges.map(fmtCharge).join(', ')}</td>
-        <td>
-          {ion.pKas.length ? (
-            ion.pKas.map((p) => p.value.toFixed(2)).join(', ')
-          ) : (
-            <span className="muted">not sourced</span>
-          )}
-        </td>
-        <td>{ion.acceptabilityClass ?? '–'}</td>
-        <td>
-          {verdict ? (
-            <span className={`ion-verdict verdict-${verdict.band}`} title={verdict.reason}>
-              {verdict.deltaPka.toFixed(1)} · {verdict.label}
-            </span>
-          ) : (
-            <span className="muted">{ion.pKas.length ? 'does not pair' : 'no pKa'}</span>
-          )}
-        </td>
-        <td>{ion.molarMassGPerMol.toFixed(2)}</td>
-        <td className="ion-shortlist">
-          {onShortlist ? (
-            <span className="ion-on-list">On shortlist</span>
-          ) : (
-            <span className="button-row">
-              {ion.stoichiometries.length > 1 ? (
-                <select
-                  aria-label={`Salt form of ${ion.name}`}
-                  value={stoichIndex}
-                  onChange={(e) => setStoichIndex(Number(e.target.value))}
-                >
-                  {ion.stoichiometries.map((s, i) => (
-                    <option key={s.label} value={i}>
-                      {s.label}
-                    </option>
-                  ))}
-                </select>
-              ) : null}
-              <button
-                type="button"
-                onClick={add}
-                disabled={busy}
-                aria-label={`Add ${ion.name} (${chosen.label}) to the shortlist`}
-              >
-                {/* Visible text kept inside the accessible name (WCAG 2.5.3, label in name). */}
-                Add
-              </button>
-            </span>
-          )}
-          {error ? (
-            <span className="field-error" role="alert">
-              {error}
-            </span>
-          ) : null}
-        </td>
+        <IonNameCell ion={ion} open={open} onToggle={onToggle} detailsId={detailsId} />
+        <IonFigures ion={ion} project={project} />
+        <ShortlistCell ion={ion} project={project} candidate={candidate} />
       </tr>
       {open ? (
         <tr className="ion-details-row">
@@ -130,6 +38,69 @@ export function CounterIonRow({
           </td>
         </tr>
       ) : null}
+    </>
+  );
+}
+
+function IonNameCell({
+  ion,
+  open,
+  onToggle,
+  detailsId,
+}: {
+  ion: LibraryIon;
+  open: boolean;
+  onToggle: () => void;
+  detailsId: string;
+}) {
+  return (
+    <th scope="row">
+      <button
+        type="button"
+        className="ion-name"
+        aria-expanded={open}
+        aria-controls={detailsId}
+        onClick={onToggle}
+      >
+        {ion.name}
+      </button>
+      {ion.referenceOnly ? (
+        <span className="ion-badge ion-badge-reference">reference only</span>
+      ) : null}
+      {ion.origin !== 'bundled' ? (
+        <span className={`ion-badge ion-badge-${ion.origin}`}>
+          {ion.origin === 'in-house' ? 'in-house' : 'edited for this project'}
+        </span>
+      ) : null}
+    </th>
+  );
+}
+
+function IonFigures({ ion, project }: { ion: LibraryIon; project: ProjectRecord }) {
+  const verdict = bestVerdictFor(project, ion);
+  const charges = [...new Set(ion.stoichiometries.map((s) => s.ionCharge))];
+  return (
+    <>
+      <td>{formatIonFormula(ion.formula, ion.charge)}</td>
+      <td>{charges.map(fmtCharge).join(', ')}</td>
+      <td>
+        {ion.pKas.length ? (
+          ion.pKas.map((p) => p.value.toFixed(2)).join(', ')
+        ) : (
+          <span className="muted">not sourced</span>
+        )}
+      </td>
+      <td>{ion.acceptabilityClass ?? '–'}</td>
+      <td>
+        {verdict ? (
+          <span className={`ion-verdict verdict-${verdict.band}`} title={verdict.reason}>
+            {verdict.deltaPka.toFixed(1)} · {verdict.label}
+          </span>
+        ) : (
+          <span className="muted">{ion.pKas.length ? 'does not pair' : 'no pKa'}</span>
+        )}
+      </td>
+      <td>{ion.molarMassGPerMol.toFixed(2)}</td>
     </>
   );
 }

@@ -2,7 +2,6 @@ import { useId } from 'react';
 import { SIGN_CONVENTION, type SaltThermoResult } from '@/chem';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
-import { CautionNote } from '@/components/Cautions';
 import type { ProjectRecord } from '@/persistence/records';
 import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/compute-screening';
 import { useProjectScreening } from '@/screening-data/use-screening';
@@ -163,7 +162,6 @@ export function EnergeticsArea({ project }: { project: ProjectRecord }) {
               .
             </p>
           ) : null}
-          <CautionNote />
         </section>
       ) : null}
     </div>

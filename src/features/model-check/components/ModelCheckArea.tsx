@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { validationReport, type ModelValidation } from '@/chem';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
 import { SaltSolubilityCheck } from './SaltSolubilityCheck';
+import { EngineCheck } from './EngineCheck';
 import '../model-check.css';
 
 const pct = (x: number) => `${x.toFixed(1)} %`;
@@ -186,6 +187,7 @@ export function ModelCheckArea() {
           </p>
         </section>
       </details>
+      <EngineCheck />
     </div>
   );
 }

@@ -1,6 +1,5 @@
 import { memo, useMemo } from 'react';
 import { measureNextStatusOf, type ScreeningWeights } from '@/chem';
-import { CautionNote } from '@/components/Cautions';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import {
   MEASURE_NEXT_ITERATIONS,
@@ -67,7 +66,6 @@ export const MeasureNextPanel = memo(function MeasureNextPanelView({
           Weighing {MEASURE_NEXT_ITERATIONS} draws × {MEASURE_NEXT_OUTCOMES} outcomes…
         </p>
       ) : null}
-      <CautionNote />
     </section>
   );
 });

@@ -16,11 +16,12 @@ const ion = (id: string): ThermoIon => {
 };
 
 /**
- * A first computed result: Kapustinskii lattice enthalpies of simple salts from the thermochemistry engine,
- * with the radii it used and their cited source, so a newcomer can see the engine at work on salts whose
- * values they know.
+ * The engine check, folded at the end of Model check: Kapustinskii lattice enthalpies of four simple
+ * salts beside their Born–Haber values, with the radii used and their source, so anyone can see the
+ * thermochemistry engine at work on salts whose values they know. Not something a formulator acts on,
+ * so it no longer opens the Compound area.
  */
-export function ReferenceLatticeTable() {
+export function EngineCheck() {
   const rows = CATIONS.flatMap((c) =>
     ANIONS.map((a) => {
       const cat = ion(c);
@@ -45,13 +46,17 @@ export function ReferenceLatticeTable() {
   );
   const radiusSource = ion('sodium').radiusA?.sources[0] ?? '';
   return (
-    <section className="panel" aria-labelledby="ref-lattice-title">
-      <h2 id="ref-lattice-title">Engine check: Kapustinskii lattice enthalpies</h2>
+    <details className="panel engine-check">
+      <summary>
+        <h2 id="engine-check-title">
+          Engine check: Kapustinskii lattice enthalpies of NaCl, NaBr, KCl, KBr
+        </h2>
+      </summary>
       <p className="convention">
         Sign convention: lattice <em>dissociation</em> enthalpy ΔH<sub>L</sub> &gt; 0 for MX(s) →
         M⁺(g) + X⁻(g); the formation (textbook) value is the same number with a minus sign.
       </p>
-      <table className="data-table">
+      <table className="data-table" aria-labelledby="engine-check-title">
         <thead>
           <tr>
             <th scope="col">Salt</th>
@@ -83,6 +88,6 @@ export function ReferenceLatticeTable() {
         (Wagman et al. 1982, NBS tables) and ionisation energies / electron affinities (CRC
         Handbook) — entered from memory.
       </p>
-    </section>
+    </details>
   );
 }
