@@ -1,3 +1,4 @@
+import { getCounterIon, saltLabel } from '@/chem';
 import type { CandidateRecord } from '@/persistence/records';
 
 /** A counter-ion id as words: 'hydrogen-sulfate' → 'Hydrogen sulfate'. */
@@ -6,11 +7,15 @@ export function ionIdAsWords(ionId: string): string {
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
-/** How a candidate is named on screen: the counter-ion and the salt's stoichiometry (drug:counter-ion). */
+/**
+ * How a candidate is named on screen: the salt's trade name and its stoichiometry (drug:counter-ion),
+ * e.g. 'hydrochloride (1:1)' — the core's one salt vocabulary (saltLabel), the same the CLI writes.
+ */
 export function candidateLabel(
   c: Pick<CandidateRecord, 'ionId' | 'drugPerSalt' | 'counterIonPerSalt'>,
   ionName?: string,
 ): string {
-  const name = ionName ?? ionIdAsWords(c.ionId);
-  return `${name} (${c.drugPerSalt}:${c.counterIonPerSalt})`;
+  const bundled = getCounterIon(c.ionId);
+  const name = ionName ?? bundled?.name ?? ionIdAsWords(c.ionId);
+  return saltLabel(name, c, bundled?.stoichiometries ?? []);
 }

@@ -29,7 +29,7 @@ const LOADED: Record<Exclude<AreaId, 'projects'>, () => Promise<unknown>> = {
   ranking: () => screen.findByText(/candidates ranked/, {}, { timeout: 20000 }),
   energetics: () => screen.findByText(/Sign convention\./, {}, { timeout: 20000 }),
   'salt-screen': () => screen.findByText(/wells on a 24-well plate/, {}, { timeout: 20000 }),
-  bench: () => screen.findAllByRole('button', { name: /Chloride/ }, { timeout: 20000 }),
+  bench: () => screen.findAllByRole('button', { name: /hydrochloride/ }, { timeout: 20000 }),
   'model-check': () =>
     screen.findByRole('table', { name: /Validation of each model/ }, { timeout: 20000 }),
 };

@@ -97,12 +97,12 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     // Two measurements on the bench.
     await area(page, 'Bench data');
     const nav = page.getByRole('navigation', { name: 'Shortlisted candidates' });
-    await nav.getByRole('button', { name: /Mesylate/ }).click();
-    let form = page.getByRole('form', { name: /New measurement for Mesylate/ });
+    await nav.getByRole('button', { name: /mesylate/i }).click();
+    let form = page.getByRole('form', { name: /New measurement for mesylate/ });
     await form.getByLabel(/^Solubility/).fill('4.2');
     await form.getByLabel('pH at equilibrium').fill('3.1');
     await form.getByRole('button', { name: 'Save measurement' }).click();
-    await page.getByText(/Saved: solubility for Mesylate/).waitFor();
+    await page.getByText(/Saved: solubility for mesylate/).waitFor();
     await nav.getByRole('button', { name: /Tosylate/ }).click();
     form = page.getByRole('form', { name: /New measurement for Tosylate/ });
     await form.getByLabel('What was measured').selectOption('mass-gain-80rh');
@@ -129,9 +129,9 @@ describe('a formulator’s morning (production build, Chromium)', () => {
     await area(page, 'Bench data');
     await page
       .getByRole('navigation', { name: 'Shortlisted candidates' })
-      .getByRole('button', { name: /Mesylate/ })
+      .getByRole('button', { name: /mesylate/i })
       .click();
-    const table = page.getByRole('table', { name: /Measurements for Mesylate/ });
+    const table = page.getByRole('table', { name: /Measurements for mesylate/ });
     await expect(table.textContent()).resolves.toContain('4.20');
     await page
       .getByRole('navigation', { name: 'Shortlisted candidates' })

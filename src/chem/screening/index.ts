@@ -27,3 +27,4 @@ export * from './screen';
 export * from './library-candidates';
 export * from './salt-solubility';
 export * from './measure-next';
+export * from './salt-label';

@@ -3,6 +3,7 @@ import type { CounterIon } from '../library/counter-ion.types';
 import type { ThermoIon } from '../thermo';
 import { DEFAULT_DELTA_PKA_BANDS, saltDeltaPka, type DeltaPkaBands } from './delta-pka';
 import { drugProtolyte } from './ph-profile';
+import { saltLabel } from './salt-label';
 import { counterIonProtolyte } from './screen/counter-ion-protolyte';
 import type { ScreeningCandidate } from './screen/screen.types';
 import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from './thermo-link';
@@ -59,10 +60,8 @@ export function candidatesFromLibrary(
       const key = `${m}:${n}:${st.ionCharge}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      const label =
-        m === st.drugPerSalt && n === st.counterIonPerSalt
-          ? st.label
-          : `${ion.name.toLowerCase()} (${m}:${n})`;
+      const own = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : undefined;
+      const label = saltLabel(ion.name, { label: own, drugPerSalt: m, counterIonPerSalt: n });
       const stoich = {
         label,
         drugPerSalt: m,

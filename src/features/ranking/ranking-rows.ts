@@ -7,7 +7,6 @@ import {
 } from '@/chem';
 import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
-import { candidateLabel } from '@/screening-data/candidate-label';
 import type { RankingSortKey } from '@/stores/ranking-view-store';
 
 /** A number as the ranking shows it: value, 1σ (or a ±1σ range), and whether a measurement backs it. */
@@ -180,14 +179,8 @@ export function displayRows(data: ProjectScreening, ranked: readonly RankedRow[]
 function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
   const shared = data.screen.robustnessShared;
   const ionName = data.ionNames[row.id] ?? row.counterIonName;
-  const label = candidateLabel(
-    {
-      ionId: row.counterIonId,
-      drugPerSalt: row.drugPerSalt,
-      counterIonPerSalt: row.counterIonPerSalt,
-    },
-    ionName,
-  );
+  // The core's salt name (saltLabel), the same words the CLI writes for this row.
+  const label = row.label;
   const u = uncertaintiesOf(row, shared);
   const kspMeasured = row.kspOrigin === 'measured';
   const kspBasis = kspMeasured

@@ -81,7 +81,7 @@ describe('Bench data area', () => {
   it('shows field messages for a bad entry and stores nothing, then stores a good one', async () => {
     const user = userEvent.setup();
     render(<BenchArea project={project} extras={{ predictionFor: () => 'predicted' }} />);
-    const form = await screen.findByRole('form', { name: /New measurement for Chloride/ });
+    const form = await screen.findByRole('form', { name: /New measurement for hydrochloride/ });
     await user.type(within(form).getByLabelText(/^Solubility/), '-3');
     await user.type(within(form).getByLabelText('pH at equilibrium'), 'acid');
     await user.click(within(form).getByRole('button', { name: 'Save measurement' }));
@@ -97,7 +97,7 @@ describe('Bench data area', () => {
     await user.type(ph, '1.2');
     await user.click(within(form).getByRole('button', { name: 'Save measurement' }));
     expect(await screen.findByText(/Saved: solubility/)).toBeInTheDocument();
-    const table = await screen.findByRole('table', { name: /Measurements for Chloride/ });
+    const table = await screen.findByRole('table', { name: /Measurements for hydrochloride/ });
     expect(within(table).getByText('2.50')).toBeInTheDocument();
     expect(within(table).getByText('predicted')).toBeInTheDocument();
     const stored = await measurementsRepo.listForProject(project.id);
@@ -108,8 +108,8 @@ describe('Bench data area', () => {
   it('switches candidate and kind: a mass gain at 80 % RH for the mesylate', async () => {
     const user = userEvent.setup();
     render(<BenchArea project={project} extras={{ predictionFor: () => null }} />);
-    await user.click(await screen.findByRole('button', { name: /Mesylate/ }));
-    const form = await screen.findByRole('form', { name: /New measurement for Mesylate/ });
+    await user.click(await screen.findByRole('button', { name: /mesylate/ }));
+    const form = await screen.findByRole('form', { name: /New measurement for mesylate/ });
     await user.selectOptions(within(form).getByLabelText('What was measured'), 'mass-gain-80rh');
     await user.type(within(form).getByLabelText(/Mass gain after 24 h/), '3.1');
     await user.click(within(form).getByRole('button', { name: 'Save measurement' }));
@@ -163,7 +163,7 @@ describe('candidate salt form', () => {
       expect((await candidatesRepo.listForProject(p.id))[0]?.hydrateWater).toBe(1),
     );
     await user.click(screen.getByRole('button', { name: 'Remove from shortlist…' }));
-    expect(screen.getByRole('group', { name: /Confirm removing Chloride/ })).toHaveTextContent(
+    expect(screen.getByRole('group', { name: /Confirm removing hydrochloride/ })).toHaveTextContent(
       /and its 1 measurement\?/,
     );
     await user.click(screen.getByRole('button', { name: 'Remove' }));

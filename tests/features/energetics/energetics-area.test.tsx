@@ -31,7 +31,7 @@ describe('Energetics area', () => {
     expect(
       await screen.findByText(/Sign convention\./, {}, { timeout: 15000 }),
     ).toBeInTheDocument();
-    const table = screen.getByRole('table', { name: /Cycle of Chloride/ });
+    const table = screen.getByRole('table', { name: /Cycle of hydrochloride/ });
     for (const step of ['ΔH_L', 'ΔH_hyd,+', 'ΔH_hyd,−', 'ΔH_sol'])
       expect(within(table).getAllByText(step, { exact: false }).length).toBeGreaterThan(0);
     // ΔH_sol also per drug ion, as the Ranking, the sheet and the CSV show it (a number or "not informative").

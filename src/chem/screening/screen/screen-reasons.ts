@@ -11,6 +11,7 @@ import type {
   ScreeningCounterIon,
 } from './screen.types';
 import { basisWords, type SaltSolubilityBasis } from './salt-water-basis';
+import { saltLabel } from '../salt-label';
 
 /**
  * The words of the screen: every reason, flag, note and assumption it writes, built from numbers the
@@ -27,14 +28,12 @@ export const withoutRatio = (label: string): string => label.replace(/\s*\([^)]*
 const ICH_M9_RULE =
   'ICH M9 (2019) §2.1.1: the highest dose must dissolve in ≤ 250 mL over pH 1.2–6.8 (D₀ ≤ 1)';
 
-/** A candidate's row label: the stoichiometry's own label, else the ion's name and ratio. */
+/** A candidate's row label: the one salt vocabulary of app and CLI (salt-label.ts). */
 export function rowLabel(
   ionName: string,
   st: { label?: string; drugPerSalt: number; counterIonPerSalt: number },
 ): string {
-  return st.label
-    ? st.label
-    : `${ionName.toLowerCase()} (${st.drugPerSalt}:${st.counterIonPerSalt})`;
+  return saltLabel(ionName, st);
 }
 
 /** The salt's trade name without its ratio, e.g. 'hydrochloride', for the reasons in words. */
