@@ -54,6 +54,7 @@ describe('saltsmith screen --format json: measure_next', () => {
       'intrinsicSolubility',
       'freeForm',
       'robustness',
+      'candidateForms',
       'skippedCocrystalBand',
       'units',
       'separation',

@@ -15,6 +15,13 @@ export const safeRow = (row: Record<string, unknown>) =>
 export const KSP_NOTE =
   'K_sp without a measured salt solubility is an estimate; see ksp_origin and log10_ksp_sd.';
 
+/**
+ * Why the CLI can list more rows than the app for the same ions: the app screens the one salt form
+ * chosen on each shortlisted ion; the CLI screens every form the counter-ion library lists.
+ */
+export const FORMS_NOTE =
+  'Candidate forms: every salt form the counter-ion library lists for each ion (e.g. hydrogen maleate (1:1) and maleate (2:1)), so a form the app would not screen can rank here; the app screens the one form chosen on each shortlisted ion. Salt names are the same in both (e.g. hydrochloride, hemisulfate, mesylate).';
+
 export const skippedNote = (skipped: Skipped) =>
   skipped.length
     ? `Left out (ΔpKa in the cocrystal band, Cruz-Cabeza 2012; --keep-cocrystal-band keeps them): ${skipped.map((x) => `${x.label} ΔpKa ${x.deltaPka.toFixed(1)}`).join('; ')}`
@@ -41,7 +48,7 @@ export function screenCsv(
   const csv = Papa.unparse(table.map(safeRow), { newline: '\n' });
   const note = skippedNote(skipped);
   const notes = res ? screenNotes(res).map((n) => `\n# ${n}`) : [];
-  return `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# ${KSP_NOTE}${note ? `\n# ${note}` : ''}${notes.join('')}`;
+  return `${csv}\n# ${SCREENING_CAUTIONS.join(' ')}\n# ${KSP_NOTE}\n# ${FORMS_NOTE}${note ? `\n# ${note}` : ''}${notes.join('')}`;
 }
 
 export function screenJson(
@@ -67,6 +74,7 @@ export function screenJson(
         flags: res.freeForm.flags,
       },
       robustness,
+      candidateForms: FORMS_NOTE,
       skippedCocrystalBand: skipped,
       units: {
         solubility: 'mg/mL free-form equivalents',
