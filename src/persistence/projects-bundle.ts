@@ -35,7 +35,8 @@ function demoIonCharge(ionId: string): number {
   return ion?.stoichiometries[0]?.ionCharge ?? ion?.charge ?? -1;
 }
 
-function demoCandidates(projectId: string): CandidateRecord[] {
+/** The demo shortlist as stored candidates: each ion in its first listed (the library’s usual) salt form. */
+export function demoCandidates(projectId: string): CandidateRecord[] {
   const now = nowIso();
   return DEMO_SHORTLIST.map((ionId, order) =>
     candidateRecordSchema.parse({
