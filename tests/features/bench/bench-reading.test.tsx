@@ -53,7 +53,7 @@ describe('Bench data: how a solubility was read', () => {
   it('the form stores pH, °C and the solid stated', async () => {
     const user = userEvent.setup();
     render(<BenchArea project={project} extras={{ predictionFor: () => '' }} />);
-    const form = await screen.findByRole('form', { name: /New measurement for Besylate/ });
+    const form = await screen.findByRole('form', { name: /New measurement for besylate/ });
     await user.type(within(form).getByLabelText(/^Solubility/), '0.12');
     await user.type(within(form).getByLabelText('pH at equilibrium'), '7.6');
     const t = within(form).getByLabelText(/^Temperature/);
@@ -65,7 +65,7 @@ describe('Bench data: how a solubility was read', () => {
     const [m] = await measurementsRepo.listForProject(project.id);
     expect(m).toMatchObject({ ph: 7.6, solidForm: 'salt' });
     expect(m!.temperatureK).toBeCloseTo(298.15, 10); // 25 + 273.15 (SI Brochure 2019)
-    const table = await screen.findByRole('table', { name: /Measurements for Besylate/ });
+    const table = await screen.findByRole('table', { name: /Measurements for besylate/ });
     expect(within(table).getByText(/solid left: salt/)).toBeInTheDocument();
   });
 
@@ -84,7 +84,7 @@ describe('Bench data: how a solubility was read', () => {
     });
     const user = userEvent.setup();
     render(<BenchWorkspace project={project} />);
-    const table = await screen.findByRole('table', { name: /Measurements for Besylate/ });
+    const table = await screen.findByRole('table', { name: /Measurements for besylate/ });
     await within(table).findByText('limits: free form', undefined, { timeout: 15000 });
     expect(within(table).getByText(/S₀ ≈ 0\.033 mg\/mL/)).toBeInTheDocument();
     await user.click(within(table).getByRole('button', { name: 'Use as S₀' }));
