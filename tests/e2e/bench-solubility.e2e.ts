@@ -23,14 +23,14 @@ describe('bench solubility read by what it measures (production build)', () => {
     await page.getByText('Demorazine is fictional').waitFor();
     await area(page, 'Bench data');
     const nav = page.getByRole('navigation', { name: 'Shortlisted candidates' });
-    await nav.getByRole('button', { name: /Tosylate/ }).click();
-    const form = page.getByRole('form', { name: /New measurement for Tosylate/ });
+    await nav.getByRole('button', { name: /tosylate/i }).click();
+    const form = page.getByRole('form', { name: /New measurement for tosylate/ });
     await form.getByLabel(/^Solubility/).fill('0.13');
     await form.getByLabel('pH at equilibrium').fill('7.6');
     await form.getByLabel(/^Temperature/).fill('37');
     await form.getByRole('button', { name: 'Save measurement' }).click();
-    await page.getByText(/Saved: solubility for Tosylate/).waitFor();
-    const table = page.getByRole('table', { name: /Measurements for Tosylate/ });
+    await page.getByText(/Saved: solubility for tosylate/).waitFor();
+    const table = page.getByRole('table', { name: /Measurements for tosylate/ });
     await table.getByText('limits: free form').waitFor({ timeout: 30_000 });
     await expect(table.textContent()).resolves.toMatch(/implies S₀ ≈ 0\.0[23]\d* mg\/mL/);
     await expect(table.getByRole('button', { name: 'Use as S₀' }).count()).resolves.toBe(1);

@@ -42,7 +42,7 @@ describe('the salt screen in the browser (production build)', () => {
     await area(page, 'Ranking');
     const summary = page.getByRole('table', { name: /Salt screen: what the wells gave/ });
     await summary.waitFor({ timeout: 30_000 });
-    const row = summary.getByRole('row', { name: /Mesylate/ });
+    const row = summary.getByRole('row', { name: /mesylate/i });
     await expect(row.textContent()).resolves.toMatch(
       /1 of 4.*1.*crystalline solid \(A5, m\.p\. 205 °C\)/,
     );
