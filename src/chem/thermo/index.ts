@@ -61,6 +61,7 @@ export {
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
 export { relativeSolutionEnthalpyKJ, type RelativeCandidate } from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
+export { calibratedMethodName } from './lattice-estimate';
 export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
 export {
   validationReport,
