@@ -59,7 +59,11 @@ export {
   type SolutionCycleInput,
 } from './models/cycle/cycle';
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
-export { relativeSolutionEnthalpyKJ, type RelativeCandidate } from './models/solution/relative';
+export {
+  relativeSolutionEnthalpyKJ,
+  solutionEnthalpiesRelativeToMedianKJ,
+  type RelativeCandidate,
+} from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
 export { calibratedMethodName } from './lattice-estimate';
 export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
