@@ -35,6 +35,7 @@ export {
   VBT_CONSTANTS,
 } from './models/vbt/vbt';
 export { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
+export { schroderVanLaarLnMoleFraction } from './models/fusion/schroder-van-laar';
 export {
   vanDerWaalsVolumeA3,
   radiusFromVolumeA,
