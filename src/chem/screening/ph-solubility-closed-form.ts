@@ -90,24 +90,6 @@ export function phMaxAcid(pKa: number, intrinsicM: number, kspM2: number, common
   return pKa - Math.log10(intrinsicM / commonIonSaltIonM(kspM2, commonIonM));
 }
 
-/**
- * Solubility of a weak base over pH with a 1:1 salt (no background counter-ion): the lower of the
- * two branches, which is the thermodynamically stable solid at that pH.
- */
-export function baseWithSaltSolubilityM(
-  intrinsicM: number,
-  pKa: number,
-  kspM2: number,
-  pH: number,
-  commonIonM = 0,
-): { solubilityM: number; solid: 'salt' | 'free-form' } {
-  const free = freeBaseSolubilityM(intrinsicM, pKa, pH);
-  const salt = saltLimitedBaseSolubilityM(kspM2, pKa, pH, commonIonM);
-  return salt < free
-    ? { solubilityM: salt, solid: 'salt' }
-    : { solubilityM: free, solid: 'free-form' };
-}
-
 /** pH_max of a 1:1 salt of a weak base or acid with a single salt-forming pKa (dispatches to the two forms above). */
 export function phMax(
   kind: 'base' | 'acid',

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  baseWithSaltSolubilityM,
   commonIonSaltIonM,
   freeAcidSolubilityM,
   freeBaseSolubilityM,
@@ -74,12 +73,18 @@ describe('closed-form 1:1 relations (Bogardus & Blackwood 1979; Serajuddin 2007)
     const inGastric = saltLimitedBaseSolubilityM(1e-3, 8, 1.2, 0.12);
     expect(inGastric).toBeLessThan(inWater);
   });
-  it('takes the lower branch as the solid phase', () => {
-    const s0 = 1e-5;
-    const r1 = baseWithSaltSolubilityM(s0, 8, 1e-4, 3);
-    const r2 = baseWithSaltSolubilityM(s0, 8, 1e-4, 7.5);
-    expect(r1.solid).toBe('salt');
-    expect(r2.solid).toBe('free-form');
+  it('the profile takes the lower branch as the solid phase (salt below pH_max 4.5, free form above)', () => {
+    const drug = { kind: 'base' as const, pKas: [8], ionCharge: 1 };
+    const salt = {
+      counterIon: STRONG_MONOPROTIC,
+      counterIonCharge: -1,
+      drugPerSalt: 1,
+      counterIonPerSalt: 1,
+      log10Ksp: -3,
+    };
+    const p = phSolubilityProfile(drug, -5, salt);
+    expect(p.points.find((q) => q.pH === 3)!.solid).toBe('salt');
+    expect(p.points.find((q) => q.pH === 7.5)!.solid).toBe('free-form');
   });
 });
 
