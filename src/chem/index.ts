@@ -3,6 +3,7 @@
  * Each area of the core keeps its own index file; add one export line per area here.
  */
 export * from './constants/physical';
+export * from './constants/water';
 export * from './units';
 export * from './result';
 export * from './thermo';

@@ -36,6 +36,44 @@ describe('saltsmith lattice', () => {
     expect(Math.abs(j.latticeEnthalpyKJ.value / 2255 - 1)).toBeLessThan(0.08);
   });
 
+  it('--method kapustinskii names its calibrated figure "kapustinskii (calibrated)" and shows the bare model beside it', async () => {
+    const { code, out } = await run([
+      'lattice',
+      '--cation',
+      'Na+',
+      '--anion',
+      'Cl-',
+      '--method',
+      'kapustinskii',
+      '--json',
+    ]);
+    expect(code).toBe(0);
+    const j = JSON.parse(out);
+    expect(j.latticeCalibration.applied).toBe(true);
+    expect(j.latticeEnthalpyKJ.method).toBe('kapustinskii (calibrated)');
+    expect(j.rawLatticeEnthalpyKJ.method).toBe('kapustinskii');
+    // Bare model, hand computation with Shannon 1976 CN VI radii (Na⁺ 1.02, Cl⁻ 1.81 Å):
+    // 1214·2/2.83·(1 − 0.345/2.83) − RT = 753.36 − 2.48 = 750.88 kJ/mol.
+    expect(j.rawLatticeEnthalpyKJ.value).toBeCloseTo(750.88, 1);
+    expect(j.latticeEnthalpyKJ.value).toBeCloseTo(
+      j.latticeCalibration.factor * j.rawLatticeEnthalpyKJ.value,
+      6,
+    );
+    const text = await run([
+      'lattice',
+      '--cation',
+      'Na+',
+      '--anion',
+      'Cl-',
+      '--method',
+      'kapustinskii',
+    ]);
+    expect(text.out).toMatch(
+      /ΔH_L \(dissociation, > 0\)\s+\d+ ± \d+ kJ\/mol \[kapustinskii \(calibrated\)\]/,
+    );
+    expect(text.out).toMatch(/ΔH_L before calibration\s+751 ± \d+ kJ\/mol \[kapustinskii\]/);
+  });
+
   it('runs Born–Mayer with --structure and --volume (CaF₂)', async () => {
     // V_m = a³/4 with a = 5.463 Å (Wyckoff 1963); Born–Haber 2635 kJ/mol (Wagman 1982 ΔfH° + CRC IE/EA).
     const { code, out } = await run([

@@ -136,6 +136,20 @@ describe('saltsmith eval: "kind":"ph-solubility"', () => {
     expect(r.points).toHaveLength(71);
     expect(r.phMaxClosedForm1to1).toBeCloseTo(phMaxBase(8, 1e-5, 1e-3), 12);
     expect(Math.abs(r.phMax - r.phMaxClosedForm1to1)).toBeLessThan(1e-3);
+    // Hand computation: 8 + log₁₀(1e-5/√1e-3) = 4.500.
+    expect(r.phMaxClosedForm1to1).toBeCloseTo(4.5, 3);
+  });
+  it('the closed form takes the common ion the request passes: 5.038 with 0.1 M chloride, as the mass balance', async () => {
+    const r = (await evaluateRequest({
+      kind: 'ph-solubility',
+      drug: { kind: 'base', pKas: [8], log10IntrinsicM: -5 },
+      salt: { counterIon: 'chloride', log10Ksp: -3 },
+      commonIonM: 0.1,
+    })) as { phMax: number; phMaxClosedForm1to1: number };
+    // Hand computation: [BH⁺] = (−0.1 + √(0.01 + 0.004))/2 = 0.0091608 M;
+    // pH_max = 8 + log₁₀(1e-5/0.0091608) = 8 − 2.96194 = 5.038.
+    expect(r.phMaxClosedForm1to1).toBeCloseTo(5.038, 3);
+    expect(r.phMax).toBeCloseTo(5.038, 2);
   });
   it('rejects a pH outside 0–14', async () => {
     await expect(

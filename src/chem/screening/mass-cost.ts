@@ -1,10 +1,6 @@
 import { ChemInputError, requireFiniteInRange } from '../result';
 
-/**
- * Molar mass of water, g/mol, from the IUPAC standard atomic weights (conventional values
- * H 1.008, O 15.999; IUPAC CIAAW 2021).
- */
-export const WATER_MOLAR_MASS_G_PER_MOL = 2 * 1.008 + 15.999;
+import { WATER_MOLAR_MASS_G_PER_MOL } from '../constants/water';
 
 export interface SaltMassInput {
   /** Molar mass of the free (neutral) drug, g/mol — the dose is expressed as free form. */

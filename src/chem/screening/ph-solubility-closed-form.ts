@@ -71,36 +71,23 @@ export function saltLimitedAcidSolubilityM(
   return commonIonSaltIonM(kspM2, commonIonM) * (1 + 10 ** (pKa - pH));
 }
 
-/** pH_max of a weak base's 1:1 salt: pKa + log₁₀(S₀/√K_sp) (Bogardus & Blackwood 1979). */
-export function phMaxBase(pKa: number, intrinsicM: number, kspM2: number): number {
-  requirePositive('intrinsicSolubility', intrinsicM, 'mol/L');
-  requirePositive('ksp', kspM2, 'mol²/L²');
-  return pKa + Math.log10(intrinsicM / Math.sqrt(kspM2));
-}
-
-/** pH_max of a weak acid's 1:1 salt: pKa − log₁₀(S₀/√K_sp). */
-export function phMaxAcid(pKa: number, intrinsicM: number, kspM2: number): number {
-  requirePositive('intrinsicSolubility', intrinsicM, 'mol/L');
-  requirePositive('ksp', kspM2, 'mol²/L²');
-  return pKa - Math.log10(intrinsicM / Math.sqrt(kspM2));
-}
-
 /**
- * Solubility of a weak base over pH with a 1:1 salt (no background counter-ion): the lower of the
- * two branches, which is the thermodynamically stable solid at that pH.
+ * pH_max of a weak base's 1:1 salt: pKa + log₁₀(S₀/[BH⁺]), where [BH⁺] is the salt-forming ion's
+ * concentration at saturation, (−c + √(c² + 4K_sp))/2 with c mol/L of the counter-ion already in the
+ * medium ({@link commonIonSaltIonM}); without a common ion [BH⁺] = √K_sp and this is
+ * pKa + log₁₀(S₀/√K_sp) (Bogardus & Blackwood 1979, J. Pharm. Sci. 68, 188; the common-ion form follows
+ * from the same two branches, S₀(1 + 10^(pKa − pH)) = [BH⁺](1 + 10^(pH − pKa)), solved where the
+ * dissolved drug is mostly ionised).
  */
-export function baseWithSaltSolubilityM(
-  intrinsicM: number,
-  pKa: number,
-  kspM2: number,
-  pH: number,
-  commonIonM = 0,
-): { solubilityM: number; solid: 'salt' | 'free-form' } {
-  const free = freeBaseSolubilityM(intrinsicM, pKa, pH);
-  const salt = saltLimitedBaseSolubilityM(kspM2, pKa, pH, commonIonM);
-  return salt < free
-    ? { solubilityM: salt, solid: 'salt' }
-    : { solubilityM: free, solid: 'free-form' };
+export function phMaxBase(pKa: number, intrinsicM: number, kspM2: number, commonIonM = 0): number {
+  requirePositive('intrinsicSolubility', intrinsicM, 'mol/L');
+  return pKa + Math.log10(intrinsicM / commonIonSaltIonM(kspM2, commonIonM));
+}
+
+/** pH_max of a weak acid's 1:1 salt: pKa − log₁₀(S₀/[A⁻]), [A⁻] as in {@link phMaxBase} (√K_sp without a common ion). */
+export function phMaxAcid(pKa: number, intrinsicM: number, kspM2: number, commonIonM = 0): number {
+  requirePositive('intrinsicSolubility', intrinsicM, 'mol/L');
+  return pKa - Math.log10(intrinsicM / commonIonSaltIonM(kspM2, commonIonM));
 }
 
 /** pH_max of a 1:1 salt of a weak base or acid with a single salt-forming pKa (dispatches to the two forms above). */
@@ -109,6 +96,9 @@ export function phMax(
   pKa: number,
   intrinsicM: number,
   kspM2: number,
+  commonIonM = 0,
 ): number {
-  return kind === 'base' ? phMaxBase(pKa, intrinsicM, kspM2) : phMaxAcid(pKa, intrinsicM, kspM2);
+  return kind === 'base'
+    ? phMaxBase(pKa, intrinsicM, kspM2, commonIonM)
+    : phMaxAcid(pKa, intrinsicM, kspM2, commonIonM);
 }

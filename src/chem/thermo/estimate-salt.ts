@@ -5,7 +5,7 @@
  * which also states the sign convention).
  */
 import { ChemInputError } from '../result';
-import { requireBalanced, requireIon } from './lattice';
+import { requireBalanced, requireIon } from './lattice-inputs';
 import type { SaltThermoRequest } from './thermo.types';
 import { assembleSaltThermo, type CalibratedSaltThermoResult } from './hess-law-assembly';
 import type { LatticeCalibrationOptions } from './lattice-estimate';

@@ -35,6 +35,7 @@ export {
   VBT_CONSTANTS,
 } from './models/vbt/vbt';
 export { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
+export { schroderVanLaarLnMoleFraction } from './models/fusion/schroder-van-laar';
 export {
   vanDerWaalsVolumeA3,
   radiusFromVolumeA,
@@ -59,8 +60,13 @@ export {
   type SolutionCycleInput,
 } from './models/cycle/cycle';
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
-export { relativeSolutionEnthalpyKJ, type RelativeCandidate } from './models/solution/relative';
+export {
+  relativeSolutionEnthalpyKJ,
+  solutionEnthalpiesRelativeToMedianKJ,
+  type RelativeCandidate,
+} from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
+export { calibratedMethodName } from './lattice-estimate';
 export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
 export {
   validationReport,

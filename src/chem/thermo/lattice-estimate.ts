@@ -26,6 +26,14 @@ const CALIBRATION_SOURCE =
   'calibration factor fitted on the bundled lattice reference salts (Born–Haber halides from the NBS tables of Wagman et al. 1982 and CRC/NIST ionisation energies and electron affinities; solution-cycle salts from NBS ΔfH° and Marcus hydration enthalpies) by calibration/fit-calibration.ts';
 
 /**
+ * The method name a calibrated lattice estimate carries: the bare model's id with " (calibrated)", so a
+ * figure multiplied by a calibration factor never passes under the bare method's name.
+ */
+export function calibratedMethodName(method: LatticeMethod): string {
+  return `${method} (calibrated)`;
+}
+
+/**
  * Lattice enthalpy by a named method with its measured uncertainty: calibrated by default (factor per
  * method and charge class, uncertainty = the leave-one-salt-out RMS error of the calibrated model on the
  * reference salts of the same kind), raw with `calibrate: false` or where no factor exists. `rawEstimate`
@@ -95,7 +103,7 @@ export function latticeEnthalpyEstimate(
     estimate: {
       value,
       uncertainty: value * rel,
-      method,
+      method: calibratedMethodName(method),
       sources: [...METHOD_SOURCES[method], CALIBRATION_SOURCE],
       notes,
     },

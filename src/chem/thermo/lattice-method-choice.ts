@@ -4,7 +4,7 @@
  */
 import { ChemInputError } from '../result';
 import { isStructureType } from './models/born-mayer/born-mayer';
-import { formulaUnitVolume } from './lattice';
+import { formulaUnitVolume } from './lattice-inputs';
 import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
 import { latticeEnthalpyEstimate, type LatticeCalibrationOptions } from './lattice-estimate';
 import { groupOf } from './lattice-uncertainty';

@@ -10,10 +10,10 @@ import {
 import {
   KAPUSTINSKII_K_KJ_A_PER_MOL,
   kapustinskiiPotentialKJ,
-  requireIonCharges,
 } from './models/kapustinskii/kapustinskii';
 import { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
-import { volumeFromDensityNm3, vbtPotentialKJ } from './models/vbt/vbt';
+import { vbtPotentialKJ } from './models/vbt/vbt';
+import { formulaUnitVolume, requireBalanced, requireIon } from './lattice-inputs';
 import type { LatticeMethod, SaltThermoRequest, ThermoIon } from './thermo.types';
 
 /** A raw lattice computation before calibration: U_POT, ΔH_L and what went in. */
@@ -32,110 +32,170 @@ export interface RawLattice {
   detail: string;
 }
 
-export function requireIon(ion: ThermoIon, field: string, sign: 1 | -1): ThermoIon {
-  if (!ion || typeof ion !== 'object')
-    throw new ChemInputError(
-      field,
-      'missing ion',
-      'a bundled ion id, a formula with charge, or a SMILES with charge',
-    );
-  const z = ion.charge;
-  if (
-    typeof z !== 'number' ||
-    !Number.isInteger(z) ||
-    z === 0 ||
-    Math.abs(z) > 4 ||
-    Math.sign(z) !== sign
-  ) {
-    throw new ChemInputError(
-      `${field}.charge`,
-      `charge ${String(z)} is not allowed for the ${field}`,
-      sign > 0 ? 'whole numbers +1…+4' : 'whole numbers −4…−1',
-    );
-  }
-  return ion;
+/** A salt request whose ions, counts and temperature have been checked once, at the edge (rawLattice). */
+interface CheckedLatticeRequest {
+  req: SaltThermoRequest;
+  cation: ThermoIon;
+  anion: ThermoIon;
+  p: number;
+  q: number;
 }
 
-/** Check p·z₊ + q·z₋ = 0 and the counts' ranges; returns p, q. */
-export function requireBalanced(
-  req: Pick<SaltThermoRequest, 'cation' | 'anion' | 'cationsPerFormula' | 'anionsPerFormula'>,
-) {
-  const p = requireFiniteInRange('cationsPerFormula', req.cationsPerFormula, 1, 6);
-  const q = requireFiniteInRange('anionsPerFormula', req.anionsPerFormula, 1, 6);
-  if (!Number.isInteger(p) || !Number.isInteger(q))
+type LatticeOptions = {
+  kapustinskiiK?: number;
+  kapustinskiiRadii?: { cation: number; anion: number };
+};
+type PotentialPart = Omit<RawLattice, 'enthalpyKJ' | 'method'>;
+
+function kapustinskiiPart(c: CheckedLatticeRequest, opts: LatticeOptions): PotentialPart {
+  const { cation, anion, p, q } = c;
+  const rcA = opts.kapustinskiiRadii?.cation ?? cation.radiusA?.value;
+  const raA = opts.kapustinskiiRadii?.anion ?? anion.radiusA?.value;
+  if (rcA === undefined)
     throw new ChemInputError(
-      'stoichiometry',
-      'ion counts must be whole numbers',
-      'whole numbers 1–6',
+      'cation.radiusA',
+      `${cation.label} has no radius`,
+      'an ion with a radius or volume',
     );
-  if (p * req.cation.charge + q * req.anion.charge !== 0) {
+  if (raA === undefined)
     throw new ChemInputError(
-      'stoichiometry',
-      `${p}×(${req.cation.charge}) + ${q}×(${req.anion.charge}) ≠ 0: the formula unit is not neutral`,
-      'counts with p·z₊ = q·|z₋|',
+      'anion.radiusA',
+      `${anion.label} has no radius`,
+      'an ion with a radius or volume',
     );
-  }
-  return { p, q };
+  const potentialKJ = kapustinskiiPotentialKJ({
+    cationCharge: cation.charge,
+    anionCharge: anion.charge,
+    cationRadiusA: rcA,
+    anionRadiusA: raA,
+    ionsPerFormulaUnit: p + q,
+    constantKJA: opts.kapustinskiiK ?? KAPUSTINSKII_K_KJ_A_PER_MOL,
+  });
+  return {
+    potentialKJ,
+    detail: `r₊ = ${rcA.toFixed(3)} Å, r₋ = ${raA.toFixed(3)} Å, ν = ${p + q}`,
+  };
 }
 
-/** Formula-unit volume from the request: given V_m, else density + molar mass, else the ions' volumes summed. */
-export function formulaUnitVolume(
-  req: SaltThermoRequest,
-  p: number,
-  q: number,
-):
-  | { volumeNm3: number; from: 'given' | 'density' | 'ion-volumes'; relativeSigma: number }
-  | undefined {
-  if (req.formulaUnitVolumeNm3 !== undefined) {
+/** Shortest cation–anion distance for Born–Mayer/Born–Landé: from a measured volume, else the radii. */
+function nearestDistance(
+  c: CheckedLatticeRequest,
+  s: ReturnType<typeof requireStructureType>,
+): { nearestA: number; from: 'volume' | 'radii' } {
+  const vol = formulaUnitVolume(c.req, c.p, c.q);
+  if (vol && vol.from !== 'ion-volumes') {
+    const nearestA = nearestDistanceFromVolumeA(s, vol.volumeNm3);
+    if (nearestA !== undefined) return { nearestA, from: 'volume' };
+  }
+  const rcA = c.cation.crystalRadiusA?.value ?? c.cation.radiusA?.value;
+  const raA = c.anion.crystalRadiusA?.value ?? c.anion.radiusA?.value;
+  if (rcA === undefined || raA === undefined)
+    throw new ChemInputError(
+      'radius',
+      'Born–Mayer needs a cell volume or both ions’ radii',
+      'a formula-unit volume, a density, or bundled ions',
+    );
+  return { nearestA: rcA + raA, from: 'radii' };
+}
+
+function bornPart(c: CheckedLatticeRequest, method: 'born-mayer' | 'born-lande'): PotentialPart {
+  if (c.req.structureType === undefined)
+    throw new ChemInputError(
+      'structureType',
+      `${method} needs a structure type`,
+      'rock-salt, caesium-chloride, zinc-blende, wurtzite, fluorite, rutile',
+    );
+  const s = requireStructureType(c.req.structureType);
+  const { nearestA, from } = nearestDistance(c, s);
+  const base = {
+    cationCharge: c.cation.charge,
+    anionCharge: c.anion.charge,
+    structureType: s,
+    nearestDistanceA: nearestA,
+  };
+  if (method === 'born-mayer') {
     return {
-      volumeNm3: requireFiniteInRange(
-        'formulaUnitVolumeNm3',
-        req.formulaUnitVolumeNm3,
-        0.005,
-        10,
-        'nm³',
-      ),
-      from: 'given',
-      relativeSigma: 0,
+      potentialKJ: bornMayerPotentialKJ(base),
+      nearestDistanceA: nearestA,
+      distanceFrom: from,
+      detail: `${s}, r₀ = ${nearestA.toFixed(3)} Å (${from === 'volume' ? 'from the cell volume' : 'sum of radii'})`,
     };
   }
-  if (req.densityGPerCm3 !== undefined) {
-    const saltGPerMol =
-      req.molarMassGPerMol ??
-      (req.cation.molarMassGPerMol !== undefined && req.anion.molarMassGPerMol !== undefined
-        ? p * req.cation.molarMassGPerMol + q * req.anion.molarMassGPerMol
-        : undefined);
-    if (saltGPerMol === undefined)
+  const nc = c.cation.bornExponent;
+  const na = c.anion.bornExponent;
+  if (nc === undefined || na === undefined)
+    throw new ChemInputError(
+      'bornExponent',
+      'Born–Landé needs monatomic ions with a noble-gas shell',
+      'bundled monatomic ions',
+    );
+  const n = (c.p * nc + c.q * na) / (c.p + c.q);
+  return {
+    potentialKJ: bornLandePotentialKJ({ ...base, bornExponent: n }),
+    nearestDistanceA: nearestA,
+    distanceFrom: from,
+    detail: `${s}, r₀ = ${nearestA.toFixed(3)} Å, n = ${n.toFixed(2)}`,
+  };
+}
+
+function vbtPart(c: CheckedLatticeRequest): PotentialPart {
+  const vol = formulaUnitVolume(c.req, c.p, c.q);
+  if (!vol)
+    throw new ChemInputError(
+      'formulaUnitVolumeNm3',
+      'VBT needs a formula-unit volume, a density, or ions with volumes',
+      '0.005–10 nm³',
+    );
+  const r = vbtPotentialKJ({
+    cationCharge: c.cation.charge,
+    anionCharge: c.anion.charge,
+    cationsPerFormula: c.p,
+    anionsPerFormula: c.q,
+    formulaUnitVolumeNm3: vol.volumeNm3,
+  });
+  return {
+    potentialKJ: r.valueKJ,
+    volumeNm3: vol.volumeNm3,
+    volumeFrom: vol.from,
+    volumeRelU: vol.relativeSigma,
+    detail: `V_m = ${vol.volumeNm3.toFixed(4)} nm³ (${vol.from}); ${r.form}`,
+  };
+}
+
+function potentialPart(
+  c: CheckedLatticeRequest,
+  method: LatticeMethod,
+  opts: LatticeOptions,
+): PotentialPart {
+  switch (method) {
+    case 'kapustinskii':
+      return kapustinskiiPart(c, opts);
+    case 'born-mayer':
+    case 'born-lande':
+      return bornPart(c, method);
+    case 'vbt':
+      return vbtPart(c);
+    default:
       throw new ChemInputError(
-        'molarMassGPerMol',
-        'a density needs the molar mass of the salt',
-        'g/mol, 1–10000',
+        'method',
+        `unknown method ${String(method)}`,
+        'auto, kapustinskii, born-mayer, born-lande, vbt',
       );
-    return {
-      volumeNm3: volumeFromDensityNm3(saltGPerMol, req.densityGPerCm3),
-      from: 'density',
-      relativeSigma: 0,
-    };
   }
-  const vc = req.cation.volumeNm3;
-  const va = req.anion.volumeNm3;
-  if (vc && va) {
-    const volumeNm3 = p * vc.value + q * va.value;
-    const sigmaNm3 = Math.sqrt((p * vc.uncertainty) ** 2 + (q * va.uncertainty) ** 2);
-    return { volumeNm3, from: 'ion-volumes', relativeSigma: sigmaNm3 / volumeNm3 };
-  }
-  return undefined;
 }
 
-/** Compute the lattice by one named method, without calibration. Throws ChemInputError if the inputs do not allow it. */
+/**
+ * Compute the lattice by one named method, without calibration. Throws ChemInputError if the inputs do
+ * not allow it. The ions (charge sign and range, by requireIon), the counts (neutral formula unit) and
+ * the temperature are checked here once; the steps below take the checked values.
+ */
 export function rawLattice(
   req: SaltThermoRequest,
   method: LatticeMethod,
-  opts: { kapustinskiiK?: number; kapustinskiiRadii?: { cation: number; anion: number } } = {},
+  opts: LatticeOptions = {},
 ): RawLattice {
   const cation = requireIon(req.cation, 'cation', 1);
   const anion = requireIon(req.anion, 'anion', -1);
-  requireIonCharges(cation.charge, anion.charge);
   const { p, q } = requireBalanced(req);
   const temperatureK = requireFiniteInRange(
     'temperatureK',
@@ -144,127 +204,9 @@ export function rawLattice(
     400,
     'K',
   );
+  const part = potentialPart({ req, cation, anion, p, q }, method, opts);
   const correctionKJ = latticeEnthalpyCorrectionKJ(p, cation.shape, q, anion.shape, temperatureK);
-  const done = (partial: Omit<RawLattice, 'enthalpyKJ' | 'method'>): RawLattice => ({
-    method,
-    ...partial,
-    enthalpyKJ: partial.potentialKJ + correctionKJ,
-  });
-  switch (method) {
-    case 'kapustinskii': {
-      const rcA = opts.kapustinskiiRadii?.cation ?? cation.radiusA?.value;
-      const raA = opts.kapustinskiiRadii?.anion ?? anion.radiusA?.value;
-      if (rcA === undefined)
-        throw new ChemInputError(
-          'cation.radiusA',
-          `${cation.label} has no radius`,
-          'an ion with a radius or volume',
-        );
-      if (raA === undefined)
-        throw new ChemInputError(
-          'anion.radiusA',
-          `${anion.label} has no radius`,
-          'an ion with a radius or volume',
-        );
-      const potentialKJ = kapustinskiiPotentialKJ({
-        cationCharge: cation.charge,
-        anionCharge: anion.charge,
-        cationRadiusA: rcA,
-        anionRadiusA: raA,
-        ionsPerFormulaUnit: p + q,
-        constantKJA: opts.kapustinskiiK ?? KAPUSTINSKII_K_KJ_A_PER_MOL,
-      });
-      return done({
-        potentialKJ,
-        detail: `r₊ = ${rcA.toFixed(3)} Å, r₋ = ${raA.toFixed(3)} Å, ν = ${p + q}`,
-      });
-    }
-    case 'born-mayer':
-    case 'born-lande': {
-      if (req.structureType === undefined)
-        throw new ChemInputError(
-          'structureType',
-          `${method} needs a structure type`,
-          'rock-salt, caesium-chloride, zinc-blende, wurtzite, fluorite, rutile',
-        );
-      const s = requireStructureType(req.structureType);
-      const vol = formulaUnitVolume(req, p, q);
-      let nearestA: number | undefined;
-      let from: 'volume' | 'radii' = 'volume';
-      if (vol && vol.from !== 'ion-volumes')
-        nearestA = nearestDistanceFromVolumeA(s, vol.volumeNm3);
-      if (nearestA === undefined) {
-        const rcA = cation.crystalRadiusA?.value ?? cation.radiusA?.value;
-        const raA = anion.crystalRadiusA?.value ?? anion.radiusA?.value;
-        if (rcA === undefined || raA === undefined)
-          throw new ChemInputError(
-            'radius',
-            'Born–Mayer needs a cell volume or both ions’ radii',
-            'a formula-unit volume, a density, or bundled ions',
-          );
-        nearestA = rcA + raA;
-        from = 'radii';
-      }
-      const base = {
-        cationCharge: cation.charge,
-        anionCharge: anion.charge,
-        structureType: s,
-        nearestDistanceA: nearestA,
-      };
-      if (method === 'born-mayer') {
-        return done({
-          potentialKJ: bornMayerPotentialKJ(base),
-          nearestDistanceA: nearestA,
-          distanceFrom: from,
-          detail: `${s}, r₀ = ${nearestA.toFixed(3)} Å (${from === 'volume' ? 'from the cell volume' : 'sum of radii'})`,
-        });
-      }
-      const nc = cation.bornExponent;
-      const na = anion.bornExponent;
-      if (nc === undefined || na === undefined)
-        throw new ChemInputError(
-          'bornExponent',
-          'Born–Landé needs monatomic ions with a noble-gas shell',
-          'bundled monatomic ions',
-        );
-      const n = (p * nc + q * na) / (p + q);
-      return done({
-        potentialKJ: bornLandePotentialKJ({ ...base, bornExponent: n }),
-        nearestDistanceA: nearestA,
-        distanceFrom: from,
-        detail: `${s}, r₀ = ${nearestA.toFixed(3)} Å, n = ${n.toFixed(2)}`,
-      });
-    }
-    case 'vbt': {
-      const vol = formulaUnitVolume(req, p, q);
-      if (!vol)
-        throw new ChemInputError(
-          'formulaUnitVolumeNm3',
-          'VBT needs a formula-unit volume, a density, or ions with volumes',
-          '0.005–10 nm³',
-        );
-      const r = vbtPotentialKJ({
-        cationCharge: cation.charge,
-        anionCharge: anion.charge,
-        cationsPerFormula: p,
-        anionsPerFormula: q,
-        formulaUnitVolumeNm3: vol.volumeNm3,
-      });
-      return done({
-        potentialKJ: r.valueKJ,
-        volumeNm3: vol.volumeNm3,
-        volumeFrom: vol.from,
-        volumeRelU: vol.relativeSigma,
-        detail: `V_m = ${vol.volumeNm3.toFixed(4)} nm³ (${vol.from}); ${r.form}`,
-      });
-    }
-    default:
-      throw new ChemInputError(
-        'method',
-        `unknown method ${String(method)}`,
-        'auto, kapustinskii, born-mayer, born-lande, vbt',
-      );
-  }
+  return { method, ...part, enthalpyKJ: part.potentialKJ + correctionKJ };
 }
 
 export { isStructureType };

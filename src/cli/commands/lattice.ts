@@ -117,6 +117,9 @@ export const latticeCommand: CliCommand = defineCommand('lattice', {
     const lines = [
       `${salt}  (${st.cations} ${cat.label} : ${st.anions} ${an.label})`,
       `  ΔH_L (dissociation, > 0)  ${fmt(r.latticeEnthalpyKJ)}`,
+      ...(r.latticeCalibration.applied
+        ? [`  ΔH_L before calibration   ${fmt(r.rawLatticeEnthalpyKJ)}`]
+        : []),
       `  ΔH_hyd ${cat.label.padEnd(18)} ${fmt(r.cationHydrationKJ)}`,
       `  ΔH_hyd ${an.label.padEnd(18)} ${fmt(r.anionHydrationKJ)}`,
       `  ΔH_sol (infinite dilution) ${fmt(r.solutionEnthalpyKJ)}`,

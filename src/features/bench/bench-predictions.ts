@@ -154,8 +154,7 @@ export function backedOutLattice(
   try {
     const lattice = latticeFromSolutionEnthalpy({
       solutionEnthalpyKJ: last.value!,
-      // Calorimetric repeatability taken as 2 kJ/mol (our assumption, as in the screening core).
-      solutionUncertaintyKJ: 2,
+      // No σ is typed in here: the record states none, so the core's ±1σ is the hydration terms' alone (and says so).
       cationHydration: e.thermo.cationHydrationKJ,
       anionHydration: e.thermo.anionHydrationKJ,
       cationsPerFormula: e.cationsPerFormula,

@@ -7,7 +7,6 @@ import {
   doseNumber,
   gseLog10IntrinsicSolubilityM,
   hygroscopicityClass,
-  idealSolubilityMoleFraction,
   saltDeltaPka,
   saltFormationVerdict,
   saltMassPerDoseMg,
@@ -15,7 +14,6 @@ import {
   solubilityClass,
   vantHoffFit,
   vantHoffLine,
-  WATER_MOLAR_MASS_G_PER_MOL,
   debyeHuckelA,
   daviesLog10Gamma,
   phMax,
@@ -24,6 +22,8 @@ import {
 } from '@/chem/screening';
 import { ChemInputError } from '@/chem/result';
 import { GAS_CONSTANT_KJ_PER_MOL_K } from '@/chem/constants/physical';
+import { WATER_MOLAR_MASS_G_PER_MOL } from '@/chem/constants/water';
+import { schroderVanLaarLnMoleFraction } from '@/chem/thermo';
 
 describe('ΔpKa rule', () => {
   it('ΔpKa = pKa(BH⁺) − pKa(acid)', () => {
@@ -225,11 +225,14 @@ describe('intrinsic solubility', () => {
     // liquids: the melting term vanishes
     expect(gseLog10IntrinsicSolubilityM(-10, 1).value).toBeCloseTo(-0.5, 12);
   });
-  it('ideal solubility is 1 at the melting point and falls below it (Schröder–van Laar)', () => {
-    expect(idealSolubilityMoleFraction(25, 400, 400)).toBe(1);
-    const x = idealSolubilityMoleFraction(25, 400, 300);
-    expect(Math.log(x)).toBeCloseTo(-(25000 / 8.314462618) * (1 / 300 - 1 / 400), 9);
-    expect(() => idealSolubilityMoleFraction(25, 400, -5)).toThrow(ChemInputError);
+  it('Schröder–van Laar: ln x = 0 at the melting point; −2.5056 for ΔH_fus 25 kJ/mol, T_m 400 K, T 300 K', () => {
+    expect(schroderVanLaarLnMoleFraction(25000, 400, 400)).toBe(0);
+    // Hand computation (ΔC_p = 0): −(25000/8.314462618)·(1/300 − 1/400) = −3006.81 · 8.33333e-4 = −2.50567.
+    expect(schroderVanLaarLnMoleFraction(25000, 400, 300)).toBeCloseTo(-2.50567, 4);
+    // ΔC_p = ΔS_m: −(25000/400/8.314462618)·ln(400/300) = −7.51702 · 0.287682 = −2.16251.
+    expect(
+      schroderVanLaarLnMoleFraction(25000, 400, 300, 'equal-to-entropy-of-melting'),
+    ).toBeCloseTo(-2.16251, 4);
   });
 });
 

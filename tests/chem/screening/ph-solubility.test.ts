@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  baseWithSaltSolubilityM,
   commonIonSaltIonM,
   freeAcidSolubilityM,
   freeBaseSolubilityM,
@@ -74,12 +73,18 @@ describe('closed-form 1:1 relations (Bogardus & Blackwood 1979; Serajuddin 2007)
     const inGastric = saltLimitedBaseSolubilityM(1e-3, 8, 1.2, 0.12);
     expect(inGastric).toBeLessThan(inWater);
   });
-  it('takes the lower branch as the solid phase', () => {
-    const s0 = 1e-5;
-    const r1 = baseWithSaltSolubilityM(s0, 8, 1e-4, 3);
-    const r2 = baseWithSaltSolubilityM(s0, 8, 1e-4, 7.5);
-    expect(r1.solid).toBe('salt');
-    expect(r2.solid).toBe('free-form');
+  it('the profile takes the lower branch as the solid phase (salt below pH_max 4.5, free form above)', () => {
+    const drug = { kind: 'base' as const, pKas: [8], ionCharge: 1 };
+    const salt = {
+      counterIon: STRONG_MONOPROTIC,
+      counterIonCharge: -1,
+      drugPerSalt: 1,
+      counterIonPerSalt: 1,
+      log10Ksp: -3,
+    };
+    const p = phSolubilityProfile(drug, -5, salt);
+    expect(p.points.find((q) => q.pH === 3)!.solid).toBe('salt');
+    expect(p.points.find((q) => q.pH === 7.5)!.solid).toBe('free-form');
   });
 });
 
@@ -159,6 +164,38 @@ describe('numerical mass/charge-balance solver', () => {
     const closed = phMaxBase(8, 1e-5, 1e-3);
     expect(num).not.toBeNull();
     expect(Math.abs(num! - closed)).toBeLessThan(1e-3);
+  });
+  it('pH_max is 4.5 for pKa 8, S₀ 1e-5 M, K_sp 1e-3 (closed form and mass balance)', () => {
+    // Hand computation (Bogardus & Blackwood 1979 closed form): 8 + log₁₀(1e-5/√1e-3)
+    //   = 8 + log₁₀(1e-5/0.0316228) = 8 − 3.5 = 4.500.
+    expect(phMaxBase(8, 1e-5, 1e-3)).toBeCloseTo(4.5, 3);
+    const drug = { kind: 'base' as const, pKas: [8], ionCharge: 1 };
+    const salt = {
+      counterIon: STRONG_MONOPROTIC,
+      counterIonCharge: -1,
+      drugPerSalt: 1,
+      counterIonPerSalt: 1,
+      log10Ksp: -3,
+    };
+    expect(numericalPhMax(drug, -5, salt)).toBeCloseTo(4.5, 3);
+  });
+  it('with 0.1 M chloride pH_max is 5.038: the closed form with the common ion and the mass balance agree', () => {
+    // Hand computation: [BH⁺] = (−c + √(c² + 4K_sp))/2 with c = 0.1, K_sp = 1e-3:
+    //   √(0.01 + 0.004) = √0.014 = 0.1183216; (0.1183216 − 0.1)/2 = 0.0091608 M;
+    //   pH_max = 8 + log₁₀(1e-5/0.0091608) = 8 + log₁₀(1.09161e-3) = 8 − 2.96194 = 5.038.
+    expect(commonIonSaltIonM(1e-3, 0.1)).toBeCloseTo(0.0091608, 7);
+    expect(phMaxBase(8, 1e-5, 1e-3, 0.1)).toBeCloseTo(5.038, 3);
+    // The acid mirror: pKa − log₁₀(S₀/[A⁻]) = 4 − (−2.96194) = 6.962.
+    expect(phMaxAcid(4, 1e-5, 1e-3, 0.1)).toBeCloseTo(6.962, 3);
+    const drug = { kind: 'base' as const, pKas: [8], ionCharge: 1 };
+    const salt = {
+      counterIon: STRONG_MONOPROTIC,
+      counterIonCharge: -1,
+      drugPerSalt: 1,
+      counterIonPerSalt: 1,
+      log10Ksp: -3,
+    };
+    expect(numericalPhMax(drug, -5, salt, { commonIonM: 0.1 })).toBeCloseTo(5.038, 3);
   });
   it('2:1 salt (hemisulfate): K_sp = (2s·α_D)²·(s·α_X) at the solution', () => {
     // Sulfuric acid pKa₂ = 1.99 (CRC Handbook, "Dissociation constants of inorganic acids and bases"; from memory).

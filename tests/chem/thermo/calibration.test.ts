@@ -191,7 +191,7 @@ describe('estimateSaltThermo applies the calibration and keeps the raw figure vi
     expect(raw.rawLatticeEnthalpyKJ).toEqual(raw.latticeEnthalpyKJ);
   });
 
-  it('NaCl: the calibrated ΔH_L is nearer the Born–Haber value and its band covers it', () => {
+  it('in-sample (NaCl is one of the calibration salts): the calibrated ΔH_L is nearer the Born–Haber value and its band covers it', () => {
     // Born–Haber ΔH_L(NaCl) from the bundled cycle data (NBS ΔfH°, CRC/NIST IE, EA), ≈ 787 kJ/mol.
     const nacl = LATTICE_REFERENCE_SALTS.find((s) => s.formula === 'NaCl')!;
     const ref = referenceLatticeEnthalpyKJ(nacl).value;
@@ -201,7 +201,7 @@ describe('estimateSaltThermo applies the calibration and keeps the raw figure vi
     expect(Math.abs(cal.value - ref)).toBeLessThanOrEqual(2 * cal.uncertainty);
   });
 
-  it('NaCl: the calibrated ΔH_sol band covers the NBS +3.87 kJ/mol, narrower than raw', () => {
+  it('in-sample (NaCl is one of the calibration salts): the calibrated ΔH_sol band covers the NBS +3.87 kJ/mol, narrower than raw', () => {
     // Wagman et al. 1982: −240.12 − 167.16 + 411.15 = 3.87 kJ/mol.
     const cal = estimateSaltThermo(req).solutionEnthalpyKJ;
     const raw = estimateSaltThermo({ ...req, calibrate: false }).solutionEnthalpyKJ;
@@ -228,7 +228,7 @@ describe('estimateSaltThermo applies the calibration and keeps the raw figure vi
     expect(r.latticeEnthalpyKJ.notes!.join(' ')).toMatch(/not calibrated: fewer than/);
   });
 
-  it('sodium acetate (organic ion sized from its formula) is calibrated, covers NBS', async () => {
+  it('in-sample (sodium acetate is among the reference salts): sized from its formula, calibrated, its band covers NBS', async () => {
     // Wagman et al. 1982: ΔH_sol(NaCH₃COO) = −17.3 kJ/mol.
     const { organicIonFromFormula } = await import('@/chem');
     const acetate = organicIonFromFormula('C2H3O2', -1, { aromatic: 0, nonAromatic: 0 });

@@ -51,10 +51,11 @@ describe('organic ions', () => {
   it('radius from volume: r = (3V/4π)^(1/3)', () => {
     expect(radiusFromVolumeA((4 / 3) * Math.PI * 8e-3)).toBeCloseTo(2, 9); // 2 Å sphere = 0.0335 nm³
   });
-  it('tetramethylammonium from its formula: radius within 15 % of the thermochemical 2.34 Å', () => {
+  it('tetramethylammonium from its formula: radius within 35 % of the thermochemical 2.34 Å (a coarse size; the formula route overestimates it)', () => {
     // Thermochemical radius of N(CH₃)₄⁺, Roobottom, Jenkins, Passmore & Glasser 1999 (J. Chem. Educ. 76, 1570) — from memory.
     const ion = organicIonFromFormula('C4H12N', 1, { aromatic: 0, nonAromatic: 0 });
     expect(ion.estimatedSize).toBe(true);
+    // Measured: 3.07 Å, +31 %; the assertion states the band the model really meets.
     expect(Math.abs(ion.radiusA!.value / 2.34 - 1)).toBeLessThan(0.35);
     expect(ion.volumeNm3!.uncertainty).toBeGreaterThan(0);
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { referenceSolutionEnthalpyKJ } from '@/chem';
+import { referenceSolutionEnthalpyKJ, solutionEnthalpiesRelativeToMedianKJ } from '@/chem';
 import { SOLUTION_REFERENCE_SALTS } from '@/chem/data/thermo-reference';
 
 /**
@@ -104,5 +104,20 @@ describe('relative ΔH_sol between counter-ions of one ion', () => {
     // Per Na⁺: ΔH_sol(Na₂SO₄)/2 − ΔH_sol(NaCl); NBS (Wagman 1982): −2.42/2 − 3.87 = −5.1 kJ/mol.
     expect(d.value).toBeCloseTo(so4.solutionEnthalpyKJ.value / 2 - cl.solutionEnthalpyKJ.value, 9);
     expect(Math.abs(d.value - -5.1)).toBeLessThanOrEqual(2.5 * d.uncertainty);
+  });
+});
+
+describe('enthalpies of solution relative to the median candidate (solutionEnthalpiesRelativeToMedianKJ)', () => {
+  it('are differences from the median and drop the common drug-ion term from σ (σ² − σ_drug²)', () => {
+    // Inputs are arbitrary test numbers: the check is the arithmetic of the rule, not a model value.
+    const r = solutionEnthalpiesRelativeToMedianKJ([
+      { id: 'a', perDrugKJ: -10, perDrugSigmaKJ: 50, drugHydrationSigmaKJ: 30 },
+      { id: 'b', perDrugKJ: 5, perDrugSigmaKJ: 40, drugHydrationSigmaKJ: 30 },
+      { id: 'c', perDrugKJ: 20, perDrugSigmaKJ: 20, drugHydrationSigmaKJ: 30 },
+    ]);
+    expect(r.map((x) => x.valueKJ)).toEqual([-15, 0, 15]);
+    expect(r[0]!.sigmaKJ).toBeCloseTo(40, 10); // √(50² − 30²)
+    expect(r[1]!.sigmaKJ).toBeCloseTo(Math.sqrt(40 ** 2 - 30 ** 2), 10);
+    expect(r[2]!.sigmaKJ).toBe(0); // never negative variance
   });
 });

@@ -1,4 +1,8 @@
-import { GAS_CONSTANT_KJ_PER_MOL_K } from '../../constants/physical';
+import { WATER_MOLAR_MASS_G_PER_MOL } from '../../constants/water';
+import {
+  schroderVanLaarLnMoleFraction,
+  type FusionHeatCapacityAssumption,
+} from '../../thermo/models/fusion/schroder-van-laar';
 import { ChemInputError, requireFiniteInRange } from '../../result';
 
 /**
@@ -14,7 +18,7 @@ import { ChemInputError, requireFiniteInRange } from '../../result';
  * dissociation of a salt into ions); this module computes the crystal term only. Above T_m the
  * solid does not exist and the "ideal solubility" is 1 (complete miscibility of the melt).
  */
-export type FusionHeatCapacityAssumption = 'zero' | 'equal-to-entropy-of-melting';
+export type { FusionHeatCapacityAssumption };
 
 export interface IdealSolubilityInput {
   /** Melting point of the crystal, K. */
@@ -35,9 +39,6 @@ export interface IdealSolubility {
   log10MolPerL: number;
   heatCapacity: FusionHeatCapacityAssumption;
 }
-
-/** Molar mass of water, g/mol (IUPAC 2021 standard atomic weights: 2 × 1.008 + 15.999). */
-export const WATER_MOLAR_MASS_G_PER_MOL = 18.015;
 
 /**
  * Mole fraction → mol/L for a dilute aqueous solution: c = x/(1 − x)·(1000 g/L)/M_water.
@@ -65,11 +66,7 @@ export function idealSolubility(input: IdealSolubilityInput): IdealSolubility {
       "'zero' or 'equal-to-entropy-of-melting'",
     );
   }
-  const r = GAS_CONSTANT_KJ_PER_MOL_K;
-  let lnX: number;
-  if (t >= tm) lnX = 0;
-  else if (heatCapacity === 'zero') lnX = -(dh / r) * (1 / t - 1 / tm);
-  else lnX = -(dh / tm / r) * Math.log(tm / t);
+  const lnX = schroderVanLaarLnMoleFraction(dh * 1000, tm, t, heatCapacity);
   // Keep x strictly below 1 for the molar conversion (a melt at or above T_m mixes completely).
   const x = Math.min(Math.exp(lnX), 0.999);
   return {

@@ -1,4 +1,4 @@
-import { GAS_CONSTANT_J_PER_MOL_K } from '../../constants/physical';
+import { schroderVanLaarLnMoleFraction } from '../../thermo/models/fusion/schroder-van-laar';
 import type { CounterIonDescriptors } from './counter-ion-descriptors';
 
 /**
@@ -127,13 +127,11 @@ export const WALDEN_ENTROPY_OF_MELTING_J_PER_MOL_K = 56.5;
 export function log10IdealMoleFraction(input: SaltSolubilityInput, temperatureK = 298.15): number {
   const tm = input.meltingPointK;
   if (tm === null || tm === undefined || !Number.isFinite(tm)) return Number.NaN;
-  if (temperatureK >= tm) return 0;
   const dhJ =
     input.fusionEnthalpyKJPerMol != null && Number.isFinite(input.fusionEnthalpyKJPerMol)
       ? input.fusionEnthalpyKJPerMol * 1000
       : WALDEN_ENTROPY_OF_MELTING_J_PER_MOL_K * tm;
-  const lnX = -(dhJ / GAS_CONSTANT_J_PER_MOL_K) * (1 / temperatureK - 1 / tm);
-  return lnX / Math.LN10;
+  return schroderVanLaarLnMoleFraction(dhJ, tm, temperatureK) / Math.LN10;
 }
 
 export const IDEAL_SOLUBILITY_FEATURE: SaltSolubilityFeature = {

@@ -1,5 +1,6 @@
 import type * as OpenChemLib from 'openchemlib';
 import { GAS_CONSTANT_KJ_PER_MOL_K, STANDARD_TEMPERATURE_K } from '../../constants/physical';
+import { WATER_MOLAR_MASS_G_PER_MOL } from '../../constants/water';
 import { celsiusToKelvin } from '../../units/temperature';
 import {
   formulaMolarMassGPerMol,
@@ -32,8 +33,6 @@ export interface TrainingSet {
 
 type Ocl = typeof OpenChemLib;
 
-/** Molar mass of water, g/mol (IUPAC 2021: 2 × 1.008 + 15.999). */
-const WATER_G_PER_MOL = 18.015;
 /** Temperature the published series were mostly measured at; the anchor is computed there, K. */
 const REFERENCE_TEMPERATURE_K = STANDARD_TEMPERATURE_K;
 
@@ -194,7 +193,7 @@ export function buildTrainingSet(
     const saltMass =
       m * formulaMolarMassGPerMol(drugIonFormula) +
       n * formulaMolarMassGPerMol(ionFormula) +
-      hydrate * WATER_G_PER_MOL;
+      hydrate * WATER_MOLAR_MASS_G_PER_MOL;
     const log10DrugM = Math.log10((mgPerMl / saltMass) * m);
     const lib = libraryIonFor(ocl, parentSmiles);
     const counter: ThermoCounterIon = lib

@@ -67,91 +67,123 @@ export const phSolubilityRequestSchema = z
   })
   .strict();
 
+type PhSolubilityRequest = z.infer<typeof phSolubilityRequestSchema>;
+
+/** The drug ion's charge: given, or ±1 by kind; a sign that does not fit the kind is an error. */
+function drugIonCharge(r: PhSolubilityRequest): number {
+  const ionCharge = r.drug.ionCharge ?? (r.drug.kind === 'base' ? 1 : -1);
+  if (Math.sign(ionCharge) !== (r.drug.kind === 'base' ? 1 : -1)) {
+    throw new ChemInputError(
+      'drug.ionCharge',
+      `a ${r.drug.kind} cannot form an ion of charge ${ionCharge}`,
+      r.drug.kind === 'base' ? '+1 to +3' : '−3 to −1',
+    );
+  }
+  return ionCharge;
+}
+
+/** log₁₀ S₀ (mol/L): given, or from mg/mL and the molar mass. */
+function intrinsicLog10M(r: PhSolubilityRequest): number {
+  if (r.drug.log10IntrinsicM !== undefined) return r.drug.log10IntrinsicM;
+  if (r.drug.intrinsicSolubilityMgPerMl !== undefined && r.drug.molarMassGPerMol !== undefined) {
+    return Math.log10(r.drug.intrinsicSolubilityMgPerMl / r.drug.molarMassGPerMol);
+  }
+  throw new ChemInputError(
+    'drug.log10IntrinsicM',
+    'no intrinsic solubility',
+    'log10IntrinsicM, or intrinsicSolubilityMgPerMl with molarMassGPerMol',
+  );
+}
+
+type CounterIonSpec = NonNullable<PhSolubilityRequest['salt']>['counterIon'];
+
+/** The counter-ion from the library or as given, checked against the drug's kind; its charge. */
+function resolveCounterIon(r: PhSolubilityRequest, ionSpec: CounterIonSpec) {
+  const lib = typeof ionSpec === 'string' ? getCounterIon(ionSpec) : undefined;
+  if (typeof ionSpec === 'string' && !lib)
+    throw new ChemInputError(
+      'salt.counterIon',
+      `unknown counter-ion "${ionSpec}"`,
+      'a library id, or {"pKas": [...], "kind": "anion"|"cation"}',
+    );
+  const counterKind = lib ? lib.kind : (ionSpec as { kind: 'anion' | 'cation' }).kind;
+  const wanted = r.drug.kind === 'base' ? 'anion' : 'cation';
+  if (counterKind !== wanted) {
+    throw new ChemInputError(
+      'salt.counterIon',
+      `a ${r.drug.kind} forms salts with ${wanted}s; ${lib ? lib.name : 'this counter-ion'} is an ${counterKind === 'anion' ? 'anion' : 'cation'}`,
+      `a counter-${wanted}`,
+    );
+  }
+  const q = r.salt?.ionCharge ?? (lib ? lib.charge : counterKind === 'cation' ? 1 : -1);
+  if (Math.sign(q) !== (counterKind === 'cation' ? 1 : -1))
+    throw new ChemInputError(
+      'salt.ionCharge',
+      `charge ${q} does not fit a counter-${counterKind}`,
+      counterKind === 'cation' ? '+1 to +4' : '−4 to −1',
+    );
+  const ion = lib ?? {
+    id: 'custom',
+    name: 'custom',
+    kind: counterKind,
+    charge: q,
+    molarMassGPerMol: 1,
+    pKas: (ionSpec as { pKas: number[] }).pKas.map((value) => ({ value })),
+    acceptabilityClass: null,
+  };
+  return { ion, q, pKaIndex: lib?.stoichiometries.find((s) => s.ionCharge === q)?.pKaIndex };
+}
+
+/** The salt for the profile: counter-ion, stoichiometry (checked neutral) and K_sp; null without a salt. */
+function profileSalt(r: PhSolubilityRequest, ionCharge: number) {
+  if (!r.salt) return null;
+  const { ion, q, pKaIndex } = resolveCounterIon(r, r.salt.counterIon);
+  const byCharges = saltStoichiometryFromCharges(ionCharge, q);
+  const m = r.salt.drugPerSalt ?? byCharges.drugPerSalt;
+  const n = r.salt.counterIonPerSalt ?? byCharges.counterIonPerSalt;
+  if (m * ionCharge + n * q !== 0) {
+    throw new ChemInputError(
+      'salt.drugPerSalt',
+      `${m}×(${ionCharge}) + ${n}×(${q}) ≠ 0: the salt is not neutral`,
+      'counts that balance the charges',
+    );
+  }
+  return {
+    counterIon: counterIonProtolyte(ion, {
+      drugPerSalt: m,
+      counterIonPerSalt: n,
+      ionCharge: q,
+      pKaIndex: pKaIndex ?? null,
+    }),
+    counterIonCharge: q,
+    drugPerSalt: m,
+    counterIonPerSalt: n,
+    log10Ksp: r.salt.log10Ksp,
+  };
+}
+
+/**
+ * The 1:1 closed form of pH_max beside the mass-balance value, with the same common ion the profile
+ * uses (pKa ± log₁₀(S₀/x), x(x + c) = K_sp); null where it does not apply (not 1:1, several pKa).
+ */
+function closedFormPhMax(
+  r: PhSolubilityRequest,
+  salt: ReturnType<typeof profileSalt>,
+  logS0: number,
+): number | null {
+  if (!salt || salt.drugPerSalt !== 1 || salt.counterIonPerSalt !== 1 || r.drug.pKas.length !== 1)
+    return null;
+  const f = r.drug.kind === 'base' ? phMaxBase : phMaxAcid;
+  return f(r.drug.pKas[0]!, 10 ** logS0, 10 ** salt.log10Ksp, r.commonIonM ?? 0);
+}
+
 export const phSolubilityEvalHandler: EvalHandler = {
   schema: phSolubilityRequestSchema,
   run: async (raw) => {
     const r = phSolubilityRequestSchema.parse(raw);
-    const ionCharge = r.drug.ionCharge ?? (r.drug.kind === 'base' ? 1 : -1);
-    if (Math.sign(ionCharge) !== (r.drug.kind === 'base' ? 1 : -1)) {
-      throw new ChemInputError(
-        'drug.ionCharge',
-        `a ${r.drug.kind} cannot form an ion of charge ${ionCharge}`,
-        r.drug.kind === 'base' ? '+1 to +3' : '−3 to −1',
-      );
-    }
-    let logS0: number;
-    if (r.drug.log10IntrinsicM !== undefined) logS0 = r.drug.log10IntrinsicM;
-    else if (
-      r.drug.intrinsicSolubilityMgPerMl !== undefined &&
-      r.drug.molarMassGPerMol !== undefined
-    ) {
-      logS0 = Math.log10(r.drug.intrinsicSolubilityMgPerMl / r.drug.molarMassGPerMol);
-    } else
-      throw new ChemInputError(
-        'drug.log10IntrinsicM',
-        'no intrinsic solubility',
-        'log10IntrinsicM, or intrinsicSolubilityMgPerMl with molarMassGPerMol',
-      );
-    const drug = { kind: r.drug.kind, pKas: r.drug.pKas, ionCharge };
-    let salt = null;
-    if (r.salt) {
-      const ionSpec = r.salt.counterIon;
-      const lib = typeof ionSpec === 'string' ? getCounterIon(ionSpec) : undefined;
-      if (typeof ionSpec === 'string' && !lib)
-        throw new ChemInputError(
-          'salt.counterIon',
-          `unknown counter-ion "${ionSpec}"`,
-          'a library id, or {"pKas": [...], "kind": "anion"|"cation"}',
-        );
-      const counterKind = lib ? lib.kind : (ionSpec as { kind: 'anion' | 'cation' }).kind;
-      const wanted = r.drug.kind === 'base' ? 'anion' : 'cation';
-      if (counterKind !== wanted) {
-        throw new ChemInputError(
-          'salt.counterIon',
-          `a ${r.drug.kind} forms salts with ${wanted}s; ${lib ? lib.name : 'this counter-ion'} is an ${counterKind === 'anion' ? 'anion' : 'cation'}`,
-          `a counter-${wanted}`,
-        );
-      }
-      const q = r.salt.ionCharge ?? (lib ? lib.charge : counterKind === 'cation' ? 1 : -1);
-      if (Math.sign(q) !== (counterKind === 'cation' ? 1 : -1))
-        throw new ChemInputError(
-          'salt.ionCharge',
-          `charge ${q} does not fit a counter-${counterKind}`,
-          counterKind === 'cation' ? '+1 to +4' : '−4 to −1',
-        );
-      const st = lib?.stoichiometries.find((s) => s.ionCharge === q);
-      const ion = lib ?? {
-        id: 'custom',
-        name: 'custom',
-        kind: counterKind,
-        charge: q,
-        molarMassGPerMol: 1,
-        pKas: (ionSpec as { pKas: number[] }).pKas.map((value) => ({ value })),
-        acceptabilityClass: null,
-      };
-      const byCharges = saltStoichiometryFromCharges(ionCharge, q);
-      const m = r.salt.drugPerSalt ?? byCharges.drugPerSalt;
-      const n = r.salt.counterIonPerSalt ?? byCharges.counterIonPerSalt;
-      if (m * ionCharge + n * q !== 0) {
-        throw new ChemInputError(
-          'salt.drugPerSalt',
-          `${m}×(${ionCharge}) + ${n}×(${q}) ≠ 0: the salt is not neutral`,
-          'counts that balance the charges',
-        );
-      }
-      salt = {
-        counterIon: counterIonProtolyte(ion, {
-          drugPerSalt: m,
-          counterIonPerSalt: n,
-          ionCharge: q,
-          pKaIndex: st?.pKaIndex ?? null,
-        }),
-        counterIonCharge: q,
-        drugPerSalt: m,
-        counterIonPerSalt: n,
-        log10Ksp: r.salt.log10Ksp,
-      };
-    }
+    const ionCharge = drugIonCharge(r);
+    const logS0 = intrinsicLog10M(r);
+    const salt = profileSalt(r, ionCharge);
     const activity =
       r.activity === 'davies'
         ? {
@@ -160,6 +192,7 @@ export const phSolubilityEvalHandler: EvalHandler = {
             temperatureK: r.temperatureK ?? 298.15,
           }
         : { model: 'ideal' as const };
+    const drug = { kind: r.drug.kind, pKas: r.drug.pKas, ionCharge };
     const p = phSolubilityProfile(drug, logS0, salt, {
       ...(r.phFrom !== undefined ? { phFrom: r.phFrom } : {}),
       ...(r.phTo !== undefined ? { phTo: r.phTo } : {}),
@@ -168,15 +201,7 @@ export const phSolubilityEvalHandler: EvalHandler = {
       activity,
     });
     const mw = r.drug.molarMassGPerMol;
-    const simple1to1 =
-      salt && salt.drugPerSalt === 1 && salt.counterIonPerSalt === 1 && r.drug.pKas.length === 1;
-    const closed = simple1to1
-      ? (r.drug.kind === 'base' ? phMaxBase : phMaxAcid)(
-          r.drug.pKas[0]!,
-          10 ** logS0,
-          10 ** salt!.log10Ksp,
-        )
-      : null;
+    const closed = closedFormPhMax(r, salt, logS0);
     return {
       units:
         'solubility mol/L of total drug (mg/mL free-form equivalents when molarMassGPerMol is given)',

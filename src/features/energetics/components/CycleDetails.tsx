@@ -23,7 +23,6 @@ export function CycleDetails({
     try {
       backed = latticeFromSolutionEnthalpy({
         solutionEnthalpyKJ: measured,
-        solutionUncertaintyKJ: 2,
         cationHydration: t.cationHydrationKJ,
         anionHydration: t.anionHydrationKJ,
         cationsPerFormula: e.cationsPerFormula,

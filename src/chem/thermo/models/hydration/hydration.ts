@@ -1,4 +1,8 @@
 import { COULOMB_KJ_A_PER_MOL, STANDARD_TEMPERATURE_K } from '../../../constants/physical';
+import {
+  WATER_DPERMITTIVITY_DT_298K_PER_K,
+  WATER_RELATIVE_PERMITTIVITY_298K,
+} from '../../../constants/water';
 import { THERMO_IONS } from '../../../data/thermo-ions';
 import { SRC } from '../../../data/thermo-sources';
 import { ChemInputError, requireFiniteInRange, type Estimate } from '../../../result';
@@ -6,10 +10,9 @@ import { getThermoIon } from '../../ions';
 import type { ThermoIon } from '../../thermo.types';
 import { organicIonFromFormula } from '../ion-volume/ion-volume';
 
-/** Relative permittivity of water at 298.15 K (Archer & Wang 1990, J. Phys. Chem. Ref. Data 19, 371) — from memory. */
-export const WATER_PERMITTIVITY = 78.36;
-/** dε_r/dT of water at 298.15 K, K⁻¹ (Archer & Wang 1990) — from memory. */
-export const WATER_DPERMITTIVITY_DT_PER_K = -0.361;
+/** Relative permittivity of water at 298.15 K and its slope: one definition, in constants/water.ts (Archer & Wang 1990). */
+const WATER_PERMITTIVITY = WATER_RELATIVE_PERMITTIVITY_298K;
+const WATER_DPERMITTIVITY_DT_PER_K = WATER_DPERMITTIVITY_DT_298K_PER_K;
 
 /**
  * Born enthalpy factor [1 − 1/ε_r − (T/ε_r²)(∂ε_r/∂T)] at temperature T (the permittivity data are for

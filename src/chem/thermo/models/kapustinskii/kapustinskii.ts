@@ -11,8 +11,12 @@ import { saltStoichiometryFromCharges } from '../../../compound/salt-stoichiomet
 export const KAPUSTINSKII_K_KJ_A_PER_MOL = 1214;
 
 /**
- * The other constant found in textbooks, 1202.5 kJ·Å·mol⁻¹ (1.079 × 10⁻⁴ J·m·mol⁻¹) — from memory of
- * textbook quotations of Kapustinskii 1956. The validation compares both; see `kapustinskiiVariants`.
+ * The constant of the form of the equation most textbooks quote, with the same repulsion term:
+ * U_POT = 1202.5·ν·|z₊z₋|/(r₊ + r₋)·(1 − 0.345/(r₊ + r₋)) kJ/mol, radii in Å, i.e.
+ * 1.2025 × 10⁻⁴ J·m·mol⁻¹ — from memory of textbook quotations of Kapustinskii 1956. (The
+ * 1.079 × 10⁻⁴ J·m·mol⁻¹ = 1079 kJ·Å·mol⁻¹ also quoted belongs to the simplified form without the
+ * repulsion term, U_POT = 1079·ν·|z₊z₋|/(r₊ + r₋); from memory, not used here.) The validation compares
+ * 1214 and 1202.5 in the form with the repulsion term; see `kapustinskiiVariants`.
  */
 export const KAPUSTINSKII_K_ALT_KJ_A_PER_MOL = 1202.5;
 

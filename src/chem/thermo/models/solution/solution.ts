@@ -38,6 +38,13 @@ export function latticeFromSolutionEnthalpy(input: {
     uncertainty: sol.unknown!.uncertainty,
     method: 'solution-cycle',
     sources: [...new Set([...input.cationHydration.sources, ...input.anionHydration.sources])],
-    notes: ['ΔH_L = ΔH_sol − Σν·ΔH_hyd; valid for ΔH_sol at infinite dilution'],
+    notes: [
+      'ΔH_L = ΔH_sol − Σν·ΔH_hyd; valid for ΔH_sol at infinite dilution',
+      ...(input.solutionUncertaintyKJ === undefined
+        ? [
+            'the measured ΔH_sol carries no stated uncertainty: the ±1σ is the hydration estimates’ alone',
+          ]
+        : []),
+    ],
   };
 }
