@@ -110,6 +110,9 @@ describe('project files in Chromium', () => {
       buffer: Buffer.from(first.text),
     });
     await page.getByRole('button', { name: 'Import as a new project' }).click();
+    // The import checks the file's structures with the lazily loaded openchemlib, then opens the new
+    // project's Compound area: wait for that before going back to the projects.
+    await page.getByLabel('Name', { exact: true }).waitFor({ timeout: 30_000 });
     await page.goto(`${BASE_URL}#/projects`);
     await page.getByRole('heading', { name: projectName, exact: true }).waitFor();
     await page

@@ -168,7 +168,7 @@ describe('comparison sheet in Chromium', () => {
     await expect(page.getByRole('button', { name: 'Download CSV' }).isVisible()).resolves.toBe(
       false,
     );
-    await expect(page.locator('.comparison-sheet').isVisible()).resolves.toBe(true);
+    await expect(page.locator('article.comparison-sheet').isVisible()).resolves.toBe(true);
 
     const pdf = await page.pdf({ format: 'A4', printBackground: true });
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
@@ -282,7 +282,7 @@ describe('comparison sheet in Chromium', () => {
 
     await openSheet(page);
     await expect(page.getByTestId('sheet-compound').textContent()).resolves.toBe(formula);
-    await expect(page.locator('.comparison-sheet').textContent()).resolves.toContain(markup);
+    await expect(page.locator('article.comparison-sheet').textContent()).resolves.toContain(markup);
     await expect(page.locator('img[src="x"]').count()).resolves.toBe(0);
 
     const csv = await downloadCsv(page);
