@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -112,5 +112,20 @@ describe('saltsmith screen --format json: measure_next', () => {
     expect(pairs).not.toContain('mesylate solubility');
     expect(pairs).not.toContain('mesylate melting-point'); // a measured solubility overrides it
     expect(pairs).toContain('chloride solubility');
+  });
+
+  it("README's quoted demo entry is what the command prints for the demo input (default flags)", async () => {
+    const readme = readFileSync('README.md', 'utf8');
+    const quoted = /For the fictional demo\s+input[\s\S]*?`(\{"counter_ion"[^`]*\})`/.exec(readme);
+    expect(quoted).not.toBeNull();
+    const { code, out } = await run([
+      '--input',
+      'fixtures/screening/demorazine-screen-input.json',
+      '--format',
+      'json',
+    ]);
+    expect(code).toBe(0);
+    const first = (JSON.parse(out) as { measure_next: Entry[] }).measure_next[0]!;
+    expect(first).toStrictEqual(JSON.parse(quoted![1]!));
   });
 });
