@@ -14,7 +14,7 @@
  */
 
 /** ICH Q3C(R8), Table 1, concentration limits of the Class 1 solvents (the five values read 2026-12-03
- * in a transcription of the guideline's table). */
+ * in a copy of the guideline's table). */
 export const SRC_Q3C_TABLE1 =
   'ICH Q3C(R8) Impurities: Guideline for Residual Solvents (Step 4, 22 April 2021), Table 1 (Class 1 solvents, concentration limit in ppm)';
 
