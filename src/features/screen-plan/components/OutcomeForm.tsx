@@ -34,9 +34,12 @@ export function OutcomeForm({
     setOutcome(stored?.outcome ?? 'crystalline-solid');
     setMp(stored?.meltingPointC?.toString() ?? '');
     setNote(stored?.note ?? '');
+  }, [well.well, stored]);
+  // The confirmation belongs to the well: the stored record arriving after a save must not clear it.
+  useEffect(() => {
     setMessage(null);
     setError(null);
-  }, [well.well, stored]);
+  }, [well.well]);
 
   const mpValue = mp.trim() === '' ? null : Number(mp);
   const mpBad = mpValue !== null && (!Number.isFinite(mpValue) || mpValue < -50 || mpValue > 500);
