@@ -19,13 +19,22 @@ export const SCREENING_CAUTION_SUMMARY =
 export const SINGLE_ESTIMATE_CAUTION =
   'Screening estimate: it does not establish a salt form. Experiments, the regulatory guidance in force and the lab’s safety rules decide.';
 
-/**
- * Closes a salt-screen plan wherever it is read or exported (the app's plan, its pick-list CSV, the
- * command line's `plan`): the corrosives sentence of {@link SCREENING_CAUTIONS} and two lines of the
- * plan's own (common practice in a salt-screening lab).
- */
-export const PLATE_PLAN_CAUTIONS = [
-  SCREENING_CAUTIONS[3]!,
+/** The plan's own two lines (common practice in a salt-screening lab). */
+const PLATE_PLAN_OWN_LINES = [
   'The amounts are computed from the entered masses and the bundled molar masses, densities and solvent data (each with its source): check every reagent’s assay, concentration and label before dispensing.',
   'ICH Q3C classes and limits are shown for orientation; the guideline in force decides which solvent residues are acceptable.',
 ];
+
+/**
+ * Beside a salt-screen plan on screen (the app's Salt screen area, where the footer already carries
+ * the one-line summary): the corrosives sentence of {@link SCREENING_CAUTIONS} and the plan's own
+ * two lines.
+ */
+export const PLATE_PLAN_CAUTIONS = [SCREENING_CAUTIONS[3]!, ...PLATE_PLAN_OWN_LINES];
+
+/**
+ * Closes a salt-screen plan wherever it leaves the screen (the app's pick-list CSV, the command
+ * line's `plan` CSV and JSON): the full {@link SCREENING_CAUTIONS}, each once, then the plan's own
+ * two lines — an export is read without the screen's summary beside it.
+ */
+export const PLATE_PLAN_EXPORT_CAUTIONS = [...SCREENING_CAUTIONS, ...PLATE_PLAN_OWN_LINES];

@@ -3,7 +3,7 @@ import {
   parentHandling,
   pickListRows,
   PLATE_FILL_ORDER,
-  PLATE_PLAN_CAUTIONS,
+  PLATE_PLAN_EXPORT_CAUTIONS,
   safeCsvCell,
   type PlatePlan,
   type PlatePlanInput,
@@ -37,7 +37,7 @@ export function pickListCsv(plan: PlatePlan): string {
     Object.fromEntries(Object.entries(r).map(([k, v]) => [k, safeCsvCell(v)])),
   );
   const csv = Papa.unparse(rows, { newline: '\n' });
-  const notes = [PLATE_FILL_ORDER, ...plan.notes, ...PLATE_PLAN_CAUTIONS].map(
+  const notes = [PLATE_FILL_ORDER, ...plan.notes, ...PLATE_PLAN_EXPORT_CAUTIONS].map(
     (l) => `# ${safeCsvCell(l)}`,
   );
   return `${csv}\n${notes.join('\n')}\n`;

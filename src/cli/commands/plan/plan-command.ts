@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import {
   PLATE_FILL_ORDER,
-  PLATE_PLAN_CAUTIONS,
+  PLATE_PLAN_EXPORT_CAUTIONS,
   pickListRows,
   SOLVENTS,
   type PlatePlan,
@@ -67,7 +67,7 @@ export function planJson(name: string, plan: PlatePlan): string {
     rows: pickListRows(plan),
     emptyWells: plan.emptyWells,
     notes: plan.notes,
-    cautions: PLATE_PLAN_CAUTIONS,
+    cautions: PLATE_PLAN_EXPORT_CAUTIONS,
   };
   return JSON.stringify(doc, null, 2);
 }
@@ -77,7 +77,7 @@ export function planCsv(plan: PlatePlan): string {
     pickListRows(plan).map((r) => safeRow({ ...r })),
     { newline: '\n' },
   );
-  const lines = [PLATE_FILL_ORDER, ...plan.notes, ...PLATE_PLAN_CAUTIONS];
+  const lines = [PLATE_FILL_ORDER, ...plan.notes, ...PLATE_PLAN_EXPORT_CAUTIONS];
   return `${csv}\n${lines.map((l) => `# ${l}`).join('\n')}`;
 }
 
