@@ -73,8 +73,8 @@ export function buildSheetModel({
   );
   const byId = new Map(screen.rows.map((r) => [r.id, r]));
   const drugName = project.compound.name;
-  const labelOf = (row: ScreenRow) =>
-    `${drugName} ${screening.ionNames[row.id] ?? row.counterIonName} (${row.drugPerSalt}:${row.counterIonPerSalt})`;
+  // The core's salt name (saltLabel, e.g. "hydrochloride (1:1)"), as the Ranking and the CLI write it.
+  const labelOf = (row: ScreenRow) => `${drugName} ${row.label}`;
 
   const rows: SheetRow[] = [];
   for (const rr of ranked) {
