@@ -2,3 +2,4 @@
 export * from './cautions';
 export * from './csv-cell-guard';
 export * from './precision';
+export * from './shown-numbers';

@@ -1,4 +1,4 @@
-import { SALT_WATER_ORIGIN_LABELS, type Estimate, type ScreenRow } from '@/chem';
+import { roundScore, SALT_WATER_ORIGIN_LABELS, type Estimate, type ScreenRow } from '@/chem';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { SheetCell, SheetColumn, ValueOrigin } from './sheet.types';
@@ -30,11 +30,11 @@ export const SHEET_COLUMNS: readonly SheetColumn[] = [
     group: 'formation',
   },
   {
-    key: 'saltProbability',
-    label: 'P(salt) from ΔpKa',
-    unit: '0–1',
-    kind: 'number',
-    hint: 'share of salts (not cocrystals) among published crystal structures at this ΔpKa: 0.17·ΔpKa + 0.28, clamped to 0–1 (Cruz-Cabeza 2012 trend, coefficients from memory); at least 0.95 above the salt band, so it is 1 for most strong acids',
+    key: 'saltFormation',
+    label: 'Salt formation',
+    unit: null,
+    kind: 'text',
+    hint: 'the ΔpKa band: salt above the salt band, cocrystal below the cocrystal band, uncertain between (Cruz-Cabeza 2012), as the Ranking and the command line word it',
     group: 'formation',
   },
   {
@@ -185,16 +185,21 @@ export function rowCells(
   // The same ±1σ ranges the Ranking shows: the limiting solid's log σ (salt or free form).
   const logSigmaOf = (solid: string | undefined) =>
     solid === 'salt' ? u.saltLogSigma : solid ? u.freeLogSigma : undefined;
+  // A dose number's mark follows the solid that limits it: the salt's K_sp, or the free form's S₀.
+  const freeOrigin: ValueOrigin =
+    screening.screen.freeForm.intrinsicOrigin === 'measured' ? 'input' : 'estimated';
+  const originOf = (solid: string | undefined) => (solid === 'salt' ? kspOrigin : freeOrigin);
   const swOrigin: ValueOrigin | null = sw
     ? sw.origin === 'measured'
       ? 'measured'
       : 'estimated'
     : null;
   return {
-    score: num(score, null),
+    score: num(score === null ? null : roundScore(score), null),
     pTop3: num(pTop3 === null ? null : pTop3 * 100, 'estimated'),
-    deltaPka: num(row.deltaPka, 'input'),
-    saltProbability: num(row.saltFormation?.saltProbability ?? null, 'estimated'),
+    // ΔpKa to the precision of the drug's pKa σ, as the command line writes it.
+    deltaPka: num(row.deltaPka, 'input', screening.screen.robustnessShared.drugPkaSigma),
+    saltFormation: { value: row.saltFormation?.band ?? null },
     activeFraction: num(row.activeFraction * 100, 'input'),
     saltMassPerDose: num(row.saltMassPerDoseMg, 'input'),
     saltWaterMgPerMl: ranged(num(sw?.mgPerMlAsSalt ?? null, swOrigin), sw?.log10DrugM.uncertainty),
@@ -208,12 +213,12 @@ export function rowCells(
     // The same 1σ the Ranking area shows (linearised as the rank-robustness draw perturbs pH_max).
     phMax: num(row.phMax, kspOrigin, u.phMaxSigma),
     worstDoseNumber: ranged(
-      num(row.worst?.doseNumber ?? null, kspOrigin),
+      num(row.worst?.doseNumber ?? null, originOf(row.worst?.solid)),
       logSigmaOf(row.worst?.solid),
     ),
     worstPh: num(row.worst?.pH ?? null, null),
     gastricDoseNumber: ranged(
-      num(row.gastric?.doseNumber ?? null, kspOrigin),
+      num(row.gastric?.doseNumber ?? null, originOf(row.gastric?.solid)),
       logSigmaOf(row.gastric?.solid),
     ),
     solubilityClass: { value: row.solubilityClass },

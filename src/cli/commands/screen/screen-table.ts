@@ -1,10 +1,14 @@
 import {
   rankCandidates,
+  roundLogNormal,
+  roundScore,
+  shownRowNumbers,
   rankRobustness,
   screenCompound,
   worstExcipient,
   type ScreenResult,
   type ScreenRow,
+  uncertaintiesOf,
 } from '@/chem';
 import type { PreparedScreen } from './screen-input';
 
@@ -25,14 +29,23 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
   return ranked.map((k) => {
     const row = byId.get(k.id)!;
     const at = (pH: number) => row.doseNumbers.find((d) => Math.abs(d.pH - pH) < 1e-9);
+    // Precision that follows each number's 1σ, as the app and the sheet show it (src/chem/report).
+    const shown = shownRowNumbers(row, res.robustnessShared);
+    const u = uncertaintiesOf(row, res.robustnessShared);
+    const doseAt = (pH: number) => {
+      const d = at(pH);
+      return d && d.doseNumber !== null
+        ? roundLogNormal(d.doseNumber, d.solid === 'salt' ? u.saltLogSigma : u.freeLogSigma).value
+        : '';
+    };
     return {
       rank: k.rank ?? '',
       candidate: row.label,
       counter_ion: row.counterIonId,
       stoichiometry_drug_to_ion: `${row.drugPerSalt}:${row.counterIonPerSalt}`,
-      score: k.score === null ? '' : Number(k.score.toFixed(3)),
+      score: k.score === null ? '' : roundScore(k.score),
       p_top3: robust.has(row.id) ? Number(robust.get(row.id)!.toFixed(3)) : '',
-      delta_pka: sig(row.deltaPka),
+      delta_pka: shown.deltaPka?.value ?? '',
       salt_formation: row.saltFormation?.band ?? '',
       active_fraction: sig(row.error ? null : row.activeFraction),
       salt_mass_per_dose_mg: sig(row.saltMassPerDoseMg, 4),
@@ -41,7 +54,7 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       // the model's 1σ split: a level shared by every salt of the drug, and this salt's own part
       salt_solubility_water_log10_M_sd_shared: sig(row.saltWaterSolubility?.sharedLog10Sd, 2),
       salt_solubility_water_log10_M_sd_within: sig(row.saltWaterSolubility?.withinLog10Sd, 2),
-      salt_solubility_water_mg_per_ml: sig(row.saltWaterSolubility?.mgPerMlAsSalt),
+      salt_solubility_water_mg_per_ml: shown.saltWaterMgPerMl?.value ?? '',
       salt_solubility_origin: row.saltWaterSolubility?.origin ?? '',
       bench_solubility_limited_by: row.benchSolubility?.limitedBy ?? '',
       salt_solubility_drivers:
@@ -51,26 +64,32 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
       log10_ksp: sig(row.log10Ksp?.value),
       log10_ksp_sd: sig(row.log10Ksp?.uncertainty, 2),
       ksp_origin: row.kspOrigin ?? '',
-      ph_max: sig(row.phMax),
+      ph_max: shown.phMax?.value ?? '',
       solubility_ph_1_2_mg_per_ml: sig(at(1.2)?.solubilityMgPerMl),
-      dose_number_ph_1_2: sig(at(1.2)?.doseNumber),
-      dose_number_ph_6_8: sig(at(6.8)?.doseNumber),
-      gastric_dose_number: sig(row.gastric?.doseNumber),
+      dose_number_ph_1_2: doseAt(1.2),
+      dose_number_ph_6_8: doseAt(6.8),
+      gastric_dose_number: shown.gastricDoseNumber?.value ?? '',
       worst_ph: row.worst?.pH ?? '',
-      worst_dose_number: sig(row.worst?.doseNumber),
+      worst_dose_number: shown.worstDoseNumber?.value ?? '',
       ich_m9_class: row.solubilityClass ?? '',
       disproportionation: row.disproportionation?.risk ?? '',
       // ΔH_sol per mole of drug ion, as every area shows it; empty when not informative (the reason says why).
-      solution_enthalpy_kj_per_mol_drug_ion: row.solutionEnthalpyPerDrugIon?.notInformative
-        ? ''
-        : sig(row.solutionEnthalpyPerDrugIon?.valueKJPerMolDrugIon),
-      solution_enthalpy_kj_per_mol_drug_ion_sd: row.solutionEnthalpyPerDrugIon?.notInformative
-        ? ''
-        : sig(row.solutionEnthalpyPerDrugIon?.sigmaKJPerMolDrugIon, 2),
+      solution_enthalpy_kj_per_mol_drug_ion: shown.solutionEnthalpyKJPerMolDrugIon?.value ?? '',
+      solution_enthalpy_kj_per_mol_drug_ion_sd: shown.solutionEnthalpyKJPerMolDrugIon?.sigma ?? '',
       solution_enthalpy_not_informative: row.solutionEnthalpyPerDrugIon?.notInformative ?? '',
       flags: row.flags.map((f) => f.text).join('; '),
       reasons: row.reasons.map((r) => r.text).join('; '),
       error: row.error ?? '',
+      // every ±1σ the app shows (pH_max's 1σ; the ±1σ ranges of the salt's
+      // solubility and of the dose numbers, from the limiting solid's log σ), before the excipient
+      // columns, which stay last
+      ph_max_sd: shown.phMax?.sigma ?? '',
+      salt_solubility_water_mg_per_ml_low: shown.saltWaterMgPerMl?.low ?? '',
+      salt_solubility_water_mg_per_ml_high: shown.saltWaterMgPerMl?.high ?? '',
+      worst_dose_number_low: shown.worstDoseNumber?.low ?? '',
+      worst_dose_number_high: shown.worstDoseNumber?.high ?? '',
+      gastric_dose_number_low: shown.gastricDoseNumber?.low ?? '',
+      gastric_dose_number_high: shown.gastricDoseNumber?.high ?? '',
       // added last so every earlier column keeps its place: the chosen excipient most likely to
       // convert the salt (empty without --excipients) and P(conversion), with its band in words
       worst_excipient: worst(row)?.excipientId ?? '',
