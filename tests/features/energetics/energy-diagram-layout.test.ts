@@ -1,0 +1,99 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { resetDbForTests } from '../../support/db';
+import { projectsRepo } from '@/persistence/projects-repo';
+import { candidatesRepo } from '@/persistence/candidates-repo';
+import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
+import { computeProjectScreening } from '@/screening-data/compute-screening';
+import { energyCycleOf } from '@/screening-data/energy-cycle';
+import {
+  arrowBox,
+  boxesOverlap,
+  energyDiagramLayout,
+  labelBox,
+  type EnergyCycle,
+} from '@/components/charts/energy-diagram-layout';
+
+/*
+ * Issue 19: a label lay over an arrow in the cycle diagram. The layout is computed for every salt of
+ * the fictional demo (the demo compound with its six shortlisted counter-ions, as the app computes
+ * them) and for sodium chloride; each label's box (text width estimated generously per character)
+ * must clear every arrow (shaft and head), every other label, and the drawing's edges.
+ */
+let demoCycles: EnergyCycle[] = [];
+
+beforeAll(async () => {
+  await resetDbForTests();
+  // Formula only (no SMILES), so the structure parser is not loaded in jsdom.
+  const project = await projectsRepo.create('Diagram layout', { ...DEMO_COMPOUND, smiles: '' });
+  for (const ionId of DEMO_SHORTLIST) await candidatesRepo.add(project.id, ionId);
+  const data = await computeProjectScreening({
+    project,
+    candidates: await candidatesRepo.listForProject(project.id),
+    measurements: [],
+    customIons: [],
+  });
+  demoCycles = Object.values(data.energetics).flatMap((e) =>
+    e.thermo ? [energyCycleOf({ ...e, thermo: e.thermo }, e.candidateId)] : [],
+  );
+}, 60000);
+
+/*
+ * NaCl: ΔH_L = 787 kJ/mol (CRC Handbook, "Lattice Energies", from memory), ΔH_hyd(Na⁺) = −406 and
+ * ΔH_hyd(Cl⁻) = −378 kJ/mol (Smith 1977, J. Chem. Educ. 54, 540, from memory) — a net ΔH_sol near 0,
+ * the case where the net arrow is shortest.
+ */
+const nacl: EnergyCycle = {
+  saltLabel: 'NaCl (1:1)',
+  cationLabel: 'Na⁺',
+  anionLabel: 'Cl⁻',
+  cationsPerFormula: 1,
+  anionsPerFormula: 1,
+  lattice: { value: 787, uncertainty: 20 },
+  cationHydration: { value: -406, uncertainty: 10 },
+  anionHydration: { value: -378, uncertainty: 10 },
+  solution: { value: 3, uncertainty: 25 },
+};
+
+function overlapsOf(cycle: EnergyCycle, width: number, height: number): string[] {
+  const layout = energyDiagramLayout(cycle, width, height);
+  const found: string[] = [];
+  const boxes = layout.labels.map((l) => ({ text: l.text, box: labelBox(l) }));
+  for (const { text, box } of boxes) {
+    layout.arrows.forEach((a, i) => {
+      if (boxesOverlap(box, arrowBox(a))) found.push(`"${text}" over arrow ${i}`);
+    });
+    if (box.left < layout.axisX || box.right > width || box.top < 0 || box.bottom > height)
+      found.push(`"${text}" outside the drawing`);
+  }
+  boxes.forEach((a, i) =>
+    boxes.slice(i + 1).forEach((b) => {
+      if (boxesOverlap(a.box, b.box)) found.push(`"${a.text}" over "${b.text}"`);
+    }),
+  );
+  return found;
+}
+
+describe('energy-level diagram layout (issue 19: no label over an arrow)', () => {
+  it('computes a cycle for each of the demo salts', () => {
+    expect(demoCycles.length).toBe(DEMO_SHORTLIST.length);
+  });
+
+  it('keeps every label clear of every arrow and of every other label, for each demo salt', () => {
+    for (const cycle of demoCycles)
+      expect({ salt: cycle.saltLabel, overlaps: overlapsOf(cycle, 560, 360) }).toEqual({
+        salt: cycle.saltLabel,
+        overlaps: [],
+      });
+  });
+
+  it('keeps labels clear for sodium chloride, whose net arrow is a few kJ/mol long', () => {
+    expect(overlapsOf(nacl, 560, 360)).toEqual([]);
+  });
+
+  it('finds an overlap when one is there (the check can fail)', () => {
+    const layout = energyDiagramLayout(nacl, 560, 360);
+    const arrow = layout.arrows[1]!;
+    const onArrow = { ...layout.labels[0]!, x: arrow.x - 4, y: (arrow.y1 + arrow.y2) / 2 };
+    expect(boxesOverlap(labelBox(onArrow), arrowBox(arrow))).toBe(true);
+  });
+});
