@@ -10,121 +10,55 @@ import {
   YAxis,
 } from 'recharts';
 import { SERIES_COLOURS, SERIES_DASHES, sig } from './chart-format';
+import {
+  ICH_M9_BAND,
+  curveSummary,
+  logTick,
+  solubilityAxis,
+  type SolubilitySeries,
+} from './ph-solubility-scale';
+import { useContainerWidth } from './use-container-width';
 import './charts.css';
 
-export interface SolubilitySeries {
-  id: string;
-  label: string;
-  kind: 'free-form' | 'salt';
-  points: { pH: number; solubilityMgPerMl: number }[];
-  /** pH_max of the salt, when it falls in the plotted range. */
-  phMax?: number | null;
-  /** True when the curve rests on an estimated K_sp (not a measured salt solubility). */
-  estimated?: boolean;
-}
+export { logTick, solubilityAxis, type SolubilitySeries } from './ph-solubility-scale';
 
-const SUPERSCRIPT: Record<string, string> = {
-  '-': '⁻',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
-
-/** Tick label of a log axis: plain numbers from 0.001 to 1000, powers of ten beyond. */
-export function logTick(v: number): string {
-  const k = Math.round(Math.log10(v));
-  if (k >= -3 && k <= 3) return String(Number(v.toPrecision(2)));
-  return `10${String(k)
-    .split('')
-    .map((c) => SUPERSCRIPT[c] ?? c)
-    .join('')}`;
-}
-
-/** ICH M9 (2019) pH range for the solubility class: 1.2–6.8. */
-const BAND: [number, number] = [1.2, 6.8];
-
-/**
- * The y-axis of the pH chart, sized to its data: from the decade at or below the lowest value to the
- * decade at or above the highest salt value or dose line (the free form's curve climbs without bound at low pH for a
- * base, so it alone does not set the top).
- */
-export function solubilityAxis(
-  series: SolubilitySeries[],
-  doseLineMgPerMl: number | null,
-): { lo: number; hi: number; ticks: number[] } {
-  const positive = (xs: number[]) => xs.filter((x) => x > 0 && Number.isFinite(x));
-  const all = positive(series.flatMap((s) => s.points.map((p) => p.solubilityMgPerMl)));
-  if (doseLineMgPerMl && doseLineMgPerMl > 0) all.push(doseLineMgPerMl);
-  const salts = positive(
-    series
-      .filter((s) => s.kind === 'salt')
-      .flatMap((s) => s.points.map((p) => p.solubilityMgPerMl)),
-  );
-  const lo = all.length ? 10 ** Math.floor(Math.log10(Math.min(...all))) : 1e-3;
-  const top = Math.max(...(salts.length ? salts : all), doseLineMgPerMl ?? 0);
-  const hi = all.length
-    ? Math.max(lo * 10, 10 ** Math.ceil(Math.log10(Math.min(Math.max(...all), top))))
-    : 1e3;
-  const ticks: number[] = [];
-  for (let t = lo; t <= hi * 1.0001; t *= 10) ticks.push(t);
-  return { lo, hi, ticks };
-}
+/** Width where the container cannot be measured (no layout, e.g. jsdom), px. */
+const FALLBACK_WIDTH_PX = 680;
 
 /**
  * Solubility against pH on a log axis: the free form and each chosen salt, pH_max marked, the
  * dose-number line (dose / 250 mL, ICH M9 2019) and the pH 1.2–6.8 band shaded. Recharts; the list
- * under the chart is its text alternative.
+ * under the chart is its text alternative. Without a `width` it fills its container's width.
  */
 export function PhSolubilityChart({
   series,
   doseLineMgPerMl,
-  width = 680,
+  width,
   height = 360,
   title = 'Solubility against pH',
 }: {
   series: SolubilitySeries[];
   doseLineMgPerMl: number | null;
+  /** Fixed width, px (the printed sheet); by default the container's width. */
   width?: number;
   height?: number;
   title?: string;
 }) {
+  const container = useContainerWidth<HTMLDivElement>(width ?? FALLBACK_WIDTH_PX);
   const { lo, hi, ticks } = solubilityAxis(series, doseLineMgPerMl);
-  const summary = series.map((s) => {
-    const inBand = s.points.filter((p) => p.pH >= BAND[0] - 1e-9 && p.pH <= BAND[1] + 1e-9);
-    const worst = inBand.reduce(
-      (a, b) => (b.solubilityMgPerMl < a.solubilityMgPerMl ? b : a),
-      inBand[0] ?? s.points[0]!,
-    );
-    // For a salt, the highest point of the band is its plateau below pH_max (the salt's own solubility).
-    const best = inBand.reduce(
-      (a, b) => (b.solubilityMgPerMl > a.solubilityMgPerMl ? b : a),
-      inBand[0] ?? s.points[0]!,
-    );
-    const plateau =
-      s.kind === 'salt'
-        ? `, highest ${sig(best?.solubilityMgPerMl ?? Number.NaN)} mg/mL at pH ${best?.pH.toFixed(1)}`
-        : '';
-    return `${s.label}${s.estimated ? ' (estimated)' : ''}: ${s.phMax != null ? `pH_max ${s.phMax.toFixed(2)}, ` : ''}lowest in pH 1.2–6.8 ${sig(worst?.solubilityMgPerMl ?? Number.NaN)} mg/mL at pH ${worst?.pH.toFixed(1)}${plateau}`;
-  });
+  const summary = series.map(curveSummary);
   return (
     <figure className="chart ph-solubility">
-      <div role="img" aria-label={`${title}. ${summary.join('; ')}`}>
+      <div ref={container.ref} role="img" aria-label={`${title}. ${summary.join('; ')}`}>
         <LineChart
-          width={width}
+          width={width ?? container.width}
           height={height}
           margin={{ top: 10, right: 20, bottom: 26, left: 16 }}
         >
           <CartesianGrid stroke="#eee6d6" />
           <ReferenceArea
-            x1={BAND[0]}
-            x2={BAND[1]}
+            x1={ICH_M9_BAND[0]}
+            x2={ICH_M9_BAND[1]}
             fill="#e7f0ee"
             fillOpacity={0.7}
             ifOverflow="hidden"
@@ -158,46 +92,9 @@ export function PhSolubilityChart({
             labelFormatter={(l) => `pH ${Number(l).toFixed(1)}`}
           />
           <Legend verticalAlign="top" height={28} />
-          {doseLineMgPerMl ? (
-            <ReferenceLine
-              y={doseLineMgPerMl}
-              stroke="#a3202a"
-              strokeDasharray="5 4"
-              label={{
-                value: `dose in 250 mL: ${sig(doseLineMgPerMl)} mg/mL`,
-                position: 'insideTopRight',
-                fill: '#a3202a',
-                fontSize: 11,
-              }}
-            />
-          ) : null}
-          {series.map((s, i) =>
-            s.phMax != null && s.phMax >= 1 && s.phMax <= 8 ? (
-              <ReferenceLine
-                key={`${s.id}-phmax`}
-                x={s.phMax}
-                stroke={SERIES_COLOURS[i % SERIES_COLOURS.length]}
-                strokeDasharray="2 3"
-              />
-            ) : null,
-          )}
-          {series.map((s, i) => (
-            <Line
-              key={s.id}
-              data={s.points.filter((p) => p.solubilityMgPerMl > 0)}
-              dataKey="solubilityMgPerMl"
-              name={`${s.label}${s.estimated ? ' (est.)' : ''}`}
-              stroke={
-                s.kind === 'free-form' ? '#1d3a4a' : SERIES_COLOURS[i % SERIES_COLOURS.length]
-              }
-              strokeDasharray={
-                s.kind === 'free-form' ? '7 4' : SERIES_DASHES[i % SERIES_DASHES.length]
-              }
-              strokeWidth={s.kind === 'free-form' ? 2.5 : 2}
-              dot={false}
-              isAnimationActive={false}
-            />
-          ))}
+          {doseLineMgPerMl ? doseLine(doseLineMgPerMl) : null}
+          {series.map(phMaxLine)}
+          {series.map(curve)}
         </LineChart>
       </div>
       <figcaption>
@@ -211,5 +108,53 @@ export function PhSolubilityChart({
         </ul>
       </figcaption>
     </figure>
+  );
+}
+
+/** The highest dose dissolved in 250 mL, as a dashed line. */
+function doseLine(mgPerMl: number) {
+  return (
+    <ReferenceLine
+      y={mgPerMl}
+      stroke="#a3202a"
+      strokeDasharray="5 4"
+      label={{
+        value: `dose in 250 mL: ${sig(mgPerMl)} mg/mL`,
+        position: 'insideTopRight',
+        fill: '#a3202a',
+        fontSize: 11,
+      }}
+    />
+  );
+}
+
+/** A salt's pH_max as a dotted vertical line in its curve's colour, when it lies on the chart. */
+function phMaxLine(s: SolubilitySeries, i: number) {
+  if (s.phMax == null || s.phMax < 1 || s.phMax > 8) return null;
+  return (
+    <ReferenceLine
+      key={`${s.id}-phmax`}
+      x={s.phMax}
+      stroke={SERIES_COLOURS[i % SERIES_COLOURS.length]}
+      strokeDasharray="2 3"
+    />
+  );
+}
+
+/** One curve: the free form thick and dashed in ink, each salt in its own colour and dash. */
+function curve(s: SolubilitySeries, i: number) {
+  const free = s.kind === 'free-form';
+  return (
+    <Line
+      key={s.id}
+      data={s.points.filter((p) => p.solubilityMgPerMl > 0)}
+      dataKey="solubilityMgPerMl"
+      name={`${s.label}${s.estimated ? ' (est.)' : ''}`}
+      stroke={free ? '#1d3a4a' : SERIES_COLOURS[i % SERIES_COLOURS.length]}
+      strokeDasharray={free ? '7 4' : SERIES_DASHES[i % SERIES_DASHES.length]}
+      strokeWidth={free ? 2.5 : 2}
+      dot={false}
+      isAnimationActive={false}
+    />
   );
 }

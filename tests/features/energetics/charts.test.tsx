@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { render, screen } from '@testing-library/react';
+import { act, render, screen } from '@testing-library/react';
 import { EnergyLevelDiagram } from '@/components/charts/EnergyLevelDiagram';
 import { WhiskerBars, niceTicks } from '@/components/charts/WhiskerBars';
 import { PhSolubilityChart } from '@/components/charts/PhSolubilityChart';
@@ -104,7 +104,7 @@ describe('pH–solubility chart', () => {
 });
 
 describe('pH chart axis sized to its data (issue 19)', () => {
-  it('tops the y-axis at the decade above the salts and the dose line, not three decades higher', async () => {
+  it('spans the data: from the 1–2–5 step below the lowest value to the one above the salts and the dose line', async () => {
     const { solubilityAxis } = await import('@/components/charts/PhSolubilityChart');
     // Hand-made curves (inputs, not results): a free form climbing to 500 mg/mL at pH 1, a salt
     // plateau at 0.6 mg/mL, and the dose line 100 mg / 250 mL = 0.4 mg/mL (ICH M9 2019 volume).
@@ -131,8 +131,99 @@ describe('pH chart axis sized to its data (issue 19)', () => {
       ],
       0.4,
     );
-    expect(axis.lo).toBeCloseTo(0.01, 12);
+    // Lowest value 0.02 is itself a 1–2–5 step; the highest salt value 0.6 rounds up to 1.
+    expect(axis.lo).toBeCloseTo(0.02, 12);
     expect(axis.hi).toBeCloseTo(1, 12);
-    expect(axis.ticks).toHaveLength(3);
+    expect(axis.ticks).toEqual([0.02, 0.1, 1]);
+  });
+
+  it('ends at 2 mg/mL, not 10, when the highest salt plateau is 1.08 mg/mL', async () => {
+    const { solubilityAxis, logTick } = await import('@/components/charts/PhSolubilityChart');
+    // Hand-made curves shaped like the demo's (a salt plateau just above 1 mg/mL, the lowest value
+    // 0.0245 mg/mL, dose line 100 mg / 250 mL = 0.4 mg/mL): 0.0245 → 0.02 below, 1.08 → 2 above.
+    const axis = solubilityAxis(
+      [
+        {
+          id: 'free',
+          label: 'free form',
+          kind: 'free-form',
+          points: [
+            { pH: 1, solubilityMgPerMl: 9.46e4 },
+            { pH: 8, solubilityMgPerMl: 0.0245 },
+          ],
+        },
+        {
+          id: 'salt',
+          label: 'salt',
+          kind: 'salt',
+          points: [
+            { pH: 1, solubilityMgPerMl: 1.08 },
+            { pH: 8, solubilityMgPerMl: 0.0245 },
+          ],
+        },
+      ],
+      0.4,
+    );
+    expect([axis.lo, axis.hi]).toEqual([0.02, 2]);
+    expect(axis.ticks).toEqual([0.02, 0.1, 1, 2]);
+    // Tick labels: plain numbers from 0.001 to 1000, powers of ten beyond with their mantissa.
+    expect([logTick(0.02), logTick(2), logTick(1e4), logTick(2e4), logTick(5e-5)]).toEqual([
+      '0.02',
+      '2',
+      '10⁴',
+      '2×10⁴',
+      '5×10⁻⁵',
+    ]);
+  });
+});
+
+describe('pH chart width (issue 19: it used half the panel)', () => {
+  const series = [
+    {
+      id: 'salt',
+      label: 'salt',
+      kind: 'salt' as const,
+      points: [1, 8].map((pH) => ({ pH, solubilityMgPerMl: 1 })),
+    },
+  ];
+  const chartWidth = (container: HTMLElement) =>
+    Number(container.querySelector('.recharts-wrapper > svg')?.getAttribute('width'));
+
+  it('falls back to 680 px where nothing can be measured (jsdom has no layout)', () => {
+    const { container } = render(<PhSolubilityChart doseLineMgPerMl={null} series={series} />);
+    expect(chartWidth(container)).toBe(680);
+  });
+
+  it('takes its container’s width as the container reports it', () => {
+    const original = globalThis.ResizeObserver;
+    // A stand-in observer: the test reports a width for the element the chart observes.
+    const watched: { target: Element; cb: ResizeObserverCallback }[] = [];
+    globalThis.ResizeObserver = class {
+      constructor(private readonly cb: ResizeObserverCallback) {}
+      observe(target: Element) {
+        watched.push({ target, cb: this.cb });
+      }
+      unobserve() {}
+      disconnect() {}
+    } as unknown as typeof ResizeObserver;
+    try {
+      const { container } = render(<PhSolubilityChart doseLineMgPerMl={null} series={series} />);
+      const box = screen.getByRole('img', { name: /Solubility against pH/ });
+      const mine = watched.filter((w) => w.target === box);
+      expect(mine).toHaveLength(1);
+      act(() =>
+        mine[0]!.cb([{ contentRect: { width: 1013.6 } } as ResizeObserverEntry], {} as never),
+      );
+      expect(chartWidth(container)).toBe(1013);
+    } finally {
+      globalThis.ResizeObserver = original;
+    }
+  });
+
+  it('keeps a width it is given (the printed sheet)', () => {
+    const { container } = render(
+      <PhSolubilityChart doseLineMgPerMl={null} series={series} width={640} />,
+    );
+    expect(chartWidth(container)).toBe(640);
   });
 });
