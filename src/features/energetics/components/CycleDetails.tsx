@@ -3,6 +3,9 @@ import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/com
 import { sourcesOf } from '../energetics-model';
 import { kj, labelOf } from './energetics-labels';
 
+type Thermo = CandidateEnergetics & { thermo: SaltThermoResult };
+type Step = [string, string, { value: number; uncertainty: number; method: string }];
+
 /** One salt's cycle as a table: each step's estimate ± 1σ and method, measured ΔH_sol and its back-out. */
 export function CycleDetails({
   data,
@@ -10,42 +13,12 @@ export function CycleDetails({
   measured,
 }: {
   data: ProjectScreening;
-  e: CandidateEnergetics & { thermo: SaltThermoResult };
+  e: Thermo;
   measured: number | null;
 }) {
   const t = e.thermo;
   const screened = data.screen.rows.find((r) => r.id === e.candidateId);
-  const perDrug = screened?.solutionEnthalpyPerDrugIon ?? null;
-  const drugIons = screened?.drugPerSalt ?? 1;
-  let backed: { value: number; uncertainty: number } | null = null;
-  let backedError: string | null = null;
-  if (measured !== null) {
-    try {
-      backed = latticeFromSolutionEnthalpy({
-        solutionEnthalpyKJ: measured,
-        cationHydration: t.cationHydrationKJ,
-        anionHydration: t.anionHydrationKJ,
-        cationsPerFormula: e.cationsPerFormula,
-        anionsPerFormula: e.anionsPerFormula,
-      });
-    } catch (err) {
-      backedError = err instanceof Error ? err.message : String(err);
-    }
-  }
-  const rows: [string, string, { value: number; uncertainty: number; method: string }][] = [
-    ['ΔH_L', 'lattice dissociation, per formula unit', t.latticeEnthalpyKJ],
-    [
-      `ΔH_hyd,+`,
-      `one ${e.cationLabel}${e.cationsPerFormula > 1 ? ` (× ${e.cationsPerFormula})` : ''}`,
-      t.cationHydrationKJ,
-    ],
-    [
-      `ΔH_hyd,−`,
-      `one ${e.anionLabel}${e.anionsPerFormula > 1 ? ` (× ${e.anionsPerFormula})` : ''}`,
-      t.anionHydrationKJ,
-    ],
-    ['ΔH_sol', 'solution at infinite dilution, per formula unit', t.solutionEnthalpyKJ],
-  ];
+  const backOut = measured !== null ? backedOutLatticeOf(e, measured) : null;
   return (
     <>
       <table className="data-table cycle-table">
@@ -58,96 +31,162 @@ export function CycleDetails({
           </tr>
         </thead>
         <tbody>
-          {rows.map(([sym, what, est]) => (
-            <tr key={sym}>
-              <th scope="row">
-                {sym} <div className="muted small-note">{what}</div>
-              </th>
-              <td>
-                {kj(est.value)} ± {est.uncertainty.toFixed(0)}{' '}
-                {est.method === 'published' ? (
-                  <span
-                    className="origin origin-published"
-                    title="published single-ion value (see Sources)"
-                  >
-                    pub.
-                  </span>
-                ) : (
-                  <span className="origin origin-estimated">est.</span>
-                )}
-              </td>
-              <td className="method">{est.method}</td>
-            </tr>
+          {cycleSteps(e).map((step) => (
+            <StepRow key={step[0]} step={step} />
           ))}
-          {perDrug ? (
-            <tr>
-              <th scope="row">
-                ΔH_sol per drug ion
-                <div className="muted small-note">
-                  ÷ {drugIons}, as the Ranking, the sheet and the CSV show it
-                </div>
-              </th>
-              <td
-                className={perDrug.notInformative ? 'muted not-informative' : undefined}
-                title={perDrug.notInformative ?? undefined}
-              >
-                {perDrug.notInformative
-                  ? 'not informative'
-                  : perDrug.sigmaKJPerMolDrugIon !== null
-                    ? formatWithUncertainty(
-                        perDrug.valueKJPerMolDrugIon,
-                        perDrug.sigmaKJPerMolDrugIon,
-                      )
-                    : kj(perDrug.valueKJPerMolDrugIon)}
-              </td>
-              <td className="method">{perDrug.notInformative ?? perDrug.basis}</td>
-            </tr>
+          {screened?.solutionEnthalpyPerDrugIon ? (
+            <PerDrugIonRow
+              perDrug={screened.solutionEnthalpyPerDrugIon}
+              drugIons={screened.drugPerSalt ?? 1}
+            />
           ) : null}
-          {measured !== null ? (
-            <tr>
-              <th scope="row">
-                ΔH_sol <div className="muted small-note">measured (calorimetry)</div>
-              </th>
-              <td>
-                {kj(measured)} <span className="origin origin-measured">meas.</span>
-              </td>
-              <td className="method">bench data</td>
-            </tr>
-          ) : null}
-          {backed ? (
-            <tr>
-              <th scope="row">
-                ΔH_L <div className="muted small-note">backed out of the measured ΔH_sol</div>
-              </th>
-              <td>
-                {kj(backed.value)} ± {backed.uncertainty.toFixed(0)}
-              </td>
-              <td className="method">cycle solver</td>
-            </tr>
-          ) : null}
+          {measured !== null ? <MeasuredRow measured={measured} /> : null}
+          {backOut && 'value' in backOut ? <BackedOutRow backed={backOut} /> : null}
         </tbody>
       </table>
-      {backedError ? (
-        <p className="field-error">Lattice enthalpy not backed out: {backedError}</p>
+      {backOut && 'error' in backOut ? (
+        <p className="field-error">Lattice enthalpy not backed out: {backOut.error}</p>
       ) : null}
       <p className="muted small-note">
         Lattice method: {t.methodChosen} — {t.methodReason}
       </p>
-      <details className="sources">
-        <summary>Sources</summary>
+      <CycleSources thermo={t} />
+    </>
+  );
+}
+
+/**
+ * ΔH_L backed out of a measured ΔH_sol by the core's cycle solver (no σ typed in: the record states
+ * none, so the ±1σ is the hydration terms' alone), or why it cannot be.
+ */
+function backedOutLatticeOf(
+  e: Thermo,
+  measured: number,
+): { value: number; uncertainty: number } | { error: string } {
+  try {
+    return latticeFromSolutionEnthalpy({
+      solutionEnthalpyKJ: measured,
+      cationHydration: e.thermo.cationHydrationKJ,
+      anionHydration: e.thermo.anionHydrationKJ,
+      cationsPerFormula: e.cationsPerFormula,
+      anionsPerFormula: e.anionsPerFormula,
+    });
+  } catch (err) {
+    return { error: err instanceof Error ? err.message : String(err) };
+  }
+}
+
+/** The four steps of the cycle: symbol, what it is, and the core's estimate. */
+function cycleSteps(e: Thermo): Step[] {
+  const t = e.thermo;
+  const times = (n: number) => (n > 1 ? ` (× ${n})` : '');
+  return [
+    ['ΔH_L', 'lattice dissociation, per formula unit', t.latticeEnthalpyKJ],
+    [`ΔH_hyd,+`, `one ${e.cationLabel}${times(e.cationsPerFormula)}`, t.cationHydrationKJ],
+    [`ΔH_hyd,−`, `one ${e.anionLabel}${times(e.anionsPerFormula)}`, t.anionHydrationKJ],
+    ['ΔH_sol', 'solution at infinite dilution, per formula unit', t.solutionEnthalpyKJ],
+  ];
+}
+
+function StepRow({ step: [sym, what, est] }: { step: Step }) {
+  return (
+    <tr>
+      <th scope="row">
+        {sym} <div className="muted small-note">{what}</div>
+      </th>
+      <td>
+        {kj(est.value)} ± {est.uncertainty.toFixed(0)}{' '}
+        {est.method === 'published' ? (
+          <span
+            className="origin origin-published"
+            title="published single-ion value (see Sources)"
+          >
+            pub.
+          </span>
+        ) : (
+          <span className="origin origin-estimated">est.</span>
+        )}
+      </td>
+      <td className="method">{est.method}</td>
+    </tr>
+  );
+}
+
+type PerDrug = NonNullable<
+  ProjectScreening['screen']['rows'][number]['solutionEnthalpyPerDrugIon']
+>;
+
+/** ΔH_sol per drug ion, as the Ranking, the sheet and the CSV show it (a number or "not informative"). */
+function PerDrugIonRow({ perDrug, drugIons }: { perDrug: PerDrug; drugIons: number }) {
+  return (
+    <tr>
+      <th scope="row">
+        ΔH_sol per drug ion
+        <div className="muted small-note">
+          ÷ {drugIons}, as the Ranking, the sheet and the CSV show it
+        </div>
+      </th>
+      <td
+        className={perDrug.notInformative ? 'muted not-informative' : undefined}
+        title={perDrug.notInformative ?? undefined}
+      >
+        {perDrug.notInformative
+          ? 'not informative'
+          : perDrug.sigmaKJPerMolDrugIon !== null
+            ? formatWithUncertainty(perDrug.valueKJPerMolDrugIon, perDrug.sigmaKJPerMolDrugIon)
+            : kj(perDrug.valueKJPerMolDrugIon)}
+      </td>
+      <td className="method">{perDrug.notInformative ?? perDrug.basis}</td>
+    </tr>
+  );
+}
+
+function MeasuredRow({ measured }: { measured: number }) {
+  return (
+    <tr>
+      <th scope="row">
+        ΔH_sol <div className="muted small-note">measured (calorimetry)</div>
+      </th>
+      <td>
+        {kj(measured)} <span className="origin origin-measured">meas.</span>
+      </td>
+      <td className="method">bench data</td>
+    </tr>
+  );
+}
+
+function BackedOutRow({ backed }: { backed: { value: number; uncertainty: number } }) {
+  return (
+    <tr>
+      <th scope="row">
+        ΔH_L <div className="muted small-note">backed out of the measured ΔH_sol</div>
+      </th>
+      <td>
+        {kj(backed.value)} ± {backed.uncertainty.toFixed(0)}
+      </td>
+      <td className="method">cycle solver</td>
+    </tr>
+  );
+}
+
+/** The published sources behind the estimates, and the notes the core attached to ΔH_sol. */
+function CycleSources({ thermo: t }: { thermo: SaltThermoResult }) {
+  const notes = t.solutionEnthalpyKJ.notes ?? [];
+  return (
+    <details className="sources">
+      <summary>Sources</summary>
+      <ul>
+        {sourcesOf(t.latticeEnthalpyKJ, t.cationHydrationKJ, t.anionHydrationKJ).map((s) => (
+          <li key={s}>{s}</li>
+        ))}
+      </ul>
+      {notes.length ? (
         <ul>
-          {sourcesOf(t.latticeEnthalpyKJ, t.cationHydrationKJ, t.anionHydrationKJ).map((s) => (
-            <li key={s}>{s}</li>
+          {notes.map((n) => (
+            <li key={n}>{n}</li>
           ))}
         </ul>
-        {(t.solutionEnthalpyKJ.notes ?? []).length ? (
-          <ul>
-            {(t.solutionEnthalpyKJ.notes ?? []).map((n) => (
-              <li key={n}>{n}</li>
-            ))}
-          </ul>
-        ) : null}
-      </details>
-    </>
+      ) : null}
+    </details>
   );
 }
