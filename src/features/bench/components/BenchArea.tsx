@@ -1,11 +1,13 @@
 import { useState, type ReactNode } from 'react';
-import type { MeasurementRecord, ProjectRecord } from '@/persistence/records';
+import type { CandidateRecord, MeasurementRecord, ProjectRecord } from '@/persistence/records';
 import { candidateLabel } from '@/screening-data/candidate-label';
 import { useBenchData } from '../hooks/use-bench-data';
 import { CandidateForm } from './CandidateForm';
 import { MeasurementForm } from './MeasurementForm';
 import { MeasurementTable } from './MeasurementTable';
 import '../bench.css';
+
+type Candidate = CandidateRecord;
 
 export interface BenchExtras {
   /** The workbench's estimate for what a measurement measured, in words with unit and uncertainty. */
@@ -46,7 +48,7 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
     );
   }
   const current = candidates.find((c) => c.id === selected) ?? candidates[0]!;
-  const label = (c: (typeof candidates)[number]) => candidateLabel(c, extras.ionNames?.[c.id]);
+  const label = (c: Candidate) => candidateLabel(c, extras.ionNames?.[c.id]);
   const mine = measurements.filter((m) => m.candidateId === current.id);
 
   return (
@@ -61,27 +63,13 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
           are entered in °C.
         </p>
         <div className="bench-layout">
-          <nav aria-label="Shortlisted candidates" className="bench-candidates">
-            <ul>
-              {candidates.map((c) => {
-                const n = measurements.filter((m) => m.candidateId === c.id).length;
-                return (
-                  <li key={c.id}>
-                    <button
-                      type="button"
-                      aria-pressed={c.id === current.id}
-                      onClick={() => setSelected(c.id)}
-                    >
-                      <span>{label(c)}</span>
-                      <span className="count" aria-label={`${n} measurements`}>
-                        {n}
-                      </span>
-                    </button>
-                  </li>
-                );
-              })}
-            </ul>
-          </nav>
+          <CandidatePicker
+            candidates={candidates}
+            measurements={measurements}
+            currentId={current.id}
+            label={label}
+            onPick={setSelected}
+          />
           <div className="bench-main">
             <h3>{label(current)}</h3>
             <CandidateForm
@@ -106,5 +94,40 @@ export function BenchArea({ project, extras }: { project: ProjectRecord; extras:
       </section>
       {extras.derived ? extras.derived(current.id, mine) : null}
     </div>
+  );
+}
+
+/** The shortlisted candidates, each with its number of measurements; the one shown is pressed. */
+function CandidatePicker({
+  candidates,
+  measurements,
+  currentId,
+  label,
+  onPick,
+}: {
+  candidates: readonly Candidate[];
+  measurements: readonly MeasurementRecord[];
+  currentId: string;
+  label: (c: Candidate) => string;
+  onPick: (id: string) => void;
+}) {
+  return (
+    <nav aria-label="Shortlisted candidates" className="bench-candidates">
+      <ul>
+        {candidates.map((c) => {
+          const n = measurements.filter((m) => m.candidateId === c.id).length;
+          return (
+            <li key={c.id}>
+              <button type="button" aria-pressed={c.id === currentId} onClick={() => onPick(c.id)}>
+                <span>{label(c)}</span>
+                <span className="count" aria-label={`${n} measurements`}>
+                  {n}
+                </span>
+              </button>
+            </li>
+          );
+        })}
+      </ul>
+    </nav>
   );
 }

@@ -58,47 +58,15 @@ export function CandidateForm({
 
   return (
     <div className="candidate-form">
-      <div className="field">
-        <label htmlFor={`${uid}-water`}>
-          Water of crystallisation <span className="unit">(H₂O per formula unit)</span>
-        </label>
-        <input
-          id={`${uid}-water`}
-          inputMode="decimal"
-          value={text}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${uid}-water-error` : `${uid}-water-hint`}
-          onChange={(e) => change(e.target.value)}
-        />
-        {error ? (
-          <p className="field-error" id={`${uid}-water-error`}>
-            {error}
-          </p>
-        ) : (
-          <p className="field-hint" id={`${uid}-water-hint`}>
-            0 for an anhydrate; counts in the salt’s mass per dose
-          </p>
-        )}
-      </div>
+      <HydrateField uid={uid} text={text} error={error} onChange={change} />
       <div className="button-row">
         {confirm ? (
-          <span role="group" aria-label={`Confirm removing ${label}`}>
-            Remove {label}
-            {measurementCount
-              ? ` and its ${measurementCount} measurement${measurementCount === 1 ? '' : 's'}`
-              : ''}
-            ?{' '}
-            <button
-              type="button"
-              className="danger"
-              onClick={() => void candidatesRepo.remove(candidate.id)}
-            >
-              Remove
-            </button>{' '}
-            <button type="button" onClick={() => setConfirm(false)}>
-              Keep
-            </button>
-          </span>
+          <ConfirmRemove
+            candidateId={candidate.id}
+            label={label}
+            measurementCount={measurementCount}
+            onKeep={() => setConfirm(false)}
+          />
         ) : (
           <button type="button" className="danger" onClick={() => setConfirm(true)}>
             Remove from shortlist…
@@ -106,5 +74,76 @@ export function CandidateForm({
         )}
       </div>
     </div>
+  );
+}
+
+/** Water of crystallisation per formula unit, with its message or hint. */
+function HydrateField({
+  uid,
+  text,
+  error,
+  onChange,
+}: {
+  uid: string;
+  text: string;
+  error: string | null;
+  onChange: (value: string) => void;
+}) {
+  return (
+    <div className="field">
+      <label htmlFor={`${uid}-water`}>
+        Water of crystallisation <span className="unit">(H₂O per formula unit)</span>
+      </label>
+      <input
+        id={`${uid}-water`}
+        inputMode="decimal"
+        value={text}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${uid}-water-error` : `${uid}-water-hint`}
+        onChange={(e) => onChange(e.target.value)}
+      />
+      {error ? (
+        <p className="field-error" id={`${uid}-water-error`}>
+          {error}
+        </p>
+      ) : (
+        <p className="field-hint" id={`${uid}-water-hint`}>
+          0 for an anhydrate; counts in the salt’s mass per dose
+        </p>
+      )}
+    </div>
+  );
+}
+
+/** The confirmation before the candidate and its measurements leave the shortlist. */
+function ConfirmRemove({
+  candidateId,
+  label,
+  measurementCount,
+  onKeep,
+}: {
+  candidateId: string;
+  label: string;
+  measurementCount: number;
+  onKeep: () => void;
+}) {
+  return (
+    <span role="group" aria-label={`Confirm removing ${label}`}>
+      Remove {label}
+      {measurementCount
+        ? ` and its ${measurementCount} measurement${measurementCount === 1 ? '' : 's'}`
+        : ''}
+      ?{' '}
+      <button
+        type="button"
+        className="danger"
+        onClick={() => void candidatesRepo.remove(candidateId)}
+      >
+        Remove
+      </button>{' '}
+      <button type="button" onClick={onKeep}>
+        Keep
+      </button>
+    </span>
   );
 }

@@ -31,26 +31,7 @@ export function MeasurementTable({
   readingFor?: (m: MeasurementRecord) => ReactNode;
 }) {
   const [removed, setRemoved] = useState<MeasurementRecord | null>(null);
-  const undoBar = (
-    <div role="status" aria-live="polite" className="bench-undo">
-      {removed ? (
-        <>
-          Deleted {MEASUREMENT_KINDS[removed.kind].label.toLowerCase()}
-          {removed.value !== null ? ` ${fmt(removed.value)} ${removed.unit}` : ''}.{' '}
-          <button
-            type="button"
-            className="primary small"
-            onClick={() => {
-              void measurementsRepo.restore(removed);
-              setRemoved(null);
-            }}
-          >
-            Undo delete
-          </button>
-        </>
-      ) : null}
-    </div>
-  );
+  const undoBar = <UndoBar removed={removed} onUndone={() => setRemoved(null)} />;
   if (measurements.length === 0) {
     return (
       <>
@@ -77,48 +58,99 @@ export function MeasurementTable({
           </tr>
         </thead>
         <tbody>
-          {measurements.map((m) => {
-            const spec = MEASUREMENT_KINDS[m.kind];
-            return (
-              <tr key={m.id}>
-                <th scope="row">{spec.label}</th>
-                <td>
-                  {m.value === null ? (
-                    '—'
-                  ) : (
-                    <>
-                      {fmt(m.value)} <span className="unit">{m.unit}</span>
-                    </>
-                  )}
-                  <span className="mark-measured" title="measured">
-                    {' '}
-                    measured
-                  </span>
-                </td>
-                <td>
-                  {conditions(m)}
-                  {readingFor ? readingFor(m) : null}
-                </td>
-                <td className="prediction">{predictionFor(m)}</td>
-                <td className="notes-cell">{m.text || '—'}</td>
-                <td>
-                  <button
-                    type="button"
-                    className="danger small"
-                    aria-label={`Delete ${spec.label.toLowerCase()} ${m.value ?? ''} ${m.unit}`.trim()}
-                    onClick={() => {
-                      setRemoved(m);
-                      void measurementsRepo.remove(m.id);
-                    }}
-                  >
-                    Delete
-                  </button>
-                </td>
-              </tr>
-            );
-          })}
+          {measurements.map((m) => (
+            <MeasurementRow
+              key={m.id}
+              m={m}
+              predictionFor={predictionFor}
+              readingFor={readingFor}
+              onDelete={() => {
+                setRemoved(m);
+                void measurementsRepo.remove(m.id);
+              }}
+            />
+          ))}
         </tbody>
       </table>
     </div>
+  );
+}
+
+/** What was just deleted, with a way to bring it back. */
+function UndoBar({
+  removed,
+  onUndone,
+}: {
+  removed: MeasurementRecord | null;
+  onUndone: () => void;
+}) {
+  return (
+    <div role="status" aria-live="polite" className="bench-undo">
+      {removed ? (
+        <>
+          Deleted {MEASUREMENT_KINDS[removed.kind].label.toLowerCase()}
+          {removed.value !== null ? ` ${fmt(removed.value)} ${removed.unit}` : ''}.{' '}
+          <button
+            type="button"
+            className="primary small"
+            onClick={() => {
+              void measurementsRepo.restore(removed);
+              onUndone();
+            }}
+          >
+            Undo delete
+          </button>
+        </>
+      ) : null}
+    </div>
+  );
+}
+
+/** One measurement: what, value (marked measured), conditions and reading, prediction, notes, delete. */
+function MeasurementRow({
+  m,
+  predictionFor,
+  readingFor,
+  onDelete,
+}: {
+  m: MeasurementRecord;
+  predictionFor: (m: MeasurementRecord) => ReactNode;
+  readingFor: ((m: MeasurementRecord) => ReactNode) | undefined;
+  onDelete: () => void;
+}) {
+  const spec = MEASUREMENT_KINDS[m.kind];
+  return (
+    <tr>
+      <th scope="row">{spec.label}</th>
+      <td>
+        {m.value === null ? (
+          '—'
+        ) : (
+          <>
+            {fmt(m.value)} <span className="unit">{m.unit}</span>
+          </>
+        )}
+        <span className="mark-measured" title="measured">
+          {' '}
+          measured
+        </span>
+      </td>
+      <td>
+        {conditions(m)}
+        {readingFor ? readingFor(m) : null}
+      </td>
+      <td className="prediction">{predictionFor(m)}</td>
+      <td className="notes-cell">{m.text || '—'}</td>
+      <td>
+        <button
+          type="button"
+          className="danger small"
+          aria-label={`Delete ${spec.label.toLowerCase()} ${m.value ?? ''} ${m.unit}`.trim()}
+          onClick={onDelete}
+        >
+          Delete
+        </button>
+      </td>
+    </tr>
   );
 }
