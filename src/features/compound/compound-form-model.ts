@@ -75,14 +75,7 @@ export function compoundFromDraft(
     }
     return x as number | null;
   };
-  const pKaTexts = draft.pKas
-    .split(/[;\s]+|,\s+/)
-    .map((s) => s.trim())
-    .filter(Boolean);
-  const pKaValues = pKaTexts.map((s) => Number(s.replace(',', '.')));
-  if (pKaTexts.length === 0) errors.pKas = 'Give at least one pKa';
-  else if (pKaValues.some((x) => !Number.isFinite(x)))
-    errors.pKas = 'pKa values must be numbers, separated by commas';
+  const pKaValues = readPKas(draft.pKas, errors);
 
   const ionCharge = Number(draft.ionCharge);
   const candidate = {
@@ -105,6 +98,40 @@ export function compoundFromDraft(
     formulaUnitsPerCell: numberField('formulaUnitsPerCell', 'Z'),
     notes: draft.notes,
   };
+  checkFormula(draft, errors);
+  if ((candidate.cellVolumeA3 === null) !== (candidate.formulaUnitsPerCell === null)) {
+    const missing = candidate.cellVolumeA3 === null ? 'cellVolumeA3' : 'formulaUnitsPerCell';
+    errors[missing] ??= 'Give both the cell volume and Z, or neither';
+  }
+  if (candidate.logP !== null && candidate.logPOrigin === null) candidate.logPOrigin = 'measured';
+  const chargeError = ionChargeError(draft.kind, ionCharge, pKaValues.length);
+  if (chargeError) errors.ionCharge = chargeError;
+  const parsed = compoundSchema.safeParse(candidate);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const key = String(issue.path[0] ?? 'name') as keyof CompoundDraft;
+      errors[key] ??= issue.message;
+    }
+  }
+  if (Object.keys(errors).length > 0) return { ok: false, errors };
+  return { ok: true, compound: parsed.data! };
+}
+
+/** pKa values typed as a list (commas, semicolons or spaces); a message in `errors` if unreadable. */
+function readPKas(text: string, errors: FieldErrors): number[] {
+  const pKaTexts = text
+    .split(/[;\s]+|,\s+/)
+    .map((s) => s.trim())
+    .filter(Boolean);
+  const pKaValues = pKaTexts.map((s) => Number(s.replace(',', '.')));
+  if (pKaTexts.length === 0) errors.pKas = 'Give at least one pKa';
+  else if (pKaValues.some((x) => !Number.isFinite(x)))
+    errors.pKas = 'pKa values must be numbers, separated by commas';
+  return pKaValues;
+}
+
+/** The formula must read as a neutral free form; without a SMILES it is required. */
+function checkFormula(draft: CompoundDraft, errors: FieldErrors): void {
   const formulaText = draft.formula.trim();
   if (formulaText !== '') {
     try {
@@ -119,31 +146,20 @@ export function compoundFromDraft(
   } else if (draft.smiles.trim() === '') {
     errors.formula = 'Give a SMILES or a molecular formula';
   }
-  if ((candidate.cellVolumeA3 === null) !== (candidate.formulaUnitsPerCell === null)) {
-    const missing = candidate.cellVolumeA3 === null ? 'cellVolumeA3' : 'formulaUnitsPerCell';
-    errors[missing] ??= 'Give both the cell volume and Z, or neither';
-  }
-  if (candidate.logP !== null && candidate.logPOrigin === null) candidate.logPOrigin = 'measured';
-  if (
-    Number.isInteger(ionCharge) &&
-    pKaValues.length > 0 &&
-    Math.abs(ionCharge) > pKaValues.length
-  ) {
-    errors.ionCharge = `A charge of ${Math.abs(ionCharge)} needs ${Math.abs(ionCharge)} pKa values (one per ionised group)`;
-  }
-  if (draft.kind === 'base' && ionCharge < 0)
-    errors.ionCharge = 'A base forms a cation: charge must be +1, +2 or +3';
-  if (draft.kind === 'acid' && ionCharge > 0)
-    errors.ionCharge = 'An acid forms an anion: charge must be −1, −2 or −3';
-  const parsed = compoundSchema.safeParse(candidate);
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
-      const key = String(issue.path[0] ?? 'name') as keyof CompoundDraft;
-      errors[key] ??= issue.message;
-    }
-  }
-  if (Object.keys(errors).length > 0) return { ok: false, errors };
-  return { ok: true, compound: parsed.data! };
+}
+
+/** Why the ion charge does not fit the kind or the number of pKa values, or null. */
+function ionChargeError(
+  kind: CompoundDraft['kind'],
+  ionCharge: number,
+  pKaCount: number,
+): string | null {
+  if (kind === 'base' && ionCharge < 0) return 'A base forms a cation: charge must be +1, +2 or +3';
+  if (kind === 'acid' && ionCharge > 0)
+    return 'An acid forms an anion: charge must be −1, −2 or −3';
+  if (Number.isInteger(ionCharge) && pKaCount > 0 && Math.abs(ionCharge) > pKaCount)
+    return `A charge of ${Math.abs(ionCharge)} needs ${Math.abs(ionCharge)} pKa values (one per ionised group)`;
+  return null;
 }
 
 /** Every field of the form, in display order. */

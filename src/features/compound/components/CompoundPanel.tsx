@@ -5,6 +5,7 @@ import { useCompoundAutosave } from '../hooks/use-compound-autosave';
 import { useStructureCheck } from '../hooks/use-structure-check';
 import { StructureCard } from './StructureCard';
 import { Field, SaveBadge } from './CompoundFields';
+import type { CompoundDraft, FieldErrors } from '../compound-form-model';
 import '../compound.css';
 
 /**
@@ -21,7 +22,6 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
     structure,
   );
 
-  const common = { draft, errors, onChange: change };
   return (
     <section aria-labelledby="compound-title" className="panel">
       <header className="panel-head">
@@ -39,122 +39,9 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
         onSubmit={(e) => e.preventDefault()}
         aria-label="Compound definition"
       >
-        <Field id="name" label="Name" {...common} />
-        <div className="field">
-          <label htmlFor="compound-kind">Ionisable as</label>
-          <select
-            id="compound-kind"
-            value={draft.kind}
-            onChange={(e) => change('kind', e.target.value)}
-          >
-            <option value="base">Weak base (forms a cation)</option>
-            <option value="acid">Weak acid (forms an anion)</option>
-          </select>
-        </div>
-        <Field
-          id="smiles"
-          label="Structure (SMILES)"
-          wide
-          hint="Neutral free form, OpenSMILES"
-          {...common}
-        />
-        <Field
-          id="formula"
-          label="Molecular formula"
-          hint="Neutral free form, e.g. C18H20ClN3O"
-          {...common}
-        />
-        <Field
-          id="pKas"
-          label={draft.kind === 'base' ? 'pKa of the conjugate acid(s)' : 'pKa(s)'}
-          hint="25 °C, water; several values separated by commas"
-          {...common}
-        />
-        <div className="field">
-          <label htmlFor="compound-pKaOrigin">pKa origin</label>
-          <select
-            id="compound-pKaOrigin"
-            value={draft.pKaOrigin}
-            onChange={(e) => change('pKaOrigin', e.target.value)}
-          >
-            <option value="not-stated">Not stated (screened as predicted)</option>
-            <option value="measured">Measured</option>
-            <option value="literature">Literature</option>
-            <option value="predicted">Predicted</option>
-          </select>
-        </div>
-        <Field
-          id="ionCharge"
-          label="Charge of the salt-forming ion"
-          hint="e.g. +1, or +2 for a dibasic drug"
-          {...common}
-        />
-        <Field
-          id="intrinsicSolubilityMgPerMl"
-          label="Intrinsic solubility S₀"
-          unit="mg/mL"
-          inputMode="decimal"
-          hint="Empty: estimated from melting point and log P (General Solubility Equation)"
-          {...common}
-        />
-        <div className="field">
-          <label htmlFor="compound-intrinsicSolubilityOrigin">
-            S₀ origin <span className="unit">(1σ, decades)</span>
-          </label>
-          <select
-            id="compound-intrinsicSolubilityOrigin"
-            value={draft.intrinsicSolubilityOrigin}
-            onChange={(e) => change('intrinsicSolubilityOrigin', e.target.value)}
-          >
-            <option value="">Not stated (screened as predicted, ±{S0_SIGMA['not-stated']})</option>
-            <option value="measured">Measured (±{S0_SIGMA.measured})</option>
-            <option value="literature">Literature (±{S0_SIGMA.literature})</option>
-            <option value="predicted">Predicted (±{S0_SIGMA.predicted})</option>
-          </select>
-        </div>
-        <Field id="meltingPointC" label="Melting point" unit="°C" inputMode="decimal" {...common} />
-        <Field id="logP" label="log P" unit="octanol/water" inputMode="decimal" {...common} />
-        <div className="field">
-          <label htmlFor="compound-logPOrigin">log P origin</label>
-          <select
-            id="compound-logPOrigin"
-            value={draft.logPOrigin}
-            onChange={(e) => change('logPOrigin', e.target.value)}
-          >
-            <option value="">Not given</option>
-            <option value="measured">Measured</option>
-            <option value="literature">Literature</option>
-            <option value="computed">Computed (openchemlib)</option>
-          </select>
-        </div>
-        <Field
-          id="doseMg"
-          label="Highest single dose"
-          unit="mg, as free form"
-          inputMode="decimal"
-          {...common}
-        />
-        <Field
-          id="densityGPerCm3"
-          label="Density of the free form"
-          unit="g/cm³, measured"
-          inputMode="decimal"
-          {...common}
-        />
-        <Field
-          id="cellVolumeA3"
-          label="Unit-cell volume"
-          unit="Å³, free-form crystal"
-          inputMode="decimal"
-          {...common}
-        />
-        <Field
-          id="formulaUnitsPerCell"
-          label="Molecules per cell (Z)"
-          inputMode="decimal"
-          {...common}
-        />
-        <Field id="notes" label="Notes" wide {...common} />
+        <IdentityFields draft={draft} errors={errors} onChange={change} />
+        <SolubilityFields draft={draft} errors={errors} onChange={change} />
+        <DoseAndSolidFields draft={draft} errors={errors} onChange={change} />
       </form>
       <StructureCard
         compound={project.compound}
@@ -163,5 +50,154 @@ export function CompoundPanel({ project }: { project: ProjectRecord }) {
         onUseLogP={applyComputedLogP}
       />
     </section>
+  );
+}
+
+type FieldsProps = {
+  draft: CompoundDraft;
+  errors: FieldErrors;
+  onChange: (id: keyof CompoundDraft, value: string) => void;
+};
+
+/** What the compound is: name, acid or base, structure, formula, pKa values, ion charge. */
+function IdentityFields({ draft, errors, onChange: change }: FieldsProps) {
+  const common = { draft, errors, onChange: change };
+  return (
+    <>
+      <Field id="name" label="Name" {...common} />
+      <div className="field">
+        <label htmlFor="compound-kind">Ionisable as</label>
+        <select
+          id="compound-kind"
+          value={draft.kind}
+          onChange={(e) => change('kind', e.target.value)}
+        >
+          <option value="base">Weak base (forms a cation)</option>
+          <option value="acid">Weak acid (forms an anion)</option>
+        </select>
+      </div>
+      <Field
+        id="smiles"
+        label="Structure (SMILES)"
+        wide
+        hint="Neutral free form, OpenSMILES"
+        {...common}
+      />
+      <Field
+        id="formula"
+        label="Molecular formula"
+        hint="Neutral free form, e.g. C18H20ClN3O"
+        {...common}
+      />
+      <Field
+        id="pKas"
+        label={draft.kind === 'base' ? 'pKa of the conjugate acid(s)' : 'pKa(s)'}
+        hint="25 °C, water; several values separated by commas"
+        {...common}
+      />
+      <div className="field">
+        <label htmlFor="compound-pKaOrigin">pKa origin</label>
+        <select
+          id="compound-pKaOrigin"
+          value={draft.pKaOrigin}
+          onChange={(e) => change('pKaOrigin', e.target.value)}
+        >
+          <option value="not-stated">Not stated (screened as predicted)</option>
+          <option value="measured">Measured</option>
+          <option value="literature">Literature</option>
+          <option value="predicted">Predicted</option>
+        </select>
+      </div>
+      <Field
+        id="ionCharge"
+        label="Charge of the salt-forming ion"
+        hint="e.g. +1, or +2 for a dibasic drug"
+        {...common}
+      />
+    </>
+  );
+}
+
+/** What its solubility estimate rests on: S₀, melting point, log P, each with its origin. */
+function SolubilityFields({ draft, errors, onChange: change }: FieldsProps) {
+  const common = { draft, errors, onChange: change };
+  return (
+    <>
+      <Field
+        id="intrinsicSolubilityMgPerMl"
+        label="Intrinsic solubility S₀"
+        unit="mg/mL"
+        inputMode="decimal"
+        hint="Empty: estimated from melting point and log P (General Solubility Equation)"
+        {...common}
+      />
+      <div className="field">
+        <label htmlFor="compound-intrinsicSolubilityOrigin">
+          S₀ origin <span className="unit">(1σ, decades)</span>
+        </label>
+        <select
+          id="compound-intrinsicSolubilityOrigin"
+          value={draft.intrinsicSolubilityOrigin}
+          onChange={(e) => change('intrinsicSolubilityOrigin', e.target.value)}
+        >
+          <option value="">Not stated (screened as predicted, ±{S0_SIGMA['not-stated']})</option>
+          <option value="measured">Measured (±{S0_SIGMA.measured})</option>
+          <option value="literature">Literature (±{S0_SIGMA.literature})</option>
+          <option value="predicted">Predicted (±{S0_SIGMA.predicted})</option>
+        </select>
+      </div>
+      <Field id="meltingPointC" label="Melting point" unit="°C" inputMode="decimal" {...common} />
+      <Field id="logP" label="log P" unit="octanol/water" inputMode="decimal" {...common} />
+      <div className="field">
+        <label htmlFor="compound-logPOrigin">log P origin</label>
+        <select
+          id="compound-logPOrigin"
+          value={draft.logPOrigin}
+          onChange={(e) => change('logPOrigin', e.target.value)}
+        >
+          <option value="">Not given</option>
+          <option value="measured">Measured</option>
+          <option value="literature">Literature</option>
+          <option value="computed">Computed (openchemlib)</option>
+        </select>
+      </div>
+    </>
+  );
+}
+
+/** The dose, the free form's density or unit cell, and notes. */
+function DoseAndSolidFields({ draft, errors, onChange: change }: FieldsProps) {
+  const common = { draft, errors, onChange: change };
+  return (
+    <>
+      <Field
+        id="doseMg"
+        label="Highest single dose"
+        unit="mg, as free form"
+        inputMode="decimal"
+        {...common}
+      />
+      <Field
+        id="densityGPerCm3"
+        label="Density of the free form"
+        unit="g/cm³, measured"
+        inputMode="decimal"
+        {...common}
+      />
+      <Field
+        id="cellVolumeA3"
+        label="Unit-cell volume"
+        unit="Å³, free-form crystal"
+        inputMode="decimal"
+        {...common}
+      />
+      <Field
+        id="formulaUnitsPerCell"
+        label="Molecules per cell (Z)"
+        inputMode="decimal"
+        {...common}
+      />
+      <Field id="notes" label="Notes" wide {...common} />
+    </>
   );
 }
