@@ -1,40 +1,16 @@
 import { FieldMessage, describedBy } from '@/components/FieldMessage';
 import { useState, type FormEvent } from 'react';
-import {
-  ChemInputError,
-  buildCustomCounterIon,
-  parseFormula,
-  parseStructure,
-  sameElements,
-  type AcceptabilityClass,
-} from '@/chem';
+import { buildCustomCounterIon } from '@/chem';
 import { customIonsRepo } from '@/persistence/custom-ions-repo';
-
-interface Draft {
-  name: string;
-  kind: 'anion' | 'cation';
-  formula: string;
-  charge: string;
-  pKas: string;
-  pKaSource: string;
-  acceptabilityClass: string;
-  ionSmiles: string;
-  tradeNote: string;
-}
-
-const EMPTY: Draft = {
-  name: '',
-  kind: 'anion',
-  formula: '',
-  charge: '-1',
-  pKas: '',
-  pKaSource: '',
-  acceptabilityClass: '',
-  ionSmiles: '',
-  tradeNote: '',
-};
-
-type Errors = Partial<Record<keyof Draft, string>>;
+import {
+  EMPTY_IN_HOUSE_DRAFT as EMPTY,
+  customIonInput,
+  errorsOfFailedSave,
+  readChargeAndPKas,
+  ringsFromSmiles,
+  type InHouseDraft as Draft,
+  type InHouseErrors as Errors,
+} from '../in-house-ion-draft';
 
 /**
  * Add an in-house counter-ion, available to every project. Validated with the library's zod schema;
@@ -42,120 +18,18 @@ type Errors = Partial<Record<keyof Draft, string>>;
  * supplies the ring counts.
  */
 export function InHouseIonForm() {
-  const [draft, setDraft] = useState<Draft>(EMPTY);
-  const [errors, setErrors] = useState<Errors>({});
-  const [status, setStatus] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
-  const set = (k: keyof Draft, v: string) => setDraft((d) => ({ ...d, [k]: v }));
-
-  const submit = async (e: FormEvent) => {
-    e.preventDefault();
-    setStatus(null);
-    const errs: Errors = {};
-    const charge = Number(draft.charge.replace('−', '-').replace('+', ''));
-    if (!Number.isInteger(charge)) errs.charge = 'Charge must be a whole number';
-    const pkTexts = draft.pKas
-      .split(/[;\s]+|,\s*/)
-      .map((s) => s.trim())
-      .filter(Boolean);
-    const pKas = pkTexts.map((t) => Number(t.replace('−', '-')));
-    if (pKas.some((v) => !Number.isFinite(v)))
-      errs.pKas = 'pKa values must be numbers, separated by commas';
-    if (Object.keys(errs).length) {
-      setErrors(errs);
-      return;
-    }
-    setBusy(true);
-    try {
-      let rings = { aromatic: 0, nonAromatic: 0 };
-      if (draft.ionSmiles.trim()) {
-        let s;
-        try {
-          s = await parseStructure(draft.ionSmiles);
-        } catch (err) {
-          setErrors({
-            ionSmiles:
-              err instanceof ChemInputError
-                ? err.message.replace(/^smiles: /, '')
-                : 'Cannot read this SMILES',
-          });
-          return;
-        }
-        let typed;
-        try {
-          typed = parseFormula(draft.formula, 'formula').elements;
-        } catch (err) {
-          setErrors({
-            formula:
-              err instanceof Error
-                ? err.message.replace(/^formula: /, '')
-                : 'Cannot read this formula',
-          });
-          return;
-        }
-        if (!sameElements(typed, s.elements)) {
-          setErrors({ formula: `The formula differs from the SMILES (${s.formula})` });
-          return;
-        }
-        if (s.netCharge !== charge) {
-          setErrors({ charge: `The SMILES carries charge ${s.netCharge}` });
-          return;
-        }
-        rings = s.rings;
-      }
-      const ion = buildCustomCounterIon(
-        {
-          name: draft.name,
-          kind: draft.kind,
-          formula: draft.formula,
-          charge,
-          ionSmiles: draft.ionSmiles,
-          pKas,
-          pKaSource: draft.pKaSource,
-          acceptabilityClass:
-            draft.acceptabilityClass === ''
-              ? null
-              : (Number(draft.acceptabilityClass) as AcceptabilityClass),
-          tradeNote: draft.tradeNote,
-          aromaticRings: rings.aromatic,
-          nonAromaticRings: rings.nonAromatic,
-        },
-        customIonsRepo.newInHouseId(),
-      );
-      await customIonsRepo.saveInHouse(ion);
-      setErrors({});
-      setDraft({ ...EMPTY, kind: draft.kind, charge: draft.kind === 'anion' ? '-1' : '1' });
-      setStatus(
-        `Saved “${ion.name}” (${ion.molarMassGPerMol.toFixed(2)} g/mol) as an in-house ion for every project.`,
-      );
-    } catch (err) {
-      if (err instanceof ChemInputError) {
-        const key = (err.field in EMPTY ? err.field : 'name') as keyof Draft;
-        setErrors({ [key]: err.message.replace(/^[^:]+: /, '') });
-      } else {
-        setErrors({ name: err instanceof Error ? err.message : 'Could not save the ion' });
-      }
-    } finally {
-      setBusy(false);
-    }
-  };
-
-  const field = (k: keyof Draft, label: string, hint?: string, wide = false) => {
-    const id = `inhouse-${k}`;
-    return (
-      <div className={`field${wide ? ' field-wide' : ''}`}>
-        <label htmlFor={id}>{label}</label>
-        <input
-          id={id}
-          value={draft[k]}
-          aria-invalid={errors[k] ? true : undefined}
-          aria-describedby={describedBy(id, errors[k], hint)}
-          onChange={(e) => set(k, e.target.value)}
-        />
-        <FieldMessage id={id} error={errors[k]} hint={hint} alert />
-      </div>
-    );
-  };
+  const { draft, setDraft, errors, status, busy, set, submit } = useInHouseIonDraft();
+  const field = (k: keyof Draft, label: string, hint?: string, wide = false) => (
+    <InHouseField
+      field={k}
+      value={draft[k]}
+      error={errors[k]}
+      label={label}
+      hint={hint}
+      wide={wide}
+      onChange={(v) => set(k, v)}
+    />
+  );
 
   return (
     <details className="inhouse-box">
@@ -216,5 +90,85 @@ export function InHouseIonForm() {
         </div>
       </form>
     </details>
+  );
+}
+
+/**
+ * The draft, its messages and its save: the charge and pKa values must read, a SMILES must match
+ * the formula and charge (it gives the ring counts), then the core builds the ion and it is stored
+ * for every project; the form keeps the kind for the next ion.
+ */
+function useInHouseIonDraft() {
+  const [draft, setDraft] = useState<Draft>(EMPTY);
+  const [errors, setErrors] = useState<Errors>({});
+  const [status, setStatus] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  const set = (k: keyof Draft, v: string) => setDraft((d) => ({ ...d, [k]: v }));
+
+  const submit = async (e: FormEvent) => {
+    e.preventDefault();
+    setStatus(null);
+    const read = readChargeAndPKas(draft);
+    if (!read.ok) {
+      setErrors(read.errors);
+      return;
+    }
+    setBusy(true);
+    try {
+      const checked = await ringsFromSmiles(draft, read.charge);
+      if (!checked.ok) {
+        setErrors(checked.errors);
+        return;
+      }
+      const ion = buildCustomCounterIon(
+        customIonInput(draft, read.charge, read.pKas, checked.rings),
+        customIonsRepo.newInHouseId(),
+      );
+      await customIonsRepo.saveInHouse(ion);
+      setErrors({});
+      setDraft({ ...EMPTY, kind: draft.kind, charge: draft.kind === 'anion' ? '-1' : '1' });
+      setStatus(
+        `Saved “${ion.name}” (${ion.molarMassGPerMol.toFixed(2)} g/mol) as an in-house ion for every project.`,
+      );
+    } catch (err) {
+      setErrors(errorsOfFailedSave(err));
+    } finally {
+      setBusy(false);
+    }
+  };
+  return { draft, setDraft, errors, status, busy, set, submit };
+}
+
+/** One text field of the in-house ion form, with its message (announced) or hint. */
+function InHouseField({
+  field: k,
+  value,
+  error,
+  label,
+  hint,
+  wide,
+  onChange,
+}: {
+  field: keyof Draft;
+  value: string;
+  error: string | undefined;
+  label: string;
+  hint: string | undefined;
+  wide: boolean;
+  onChange: (value: string) => void;
+}) {
+  const id = `inhouse-${k}`;
+  return (
+    <div className={`field${wide ? ' field-wide' : ''}`}>
+      <label htmlFor={id}>{label}</label>
+      <input
+        id={id}
+        value={value}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, error, hint)}
+        onChange={(e) => onChange(e.target.value)}
+      />
+      <FieldMessage id={id} error={error} hint={hint} alert />
+    </div>
   );
 }
