@@ -30,15 +30,7 @@ export function ParityPlot({
   size?: number;
 }) {
   const pad = 34;
-  const all = points
-    .flatMap((p) => [p.measured, p.predicted, ...(p.other === undefined ? [] : [p.other])])
-    .filter(Number.isFinite);
-  const lo = Math.floor(Math.min(...all) - 0.25);
-  const hi = Math.ceil(Math.max(...all) + 0.25);
-  const s = (v: number) => pad + ((v - lo) / (hi - lo)) * (size - 2 * pad);
-  const y = (v: number) => size - s(v);
-  const ticks: number[] = [];
-  for (let t = lo; t <= hi; t += Math.max(1, Math.round((hi - lo) / 4))) ticks.push(t);
+  const { s, y, ticks, lo, hi } = parityScale(points, size, pad);
   const words = points
     .map(
       (p) =>
@@ -74,28 +66,59 @@ export function ParityPlot({
         >
           predicted
         </text>
-        {points.map((p) =>
-          p.other === undefined ? null : (
-            <rect
-              key={`${p.id}-o`}
-              x={s(p.measured) - 3.5}
-              y={y(p.other) - 3.5}
-              width={7}
-              height={7}
-              fill="none"
-              stroke="#b4621b"
-              strokeWidth={1.4}
-            />
-          ),
-        )}
-        {points.map((p) => (
-          <circle key={p.id} cx={s(p.measured)} cy={y(p.predicted)} r={4} fill="#1f6f6b" />
-        ))}
+        <ParityMarks points={points} s={s} y={y} />
       </svg>
       <figcaption className="muted small-note">
         {title}: filled circles {modelName}
         {otherName ? `, hollow squares ${otherName}` : ''}; dashed line = perfect agreement.
       </figcaption>
     </figure>
+  );
+}
+
+/** Equal axes over every value shown, widened to whole units, with about four whole-number ticks. */
+function parityScale(points: ParityPoint[], size: number, pad: number) {
+  const all = points
+    .flatMap((p) => [p.measured, p.predicted, ...(p.other === undefined ? [] : [p.other])])
+    .filter(Number.isFinite);
+  const lo = Math.floor(Math.min(...all) - 0.25);
+  const hi = Math.ceil(Math.max(...all) + 0.25);
+  const s = (v: number) => pad + ((v - lo) / (hi - lo)) * (size - 2 * pad);
+  const y = (v: number) => size - s(v);
+  const ticks: number[] = [];
+  for (let t = lo; t <= hi; t += Math.max(1, Math.round((hi - lo) / 4))) ticks.push(t);
+  return { s, y, ticks, lo, hi };
+}
+
+/** The points: hollow squares for the comparison method, filled circles for the model. */
+function ParityMarks({
+  points,
+  s,
+  y,
+}: {
+  points: ParityPoint[];
+  s: (v: number) => number;
+  y: (v: number) => number;
+}) {
+  return (
+    <>
+      {points.map((p) =>
+        p.other === undefined ? null : (
+          <rect
+            key={`${p.id}-o`}
+            x={s(p.measured) - 3.5}
+            y={y(p.other) - 3.5}
+            width={7}
+            height={7}
+            fill="none"
+            stroke="#b4621b"
+            strokeWidth={1.4}
+          />
+        ),
+      )}
+      {points.map((p) => (
+        <circle key={p.id} cx={s(p.measured)} cy={y(p.predicted)} r={4} fill="#1f6f6b" />
+      ))}
+    </>
   );
 }
