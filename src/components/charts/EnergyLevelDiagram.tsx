@@ -1,6 +1,7 @@
 import { kjWithUncertainty } from './chart-format';
 import {
   LABEL_FONT_PX,
+  drawingSize,
   energyDiagramLayout,
   type DiagramArrow,
   type DiagramLabel,
@@ -41,18 +42,20 @@ export function EnergyLevelDiagram({
   width?: number;
   height?: number;
 }) {
-  const layout = energyDiagramLayout(cycle, width, height);
+  // A figure narrower than the labels need is drawn wider and scaled down to its width.
+  const drawing = drawingSize(width, height);
+  const layout = energyDiagramLayout(cycle, drawing.width, drawing.height);
   const caption = cycleCaption(cycle);
   return (
     <figure className="chart energy-levels">
       <svg
-        viewBox={`0 0 ${width} ${height}`}
+        viewBox={`0 0 ${drawing.width} ${drawing.height}`}
         width="100%"
         style={{ maxWidth: width }}
         role="img"
         aria-label={caption}
       >
-        <EnthalpyAxis layout={layout} width={width} />
+        <EnthalpyAxis layout={layout} width={drawing.width} />
         {layout.levels.map((level, i) => (
           <Level key={`level-${i}`} level={level} />
         ))}

@@ -80,6 +80,18 @@ const COLOURS = { level: '#1d3a4a', lattice: '#b4621b', hydration: '#1f6f6b', ne
 
 const minus = (s: string) => s.replace('-', '−');
 
+/**
+ * The narrowest drawing, in SVG units, whose labels clear the arrows for the demo salts and sodium
+ * chloride (energy-diagram-layout.test.ts); a smaller figure is drawn at this width and scaled down.
+ */
+export const MIN_DRAWING_WIDTH = 480;
+
+/** The drawing's size for a figure of the given size: at least MIN_DRAWING_WIDTH wide, same shape. */
+export function drawingSize(width: number, height: number): { width: number; height: number } {
+  if (width >= MIN_DRAWING_WIDTH) return { width, height };
+  return { width: MIN_DRAWING_WIDTH, height: Math.round((height * MIN_DRAWING_WIDTH) / width) };
+}
+
 /** The box a label's text occupies (estimated glyph widths; ascent 0.8 em, descent 0.25 em). */
 export function labelBox(label: DiagramLabel): Box {
   const w = label.text.length * CHAR_EM * LABEL_FONT_PX;
@@ -157,11 +169,18 @@ export function energyDiagramLayout(
   const levelW = colW - 14;
   const col = (i: number) => axisX + 30 + i * colW;
 
+  // A level's label goes on the side no arrow leaves from: below the solid (the lattice arrow rises
+  // from it), below the solution when the net arrow comes down onto it, above otherwise.
   const steps = [
-    { v: kJ.solid, label: 'salt (s)', band: 0 },
-    { v: kJ.gas, label: 'ions (g)', band: lattice.uncertainty },
-    { v: kJ.half, label: `${cycle.cationLabel} (aq) + ${cycle.anionLabel} (g)`, band: 0 },
-    { v: kJ.solution, label: 'ions (aq)', band: solution.uncertainty },
+    { v: kJ.solid, label: 'salt (s)', band: 0, below: true },
+    { v: kJ.gas, label: 'ions (g)', band: lattice.uncertainty, below: false },
+    {
+      v: kJ.half,
+      label: `${cycle.cationLabel} (aq) + ${cycle.anionLabel} (g)`,
+      band: 0,
+      below: false,
+    },
+    { v: kJ.solution, label: 'ions (aq)', band: solution.uncertainty, below: kJ.solution < 0 },
   ];
   const levels: DiagramLevel[] = steps.map((s, i) => ({
     x1: col(i),
@@ -169,7 +188,9 @@ export function energyDiagramLayout(
     y: y(s.v),
     band: s.band ? { top: y(s.v + s.band), bottom: y(s.v - s.band) } : null,
   }));
-  const labels: DiagramLabel[] = steps.map((s, i) => levelLabel(s.label, col(i), levelW, y(s.v)));
+  const labels: DiagramLabel[] = steps.map((s, i) =>
+    levelLabel(s.label, col(i), levelW, y(s.v), s.below),
+  );
 
   const arrow = (x: number, from: number, to: number, colour: string): DiagramArrow => ({
     x,
@@ -194,13 +215,19 @@ export function energyDiagramLayout(
   return { y, ticks, axisX, top, bottom, levels, arrows, labels };
 }
 
-/** A level's name just above its line: centred when it fits the level, else from its left end. */
-function levelLabel(text: string, x1: number, levelW: number, y: number): DiagramLabel {
+/** A level's name just above or below its line: centred when it fits the level, else from its left end. */
+function levelLabel(
+  text: string,
+  x1: number,
+  levelW: number,
+  y: number,
+  below: boolean,
+): DiagramLabel {
   const fits = text.length * CHAR_EM * LABEL_FONT_PX <= levelW;
   return {
     text,
     x: fits ? x1 + levelW / 2 : x1,
-    y: y - 5,
+    y: below ? y + 5 + 0.8 * LABEL_FONT_PX : y - 5,
     anchor: fits ? 'middle' : 'start',
     fill: COLOURS.level,
   };

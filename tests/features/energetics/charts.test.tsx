@@ -38,6 +38,13 @@ describe('energy-level diagram', () => {
     expect((solid - aq) / perKJ).toBeCloseTo(787 - 406 - 378, 6);
   });
 
+  it('draws a small figure (the sheet’s 350 × 250) at the width its labels need and scales it down', () => {
+    const { container } = render(<EnergyLevelDiagram cycle={nacl} width={350} height={250} />);
+    const svg = container.querySelector('svg')!;
+    expect(svg.getAttribute('viewBox')).toBe('0 0 480 343');
+    expect(svg.style.maxWidth).toBe('350px');
+  });
+
   it('states every step with its uncertainty in the text alternative', () => {
     render(<EnergyLevelDiagram cycle={nacl} />);
     const caption = screen.getByText(/net ΔH_sol/);

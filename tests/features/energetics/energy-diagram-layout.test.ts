@@ -8,6 +8,7 @@ import { energyCycleOf } from '@/screening-data/energy-cycle';
 import {
   arrowBox,
   boxesOverlap,
+  drawingSize,
   energyDiagramLayout,
   labelBox,
   type EnergyCycle,
@@ -54,7 +55,9 @@ const nacl: EnergyCycle = {
   solution: { value: 3, uncertainty: 25 },
 };
 
-function overlapsOf(cycle: EnergyCycle, width: number, height: number): string[] {
+/** What overlaps in the drawing of a figure of the given size (the component draws it this way). */
+function overlapsOf(cycle: EnergyCycle, figureWidth: number, figureHeight: number): string[] {
+  const { width, height } = drawingSize(figureWidth, figureHeight);
   const layout = energyDiagramLayout(cycle, width, height);
   const found: string[] = [];
   const boxes = layout.labels.map((l) => ({ text: l.text, box: labelBox(l) }));
@@ -78,16 +81,34 @@ describe('energy-level diagram layout (issue 19: no label over an arrow)', () =>
     expect(demoCycles.length).toBe(DEMO_SHORTLIST.length);
   });
 
+  // The sizes the app asks for: the Energetics area (the default 560 × 360) and the sheet (350 × 250).
+  const SIZES = [
+    [560, 360],
+    [350, 250],
+  ] as const;
+
   it('keeps every label clear of every arrow and of every other label, for each demo salt', () => {
-    for (const cycle of demoCycles)
-      expect({ salt: cycle.saltLabel, overlaps: overlapsOf(cycle, 560, 360) }).toEqual({
-        salt: cycle.saltLabel,
-        overlaps: [],
-      });
+    for (const [w, h] of SIZES)
+      for (const cycle of demoCycles)
+        expect({
+          size: `${w}×${h}`,
+          salt: cycle.saltLabel,
+          overlaps: overlapsOf(cycle, w, h),
+        }).toEqual({
+          size: `${w}×${h}`,
+          salt: cycle.saltLabel,
+          overlaps: [],
+        });
   });
 
   it('keeps labels clear for sodium chloride, whose net arrow is a few kJ/mol long', () => {
-    expect(overlapsOf(nacl, 560, 360)).toEqual([]);
+    for (const [w, h] of SIZES) expect(overlapsOf(nacl, w, h)).toEqual([]);
+  });
+
+  it('draws a figure narrower than the labels need wider, in the same shape, and scales it down', () => {
+    expect(drawingSize(560, 360)).toEqual({ width: 560, height: 360 });
+    // 350 × 250 drawn at 480 wide: 250 × 480 / 350 = 342.9 → 343 units high.
+    expect(drawingSize(350, 250)).toEqual({ width: 480, height: 343 });
   });
 
   it('finds an overlap when one is there (the check can fail)', () => {
