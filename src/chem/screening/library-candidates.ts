@@ -5,7 +5,9 @@ import { DEFAULT_DELTA_PKA_BANDS, saltDeltaPka, type DeltaPkaBands } from './del
 import { drugProtolyte } from './ph-profile';
 import { saltLabel } from './salt-label';
 import { counterIonProtolyte } from './screen/counter-ion-protolyte';
-import type { ScreeningCandidate } from './screen/screen.types';
+import type { ScreeningCandidate, ScreeningStoichiometry } from './screen/screen.types';
+import type { Estimate } from '../result';
+import type { Protolyte } from './speciation';
 import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from './thermo-link';
 
 /**
@@ -17,17 +19,18 @@ import { candidateSolutionEnthalpyKJ, drugThermoIon, type ThermoDrugIon } from '
  */
 export function candidatesFromLibrary(
   ions: readonly CounterIon[],
-  drug: {
-    kind: 'base' | 'acid';
-    ionCharge: number;
-    pKas?: readonly number[];
-    thermo?: ThermoDrugIon | null;
-  },
+  drug: LibraryDrug,
   opts: {
     firstStoichiometryOnly?: boolean;
     keepCocrystalBand?: boolean;
     bands?: DeltaPkaBands;
     skipped?: { id: string; label: string; deltaPka: number }[];
+    /**
+     * When given, ΔH_sol is not computed here: each candidate's computation is put in this map under
+     * its id, to run only if asked for (a batch writing its best rows only, screen-top.ts); the
+     * candidates then carry `solutionEnthalpyKJ: null`.
+     */
+    solutionEnthalpyLater?: Map<string, () => Estimate | null>;
   } = {},
 ): ScreeningCandidate[] {
   const bands = opts.bands ?? DEFAULT_DELTA_PKA_BANDS;
@@ -36,74 +39,125 @@ export function candidatesFromLibrary(
       ? drugProtolyte({ kind: drug.kind, pKas: drug.pKas, ionCharge: drug.ionCharge })
       : null;
   const want = drug.kind === 'base' ? 'anion' : 'cation';
-  let dIon: ThermoIon | null = null;
-  if (drug.thermo) {
-    try {
-      dIon = drugThermoIon(drug.thermo);
-    } catch {
-      dIon = null;
-    }
-  }
+  const dIon = drugThermoIonOrNull(drug.thermo);
   const out: ScreeningCandidate[] = [];
   for (const ion of ions) {
     if (ion.kind !== want) continue;
-    const seen = new Set<string>();
-    const list = opts.firstStoichiometryOnly
-      ? ion.stoichiometries.slice(0, 1)
-      : ion.stoichiometries;
-    for (const st of list) {
-      const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(
-        drug.ionCharge,
-        st.ionCharge,
-      );
-      if (m > 4 || n > 4) continue;
-      const key = `${m}:${n}:${st.ionCharge}`;
-      if (seen.has(key)) continue;
-      seen.add(key);
-      const own = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : undefined;
-      const label = saltLabel(ion.name, { label: own, drugPerSalt: m, counterIonPerSalt: n });
-      const stoich = {
-        label,
-        drugPerSalt: m,
-        counterIonPerSalt: n,
-        ionCharge: st.ionCharge,
-        ionMolarMassGPerMol: st.ionMolarMassGPerMol,
-        pKaIndex: st.pKaIndex,
-      };
-      const id = `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`;
+    for (const { id, label, st, stoich } of stoichiometriesFor(ion, drug.ionCharge, opts)) {
       if (drugP && !opts.keepCocrystalBand) {
-        let d: number | null = null;
-        try {
-          d = saltDeltaPka(drugP, drug.ionCharge, counterIonProtolyte(ion, stoich), st.ionCharge);
-        } catch {
-          d = null;
-        }
+        const d = deltaPkaOrNull(drugP, drug.ionCharge, ion, stoich);
         if (d !== null && d < bands.cocrystalBelow) {
           opts.skipped?.push({ id, label, deltaPka: d });
           continue;
         }
       }
-      const thermo = dIon
-        ? candidateSolutionEnthalpyKJ(
-            dIon,
-            { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings },
-            {
-              drugPerSalt: m,
-              counterIonPerSalt: n,
-              ionCharge: st.ionCharge,
-              ionFormula: st.ionFormula,
-            },
-          ).solutionEnthalpyKJ
-        : null;
+      const thermo = () => (dIon ? solutionEnthalpyOf(dIon, ion, st, stoich) : null);
+      if (opts.solutionEnthalpyLater) opts.solutionEnthalpyLater.set(id, thermo);
       out.push({
         id,
         counterIon: ion,
         stoichiometry: stoich,
         hydrateWater: 0,
         measurements: [],
-        solutionEnthalpyKJ: thermo,
+        solutionEnthalpyKJ: opts.solutionEnthalpyLater ? null : thermo(),
       });
     }
   }
   return out;
+}
+
+/** The drug as candidatesFromLibrary reads it. */
+export interface LibraryDrug {
+  kind: 'base' | 'acid';
+  ionCharge: number;
+  pKas?: readonly number[];
+  thermo?: ThermoDrugIon | null;
+}
+
+/** The drug ion for the thermochemistry engine, or null when it has none or it cannot be built. */
+function drugThermoIonOrNull(thermo: ThermoDrugIon | null | undefined): ThermoIon | null {
+  if (!thermo) return null;
+  try {
+    return drugThermoIon(thermo);
+  } catch {
+    return null;
+  }
+}
+
+type LibraryStoichiometry = CounterIon['stoichiometries'][number];
+type StoichiometryFor = {
+  id: string;
+  label: string;
+  st: LibraryStoichiometry;
+  stoich: ScreeningStoichiometry;
+};
+
+/**
+ * An ion's stoichiometries re-balanced for the drug ion's charge (at most 4 of either ion), each
+ * charge once, with the candidate id and label.
+ */
+function stoichiometriesFor(
+  ion: CounterIon,
+  drugCharge: number,
+  opts: { firstStoichiometryOnly?: boolean },
+): StoichiometryFor[] {
+  const seen = new Set<string>();
+  const list = opts.firstStoichiometryOnly ? ion.stoichiometries.slice(0, 1) : ion.stoichiometries;
+  const out: StoichiometryFor[] = [];
+  for (const st of list) {
+    const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(
+      drugCharge,
+      st.ionCharge,
+    );
+    if (m > 4 || n > 4) continue;
+    const key = `${m}:${n}:${st.ionCharge}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const own = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : undefined;
+    const label = saltLabel(ion.name, { label: own, drugPerSalt: m, counterIonPerSalt: n });
+    const stoich = {
+      label,
+      drugPerSalt: m,
+      counterIonPerSalt: n,
+      ionCharge: st.ionCharge,
+      ionMolarMassGPerMol: st.ionMolarMassGPerMol,
+      pKaIndex: st.pKaIndex,
+    };
+    const id = `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`;
+    out.push({ id, label, st, stoich });
+  }
+  return out;
+}
+
+/** ΔpKa of the salt, or null when it cannot be formed from the pKa values. */
+function deltaPkaOrNull(
+  drugP: Protolyte,
+  drugCharge: number,
+  ion: CounterIon,
+  stoich: ScreeningStoichiometry,
+): number | null {
+  try {
+    return saltDeltaPka(drugP, drugCharge, counterIonProtolyte(ion, stoich), stoich.ionCharge);
+  } catch {
+    return null;
+  }
+}
+
+/** The thermochemistry engine's ΔH_sol of one salt, per formula unit. */
+function solutionEnthalpyOf(
+  dIon: ThermoIon,
+  ion: CounterIon,
+  st: LibraryStoichiometry,
+  stoich: ScreeningStoichiometry,
+): Estimate | null {
+  return candidateSolutionEnthalpyKJ(
+    dIon,
+    { id: ion.id, thermoId: ion.thermoId, formula: st.ionFormula, rings: ion.rings },
+    {
+      drugPerSalt: stoich.drugPerSalt,
+      counterIonPerSalt: stoich.counterIonPerSalt,
+      ionCharge: st.ionCharge,
+      ionFormula: st.ionFormula,
+    },
+  ).solutionEnthalpyKJ;
 }

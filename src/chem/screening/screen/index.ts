@@ -1,6 +1,12 @@
 /** The screen of one compound against its candidate salts, in named steps (see screen-compound.ts). */
 export type * from './screen.types';
 export { screenCompound } from './screen-compound';
+export {
+  screenCompoundTop,
+  solutionEnthalpyRanks,
+  type ScreenTopOptions,
+  type ScreenTopResult,
+} from './screen-top';
 export { counterIonProtolyte } from './counter-ion-protolyte';
 export { GASTRIC_SODIUM_M } from './media';
 export { chooseKsp, type KspChoice } from './ksp-choice';

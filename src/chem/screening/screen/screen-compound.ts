@@ -1,14 +1,22 @@
 import { kelvinToCelsius } from '../../units/temperature';
 import { SCREENING_CAUTIONS } from '../../report/cautions';
 import { chooseKsp, type KspChoice } from './ksp-choice';
-import { hydrochlorideReference, screeningMedia } from './media';
+import {
+  hydrochlorideReference,
+  screeningMedia,
+  type HydrochlorideReference,
+  type ScreenMedium,
+} from './media';
 import {
   isPrepared,
   prepareCandidate,
   referenceSolutionEnthalpyPerDrugKJ,
+  type PreparedOrError,
 } from './prepare-candidate';
+import type { RobustnessShared } from '../rank-robustness';
+import type { RowNumbers } from './row-numbers';
 import { freeFormGastric, screenFreeForm } from './free-form';
-import { screenContext } from './screen-context';
+import { screenContext, type ScreenContext } from './screen-context';
 import { rowLabel } from './screen-reasons';
 import { screenAssumptions } from './screen-notes';
 import { microenvironmentAssumption } from './microenvironment';
@@ -30,12 +38,51 @@ import type { ScreenCompoundInput, ScreenResult, ScreenRow } from './screen.type
  * Throws ChemInputError for bad compound data; a bad candidate gets a row with `error`.
  */
 export function screenCompound(input: ScreenCompoundInput): ScreenResult {
+  const setup = screenSetup(input);
+  const { ctx, media, hcl, shared, freeForm } = setup;
+  const rows: ScreenRow[] = setup.prepared.map((p) => screenRowOf(setup, p));
+  return {
+    compoundName: ctx.compound.name,
+    drugKind: ctx.compound.kind,
+    settings: ctx.settings,
+    freeForm: { ...freeForm.result, gastric: freeFormGastric(ctx, media[0], hcl) },
+    rows,
+    robustnessShared: shared,
+    assumptions: [
+      ...freeForm.profile.assumptions,
+      ...screenAssumptions(
+        kelvinToCelsius(ctx.temperatureK),
+        hcl !== null,
+        rows.flatMap((r) => (r.saltWaterSolubility ? [r.saltWaterSolubility.basis] : [])),
+      ),
+      microenvironmentAssumption(ctx.settings),
+    ],
+    cautions: SCREENING_CAUTIONS,
+  };
+}
+
+/** What every row of a screen shares: the context, the media, the prepared candidates, their K_sp. */
+export interface ScreenSetup {
+  ctx: ScreenContext;
+  media: ScreenMedium[];
+  prepared: PreparedOrError[];
+  refPerDrugKJ: number | null;
+  ksps: Map<string, KspChoice>;
+  hcl: HydrochlorideReference | null;
+  shared: RobustnessShared;
+  freeForm: ReturnType<typeof screenFreeForm>;
+}
+
+/**
+ * The steps before the rows: the context, each candidate prepared, the reference ΔH_sol, each K_sp
+ * (a failure is left to the row, which reports it when it recomputes) and the hydrochloride.
+ */
+export function screenSetup(input: ScreenCompoundInput): ScreenSetup {
   const ctx = screenContext(input);
   const { settings, compound: c } = ctx;
   const drugPkaSigma = Math.max(...c.pKas.map((p) => settings.pkaSigmaByOrigin[p.origin]));
   const media = screeningMedia(settings);
   const freeForm = screenFreeForm(ctx);
-
   const prepared = input.candidates.map((cand) => prepareCandidate(ctx, cand));
   const refPerDrugKJ = referenceSolutionEnthalpyPerDrugKJ(prepared);
   const ksps = new Map<string, KspChoice>();
@@ -54,34 +101,17 @@ export function screenCompound(input: ScreenCompoundInput): ScreenResult {
     log10IntrinsicSigma: ctx.log10IntrinsicM.uncertainty,
     bands: settings.deltaPkaBands,
   };
+  return { ctx, media, prepared, refPerDrugKJ, ksps, hcl, shared, freeForm };
+}
 
-  const rows: ScreenRow[] = prepared.map((p) => {
-    const label = rowLabel(p.cand.counterIon.name, p.cand.stoichiometry);
-    if (!isPrepared(p)) return errorRow(p.cand, label, p.error);
-    try {
-      const kspOf = () => ksps.get(p.cand.id) ?? chooseKsp(ctx, p, refPerDrugKJ);
-      return candidateRow(ctx, p, label, kspOf, media, hcl, shared);
-    } catch (err) {
-      return errorRow(p.cand, label, err instanceof Error ? err.message : String(err));
-    }
-  });
-
-  return {
-    compoundName: c.name,
-    drugKind: c.kind,
-    settings,
-    freeForm: { ...freeForm.result, gastric: freeFormGastric(ctx, media[0], hcl) },
-    rows,
-    robustnessShared: shared,
-    assumptions: [
-      ...freeForm.profile.assumptions,
-      ...screenAssumptions(
-        kelvinToCelsius(ctx.temperatureK),
-        hcl !== null,
-        rows.flatMap((r) => (r.saltWaterSolubility ? [r.saltWaterSolubility.basis] : [])),
-      ),
-      microenvironmentAssumption(settings),
-    ],
-    cautions: SCREENING_CAUTIONS,
-  };
+/** One candidate's row: its error, or its numbers and words (a failing step becomes the error). */
+export function screenRowOf(s: ScreenSetup, p: PreparedOrError, numbers?: RowNumbers): ScreenRow {
+  const label = rowLabel(p.cand.counterIon.name, p.cand.stoichiometry);
+  if (!isPrepared(p)) return errorRow(p.cand, label, p.error);
+  try {
+    const kspOf = () => s.ksps.get(p.cand.id) ?? chooseKsp(s.ctx, p, s.refPerDrugKJ);
+    return candidateRow(s.ctx, p, label, kspOf, s.media, s.hcl, s.shared, numbers);
+  } catch (err) {
+    return errorRow(p.cand, label, err instanceof Error ? err.message : String(err));
+  }
 }

@@ -1,23 +1,13 @@
-import { saltDeltaPka, saltFormationVerdict } from '../delta-pka';
 import { doseNumber, ICH_M9_PH_RANGE } from '../dose-number';
-import { activeFraction, saltMassPerDoseMg } from '../mass-cost';
-import {
-  fastPathApplies,
-  gridFromPoints,
-  gridPhMax,
-  saltOnGrid,
-  type GridSolubility,
-} from '../ph-grid-solubility';
-import { checkProfileInput, phSolubilityProfile, type ProfileSalt } from '../ph-profile';
+import type { GridSolubility } from '../ph-grid-solubility';
 import type { RobustnessShared } from '../rank-robustness';
 import type { CriterionInputs } from '../ranking';
-import { clearlyLower, screenDoseNumbers, solubilityClassOf } from './dose-numbers';
+import { clearlyLower, solubilityClassOf } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
-import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
-import { microenvironmentJudgement } from './microenvironment';
-import { uncertaintiesOf } from './row-uncertainty';
+import type { HydrochlorideReference, ScreenMedium } from './media';
 import type { PreparedCandidate } from './prepare-candidate';
-import { freeFormMgPerMl, saltMassInput, type ScreenContext } from './screen-context';
+import { rowNumbers, type RowNumbers } from './row-numbers';
+import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import {
   acceptabilityReason,
   disproportionationWords,
@@ -65,21 +55,40 @@ function saltBranchFlag(ctx: ScreenContext, grid: GridSolubility): ScreenFlag | 
   return d0 > 1 ? saltPoorlySolubleFlag(mg, grid.phs[lowest]!, d0) : null;
 }
 
-/**
- * The salt's points on the pH grid and its pH_max. With ideal activities the fast grid evaluation
- * (ph-grid-solubility.ts) gives the numbers phSolubilityProfile gives, after the same input checks;
- * the Davies option takes the general solver.
- */
-function saltProfile(
+/** The words of a row: its reasons and flags, from its numbers, in the order the row lists them. */
+function rowWords(
   ctx: ScreenContext,
-  salt: ProfileSalt,
-): { grid: GridSolubility; phMax: number | null } {
-  if (!fastPathApplies(ctx.grid)) {
-    const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-    return { grid: gridFromPoints(profile.points), phMax: profile.phMax };
+  p: PreparedCandidate,
+  label: string,
+  n: RowNumbers,
+): { reasons: Reason[]; flags: ScreenFlag[] } {
+  const { cand, measured } = p;
+  const name = saltName(label, cand.counterIon.name);
+  const reasons: Reason[] = [];
+  const flags: ScreenFlag[] = [];
+  const bands = ctx.settings.deltaPkaBands;
+  const formation = saltFormationWords(n.verdict, n.dpKa, bands.stableSaltMin);
+  reasons.push(...formation.reasons);
+  flags.push(...formation.flags);
+  const heavy = massCostReason(n.activeFraction, n.massPerDose);
+  if (heavy) reasons.push(heavy);
+  reasons.push(...n.ksp.reasons);
+  flags.push(...n.ksp.flags);
+  reasons.push(worstSolubilityReason(name, n.worst));
+  if (ctx.doseMg !== null) {
+    const d0Water = doseNumber(ctx.doseMg, n.ksp.saltWater.mgPerMlAsFreeForm);
+    if (d0Water > 1) flags.push(poorlySolubleFlag(n.ksp.saltWater, d0Water));
   }
-  checkProfileInput(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-  return { grid: saltOnGrid(ctx.grids.profile, salt), phMax: gridPhMax(ctx.grids, salt) };
+  const saltFlag = saltBranchFlag(ctx, n.grid);
+  if (saltFlag) flags.push(saltFlag);
+  const gastricWords = n.gastric ? gastricReason(name, n.gastric, cand.counterIon.id) : null;
+  if (gastricWords) reasons.push(gastricWords);
+  const dispWords = disproportionationWords(n.micro.disproportionation);
+  reasons.push(dispWords.reason);
+  if (dispWords.flag) flags.push(dispWords.flag);
+  reasons.push(acceptabilityReason(cand.counterIon));
+  reasons.push(...measuredReasons(measured, cand.solutionEnthalpyKJ));
+  return { reasons, flags };
 }
 
 /** The screened row of one candidate, from its prepared inputs and its K_sp (asked for in step order). */
@@ -91,79 +100,25 @@ export function candidateRow(
   media: readonly ScreenMedium[],
   hcl: HydrochlorideReference | null,
   shared: RobustnessShared,
+  numbers?: RowNumbers,
 ): ScreenRow {
-  const { cand, protolyte, measured } = p;
-  const c = ctx.compound;
+  const n = numbers ?? rowNumbers(ctx, p, kspOf, media, hcl, shared);
+  const { reasons, flags } = rowWords(ctx, p, label, n);
+  return assembleRow(ctx, p, label, n, reasons, flags);
+}
+
+/** The row object: the numbers, the words, the profile when asked for, and the robustness inputs. */
+function assembleRow(
+  ctx: ScreenContext,
+  p: PreparedCandidate,
+  label: string,
+  n: RowNumbers,
+  reasons: Reason[],
+  flags: ScreenFlag[],
+): ScreenRow {
+  const { cand, measured } = p;
   const st = cand.stoichiometry;
-  const name = saltName(label, cand.counterIon.name);
-  const reasons: Reason[] = [];
-  const flags: ScreenFlag[] = [];
-
-  const dpKa = saltDeltaPka(ctx.drugProtolyte, c.ionCharge, protolyte, st.ionCharge);
-  const verdict = dpKa === null ? null : saltFormationVerdict(dpKa, ctx.settings.deltaPkaBands);
-  const formation = saltFormationWords(verdict, dpKa, ctx.settings.deltaPkaBands.stableSaltMin);
-  reasons.push(...formation.reasons);
-  flags.push(...formation.flags);
-
-  const f = activeFraction(saltMassInput(ctx, cand));
-  const massPerDose = ctx.doseMg === null ? null : saltMassPerDoseMg(ctx.doseMg, f);
-  const heavy = massCostReason(f, massPerDose);
-  if (heavy) reasons.push(heavy);
-
-  const ksp = kspOf();
-  reasons.push(...ksp.reasons);
-  flags.push(...ksp.flags);
-
-  const salt: ProfileSalt = {
-    counterIon: protolyte,
-    counterIonCharge: st.ionCharge,
-    drugPerSalt: st.drugPerSalt,
-    counterIonPerSalt: st.counterIonPerSalt,
-    log10Ksp: ksp.log10Ksp.value,
-  };
-  const profile = saltProfile(ctx, salt);
-  const { doses, worst } = screenDoseNumbers(ctx, salt, profile.grid);
-  reasons.push(worstSolubilityReason(name, worst));
-  if (ctx.doseMg !== null) {
-    const d0Water = doseNumber(ctx.doseMg, ksp.saltWater.mgPerMlAsFreeForm);
-    if (d0Water > 1) flags.push(poorlySolubleFlag(ksp.saltWater, d0Water));
-  }
-  const saltFlag = saltBranchFlag(ctx, profile.grid);
-  if (saltFlag) flags.push(saltFlag);
-
-  const mediaResults = mediumResults(ctx, cand, salt, media, hcl);
-  const gastric = mediaResults[0] ?? null;
-  const gastricWords = gastric ? gastricReason(name, gastric, cand.counterIon.id) : null;
-  if (gastricWords) reasons.push(gastricWords);
-
-  const { phMaxSigma } = uncertaintiesOf(
-    {
-      robustness: {
-        saltLog10Sigma: ksp.saltLog10Sigma,
-        saltSharedLog10Sigma: ksp.saltSharedLog10Sigma,
-        saltAnchoredOnIntrinsic: ksp.anchored,
-      },
-    },
-    shared,
-  );
-  const micro = microenvironmentJudgement(ctx.settings, profile.phMax, phMaxSigma, c.kind);
-  const disp = micro.disproportionation;
-  const dispWords = disproportionationWords(disp);
-  reasons.push(dispWords.reason);
-  if (dispWords.flag) flags.push(dispWords.flag);
-
-  reasons.push(acceptabilityReason(cand.counterIon));
-  reasons.push(...measuredReasons(measured, cand.solutionEnthalpyKJ));
-
-  const criteria: CriterionInputs = {
-    saltProbability: verdict?.saltProbability ?? null,
-    log10WorstDoseNumber: worst.doseNumber === null ? null : Math.log10(worst.doseNumber),
-    log10GastricDoseNumber: gastric?.doseNumber == null ? null : Math.log10(gastric.doseNumber),
-    phMaxMarginPh: disp.marginPh,
-    activeFraction: f,
-    acceptabilityClass: cand.counterIon.acceptabilityClass,
-    hygroscopicity: measured?.hygroscopicity ?? null,
-  };
+  const { ksp, worst, gastric, criteria } = n;
   return {
     id: cand.id,
     label,
@@ -173,32 +128,25 @@ export function candidateRow(
     counterIonPerSalt: st.counterIonPerSalt,
     hydrateWater: cand.hydrateWater ?? 0,
     error: null,
-    deltaPka: dpKa,
+    deltaPka: n.dpKa,
     deltaPkaEach: deltaPkaEach(ctx, p),
-    saltFormation: verdict,
+    saltFormation: n.verdict,
     saltMolarMassGPerMol: p.saltMolarMassGPerMol,
-    activeFraction: f,
-    saltMassPerDoseMg: massPerDose,
+    activeFraction: n.activeFraction,
+    saltMassPerDoseMg: n.massPerDose,
     saltWaterSolubility: ksp.saltWater,
     log10Ksp: ksp.log10Ksp,
     kspOrigin: ksp.kspOrigin,
     benchSolubility: ksp.benchSolubility,
-    phMax: profile.phMax,
-    profile:
-      ctx.profiles === 'none'
-        ? []
-        : profile.grid.phs.map((pH, k) => ({
-            pH,
-            solubilityMgPerMl: freeFormMgPerMl(ctx, profile.grid.solubilityM[k]!),
-            solid: profile.grid.saltSolid[k] === 1 ? ('salt' as const) : ('free-form' as const),
-          })),
-    doseNumbers: doses,
+    phMax: n.phMax,
+    profile: ctx.profiles === 'none' ? [] : profilePoints(ctx, n.grid),
+    doseNumbers: n.doses,
     worst,
     solubilityClass: solubilityClassOf(worst),
     gastric,
-    media: mediaResults,
-    disproportionation: disp,
-    excipientRisks: micro.excipientRisks,
+    media: n.media,
+    disproportionation: n.micro.disproportionation,
+    excipientRisks: n.micro.excipientRisks,
     solutionEnthalpyPerDrugIon: solutionEnthalpyShown(
       p.solutionEnthalpyKJ,
       st.drugPerSalt,
@@ -212,7 +160,7 @@ export function candidateRow(
       id: cand.id,
       criteria,
       error: null,
-      deltaPka: dpKa,
+      deltaPka: n.dpKa,
       worstSolid: worst.solid,
       gastricSolid: gastric?.solid ?? null,
       saltLog10Sigma: ksp.saltLog10Sigma,
@@ -220,6 +168,15 @@ export function candidateRow(
       saltAnchoredOnIntrinsic: ksp.anchored,
     },
   };
+}
+
+/** The profile for a chart: the grid's points in mg/mL of free form, with the solid at each. */
+function profilePoints(ctx: ScreenContext, grid: GridSolubility) {
+  return grid.phs.map((pH, k) => ({
+    pH,
+    solubilityMgPerMl: freeFormMgPerMl(ctx, grid.solubilityM[k]!),
+    solid: grid.saltSolid[k] === 1 ? ('salt' as const) : ('free-form' as const),
+  }));
 }
 
 /** The row of a candidate that could not be screened: its error in words, every number empty. */

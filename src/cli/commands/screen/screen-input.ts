@@ -14,6 +14,7 @@ import {
   parseStructure,
   sameElements,
   type CounterIon,
+  type Estimate,
   type IntrinsicSolubilityOrigin,
   type PkaEntry,
 } from '@/chem';
@@ -139,18 +140,8 @@ export function resolveCounterIons(
   });
 }
 
-/** What a screen needs, checked: the compound, its drug ion, the candidates and the settings. */
-export async function prepareScreen(
-  spec: CompoundSpec,
-  opts: {
-    settings: Record<string, unknown>;
-    keepCocrystalBand: boolean;
-    names: FieldNames;
-    customIons?: readonly CustomIonSpec[];
-    bench?: Record<string, BenchEntry>;
-  },
-) {
-  const n = opts.names;
+/** The drug ion's charge: the stated one, else +1 for a base and −1 for an acid; refused when it does not fit. */
+function checkedIonCharge(spec: CompoundSpec, n: FieldNames): number {
   if (spec.pKas.length === 0)
     throw new ChemInputError(name(n, 'pKas'), 'no pKa given', 'one to four pKa values, ascending');
   const ionCharge = spec.ionCharge ?? (spec.kind === 'base' ? 1 : -1);
@@ -161,6 +152,11 @@ export async function prepareScreen(
       spec.kind === 'base' ? '1, 2 or 3' : '−1, −2 or −3',
     );
   }
+  return ionCharge;
+}
+
+/** The structure (when a SMILES is given) and the free form's formula, checked against each other. */
+async function structureAndFormula(spec: CompoundSpec, n: FieldNames) {
   let structure;
   let formula = spec.formula.trim();
   if (spec.smiles.trim() !== '') {
@@ -190,6 +186,11 @@ export async function prepareScreen(
       'no structure given',
       'a SMILES or a molecular formula of the neutral free form',
     );
+  return { structure, formula };
+}
+
+/** The compound the core screens, checked with the project's compound schema. */
+function checkedCompound(spec: CompoundSpec, ionCharge: number, formula: string, n: FieldNames) {
   const compound = {
     name: spec.name,
     kind: spec.kind,
@@ -214,12 +215,38 @@ export async function prepareScreen(
     const field = String(issue.path[0] ?? 'compound') as keyof CompoundSpec;
     throw new ChemInputError(name(n, field), issue.message, 'see saltsmith screen --help');
   }
+  return compound;
+}
+
+/**
+ * What a screen needs, checked: the compound, its drug ion, the candidates and the settings. With
+ * `deferSolutionEnthalpy` the candidates' ΔH_sol is left to `solutionEnthalpyLater` (computed only for
+ * the rows a `--top N` batch writes, when no ranked number depends on it: screenCompoundTop).
+ */
+export async function prepareScreen(
+  spec: CompoundSpec,
+  opts: {
+    settings: Record<string, unknown>;
+    keepCocrystalBand: boolean;
+    names: FieldNames;
+    customIons?: readonly CustomIonSpec[];
+    bench?: Record<string, BenchEntry>;
+    deferSolutionEnthalpy?: boolean;
+  },
+) {
+  const n = opts.names;
+  const ionCharge = checkedIonCharge(spec, n);
+  const { structure, formula } = await structureAndFormula(spec, n);
+  const compound = checkedCompound(spec, ionCharge, formula, n);
   const di = drugIon({ kind: spec.kind, ionCharge, formula }, structure);
   const custom = await buildCustomIons(opts.customIons ?? [], spec.kind);
   const ions = resolveCounterIons(spec.ions, spec.kind, name(n, 'ions'), custom.ions);
   const settings = parseScreeningSettings(opts.settings);
   resolveExcipients(settings.excipients, 'settings.excipients');
   const skipped: { id: string; label: string; deltaPka: number }[] = [];
+  const solutionEnthalpyLater = opts.deferSolutionEnthalpy
+    ? new Map<string, () => Estimate | null>()
+    : undefined;
   const rings = structure ? structure.rings : { aromatic: 0, nonAromatic: 0 };
   const libraryCandidates = candidatesFromLibrary(
     ions,
@@ -229,7 +256,12 @@ export async function prepareScreen(
       pKas: spec.pKas.map((p) => p.value),
       thermo: { formula: di.formula, charge: di.charge, rings: di.ringsKnown ? di.rings : rings },
     },
-    { skipped, keepCocrystalBand: opts.keepCocrystalBand, bands: settings.deltaPkaBands },
+    {
+      skipped,
+      keepCocrystalBand: opts.keepCocrystalBand,
+      bands: settings.deltaPkaBands,
+      solutionEnthalpyLater,
+    },
   );
   const candidates = withExtras(libraryCandidates, custom.descriptors, opts.bench ?? {});
   return {
@@ -240,6 +272,7 @@ export async function prepareScreen(
     skipped,
     freeFormFormula: formula,
     customIons: custom.ions,
+    solutionEnthalpyLater,
   };
 }
 

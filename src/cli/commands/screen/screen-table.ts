@@ -5,7 +5,9 @@ import {
   shownRowNumbers,
   rankRobustness,
   screenCompound,
+  screenCompoundTop,
   worstExcipient,
+  type RankedRow,
   type ScreenResult,
   type ScreenRow,
   uncertaintiesOf,
@@ -19,15 +21,23 @@ const sig = (x: number | null | undefined, digits = 3) =>
 const worst = (row: ScreenRow) => worstExcipient(row.excipientRisks);
 
 /** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
-export type ScreenTableRow = ReturnType<typeof screenTable>[number];
+export type ScreenTableRow = ReturnType<typeof tableRow>;
 
 /** The ranked table, one object per candidate, best first (the `top` best only, when given). */
-export function screenTable(res: ScreenResult, robust: Map<string, number>, top?: number) {
+export function screenTable(
+  res: ScreenResult,
+  robust: Map<string, number>,
+  top?: number,
+): ScreenTableRow[] {
   const all = rankCandidates(res.rows, res.settings.weights);
   const ranked = top !== undefined ? all.slice(0, top) : all;
   const byId = new Map(res.rows.map((r) => [r.id, r]));
-  return ranked.map((k) => {
-    const row = byId.get(k.id)!;
+  return ranked.map((k) => tableRow(k, byId.get(k.id)!, robust));
+}
+
+/** One line of the table: a ranked entry and its row. */
+function tableRow(k: RankedRow, row: ScreenRow, robust: Map<string, number>) {
+  {
     const at = (pH: number) => row.doseNumbers.find((d) => Math.abs(d.pH - pH) < 1e-9);
     // Precision that follows each number's 1σ, as the app and the sheet show it (src/chem/report).
     const shown = shownRowNumbers(row, res.robustnessShared);
@@ -97,7 +107,7 @@ export function screenTable(res: ScreenResult, robust: Map<string, number>, top?
         worst(row)?.probability == null ? '' : Number(worst(row)!.probability!.toFixed(3)),
       worst_excipient_risk: worst(row) ? worst(row)!.band : '',
     };
-  });
+  }
 }
 
 /**
@@ -127,4 +137,23 @@ export function runScreen(
       : [],
   );
   return { res, table: screenTable(res, robust, opts.top) };
+}
+
+/**
+ * The `top` best lines of the table without building the other rows' words (screenCompoundTop): the
+ * same lines runScreen gives with `top` and no Monte Carlo (P(top 3) stays empty).
+ */
+export function runScreenTop(p: PreparedScreen, top: number): ScreenTableRow[] {
+  const res = screenCompoundTop(
+    {
+      compound: p.compound,
+      drugIon: p.drugIon,
+      candidates: p.candidates,
+      settings: p.settings,
+      profiles: 'none',
+    },
+    { top, solutionEnthalpyLater: p.solutionEnthalpyLater },
+  );
+  const none = new Map<string, number>();
+  return res.ranked.map((k, i) => tableRow(k, res.rows[i]!, none));
 }

@@ -1,6 +1,6 @@
 import { describeFailure } from '../../../define-command';
 import { prepareScreen, type CompoundSpec } from '../screen-input';
-import { runScreen, type ScreenTableRow } from '../screen-table';
+import { runScreen, runScreenTop, type ScreenTableRow } from '../screen-table';
 import { safeCsvCell } from '@/chem';
 import { COLUMN_NAMES } from './batch-row';
 
@@ -71,11 +71,22 @@ export async function screenOne(
   id: string,
 ): Promise<ScreenOneResult> {
   try {
+    // With --top N and no Monte Carlo (which needs every row), only the N written rows get their
+    // words and ΔH_sol (screenCompoundTop); the lines are the same either way.
+    const topOnly = s.top !== undefined && s.iterations === 0;
     const prepared = await prepareScreen(
       { ...spec, ions: spec.ions ?? s.ions },
-      { settings: s.settings, keepCocrystalBand: s.keepCocrystalBand, names: COLUMN_NAMES },
+      {
+        settings: s.settings,
+        keepCocrystalBand: s.keepCocrystalBand,
+        names: COLUMN_NAMES,
+        deferSolutionEnthalpy: topOnly,
+      },
     );
-    const { table } = runScreen(prepared, { iterations: s.iterations, seed: s.seed, top: s.top });
+    const table =
+      topOnly && s.top !== undefined
+        ? runScreenTop(prepared, s.top)
+        : runScreen(prepared, { iterations: s.iterations, seed: s.seed, top: s.top }).table;
     return {
       ok: true,
       skipped: prepared.skipped.length,

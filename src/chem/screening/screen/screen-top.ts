@@ -1,0 +1,142 @@
+import type { Estimate } from '../../result';
+import { rankCandidates, type RankableRow, type RankedRow } from '../ranking';
+import { SALT_SOLUBILITY_MODEL } from '../salt-solubility/salt-solubility-model.data';
+import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
+import type { ScreeningSettings } from '../settings';
+import { isPrepared, prepareCandidate } from './prepare-candidate';
+import { rowNumbers, type RowNumbers } from './row-numbers';
+import { freeFormGastric } from './free-form';
+import { screenCompound, screenRowOf, screenSetup, type ScreenSetup } from './screen-compound';
+import type { ScreenCompoundInput, ScreeningCandidate, ScreenRow } from './screen.types';
+
+/**
+ * The N best rows of a screen, exactly as `screenCompound` followed by `rankCandidates` and the first N
+ * would give them, for a caller that writes only those (the batch with `--top N`, without the
+ * rank-robustness Monte Carlo, which needs every row). Two passes:
+ *
+ * 1. the numbers of every candidate (row-numbers.ts: K_sp, pH_max, dose numbers, media,
+ *    microenvironment — the same function the full row calls), ranked by the same `rankCandidates`;
+ * 2. the words, reasons, flags and ΔH_sol per drug ion of the N rows that are written only.
+ *
+ * ΔH_sol is left out of pass 1 when no ranked number can depend on it (`solutionEnthalpyRanks`): the
+ * shipped salt-solubility model has no ΔH_sol predictor, every candidate has counter-ion descriptors (so
+ * no anchor estimate shifts by the relative ΔH_sol) and none carries measurements. The rows written are
+ * then rebuilt with it; if their criteria differ from pass 1's in any way, or a row fails only in its
+ * words, the whole screen is run the full way and ranked (so the result never depends on the shortcut).
+ * tests/chem/screening/screen/screen-top.test.ts compares both ways field by field.
+ */
+export interface ScreenTopOptions {
+  top: number;
+  /** Each candidate's ΔH_sol computed on demand (candidatesFromLibrary's `solutionEnthalpyLater`). */
+  solutionEnthalpyLater?: ReadonlyMap<string, () => Estimate | null>;
+}
+
+export interface ScreenTopResult {
+  settings: ScreeningSettings;
+  /** The ranking's first N entries (rank, score, criterion scores), best first. */
+  ranked: RankedRow[];
+  /** The row of each ranked entry, in the same order. */
+  rows: ScreenRow[];
+}
+
+const NO_CRITERIA: RankableRow['criteria'] = {
+  saltProbability: null,
+  log10WorstDoseNumber: null,
+  log10GastricDoseNumber: null,
+  phMaxMarginPh: null,
+  activeFraction: 0,
+  acceptabilityClass: null,
+  hygroscopicity: null,
+};
+
+/** Whether a candidate's ΔH_sol can move a ranked number (see screenCompoundTop). */
+export function solutionEnthalpyRanks(candidates: readonly ScreeningCandidate[]): boolean {
+  const predictors: readonly string[] = SALT_SOLUBILITY_MODEL.featureNames;
+  if (predictors.includes('thermoShiftDecades')) return true;
+  return candidates.some(
+    (c) =>
+      (c.measurements?.length ?? 0) > 0 ||
+      !(c.counterIonDescriptors ?? LIBRARY_COUNTER_ION_DESCRIPTORS[c.counterIon.id]),
+  );
+}
+
+const withLater = (
+  c: ScreeningCandidate,
+  later: ReadonlyMap<string, () => Estimate | null> | undefined,
+): ScreeningCandidate => {
+  const f = later?.get(c.id);
+  return f ? { ...c, solutionEnthalpyKJ: f() } : c;
+};
+
+/** Pass 1: every candidate's numbers, and the ranking they give. */
+function rankByNumbers(setup: ScreenSetup, top: number) {
+  const numbers = new Map<string, RowNumbers>();
+  const rankable: RankableRow[] = setup.prepared.map((p) => {
+    if (!isPrepared(p)) return { id: p.cand.id, criteria: NO_CRITERIA, error: p.error };
+    try {
+      const kspOf = () => setup.ksps.get(p.cand.id) ?? chooseAgain();
+      const n = rowNumbers(setup.ctx, p, kspOf, setup.media, setup.hcl, setup.shared);
+      numbers.set(p.cand.id, n);
+      return { id: p.cand.id, criteria: n.criteria, error: null };
+    } catch (err) {
+      return { id: p.cand.id, criteria: NO_CRITERIA, error: String(err) || 'failed' };
+    }
+  });
+  const ranked = rankCandidates(rankable, setup.ctx.settings.weights).slice(0, top);
+  return { ranked, numbers };
+}
+
+/** K_sp that failed in the setup fails again (the row turns it into its error). */
+function chooseAgain(): never {
+  throw new Error('K_sp could not be chosen');
+}
+
+const sameCriteria = (a: RankableRow['criteria'], b: RankableRow['criteria']) =>
+  (Object.keys(a) as (keyof typeof a)[]).every((k) => Object.is(a[k], b[k]));
+
+/** The N best rows of a screen, exactly as the full screen ranks them (see above). */
+export function screenCompoundTop(
+  input: ScreenCompoundInput,
+  opts: ScreenTopOptions,
+): ScreenTopResult {
+  const later = opts.solutionEnthalpyLater;
+  const defer = later !== undefined && !solutionEnthalpyRanks(input.candidates);
+  const candidates = defer ? input.candidates : input.candidates.map((c) => withLater(c, later));
+  const setup = screenSetup({ ...input, candidates });
+  freeFormGastric(setup.ctx, setup.media[0], setup.hcl); // fails where the full screen fails
+  const { ranked, numbers } = rankByNumbers(setup, opts.top);
+  const byId = new Map(setup.prepared.map((p) => [p.cand.id, p]));
+  const rows: ScreenRow[] = [];
+  for (const k of ranked) {
+    const p = byId.get(k.id)!;
+    const n = numbers.get(k.id);
+    if (!defer || !n || !isPrepared(p)) {
+      const row = screenRowOf(setup, p, n);
+      if ((row.error === null) !== (n !== undefined)) return fullScreenTop(input, opts.top, later);
+      rows.push(row);
+      continue;
+    }
+    // ΔH_sol now, for a written row: prepared again and screened the full way with its own K_sp.
+    const p2 = prepareCandidate(setup.ctx, withLater(p.cand, later));
+    const row = screenRowOf({ ...setup, ksps: new Map() }, p2);
+    if (row.error !== null || !sameCriteria(row.criteria, n.criteria))
+      return fullScreenTop(input, opts.top, later);
+    rows.push(row);
+  }
+  return { settings: setup.ctx.settings, ranked, rows };
+}
+
+/** The full screen, ranked, its first N: the way back when the shortcut's check fails. */
+function fullScreenTop(
+  input: ScreenCompoundInput,
+  top: number,
+  later: ReadonlyMap<string, () => Estimate | null> | undefined,
+): ScreenTopResult {
+  const res = screenCompound({
+    ...input,
+    candidates: input.candidates.map((c) => withLater(c, later)),
+  });
+  const ranked = rankCandidates(res.rows, res.settings.weights).slice(0, top);
+  const byId = new Map(res.rows.map((r) => [r.id, r]));
+  return { settings: res.settings, ranked, rows: ranked.map((k) => byId.get(k.id)!) };
+}
