@@ -127,6 +127,21 @@ export function interpretMeasurements(
     crystallinityPercent: null,
     notes: [],
   };
+  const liquefied = readEach(list, ctx, out);
+  if (out.massGainPercent !== null || liquefied)
+    out.hygroscopicity = hygroscopicityClass(out.massGainPercent ?? 0, liquefied);
+  if (out.allSolubilities.length > 0) summariseSolubilities(out, ctx.temperatureK);
+  return out;
+}
+
+type MeasurementContext = Parameters<typeof interpretMeasurements>[1];
+
+/** Each measurement into its field (the latest of a kind wins); true when a mass gain says the salt liquefied. */
+function readEach(
+  list: readonly MeasurementInput[],
+  ctx: MeasurementContext,
+  out: InterpretedMeasurements,
+): boolean {
   let liquefied = false;
   for (const m of list) {
     switch (m.kind) {
@@ -167,22 +182,21 @@ export function interpretMeasurements(
         break;
     }
   }
-  if (out.massGainPercent !== null || liquefied)
-    out.hygroscopicity = hygroscopicityClass(out.massGainPercent ?? 0, liquefied);
-  if (out.allSolubilities.length > 0) {
-    const T = ctx.temperatureK;
-    out.solubility = out.allSolubilities.reduce((best, s) =>
-      Math.abs((s.temperatureK ?? T) - T) < Math.abs((best.temperatureK ?? T) - T) ? s : best,
+  return liquefied;
+}
+
+/** The solubility nearest the screening temperature, and a van ’t Hoff fit when the data allow one. */
+function summariseSolubilities(out: InterpretedMeasurements, T: number): void {
+  out.solubility = out.allSolubilities.reduce((best, s) =>
+    Math.abs((s.temperatureK ?? T) - T) < Math.abs((best.temperatureK ?? T) - T) ? s : best,
+  );
+  const withT = out.allSolubilities.filter((s) => s.temperatureK !== null);
+  const temps = new Set(withT.map((s) => s.temperatureK));
+  if (withT.length >= 3 && temps.size >= 2) {
+    out.vantHoff = vantHoffFit(
+      withT.map((s) => ({ temperatureK: s.temperatureK!, solubility: s.formulaUnitsM })),
     );
-    const withT = out.allSolubilities.filter((s) => s.temperatureK !== null);
-    const temps = new Set(withT.map((s) => s.temperatureK));
-    if (withT.length >= 3 && temps.size >= 2) {
-      out.vantHoff = vantHoffFit(
-        withT.map((s) => ({ temperatureK: s.temperatureK!, solubility: s.formulaUnitsM })),
-      );
-    } else if (withT.length > 0) {
-      out.vantHoffNote = `van ’t Hoff fit needs at least three solubilities at two or more temperatures (${withT.length} ${withT.length === 1 ? 'solubility' : 'solubilities'} recorded, at ${temps.size} ${temps.size === 1 ? 'temperature' : 'temperatures'})`;
-    }
+  } else if (withT.length > 0) {
+    out.vantHoffNote = `van ’t Hoff fit needs at least three solubilities at two or more temperatures (${withT.length} ${withT.length === 1 ? 'solubility' : 'solubilities'} recorded, at ${temps.size} ${temps.size === 1 ? 'temperature' : 'temperatures'})`;
   }
-  return out;
 }
