@@ -3,6 +3,7 @@ import { rankCandidates, type RankableRow, type RankedRow } from '../ranking';
 import { SALT_SOLUBILITY_MODEL } from '../salt-solubility/salt-solubility-model.data';
 import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 import type { ScreeningSettings } from '../settings';
+import type { RobustnessShared } from '../rank-robustness';
 import { isPrepared, prepareCandidate } from './prepare-candidate';
 import { rowNumbers, type RowNumbers } from './row-numbers';
 import { freeFormGastric } from './free-form';
@@ -37,6 +38,8 @@ export interface ScreenTopResult {
   ranked: RankedRow[];
   /** The row of each ranked entry, in the same order. */
   rows: ScreenRow[];
+  /** What the rank-robustness draw and the shown precision share (as ScreenResult carries it). */
+  robustnessShared: RobustnessShared;
 }
 
 const NO_CRITERIA: RankableRow['criteria'] = {
@@ -123,7 +126,7 @@ export function screenCompoundTop(
       return fullScreenTop(input, opts.top, later);
     rows.push(row);
   }
-  return { settings: setup.ctx.settings, ranked, rows };
+  return { settings: setup.ctx.settings, ranked, rows, robustnessShared: setup.shared };
 }
 
 /** The full screen, ranked, its first N: the way back when the shortcut's check fails. */
@@ -138,5 +141,10 @@ function fullScreenTop(
   });
   const ranked = rankCandidates(res.rows, res.settings.weights).slice(0, top);
   const byId = new Map(res.rows.map((r) => [r.id, r]));
-  return { settings: res.settings, ranked, rows: ranked.map((k) => byId.get(k.id)!) };
+  return {
+    settings: res.settings,
+    ranked,
+    rows: ranked.map((k) => byId.get(k.id)!),
+    robustnessShared: res.robustnessShared,
+  };
 }

@@ -32,16 +32,21 @@ export function screenTable(
   const all = rankCandidates(res.rows, res.settings.weights);
   const ranked = top !== undefined ? all.slice(0, top) : all;
   const byId = new Map(res.rows.map((r) => [r.id, r]));
-  return ranked.map((k) => tableRow(k, byId.get(k.id)!, robust));
+  return ranked.map((k) => tableRow(k, byId.get(k.id)!, robust, res.robustnessShared));
 }
 
 /** One line of the table: a ranked entry and its row. */
-function tableRow(k: RankedRow, row: ScreenRow, robust: Map<string, number>) {
+function tableRow(
+  k: RankedRow,
+  row: ScreenRow,
+  robust: Map<string, number>,
+  shared: ScreenResult['robustnessShared'],
+) {
   {
     const at = (pH: number) => row.doseNumbers.find((d) => Math.abs(d.pH - pH) < 1e-9);
     // Precision that follows each number's 1σ, as the app and the sheet show it (src/chem/report).
-    const shown = shownRowNumbers(row, res.robustnessShared);
-    const u = uncertaintiesOf(row, res.robustnessShared);
+    const shown = shownRowNumbers(row, shared);
+    const u = uncertaintiesOf(row, shared);
     const doseAt = (pH: number) => {
       const d = at(pH);
       return d && d.doseNumber !== null
@@ -155,5 +160,5 @@ export function runScreenTop(p: PreparedScreen, top: number): ScreenTableRow[] {
     { top, solutionEnthalpyLater: p.solutionEnthalpyLater },
   );
   const none = new Map<string, number>();
-  return res.ranked.map((k, i) => tableRow(k, res.rows[i]!, none));
+  return res.ranked.map((k, i) => tableRow(k, res.rows[i]!, none, res.robustnessShared));
 }

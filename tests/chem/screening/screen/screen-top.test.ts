@@ -126,6 +126,7 @@ describe('screenCompoundTop', () => {
             { top, solutionEnthalpyLater: later },
           );
           expect(got.ranked).toStrictEqual(ranked);
+          expect(got.robustnessShared).toStrictEqual(full.robustnessShared);
           expect(got.rows).toStrictEqual(ranked.map((k) => byId.get(k.id)!));
           expect(JSON.stringify(got.rows)).toBe(JSON.stringify(ranked.map((k) => byId.get(k.id))));
         },
