@@ -154,7 +154,8 @@ function runTimed(argv) {
   const gnuTime = existsSync('/usr/bin/time');
   const memFile = join(work, 'mem.txt');
   const cmd = gnuTime ? '/usr/bin/time' : process.execPath;
-  const full = gnuTime ? ['-f', '%M', '-o', memFile, process.execPath, ...argv] : argv;
+  // and the CPU seconds (user, system) of all its threads: a figure other load moves less than wall time
+  const full = gnuTime ? ['-f', '%M %U %S', '-o', memFile, process.execPath, ...argv] : argv;
   const loadBefore = +loadavg()[0].toFixed(2);
   return new Promise((done, fail) => {
     const t0 = process.hrtime.bigint();
@@ -164,15 +165,18 @@ function runTimed(argv) {
     child.on('error', fail);
     child.on('close', (code) => {
       const ms = Number(process.hrtime.bigint() - t0) / 1e6;
-      const peakKB =
+      const timed =
         gnuTime && existsSync(memFile)
-          ? Number(readFileSync(memFile, 'utf8').trim().split('\n').at(-1))
+          ? readFileSync(memFile, 'utf8').trim().split('\n').at(-1).split(' ').map(Number)
           : null;
+      const peakKB = timed ? timed[0] : null;
+      const cpuS = timed && timed.length === 3 ? timed[1] + timed[2] : null;
       done({
         code,
         ms,
         loadBefore,
         peakMB: peakKB ? +(peakKB / 1024).toFixed(0) : null,
+        cpuS,
         stderr: err.slice(-2000),
       });
     });
@@ -236,6 +240,12 @@ if (!skip.has('batch')) {
           wallMs: +r.ms.toFixed(0),
           compoundsPerSecond: +((n * 1000) / r.ms).toFixed(1),
           peakResidentMB: r.peakMB,
+          // CPU time of the whole process (main and screening threads); n ÷ (CPU s ÷ cores) is the rate
+          // the cores would give with nothing else running and perfect sharing (an estimate, not measured)
+          cpuSeconds: r.cpuS,
+          cpuMsPerCompound: r.cpuS === null ? null : +((r.cpuS * 1000) / n).toFixed(2),
+          compoundsPerSecondIfCoresWereFree:
+            r.cpuS === null ? null : +(n / (r.cpuS / availableParallelism())).toFixed(0),
           ...batchOverBaseline((n * 1000) / r.ms),
           note: 'formula-only fictional compounds against the whole library, --top 3, default settings (no rank-robustness Monte Carlo: a batch runs it only with --iterations), written to a file',
           ...(r.code !== 0 ? { stderrTail: r.stderr } : {}),
