@@ -31,10 +31,24 @@ export interface InputPathCounts {
   stops: number;
   modules: number;
   returns: number;
+  /** Distinct caller → callee module pairs among the stops (not pinned; loops do not change it). */
+  pairs: number;
   /** Every module entered, in order of first entry (for reading, not pinned). */
   visited: string[];
   /** Stops per caller → callee module pair (for reading, not pinned). */
   edges: Map<string, number>;
+}
+
+/** The two phases of the screen's input: the candidates made from the library, then the screen. */
+export interface InputPathTrace {
+  /** candidatesFromLibrary for the demo's shortlist (ΔpKa, stoichiometry, the thermochemistry). */
+  candidates: InputPathCounts;
+  /** screenCompound on those candidates. */
+  screen: InputPathCounts;
+}
+
+function newCounts(): InputPathCounts {
+  return { stops: 0, modules: 0, returns: 0, pairs: 0, visited: [], edges: new Map() };
 }
 
 interface Insertion {
@@ -128,7 +142,7 @@ function instrumentChem(): Plugin {
 
 const ENTRY = `
 import { readFileSync } from 'node:fs';
-import { screenCompound } from '@/chem';
+import { candidatesFromLibrary, getCounterIon, screenCompound } from '@/chem';
 import { prepareScreen, FLAG_NAMES } from '@/cli/commands/screen/screen-input';
 export async function run(demoPath) {
   const demo = JSON.parse(readFileSync(demoPath, 'utf8'));
@@ -141,20 +155,30 @@ export async function run(demoPath) {
     },
     { settings: {}, keepCocrystalBand: false, names: FLAG_NAMES },
   );
-  const input = {
-    compound: prepared.compound, drugIon: prepared.drugIon, candidates: prepared.candidates,
-    settings: prepared.settings, profiles: 'none',
-  };
   const t = globalThis.__saltsmithTrace;
-  t.on = true;
-  const result = screenCompound(input);
-  t.on = false;
-  return result;
+  const di = prepared.drugIon;
+  const ions = demo.shortlist.map((id) => getCounterIon(id));
+  t.phase = 'candidates';
+  const candidates = candidatesFromLibrary(
+    ions,
+    {
+      kind: demo.kind, ionCharge: demo.ionCharge, pKas: demo.pKas.map((p) => p.value),
+      thermo: { formula: di.formula, charge: di.charge, rings: di.rings },
+    },
+    { skipped: [], keepCocrystalBand: false, bands: prepared.settings.deltaPkaBands },
+  );
+  t.phase = 'screen';
+  const result = screenCompound({
+    compound: prepared.compound, drugIon: di, candidates, settings: prepared.settings,
+    profiles: 'none',
+  });
+  t.phase = null;
+  return { result, same: JSON.stringify(candidates) === JSON.stringify(prepared.candidates) };
 }
 `;
 
-/** Trace one screenCompound call for the demo and return the counts. */
-export async function traceDemoScreen(): Promise<InputPathCounts> {
+/** Trace the demo's candidates and one screenCompound call and return the counts of each phase. */
+export async function traceDemoScreen(): Promise<InputPathTrace> {
   // inside node_modules so that the bundle's bare imports (zod, openchemlib) resolve
   const cache = join(ROOT, 'node_modules', '.cache');
   mkdirSync(cache, { recursive: true });
@@ -175,20 +199,19 @@ export async function traceDemoScreen(): Promise<InputPathCounts> {
       plugins: [instrumentChem()],
     });
     const stack: string[] = [];
-    const visited = new Set<string>();
-    const counts = { stops: 0, returns: 0 };
-    const edges = new Map<string, number>();
+    const trace: InputPathTrace = { candidates: newCounts(), screen: newCounts() };
     const tracer = {
-      on: false,
+      phase: null as keyof InputPathTrace | null,
       enter(m: string) {
         const caller = stack[stack.length - 1];
         stack.push(m);
-        if (!tracer.on || m === caller) return;
-        counts.stops++;
+        if (tracer.phase === null || m === caller) return;
+        const c = trace[tracer.phase];
+        c.stops++;
         const edge = `${caller ?? '(caller)'} → ${m}`;
-        edges.set(edge, (edges.get(edge) ?? 0) + 1);
-        if (visited.has(m)) counts.returns++;
-        else visited.add(m);
+        c.edges.set(edge, (c.edges.get(edge) ?? 0) + 1);
+        if (c.visited.includes(m)) c.returns++;
+        else c.visited.push(m);
       },
       exit() {
         stack.pop();
@@ -196,20 +219,29 @@ export async function traceDemoScreen(): Promise<InputPathCounts> {
     };
     (globalThis as Record<string, unknown>).__saltsmithTrace = tracer;
     const mod = (await import(pathToFileURL(outfile).href)) as {
-      run: (p: string) => Promise<{ rows: unknown[] }>;
+      run: (p: string) => Promise<{ result: { rows: unknown[] }; same: boolean }>;
     };
-    const result = await mod.run(join(ROOT, 'fixtures', 'demo', 'demorazine.json'));
-    if (result.rows.length < 6) throw new Error(`the demo screen gave ${result.rows.length} rows`);
-    return { ...counts, modules: visited.size, visited: [...visited], edges };
+    const out = await mod.run(join(ROOT, 'fixtures', 'demo', 'demorazine.json'));
+    if (!out.same) throw new Error('the traced candidates differ from the command line’s');
+    if (out.result.rows.length < 6)
+      throw new Error(`the demo screen gave ${out.result.rows.length} rows`);
+    for (const c of Object.values(trace)) {
+      c.modules = c.visited.length;
+      c.pairs = c.edges.size;
+    }
+    return trace;
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
 }
 
 if (process.argv[1] && resolve(process.argv[1]) === resolve(import.meta.filename)) {
-  const c = await traceDemoScreen();
-  console.log(JSON.stringify({ stops: c.stops, modules: c.modules, returns: c.returns }, null, 2));
-  if (process.argv.includes('--modules')) console.log(c.visited.join('\n'));
-  if (process.argv.includes('--edges'))
-    for (const [e, n] of [...c.edges].sort((a, b) => b[1] - a[1])) console.log(n, e);
+  const t = await traceDemoScreen();
+  for (const [phase, c] of Object.entries(t)) {
+    const { stops, modules, returns, pairs } = c;
+    console.log(phase, JSON.stringify({ stops, modules, returns, pairs }));
+    if (process.argv.includes('--modules')) console.log(c.visited.join('\n'));
+    if (process.argv.includes('--edges'))
+      for (const [e, n] of [...c.edges].sort((a, b) => b[1] - a[1])) console.log(n, e);
+  }
 }

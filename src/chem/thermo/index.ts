@@ -12,7 +12,12 @@ export {
   KAPUSTINSKII_RADIUS_SET,
 } from './ions';
 export {
-  kapustinskiiLatticeEnergyKJ,
+  checkFormulaUnit,
+  type CheckedFormulaUnit,
+  type FormulaUnitFields,
+} from './models/formula-unit';
+export { checkSaltRequest, type CheckedSaltRequest } from './lattice-inputs';
+export {
   kapustinskiiPotentialKJ,
   stoichiometryFromCharges,
   KAPUSTINSKII_K_KJ_A_PER_MOL,

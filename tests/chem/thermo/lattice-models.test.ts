@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  checkFormulaUnit,
   bornLandePotentialKJ,
   bornMayerPotentialKJ,
   ChemInputError,
@@ -19,8 +20,7 @@ describe('Madelung constants and the Born–Mayer convention', () => {
     // r₀ = a/2 with a = 5.640 Å (Wyckoff 1963). Born–Mayer with ρ = 0.345 Å gives about 756 kJ/mol for NaCl
     // (e.g. C. E. Housecroft & A. G. Sharpe, Inorganic Chemistry, worked example on NaCl — from memory).
     const u = bornMayerPotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
       structureType: 'rock-salt',
       nearestDistanceA: 2.82,
     });
@@ -34,8 +34,7 @@ describe('Madelung constants and the Born–Mayer convention', () => {
     const r0 = nearestDistanceFromVolumeA('fluorite', volumeFromCellNm3(5.463 ** 3, 4))!; // a = 5.463 Å (Wyckoff)
     expect(r0).toBeCloseTo((5.463 * Math.sqrt(3)) / 4, 6);
     const u = bornMayerPotentialKJ({
-      cationCharge: 2,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 2, anionCharge: -1 }),
       structureType: 'fluorite',
       nearestDistanceA: r0,
     });
@@ -60,8 +59,7 @@ describe('Madelung constants and the Born–Mayer convention', () => {
   it('Born–Landé for NaCl (n = 8, Pauling) gives the textbook ≈ 753 kJ/mol', () => {
     // Pauling exponents Ne 7, Ar 9 → n = 8; Born–Landé NaCl ≈ 753 kJ/mol (standard textbook value, from memory).
     const u = bornLandePotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
       structureType: 'rock-salt',
       nearestDistanceA: 2.82,
       bornExponent: 8,
@@ -73,8 +71,7 @@ describe('Madelung constants and the Born–Mayer convention', () => {
   it('rejects an unknown structure type naming the field', () => {
     expect(() =>
       bornMayerPotentialKJ({
-        cationCharge: 1,
-        anionCharge: -1,
+        formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
         structureType: 'spinel',
         nearestDistanceA: 2.8,
       }),
@@ -93,10 +90,12 @@ describe('volume-based thermodynamics', () => {
   it('VBT for NaCl from its measured volume is within 5 % of the Born–Haber 787 kJ/mol', () => {
     // Born–Haber from Wagman 1982 ΔfH° and CRC IE/EA: 787 kJ/mol.
     const u = vbtPotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
-      cationsPerFormula: 1,
-      anionsPerFormula: 1,
+      formulaUnit: checkFormulaUnit({
+        cationCharge: 1,
+        anionCharge: -1,
+        cationsPerFormula: 1,
+        anionsPerFormula: 1,
+      }),
       formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4),
     });
     expect(Math.abs(u.valueKJ / 787 - 1)).toBeLessThan(0.05);
@@ -104,10 +103,12 @@ describe('volume-based thermodynamics', () => {
 
   it('switches to Glasser’s form for very large lattice energies', () => {
     const u = vbtPotentialKJ({
-      cationCharge: 3,
-      anionCharge: -2,
-      cationsPerFormula: 2,
-      anionsPerFormula: 3,
+      formulaUnit: checkFormulaUnit({
+        cationCharge: 3,
+        anionCharge: -2,
+        cationsPerFormula: 2,
+        anionsPerFormula: 3,
+      }),
       formulaUnitVolumeNm3: 0.05,
     });
     expect(u.form).toMatch(/Glasser/);
