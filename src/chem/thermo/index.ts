@@ -35,7 +35,6 @@ export {
 export {
   vbtPotentialKJ,
   volumeFromDensityNm3,
-  volumeFromCellNm3,
   ionicStrengthFactor,
   VBT_CONSTANTS,
 } from './models/vbt/vbt';
@@ -76,11 +75,10 @@ export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './es
 export {
   validationReport,
   kapustinskiiVariants,
-  solutionValidation,
   relativePairFactor,
   type SolutionValidation,
 } from './validation/report';
-export { calibratedSolutionValidation, solutionValidationSections } from './validation/report';
+export { solutionValidationSections } from './validation/report';
 export {
   SHIPPED_LATTICE_CALIBRATION,
   fitLatticeCalibration,

@@ -143,25 +143,11 @@ function referenceLatticeScale(s: (typeof SOLUTION_REFERENCE_SALTS)[number]): nu
 }
 
 /**
- * The uncalibrated engine (auto method, bundled ions only) against ΔH_sol from the NBS tables (Wagman et
- * al. 1982) — the figure before calibration, kept visible beside {@link calibratedSolutionValidation}.
+ * Every ΔH_sol section: the uncalibrated engine (auto method, bundled ions only, 'solution-hess')
+ * against ΔH_sol from the NBS tables (Wagman et al. 1982), and the calibrated engine against the same
+ * values leave-one-salt-out ('solution-hess-calibrated': each salt predicted with a lattice
+ * calibration refitted without it, calibration/fit-calibration.ts), all salts and per charge class.
  */
-export function solutionValidation(): SolutionValidation {
-  solutionCache ??= computeSolutionSections();
-  return solutionCache.raw[0]!;
-}
-
-/**
- * The calibrated engine against the same NBS ΔH_sol, leave-one-salt-out: each salt predicted with a
- * lattice calibration refitted without it (calibration/fit-calibration.ts), so the figure is what the
- * calibration does on a salt it never saw.
- */
-export function calibratedSolutionValidation(): SolutionValidation {
-  solutionCache ??= computeSolutionSections();
-  return solutionCache.calibrated[0]!;
-}
-
-/** Every ΔH_sol section: raw and calibrated (cross-validated), all salts and per charge class. */
 export function solutionValidationSections(): SolutionValidation[] {
   solutionCache ??= computeSolutionSections();
   return [...solutionCache.raw, ...solutionCache.calibrated];

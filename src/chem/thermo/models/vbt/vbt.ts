@@ -101,10 +101,3 @@ export function volumeFromDensityNm3(molarMassGPerMol: number, densityGPerCm3: n
   const rhoGPerCm3 = requireFiniteInRange('densityGPerCm3', densityGPerCm3, 0.3, 25, 'g/cm³');
   return (massGPerMol / (rhoGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
 }
-
-/** Formula-unit volume from a unit cell: V_m = V_cell / Z, nm³ (V_cell in Å³). */
-export function volumeFromCellNm3(cellVolumeA3: number, formulaUnitsPerCell: number): number {
-  const cellA3 = requireFiniteInRange('cellVolumeA3', cellVolumeA3, 5, 1e6, 'Å³');
-  const z = requireFiniteInRange('formulaUnitsPerCell', formulaUnitsPerCell, 1, 256);
-  return cellA3 / z / 1000;
-}
