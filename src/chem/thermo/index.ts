@@ -64,18 +64,13 @@ export {
   type SolutionCycleInput,
 } from './models/cycle/cycle';
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
-export {
-  relativeSolutionEnthalpyKJ,
-  solutionEnthalpiesRelativeToMedianKJ,
-  type RelativeCandidate,
-} from './models/solution/relative';
+export { solutionEnthalpiesRelativeToMedianKJ } from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
 export { calibratedMethodName } from './lattice-estimate';
 export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
 export {
   validationReport,
   kapustinskiiVariants,
-  relativePairFactor,
   type SolutionValidation,
 } from './validation/report';
 export { solutionValidationSections } from './validation/report';
