@@ -121,7 +121,7 @@ export function instrument(source: string, moduleId: string): string {
   });
   let out = source;
   for (const i of ins) out = out.slice(0, i.pos) + i.text + out.slice(i.pos);
-  return `const __trace = (globalThis as any).__saltsmithTrace;\n${out}`;
+  return `const __trace = globalThis.__saltsmithTrace;\n${out}`;
 }
 
 function instrumentChem(): Plugin {
