@@ -24,13 +24,13 @@ import {
   ICH_M9_VOLUME_ML,
   KAPUSTINSKII_K_KJ_A_PER_MOL,
   KAPUSTINSKII_RHO_A,
-  kapustinskiiLatticeEnergyKJ,
   LATTICE_REFERENCE_SALTS,
   saltLimitedBaseSolubilityM,
   screenCompound,
   type ThermoIon,
 } from '@/chem';
 import { DEMO_COMPOUND } from '@/persistence/demo-project';
+import { rawLattice } from '@/chem/thermo/lattice';
 
 export interface Stat {
   runs: number;
@@ -99,15 +99,22 @@ const models = [
       }),
     ),
   ),
-  perSalt('kapustinskiiLatticeEnergyKJ', withRadii.length, 200, () =>
-    withRadii.map((x) =>
-      kapustinskiiLatticeEnergyKJ({
-        cationCharge: x.cation.charge,
-        anionCharge: x.anion.charge,
-        cationRadiusA: x.cation.radiusA!.value,
-        anionRadiusA: x.anion.radiusA!.value,
-      }),
-    ),
+  perSalt(
+    'rawLattice kapustinskii (the request checked once, then the model)',
+    withRadii.length,
+    200,
+    () =>
+      withRadii.map((x) =>
+        rawLattice(
+          {
+            cation: x.cation,
+            anion: x.anion,
+            cationsPerFormula: x.s.p,
+            anionsPerFormula: x.s.q,
+          },
+          'kapustinskii',
+        ),
+      ),
   ),
   perSalt('hydrationEnthalpyKJ (cation + anion)', pairs.length, 200, () =>
     pairs.map((x) => hydrationEnthalpyKJ(x.cation).value + hydrationEnthalpyKJ(x.anion).value),

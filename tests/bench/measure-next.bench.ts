@@ -13,7 +13,7 @@ import { writeFileSync } from 'node:fs';
 import { availableParallelism, loadavg } from 'node:os';
 import {
   candidatesFromLibrary,
-  defaultScreeningSettings,
+  parseScreeningSettings,
   drugIon,
   getCounterIon,
   measureNext,
@@ -68,7 +68,7 @@ const candidates = candidatesFromLibrary(
 const res = screenCompound({ compound: DEMO_COMPOUND, drugIon: di, candidates, profiles: 'none' });
 const rows = res.rows.map((r) => r.robustness);
 const status = res.rows.map(measureNextStatusOf);
-const weights = defaultScreeningSettings().weights;
+const weights = parseScreeningSettings({}).weights;
 const opts = { iterations: 1000, outcomes: 12, seed: 20261201 };
 let last = measureNext(rows, status, weights, res.robustnessShared, opts);
 const result = {

@@ -10,7 +10,7 @@
 import {
   candidatesFromLibrary,
   COUNTER_IONS,
-  defaultScreeningSettings,
+  parseScreeningSettings,
   drugIon,
   rankCandidates,
   rankRobustness,
@@ -51,7 +51,7 @@ for (let i = 0; rows60.length < 60; i++) {
   const r = res.rows[i % res.rows.length]!;
   rows60.push({ ...r, id: `${r.id}#${i}`, robustness: { ...r.robustness, id: `${r.id}#${i}` } });
 }
-const w = defaultScreeningSettings().weights;
+const w = parseScreeningSettings({}).weights;
 time('rankCandidates, 60 candidates (one weight-slider move)', 200, () =>
   rankCandidates(rows60, { ...w, massCost: Math.random() }),
 );

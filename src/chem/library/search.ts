@@ -46,26 +46,6 @@ export function counterIonDeltaPka(
   return { deltaPka, drugPka, ionPka, stoichiometry };
 }
 
-export type LocalSaltVerdict = 'salt-likely' | 'uncertain' | 'salt-unlikely';
-
-/**
- * Fallback verdict used only where the screening settings' verdict is not available.
- * Common practice: ΔpKa ≥ 2 for a stable salt (Stahl & Wermuth 2002 and Bastin, Bowker & Slater 2000,
- * Org. Process Res. Dev. 4, 427, quote 2–3); below −1 a neutral cocrystal is almost always found
- * (Cruz-Cabeza 2012, CrystEngComm 14, 6362). Thresholds are common practice, not constants.
- */
-export function localSaltVerdict(deltaPka: number): {
-  verdict: LocalSaltVerdict;
-  label: string;
-  basis: string;
-} {
-  const basis =
-    'common practice: ΔpKa ≥ 2 (Stahl & Wermuth 2002); < −1 cocrystal (Cruz-Cabeza 2012)';
-  if (deltaPka >= 2) return { verdict: 'salt-likely', label: 'salt expected', basis };
-  if (deltaPka < -1) return { verdict: 'salt-unlikely', label: 'no salt expected', basis };
-  return { verdict: 'uncertain', label: 'salt uncertain', basis };
-}
-
 /** `drugPerSalt:counterIonPerSalt`, e.g. "2:1" for a hemisulfate. */
 export const stoichiometryKey = (s: Pick<Stoichiometry, 'drugPerSalt' | 'counterIonPerSalt'>) =>
   `${s.drugPerSalt}:${s.counterIonPerSalt}`;

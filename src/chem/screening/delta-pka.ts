@@ -1,4 +1,3 @@
-import { saltStoichiometryFromCharges } from '../compound/salt-stoichiometry';
 import { requireFiniteInRange } from '../result';
 import { linkingPka, type Protolyte } from './speciation';
 
@@ -111,55 +110,4 @@ export function deltaPkaAgainstEach(
   drugIsBase: boolean,
 ): number[] {
   return counterIonPkas.map((p) => (drugIsBase ? deltaPka(drugPka, p) : deltaPka(p, drugPka)));
-}
-
-export interface StoichiometryOption {
-  drugPerSalt: number;
-  counterIonPerSalt: number;
-  drugIonCharge: number;
-  counterIonCharge: number;
-  deltaPka: number | null;
-  label: string;
-}
-
-/**
- * Stoichiometries that make sense for a drug and a counter-ion: every pair of charge states (drug
- * up to its number of ionisable groups, counter-ion up to its number of protons) that balances in a
- * formula unit with at most 4 of each, keeping those whose ΔpKa reaches the cocrystal band or
- * better. Ordered by ΔpKa, largest first.
- */
-export function sensibleStoichiometries(
-  drug: Protolyte,
-  drugIsBase: boolean,
-  counterIon: Protolyte,
-  bands: DeltaPkaBands = DEFAULT_DELTA_PKA_BANDS,
-): StoichiometryOption[] {
-  const out: StoichiometryOption[] = [];
-  const drugCharges = Array.from({ length: drug.pKas.length }, (_, k) =>
-    drugIsBase ? k + 1 : -(k + 1),
-  );
-  const ionCharges: number[] = [];
-  for (let k = 0; k <= counterIon.pKas.length; k++) {
-    const z = counterIon.mostProtonatedCharge - k;
-    if (drugIsBase ? z < 0 : z > 0) ionCharges.push(z);
-  }
-  if (counterIon.pKas.length === 0 && counterIon.mostProtonatedCharge !== 0)
-    ionCharges.push(counterIon.mostProtonatedCharge);
-  for (const zd of drugCharges) {
-    for (const zx of ionCharges) {
-      const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(zd, zx);
-      if (m > 4 || n > 4) continue;
-      const d = saltDeltaPka(drug, zd, counterIon, zx);
-      if (d !== null && d < bands.cocrystalBelow) continue;
-      out.push({
-        drugPerSalt: m,
-        counterIonPerSalt: n,
-        drugIonCharge: zd,
-        counterIonCharge: zx,
-        deltaPka: d,
-        label: `${m}:${n}`,
-      });
-    }
-  }
-  return out.sort((a, b) => (b.deltaPka ?? 99) - (a.deltaPka ?? 99));
 }

@@ -174,22 +174,6 @@ export function saltOnGrid(g: DrugOnGrid, salt: ProfileSalt): GridSolubility {
   return { phs: g.phs, solubilityM, saltSolid };
 }
 
-/** The salt's profile points on the grid, as phSolubilityProfile gives them (for tests and charts). */
-export function saltPointsOnGrid(g: DrugOnGrid, salt: ProfileSalt): ProfilePoint[] {
-  const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, g.phs, g.gridKey);
-  const m = salt.drugPerSalt;
-  const n = salt.counterIonPerSalt;
-  return g.phs.map((pH, k) => {
-    const freeFormLimitedM = g.freeM[k]!;
-    const u = saltLog10FormulaUnitsRaw(m, n, g.laD[k]!, laX[k]!, salt.log10Ksp);
-    const saltLimitedM =
-      u > SALT_LOG10_S_LIMITS.max ? null : m * 10 ** Math.max(u, SALT_LOG10_S_LIMITS.min);
-    return saltLimitedM !== null && saltLimitedM < freeFormLimitedM
-      ? { pH, solubilityM: saltLimitedM, freeFormLimitedM, saltLimitedM, solid: 'salt' }
-      : { pH, solubilityM: freeFormLimitedM, freeFormLimitedM, saltLimitedM, solid: 'free-form' };
-  });
-}
-
 /**
  * pH_max without a profile (ideal activities, no common ion): log S_salt − log S_free scanned at the
  * 0.25-step points from cached speciation, each sign change refined by Brent's method on the same

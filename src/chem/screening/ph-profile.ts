@@ -1,10 +1,13 @@
 import { brentRoot } from '../numerics/root-finding';
 import { ChemInputError, requireFiniteInRange } from '../result';
 import {
-  checkSaltInput,
+  checkSaltSystem,
   log10FreeFormSolubilityM,
-  solveSaltSolubility,
+  requirePh,
+  solveCheckedSalt,
+  type CheckedSaltSystem,
   type SaltEquilibriumInput,
+  type SaltSystem,
 } from './salt-equilibrium';
 import { requireAscendingPkas, type Protolyte } from './speciation';
 
@@ -84,14 +87,14 @@ export const PROFILE_ASSUMPTIONS: readonly string[] = [
   'the less soluble solid (salt or free form) is the one in equilibrium at each pH',
 ];
 
-function saltInput(
+/** The salt system of a profile (everything but the pH), checked once by checkSaltSystem. */
+function checkedSystem(
   d: Protolyte,
   drugIonCharge: number,
   salt: ProfileSalt,
-  pH: number,
   o: ProfileOptions,
-): SaltEquilibriumInput {
-  return {
+): CheckedSaltSystem {
+  const system: SaltSystem = {
     drug: d,
     drugIonCharge,
     drugPerSalt: salt.drugPerSalt,
@@ -99,10 +102,10 @@ function saltInput(
     counterIonCharge: salt.counterIonCharge,
     counterIonPerSalt: salt.counterIonPerSalt,
     log10Ksp: salt.log10Ksp,
-    pH,
     commonIonM: o.commonIonM ?? 0,
     activity: o.activity,
   };
+  return checkSaltSystem(system);
 }
 
 /** Solubility (mol/L, total drug) of the free form, or of the salt–free-form system, at one pH. */
@@ -114,20 +117,20 @@ export function solubilityAtPh(
   o: ProfileOptions = {},
 ): ProfilePoint {
   const p = drugProtolyte(drug);
-  return pointAt(p, drug.ionCharge, log10IntrinsicM, salt, pH, o);
+  requirePh(pH);
+  const system = salt ? checkedSystem(p, drug.ionCharge, salt, o) : null;
+  return pointAt(p, log10IntrinsicM, system, pH);
 }
 
+/** One point of a profile from checked inputs (pH within 0–14); no check is repeated here. */
 function pointAt(
   p: Protolyte,
-  ionCharge: number,
   log10IntrinsicM: number,
-  salt: ProfileSalt | null,
+  system: CheckedSaltSystem | null,
   pH: number,
-  o: ProfileOptions,
 ): ProfilePoint {
-  requireFiniteInRange('pH', pH, 0, 14);
   const freeFormLimitedM = 10 ** log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
-  if (!salt)
+  if (!system)
     return {
       pH,
       solubilityM: freeFormLimitedM,
@@ -135,7 +138,7 @@ function pointAt(
       saltLimitedM: null,
       solid: 'free-form',
     };
-  const r = solveSaltSolubility(saltInput(p, ionCharge, salt, pH, o), true);
+  const r = solveCheckedSalt(system, pH);
   const saltLimitedM = r.unbounded ? null : r.drugTotalM;
   if (saltLimitedM !== null && saltLimitedM < freeFormLimitedM) {
     return { pH, solubilityM: saltLimitedM, freeFormLimitedM, saltLimitedM, solid: 'salt' };
@@ -155,9 +158,9 @@ export function numericalPhMax(
   o: ProfileOptions = {},
 ): number | null {
   const p = drugProtolyte(drug);
-  checkSaltInput(saltInput(p, drug.ionCharge, salt, 7, o));
+  const system = checkedSystem(p, drug.ionCharge, salt, o);
   const h = (pH: number) => {
-    const r = solveSaltSolubility(saltInput(p, drug.ionCharge, salt, pH, o), true);
+    const r = solveCheckedSalt(system, pH);
     const logSalt = Math.log10(r.drugTotalM);
     return logSalt - log10FreeFormSolubilityM(p, log10IntrinsicM, pH);
   };
@@ -187,16 +190,16 @@ export function checkProfileInput(
   log10IntrinsicM: number,
   salt: ProfileSalt | null,
   o: ProfileOptions = {},
-): { from: number; to: number; step: number; p: Protolyte } {
-  const from = requireFiniteInRange('phFrom', o.phFrom ?? 1, 0, 14);
-  const to = requireFiniteInRange('phTo', o.phTo ?? 8, 0, 14);
+): { from: number; to: number; step: number; p: Protolyte; system: CheckedSaltSystem | null } {
+  const from = requirePh(o.phFrom ?? 1, 'phFrom');
+  const to = requirePh(o.phTo ?? 8, 'phTo');
   const step = requireFiniteInRange('phStep', o.phStep ?? 0.1, 0.001, 14);
   if (!(to >= from))
     throw new ChemInputError('phTo', `${to} is below phFrom ${from}`, 'phTo ≥ phFrom');
   requireFiniteInRange('log10IntrinsicSolubility', log10IntrinsicM, -20, 2, 'log₁₀ mol/L');
   const p = drugProtolyte(drug);
-  if (salt) checkSaltInput(saltInput(p, drug.ionCharge, salt, from, o));
-  return { from, to, step, p };
+  const system = salt ? checkedSystem(p, drug.ionCharge, salt, o) : null;
+  return { from, to, step, p, system };
 }
 
 /** Solubility against pH, default 1.0–8.0 in steps of 0.1, with pH_max and the stated assumptions. */
@@ -206,12 +209,12 @@ export function phSolubilityProfile(
   salt: ProfileSalt | null,
   o: ProfileOptions = {},
 ): PhProfile {
-  const { from, to, step, p } = checkProfileInput(drug, log10IntrinsicM, salt, o);
+  const { from, to, step, p, system } = checkProfileInput(drug, log10IntrinsicM, salt, o);
   const n = Math.round((to - from) / step);
   const points: ProfilePoint[] = [];
   for (let k = 0; k <= n; k++) {
     const pH = Math.min(to, from + k * step);
-    points.push(pointAt(p, drug.ionCharge, log10IntrinsicM, salt, Number(pH.toFixed(10)), o));
+    points.push(pointAt(p, log10IntrinsicM, system, Number(pH.toFixed(10))));
   }
   return {
     points,

@@ -31,13 +31,6 @@ export function freeBaseSolubilityM(intrinsicM: number, pKa: number, pH: number)
   return intrinsicM * (1 + 10 ** (pKa - pH));
 }
 
-/** Free-acid-limited solubility S = S₀·(1 + 10^(pH − pKa)), mol/L (pH below pH_max). */
-export function freeAcidSolubilityM(intrinsicM: number, pKa: number, pH: number): number {
-  requirePositive('intrinsicSolubility', intrinsicM, 'mol/L');
-  requirePh(pH);
-  return intrinsicM * (1 + 10 ** (pH - pKa));
-}
-
 /**
  * The salt-forming ion's concentration in equilibrium with a 1:1 salt when the medium already holds
  * c mol/L of the counter-ion: x(x + c) = K_sp, x = (−c + √(c² + 4K_sp))/2, evaluated in the
@@ -58,17 +51,6 @@ export function saltLimitedBaseSolubilityM(
 ): number {
   requirePh(pH);
   return commonIonSaltIonM(kspM2, commonIonM) * (1 + 10 ** (pH - pKa));
-}
-
-/** Salt-limited solubility of a weak acid's 1:1 salt: S = [A⁻]·(1 + 10^(pKa − pH)), mol/L. */
-export function saltLimitedAcidSolubilityM(
-  kspM2: number,
-  pKa: number,
-  pH: number,
-  commonIonM = 0,
-): number {
-  requirePh(pH);
-  return commonIonSaltIonM(kspM2, commonIonM) * (1 + 10 ** (pKa - pH));
 }
 
 /**

@@ -52,8 +52,21 @@ export interface SaltEquilibriumResult {
 const LOG_S_MIN = -200;
 const LOG_S_MAX = 6;
 
-/** Validate the salt's stoichiometry and charges once (cheap; callers may reuse the input). */
-export function checkSaltInput(i: SaltEquilibriumInput): void {
+/** Everything of a salt equilibrium but the pH: the salt, its K_sp, the medium's own counter-ion, the activity model. */
+export type SaltSystem = Omit<SaltEquilibriumInput, 'pH'>;
+
+declare const checkedSaltSystem: unique symbol;
+/**
+ * A salt system checked by {@link checkSaltSystem}. Only that function makes one, so a solver that
+ * takes it (solveCheckedSalt) never checks again and cannot be handed an unchecked system.
+ */
+export type CheckedSaltSystem = SaltSystem & { readonly [checkedSaltSystem]: true };
+
+/**
+ * The one check of a salt system, at the edge: whole counts 1–4, a neutral formula unit, log₁₀ K_sp,
+ * the common ion's concentration and the Davies background ionic strength in range.
+ */
+export function checkSaltSystem(i: SaltSystem): CheckedSaltSystem {
   for (const [f, v] of [
     ['drugPerSalt', i.drugPerSalt],
     ['counterIonPerSalt', i.counterIonPerSalt],
@@ -69,16 +82,36 @@ export function checkSaltInput(i: SaltEquilibriumInput): void {
     );
   }
   requireFiniteInRange('log10Ksp', i.log10Ksp, -200, 20);
-  requireFiniteInRange('pH', i.pH, 0, 14);
   requireFiniteInRange('commonIonConcentration', i.commonIonM ?? 0, 0, 20, 'mol/L');
+  if (i.activity?.model === 'davies')
+    requireFiniteInRange(
+      'backgroundIonicStrength',
+      i.activity.backgroundIonicStrengthM,
+      0,
+      5,
+      'mol/L',
+    );
+  return i as CheckedSaltSystem;
+}
+
+/** The pH a solver accepts, 0–14 (checked where a pH enters: a single point or a grid's ends). */
+export function requirePh(pH: number, field = 'pH'): number {
+  return requireFiniteInRange(field, pH, 0, 14);
+}
+
+/** Check a salt system and its pH; returns the checked system. */
+export function checkSaltInput(i: SaltEquilibriumInput): CheckedSaltSystem {
+  const system = checkSaltSystem(i);
+  requirePh(i.pH);
+  return system;
 }
 
 /** Sum of c·z² over every dissolved species, for the ionic strength. */
-function saltIonicContribution(i: SaltEquilibriumInput, s: number): number {
+function saltIonicContribution(i: SaltSystem, pH: number, s: number): number {
   const c = i.commonIonM ?? 0;
   let sum = 0;
   const add = (p: Protolyte, total: number) => {
-    const f = log10SpeciesFractions(p, i.pH);
+    const f = log10SpeciesFractions(p, pH);
     f.forEach((lf, k) => {
       const z = p.mostProtonatedCharge - k;
       sum += total * 10 ** lf * z * z;
@@ -124,17 +157,21 @@ export function saltLog10FormulaUnitsRaw(
 /** The limits of log₁₀ s the solver works within: above, the salt does not limit; below, clamped. */
 export const SALT_LOG10_S_LIMITS = { min: LOG_S_MIN, max: LOG_S_MAX } as const;
 
-/** Solve the salt's solubility at one pH. */
-export function solveSaltSolubility(
-  i: SaltEquilibriumInput,
-  checked = false,
-): SaltEquilibriumResult {
-  if (!checked) checkSaltInput(i);
+/** Solve the salt's solubility at one pH (checks the input: the public entry). */
+export function solveSaltSolubility(i: SaltEquilibriumInput): SaltEquilibriumResult {
+  return solveCheckedSalt(checkSaltInput(i), i.pH);
+}
+
+/**
+ * The salt's solubility at one pH for a system checked once by {@link checkSaltSystem}; the pH is the
+ * caller's, within 0–14 (a checked point or a point of a checked grid). No check is repeated here.
+ */
+export function solveCheckedSalt(i: CheckedSaltSystem, pH: number): SaltEquilibriumResult {
   const m = i.drugPerSalt;
   const n = i.counterIonPerSalt;
   const c = i.commonIonM ?? 0;
-  const laD = log10ChargeFraction(i.drug, i.pH, i.drugIonCharge);
-  const laX = log10ChargeFraction(i.counterIon, i.pH, i.counterIonCharge);
+  const laD = log10ChargeFraction(i.drug, pH, i.drugIonCharge);
+  const laX = log10ChargeFraction(i.counterIon, pH, i.counterIonCharge);
   const solveWith = (log10GammaTerm: number) => {
     if (c === 0)
       return saltLog10FormulaUnitsNoCommonIon(m, n, laD, laX, i.log10Ksp - log10GammaTerm);
@@ -155,9 +192,11 @@ export function solveSaltSolubility(
   let ionicStrengthM = i.activity?.model === 'davies' ? i.activity.backgroundIonicStrengthM : 0;
   if (i.activity?.model === 'davies' && !sol.unbounded) {
     const { backgroundIonicStrengthM, temperatureK } = i.activity;
-    requireFiniteInRange('backgroundIonicStrength', backgroundIonicStrengthM, 0, 5, 'mol/L');
     for (let it = 0; it < 50; it++) {
-      const ionic = Math.min(5, backgroundIonicStrengthM + saltIonicContribution(i, 10 ** sol.u));
+      const ionic = Math.min(
+        5,
+        backgroundIonicStrengthM + saltIonicContribution(i, pH, 10 ** sol.u),
+      );
       const term =
         m * daviesLog10Gamma(i.drugIonCharge, ionic, temperatureK) +
         n * daviesLog10Gamma(i.counterIonCharge, ionic, temperatureK);

@@ -102,9 +102,6 @@ export const screeningSettingsSchema = z.object({
 });
 export type ScreeningSettings = z.infer<typeof screeningSettingsSchema>;
 
-/** Settings with every default filled in. */
-export const defaultScreeningSettings = (): ScreeningSettings => screeningSettingsSchema.parse({});
-
 const parsedSettingsMemo = new Map<string, string>();
 
 /**

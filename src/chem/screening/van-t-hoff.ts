@@ -85,35 +85,3 @@ export function vantHoffFit(points: readonly SolubilityAtTemperature[]): VanTHof
     residualsLnS: fit.residuals,
   };
 }
-
-/**
- * Points of the fitted line ln S = intercept + slope/T for plotting beside the measurements, with the
- * line's own ±1 standard error band from the slope's standard error (intercept error ignored: the
- * band shows how well the slope, i.e. ΔH, is determined).
- */
-export function vantHoffLine(
-  fit: VanTHoffFit,
-  temperaturesK: readonly number[],
-): {
-  temperatureK: number;
-  inverseTemperaturePerK: number;
-  lnS: number;
-  lnSLow: number;
-  lnSHigh: number;
-}[] {
-  const se = fit.standardErrorKJ / GAS_CONSTANT_KJ_PER_MOL_K;
-  const meanInvT = fit.meanInverseTemperaturePerK;
-  return temperaturesK.map((t) => {
-    requireFiniteInRange('temperatureK', t, 1e-6, 1000, 'K');
-    const x = 1 / t;
-    const lnS = fit.interceptLnS + fit.lnSSlopeOnInverseTK * x;
-    const half = Math.abs(se * (x - meanInvT));
-    return {
-      temperatureK: t,
-      inverseTemperaturePerK: x,
-      lnS,
-      lnSLow: lnS - half,
-      lnSHigh: lnS + half,
-    };
-  });
-}

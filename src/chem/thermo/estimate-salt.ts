@@ -1,11 +1,11 @@
 /**
- * Entry point of the thermochemistry engine: validates a salt request, chooses the lattice method
+ * Entry point of the thermochemistry engine: checks a salt request once (checkSaltRequest,
+ * lattice-inputs.ts) and passes the checked request inward; chooses the lattice method
  * (lattice-method-choice.ts), takes its calibrated lattice enthalpy (lattice-estimate.ts, raw-model
  * uncertainty in lattice-uncertainty.ts) and assembles the cycle by Hess's law (hess-law-assembly.ts,
  * which also states the sign convention).
  */
-import { ChemInputError } from '../result';
-import { requireBalanced, requireIon } from './lattice-inputs';
+import { checkSaltRequest } from './lattice-inputs';
 import type { SaltThermoRequest } from './thermo.types';
 import { assembleSaltThermo, type CalibratedSaltThermoResult } from './hess-law-assembly';
 import type { LatticeCalibrationOptions } from './lattice-estimate';
@@ -36,19 +36,11 @@ export { SIGN_CONVENTION, type CalibratedSaltThermoResult } from './hess-law-ass
 export function estimateSaltThermo(
   req: SaltThermoRequest & LatticeCalibrationOptions,
 ): CalibratedSaltThermoResult {
-  if (!req || typeof req !== 'object')
-    throw new ChemInputError(
-      'request',
-      'missing request',
-      'an object with cation, anion, cationsPerFormula, anionsPerFormula',
-    );
-  requireIon(req.cation, 'cation', 1);
-  requireIon(req.anion, 'anion', -1);
-  const { p, q } = requireBalanced(req);
+  const checked = checkSaltRequest(req);
   const calOpts: LatticeCalibrationOptions = {
     ...(req.calibrate === false ? { calibrate: false } : {}),
     ...(req.calibration ? { calibration: req.calibration } : {}),
   };
-  const { chosen, reason } = chooseLatticeEstimate(req, p, q, calOpts);
-  return assembleSaltThermo(req, p, q, chosen, reason);
+  const { chosen, reason } = chooseLatticeEstimate(checked, calOpts);
+  return assembleSaltThermo(checked, chosen, reason);
 }

@@ -4,7 +4,8 @@
  */
 import type { Estimate } from '../result';
 import { hydrationEnthalpyKJ } from './models/hydration/hydration';
-import type { SaltThermoRequest, SaltThermoResult } from './thermo.types';
+import type { SaltThermoResult } from './thermo.types';
+import type { CheckedSaltRequest } from './lattice-inputs';
 import { publishedHydrationClosure } from './validation/validation';
 import type { ChosenLattice } from './lattice-method-choice';
 
@@ -25,12 +26,11 @@ export const SIGN_CONVENTION =
  * result around it (hydration enthalpies, calibration figures, formula-unit volume when one was used).
  */
 export function assembleSaltThermo(
-  req: SaltThermoRequest,
-  p: number,
-  q: number,
+  c: CheckedSaltRequest,
   chosen: ChosenLattice,
   reason: string,
 ): CalibratedSaltThermoResult {
+  const { req, p, q } = c;
   const perIon = publishedHydrationClosure().perIonKJ;
   const t = req.temperatureK !== undefined ? { temperatureK: req.temperatureK } : {};
   const hc = hydrationEnthalpyKJ(req.cation, { ...t, perIonPublishedUncertaintyKJ: perIon });

@@ -12,7 +12,12 @@ export {
   KAPUSTINSKII_RADIUS_SET,
 } from './ions';
 export {
-  kapustinskiiLatticeEnergyKJ,
+  checkFormulaUnit,
+  type CheckedFormulaUnit,
+  type FormulaUnitFields,
+} from './models/formula-unit';
+export { checkSaltRequest, type CheckedSaltRequest } from './lattice-inputs';
+export {
   kapustinskiiPotentialKJ,
   stoichiometryFromCharges,
   KAPUSTINSKII_K_KJ_A_PER_MOL,
@@ -30,7 +35,6 @@ export {
 export {
   vbtPotentialKJ,
   volumeFromDensityNm3,
-  volumeFromCellNm3,
   ionicStrengthFactor,
   VBT_CONSTANTS,
 } from './models/vbt/vbt';
@@ -60,22 +64,16 @@ export {
   type SolutionCycleInput,
 } from './models/cycle/cycle';
 export { latticeFromSolutionEnthalpy } from './models/solution/solution';
-export {
-  relativeSolutionEnthalpyKJ,
-  solutionEnthalpiesRelativeToMedianKJ,
-  type RelativeCandidate,
-} from './models/solution/relative';
+export { solutionEnthalpiesRelativeToMedianKJ } from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
 export { calibratedMethodName } from './lattice-estimate';
 export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
 export {
   validationReport,
   kapustinskiiVariants,
-  solutionValidation,
-  relativePairFactor,
   type SolutionValidation,
 } from './validation/report';
-export { calibratedSolutionValidation, solutionValidationSections } from './validation/report';
+export { solutionValidationSections } from './validation/report';
 export {
   SHIPPED_LATTICE_CALIBRATION,
   fitLatticeCalibration,

@@ -1,6 +1,7 @@
 import type { Estimate } from '../result';
-import { rawLattice, type RawLattice } from './lattice';
-import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
+import { rawLatticeOf, type RawLattice } from './lattice';
+import type { CheckedSaltRequest } from './lattice-inputs';
+import type { LatticeMethod } from './thermo.types';
 import {
   calibratedRelU,
   cellLabel,
@@ -40,7 +41,7 @@ export function calibratedMethodName(method: LatticeMethod): string {
  * is always the uncalibrated figure.
  */
 export function latticeEnthalpyEstimate(
-  req: SaltThermoRequest,
+  c: CheckedSaltRequest,
   method: LatticeMethod,
   opts: LatticeCalibrationOptions = {},
 ): {
@@ -50,7 +51,8 @@ export function latticeEnthalpyEstimate(
   factor: number;
   calibrationNote: string;
 } {
-  const raw = rawLattice(req, method);
+  const { req } = c;
+  const raw = rawLatticeOf(c, method);
   const rawEst = rawEstimate(req, raw, method);
   if (opts.calibrate === false) {
     return {

@@ -1,66 +1,92 @@
+import { STANDARD_TEMPERATURE_K } from '../constants/physical';
 import { ChemInputError, requireFiniteInRange } from '../result';
+import { checkFormulaUnit, type CheckedFormulaUnit } from './models/formula-unit';
 import { volumeFromDensityNm3 } from './models/vbt/vbt';
 import type { SaltThermoRequest, ThermoIon } from './thermo.types';
 
 /**
- * The checks a salt request passes at the edge of the thermochemistry engine (estimateSaltThermo,
- * rawLattice): each ion's charge, a neutral formula unit, and the formula-unit volume the request gives.
+ * The edge of the thermochemistry engine: a salt request (estimateSaltThermo, rawLattice) is checked
+ * here once — the request and its ions present, each ion's charge, whole counts making a neutral
+ * formula unit, the temperature — and travels inward as a {@link CheckedSaltRequest}, which only
+ * {@link checkSaltRequest} makes. The steps and models inside take it and never check these again.
  */
 
-export function requireIon(ion: ThermoIon, field: string, sign: 1 | -1): ThermoIon {
+declare const checkedSaltRequest: unique symbol;
+
+/** A salt request checked by {@link checkSaltRequest}. */
+export interface CheckedSaltRequest {
+  readonly req: SaltThermoRequest;
+  readonly cation: ThermoIon;
+  readonly anion: ThermoIon;
+  /** Cations and anions per formula unit. */
+  readonly p: number;
+  readonly q: number;
+  /** Charges and counts for the lattice models. */
+  readonly formulaUnit: CheckedFormulaUnit;
+  /** The request's temperature, or 298.15 K, within 250–400 K. */
+  readonly temperatureK: number;
+  readonly [checkedSaltRequest]: true;
+}
+
+function requireIonObject(ion: ThermoIon, field: string): ThermoIon {
   if (!ion || typeof ion !== 'object')
     throw new ChemInputError(
       field,
       'missing ion',
       'a bundled ion id, a formula with charge, or a SMILES with charge',
     );
-  const z = ion.charge;
-  if (
-    typeof z !== 'number' ||
-    !Number.isInteger(z) ||
-    z === 0 ||
-    Math.abs(z) > 4 ||
-    Math.sign(z) !== sign
-  ) {
-    throw new ChemInputError(
-      `${field}.charge`,
-      `charge ${String(z)} is not allowed for the ${field}`,
-      sign > 0 ? 'whole numbers +1…+4' : 'whole numbers −4…−1',
-    );
-  }
   return ion;
 }
 
-/** Check p·z₊ + q·z₋ = 0 and the counts' ranges; returns p, q. */
-export function requireBalanced(
-  req: Pick<SaltThermoRequest, 'cation' | 'anion' | 'cationsPerFormula' | 'anionsPerFormula'>,
-) {
-  const p = requireFiniteInRange('cationsPerFormula', req.cationsPerFormula, 1, 6);
-  const q = requireFiniteInRange('anionsPerFormula', req.anionsPerFormula, 1, 6);
-  if (!Number.isInteger(p) || !Number.isInteger(q))
+/** The one check of a salt request; throws ChemInputError naming the field. */
+export function checkSaltRequest(req: SaltThermoRequest): CheckedSaltRequest {
+  if (!req || typeof req !== 'object')
     throw new ChemInputError(
-      'stoichiometry',
-      'ion counts must be whole numbers',
-      'whole numbers 1–6',
+      'request',
+      'missing request',
+      'an object with cation, anion, cationsPerFormula, anionsPerFormula',
     );
-  if (p * req.cation.charge + q * req.anion.charge !== 0) {
-    throw new ChemInputError(
-      'stoichiometry',
-      `${p}×(${req.cation.charge}) + ${q}×(${req.anion.charge}) ≠ 0: the formula unit is not neutral`,
-      'counts with p·z₊ = q·|z₋|',
-    );
-  }
-  return { p, q };
+  const cation = requireIonObject(req.cation, 'cation');
+  const anion = requireIonObject(req.anion, 'anion');
+  const formulaUnit = checkFormulaUnit(
+    {
+      cationCharge: cation.charge,
+      anionCharge: anion.charge,
+      cationsPerFormula: requireCount('cationsPerFormula', req.cationsPerFormula),
+      anionsPerFormula: requireCount('anionsPerFormula', req.anionsPerFormula),
+    },
+    { cationCharge: 'cation.charge', anionCharge: 'anion.charge' },
+  );
+  const temperatureK = requireFiniteInRange(
+    'temperatureK',
+    req.temperatureK ?? STANDARD_TEMPERATURE_K,
+    250,
+    400,
+    'K',
+  );
+  return {
+    req,
+    cation,
+    anion,
+    p: formulaUnit.cationsPerFormula,
+    q: formulaUnit.anionsPerFormula,
+    formulaUnit,
+    temperatureK,
+  } as CheckedSaltRequest;
+}
+
+/** A request's count must be given (the formula unit's default from the charges is for the models' own callers). */
+function requireCount(field: string, n: number): number {
+  return requireFiniteInRange(field, n, 1, 6);
 }
 
 /** Formula-unit volume from the request: given V_m, else density + molar mass, else the ions' volumes summed. */
 export function formulaUnitVolume(
-  req: SaltThermoRequest,
-  p: number,
-  q: number,
+  c: CheckedSaltRequest,
 ):
   | { volumeNm3: number; from: 'given' | 'density' | 'ion-volumes'; relativeSigma: number }
   | undefined {
+  const { req, p, q } = c;
   if (req.formulaUnitVolumeNm3 !== undefined) {
     return {
       volumeNm3: requireFiniteInRange(

@@ -4,8 +4,8 @@
  */
 import { ChemInputError } from '../result';
 import { isStructureType } from './models/born-mayer/born-mayer';
-import { formulaUnitVolume } from './lattice-inputs';
-import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
+import { formulaUnitVolume, type CheckedSaltRequest } from './lattice-inputs';
+import type { LatticeMethod } from './thermo.types';
 import { latticeEnthalpyEstimate, type LatticeCalibrationOptions } from './lattice-estimate';
 import { groupOf } from './lattice-uncertainty';
 
@@ -13,11 +13,12 @@ import { groupOf } from './lattice-uncertainty';
 export type ChosenLattice = ReturnType<typeof latticeEnthalpyEstimate>;
 
 /** The methods that can run on a request, in order of preference for ties. */
-function applicableMethods(req: SaltThermoRequest, p: number, q: number): LatticeMethod[] {
+function applicableMethods(c: CheckedSaltRequest): LatticeMethod[] {
+  const { req } = c;
   const out: LatticeMethod[] = [];
   const vol = (() => {
     try {
-      return formulaUnitVolume(req, p, q);
+      return formulaUnitVolume(c);
     } catch {
       return undefined;
     }
@@ -35,14 +36,13 @@ function applicableMethods(req: SaltThermoRequest, p: number, q: number): Lattic
  * the same kind and names every candidate's figure in the reason.
  */
 export function chooseLatticeEstimate(
-  req: SaltThermoRequest,
-  p: number,
-  q: number,
+  c: CheckedSaltRequest,
   calOpts: LatticeCalibrationOptions,
 ): { chosen: ChosenLattice; reason: string } {
+  const { req } = c;
   const requested = req.method ?? 'auto';
   if (requested === 'auto') {
-    const methods = applicableMethods(req, p, q);
+    const methods = applicableMethods(c);
     if (methods.length === 0) {
       throw new ChemInputError(
         'cation/anion',
@@ -55,7 +55,7 @@ export function chooseLatticeEstimate(
     const ranked = methods
       .flatMap((m) => {
         try {
-          const r = latticeEnthalpyEstimate(req, m, calOpts);
+          const r = latticeEnthalpyEstimate(c, m, calOpts);
           return [{ m, r, rel: r.estimate.uncertainty / r.estimate.value }];
         } catch (err) {
           errors.push(err);
@@ -78,7 +78,7 @@ export function chooseLatticeEstimate(
     );
   }
   return {
-    chosen: latticeEnthalpyEstimate(req, requested, calOpts),
+    chosen: latticeEnthalpyEstimate(c, requested, calOpts),
     reason: `requested: ${requested}`,
   };
 }

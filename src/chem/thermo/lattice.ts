@@ -1,5 +1,4 @@
-import { STANDARD_TEMPERATURE_K } from '../constants/physical';
-import { ChemInputError, requireFiniteInRange } from '../result';
+import { ChemInputError } from '../result';
 import {
   bornLandePotentialKJ,
   bornMayerPotentialKJ,
@@ -13,8 +12,8 @@ import {
 } from './models/kapustinskii/kapustinskii';
 import { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
 import { vbtPotentialKJ } from './models/vbt/vbt';
-import { formulaUnitVolume, requireBalanced, requireIon } from './lattice-inputs';
-import type { LatticeMethod, SaltThermoRequest, ThermoIon } from './thermo.types';
+import { checkSaltRequest, formulaUnitVolume, type CheckedSaltRequest } from './lattice-inputs';
+import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
 
 /** A raw lattice computation before calibration: U_POT, ΔH_L and what went in. */
 export interface RawLattice {
@@ -32,23 +31,14 @@ export interface RawLattice {
   detail: string;
 }
 
-/** A salt request whose ions, counts and temperature have been checked once, at the edge (rawLattice). */
-interface CheckedLatticeRequest {
-  req: SaltThermoRequest;
-  cation: ThermoIon;
-  anion: ThermoIon;
-  p: number;
-  q: number;
-}
-
 type LatticeOptions = {
   kapustinskiiK?: number;
   kapustinskiiRadii?: { cation: number; anion: number };
 };
 type PotentialPart = Omit<RawLattice, 'enthalpyKJ' | 'method'>;
 
-function kapustinskiiPart(c: CheckedLatticeRequest, opts: LatticeOptions): PotentialPart {
-  const { cation, anion, p, q } = c;
+function kapustinskiiPart(c: CheckedSaltRequest, opts: LatticeOptions): PotentialPart {
+  const { cation, anion } = c;
   const rcA = opts.kapustinskiiRadii?.cation ?? cation.radiusA?.value;
   const raA = opts.kapustinskiiRadii?.anion ?? anion.radiusA?.value;
   if (rcA === undefined)
@@ -64,25 +54,23 @@ function kapustinskiiPart(c: CheckedLatticeRequest, opts: LatticeOptions): Poten
       'an ion with a radius or volume',
     );
   const potentialKJ = kapustinskiiPotentialKJ({
-    cationCharge: cation.charge,
-    anionCharge: anion.charge,
+    formulaUnit: c.formulaUnit,
     cationRadiusA: rcA,
     anionRadiusA: raA,
-    ionsPerFormulaUnit: p + q,
     constantKJA: opts.kapustinskiiK ?? KAPUSTINSKII_K_KJ_A_PER_MOL,
   });
   return {
     potentialKJ,
-    detail: `r₊ = ${rcA.toFixed(3)} Å, r₋ = ${raA.toFixed(3)} Å, ν = ${p + q}`,
+    detail: `r₊ = ${rcA.toFixed(3)} Å, r₋ = ${raA.toFixed(3)} Å, ν = ${c.p + c.q}`,
   };
 }
 
 /** Shortest cation–anion distance for Born–Mayer/Born–Landé: from a measured volume, else the radii. */
 function nearestDistance(
-  c: CheckedLatticeRequest,
+  c: CheckedSaltRequest,
   s: ReturnType<typeof requireStructureType>,
 ): { nearestA: number; from: 'volume' | 'radii' } {
-  const vol = formulaUnitVolume(c.req, c.p, c.q);
+  const vol = formulaUnitVolume(c);
   if (vol && vol.from !== 'ion-volumes') {
     const nearestA = nearestDistanceFromVolumeA(s, vol.volumeNm3);
     if (nearestA !== undefined) return { nearestA, from: 'volume' };
@@ -98,7 +86,7 @@ function nearestDistance(
   return { nearestA: rcA + raA, from: 'radii' };
 }
 
-function bornPart(c: CheckedLatticeRequest, method: 'born-mayer' | 'born-lande'): PotentialPart {
+function bornPart(c: CheckedSaltRequest, method: 'born-mayer' | 'born-lande'): PotentialPart {
   if (c.req.structureType === undefined)
     throw new ChemInputError(
       'structureType',
@@ -108,8 +96,7 @@ function bornPart(c: CheckedLatticeRequest, method: 'born-mayer' | 'born-lande')
   const s = requireStructureType(c.req.structureType);
   const { nearestA, from } = nearestDistance(c, s);
   const base = {
-    cationCharge: c.cation.charge,
-    anionCharge: c.anion.charge,
+    formulaUnit: c.formulaUnit,
     structureType: s,
     nearestDistanceA: nearestA,
   };
@@ -138,8 +125,8 @@ function bornPart(c: CheckedLatticeRequest, method: 'born-mayer' | 'born-lande')
   };
 }
 
-function vbtPart(c: CheckedLatticeRequest): PotentialPart {
-  const vol = formulaUnitVolume(c.req, c.p, c.q);
+function vbtPart(c: CheckedSaltRequest): PotentialPart {
+  const vol = formulaUnitVolume(c);
   if (!vol)
     throw new ChemInputError(
       'formulaUnitVolumeNm3',
@@ -147,10 +134,7 @@ function vbtPart(c: CheckedLatticeRequest): PotentialPart {
       '0.005–10 nm³',
     );
   const r = vbtPotentialKJ({
-    cationCharge: c.cation.charge,
-    anionCharge: c.anion.charge,
-    cationsPerFormula: c.p,
-    anionsPerFormula: c.q,
+    formulaUnit: c.formulaUnit,
     formulaUnitVolumeNm3: vol.volumeNm3,
   });
   return {
@@ -163,7 +147,7 @@ function vbtPart(c: CheckedLatticeRequest): PotentialPart {
 }
 
 function potentialPart(
-  c: CheckedLatticeRequest,
+  c: CheckedSaltRequest,
   method: LatticeMethod,
   opts: LatticeOptions,
 ): PotentialPart {
@@ -185,28 +169,33 @@ function potentialPart(
 }
 
 /**
- * Compute the lattice by one named method, without calibration. Throws ChemInputError if the inputs do
- * not allow it. The ions (charge sign and range, by requireIon), the counts (neutral formula unit) and
- * the temperature are checked here once; the steps below take the checked values.
+ * Compute the lattice by one named method, without calibration, from a request checked at the edge
+ * (checkSaltRequest): nothing is checked again here but what the method itself needs (radii, a
+ * structure type, a volume). Throws ChemInputError if the inputs do not allow the method.
  */
+export function rawLatticeOf(
+  c: CheckedSaltRequest,
+  method: LatticeMethod,
+  opts: LatticeOptions = {},
+): RawLattice {
+  const part = potentialPart(c, method, opts);
+  const correctionKJ = latticeEnthalpyCorrectionKJ(
+    c.p,
+    c.cation.shape,
+    c.q,
+    c.anion.shape,
+    c.temperatureK,
+  );
+  return { method, ...part, enthalpyKJ: part.potentialKJ + correctionKJ };
+}
+
+/** rawLatticeOf for an unchecked request: the request is checked first (an edge, e.g. the validation). */
 export function rawLattice(
   req: SaltThermoRequest,
   method: LatticeMethod,
   opts: LatticeOptions = {},
 ): RawLattice {
-  const cation = requireIon(req.cation, 'cation', 1);
-  const anion = requireIon(req.anion, 'anion', -1);
-  const { p, q } = requireBalanced(req);
-  const temperatureK = requireFiniteInRange(
-    'temperatureK',
-    req.temperatureK ?? STANDARD_TEMPERATURE_K,
-    250,
-    400,
-    'K',
-  );
-  const part = potentialPart({ req, cation, anion, p, q }, method, opts);
-  const correctionKJ = latticeEnthalpyCorrectionKJ(p, cation.shape, q, anion.shape, temperatureK);
-  return { method, ...part, enthalpyKJ: part.potentialKJ + correctionKJ };
+  return rawLatticeOf(checkSaltRequest(req), method, opts);
 }
 
 export { isStructureType };

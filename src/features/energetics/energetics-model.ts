@@ -14,5 +14,3 @@ export function cancellationNote(cycle: EnergyCycle): string {
 export const sourcesOf = (...es: (Estimate | undefined)[]) => [
   ...new Set(es.flatMap((e) => e?.sources ?? [])),
 ];
-
-export { solutionEnthalpiesRelativeToMedianKJ as relativeSolutionEnthalpies } from '@/chem';

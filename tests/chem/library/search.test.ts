@@ -6,7 +6,6 @@ import {
   buildCustomCounterIon,
   counterIonDeltaPka,
   getCounterIon,
-  localSaltVerdict,
   mergeLibrary,
   searchCounterIons,
 } from '@/chem/library';
@@ -87,13 +86,6 @@ describe('ΔpKa = pKa(protonated base) − pKa(acid) (Stahl & Wermuth 2002)', ()
 
   it('returns null where no pKa is sourced rather than inventing one', () => {
     expect(counterIonDeltaPka(acid4, getCounterIon('benzathine')!)).toBeNull();
-  });
-
-  it('local fallback verdict follows the common-practice thresholds', () => {
-    expect(localSaltVerdict(3).verdict).toBe('salt-likely');
-    expect(localSaltVerdict(2).verdict).toBe('salt-likely');
-    expect(localSaltVerdict(1.99).verdict).toBe('uncertain');
-    expect(localSaltVerdict(-1.01).verdict).toBe('salt-unlikely');
   });
 });
 

@@ -1,9 +1,9 @@
-import { SALT_SOLUBILITY_CV_RMSE_LOG10 } from '@/chem/screening/salt-solubility/estimate-salt-solubility';
 import { describe, expect, it } from 'vitest';
 import {
   candidatesFromLibrary,
   COUNTER_IONS,
-  defaultScreeningSettings,
+  SALT_SOLUBILITY_MODEL,
+  parseScreeningSettings,
   drugIon,
   estimateKsp,
   getCounterIon,
@@ -142,7 +142,7 @@ describe('screenCompound', () => {
     // The spread is at least the salt-solubility model's leave-one-drug-out error, per ion of the
     // 1:1 formula unit (never the training fit).
     expect(row.log10Ksp!.uncertainty).toBeGreaterThanOrEqual(
-      2 * SALT_SOLUBILITY_CV_RMSE_LOG10 - 1e-9,
+      2 * SALT_SOLUBILITY_MODEL.cvRmseLog10! - 1e-9,
     );
     expect(row.saltWaterSolubility!.origin).toBe('model');
     expect(row.flags.some((f) => f.id === 'estimated-ksp')).toBe(true);
@@ -274,7 +274,7 @@ describe('screenCompound', () => {
     bad.counterIon = { ...bad.counterIon, pKas: [{ value: 3 }, { value: 1 }] };
     const r = screenCompound({ compound, drugIon: di, candidates: [bad, candidate('chloride')] });
     expect(r.rows[0]!.error).toMatch(/out of order/);
-    expect(rankCandidates(r.rows, defaultScreeningSettings().weights).at(-1)!.rank).toBeNull();
+    expect(rankCandidates(r.rows, parseScreeningSettings({}).weights).at(-1)!.rank).toBeNull();
   });
 
   it('uses the General Solubility Equation when S₀ is not measured, and says so', () => {
@@ -311,7 +311,7 @@ describe('rankCandidates (cheap weighting step)', () => {
     expect([...fractions].sort((a, b) => b - a)).toStrictEqual(fractions);
   });
   it('contributions add up to the score', () => {
-    for (const x of rankCandidates(r.rows, defaultScreeningSettings().weights)) {
+    for (const x of rankCandidates(r.rows, parseScreeningSettings({}).weights)) {
       const sum = Object.values(x.contributions).reduce((a, b) => a + b, 0);
       expect(sum).toBeCloseTo(x.score!, 12);
     }
@@ -326,7 +326,7 @@ describe('rankRobustness (Monte Carlo)', () => {
       candidate(id),
     ),
   });
-  const w = defaultScreeningSettings().weights;
+  const w = parseScreeningSettings({}).weights;
   const rows = r.rows.map((x) => x.robustness);
   it('is reproducible with a fixed seed', () => {
     const a = rankRobustness(rows, w, r.robustnessShared, { iterations: 300, seed: 11 });

@@ -3,7 +3,7 @@ import {
   COULOMB_KJ_A_PER_MOL,
   estimateSaltThermo,
   getThermoIon,
-  kapustinskiiLatticeEnergyKJ,
+  checkFormulaUnit,
   kapustinskiiPotentialKJ,
   KAPUSTINSKII_K_KJ_A_PER_MOL,
   KAPUSTINSKII_RHO_A,
@@ -36,8 +36,7 @@ describe('Kapustinskii lattice energy', () => {
     // Hand computation: 1214 · 2 · 1 / 2.83 · (1 − 0.345/2.83) = 857.951 · 0.878092 = 753.36 kJ/mol.
     // Tolerance ±0.05 kJ/mol: a 1 % error in K (±7.5 kJ/mol) fails it.
     const u = kapustinskiiPotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
       cationRadiusA: 1.02,
       anionRadiusA: 1.81,
     });
@@ -88,16 +87,15 @@ describe('Kapustinskii lattice energy', () => {
     { salt: 'KBr', rc: 1.38, ra: 1.96, hand: 651.86, crc: 691 },
   ];
   it.each(cases)(
-    '$salt: U_POT equals the hand computation to 0.05 kJ/mol and lies 3–7 % below the CRC value',
+    '$salt: U_POT by the engine (rawLattice) equals the hand computation to 0.05 kJ/mol and lies 3–7 % below the CRC value',
     ({ rc, ra, hand, crc }) => {
-      const u = kapustinskiiLatticeEnergyKJ({
-        cationCharge: 1,
-        anionCharge: -1,
-        cationRadiusA: rc,
-        anionRadiusA: ra,
-      });
-      expect(u.value).toBeCloseTo(hand, 1);
-      const relative = u.value / crc - 1;
+      const u = rawLattice(
+        { cation: na, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1 },
+        'kapustinskii',
+        { kapustinskiiRadii: { cation: rc, anion: ra } },
+      );
+      expect(u.potentialKJ).toBeCloseTo(hand, 1);
+      const relative = u.potentialKJ / crc - 1;
       expect(relative).toBeLessThan(-0.03);
       expect(relative).toBeGreaterThan(-0.07);
       expect(u.method).toBe('kapustinskii');
@@ -107,37 +105,39 @@ describe('Kapustinskii lattice energy', () => {
   it('counts three ions for MX₂ and scales with charge', () => {
     expect(stoichiometryFromCharges(2, -1)).toEqual({ cations: 1, anions: 2 });
     expect(stoichiometryFromCharges(2, -2)).toEqual({ cations: 1, anions: 1 });
-    const mx = kapustinskiiLatticeEnergyKJ({
-      cationCharge: 1,
-      anionCharge: -1,
+    const mx = kapustinskiiPotentialKJ({
+      formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
       cationRadiusA: 1,
       anionRadiusA: 1.8,
     });
-    const m2x2 = kapustinskiiLatticeEnergyKJ({
-      cationCharge: 2,
-      anionCharge: -2,
+    const m2x2 = kapustinskiiPotentialKJ({
+      formulaUnit: checkFormulaUnit({ cationCharge: 2, anionCharge: -2 }),
       cationRadiusA: 1,
       anionRadiusA: 1.8,
     });
-    expect(m2x2.value / mx.value).toBeCloseTo(4, 10);
+    // ν = 3 for MX₂ from the charges: 3/2 of MX at the same radii (hand computation: ν·|z₊z₋| = 3 vs 2)
+    const mx2 = kapustinskiiPotentialKJ({
+      formulaUnit: checkFormulaUnit({ cationCharge: 2, anionCharge: -1 }),
+      cationRadiusA: 1,
+      anionRadiusA: 1.8,
+    });
+    expect(m2x2 / mx).toBeCloseTo(4, 10);
+    expect(mx2 / mx).toBeCloseTo(3, 10);
   });
 
-  it('rejects a zero or wrong-sign charge with a typed error naming the field', () => {
+  it('rejects a zero or wrong-sign charge with a typed error naming the field, once, at the edge', () => {
+    // the model takes only a checked formula unit; the check names the caller's field
+    expect(() => checkFormulaUnit({ cationCharge: 0, anionCharge: -1 })).toThrow(ChemInputError);
+    expect(() => checkFormulaUnit({ cationCharge: 1, anionCharge: 1 })).toThrow(/anionCharge/);
+    // the engine's edge names the request's field
     expect(() =>
-      kapustinskiiLatticeEnergyKJ({
-        cationCharge: 0,
-        anionCharge: -1,
-        cationRadiusA: 1,
-        anionRadiusA: 1,
-      }),
-    ).toThrow(ChemInputError);
+      estimateSaltThermo({ cation: na, anion: na, cationsPerFormula: 1, anionsPerFormula: 1 }),
+    ).toThrow(/anion\.charge/);
     expect(() =>
-      kapustinskiiLatticeEnergyKJ({
-        cationCharge: 1,
-        anionCharge: 1,
-        cationRadiusA: 1,
-        anionRadiusA: 1,
-      }),
-    ).toThrow(/anionCharge/);
+      rawLattice(
+        { cation: cl, anion: cl, cationsPerFormula: 1, anionsPerFormula: 1 },
+        'kapustinskii',
+      ),
+    ).toThrow(/cation\.charge/);
   });
 });

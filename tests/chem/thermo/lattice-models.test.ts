@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  checkFormulaUnit,
   bornLandePotentialKJ,
   bornMayerPotentialKJ,
   ChemInputError,
@@ -10,17 +11,21 @@ import {
   MADELUNG_CONSTANTS,
   nearestDistanceFromVolumeA,
   vbtPotentialKJ,
-  volumeFromCellNm3,
   volumeFromDensityNm3,
 } from '@/chem';
+
+/**
+ * Formula-unit volume from a cubic cell, nm³: V_m = a³/Z/1000 (a in Å) — the hand computation the tests
+ * use for a measured cell (the engine takes a volume or a density, not a cell).
+ */
+const cellVolumeNm3 = (aA: number, z: number) => aA ** 3 / z / 1000;
 
 describe('Madelung constants and the Born–Mayer convention', () => {
   it('rock salt: Born–Mayer for NaCl at r₀ = 2.820 Å gives the textbook 755 ± 3 kJ/mol', () => {
     // r₀ = a/2 with a = 5.640 Å (Wyckoff 1963). Born–Mayer with ρ = 0.345 Å gives about 756 kJ/mol for NaCl
     // (e.g. C. E. Housecroft & A. G. Sharpe, Inorganic Chemistry, worked example on NaCl — from memory).
     const u = bornMayerPotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
       structureType: 'rock-salt',
       nearestDistanceA: 2.82,
     });
@@ -31,11 +36,10 @@ describe('Madelung constants and the Born–Mayer convention', () => {
   it('fluorite: M = 2.51939 per formula unit with |z₊z₋| = 2 reproduces the Born–Haber CaF₂ value within 6 %', () => {
     // Born–Haber ΔH_L(CaF₂) = 2635 kJ/mol from NBS ΔfH° (Wagman 1982) and CRC ionisation energies/affinities.
     // A wrong convention (M·z² with z = 2 for both, or M referred to the cell edge) would miss by > 25 %.
-    const r0 = nearestDistanceFromVolumeA('fluorite', volumeFromCellNm3(5.463 ** 3, 4))!; // a = 5.463 Å (Wyckoff)
+    const r0 = nearestDistanceFromVolumeA('fluorite', cellVolumeNm3(5.463, 4))!; // a = 5.463 Å (Wyckoff)
     expect(r0).toBeCloseTo((5.463 * Math.sqrt(3)) / 4, 6);
     const u = bornMayerPotentialKJ({
-      cationCharge: 2,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 2, anionCharge: -1 }),
       structureType: 'fluorite',
       nearestDistanceA: r0,
     });
@@ -60,8 +64,7 @@ describe('Madelung constants and the Born–Mayer convention', () => {
   it('Born–Landé for NaCl (n = 8, Pauling) gives the textbook ≈ 753 kJ/mol', () => {
     // Pauling exponents Ne 7, Ar 9 → n = 8; Born–Landé NaCl ≈ 753 kJ/mol (standard textbook value, from memory).
     const u = bornLandePotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
+      formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
       structureType: 'rock-salt',
       nearestDistanceA: 2.82,
       bornExponent: 8,
@@ -73,8 +76,7 @@ describe('Madelung constants and the Born–Mayer convention', () => {
   it('rejects an unknown structure type naming the field', () => {
     expect(() =>
       bornMayerPotentialKJ({
-        cationCharge: 1,
-        anionCharge: -1,
+        formulaUnit: checkFormulaUnit({ cationCharge: 1, anionCharge: -1 }),
         structureType: 'spinel',
         nearestDistanceA: 2.8,
       }),
@@ -86,28 +88,32 @@ describe('volume-based thermodynamics', () => {
   it('a density and a cell give the same NaCl formula-unit volume (within 0.5 %)', () => {
     // CRC Handbook density of NaCl 2.165 g/cm³; Wyckoff cell a = 5.640 Å, Z = 4.
     const fromRho = volumeFromDensityNm3(58.44, 2.165);
-    const fromCell = volumeFromCellNm3(5.64 ** 3, 4);
+    const fromCell = cellVolumeNm3(5.64, 4);
     expect(Math.abs(fromRho / fromCell - 1)).toBeLessThan(0.005);
   });
 
   it('VBT for NaCl from its measured volume is within 5 % of the Born–Haber 787 kJ/mol', () => {
     // Born–Haber from Wagman 1982 ΔfH° and CRC IE/EA: 787 kJ/mol.
     const u = vbtPotentialKJ({
-      cationCharge: 1,
-      anionCharge: -1,
-      cationsPerFormula: 1,
-      anionsPerFormula: 1,
-      formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4),
+      formulaUnit: checkFormulaUnit({
+        cationCharge: 1,
+        anionCharge: -1,
+        cationsPerFormula: 1,
+        anionsPerFormula: 1,
+      }),
+      formulaUnitVolumeNm3: cellVolumeNm3(5.64, 4),
     });
     expect(Math.abs(u.valueKJ / 787 - 1)).toBeLessThan(0.05);
   });
 
   it('switches to Glasser’s form for very large lattice energies', () => {
     const u = vbtPotentialKJ({
-      cationCharge: 3,
-      anionCharge: -2,
-      cationsPerFormula: 2,
-      anionsPerFormula: 3,
+      formulaUnit: checkFormulaUnit({
+        cationCharge: 3,
+        anionCharge: -2,
+        cationsPerFormula: 2,
+        anionsPerFormula: 3,
+      }),
       formulaUnitVolumeNm3: 0.05,
     });
     expect(u.form).toMatch(/Glasser/);
@@ -153,7 +159,7 @@ describe('estimateSaltThermo', () => {
         anionsPerFormula: 1,
         method,
         structureType: 'rock-salt',
-        formulaUnitVolumeNm3: volumeFromCellNm3(5.64 ** 3, 4),
+        formulaUnitVolumeNm3: cellVolumeNm3(5.64, 4),
       });
       expect(r.methodChosen).toBe(method);
       expect(Math.abs(r.latticeEnthalpyKJ.value / 787 - 1)).toBeLessThan(0.08);

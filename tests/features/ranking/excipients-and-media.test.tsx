@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import Papa from 'papaparse';
-import { defaultScreeningSettings } from '@/chem';
+import { parseScreeningSettings } from '@/chem';
 import { CAUTION_LINES } from '@/components/Cautions';
 import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
@@ -36,7 +36,7 @@ describe('microenvironment pH: stated or assumed', () => {
 
   it('an empty field means "not stated": 7 is assumed, a number is stated', () => {
     const project = projectSettingsSchema.parse({ microenvironmentPh: 6 });
-    const settings = defaultScreeningSettings();
+    const settings = parseScreeningSettings({});
     const draft = conditionsDraftOf(project, settings);
     expect(draft.microenvironmentPh).toBe('6');
     const cleared = conditionsFromDraft({ ...draft, microenvironmentPh: ' ' }, project, settings);

@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { defaultScreeningSettings } from '@/chem';
+import { parseScreeningSettings } from '@/chem';
 import { resetDbForTests } from '../../support/db';
 import { projectsRepo } from '@/persistence/projects-repo';
 import { candidatesRepo } from '@/persistence/candidates-repo';
@@ -14,7 +14,7 @@ import { useRankingViewStore } from '@/stores/ranking-view-store';
 
 describe('screening-conditions form model', () => {
   const project = projectSettingsSchema.parse({});
-  const settings = defaultScreeningSettings();
+  const settings = parseScreeningSettings({});
   const draft = conditionsDraftOf(project, settings);
 
   it('starts from the stored values', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
-import { CRITERIA, defaultScreeningSettings, validationReport } from '@/chem';
+import { CRITERIA, parseScreeningSettings, validationReport } from '@/chem';
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
@@ -92,7 +92,7 @@ describe('sheet model from a real screening', () => {
     expect(m.solubility?.series[0]?.kind).toBe('free-form');
     expect(m.confidence.length).toBeGreaterThan(0);
     // The project has no stored weights, so the sheet shows the screening defaults, in criterion order.
-    const defaults = defaultScreeningSettings().weights;
+    const defaults = parseScreeningSettings({}).weights;
     expect(m.weights.map((w) => w.value)).toEqual(CRITERIA.map((k) => defaults[k]));
   });
 

@@ -24,11 +24,7 @@ import {
   SHIPPED,
 } from './shipped-model';
 
-export {
-  SALT_SOLUBILITY_CV_RMSE_LOG10,
-  SALT_SOLUBILITY_SHARED_LOG10_SD,
-  SALT_SOLUBILITY_WITHIN_LOG10_SD,
-} from './shipped-model';
+export { SALT_SOLUBILITY_SHARED_LOG10_SD, SALT_SOLUBILITY_WITHIN_LOG10_SD } from './shipped-model';
 
 /**
  * The salt's own solubility in pure water, estimated before the salt exists: a ridge regression in

@@ -13,7 +13,6 @@ export {
 export { LIBRARY_COUNTER_ION_DESCRIPTORS } from './library-descriptors.data';
 export {
   estimateSaltWaterSolubility,
-  SALT_SOLUBILITY_CV_RMSE_LOG10,
   SALT_SOLUBILITY_SHARED_LOG10_SD,
   SALT_SOLUBILITY_WITHIN_LOG10_SD,
   DRIVER_THRESHOLD_DECADES,

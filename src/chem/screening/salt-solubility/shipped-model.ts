@@ -63,8 +63,6 @@ function asModel(s: ShippedLiteral): ShippedModel {
 
 export const SHIPPED = asModel(SALT_SOLUBILITY_MODEL as ShippedLiteral);
 
-/** Cross-validated 1σ of the shipped model (the fully nested procedure), decades. */
-export const SALT_SOLUBILITY_CV_RMSE_LOG10 = SHIPPED.literal.cvRmseLog10 ?? Number.NaN;
 /** Its split: a level shared by every salt of one drug, and a part that differs salt by salt, decades. */
 export const SALT_SOLUBILITY_SHARED_LOG10_SD = SHIPPED.literal.sharedLog10Sd ?? Number.NaN;
 export const SALT_SOLUBILITY_WITHIN_LOG10_SD = SHIPPED.literal.withinLog10Sd ?? Number.NaN;

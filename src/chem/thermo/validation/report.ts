@@ -2,8 +2,7 @@ import { SOLUTION_REFERENCE_SALTS } from '../../data/thermo-reference';
 import { getThermoIon } from '../ions';
 import { estimateSaltThermo } from '../estimate-salt';
 import type { ModelValidation, ValidationRow } from '../thermo.types';
-import { referenceSolutionEnthalpyKJ, SOLUTION_REFERENCE_SOURCE } from './reference';
-import { relativeSolutionEnthalpyKJ } from '../models/solution/relative';
+import { SOLUTION_REFERENCE_SOURCE } from './reference';
 import {
   hydrationValidation,
   latticeValidation,
@@ -143,71 +142,14 @@ function referenceLatticeScale(s: (typeof SOLUTION_REFERENCE_SALTS)[number]): nu
 }
 
 /**
- * The uncalibrated engine (auto method, bundled ions only) against ΔH_sol from the NBS tables (Wagman et
- * al. 1982) — the figure before calibration, kept visible beside {@link calibratedSolutionValidation}.
+ * Every ΔH_sol section: the uncalibrated engine (auto method, bundled ions only, 'solution-hess')
+ * against ΔH_sol from the NBS tables (Wagman et al. 1982), and the calibrated engine against the same
+ * values leave-one-salt-out ('solution-hess-calibrated': each salt predicted with a lattice
+ * calibration refitted without it, calibration/fit-calibration.ts), all salts and per charge class.
  */
-export function solutionValidation(): SolutionValidation {
-  solutionCache ??= computeSolutionSections();
-  return solutionCache.raw[0]!;
-}
-
-/**
- * The calibrated engine against the same NBS ΔH_sol, leave-one-salt-out: each salt predicted with a
- * lattice calibration refitted without it (calibration/fit-calibration.ts), so the figure is what the
- * calibration does on a salt it never saw.
- */
-export function calibratedSolutionValidation(): SolutionValidation {
-  solutionCache ??= computeSolutionSections();
-  return solutionCache.calibrated[0]!;
-}
-
-/** Every ΔH_sol section: raw and calibrated (cross-validated), all salts and per charge class. */
 export function solutionValidationSections(): SolutionValidation[] {
   solutionCache ??= computeSolutionSections();
   return [...solutionCache.raw, ...solutionCache.calibrated];
-}
-
-let pairCache: { factor: number; pairs: number } | undefined;
-
-/**
- * Measured pair factor for {@link relativeSolutionEnthalpyKJ}: over all pairs of NBS reference salts that
- * share their cation (the stand-in for a drug ion), the RMS of the error of the per-cation ΔH_sol difference
- * divided by the RMS of its quadrature uncertainty (shared-ion hydration removed). Below 1 means errors
- * partly cancel between counter-ions of one ion. Measured on the engine as it answers by default (calibrated
- * lattice enthalpies; the calibration's factors were fitted on these same salts, but a factor per charge
- * class scales both salts of a pair alike, so it barely touches the per-pair differences).
- */
-export function relativePairFactor(): { factor: number; pairs: number } {
-  if (pairCache) return pairCache;
-  const rows = SOLUTION_REFERENCE_SALTS.map((s) => {
-    const result = estimateSaltThermo({
-      cation: getThermoIon(s.cation)!,
-      anion: getThermoIon(s.anion)!,
-      cationsPerFormula: s.p,
-      anionsPerFormula: s.q,
-    });
-    return { s, result, ref: referenceSolutionEnthalpyKJ(s) / s.p };
-  });
-  let sumErr2 = 0;
-  let sumU2 = 0;
-  let pairs = 0;
-  for (let i = 0; i < rows.length; i++) {
-    for (let j = i + 1; j < rows.length; j++) {
-      const a = rows[i]!;
-      const b = rows[j]!;
-      if (a.s.cation !== b.s.cation) continue;
-      const d = relativeSolutionEnthalpyKJ(
-        { result: a.result, drugPerFormula: a.s.p, counterPerFormula: a.s.q, drugIs: 'cation' },
-        { result: b.result, drugPerFormula: b.s.p, counterPerFormula: b.s.q, drugIs: 'cation' },
-        1,
-      );
-      sumErr2 += (d.value - (a.ref - b.ref)) ** 2;
-      sumU2 += d.uncertainty ** 2;
-      pairs++;
-    }
-  }
-  pairCache = { factor: Math.sqrt(sumErr2 / sumU2), pairs };
-  return pairCache;
 }
 
 /** The four Kapustinskii radius/constant pairings on the halides (and polyatomic salts), for the cited choice. */

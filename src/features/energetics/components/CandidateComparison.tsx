@@ -1,7 +1,6 @@
-import type { SaltThermoResult } from '@/chem';
+import { solutionEnthalpiesRelativeToMedianKJ, type SaltThermoResult } from '@/chem';
 import { WhiskerBars } from '@/components/charts/WhiskerBars';
 import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/compute-screening';
-import { relativeSolutionEnthalpies } from '../energetics-model';
 import { drugsPerFormula, kj, labelOf } from './energetics-labels';
 
 type Thermo = CandidateEnergetics & { thermo: SaltThermoResult };
@@ -105,7 +104,7 @@ function LatticeBars({ data, items }: { data: ProjectScreening; items: Thermo[] 
 /** ΔH_sol per drug ion relative to the median candidate, with the drug ion's common error taken out. */
 function RelativeBars({ data, items }: { data: ProjectScreening; items: Thermo[] }) {
   const drugIsCation = data.drugIon.charge > 0;
-  const rel = relativeSolutionEnthalpies(
+  const rel = solutionEnthalpiesRelativeToMedianKJ(
     items.map((e) => {
       const m = drugsPerFormula(data, e.candidateId);
       return {

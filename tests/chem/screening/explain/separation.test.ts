@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  defaultScreeningSettings,
+  parseScreeningSettings,
   SAME_SPREAD,
   separationOf,
   shortlistSeparation,
@@ -48,7 +48,7 @@ describe('shortlistSeparation on two candidates (hand-computed)', () => {
     drugKind: 'base' as const,
     drugPkaSigma: 0.1,
     log10IntrinsicSigma: 0.3,
-    bands: defaultScreeningSettings().deltaPkaBands,
+    bands: parseScreeningSettings({}).deltaPkaBands,
   };
   const base: Omit<SeparationCandidate, 'criteria'> = {
     deltaPka: 6,
@@ -75,7 +75,7 @@ describe('shortlistSeparation on two candidates (hand-computed)', () => {
     saltWaterLog10: -1.5,
     criteria: { ...a.criteria, log10WorstDoseNumber: 1.5, activeFraction: 0.7 },
   };
-  const weights = defaultScreeningSettings().weights;
+  const weights = parseScreeningSettings({}).weights;
   const sep = shortlistSeparation([a, b], shared, weights);
   const get = (k: string) => sep.criteria.find((c) => c.key === k)!;
 

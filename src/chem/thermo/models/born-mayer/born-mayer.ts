@@ -1,7 +1,7 @@
 import { COULOMB_KJ_A_PER_MOL } from '../../../constants/physical';
 import { ChemInputError, requireFiniteInRange } from '../../../result';
 import type { StructureType } from '../../thermo.types';
-import { requireIonCharges } from '../kapustinskii/kapustinskii';
+import type { CheckedFormulaUnit } from '../formula-unit';
 
 /**
  * Madelung constants referred to the shortest cation–anion distance r₀, per formula unit, to be used with
@@ -61,8 +61,8 @@ export function nearestDistanceFromVolumeA(
 }
 
 export interface BornMayerInput {
-  cationCharge: number;
-  anionCharge: number;
+  /** Charges and counts, checked once (checkFormulaUnit). */
+  formulaUnit: CheckedFormulaUnit;
   structureType: string;
   /** Shortest cation–anion distance r₀, Å. */
   nearestDistanceA: number;
@@ -74,7 +74,7 @@ export interface BornMayerInput {
  * Source: M. Born, J. E. Mayer, Z. Phys. 75 (1932) 1; Coulomb constant from CODATA 2018.
  */
 export function bornMayerPotentialKJ(input: BornMayerInput): number {
-  const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
+  const { cationCharge: zc, anionCharge: za } = input.formulaUnit;
   const s = requireStructureType(input.structureType);
   const r0 = requireFiniteInRange('nearestDistanceA', input.nearestDistanceA, 1, 10, 'Å');
   return (
@@ -89,7 +89,7 @@ export function bornMayerPotentialKJ(input: BornMayerInput): number {
  * Source: M. Born, A. Landé, Verh. Dtsch. Phys. Ges. 20 (1918) 210; L. Pauling, The Nature of the Chemical Bond.
  */
 export function bornLandePotentialKJ(input: BornMayerInput & { bornExponent: number }): number {
-  const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
+  const { cationCharge: zc, anionCharge: za } = input.formulaUnit;
   const s = requireStructureType(input.structureType);
   const r0 = requireFiniteInRange('nearestDistanceA', input.nearestDistanceA, 1, 10, 'Å');
   const n = requireFiniteInRange('bornExponent', input.bornExponent, 4, 14);

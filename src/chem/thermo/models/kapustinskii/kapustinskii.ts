@@ -1,5 +1,6 @@
-import { ChemInputError, requireFiniteInRange, type Estimate } from '../../../result';
+import { ChemInputError, requireFiniteInRange } from '../../../result';
 import { saltStoichiometryFromCharges } from '../../../compound/salt-stoichiometry';
+import type { CheckedFormulaUnit } from '../formula-unit';
 
 /**
  * Kapustinskii's constant in the form the CRC Handbook of Chemistry and Physics, "Lattice Energies"
@@ -24,16 +25,12 @@ export const KAPUSTINSKII_K_ALT_KJ_A_PER_MOL = 1202.5;
 export const KAPUSTINSKII_RHO_A = 0.345;
 
 export interface KapustinskiiInput {
-  /** Cation charge number z₊ (positive integer). */
-  cationCharge: number;
-  /** Anion charge number z₋ (negative integer). */
-  anionCharge: number;
+  /** Charges and counts, checked once (checkFormulaUnit); ν = p + q. */
+  formulaUnit: CheckedFormulaUnit;
   /** Cation radius, Å. */
   cationRadiusA: number;
   /** Anion radius, Å. */
   anionRadiusA: number;
-  /** Ions per formula unit ν; defaults to the count implied by the charges (e.g. 3 for MX₂). */
-  ionsPerFormulaUnit?: number;
   /** Kapustinskii constant, kJ·Å·mol⁻¹ (default {@link KAPUSTINSKII_K_KJ_A_PER_MOL}). */
   constantKJA?: number;
 }
@@ -52,23 +49,6 @@ export function stoichiometryFromCharges(cationCharge: number, anionCharge: numb
   return { cations: st.drugPerSalt, anions: st.counterIonPerSalt };
 }
 
-/** Validate a pair of ion charges; returns them. */
-export function requireIonCharges(
-  cationCharge: number,
-  anionCharge: number,
-): { zc: number; za: number } {
-  const zc = requireFiniteInRange('cationCharge', cationCharge, 1, 4);
-  const za = requireFiniteInRange('anionCharge', anionCharge, -4, -1);
-  if (!Number.isInteger(zc) || !Number.isInteger(za)) {
-    throw new ChemInputError(
-      'charge',
-      'charges must be whole numbers',
-      'integers, cation +1…+4, anion −1…−4',
-    );
-  }
-  return { zc, za };
-}
-
 /**
  * Lattice potential energy U_POT by Kapustinskii's equation, kJ/mol (dissociation sign convention: positive,
  * MX(s) → M⁺(g) + X⁻(g)), as a plain number.
@@ -77,16 +57,10 @@ export function requireIonCharges(
  * Valid for ionic solids of near-spherical ions; radii 0.35–10 Å (so r₊ + r₋ > 2ρ, where the repulsion term keeps its meaning).
  */
 export function kapustinskiiPotentialKJ(input: KapustinskiiInput): number {
-  const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
+  const u = input.formulaUnit;
   const rc = requireFiniteInRange('cationRadiusA', input.cationRadiusA, 0.35, 10, 'Å');
   const ra = requireFiniteInRange('anionRadiusA', input.anionRadiusA, 0.35, 10, 'Å');
-  const stoich = stoichiometryFromCharges(zc, za);
-  const nu = requireFiniteInRange(
-    'ionsPerFormulaUnit',
-    input.ionsPerFormulaUnit ?? stoich.cations + stoich.anions,
-    2,
-    20,
-  );
+  const nu = u.cationsPerFormula + u.anionsPerFormula;
   const k = requireFiniteInRange(
     'constantKJA',
     input.constantKJA ?? KAPUSTINSKII_K_KJ_A_PER_MOL,
@@ -95,32 +69,10 @@ export function kapustinskiiPotentialKJ(input: KapustinskiiInput): number {
     'kJ·Å/mol',
   );
   const d = rc + ra;
-  return ((k * nu * Math.abs(zc * za)) / d) * (1 - KAPUSTINSKII_RHO_A / d);
+  return ((k * nu * Math.abs(u.cationCharge * u.anionCharge)) / d) * (1 - KAPUSTINSKII_RHO_A / d);
 }
 
 export const KAPUSTINSKII_SOURCES = [
   'A. F. Kapustinskii, Q. Rev. Chem. Soc. 10 (1956) 283',
   'H. D. B. Jenkins, H. K. Roobottom, "Lattice Energies", CRC Handbook of Chemistry and Physics',
 ];
-
-/**
- * Kapustinskii lattice potential energy as an {@link Estimate}, kJ/mol (dissociation, > 0). The
- * uncertainty here is the bare model's measured RMS error on the bundled reference salts — use
- * `estimateSaltThermo` for the calibrated, group-aware figure; this function keeps the skeleton's API.
- */
-export function kapustinskiiLatticeEnergyKJ(input: KapustinskiiInput): Estimate {
-  const value = kapustinskiiPotentialKJ(input);
-  return {
-    value,
-    uncertainty: KAPUSTINSKII_SIMPLE_RMS_FRACTION * value,
-    method: 'kapustinskii',
-    sources: KAPUSTINSKII_SOURCES,
-  };
-}
-
-/**
- * RMS relative error of Kapustinskii (Goldschmidt/thermochemical radii, K = 1214) on the bundled alkali and
- * alkaline-earth halides, as measured by `validationReport()`; a test keeps this figure equal to the
- * measured one (tests/chem/thermo/validation.test.ts).
- */
-export const KAPUSTINSKII_SIMPLE_RMS_FRACTION = 0.045;

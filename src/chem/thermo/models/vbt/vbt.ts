@@ -1,6 +1,6 @@
 import { AVOGADRO_PER_MOL } from '../../../constants/physical';
 import { requireFiniteInRange } from '../../../result';
-import { requireIonCharges } from '../kapustinskii/kapustinskii';
+import type { CheckedFormulaUnit } from '../formula-unit';
 
 /**
  * Volume-based thermodynamics constants α (kJ·mol⁻¹·nm) and β (kJ/mol) for U_POT = 2I(α/V_m^(1/3) + β).
@@ -55,10 +55,8 @@ export function vbtConstantsFor(cationCharge: number, anionCharge: number, p: nu
 }
 
 export interface VbtInput {
-  cationCharge: number;
-  anionCharge: number;
-  cationsPerFormula: number;
-  anionsPerFormula: number;
+  /** Charges and counts, checked once (checkFormulaUnit). */
+  formulaUnit: CheckedFormulaUnit;
   /** Formula-unit volume V_m, nm³ (0.005–10). */
   formulaUnitVolumeNm3: number;
 }
@@ -69,9 +67,12 @@ export interface VbtInput {
  * recommend for highly charged lattices.
  */
 export function vbtPotentialKJ(input: VbtInput): { valueKJ: number; form: string } {
-  const { zc, za } = requireIonCharges(input.cationCharge, input.anionCharge);
-  const p = requireFiniteInRange('cationsPerFormula', input.cationsPerFormula, 1, 6);
-  const q = requireFiniteInRange('anionsPerFormula', input.anionsPerFormula, 1, 6);
+  const {
+    cationCharge: zc,
+    anionCharge: za,
+    cationsPerFormula: p,
+    anionsPerFormula: q,
+  } = input.formulaUnit;
   const volumeNm3 = requireFiniteInRange(
     'formulaUnitVolumeNm3',
     input.formulaUnitVolumeNm3,
@@ -99,11 +100,4 @@ export function volumeFromDensityNm3(molarMassGPerMol: number, densityGPerCm3: n
   const massGPerMol = requireFiniteInRange('molarMassGPerMol', molarMassGPerMol, 1, 10000, 'g/mol');
   const rhoGPerCm3 = requireFiniteInRange('densityGPerCm3', densityGPerCm3, 0.3, 25, 'g/cm³');
   return (massGPerMol / (rhoGPerCm3 * AVOGADRO_PER_MOL)) * 1e21;
-}
-
-/** Formula-unit volume from a unit cell: V_m = V_cell / Z, nm³ (V_cell in Å³). */
-export function volumeFromCellNm3(cellVolumeA3: number, formulaUnitsPerCell: number): number {
-  const cellA3 = requireFiniteInRange('cellVolumeA3', cellVolumeA3, 5, 1e6, 'Å³');
-  const z = requireFiniteInRange('formulaUnitsPerCell', formulaUnitsPerCell, 1, 256);
-  return cellA3 / z / 1000;
 }
