@@ -13,7 +13,9 @@ import { instrument, traceDemoScreen } from './input-path-trace';
  */
 const BOUNDS = {
   candidates: { stops: 441, modules: 26, returns: 415 },
-  screen: { stops: 4048, modules: 38, returns: 4010 },
+  // Raised by 7 stops, 1 module, 6 returns when the batch's shared numbers step (screen/row-numbers.ts)
+  // merged: the screen computes a row's numbers in one module that the full row and the top-N path share.
+  screen: { stops: 4055, modules: 39, returns: 4016 },
 };
 
 describe('the path of the screen’s input through the core', () => {
