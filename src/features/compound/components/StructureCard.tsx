@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { methodLabel } from '@/components/method-label';
 import {
   drugIon,
   formatIonFormula,
@@ -189,7 +190,7 @@ function VolumeFacts({ derived }: { derived: Derived }) {
           <dt>Ion volume (crystal)</dt>
           <dd>
             {fmtU(thermo.volumeNm3.value, thermo.volumeNm3.uncertainty, 3)} nm³{' '}
-            <span className="muted">({thermo.volumeNm3.method})</span>
+            <span className="muted">({methodLabel(thermo.volumeNm3.method)})</span>
           </dd>
         </>
       ) : null}

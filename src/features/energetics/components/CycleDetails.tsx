@@ -1,4 +1,5 @@
 import { formatWithUncertainty, latticeFromSolutionEnthalpy, type SaltThermoResult } from '@/chem';
+import { methodLabel } from '@/components/method-label';
 import type { CandidateEnergetics, ProjectScreening } from '@/screening-data/compute-screening';
 import { sourcesOf } from '../energetics-model';
 import { kj, labelOf } from './energetics-labels';
@@ -107,7 +108,7 @@ function StepRow({ step: [sym, what, est] }: { step: Step }) {
           <span className="origin origin-estimated">est.</span>
         )}
       </td>
-      <td className="method">{est.method}</td>
+      <td className="method">{methodLabel(est.method)}</td>
     </tr>
   );
 }
