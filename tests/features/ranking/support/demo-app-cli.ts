@@ -38,13 +38,13 @@ export function demoAppScreening() {
   });
 }
 
-/** `saltsmith screen` of the demo input with the app's default settings (the fixture's own dropped) and S₀'s origin. */
+/** `saltsmith screen` of the demo input with the app's default settings (the fixture's own dropped). */
 export async function demoCliOutput(format: 'json' | 'csv'): Promise<string> {
   const input = JSON.parse(readFileSync(DEMO_SCREEN_INPUT, 'utf8')) as Record<string, unknown>;
   delete input.settings;
-  // The fixture leaves S₀'s origin out (the CLI then screens it as not stated, 1σ 0.6 decades); the
-  // demo project states it measured (1σ 0.1), so the CLI is told the same.
-  input.intrinsicSolubilityOrigin = DEMO_COMPOUND.intrinsicSolubilityOrigin;
+  // The fixture states S₀'s origin as the demo project does (it once left it out, and the CLI then
+  // screened the demo's S₀ as not stated, 1σ 0.6 decades instead of 0.1).
+  expect(input.intrinsicSolubilityOrigin).toBe(DEMO_COMPOUND.intrinsicSolubilityOrigin);
   const path = join(mkdtempSync(join(tmpdir(), 'same-ranking-')), 'input.json');
   writeFileSync(path, JSON.stringify(input));
   const c = captureIo();
