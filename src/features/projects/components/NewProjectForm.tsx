@@ -8,13 +8,12 @@ import {
   type NewProjectErrors,
 } from '../new-project-model';
 
-/** Create a project from a name, a structure (SMILES or formula), acid/base and one pKa. */
-export function NewProjectForm({ onCreated }: { onCreated: (projectId: string) => void }) {
+/** The draft, its field errors and the save: a project is created only from a draft that checks. */
+function useNewProjectDraft(onCreated: (projectId: string) => void) {
   const [draft, setDraft] = useState<NewProjectDraft>(EMPTY_NEW_PROJECT);
   const [errors, setErrors] = useState<NewProjectErrors>({});
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
-  const uid = useId();
 
   const set = (key: keyof NewProjectDraft, value: string) => {
     setDraft((d) => {
@@ -46,24 +45,62 @@ export function NewProjectForm({ onCreated }: { onCreated: (projectId: string) =
     }
   };
 
-  const field = (key: keyof NewProjectDraft, label: string, hint?: string, wide = false) => {
-    const id = `${uid}-${key}`;
-    const error = errors[key];
-    return (
-      <div className={`field${wide ? ' field-wide' : ''}`}>
-        <label htmlFor={id}>{label}</label>
-        <input
-          id={id}
-          name={key}
-          value={draft[key]}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy(id, error, hint)}
-          onChange={(ev) => set(key, ev.target.value)}
-        />
-        <FieldMessage id={id} error={error} hint={hint} />
-      </div>
-    );
-  };
+  return { draft, errors, busy, failure, set, submit };
+}
+
+/** One text field of the draft with its label, hint and error. */
+function DraftField({
+  uid,
+  field,
+  label,
+  hint,
+  wide = false,
+  value,
+  error,
+  onChange,
+}: {
+  uid: string;
+  field: keyof NewProjectDraft;
+  label: string;
+  hint?: string;
+  wide?: boolean;
+  value: string;
+  error: string | undefined;
+  onChange: (value: string) => void;
+}) {
+  const id = `${uid}-${field}`;
+  return (
+    <div className={`field${wide ? ' field-wide' : ''}`}>
+      <label htmlFor={id}>{label}</label>
+      <input
+        id={id}
+        name={field}
+        value={value}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, error, hint)}
+        onChange={(ev) => onChange(ev.target.value)}
+      />
+      <FieldMessage id={id} error={error} hint={hint} />
+    </div>
+  );
+}
+
+/** Create a project from a name, a structure (SMILES or formula), acid/base and one pKa. */
+export function NewProjectForm({ onCreated }: { onCreated: (projectId: string) => void }) {
+  const { draft, errors, busy, failure, set, submit } = useNewProjectDraft(onCreated);
+  const uid = useId();
+  const field = (key: keyof NewProjectDraft, label: string, hint?: string, wide = false) => (
+    <DraftField
+      uid={uid}
+      field={key}
+      label={label}
+      hint={hint}
+      wide={wide}
+      value={draft[key]}
+      error={errors[key]}
+      onChange={(v) => set(key, v)}
+    />
+  );
 
   return (
     <form

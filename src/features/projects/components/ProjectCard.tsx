@@ -21,30 +21,9 @@ export function ProjectCard({
   isOpen: boolean;
   actions: ProjectCardActions;
 }) {
-  const { project, candidateCount, measurementCount } = summary;
+  const { project } = summary;
   const [renaming, setRenaming] = useState(false);
-  const [name, setName] = useState(project.name);
-  const [error, setError] = useState<string | null>(null);
   const uid = useId();
-  const c = project.compound;
-  const pKas = c.pKas.map((p) => p.value).join(', ');
-
-  const submitRename = async (e: FormEvent) => {
-    e.preventDefault();
-    const trimmed = name.trim();
-    if (!trimmed) {
-      setError('A project needs a name');
-      return;
-    }
-    if (trimmed.length > 120) {
-      setError('At most 120 characters');
-      return;
-    }
-    await actions.rename(project.id, trimmed);
-    setRenaming(false);
-    setError(null);
-  };
-
   return (
     <article
       className={`project-card${isOpen ? ' is-open' : ''}${project.archived ? ' is-archived' : ''}`}
@@ -59,110 +38,167 @@ export function ProjectCard({
         </div>
       </header>
       {renaming ? (
-        <form className="rename-form" onSubmit={submitRename} noValidate>
-          <label htmlFor={`${uid}-rename`}>New name</label>
-          <input
-            id={`${uid}-rename`}
-            value={name}
-            autoFocus
-            aria-invalid={error ? true : undefined}
-            aria-describedby={error ? `${uid}-rename-error` : undefined}
-            onChange={(e) => setName(e.target.value)}
-          />
-          {error ? (
-            <p className="field-error" id={`${uid}-rename-error`}>
-              {error}
-            </p>
-          ) : null}
-          <div className="button-row">
-            <button type="submit" className="primary">
-              Save name
-            </button>
-            <button
-              type="button"
-              onClick={() => {
-                setRenaming(false);
-                setName(project.name);
-                setError(null);
-              }}
-            >
-              Cancel
-            </button>
-          </div>
-        </form>
+        <RenameForm
+          uid={uid}
+          currentName={project.name}
+          onRename={(name) => actions.rename(project.id, name)}
+          onClose={() => setRenaming(false)}
+        />
       ) : null}
-      <dl className="project-facts">
-        <div>
-          <dt>Compound</dt>
-          <dd>
-            {c.name} — weak {c.kind}, ion charge{' '}
-            {c.ionCharge > 0 ? `+${c.ionCharge}` : `−${-c.ionCharge}`}
-          </dd>
-        </div>
-        <div>
-          <dt>Structure</dt>
-          <dd className="structure-text">{c.formula || c.smiles || '—'}</dd>
-        </div>
-        <div>
-          <dt>pKa</dt>
-          <dd>{pKas}</dd>
-        </div>
-        <div>
-          <dt>Shortlist</dt>
-          <dd>
-            {candidateCount} counter-ion{candidateCount === 1 ? '' : 's'}, {measurementCount}{' '}
-            measurement
-            {measurementCount === 1 ? '' : 's'}
-          </dd>
-        </div>
-        <div>
-          <dt>Last edit</dt>
-          <dd>
-            <time dateTime={project.updatedAt}>
-              {dateFormat.format(new Date(project.updatedAt))}
-            </time>
-          </dd>
-        </div>
-      </dl>
-      <div className="button-row project-actions">
-        <button
-          type="button"
-          className="primary"
-          onClick={() => actions.open(project.id)}
-          aria-label={isOpen ? `Go to compound: ${project.name}` : `Open ${project.name}`}
-        >
-          {isOpen ? 'Go to compound' : 'Open'}
+      <ProjectFacts summary={summary} />
+      <ProjectActions
+        project={project}
+        isOpen={isOpen}
+        actions={actions}
+        onRename={() => setRenaming(true)}
+      />
+    </article>
+  );
+}
+
+/** The rename form: a name of 1–120 characters (trimmed), or a cancel that keeps the old one. */
+function RenameForm({
+  uid,
+  currentName,
+  onRename,
+  onClose,
+}: {
+  uid: string;
+  currentName: string;
+  onRename: (name: string) => Promise<void>;
+  onClose: () => void;
+}) {
+  const [name, setName] = useState(currentName);
+  const [error, setError] = useState<string | null>(null);
+  const submitRename = async (e: FormEvent) => {
+    e.preventDefault();
+    const trimmed = name.trim();
+    if (!trimmed) {
+      setError('A project needs a name');
+      return;
+    }
+    if (trimmed.length > 120) {
+      setError('At most 120 characters');
+      return;
+    }
+    await onRename(trimmed);
+    onClose();
+  };
+  return (
+    <form className="rename-form" onSubmit={submitRename} noValidate>
+      <label htmlFor={`${uid}-rename`}>New name</label>
+      <input
+        id={`${uid}-rename`}
+        value={name}
+        autoFocus
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${uid}-rename-error` : undefined}
+        onChange={(e) => setName(e.target.value)}
+      />
+      {error ? (
+        <p className="field-error" id={`${uid}-rename-error`}>
+          {error}
+        </p>
+      ) : null}
+      <div className="button-row">
+        <button type="submit" className="primary">
+          Save name
         </button>
-        <button
-          type="button"
-          onClick={() => setRenaming(true)}
-          aria-label={`Rename ${project.name}`}
-        >
-          Rename
-        </button>
-        <button
-          type="button"
-          onClick={() => actions.duplicate(project.id)}
-          aria-label={`Duplicate ${project.name}`}
-        >
-          Duplicate
-        </button>
-        <button
-          type="button"
-          onClick={() => actions.setArchived(project.id, !project.archived)}
-          aria-label={`${project.archived ? 'Unarchive' : 'Archive'} ${project.name}`}
-        >
-          {project.archived ? 'Unarchive' : 'Archive'}
-        </button>
-        <button
-          type="button"
-          className="danger"
-          onClick={() => actions.remove(project.id)}
-          aria-label={`Delete ${project.name}`}
-        >
-          Delete
+        <button type="button" onClick={onClose}>
+          Cancel
         </button>
       </div>
-    </article>
+    </form>
+  );
+}
+
+/** What the project holds: compound, structure, pKa, shortlist and the last edit. */
+function ProjectFacts({ summary }: { summary: ProjectSummary }) {
+  const { project, candidateCount, measurementCount } = summary;
+  const c = project.compound;
+  const pKas = c.pKas.map((p) => p.value).join(', ');
+  return (
+    <dl className="project-facts">
+      <div>
+        <dt>Compound</dt>
+        <dd>
+          {c.name} — weak {c.kind}, ion charge{' '}
+          {c.ionCharge > 0 ? `+${c.ionCharge}` : `−${-c.ionCharge}`}
+        </dd>
+      </div>
+      <div>
+        <dt>Structure</dt>
+        <dd className="structure-text">{c.formula || c.smiles || '—'}</dd>
+      </div>
+      <div>
+        <dt>pKa</dt>
+        <dd>{pKas}</dd>
+      </div>
+      <div>
+        <dt>Shortlist</dt>
+        <dd>
+          {candidateCount} counter-ion{candidateCount === 1 ? '' : 's'}, {measurementCount}{' '}
+          measurement
+          {measurementCount === 1 ? '' : 's'}
+        </dd>
+      </div>
+      <div>
+        <dt>Last edit</dt>
+        <dd>
+          <time dateTime={project.updatedAt}>{dateFormat.format(new Date(project.updatedAt))}</time>
+        </dd>
+      </div>
+    </dl>
+  );
+}
+
+/** Open, rename, duplicate, archive or delete the project. */
+function ProjectActions({
+  project,
+  isOpen,
+  actions,
+  onRename,
+}: {
+  project: ProjectSummary['project'];
+  isOpen: boolean;
+  actions: ProjectCardActions;
+  onRename: () => void;
+}) {
+  return (
+    <div className="button-row project-actions">
+      <button
+        type="button"
+        className="primary"
+        onClick={() => actions.open(project.id)}
+        aria-label={isOpen ? `Go to compound: ${project.name}` : `Open ${project.name}`}
+      >
+        {isOpen ? 'Go to compound' : 'Open'}
+      </button>
+      <button type="button" onClick={onRename} aria-label={`Rename ${project.name}`}>
+        Rename
+      </button>
+      <button
+        type="button"
+        onClick={() => actions.duplicate(project.id)}
+        aria-label={`Duplicate ${project.name}`}
+      >
+        Duplicate
+      </button>
+      <button
+        type="button"
+        onClick={() => actions.setArchived(project.id, !project.archived)}
+        aria-label={`${project.archived ? 'Unarchive' : 'Archive'} ${project.name}`}
+      >
+        {project.archived ? 'Unarchive' : 'Archive'}
+      </button>
+      <button
+        type="button"
+        className="danger"
+        onClick={() => actions.remove(project.id)}
+        aria-label={`Delete ${project.name}`}
+      >
+        Delete
+      </button>
+    </div>
   );
 }

@@ -1,19 +1,13 @@
-import { useEffect, useRef, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import type { ProjectRecord } from '@/persistence/records';
-import { projectsRepo, type ProjectBundle } from '@/persistence/projects-repo';
 import { useNavigationStore } from '@/stores/navigation-store';
-import { useProjectList } from '../hooks/use-project-list';
+import { useProjectList, type ProjectSummary } from '../hooks/use-project-list';
+import { useProjectBoard } from '../hooks/use-project-board';
 import { NewProjectForm } from './NewProjectForm';
 import { ProjectCard, type ProjectCardActions } from './ProjectCard';
+import { BoardStatus, DemoReset } from './BoardControls';
 import '../projects.css';
 
-/** How long the "Undo" offer stays after a delete, ms. */
-const UNDO_WINDOW_MS = 12_000;
-
-/**
- * The Projects board: every compound side by side, with create, rename, duplicate, archive, delete
- * (with undo) and a reset of the fictional demo project.
- */
 /** What the app shell may place under the board (the project-files panel), given the board's state. */
 export interface ProjectsAreaSlotContext {
   projects: ProjectRecord[];
@@ -21,6 +15,10 @@ export interface ProjectsAreaSlotContext {
   open: (id: string) => void;
 }
 
+/**
+ * The Projects board: every compound side by side, with create, rename, duplicate, archive, delete
+ * (with undo) and a reset of the fictional demo project.
+ */
 export function ProjectsArea({
   currentProjectId,
   footer,
@@ -33,67 +31,11 @@ export function ProjectsArea({
   const openProject = useNavigationStore((s) => s.openProject);
   const goTo = useNavigationStore((s) => s.goTo);
   const [showArchived, setShowArchived] = useState(false);
-  const [deleted, setDeleted] = useState<ProjectBundle | null>(null);
-  const [message, setMessage] = useState<string>('');
-  const [confirmReset, setConfirmReset] = useState(false);
-  const undoTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
-
-  useEffect(
-    () => () => {
-      if (undoTimer.current) clearTimeout(undoTimer.current);
-    },
-    [],
-  );
-
   const open = (id: string) => {
     openProject(id);
     goTo('compound');
   };
-
-  const actions: ProjectCardActions = {
-    open,
-    rename: async (id, name) => {
-      await projectsRepo.rename(id, name);
-      setMessage(`Renamed to ${name}.`);
-    },
-    duplicate: (id) => {
-      void projectsRepo.duplicate(id).then((copy) => setMessage(`Created ${copy.name}.`));
-    },
-    setArchived: (id, archived) => {
-      void projectsRepo.setArchived(id, archived).then(() => {
-        if (archived) setShowArchived((s) => s);
-        setMessage(
-          archived
-            ? 'Project archived: find it under “Show archived”.'
-            : 'Project back on the board.',
-        );
-      });
-    },
-    remove: (id) => {
-      void projectsRepo.removeWithUndo(id).then((bundle) => {
-        if (!bundle) return;
-        setDeleted(bundle);
-        setMessage('');
-        if (undoTimer.current) clearTimeout(undoTimer.current);
-        undoTimer.current = setTimeout(() => setDeleted(null), UNDO_WINDOW_MS);
-      });
-    },
-  };
-
-  const undo = async () => {
-    if (!deleted) return;
-    await projectsRepo.restore(deleted);
-    setMessage(`Restored ${deleted.project.name}.`);
-    setDeleted(null);
-  };
-
-  const resetDemo = async () => {
-    const id = await projectsRepo.resetDemo();
-    setConfirmReset(false);
-    setMessage('The demo project is back as it first was.');
-    openProject(id);
-  };
-
+  const board = useProjectBoard(open, openProject, setShowArchived);
   const visible = (list ?? []).filter((s) => showArchived || !s.project.archived);
   const archivedCount = (list ?? []).filter((s) => s.project.archived).length;
 
@@ -111,61 +53,24 @@ export function ProjectsArea({
               />
               Show archived ({archivedCount})
             </label>
-            {confirmReset ? (
-              <span className="confirm" role="group" aria-label="Confirm demo reset">
-                Replace the demo project and its shortlist?{' '}
-                <button type="button" className="danger" onClick={() => void resetDemo()}>
-                  Reset demo
-                </button>{' '}
-                <button type="button" onClick={() => setConfirmReset(false)}>
-                  Keep it
-                </button>
-              </span>
-            ) : (
-              <button type="button" onClick={() => setConfirmReset(true)}>
-                Reset the demo…
-              </button>
-            )}
+            <DemoReset onReset={board.resetDemo} />
           </div>
         </header>
         <p className="muted">
           Every edit is saved in this browser as you make it. Projects open in any tab of this
           browser; a second tab sees changes as they happen.
         </p>
-        <div role="status" aria-live="polite" className="projects-status">
-          {deleted ? (
-            <span className="undo-bar">
-              Deleted <strong>{deleted.project.name}</strong> with {deleted.candidates.length}{' '}
-              candidate
-              {deleted.candidates.length === 1 ? '' : 's'} and {deleted.measurements.length}{' '}
-              measurement
-              {deleted.measurements.length === 1 ? '' : 's'}.{' '}
-              <button type="button" className="primary" onClick={() => void undo()}>
-                Undo delete
-              </button>
-            </span>
-          ) : (
-            message
-          )}
-        </div>
-        {list === undefined ? (
-          <p className="loading" role="status">
-            Reading your projects…
-          </p>
-        ) : visible.length === 0 ? (
-          <p>No projects yet. Start one below, or reset the demo.</p>
-        ) : (
-          <div className="project-board">
-            {visible.map((s) => (
-              <ProjectCard
-                key={s.project.id}
-                summary={s}
-                isOpen={s.project.id === currentProjectId}
-                actions={actions}
-              />
-            ))}
-          </div>
-        )}
+        <BoardStatus
+          deleted={board.deleted}
+          message={board.message}
+          onUndo={() => void board.undo()}
+        />
+        <ProjectBoard
+          list={list}
+          visible={visible}
+          currentProjectId={currentProjectId}
+          actions={board.actions}
+        />
       </section>
       <NewProjectForm
         onCreated={(id) => {
@@ -173,6 +78,39 @@ export function ProjectsArea({
         }}
       />
       {footer?.({ projects: (list ?? []).map((s) => s.project), currentProjectId, open })}
+    </div>
+  );
+}
+
+/** The cards, or what stands in their place while reading or when there are none. */
+function ProjectBoard({
+  list,
+  visible,
+  currentProjectId,
+  actions,
+}: {
+  list: ProjectSummary[] | undefined;
+  visible: ProjectSummary[];
+  currentProjectId: string | null;
+  actions: ProjectCardActions;
+}) {
+  if (list === undefined)
+    return (
+      <p className="loading" role="status">
+        Reading your projects…
+      </p>
+    );
+  if (visible.length === 0) return <p>No projects yet. Start one below, or reset the demo.</p>;
+  return (
+    <div className="project-board">
+      {visible.map((s) => (
+        <ProjectCard
+          key={s.project.id}
+          summary={s}
+          isOpen={s.project.id === currentProjectId}
+          actions={actions}
+        />
+      ))}
     </div>
   );
 }
