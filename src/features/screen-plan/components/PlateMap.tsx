@@ -1,10 +1,22 @@
-import { PLATE_LAYOUTS, WELL_OUTCOME_LABELS, wellPosition, type PlatePlan } from '@/chem';
-import type { ScreenPlanRecord } from '@/persistence/records';
+import {
+  PLATE_LAYOUTS,
+  WELL_OUTCOME_LABELS,
+  wellPosition,
+  type PlannedWell,
+  type PlatePlan,
+} from '@/chem';
+import type { ScreenPlanRecord, StoredWellOutcome } from '@/persistence/records';
 import { ionColour } from '../screen-plan-model';
 
 const CELL = 44;
 const PAD = 26;
 const ROWS = 'ABCDEFGH';
+
+/** The centre of a well in the drawing. */
+function wellCentre(plate: PlatePlan['plate'], well: string) {
+  const { row, column } = wellPosition(plate, well);
+  return { cx: PAD + column * CELL + CELL / 2, cy: PAD + row * CELL + CELL / 2 };
+}
 
 /**
  * The plate drawn from above: one circle per well, filled with its counter-ion's colour, labelled with
@@ -37,70 +49,26 @@ export function PlateMap({
         role="group"
         aria-label={`Plate map, ${plan.plate} wells`}
       >
-        {Array.from({ length: columns }, (_, c) => (
-          <text key={`c${c}`} x={PAD + c * CELL + CELL / 2} y={16} className="plate-axis">
-            {c + 1}
-          </text>
-        ))}
-        {Array.from({ length: rows }, (_, r) => (
-          <text key={`r${r}`} x={10} y={PAD + r * CELL + CELL / 2 + 4} className="plate-axis">
-            {ROWS[r]}
-          </text>
-        ))}
+        <PlateAxes rows={rows} columns={columns} />
         {plan.emptyWells.map((well) => {
-          const { row, column } = wellPosition(plan.plate, well);
+          const { cx, cy } = wellCentre(plan.plate, well);
           return (
-            <circle
-              key={well}
-              cx={PAD + column * CELL + CELL / 2}
-              cy={PAD + row * CELL + CELL / 2}
-              r={CELL / 2 - 4}
-              className="plate-well-empty"
-            />
+            <circle key={well} cx={cx} cy={cy} r={CELL / 2 - 4} className="plate-well-empty" />
           );
         })}
-        {plan.wells.map((w) => {
-          const { row, column } = wellPosition(plan.plate, w.well);
-          const cx = PAD + column * CELL + CELL / 2;
-          const cy = PAD + row * CELL + CELL / 2;
-          const o = outcomes[w.well];
-          const crystalline =
-            o?.outcome === 'crystalline-solid' || o?.outcome === 'new-crystalline-form';
-          const label = `${w.well}: ${ionNames[w.counterIonId] ?? w.counterIonId} in ${w.solventName}${o ? `, ${WELL_OUTCOME_LABELS[o.outcome]}` : ''}`;
-          return (
-            <g
-              key={w.well}
-              className={`plate-well${selected === w.well ? ' is-selected' : ''}`}
-              role="button"
-              tabIndex={0}
-              aria-label={label}
-              onClick={() => onSelect(w.well)}
-              onKeyDown={(e) => {
-                if (e.key === 'Enter' || e.key === ' ') {
-                  e.preventDefault();
-                  onSelect(w.well);
-                }
-              }}
-            >
-              <title>{label}</title>
-              <circle
-                cx={cx}
-                cy={cy}
-                r={CELL / 2 - 4}
-                fill={colourOf(w.counterIonId)}
-                strokeDasharray={ionOrder.indexOf(w.counterIonId) >= 8 ? '3 2' : undefined}
-              />
-              <text x={cx} y={cy + 4} className="plate-well-label">
-                {w.well}
-              </text>
-              {o ? (
-                <text x={cx + 12} y={cy - 9} className="plate-well-mark">
-                  {crystalline ? '★' : '•'}
-                </text>
-              ) : null}
-            </g>
-          );
-        })}
+        {plan.wells.map((w) => (
+          <PlateWell
+            key={w.well}
+            plate={plan.plate}
+            well={w}
+            outcome={outcomes[w.well]}
+            ionName={ionNames[w.counterIonId] ?? w.counterIonId}
+            colour={colourOf(w.counterIonId)}
+            dashed={ionOrder.indexOf(w.counterIonId) >= 8}
+            selected={selected === w.well}
+            onSelect={onSelect}
+          />
+        ))}
       </svg>
       <figcaption>
         <ul className="plate-legend">
@@ -118,5 +86,80 @@ export function PlateMap({
         </ul>
       </figcaption>
     </figure>
+  );
+}
+
+/** Column numbers along the top, row letters down the side. */
+function PlateAxes({ rows, columns }: { rows: number; columns: number }) {
+  return (
+    <>
+      {Array.from({ length: columns }, (_, c) => (
+        <text key={`c${c}`} x={PAD + c * CELL + CELL / 2} y={16} className="plate-axis">
+          {c + 1}
+        </text>
+      ))}
+      {Array.from({ length: rows }, (_, r) => (
+        <text key={`r${r}`} x={10} y={PAD + r * CELL + CELL / 2 + 4} className="plate-axis">
+          {ROWS[r]}
+        </text>
+      ))}
+    </>
+  );
+}
+
+/** One planned well: a button in the drawing, its colour, name and recorded-outcome mark. */
+function PlateWell({
+  plate,
+  well: w,
+  outcome: o,
+  ionName,
+  colour,
+  dashed,
+  selected,
+  onSelect,
+}: {
+  plate: PlatePlan['plate'];
+  well: PlannedWell;
+  outcome: StoredWellOutcome | undefined;
+  ionName: string;
+  colour: string;
+  dashed: boolean;
+  selected: boolean;
+  onSelect: (well: string) => void;
+}) {
+  const { cx, cy } = wellCentre(plate, w.well);
+  const crystalline = o?.outcome === 'crystalline-solid' || o?.outcome === 'new-crystalline-form';
+  const label = `${w.well}: ${ionName} in ${w.solventName}${o ? `, ${WELL_OUTCOME_LABELS[o.outcome]}` : ''}`;
+  return (
+    <g
+      className={`plate-well${selected ? ' is-selected' : ''}`}
+      role="button"
+      tabIndex={0}
+      aria-label={label}
+      onClick={() => onSelect(w.well)}
+      onKeyDown={(e) => {
+        if (e.key === 'Enter' || e.key === ' ') {
+          e.preventDefault();
+          onSelect(w.well);
+        }
+      }}
+    >
+      <title>{label}</title>
+      <circle
+        cx={cx}
+        cy={cy}
+        r={CELL / 2 - 4}
+        fill={colour}
+        strokeDasharray={dashed ? '3 2' : undefined}
+      />
+      <text x={cx} y={cy + 4} className="plate-well-label">
+        {w.well}
+      </text>
+      {o ? (
+        <text x={cx + 12} y={cy - 9} className="plate-well-mark">
+          {crystalline ? '★' : '•'}
+        </text>
+      ) : null}
+    </g>
   );
 }
