@@ -51,6 +51,141 @@ export interface BuildSheetInput {
   } | null;
 }
 
+/** What every step of the sheet reads: the screening ranked with the project's weights. */
+interface RankedScreening {
+  project: ProjectRecord;
+  screening: ProjectScreening;
+  ranked: ReturnType<typeof rankCandidates>;
+  byId: Map<string, ScreenRow>;
+  labelOf: (row: ScreenRow) => string;
+}
+
+function rankScreening(project: ProjectRecord, screening: ProjectScreening): RankedScreening {
+  const { screen } = screening;
+  const ranked = rankCandidates(
+    screen.rows.map((r) => ({ id: r.id, criteria: r.criteria, error: r.error })),
+    screening.settings.weights,
+  );
+  const byId = new Map(screen.rows.map((r) => [r.id, r]));
+  // The core's salt name (saltLabel, e.g. "hydrochloride (1:1)"), as the Ranking and the CLI write it.
+  const labelOf = (row: ScreenRow) => `${project.compound.name} ${row.label}`;
+  return { project, screening, ranked, byId, labelOf };
+}
+
+/** The screened rows in ranked order (ids without a screen row skipped). */
+function rankedRows({ ranked, byId }: RankedScreening): ScreenRow[] {
+  return ranked.map((r) => byId.get(r.id)).filter((r): r is ScreenRow => !!r);
+}
+
+/** A row's reasons in the sheet's words, with why it was not screened or has no enthalpy. */
+function sheetReasons(row: ScreenRow, screening: ProjectScreening): string[] {
+  const reasons = row.reasons.map(
+    (r) =>
+      `${REASON_WORD[r.kind] ?? r.kind}: ${r.text.replace(/^(keeps|drops|watch|note|measured):\s*/, '')}`,
+  );
+  if (row.error) reasons.unshift(`not screened: ${row.error}`);
+  const energetics = screening.energetics[row.id];
+  if (energetics && !energetics.thermo && energetics.reason)
+    reasons.push(`no enthalpy estimate: ${energetics.reason}`);
+  return reasons;
+}
+
+/** One row per shortlisted candidate in rank order; the unscreenable ones last, with the reason. */
+function sheetRows(rs: RankedScreening, pTop3Of: Map<string, number>): SheetRow[] {
+  const { project, screening, ranked, byId, labelOf } = rs;
+  const rows: SheetRow[] = [];
+  for (const rr of ranked) {
+    const row = byId.get(rr.id);
+    if (!row) continue;
+    rows.push({
+      id: row.id,
+      rank: rr.rank,
+      label: labelOf(row),
+      cells: rowCells(row, rr.score, screening, row.error ? null : (pTop3Of.get(row.id) ?? null)),
+      flags: row.flags.map((f) => f.text),
+      reasons: sheetReasons(row, screening),
+      worstExcipient: sheetWorstExcipient(row),
+    });
+  }
+  for (const m of screening.missing) {
+    rows.push({
+      id: m.candidateId,
+      rank: null,
+      label: `${project.compound.name} ${screening.ionNames[m.candidateId] ?? m.ionId}`,
+      cells: {},
+      flags: ['not screened'],
+      reasons: [m.reason],
+    });
+  }
+  return rows;
+}
+
+/** The pH–solubility picture: the free form and the best-ranked salts (at most MAX_CHART_SALTS). */
+function solubilityPicture(rs: RankedScreening) {
+  const { project, screening, labelOf } = rs;
+  const { freeForm } = screening.screen;
+  const chartRows = rankedRows(rs)
+    .filter((r) => !r.error && r.profile.length > 0)
+    .slice(0, MAX_CHART_SALTS);
+  const series: SolubilitySeries[] = [];
+  if (freeForm.profile.length) {
+    series.push({
+      id: 'free-form',
+      label: `${project.compound.name} free ${project.compound.kind}`,
+      kind: 'free-form',
+      points: freeForm.profile,
+    });
+  }
+  for (const r of chartRows) {
+    series.push({
+      id: r.id,
+      label: labelOf(r),
+      kind: 'salt',
+      points: r.profile.map((p) => ({ pH: p.pH, solubilityMgPerMl: p.solubilityMgPerMl })),
+      phMax: r.phMax,
+      estimated: r.kspOrigin !== 'measured',
+    });
+  }
+  const dose = project.compound.doseMg;
+  const picture = series.length
+    ? { series, doseLineMgPerMl: dose !== null ? dose / ICH_M9_VOLUME_ML : null }
+    : null;
+  return { picture, chartedSalts: chartRows.length };
+}
+
+/** The screen's assumptions and the sheet's own notes (how P(top 3) was drawn, what the chart omits). */
+function sheetNotes(
+  screening: ProjectScreening,
+  robustness: BuildSheetInput['robustness'],
+  chartedSalts: number,
+): string[] {
+  const { screen } = screening;
+  const notes = [...screen.assumptions, ...screening.notes];
+  notes.push(
+    robustness
+      ? `P(top 3): share of ${robustness.iterations} Monte Carlo draws (seed ${robustness.seed}) in which the candidate ranks in the top three when pKa, S₀ and each K_sp move within their stated 1σ, with the weights above.`
+      : 'P(top 3) was not computed for this sheet (rank robustness unavailable).',
+  );
+  if (chartedSalts < screen.rows.filter((r) => !r.error).length) {
+    notes.push(
+      `The solubility picture shows the ${MAX_CHART_SALTS} best-ranked salts; the table lists all.`,
+    );
+  }
+  return notes;
+}
+
+/** The free form's row: read against, never ranked. */
+function freeFormRow(project: ProjectRecord, screening: ProjectScreening): SheetRow {
+  return {
+    id: 'free-form',
+    rank: null,
+    label: `${project.compound.name} free ${project.compound.kind} (no salt; read against, not ranked)`,
+    cells: freeFormCells(screening, project.compound.doseMg),
+    flags: screening.screen.freeForm.flags.map((f) => f.text),
+    reasons: [],
+  };
+}
+
 /**
  * Turn a project's screening into the sheet model: rank with the project's weights (the same
  * `rankCandidates` the Ranking area uses), one row per shortlisted candidate — unscreenable ones
@@ -65,111 +200,20 @@ export function buildSheetModel({
   robustness = null,
 }: BuildSheetInput): SheetModel {
   const pTop3Of = new Map((robustness?.results ?? []).map((r) => [r.id, r.pTop3]));
-  const { screen } = screening;
-  const weights = screening.settings.weights;
-  const ranked = rankCandidates(
-    screen.rows.map((r) => ({ id: r.id, criteria: r.criteria, error: r.error })),
-    weights,
-  );
-  const byId = new Map(screen.rows.map((r) => [r.id, r]));
-  const drugName = project.compound.name;
-  // The core's salt name (saltLabel, e.g. "hydrochloride (1:1)"), as the Ranking and the CLI write it.
-  const labelOf = (row: ScreenRow) => `${drugName} ${row.label}`;
-
-  const rows: SheetRow[] = [];
-  for (const rr of ranked) {
-    const row = byId.get(rr.id);
-    if (!row) continue;
-    const reasons = row.reasons.map(
-      (r) =>
-        `${REASON_WORD[r.kind] ?? r.kind}: ${r.text.replace(/^(keeps|drops|watch|note|measured):\s*/, '')}`,
-    );
-    if (row.error) reasons.unshift(`not screened: ${row.error}`);
-    const energetics = screening.energetics[row.id];
-    if (energetics && !energetics.thermo && energetics.reason)
-      reasons.push(`no enthalpy estimate: ${energetics.reason}`);
-    rows.push({
-      id: row.id,
-      rank: rr.rank,
-      label: labelOf(row),
-      cells: rowCells(row, rr.score, screening, row.error ? null : (pTop3Of.get(row.id) ?? null)),
-      flags: row.flags.map((f) => f.text),
-      reasons,
-      worstExcipient: sheetWorstExcipient(row),
-    });
-  }
-  for (const m of screening.missing) {
-    rows.push({
-      id: m.candidateId,
-      rank: null,
-      label: `${drugName} ${screening.ionNames[m.candidateId] ?? m.ionId}`,
-      cells: {},
-      flags: ['not screened'],
-      reasons: [m.reason],
-    });
-  }
-
-  const chartRows = ranked
-    .map((r) => byId.get(r.id))
-    .filter((r): r is ScreenRow => !!r && !r.error && r.profile.length > 0)
-    .slice(0, MAX_CHART_SALTS);
-  const series: SolubilitySeries[] = [];
-  if (screen.freeForm.profile.length) {
-    series.push({
-      id: 'free-form',
-      label: `${drugName} free ${project.compound.kind}`,
-      kind: 'free-form',
-      points: screen.freeForm.profile,
-    });
-  }
-  for (const r of chartRows) {
-    series.push({
-      id: r.id,
-      label: labelOf(r),
-      kind: 'salt',
-      points: r.profile.map((p) => ({ pH: p.pH, solubilityMgPerMl: p.solubilityMgPerMl })),
-      phMax: r.phMax,
-      estimated: r.kspOrigin !== 'measured',
-    });
-  }
-  const dose = project.compound.doseMg;
-
-  const energyCycles = ranked
-    .map((r) => byId.get(r.id))
-    .filter((r): r is ScreenRow => !!r)
-    .map((r) => energyCycle(r, labelOf(r), screening))
-    .filter((c): c is EnergyCycle => c !== null);
-
-  const notes = [...screen.assumptions, ...screening.notes];
-  notes.push(
-    robustness
-      ? `P(top 3): share of ${robustness.iterations} Monte Carlo draws (seed ${robustness.seed}) in which the candidate ranks in the top three when pKa, S₀ and each K_sp move within their stated 1σ, with the weights above.`
-      : 'P(top 3) was not computed for this sheet (rank robustness unavailable).',
-  );
-  if (chartRows.length < screen.rows.filter((r) => !r.error).length) {
-    notes.push(
-      `The solubility picture shows the ${MAX_CHART_SALTS} best-ranked salts; the table lists all.`,
-    );
-  }
-
+  const rs = rankScreening(project, screening);
+  const { picture, chartedSalts } = solubilityPicture(rs);
+  const inOrder = rankedRows(rs);
   return {
     projectName: project.name,
-    compound: { name: drugName, facts: compoundFacts(project, screening) },
+    compound: { name: project.compound.name, facts: compoundFacts(project, screening) },
     generatedAt,
     appVersion,
     settings: settingsList(screening),
     weights: weightsList(screening),
     columns: [...SHEET_COLUMNS],
-    rows,
-    freeForm: {
-      id: 'free-form',
-      rank: null,
-      label: `${drugName} free ${project.compound.kind} (no salt; read against, not ranked)`,
-      cells: freeFormCells(screening, project.compound.doseMg),
-      flags: screen.freeForm.flags.map((f) => f.text),
-      reasons: [],
-    },
-    separation: separationSummary(screen, weights),
+    rows: sheetRows(rs, pTop3Of),
+    freeForm: freeFormRow(project, screening),
+    separation: separationSummary(screening.screen, screening.settings.weights),
     confidence: validation.map((m) => ({
       label: `${m.label}${m.group ? ` — ${m.group}` : ''}`,
       n: m.n,
@@ -177,15 +221,11 @@ export function buildSheetModel({
       maxAbsPercentError: m.maxAbsPercentError,
       signedBiasPercent: m.signedBiasPercent,
     })),
-    notes,
-    solubility: series.length
-      ? { series, doseLineMgPerMl: dose !== null ? dose / ICH_M9_VOLUME_ML : null }
-      : null,
-    energyCycles,
-    excipientMatrix: sheetExcipientMatrix(
-      screening.settings.excipients,
-      ranked.map((r) => byId.get(r.id)).filter((r): r is ScreenRow => !!r),
-      labelOf,
-    ),
+    notes: sheetNotes(screening, robustness, chartedSalts),
+    solubility: picture,
+    energyCycles: inOrder
+      .map((r) => energyCycle(r, rs.labelOf(r), screening))
+      .filter((c): c is EnergyCycle => c !== null),
+    excipientMatrix: sheetExcipientMatrix(screening.settings.excipients, inOrder, rs.labelOf),
   };
 }
