@@ -83,6 +83,102 @@ function AreaContent({ area, project }: { area: AreaId; project: ProjectRecord }
   }
 }
 
+/** The area follows the address's hash (back, forward, a pasted link). */
+function useHashNavigation(goTo: (area: AreaId) => void) {
+  useEffect(() => {
+    const onHash = () => goTo(areaFromHash(window.location.hash));
+    window.addEventListener('hashchange', onHash);
+    return () => window.removeEventListener('hashchange', onHash);
+  }, [goTo]);
+}
+
+/** The brand, the open project's name, the offline state, the sheet and the cautions. */
+function TopBar({
+  project,
+  onCautions,
+}: {
+  project: ProjectRecord | undefined;
+  onCautions: () => void;
+}) {
+  return (
+    <header className="topbar">
+      <div className="brand">
+        <span className="brand-mark" aria-hidden="true" />
+        <span className="brand-name">Saltsmith</span>
+        <span className="brand-tag">salt-selection workbench</span>
+      </div>
+      <div className="topbar-project" aria-live="polite">
+        {project ? (
+          <>
+            <span className="muted">Project:</span> <strong>{project.name}</strong>
+          </>
+        ) : null}
+      </div>
+      <OfflineStatus />
+      {project ? <OpenSheetButton className="sheet-open-button" /> : null}
+      <button type="button" className="caution-button" onClick={onCautions}>
+        Cautions
+      </button>
+    </header>
+  );
+}
+
+/** One link per area; the current one is marked for assistive technology. */
+function AreaNav({ area, goTo }: { area: AreaId; goTo: (area: AreaId) => void }) {
+  return (
+    <nav className="areas" aria-label="Workbench areas">
+      <ul>
+        {AREAS.map((a) => (
+          <li key={a.id}>
+            <a
+              href={`#/${a.id}`}
+              aria-current={a.id === area ? 'page' : undefined}
+              onClick={(e) => {
+                e.preventDefault();
+                goTo(a.id);
+              }}
+            >
+              {a.label}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
+
+/** The Projects board (also when no project is open), or the open project's area. */
+function MainContent({
+  area,
+  project,
+  loading,
+}: {
+  area: AreaId;
+  project: ProjectRecord | undefined;
+  loading: boolean;
+}) {
+  if (area === 'projects' || (!loading && !project))
+    return (
+      <ProjectsArea
+        currentProjectId={project?.id ?? null}
+        footer={({ projects, currentProjectId, open }) => (
+          <ProjectFilesPanel
+            projects={projects}
+            currentProjectId={currentProjectId}
+            onImported={(outcome) => open(outcome.projectId)}
+          />
+        )}
+      />
+    );
+  if (loading || !project)
+    return (
+      <p className="loading" role="status">
+        Opening your project…
+      </p>
+    );
+  return <AreaContent area={area} project={project} />;
+}
+
 /** The workbench shell: header, area navigation, cautions, and the open project's area. */
 export function App() {
   const area = useNavigationStore((s) => s.area);
@@ -92,12 +188,7 @@ export function App() {
 
   // Edits still on their way to IndexedDB are copied aside when the page is hidden or goes away.
   useEffect(() => guardUnsavedEdits(), []);
-
-  useEffect(() => {
-    const onHash = () => goTo(areaFromHash(window.location.hash));
-    window.addEventListener('hashchange', onHash);
-    return () => window.removeEventListener('hashchange', onHash);
-  }, [goTo]);
+  useHashNavigation(goTo);
 
   return (
     <div className="shell">
@@ -105,62 +196,10 @@ export function App() {
         Skip to content
       </a>
       <StorageErrorBanner />
-      <header className="topbar">
-        <div className="brand">
-          <span className="brand-mark" aria-hidden="true" />
-          <span className="brand-name">Saltsmith</span>
-          <span className="brand-tag">salt-selection workbench</span>
-        </div>
-        <div className="topbar-project" aria-live="polite">
-          {project ? (
-            <>
-              <span className="muted">Project:</span> <strong>{project.name}</strong>
-            </>
-          ) : null}
-        </div>
-        <OfflineStatus />
-        {project ? <OpenSheetButton className="sheet-open-button" /> : null}
-        <button type="button" className="caution-button" onClick={() => setCautionsOpen(true)}>
-          Cautions
-        </button>
-      </header>
-      <nav className="areas" aria-label="Workbench areas">
-        <ul>
-          {AREAS.map((a) => (
-            <li key={a.id}>
-              <a
-                href={`#/${a.id}`}
-                aria-current={a.id === area ? 'page' : undefined}
-                onClick={(e) => {
-                  e.preventDefault();
-                  goTo(a.id);
-                }}
-              >
-                {a.label}
-              </a>
-            </li>
-          ))}
-        </ul>
-      </nav>
+      <TopBar project={project} onCautions={() => setCautionsOpen(true)} />
+      <AreaNav area={area} goTo={goTo} />
       <main id="main" className="content" tabIndex={-1}>
-        {area === 'projects' || (!loading && !project) ? (
-          <ProjectsArea
-            currentProjectId={project?.id ?? null}
-            footer={({ projects, currentProjectId, open }) => (
-              <ProjectFilesPanel
-                projects={projects}
-                currentProjectId={currentProjectId}
-                onImported={(outcome) => open(outcome.projectId)}
-              />
-            )}
-          />
-        ) : loading || !project ? (
-          <p className="loading" role="status">
-            Opening your project…
-          </p>
-        ) : (
-          <AreaContent area={area} project={project} />
-        )}
+        <MainContent area={area} project={project} loading={loading} />
       </main>
       <footer className="footer">
         {/* Once per screen: the Ranking area carries the cautions in full beside the ranking. */}
