@@ -171,6 +171,80 @@ async function addImportedPlan(
 }
 
 /**
+ * Where the file lands: a fresh project id, or — replacing — the existing project's id and creation
+ * date, with everything it held removed (inside the caller's transaction, so a failure undoes it).
+ */
+async function clearTarget(
+  file: ProjectFile,
+  target: ImportMode,
+): Promise<{ projectId: string; createdAt: string }> {
+  if (target.mode === 'new') return { projectId: newId('prj'), createdAt: file.project.createdAt };
+  const db = getDb();
+  const existing = await db.projects.get(target.projectId);
+  if (!existing) throw new Error('The project to replace no longer exists; nothing was imported.');
+  const projectId = existing.id;
+  await db.measurements.where('projectId').equals(projectId).delete();
+  await db.candidates.where('projectId').equals(projectId).delete();
+  await db.customIons.where('projectId').equals(projectId).delete();
+  await db.screenPlans.where('projectId').equals(projectId).delete();
+  return { projectId, createdAt: existing.createdAt };
+}
+
+/** The file's shortlist and bench data under fresh ids, each measurement kept with its candidate. */
+function renumberedRecords(
+  file: ProjectFile,
+  projectId: string,
+  ionIdMap: ReadonlyMap<string, string>,
+): { candidates: CandidateRecord[]; measurements: MeasurementRecord[] } {
+  const candidateIdMap = new Map<string, string>();
+  const candidates: CandidateRecord[] = file.candidates.map((c) => {
+    const id = newId('cand');
+    candidateIdMap.set(c.id, id);
+    return candidateRecordSchema.parse({
+      ...c,
+      id,
+      schemaVersion: RECORD_SCHEMA_VERSION,
+      projectId,
+      ionId: ionIdMap.get(c.ionId) ?? c.ionId,
+    });
+  });
+  const measurements: MeasurementRecord[] = file.measurements.map((m) =>
+    measurementRecordSchema.parse({
+      ...m,
+      id: newId('meas'),
+      schemaVersion: RECORD_SCHEMA_VERSION,
+      projectId,
+      candidateId: candidateIdMap.get(m.candidateId),
+    }),
+  );
+  return { candidates, measurements };
+}
+
+/** The project record: a name no other project has ("… (imported)"), stamped as written now. */
+async function importedProjectRecord(
+  file: ProjectFile,
+  projectId: string,
+  createdAt: string,
+): Promise<ProjectRecord> {
+  const otherNames = (await getDb().projects.toArray())
+    .filter((p) => p.id !== projectId)
+    .map((p) => p.name);
+  return projectRecordSchema.parse({
+    id: projectId,
+    schemaVersion: RECORD_SCHEMA_VERSION,
+    name: importedProjectName(file.project.name, otherNames),
+    createdAt,
+    updatedAt: nowIso(),
+    archived: false,
+    isDemo: false,
+    compound: file.project.compound,
+    settings: file.project.settings,
+    // Imported now: a write kept aside from before (a replay) is older than every field.
+    stampFloor: nextStamp(),
+  });
+}
+
+/**
  * Write a validated project file into the database in ONE transaction: either every record lands or
  * none does. Candidate, measurement and project-scoped ion ids are fresh, so a file can be imported
  * beside the project it came from; custom ions are placed by {@link placeImportedIons}.
@@ -184,63 +258,10 @@ export async function writeProjectFile(
     'rw',
     [db.projects, db.candidates, db.measurements, db.customIons, db.screenPlans],
     async () => {
-      const now = nowIso();
-      let projectId: string;
-      let createdAt = file.project.createdAt;
-      if (target.mode === 'replace') {
-        const existing = await db.projects.get(target.projectId);
-        if (!existing)
-          throw new Error('The project to replace no longer exists; nothing was imported.');
-        projectId = existing.id;
-        createdAt = existing.createdAt;
-        await db.measurements.where('projectId').equals(projectId).delete();
-        await db.candidates.where('projectId').equals(projectId).delete();
-        await db.customIons.where('projectId').equals(projectId).delete();
-        await db.screenPlans.where('projectId').equals(projectId).delete();
-      } else {
-        projectId = newId('prj');
-      }
-
+      const { projectId, createdAt } = await clearTarget(file, target);
       const { ions, ionIdMap } = await placeImportedIons(file.customIons, projectId);
-
-      const candidateIdMap = new Map<string, string>();
-      const candidates: CandidateRecord[] = file.candidates.map((c) => {
-        const id = newId('cand');
-        candidateIdMap.set(c.id, id);
-        return candidateRecordSchema.parse({
-          ...c,
-          id,
-          schemaVersion: RECORD_SCHEMA_VERSION,
-          projectId,
-          ionId: ionIdMap.get(c.ionId) ?? c.ionId,
-        });
-      });
-      const measurements: MeasurementRecord[] = file.measurements.map((m) =>
-        measurementRecordSchema.parse({
-          ...m,
-          id: newId('meas'),
-          schemaVersion: RECORD_SCHEMA_VERSION,
-          projectId,
-          candidateId: candidateIdMap.get(m.candidateId),
-        }),
-      );
-      const project: ProjectRecord = projectRecordSchema.parse({
-        id: projectId,
-        schemaVersion: RECORD_SCHEMA_VERSION,
-        name: importedProjectName(
-          file.project.name,
-          (await db.projects.toArray()).filter((p) => p.id !== projectId).map((p) => p.name),
-        ),
-        createdAt,
-        updatedAt: now,
-        archived: false,
-        isDemo: false,
-        compound: file.project.compound,
-        settings: file.project.settings,
-        // Imported now: a write kept aside from before (a replay) is older than every field.
-        stampFloor: nextStamp(),
-      });
-
+      const { candidates, measurements } = renumberedRecords(file, projectId, ionIdMap);
+      const project = await importedProjectRecord(file, projectId, createdAt);
       await db.projects.put(project);
       if (ions.length) await db.customIons.bulkAdd(ions);
       if (candidates.length) await db.candidates.bulkAdd(candidates);

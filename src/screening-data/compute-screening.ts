@@ -1,21 +1,14 @@
 import {
   COUNTER_IONS,
-  drugIon as deriveDrugIon,
-  drugThermoIon,
-  estimateSaltThermo,
   mergeLibrary,
-  parseStructure,
   screenCompound,
   type CounterIon,
-  type LibraryIon,
-  type Stoichiometry,
   type DrugIon,
+  type LibraryIon,
   type ParsedStructure,
-  type SaltThermoResult,
   type ScreenResult,
   type ScreeningCandidate,
   type ScreeningSettings,
-  type ThermoIon,
 } from '@/chem';
 import type {
   CandidateRecord,
@@ -23,8 +16,15 @@ import type {
   MeasurementRecord,
   ProjectRecord,
 } from '@/persistence/records';
-import { ionIdAsWords } from './candidate-label';
-import { counterThermoIon, inHouseIonDescriptors, stoichiometryFor } from './candidate-inputs';
+import { inHouseIonDescriptors } from './candidate-inputs';
+import {
+  candidateEnergetics,
+  measurementsByCandidate,
+  resolveCandidate,
+  screeningCandidate,
+  type CandidateEnergetics,
+} from './candidate-screening';
+import { drugIonOf, drugThermoOf, readStructure } from './drug-inputs';
 import { screeningSettingsOf } from './screening-settings';
 
 /** What the screening of a project starts from: the stored records, nothing else. */
@@ -35,16 +35,7 @@ export interface ScreeningInputs {
   customIons: readonly CustomIonRecord[];
 }
 
-/** One candidate's thermochemical cycle (for the energy picture), or why there is none. */
-export interface CandidateEnergetics {
-  candidateId: string;
-  thermo: SaltThermoResult | null;
-  reason: string | null;
-  cationLabel: string;
-  anionLabel: string;
-  cationsPerFormula: number;
-  anionsPerFormula: number;
-}
+export type { CandidateEnergetics } from './candidate-screening';
 
 /** The screen of one project: the core's result plus what the app needs to show it. */
 export interface ProjectScreening {
@@ -65,6 +56,61 @@ export interface ProjectScreening {
   notes: string[];
 }
 
+/** The shortlist resolved for the screen: the core's inputs and what the app shows beside them. */
+type PreparedShortlist = Pick<
+  ProjectScreening,
+  'energetics' | 'ionNames' | 'counterIons' | 'missing'
+> & { screening: ScreeningCandidate[] };
+
+/**
+ * Resolve every shortlisted candidate against the library, estimate its salt's thermochemical
+ * cycle and build the core's input; candidates that cannot be screened are listed with the reason.
+ */
+async function prepareShortlist(
+  inputs: ScreeningInputs,
+  dIon: DrugIon,
+  notes: string[],
+): Promise<PreparedShortlist> {
+  const { project, candidates, measurements, customIons } = inputs;
+  const library = mergeLibrary(COUNTER_IONS, customIons, project.id).ions;
+  const byId = new Map(library.map((i) => [i.id, i]));
+  const inHouseDescriptors = await inHouseIonDescriptors(
+    candidates.map((c) => byId.get(c.ionId)).filter((i): i is LibraryIon => i !== undefined),
+    notes,
+  );
+  const drugThermo = drugThermoOf(dIon);
+  const byCandidate = measurementsByCandidate(measurements);
+  const out: PreparedShortlist = {
+    energetics: {},
+    ionNames: {},
+    counterIons: {},
+    missing: [],
+    screening: [],
+  };
+  for (const c of candidates) {
+    const r = resolveCandidate(c, byId.get(c.ionId), dIon.charge, project.compound.kind);
+    out.ionNames[c.id] = r.name;
+    if (r.ion) out.counterIons[c.id] = r.ion;
+    if (!r.ok) {
+      out.missing.push({ candidateId: c.id, ionId: c.ionId, reason: r.reason });
+      continue;
+    }
+    const energetics = candidateEnergetics(c.id, r.ion, r.st, dIon.charge, drugThermo);
+    out.energetics[c.id] = energetics;
+    out.screening.push(
+      screeningCandidate(
+        c,
+        r.ion,
+        r.st,
+        inHouseDescriptors[r.ion.id],
+        byCandidate.get(c.id) ?? [],
+        energetics.thermo,
+      ),
+    );
+  }
+  return out;
+}
+
 /**
  * Screen a project: parse the structure (openchemlib, loaded lazily) when a SMILES is given, derive
  * the drug ion, resolve the shortlist against the library (bundled + in-house + per-project edits),
@@ -72,149 +118,17 @@ export interface ProjectScreening {
  * ChemInputError when the compound cannot be screened (its message names the field).
  */
 export async function computeProjectScreening(inputs: ScreeningInputs): Promise<ProjectScreening> {
-  const { project, candidates, measurements, customIons } = inputs;
+  const { project } = inputs;
   const compound = project.compound;
   const notes: string[] = [];
-  let structure: ParsedStructure | null = null;
-  if (compound.smiles.trim()) {
-    try {
-      structure = await parseStructure(compound.smiles);
-    } catch (err) {
-      if (!compound.formula.trim()) throw err;
-      notes.push(
-        `The SMILES could not be read (${err instanceof Error ? err.message : String(err)}); the molecular formula is used.`,
-      );
-    }
-  }
-  const dIon = deriveDrugIon(compound, structure ?? undefined);
-  notes.push(...dIon.notes);
-  if (!dIon.ringsKnown)
-    notes.push(
-      'Ring counts unknown (formula only): the drug ion’s volume estimate ignores ring corrections.',
-    );
-
+  const structure = await readStructure(compound, notes);
+  const dIon = drugIonOf(compound, structure, notes);
   const settings = screeningSettingsOf(project);
-  const library = mergeLibrary(COUNTER_IONS, customIons, project.id).ions;
-  const byId = new Map(library.map((i) => [i.id, i]));
-  const inHouseDescriptors = await inHouseIonDescriptors(
-    candidates.map((c) => byId.get(c.ionId)).filter((i): i is LibraryIon => i !== undefined),
+  const { screening, energetics, ionNames, counterIons, missing } = await prepareShortlist(
+    inputs,
+    dIon,
     notes,
   );
-  let drugThermo: ThermoIon | null = null;
-  let drugThermoReason: string | null = null;
-  try {
-    drugThermo = drugThermoIon({ formula: dIon.formula, charge: dIon.charge, rings: dIon.rings });
-  } catch (err) {
-    drugThermoReason = err instanceof Error ? err.message : String(err);
-  }
-
-  const byCandidate = new Map<string, MeasurementRecord[]>();
-  for (const m of measurements) {
-    const list = byCandidate.get(m.candidateId) ?? [];
-    list.push(m);
-    byCandidate.set(m.candidateId, list);
-  }
-
-  const energetics: Record<string, CandidateEnergetics> = {};
-  const ionNames: Record<string, string> = {};
-  const counterIons: Record<string, CounterIon> = {};
-  const missing: ProjectScreening['missing'] = [];
-  const screening: ScreeningCandidate[] = [];
-  const drugIsCation = dIon.charge > 0;
-  for (const c of candidates) {
-    const ion = byId.get(c.ionId);
-    if (!ion) {
-      missing.push({
-        candidateId: c.id,
-        ionId: c.ionId,
-        reason: 'not in the counter-ion library (an in-house ion that was deleted?)',
-      });
-      ionNames[c.id] = ionIdAsWords(c.ionId);
-      continue;
-    }
-    ionNames[c.id] = ion.name;
-    counterIons[c.id] = ion;
-    if ((ion.kind === 'anion') !== drugIsCation) {
-      missing.push({
-        candidateId: c.id,
-        ionId: c.ionId,
-        reason: `${ion.name} is ${ion.kind === 'anion' ? 'an anion' : 'a cation'}: it cannot make a salt with this ${compound.kind}`,
-      });
-      continue;
-    }
-    let st: Stoichiometry & { label: string };
-    try {
-      st = stoichiometryFor(ion, c, dIon.charge);
-    } catch (err) {
-      missing.push({
-        candidateId: c.id,
-        ionId: c.ionId,
-        reason: err instanceof Error ? err.message : String(err),
-      });
-      continue;
-    }
-    const p = drugIsCation ? st.drugPerSalt : st.counterIonPerSalt;
-    const q = drugIsCation ? st.counterIonPerSalt : st.drugPerSalt;
-    let thermo: SaltThermoResult | null = null;
-    let reason: string | null = drugThermoReason;
-    const xLabel = ion.name;
-    if (drugThermo) {
-      try {
-        const x = counterThermoIon(ion, st);
-        thermo = estimateSaltThermo({
-          cation: drugIsCation ? drugThermo : x,
-          anion: drugIsCation ? x : drugThermo,
-          cationsPerFormula: p,
-          anionsPerFormula: q,
-          method: 'auto',
-        });
-        if (
-          ![thermo.latticeEnthalpyKJ, thermo.solutionEnthalpyKJ].every(
-            (e) => Number.isFinite(e.value) && Number.isFinite(e.uncertainty),
-          )
-        ) {
-          thermo = null;
-          reason = 'the thermochemistry gave no finite result';
-        }
-      } catch (err) {
-        reason = err instanceof Error ? err.message : String(err);
-      }
-    }
-    energetics[c.id] = {
-      candidateId: c.id,
-      thermo,
-      reason,
-      cationLabel: drugIsCation ? 'drug ion' : xLabel,
-      anionLabel: drugIsCation ? xLabel : 'drug ion',
-      cationsPerFormula: p,
-      anionsPerFormula: q,
-    };
-    screening.push({
-      id: c.id,
-      counterIon: ion,
-      ...(inHouseDescriptors[ion.id] ? { counterIonDescriptors: inHouseDescriptors[ion.id] } : {}),
-      stoichiometry: {
-        label: st.label,
-        drugPerSalt: st.drugPerSalt,
-        counterIonPerSalt: st.counterIonPerSalt,
-        ionCharge: st.ionCharge,
-        ionMolarMassGPerMol: st.ionMolarMassGPerMol,
-        pKaIndex: st.pKaIndex,
-      },
-      hydrateWater: c.hydrateWater,
-      measurements: (byCandidate.get(c.id) ?? []).map((m) => ({
-        kind: m.kind,
-        value: m.value,
-        unit: m.unit,
-        ph: m.ph,
-        temperatureK: m.temperatureK,
-        medium: m.medium,
-        text: m.text,
-        solidForm: m.solidForm ?? null,
-      })),
-      solutionEnthalpyKJ: thermo?.solutionEnthalpyKJ ?? null,
-    });
-  }
 
   const screen = screenCompound({
     compound,
