@@ -1,5 +1,12 @@
+import type { ReactNode } from 'react';
 import { ORIGIN_MARK, cellNumber, cellText, formatValue } from '../sheet-format';
-import type { SheetColumnGroup, SheetModel, SheetSetting } from '../sheet.types';
+import type {
+  SheetCell,
+  SheetColumn,
+  SheetColumnGroup,
+  SheetModel,
+  SheetSetting,
+} from '../sheet.types';
 
 /** The sheet's tables: one setting per row, and the ranked candidates by column group. */
 
@@ -37,6 +44,26 @@ export const GROUPS: { id: SheetColumnGroup; caption: string }[] = [
   { id: 'energetics', caption: 'Enthalpies of the dissolution cycle (compare between candidates)' },
 ];
 
+/**
+ * Break points for the few heading words too long for a narrow column: a `<wbr>` (no text, so the
+ * heading's text stays the CSV's heading, word for word).
+ */
+const HEADING_BREAKS: [string, string][] = [['microenvironment', 'micro']];
+function breakable(label: string): ReactNode {
+  for (const [word, head] of HEADING_BREAKS) {
+    const at = label.indexOf(word);
+    if (at >= 0)
+      return (
+        <>
+          {label.slice(0, at + head.length)}
+          <wbr />
+          {label.slice(at + head.length)}
+        </>
+      );
+  }
+  return label;
+}
+
 export function RankedTable({
   model,
   group,
@@ -59,7 +86,7 @@ export function RankedTable({
           <th scope="col">Candidate</th>
           {columns.map((c) => (
             <th scope="col" key={c.key} title={c.hint}>
-              {c.label}
+              {breakable(c.label)}
               {c.unit ? <span className="sheet-unit">{` (${c.unit})`}</span> : null}
             </th>
           ))}
@@ -77,30 +104,9 @@ export function RankedTable({
             <th scope="row" className="sheet-candidate">
               {r.label}
             </th>
-            {columns.map((c) => {
-              const cell = r.cells[c.key];
-              const origin = cell?.origin ? ORIGIN_MARK[cell.origin] : null;
-              return (
-                <td
-                  key={c.key}
-                  className={c.kind === 'number' ? 'num' : undefined}
-                  data-col={c.key}
-                  data-value={
-                    typeof cell?.value === 'number' ? String(cellNumber(cell)) : undefined
-                  }
-                >
-                  {cellText(cell)}
-                  {origin && cell?.value !== null ? (
-                    <>
-                      {' '}
-                      <abbr className={`sheet-origin origin-${cell?.origin}`} title={origin.words}>
-                        {origin.mark}
-                      </abbr>
-                    </>
-                  ) : null}
-                </td>
-              );
-            })}
+            {columns.map((c) => (
+              <RankedCell key={c.key} column={c} cell={r.cells[c.key]} />
+            ))}
             {withFlags ? (
               <td className="sheet-flags">{r.flags.length ? r.flags.join('; ') : '—'}</td>
             ) : null}
@@ -108,5 +114,27 @@ export function RankedTable({
         ))}
       </tbody>
     </table>
+  );
+}
+
+/** One cell of a ranked table: its text and origin mark; numbers also carry their value as data. */
+function RankedCell({ column: c, cell }: { column: SheetColumn; cell: SheetCell | undefined }) {
+  const origin = cell?.origin ? ORIGIN_MARK[cell.origin] : null;
+  return (
+    <td
+      className={c.kind === 'number' ? 'num' : undefined}
+      data-col={c.key}
+      data-value={typeof cell?.value === 'number' ? String(cellNumber(cell)) : undefined}
+    >
+      {cellText(cell)}
+      {origin && cell?.value !== null ? (
+        <>
+          {' '}
+          <abbr className={`sheet-origin origin-${cell?.origin}`} title={origin.words}>
+            {origin.mark}
+          </abbr>
+        </>
+      ) : null}
+    </td>
   );
 }
