@@ -109,6 +109,20 @@ describe('comparison sheet', () => {
     );
   });
 
+  it('opens with the decision: the ranked candidates come before the compound and settings they rest on (issue 19)', () => {
+    render(<ComparisonSheet model={model()} />);
+    const ranking = screen.getByRole('heading', { name: 'Ranked candidates' });
+    const settings = screen.getByRole('region', { name: 'Compound and settings' });
+    // The one-line caution stays above both; the full cautions close the sheet.
+    const caution = screen.getByRole('complementary', { name: 'Cautions' });
+    expect(
+      caution.compareDocumentPosition(ranking) & Node.DOCUMENT_POSITION_FOLLOWING,
+    ).toBeTruthy();
+    expect(
+      ranking.compareDocumentPosition(settings) & Node.DOCUMENT_POSITION_FOLLOWING,
+    ).toBeTruthy();
+  });
+
   it('renders hostile names as inert text (no element is created from them)', () => {
     const { container } = render(<ComparisonSheet model={model()} />);
     expect(container.querySelector('img')).toBeNull();

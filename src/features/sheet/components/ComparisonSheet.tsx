@@ -16,11 +16,12 @@ import '../sheet.css';
 const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeStyle: 'short' });
 
 /**
- * The comparison sheet for a formulation meeting: compound, date and version, every setting and
- * weight, the ranked table (units in headings, ±1σ uncertainties, origin marks, flags and reasons),
- * the pH–solubility and energy pictures, the model-confidence summary and the cautions. Laid out for
- * the screen and, through sheet.css's print rules, for A4 or Letter paper. All text from the user
- * (names, notes) is rendered as text, never as markup.
+ * The comparison sheet for a formulation meeting: compound, date and version, then the decision —
+ * what separates the candidates and the ranked tables (units in headings, ±1σ uncertainties, origin
+ * marks, flags and reasons) — then every setting and weight it rests on, the pH–solubility and energy
+ * pictures, the model-confidence summary and the cautions. Laid out for the screen and, through
+ * sheet.css's print rules, for A4 or Letter paper. All text from the user (names, notes) is rendered
+ * as text, never as markup.
  */
 export function ComparisonSheet({ model }: { model: SheetModel }) {
   return (
@@ -31,12 +32,13 @@ export function ComparisonSheet({ model }: { model: SheetModel }) {
         guidance in force and your lab’s safety rules decide. See the full cautions at the end of
         this sheet.
       </aside>
+      {/* The decision first: the ranking, then what it was computed from. */}
+      <SheetRanking model={model} />
       <section className="sheet-block sheet-inputs" aria-label="Compound and settings">
         <SettingsTable caption="Compound" items={model.compound.facts} />
         <SettingsTable caption="Screening settings" items={model.settings} />
         <SettingsTable caption="Ranking weights" items={model.weights} />
       </section>
-      <SheetRanking model={model} />
       <SheetSolubility solubility={model.solubility} />
       {model.excipientMatrix ? <SheetExcipients matrix={model.excipientMatrix} /> : null}
       <SheetEnergy cycles={model.energyCycles} />
