@@ -112,8 +112,8 @@ export function candidateEnergetics(
     candidateId,
     thermo,
     reason,
-    cationLabel: drugIsCation ? 'drug ion' : ion.name,
-    anionLabel: drugIsCation ? ion.name : 'drug ion',
+    cationLabel: drugIsCation ? 'drug ion' : inSentence(ion.name),
+    anionLabel: drugIsCation ? inSentence(ion.name) : 'drug ion',
     cationsPerFormula: drugIsCation ? st.drugPerSalt : st.counterIonPerSalt,
     anionsPerFormula: drugIsCation ? st.counterIonPerSalt : st.drugPerSalt,
   };
@@ -166,4 +166,9 @@ export function screeningCandidate(
     })),
     solutionEnthalpyKJ: thermo?.solutionEnthalpyKJ ?? null,
   };
+}
+
+/** An ion's name inside a sentence: "Chloride" → "chloride"; a name like "L-Arginine" stays as it is. */
+export function inSentence(name: string): string {
+  return /^[A-Z][a-z]/.test(name) ? name[0]!.toLowerCase() + name.slice(1) : name;
 }

@@ -176,7 +176,7 @@ export function energyDiagramLayout(
     { v: kJ.gas, label: 'ions (g)', band: lattice.uncertainty, below: false },
     {
       v: kJ.half,
-      label: `${cycle.cationLabel} (aq) + ${cycle.anionLabel} (g)`,
+      label: `${perFormula(cycle.cationsPerFormula, cycle.cationLabel)} (aq) + ${perFormula(cycle.anionsPerFormula, cycle.anionLabel)} (g)`,
       band: 0,
       below: false,
     },
@@ -243,3 +243,6 @@ function arrowLabel(text: string, a: DiagramArrow): DiagramLabel {
     fill: a.colour,
   };
 }
+
+/** "2 × chloride" for two ions per formula unit, the bare name for one. */
+const perFormula = (n: number, label: string) => (n === 1 ? label : `${n} × ${label}`);

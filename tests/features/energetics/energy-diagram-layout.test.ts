@@ -5,6 +5,7 @@ import { candidatesRepo } from '@/persistence/candidates-repo';
 import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { energyCycleOf } from '@/screening-data/energy-cycle';
+import { inSentence } from '@/screening-data/candidate-screening';
 import {
   arrowBox,
   boxesOverlap,
@@ -116,5 +117,28 @@ describe('energy-level diagram layout (issue 19: no label over an arrow)', () =>
     const arrow = layout.arrows[1]!;
     const onArrow = { ...layout.labels[0]!, x: arrow.x - 4, y: (arrow.y1 + arrow.y2) / 2 };
     expect(boxesOverlap(labelBox(onArrow), arrowBox(arrow))).toBe(true);
+  });
+});
+
+// Issue 19 (screenshots): the middle level read "drug ion (aq) + Chloride (g)" — a capital inside a
+// sentence — and a 2:1 salt's level left out its two drug ions.
+describe('the middle level names each ion as a sentence would, with its count per formula unit', () => {
+  it('reads "drug ion (aq) + chloride (g)" for the demo hydrochloride', () => {
+    const labels = demoCycles.map((c) =>
+      energyDiagramLayout(c, 560, 360).labels.map((l) => l.text),
+    );
+    expect(labels.flat()).toContain('drug ion (aq) + chloride (g)');
+  });
+
+  it('counts two drug ions in the hemisulfate (2:1)', () => {
+    const hemi = demoCycles.find((c) => c.cationsPerFormula === 2);
+    expect(hemi).toBeDefined();
+    const texts = energyDiagramLayout(hemi!, 560, 360).labels.map((l) => l.text);
+    expect(texts).toContain('2 × drug ion (aq) + sulfate (g)');
+  });
+
+  it('keeps a name whose capital belongs to it (L-Arginine)', () => {
+    expect(inSentence('L-Arginine')).toBe('L-Arginine');
+    expect(inSentence('Hydrogen maleate')).toBe('hydrogen maleate');
   });
 });
