@@ -1,5 +1,6 @@
 import {
   saltSolubilityBasisWords,
+  shownRowNumbers,
   SALT_WATER_ORIGIN_LABELS,
   SOLUBILITY_DRIVER_WORDS,
   type RankedRow,
@@ -30,6 +31,8 @@ export interface DisplayRow {
   contributions: RankedRow['contributions'];
   row: ScreenRow;
   deltaPka: number | null;
+  /** Decimal places of ΔpKa: those of the drug's pKa 1σ (roundToUncertainty), as the sheet and CLI print it. */
+  deltaPkaDecimals?: number;
   /** The salt's own solubility in water, mg/mL as salt, with its ±1σ range and where it comes from. */
   saltWater: SaltWaterShown | null;
   phMax: ShownNumber | null;
@@ -187,13 +190,19 @@ function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
     ? 'K_sp from the measured salt solubility'
     : 'K_sp estimated (no measured salt solubility)';
   const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
+  // A dose number's mark follows the solid that limits it: the salt's K_sp or the free form's S₀.
+  const freeMeasured = data.screen.freeForm.intrinsicOrigin === 'measured';
+  const originOf = (solid: string) =>
+    (solid === 'salt' ? kspMeasured : freeMeasured) ? 'measured' : 'estimated';
+  const dpka = shownRowNumbers(row, shared).deltaPka;
   const solutionEnthalpy = solutionEnthalpyOf(row, data);
   return {
     id: row.id,
     label,
     ionName,
     row,
-    deltaPka: row.deltaPka,
+    deltaPka: dpka ? dpka.value : null,
+    ...(dpka ? { deltaPkaDecimals: dpka.decimals } : {}),
     saltWater: saltWaterShown(row),
     phMax:
       row.phMax === null
@@ -209,7 +218,7 @@ function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
         ? {
             value: row.worst.doseNumber,
             range: doseRange(row.worst.doseNumber, logSigmaFor(row.worst.solid)),
-            origin: row.worst.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+            origin: originOf(row.worst.solid),
             basis: `${row.worst.solid === 'salt' ? 'salt' : 'free form'} limits at pH ${row.worst.pH}; ${row.worst.solid === 'salt' ? kspBasis : 'free-form solubility from S₀'}`,
             pH: row.worst.pH,
             solid: row.worst.solid,
@@ -220,7 +229,7 @@ function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
         ? {
             value: row.gastric.doseNumber,
             range: doseRange(row.gastric.doseNumber, logSigmaFor(row.gastric.solid)),
-            origin: row.gastric.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+            origin: originOf(row.gastric.solid),
             basis: `${row.gastric.label}${row.gastric.commonIonM > 0 ? `; common ion ${row.gastric.commonIonM.toFixed(3)} M` : ''}`,
             solid: row.gastric.solid,
           }
