@@ -1,5 +1,6 @@
 import {
   saltSolubilityBasisWords,
+  roundLogNormal,
   shownRowNumbers,
   SALT_WATER_ORIGIN_LABELS,
   SOLUBILITY_DRIVER_WORDS,
@@ -147,10 +148,11 @@ export function freeFormShown(
   };
 }
 
-const doseRange = (d: number, logSigma: number): [number, number] => [
-  d / 10 ** logSigma,
-  d * 10 ** logSigma,
-];
+/** The ±1σ range of a multiplicative-error number, at the digits the sheet and the CLI print (roundLogNormal). */
+const doseRange = (d: number, logSigma: number): [number, number] => {
+  const r = roundLogNormal(d, logSigma);
+  return [r.low, r.high];
+};
 
 type ScreenPart = Omit<DisplayRow, 'rank' | 'score' | 'contributions'>;
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { rankCandidates, roundToUncertainty } from '@/chem';
 import { displayRows, freeFormShown } from '@/features/ranking/ranking-rows';
 import { screeningSettingsOf } from '@/screening-data/screening-settings';
-import { demoAppScreening, demoProject } from './support/demo-app-cli';
+import { demoAppScreening, demoCliOutput, demoProject } from './support/demo-app-cli';
 
 // Issue 19: the Ranking's numbers read as the sheet and the CLI print them (precision from σ), and
 // each origin mark follows what limits the number. The fictional demo (invented numbers) drives it.
@@ -36,5 +36,27 @@ describe('the Ranking’s shown numbers (issue 19)', () => {
     // Salt-limited numbers keep the K_sp's mark: estimated, no salt solubility measured in the demo.
     for (const r of shown.filter((x) => x.gastricDose?.solid === 'salt'))
       expect(r.gastricDose?.origin, r.label).toBe('estimated');
+  }, 60000);
+
+  it('the ±1σ ranges read as the CSVs print them, at two significant figures (the gastric range read 4.4–236)', async () => {
+    const { shown } = await rows();
+    const cli = (JSON.parse(await demoCliOutput('json')) as { rows: Record<string, string>[] })
+      .rows;
+    for (const r of shown) {
+      const c = cli.find((x) => x.candidate === r.label)!;
+      expect(c, r.label).toBeDefined();
+      expect(r.worstDose?.range, r.label).toStrictEqual([
+        Number(c.worst_dose_number_low),
+        Number(c.worst_dose_number_high),
+      ]);
+      expect(r.gastricDose?.range, r.label).toStrictEqual([
+        Number(c.gastric_dose_number_low),
+        Number(c.gastric_dose_number_high),
+      ]);
+      expect(r.saltWater?.range, r.label).toStrictEqual([
+        Number(c.salt_solubility_water_mg_per_ml_low),
+        Number(c.salt_solubility_water_mg_per_ml_high),
+      ]);
+    }
   }, 60000);
 });
