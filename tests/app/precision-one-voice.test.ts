@@ -120,6 +120,25 @@ describe('precision follows σ, the same in the sheet’s CSV and the CLI (issue
     }
   }, 60000);
 
+  it('the words say a D₀ as the cells do: two significant figures (was “D₀ 2.42”, “D₀ 3.00” beside 2.4 and 3)', async () => {
+    const { pairs } = await bothCsvs();
+    const sigFigs = (x: string) => x.replace('.', '').replace(/^0+/, '').replace(/0+$/, '').length;
+    let seen = 0;
+    for (const { row, cli } of pairs) {
+      const words = [cli.flags!, cli.reasons!].join(' ');
+      for (const m of words.matchAll(/D₀ (\d+(?:\.\d+)?)/g)) {
+        seen++;
+        expect(sigFigs(m[1]!), `${row.label}: ${m[0]}`).toBeLessThanOrEqual(2);
+      }
+      // The worst-pH reason names the number in the worst-D₀ cell.
+      const worst = /at pH [\d.]+ \([^)]*\) falls below the dose \(D₀ ([\d.]+)\)/.exec(
+        cli.reasons!,
+      );
+      if (worst) expect(Number(worst[1]), row.label).toBe(Number(cli.worst_dose_number));
+    }
+    expect(seen).toBeGreaterThan(0);
+  }, 60000);
+
   it('pH_max: its 1σ in both CSVs, the value to its place', async () => {
     const { pairs } = await bothCsvs();
     for (const { row, sheet, cli } of pairs) {

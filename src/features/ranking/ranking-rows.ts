@@ -1,5 +1,7 @@
 import {
   saltSolubilityBasisWords,
+  roundLogNormal,
+  shownRowNumbers,
   SALT_WATER_ORIGIN_LABELS,
   SOLUBILITY_DRIVER_WORDS,
   type RankedRow,
@@ -30,6 +32,8 @@ export interface DisplayRow {
   contributions: RankedRow['contributions'];
   row: ScreenRow;
   deltaPka: number | null;
+  /** Decimal places of ΔpKa: those of the drug's pKa 1σ (roundToUncertainty), as the sheet and CLI print it. */
+  deltaPkaDecimals?: number;
   /** The salt's own solubility in water, mg/mL as salt, with its ±1σ range and where it comes from. */
   saltWater: SaltWaterShown | null;
   phMax: ShownNumber | null;
@@ -144,10 +148,11 @@ export function freeFormShown(
   };
 }
 
-const doseRange = (d: number, logSigma: number): [number, number] => [
-  d / 10 ** logSigma,
-  d * 10 ** logSigma,
-];
+/** The ±1σ range of a multiplicative-error number, at the digits the sheet and the CLI print (roundLogNormal). */
+const doseRange = (d: number, logSigma: number): [number, number] => {
+  const r = roundLogNormal(d, logSigma);
+  return [r.low, r.high];
+};
 
 type ScreenPart = Omit<DisplayRow, 'rank' | 'score' | 'contributions'>;
 
@@ -187,13 +192,19 @@ function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
     ? 'K_sp from the measured salt solubility'
     : 'K_sp estimated (no measured salt solubility)';
   const logSigmaFor = (solid: string) => (solid === 'salt' ? u.saltLogSigma : u.freeLogSigma);
+  // A dose number's mark follows the solid that limits it: the salt's K_sp or the free form's S₀.
+  const freeMeasured = data.screen.freeForm.intrinsicOrigin === 'measured';
+  const originOf = (solid: string) =>
+    (solid === 'salt' ? kspMeasured : freeMeasured) ? 'measured' : 'estimated';
+  const dpka = shownRowNumbers(row, shared).deltaPka;
   const solutionEnthalpy = solutionEnthalpyOf(row, data);
   return {
     id: row.id,
     label,
     ionName,
     row,
-    deltaPka: row.deltaPka,
+    deltaPka: dpka ? dpka.value : null,
+    ...(dpka ? { deltaPkaDecimals: dpka.decimals } : {}),
     saltWater: saltWaterShown(row),
     phMax:
       row.phMax === null
@@ -209,7 +220,7 @@ function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
         ? {
             value: row.worst.doseNumber,
             range: doseRange(row.worst.doseNumber, logSigmaFor(row.worst.solid)),
-            origin: row.worst.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+            origin: originOf(row.worst.solid),
             basis: `${row.worst.solid === 'salt' ? 'salt' : 'free form'} limits at pH ${row.worst.pH}; ${row.worst.solid === 'salt' ? kspBasis : 'free-form solubility from S₀'}`,
             pH: row.worst.pH,
             solid: row.worst.solid,
@@ -220,7 +231,7 @@ function screenPart(data: ProjectScreening, row: ScreenRow): ScreenPart {
         ? {
             value: row.gastric.doseNumber,
             range: doseRange(row.gastric.doseNumber, logSigmaFor(row.gastric.solid)),
-            origin: row.gastric.solid === 'salt' && kspMeasured ? 'measured' : 'estimated',
+            origin: originOf(row.gastric.solid),
             basis: `${row.gastric.label}${row.gastric.commonIonM > 0 ? `; common ion ${row.gastric.commonIonM.toFixed(3)} M` : ''}`,
             solid: row.gastric.solid,
           }

@@ -18,8 +18,15 @@ import { saltLabel } from '../salt-label';
  * other steps computed. Nothing here computes chemistry; the steps call these to say what they found.
  */
 
-/** A number for a sentence: whole above 100, three significant figures from 1, else two. */
-export const fmt = (x: number): string =>
+/**
+ * A number for a sentence (a dose number, a solubility): two significant figures, as the Ranking, the
+ * sheet and the CSVs show these numbers whose 1σ is a factor of 1.2 or more (report/precision.ts,
+ * roundLogNormal) — "D₀ 2.4", not "D₀ 2.42" beside a cell reading 2.4.
+ */
+export const fmt = (x: number): string => String(Number(x.toPrecision(2)));
+
+/** A number without a wide 1σ (a computed mass, a typed measurement): whole above 100, else three figures. */
+const fmtExact = (x: number): string =>
   x >= 100 ? x.toFixed(0) : x >= 1 ? x.toPrecision(3) : x.toPrecision(2);
 
 /** A label without its trailing ratio, e.g. 'hydrochloride (1:1)' → 'hydrochloride'. */
@@ -94,7 +101,7 @@ export function massCostReason(
   saltMassPerDoseMg: number | null,
 ): Reason | null {
   if (!(activeFraction < HEAVY_COUNTER_ION_ACTIVE_FRACTION)) return null;
-  const perDose = saltMassPerDoseMg ? `, ${fmt(saltMassPerDoseMg)} mg of salt per dose` : '';
+  const perDose = saltMassPerDoseMg ? `, ${fmtExact(saltMassPerDoseMg)} mg of salt per dose` : '';
   return {
     kind: 'watch',
     criterion: 'massCost',
@@ -106,7 +113,7 @@ export function measuredKspReason(saltSolubilityMgPerMl: number): Reason {
   return {
     kind: 'measured',
     criterion: 'solubility',
-    text: `K_sp from the measured salt solubility (${fmt(saltSolubilityMgPerMl)} mg/mL as salt) — overrides the estimate`,
+    text: `K_sp from the measured salt solubility (${fmtExact(saltSolubilityMgPerMl)} mg/mL as salt) — overrides the estimate`,
   };
 }
 

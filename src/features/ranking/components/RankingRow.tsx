@@ -52,7 +52,7 @@ const FixedCells = memo(
     return (
       <>
         <td>
-          {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(1))}
+          {r.deltaPka === null ? '—' : minus(r.deltaPka.toFixed(r.deltaPkaDecimals ?? 1))}
           {row.saltFormation ? (
             <span className="muted small-note">{row.saltFormation.band}</span>
           ) : null}
