@@ -77,3 +77,11 @@ export const SCORE_DECIMALS = 2;
 export function roundScore(score: number): number {
   return Number(score.toFixed(SCORE_DECIMALS));
 }
+
+/**
+ * The 1σ of a proportion counted over Monte Carlo draws: the binomial √(p(1−p)/n), and at least that
+ * of one draw in n (1/n), so that a proportion of 0 or 1 still says how many draws it rests on.
+ */
+export function monteCarloProportionSigma(p: number, draws: number): number {
+  return Math.max(Math.sqrt((p * (1 - p)) / draws), 1 / draws);
+}

@@ -91,7 +91,10 @@ function sheetReasons(row: ScreenRow, screening: ProjectScreening): string[] {
 }
 
 /** One row per shortlisted candidate in rank order; the unscreenable ones last, with the reason. */
-function sheetRows(rs: RankedScreening, pTop3Of: Map<string, number>): SheetRow[] {
+function sheetRows(
+  rs: RankedScreening,
+  pTop3Of: Map<string, { p: number; draws: number }>,
+): SheetRow[] {
   const { project, screening, ranked, byId, labelOf } = rs;
   const rows: SheetRow[] = [];
   for (const rr of ranked) {
@@ -199,7 +202,9 @@ export function buildSheetModel({
   appVersion,
   robustness = null,
 }: BuildSheetInput): SheetModel {
-  const pTop3Of = new Map((robustness?.results ?? []).map((r) => [r.id, r.pTop3]));
+  const pTop3Of = new Map(
+    (robustness?.results ?? []).map((r) => [r.id, { p: r.pTop3, draws: robustness!.iterations }]),
+  );
   const rs = rankScreening(project, screening);
   const { picture, chartedSalts } = solubilityPicture(rs);
   const inOrder = rankedRows(rs);

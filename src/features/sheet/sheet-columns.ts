@@ -1,4 +1,10 @@
-import { roundScore, SALT_WATER_ORIGIN_LABELS, type Estimate, type ScreenRow } from '@/chem';
+import {
+  monteCarloProportionSigma,
+  roundScore,
+  SALT_WATER_ORIGIN_LABELS,
+  type Estimate,
+  type ScreenRow,
+} from '@/chem';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { uncertaintiesOf } from '@/screening-data/uncertainty';
 import type { SheetCell, SheetColumn, ValueOrigin } from './sheet.types';
@@ -175,7 +181,7 @@ export function rowCells(
   row: ScreenRow,
   score: number | null,
   screening: ProjectScreening,
-  pTop3: number | null,
+  pTop3: { p: number; draws: number } | null,
 ): Record<string, SheetCell> {
   const kspOrigin: ValueOrigin | null = row.kspOrigin ?? null;
   const thermo = screening.energetics[row.id]?.thermo ?? null;
@@ -196,7 +202,10 @@ export function rowCells(
     : null;
   return {
     score: num(score === null ? null : roundScore(score), null),
-    pTop3: num(pTop3 === null ? null : pTop3 * 100, 'estimated'),
+    // With its Monte Carlo 1σ, so it is printed to the digits its draws support (37.3 ± 1.1, not a bare 37.25).
+    pTop3: pTop3
+      ? num(pTop3.p * 100, 'estimated', 100 * monteCarloProportionSigma(pTop3.p, pTop3.draws))
+      : { value: null },
     // ΔpKa to the precision of the drug's pKa σ, as the command line writes it.
     deltaPka: num(row.deltaPka, 'input', screening.screen.robustnessShared.drugPkaSigma),
     saltFormation: { value: row.saltFormation?.band ?? null },

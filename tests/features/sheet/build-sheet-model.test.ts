@@ -4,7 +4,7 @@ import { CRITERIA, parseScreeningSettings, validationReport } from '@/chem';
 import { computeProjectScreening } from '@/screening-data/compute-screening';
 import { buildSheetModel } from '@/features/sheet/build-sheet-model';
 import { csvHeader, csvNumber, sheetToCsv } from '@/features/sheet/sheet-csv';
-import { cellNumber } from '@/features/sheet/sheet-format';
+import { cellNumber, cellText } from '@/features/sheet/sheet-format';
 import { DEMO_COMPOUND, DEMO_SHORTLIST } from '@/persistence/demo-project';
 import {
   projectSettingsSchema,
@@ -111,11 +111,12 @@ describe('sheet model from a real screening', () => {
       appVersion: 'test',
       robustness: { results: [{ id: 'cand_0', pTop3: 0.25 }], iterations: 2000, seed: 7 },
     });
-    expect(m.rows.find((r) => r.id === 'cand_0')?.cells.pTop3).toEqual({
-      value: 25,
-      origin: 'estimated',
-      uncertainty: null,
-    });
+    // Binomial 1σ of a share over n draws, √(p(1−p)/n) (by hand: √(0.25·0.75/2000) = 0.009682 → 0.968
+    // points), so the sheet prints P(top 3) to the digits 2000 draws support: "25.00 ± 0.97" (two digits of σ).
+    const cell = m.rows.find((r) => r.id === 'cand_0')?.cells.pTop3;
+    expect(cell).toMatchObject({ value: 25, origin: 'estimated' });
+    expect(cell?.uncertainty).toBeCloseTo(0.9682, 4);
+    expect(cellText(cell)).toBe('25.00 ± 0.97');
     expect(m.rows.find((r) => r.id === 'cand_1')?.cells.pTop3?.value).toBeNull();
     expect(m.notes.some((n) => n.includes('2000 Monte Carlo draws (seed 7)'))).toBe(true);
     expect((await model()).notes.some((n) => n.startsWith('P(top 3) was not computed'))).toBe(true);
