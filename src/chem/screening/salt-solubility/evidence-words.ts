@@ -8,7 +8,8 @@ import {
 /** Below this RMSE difference, log₁₀ units, two models' errors are "not measurably different" (our choice, as the variant rule's margin). */
 const RMSE_NOISE = 0.02;
 
-const f2 = (x: number | null) => (x === null ? '—' : x.toFixed(2));
+// A typographic minus (U+2212), as every other screen prints a negative number.
+const f2 = (x: number | null) => (x === null ? '—' : x.toFixed(2).replace(/^-/, '−'));
 const f3 = (x: number | null) => (x === null ? '—' : x.toFixed(3));
 
 /**

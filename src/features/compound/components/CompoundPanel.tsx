@@ -72,8 +72,8 @@ function IdentityFields({ draft, errors, onChange: change }: FieldsProps) {
           value={draft.kind}
           onChange={(e) => change('kind', e.target.value)}
         >
-          <option value="base">Weak base (forms a cation)</option>
-          <option value="acid">Weak acid (forms an anion)</option>
+          <option value="base">Base (forms a cation)</option>
+          <option value="acid">Acid (forms an anion)</option>
         </select>
       </div>
       <Field

@@ -10,7 +10,8 @@ import {
 } from '@/chem';
 import { ParityPlot } from '@/components/charts/ParityPlot';
 
-const f2 = (x: number | null) => (x === null || !Number.isFinite(x) ? '—' : x.toFixed(2));
+const f2 = (x: number | null) =>
+  x === null || !Number.isFinite(x) ? '—' : x.toFixed(2).replace(/^-/, '−');
 const f3 = (x: number | null) => (x === null || !Number.isFinite(x) ? '—' : x.toFixed(3));
 
 const VARIANT_WORDS: Record<string, string> = {

@@ -119,8 +119,8 @@ export function NewProjectForm({ onCreated }: { onCreated: (projectId: string) =
             value={draft.kind}
             onChange={(ev) => set('kind', ev.target.value)}
           >
-            <option value="base">Weak base (forms a cation)</option>
-            <option value="acid">Weak acid (forms an anion)</option>
+            <option value="base">Base (forms a cation)</option>
+            <option value="acid">Acid (forms an anion)</option>
           </select>
         </div>
         {field(

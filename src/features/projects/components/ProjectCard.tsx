@@ -9,7 +9,8 @@ export interface ProjectCardActions {
   remove: (id: string) => void;
 }
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+// As the comparison sheet writes dates ("3 December 2026 at 09:45"), whatever the browser's locale.
+const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'long', timeStyle: 'short' });
 
 /** One project on the Projects board: what it holds, and what can be done with it. */
 export function ProjectCard({
