@@ -1,4 +1,11 @@
-import { useEffect, useLayoutEffect, useRef, useState, type RefObject } from 'react';
+import {
+  startTransition,
+  useEffect,
+  useLayoutEffect,
+  useRef,
+  useState,
+  type RefObject,
+} from 'react';
 
 /** After a movement ends, the document order catches up this long after the next frame (ms). */
 const CATCH_UP_MS = 120;
@@ -62,7 +69,9 @@ export function useDocumentOrder(
   useEffect(() => {
     if (settleTick === undefined) return;
     let timer: ReturnType<typeof setTimeout> | undefined;
-    const catchUp = () => setDocIds((d) => (sameOrder(d, latest.current) ? d : latest.current));
+    // A transition: a slider step arriving meanwhile is handled first.
+    const catchUp = () =>
+      startTransition(() => setDocIds((d) => (sameOrder(d, latest.current) ? d : latest.current)));
     const frame =
       typeof requestAnimationFrame === 'function'
         ? requestAnimationFrame(() => (timer = setTimeout(catchUp, CATCH_UP_MS)))
@@ -91,6 +100,7 @@ export function useRowShifts(
   onKnown: (known: boolean) => void,
 ): void {
   const heights = useRef(new WeakMap<Element, number>());
+  const known = useRef(false);
   const apply = useRef<() => void>(() => {});
   apply.current = () => {
     const trs = body.current ? [...body.current.rows] : [];
@@ -106,7 +116,8 @@ export function useRowShifts(
       const t = shifts?.[i] ? `translateY(${shifts[i]}px)` : '';
       if (tr.style.transform !== t) tr.style.transform = t;
     });
-    onKnown(shifts !== null);
+    // Said only when it changes: a state update from every layout effect would loop.
+    if (known.current !== (shifts !== null)) onKnown((known.current = shifts !== null));
   };
   useLayoutEffect(() => {
     if (typeof ResizeObserver === 'undefined' || !body.current) return;
