@@ -17,7 +17,7 @@ import {
 import { freePort, startPreview } from '../../e2e/support/server.mjs';
 
 /** The ranked rows' own body (the free form sits in a body of its own before it). */
-export const RANKED_BODY = 'table.ranking-table > tbody.ranked-rows';
+export const RANKED_BODY = 'table.ranking-table > tbody:not(.free-form-body)';
 /** The "Measure next" panel. */
 export const MEASURE_NEXT_PANEL = 'section[aria-labelledby="measure-next-title"]';
 
