@@ -58,10 +58,10 @@ export function prewarmMeasureNextWorker(): () => void {
   };
 }
 
-/** The spare worker if there is one (and a new spare started for the next restart), else a new one. */
+/** The spare worker if there is one, else a new one. */
 function spawn(): Worker {
   const w = spare ?? newWorker();
-  spare = newWorker();
+  spare = null;
   return w;
 }
 
@@ -82,6 +82,8 @@ function handleMessages(currentRun: () => number, release: () => void, setState:
   return (e: MessageEvent<MeasureNextMessage>) => {
     const m = e.data;
     if (m.type !== 'progress') release();
+    // A run has ended: start a spare now, while nothing waits, for the next restart.
+    if (m.type !== 'progress' && !spare) spare = newWorker();
     if (m.runId !== currentRun()) return;
     // A transition: a key press on a weight slider never waits for the list to be drawn again.
     startTransition(() => {
