@@ -354,6 +354,13 @@ function headline(r) {
           loadAverage1m: rerank.loadAverage1m,
         }
       : null,
+    rerankKeyboardStepSettling: rerank?.keyboardStepSettling
+      ? {
+          ...pick(rerank.keyboardStepSettling.inputToTablePaintedMs),
+          overBareSlider: rerank.keyboardStepSettling.medianOverBaseline,
+          loadAverage1m: rerank.loadAverage1m,
+        }
+      : null,
     bareSliderInputToPaint: rerank ? pick(rerank.baselineBareSlider.inputToNextPaintMs) : null,
     measureNextCore12: r.measureNextCore
       ? {

@@ -25,8 +25,12 @@ const Outcomes = memo(ScreenOutcomesPanel);
 
 /** A weight movement has ended when the weights stood still this long (ms) or the slider sent `change`. */
 const SETTLE_MS = 400;
-/** …and it has ended this long after the slider's `change` with no other `change` (ms). */
-const CHANGE_SETTLE_MS = 150;
+/**
+ * …and it has ended this long after the slider's `change` with no other `change` (ms): key presses a
+ * person makes in a row (two or three a second) settle once, after the last, so the panels below and
+ * the document order do not take the main thread between two presses.
+ */
+const CHANGE_SETTLE_MS = 400;
 
 type GoTo = ReturnType<typeof useNavigationStore.getState>['goTo'];
 
