@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { startTransition, useEffect, useRef, useState } from 'react';
 import type {
   MeasureNextResult,
   MeasureNextStatus,
@@ -39,8 +39,31 @@ const SETTLE_MS = 120;
  * fresh one started), so a stale computation never delays the new one. Without Worker (tests) the
  * same function runs on the main thread after the settle delay.
  */
-const spawn = () =>
+const newWorker = () =>
   new Worker(new URL('./measure-next.worker.ts', import.meta.url), { type: 'module' });
+
+/** A worker started ahead of need (its module fetched and evaluated), taken by the next run. */
+let spare: Worker | null = null;
+
+/**
+ * Start a worker now, so the first run does not wait for the worker's module to load: the Ranking
+ * area calls it when it opens, while the screen is still being computed. Returns the clean-up
+ * (ends the spare if nothing took it).
+ */
+export function prewarmMeasureNextWorker(): () => void {
+  if (typeof Worker !== 'undefined' && !spare) spare = newWorker();
+  return () => {
+    spare?.terminate();
+    spare = null;
+  };
+}
+
+/** The spare worker if there is one, else a new one. */
+function spawn(): Worker {
+  const w = spare ?? newWorker();
+  spare = null;
+  return w;
+}
 
 type SetState = (next: MeasureNextState | ((s: MeasureNextState) => MeasureNextState)) => void;
 
@@ -59,12 +82,17 @@ function handleMessages(currentRun: () => number, release: () => void, setState:
   return (e: MessageEvent<MeasureNextMessage>) => {
     const m = e.data;
     if (m.type !== 'progress') release();
+    // A run has ended: start a spare now, while nothing waits, for the next restart.
+    if (m.type !== 'progress' && !spare) spare = newWorker();
     if (m.runId !== currentRun()) return;
-    if (m.type === 'progress')
-      setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
-    else if (m.type === 'result')
-      setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
-    else setState({ status: 'error', progress: 0, error: m.message });
+    // A transition: a key press on a weight slider never waits for the list to be drawn again.
+    startTransition(() => {
+      if (m.type === 'progress')
+        setState((s) => ({ ...s, status: 'running', progress: m.done / m.total }));
+      else if (m.type === 'result')
+        setState({ status: 'done', progress: 1, result: m.result, ms: m.ms });
+      else setState({ status: 'error', progress: 0, error: m.message });
+    });
   };
 }
 

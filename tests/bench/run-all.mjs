@@ -15,13 +15,16 @@
 //            load average before each run, and the ratio to the core benchmark's bare closed-form loop
 //            (run `core` too for it); a run the previous rate says would take longer than
 //            --batch-max-s is left out, with its estimated time written down
-//   browser  tests/bench/rerank-browser.mjs: weight slider → re-ranked table painted in Chromium, and
-//            the first screen's gzipped JavaScript of the same build (tests/bench/check-budget.mjs)
+//   browser  tests/bench/rerank-browser.mjs: weight slider (real mouse drag and arrow keys) → re-ranked
+//            table painted in Chromium, beside a bare slider's input → paint in the same page, and the
+//            first screen's gzipped JavaScript of the same build (tests/bench/check-budget.mjs)
 //   measure-next  tests/bench/measure-next.bench.ts (the value-of-information computation for 12
 //            candidates, one thread) and tests/bench/measure-next-browser.mjs (table on screen → the
 //            "Measure next" list on screen in Chromium, worker included; goal < 1 s on 2 cores)
 // The summary (default tests/bench/out/summary.json, git-ignored) carries medians, p95 and the
-// machine's core count and load, so figures from different machines can be read side by side.
+// machine's core count and load, so figures from different machines can be read side by side; its
+// `headline` block puts the figures of issue 20 together, each with its ratio to a same-run baseline.
+// The browser benches share tests/bench/support/browser-bench.mjs (build, preview, Chromium, seeding).
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, cpus, loadavg, tmpdir, totalmem } from 'node:os';
@@ -315,8 +318,65 @@ if (!skip.has('measure-next')) {
     summary.skipped.measureNextBrowser = `tests/bench/measure-next-browser.mjs exited ${r.status} (Chromium missing, the page failed, or the list came before the table; see its output)`;
 } else summary.skipped.measureNext = 'skipped by --skip';
 
+// ---- headline: the figures of issue 20 side by side, beside the bare closed-form loop -------------
+summary.headline = headline(summary.results);
+
 summary.machine.loadAverage1mAtEnd = +loadavg()[0].toFixed(2);
 summary.finishedAt = new Date().toISOString();
+
+/**
+ * One block with each figure's median and p95 (ms), the load it was measured under, and its ratio to
+ * the baseline of the same run: the bare closed-form loop (core) for the computations, the bare
+ * slider's input → paint (same page) for the re-rank. Null where a part was skipped.
+ */
+function headline(r) {
+  const bare = r.core?.baseline;
+  const pick = (x) => (x ? { medianMs: x.medianMs, p95Ms: x.p95Ms } : null);
+  const rerank = r.rerankBrowser;
+  const mn = r.measureNextBrowser;
+  return {
+    cores: availableParallelism(),
+    bareClosedFormLoop: bare
+      ? { medianMsPerLoop: bare.medianMsPerLoop, p95MsPerLoop: bare.p95MsPerLoop }
+      : null,
+    rerankDrag: rerank
+      ? {
+          ...pick(rerank.drag.inputToTablePaintedMs),
+          overBareSlider: rerank.drag.medianOverBaseline,
+          loadAverage1m: rerank.loadAverage1m,
+          goal: 'median < 16 ms, p95 < 33 ms',
+        }
+      : null,
+    rerankKeyboardStep: rerank
+      ? {
+          ...pick(rerank.keyboardStep.inputToTablePaintedMs),
+          overBareSlider: rerank.keyboardStep.medianOverBaseline,
+          loadAverage1m: rerank.loadAverage1m,
+        }
+      : null,
+    rerankKeyboardStepSettling: rerank?.keyboardStepSettling
+      ? {
+          ...pick(rerank.keyboardStepSettling.inputToTablePaintedMs),
+          overBareSlider: rerank.keyboardStepSettling.medianOverBaseline,
+          loadAverage1m: rerank.loadAverage1m,
+        }
+      : null,
+    bareSliderInputToPaint: rerank ? pick(rerank.baselineBareSlider.inputToNextPaintMs) : null,
+    measureNextCore12: r.measureNextCore
+      ? {
+          ...pick(r.measureNextCore.measureNext),
+          overBareLoop: bare
+            ? +(r.measureNextCore.measureNext.medianMs / bare.medianMsPerLoop).toFixed(0)
+            : null,
+          loadAverage1m: r.measureNextCore.loadAverage1mAtStart,
+        }
+      : null,
+    measureNextTableToList12: mn
+      ? { ...pick(mn.tableToList), loadAverage1m: mn.loadAverage1m, goal: '< 1000 ms' }
+      : null,
+    firstScreenGzipKiB: r.firstScreen?.gzipKiB ?? null,
+  };
+}
 mkdirSync(dirname(outPath), { recursive: true });
 writeFileSync(outPath, JSON.stringify(summary, null, 2) + '\n');
 rmSync(work, { recursive: true, force: true });

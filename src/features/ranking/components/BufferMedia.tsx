@@ -5,6 +5,7 @@ import { projectsRepo } from '@/persistence/projects-repo';
 import { SCREENING_SETTINGS_KEY } from '@/screening-data/screening-settings';
 import type { ProjectRecord } from '@/persistence/records';
 import type { DisplayRow } from '../ranking-rows';
+import { MediaTable } from './MediaTable';
 import {
   BIORELEVANT_NOT_MODELLED,
   bufferFromDraft,
@@ -36,7 +37,148 @@ async function saveMedia(
   await projectsRepo.changeSettings(projectId, shape(before), shape(after));
 }
 
-const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 1 ? x.toFixed(2) : x.toPrecision(2));
+/** A text field of the new medium: label with unit, the typed text, its error or hint. */
+function BufferInput({
+  uid,
+  k,
+  label,
+  unit,
+  hint,
+  draft,
+  errors,
+  onChange,
+}: {
+  uid: string;
+  k: Exclude<keyof BufferDraft, 'ionId'>;
+  label: string;
+  unit?: string;
+  hint?: string;
+  draft: BufferDraft;
+  errors: BufferErrors;
+  onChange: (key: keyof BufferDraft, value: string) => void;
+}) {
+  const id = `${uid}-${k}`;
+  return (
+    <div className="field">
+      <label htmlFor={id}>
+        {label}
+        {unit ? <span className="unit"> ({unit})</span> : null}
+      </label>
+      <input
+        id={id}
+        value={draft[k]}
+        inputMode={k === 'label' ? 'text' : 'decimal'}
+        aria-invalid={errors[k] ? true : undefined}
+        aria-describedby={describedBy(id, errors[k], hint)}
+        onChange={(ev) => onChange(k, ev.target.value)}
+      />
+      <FieldMessage id={id} error={errors[k]} hint={hint} />
+    </div>
+  );
+}
+
+/** The counter-ion the new medium contains. */
+function IonSelect(props: {
+  id: string;
+  value: string;
+  error: BufferErrors['ionId'];
+  onChange: (value: string) => void;
+}) {
+  const { id, value, error, onChange } = props;
+  return (
+    <div className="field">
+      <label htmlFor={id}>Counter-ion in it</label>
+      <select
+        id={id}
+        value={value}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, error)}
+        onChange={(ev) => onChange(ev.target.value)}
+      >
+        <option value="">Choose…</option>
+        {ION_CHOICES.map((i) => (
+          <option key={i.id} value={i.id}>
+            {i.name}
+          </option>
+        ))}
+      </select>
+      <FieldMessage id={id} error={error} />
+    </div>
+  );
+}
+
+/** The form of a new medium: checked when sent, stored by `onAdd`, emptied once stored. */
+function AddMediumForm({
+  media,
+  busy,
+  onAdd,
+}: {
+  media: readonly ScreeningMedium[];
+  busy: boolean;
+  onAdd: (medium: ScreeningMedium) => Promise<void>;
+}) {
+  const uid = useId();
+  const [draft, setDraft] = useState<BufferDraft>(EMPTY_BUFFER);
+  const [errors, setErrors] = useState<BufferErrors>({});
+  const set = (key: keyof BufferDraft, value: string) => setDraft((d) => ({ ...d, [key]: value }));
+  const add = async (e: React.FormEvent) => {
+    e.preventDefault();
+    const r = bufferFromDraft(draft, media);
+    if (!r.ok) {
+      setErrors(r.errors);
+      return;
+    }
+    setErrors({});
+    await onAdd(r.medium);
+    setDraft(EMPTY_BUFFER);
+  };
+  const field = { uid, draft, errors, onChange: set };
+  return (
+    <form className="form-grid" onSubmit={add} noValidate aria-label="Add a dissolution medium">
+      <BufferInput {...field} k="label" label="Medium name" hint="e.g. phosphate buffer pH 6.8" />
+      <BufferInput {...field} k="pH" label="pH" />
+      <IonSelect
+        id={`${uid}-ionId`}
+        value={draft.ionId}
+        error={errors.ionId}
+        onChange={(v) => set('ionId', v)}
+      />
+      <BufferInput {...field} k="concentrationM" label="Its concentration" unit="mol/L" />
+      <BufferInput
+        {...field}
+        k="ionicStrengthM"
+        label="Ionic strength"
+        unit="mol/L"
+        hint="Optional; for the Davies option"
+      />
+      <div className="field">
+        <button type="submit" disabled={busy}>
+          Add medium
+        </button>
+      </div>
+    </form>
+  );
+}
+
+/** The media defined so far, each with its remove button. */
+function MediaList(props: { media: readonly ScreeningMedium[]; onRemove: (id: string) => void }) {
+  return (
+    <ul className="buffer-list">
+      {props.media.map((m) => (
+        <li key={m.id}>
+          {m.label} (pH {m.pH}){' '}
+          <button
+            type="button"
+            onClick={() => props.onRemove(m.id)}
+            aria-label={`Remove medium ${m.label}`}
+          >
+            Remove
+          </button>
+        </li>
+      ))}
+    </ul>
+  );
+}
 
 /**
  * Dissolution media of the user's own (buffers with a counter-ion in them): defined here, applied by
@@ -53,28 +195,8 @@ export const BufferMedia = memo(function BufferMediaView({
   rows: readonly DisplayRow[];
 }) {
   const uid = useId();
-  const [draft, setDraft] = useState<BufferDraft>(EMPTY_BUFFER);
-  const [errors, setErrors] = useState<BufferErrors>({});
   const [busy, setBusy] = useState(false);
-
-  const set = (key: keyof BufferDraft, value: string) => setDraft((d) => ({ ...d, [key]: value }));
-  const add = async (e: React.FormEvent) => {
-    e.preventDefault();
-    const r = bufferFromDraft(draft, media);
-    if (!r.ok) {
-      setErrors(r.errors);
-      return;
-    }
-    setErrors({});
-    setBusy(true);
-    try {
-      await saveMedia(project.id, media, [...media, r.medium]);
-      setDraft(EMPTY_BUFFER);
-    } finally {
-      setBusy(false);
-    }
-  };
-  const addPreset = async (medium: ScreeningMedium) => {
+  const addMedium = async (medium: ScreeningMedium) => {
     setBusy(true);
     try {
       await saveMedia(project.id, media, [...media, medium]);
@@ -88,34 +210,6 @@ export const BufferMedia = memo(function BufferMediaView({
       media,
       media.filter((m) => m.id !== id),
     );
-
-  const input = (
-    key: Exclude<keyof BufferDraft, 'ionId'>,
-    label: string,
-    unit?: string,
-    hint?: string,
-  ) => {
-    const id = `${uid}-${key}`;
-    return (
-      <div className="field">
-        <label htmlFor={id}>
-          {label}
-          {unit ? <span className="unit"> ({unit})</span> : null}
-        </label>
-        <input
-          id={id}
-          value={draft[key]}
-          inputMode={key === 'label' ? 'text' : 'decimal'}
-          aria-invalid={errors[key] ? true : undefined}
-          aria-describedby={describedBy(id, errors[key], hint)}
-          onChange={(ev) => set(key, ev.target.value)}
-        />
-        <FieldMessage id={id} error={errors[key]} hint={hint} />
-      </div>
-    );
-  };
-  const ionFieldId = `${uid}-ionId`;
-
   return (
     <section className="panel buffer-media" aria-labelledby={`${uid}-title`}>
       <h2 id={`${uid}-title`}>Your dissolution media</h2>
@@ -124,103 +218,10 @@ export const BufferMedia = memo(function BufferMediaView({
         it as a common ion. Solubility is in free-form equivalents; D₀ = (dose / 250 mL) /
         solubility (ICH M9). Estimates unless the salt’s solubility was measured.
       </p>
-      {media.length > 0 ? (
-        <div className="table-scroll">
-          <table className="data-table" aria-label="Solubility in your media">
-            <thead>
-              <tr>
-                <th scope="col">Candidate</th>
-                {media.map((m) => (
-                  <th scope="col" key={m.id}>
-                    {m.label}
-                    <br />
-                    <span className="unit">
-                      pH {m.pH};{' '}
-                      {m.id.startsWith('preset-')
-                        ? 'biorelevant, micelles not modelled'
-                        : Object.entries(m.ions)
-                            .map(([ion, c]) => `${ion} ${c} M`)
-                            .join(', ')}{' '}
-                      — mg/mL (D₀)
-                    </span>
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {rows.map((r) => (
-                <tr key={r.id}>
-                  <th scope="row">{r.label}</th>
-                  {media.map((m) => {
-                    const res = r.row.media.find((x) => x.id === m.id);
-                    return (
-                      <td key={m.id}>
-                        {res ? (
-                          <>
-                            {fmt(res.solubilityMgPerMl)}
-                            {res.doseNumber !== null ? ` (${fmt(res.doseNumber)})` : ''}
-                            {res.convertsTo ? (
-                              <span className="muted"> → {res.convertsTo}</span>
-                            ) : null}
-                          </>
-                        ) : (
-                          '—'
-                        )}
-                      </td>
-                    );
-                  })}
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-      ) : null}
-      {media.length > 0 ? (
-        <ul className="buffer-list">
-          {media.map((m) => (
-            <li key={m.id}>
-              {m.label} (pH {m.pH}){' '}
-              <button
-                type="button"
-                onClick={() => remove(m.id)}
-                aria-label={`Remove medium ${m.label}`}
-              >
-                Remove
-              </button>
-            </li>
-          ))}
-        </ul>
-      ) : null}
-      <BiorelevantPresets media={media} busy={busy} onAdd={(m) => void addPreset(m)} />
-      <form className="form-grid" onSubmit={add} noValidate aria-label="Add a dissolution medium">
-        {input('label', 'Medium name', undefined, 'e.g. phosphate buffer pH 6.8')}
-        {input('pH', 'pH')}
-        <div className="field">
-          <label htmlFor={ionFieldId}>Counter-ion in it</label>
-          <select
-            id={ionFieldId}
-            value={draft.ionId}
-            aria-invalid={errors.ionId ? true : undefined}
-            aria-describedby={describedBy(ionFieldId, errors.ionId)}
-            onChange={(ev) => set('ionId', ev.target.value)}
-          >
-            <option value="">Choose…</option>
-            {ION_CHOICES.map((i) => (
-              <option key={i.id} value={i.id}>
-                {i.name}
-              </option>
-            ))}
-          </select>
-          <FieldMessage id={ionFieldId} error={errors.ionId} />
-        </div>
-        {input('concentrationM', 'Its concentration', 'mol/L')}
-        {input('ionicStrengthM', 'Ionic strength', 'mol/L', 'Optional; for the Davies option')}
-        <div className="field">
-          <button type="submit" disabled={busy}>
-            Add medium
-          </button>
-        </div>
-      </form>
+      {media.length > 0 ? <MediaTable media={media} rows={rows} /> : null}
+      {media.length > 0 ? <MediaList media={media} onRemove={remove} /> : null}
+      <BiorelevantPresets media={media} busy={busy} onAdd={(m) => void addMedium(m)} />
+      <AddMediumForm media={media} busy={busy} onAdd={addMedium} />
     </section>
   );
 });

@@ -8,6 +8,9 @@ import {
 } from '@/screening-data/use-measure-next';
 import { MeasureNextList } from './MeasureNextList';
 
+/** The list itself, drawn again only when a new result arrives (not on each progress step). */
+const List = memo(MeasureNextList);
+
 /**
  * "Measure next": which bench measurement would most reduce the doubt about first place (the
  * expected value of sample information over the rank-robustness Monte Carlo, core measure-next/),
@@ -55,7 +58,7 @@ export const MeasureNextPanel = memo(function MeasureNextPanelView({
               of the draws: the doubt about first place is {pct(r.doubt)}.
             </p>
           ) : null}
-          <MeasureNextList result={r} labels={labels} />
+          <List result={r} labels={labels} />
           <p className="muted">
             {r.iterations} draws × {r.outcomes} outcomes per measurement, fixed seed; ± is the Monte
             Carlo error{state.ms !== undefined ? `; computed in ${Math.round(state.ms)} ms` : ''}.

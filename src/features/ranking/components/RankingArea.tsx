@@ -1,123 +1,151 @@
-import { memo, useCallback, useDeferredValue, useEffect, useMemo, useState } from 'react';
-import { rankCandidates, screeningWeightsSchema, separationSummary } from '@/chem';
-import { CAUTION_LINES } from '@/components/Cautions';
-import { WhiskerBars } from '@/components/charts/WhiskerBars';
+import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from 'react';
+import {
+  rankCandidates,
+  screeningWeightsSchema,
+  separationSummary,
+  type ScreeningWeights,
+} from '@/chem';
 import { ScreenOutcomesPanel } from '@/components/ScreenOutcomesPanel';
 import type { ProjectRecord } from '@/persistence/records';
-import { useProjectScreening } from '@/screening-data/use-screening';
+import { prewarmMeasureNextWorker } from '@/screening-data/use-measure-next';
+import { useProjectScreening, type ScreeningState } from '@/screening-data/use-screening';
 import type { ProjectScreening } from '@/screening-data/compute-screening';
 import { useNavigationStore } from '@/stores/navigation-store';
 import { useRankingViewStore } from '@/stores/ranking-view-store';
-import {
-  useRobustness,
-  ROBUSTNESS_ITERATIONS,
-  type RobustnessState,
-} from '@/screening-data/use-robustness';
 import { useWeights } from '../hooks/use-weights';
-import { BufferMedia } from './BufferMedia';
-import { ExcipientMatrix } from './ExcipientMatrix';
 import { displayRows, freeFormShown } from '../ranking-rows';
 import { SeparationLine } from './SeparationLine';
 import { RankingTable } from './RankingTable';
-import { ScreeningConditions } from './ScreeningConditions';
-import { SolubilityPanel } from './SolubilityPanel';
-import { MeasureNextPanel } from './MeasureNextPanel';
+import { RankingCautions, RankingPanels, type SettledRanking } from './RankingPanels';
 import { WeightSliders } from './WeightSliders';
 import '../ranking.css';
 
+/** The salt screen's outcomes so far; it reads its own records, so a weight step leaves it alone. */
+const Outcomes = memo(ScreenOutcomesPanel);
+
 /** A weight movement has ended when the weights stood still this long (ms) or the slider sent `change`. */
 const SETTLE_MS = 400;
+/**
+ * …and it has ended this long after the slider's `change` with no other `change` (ms): key presses a
+ * person makes in a row (two or three a second) settle once, after the last, so the panels below and
+ * the document order do not take the main thread between two presses.
+ */
+const CHANGE_SETTLE_MS = 400;
 
-/** The cautions, in full, beside the ranking (not behind a button). */
-export const RankingCautions = memo(function RankingCautionsView() {
-  return (
-    <aside className="ranking-cautions" aria-label="Cautions for reading this ranking">
-      <strong>Read with care.</strong>
-      <ul>
-        {CAUTION_LINES.map((l) => (
-          <li key={l}>{l}</li>
-        ))}
-      </ul>
-    </aside>
-  );
-});
+type GoTo = ReturnType<typeof useNavigationStore.getState>['goTo'];
 
-/** Rank robustness: the Monte Carlo's probabilities as bars, with its progress while it runs. */
-const RobustnessPanel = memo(function RobustnessPanelView({
-  robustness,
-  labels,
-}: {
-  robustness: RobustnessState;
-  labels: Record<string, string>;
-}) {
-  // Ordered by the probability itself, so the bars change only when a new Monte Carlo run arrives.
-  const results = [...(robustness.results ?? [])].sort(
-    (a, b) => b.pTop3 - a.pTop3 || b.pFirst - a.pFirst,
+/**
+ * The ranking under the weights of this instant (the table follows every slider step) and as it
+ * stood when the last movement ended (`settled`, deferred: the separation line and every panel below
+ * the table follow it). A movement ends on the slider's `change` or when the weights stand still for
+ * a moment (a reset, another tab, no `change`).
+ */
+function useRankingView(data: ProjectScreening | undefined, weights: ScreeningWeights) {
+  const ranked = useMemo(
+    () => (data ? rankCandidates(data.screen.rows, weights) : []),
+    [data, weights],
   );
+  const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
+  const [settleTick, setSettleTick] = useState(0);
+  const bump = useCallback(() => setSettleTick((t) => t + 1), []);
+  // The slider's `change` settles a moment later, so that a run of key presses settles once, after
+  // the frames of its re-ranked tables.
+  const pending = useRef<ReturnType<typeof setTimeout>>(undefined);
+  const onSettle = useCallback(() => {
+    clearTimeout(pending.current);
+    pending.current = setTimeout(bump, CHANGE_SETTLE_MS);
+  }, [bump]);
+  useEffect(() => () => clearTimeout(pending.current), []);
+  useEffect(() => {
+    const t = setTimeout(bump, SETTLE_MS);
+    return () => clearTimeout(t);
+  }, [weights, bump]);
+  const settledNow = useMemo<SettledRanking>(
+    () => ({ rows, weights, media: data?.settings.media ?? [] }),
+    [data, settleTick], // eslint-disable-line react-hooks/exhaustive-deps
+  );
+  const settled = useDeferredValue(settledNow);
+  const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
+  return { rows, settleTick, onSettle, settled, labels };
+}
+
+/** The shortlist is empty: where to fill it. */
+function EmptyShortlist({ goTo }: { goTo: GoTo }) {
   return (
-    <section className="panel" aria-labelledby="robustness-title">
-      <header className="panel-head">
-        <h2 id="robustness-title">How firm is the order?</h2>
-        {robustness.status === 'running' ? (
-          <span className="progress-wrap">
-            <label htmlFor="robustness-progress">Monte Carlo</label>{' '}
-            <progress id="robustness-progress" max={1} value={robustness.progress} />
-          </span>
-        ) : null}
-      </header>
-      <p className="muted">
-        Probability that each candidate stays in the top three when the estimates move within their
-        stated uncertainties (pKa, S₀, each salt’s K_sp), {ROBUSTNESS_ITERATIONS} draws with a fixed
-        seed, computed in the background with the current weights.
+    <section className="panel" aria-labelledby="ranking-title">
+      <h2 id="ranking-title">Ranking</h2>
+      <p>
+        The shortlist is empty. Pick counter-ions in the{' '}
+        <a href="#/counter-ions" onClick={(e) => (e.preventDefault(), goTo('counter-ions'))}>
+          Counter-ions
+        </a>{' '}
+        area; they are ranked here.
       </p>
-      {robustness.status === 'error' ? (
-        <p role="alert">Robustness could not be computed: {robustness.error}</p>
-      ) : null}
-      {robustness.results ? (
-        <div className={robustness.status === 'running' ? 'stale' : undefined}>
-          <WhiskerBars
-            title="Probability of staying in the top three"
-            caption={results
-              .map(
-                (x) =>
-                  `${labels[x.id] ?? x.id}: ${(x.pTop3 * 100).toFixed(0)} % top three, ${(x.pFirst * 100).toFixed(0)} % first`,
-              )
-              .join('; ')}
-            unit="% of draws in the top three"
-            domain={[0, 100]}
-            format={(x) => `${x.toFixed(0)}`}
-            rows={results.map((x) => ({
-              id: x.id,
-              label: labels[x.id] ?? x.id,
-              value: x.pTop3 * 100,
-              note: `(first ${(x.pFirst * 100).toFixed(0)} %)`,
-            }))}
-          />
-        </div>
-      ) : robustness.status === 'running' ? (
-        <p className="loading">Drawing…</p>
-      ) : null}
     </section>
   );
-});
+}
 
-/** What the screen assumed, in words; re-rendered only when the screen changes. */
-const ScreenAssumptions = memo(function ScreenAssumptionsView({
-  data,
-}: {
-  data: ProjectScreening;
-}) {
+/** The area's title with what the screen is doing now. */
+function RankingHeader(props: { screening: ScreeningState; count: number; saving: boolean }) {
+  const { status, result } = props.screening;
+  const text =
+    status === 'loading'
+      ? result
+        ? 'Recomputing…'
+        : 'Screening the shortlist (loading the structure tools)…'
+      : status === 'error'
+        ? 'Screen failed'
+        : `${props.count} candidates ranked${props.saving ? ' · saving weights…' : ''}`;
   return (
-    <section className="panel" aria-labelledby="assumptions-title">
-      <h2 id="assumptions-title">Assumptions of this screen</h2>
-      <ul>
-        {[...data.notes, ...data.screen.assumptions].map((a) => (
-          <li key={a}>{a}</li>
-        ))}
-      </ul>
-    </section>
+    <header className="panel-head">
+      <h2 id="ranking-title">Ranking</h2>
+      <span role="status" aria-live="polite" className="muted">
+        {text}
+      </span>
+    </header>
   );
-});
+}
+
+/** Why the shortlist cannot be screened, and where to fix it. */
+function ScreenErrorNote({ error, goTo }: { error: string | undefined; goTo: GoTo }) {
+  return (
+    <div role="alert" className="screen-error">
+      <p>
+        <strong>The shortlist cannot be screened yet:</strong> {error}
+      </p>
+      <p>
+        Fix it in the{' '}
+        <a href="#/compound" onClick={(e) => (e.preventDefault(), goTo('compound'))}>
+          Compound
+        </a>{' '}
+        area (an intrinsic solubility, or a melting point with log P, and a dose are needed).
+      </p>
+    </div>
+  );
+}
+
+/** Candidates the screen left out, and how to read the table's marks. */
+function TableNotes({ missing }: { missing: ProjectScreening['missing'] }) {
+  return (
+    <>
+      {missing.length ? (
+        <ul className="missing">
+          {missing.map((m) => (
+            <li key={m.candidateId}>
+              {m.ionId}: not screened — {m.reason}
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      <p className="legend muted">
+        <span className="origin origin-estimated">est.</span> estimate from the models;{' '}
+        <span className="origin origin-measured">meas.</span> rests on your bench data. Dose number
+        D₀ = (dose / 250 mL) / solubility; above 1 the dose does not dissolve (ICH M9). ±1σ ranges
+        come from each estimate’s stated uncertainty.
+      </p>
+    </>
+  );
+}
 
 /** The Ranking area: the weighted, explained shortlist with its robustness and pH–solubility picture. */
 export function RankingArea({ project }: { project: ProjectRecord }) {
@@ -127,101 +155,34 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
   const focus = useRankingViewStore((s) => s.focus);
   const resetView = useRankingViewStore((s) => s.resetForProject);
   useEffect(() => resetView(), [project.id, resetView]);
-
+  // The worker of "Measure next" loads while the screen computes, not after the table is drawn.
+  useEffect(() => prewarmMeasureNextWorker(), []);
   const data = screening.result;
-  // The table re-ranks in the same frame as the slider (its re-ordering is transform-based while the
-  // slider moves, see RankingTable). What is slower to follow — the media table and the chart's top
-  // three — follows when the movement ends (`settleTick`), the Monte Carlo after the weights settle.
-  const ranked = useMemo(
-    () => (data ? rankCandidates(data.screen.rows, weights) : []),
-    [data, weights],
-  );
-  const rows = useMemo(() => (data ? displayRows(data, ranked) : []), [data, ranked]);
-  const deferredWeights = useDeferredValue(weights);
+  const { rows, settleTick, onSettle, settled, labels } = useRankingView(data, weights);
   const separation = useMemo(
-    () => (data ? separationSummary(data.screen, deferredWeights) : null),
-    [data, deferredWeights],
+    () => (data ? separationSummary(data.screen, settled.weights) : null),
+    [data, settled.weights],
   );
+  const { name, doseMg } = project.compound;
   const freeForm = useMemo(
-    () => (data ? freeFormShown(data, project.compound.name, project.compound.doseMg) : null),
-    [data, project.compound.name, project.compound.doseMg],
+    () => (data ? freeFormShown(data, name, doseMg) : null),
+    [data, name, doseMg],
   );
-  const [settleTick, setSettleTick] = useState(0);
-  const onSettle = useCallback(() => setSettleTick((t) => t + 1), []);
-  // A movement also ends when the weights stand still for a moment (a reset, another tab, no `change`).
-  useEffect(() => {
-    const t = setTimeout(onSettle, SETTLE_MS);
-    return () => clearTimeout(t);
-  }, [weights, onSettle]);
-  // The ranking as it stood when the last movement ended (or the screen changed).
-  const settledRows = useMemo(() => rows, [data, settleTick]); // eslint-disable-line react-hooks/exhaustive-deps
-  const mediaView = useDeferredValue(
-    useMemo(() => ({ rows: settledRows, media: data?.settings.media ?? [] }), [settledRows, data]),
-  );
-  const robustRows = useMemo(() => data?.screen.rows.map((r) => r.robustness), [data]);
-  const labels = useMemo(() => Object.fromEntries(rows.map((r) => [r.id, r.label])), [data]); // eslint-disable-line react-hooks/exhaustive-deps
-  const topKey = useDeferredValue(
-    settledRows
-      .filter((r) => r.rank !== null && r.rank <= 3)
-      .sort((a, b) => a.rank! - b.rank!)
-      .map((r) => r.id)
-      .join('|'),
-  );
-  const robustness = useRobustness(robustRows, deferredWeights, data?.screen.robustnessShared);
-  const onFocus = useCallback(
-    (id: string) => {
-      focus(id);
-      goTo('energetics');
-    },
-    [focus, goTo],
+  const onFocus = useCallback((id: string) => (focus(id), goTo('energetics')), [focus, goTo]);
+  const onReset = useCallback(
+    () => (setWeights(screeningWeightsSchema.parse({})), onSettle()),
+    [setWeights, onSettle],
   );
 
-  const candidateCount = screening.candidates?.length;
-  if (candidateCount === 0) {
-    return (
-      <section className="panel" aria-labelledby="ranking-title">
-        <h2 id="ranking-title">Ranking</h2>
-        <p>
-          The shortlist is empty. Pick counter-ions in the{' '}
-          <a href="#/counter-ions" onClick={(e) => (e.preventDefault(), goTo('counter-ions'))}>
-            Counter-ions
-          </a>{' '}
-          area; they are ranked here.
-        </p>
-      </section>
-    );
-  }
-
+  if (screening.candidates?.length === 0) return <EmptyShortlist goTo={goTo} />;
   return (
     <div className="ranking-area">
       <section className="panel" aria-labelledby="ranking-title">
-        <header className="panel-head">
-          <h2 id="ranking-title">Ranking</h2>
-          <span role="status" aria-live="polite" className="muted">
-            {screening.status === 'loading'
-              ? data
-                ? 'Recomputing…'
-                : 'Screening the shortlist (loading the structure tools)…'
-              : screening.status === 'error'
-                ? 'Screen failed'
-                : `${rows.length} candidates ranked${saving ? ' · saving weights…' : ''}`}
-          </span>
-        </header>
+        <RankingHeader screening={screening} count={rows.length} saving={saving} />
         <RankingCautions />
-        <ScreenOutcomesPanel project={project} />
+        <Outcomes project={project} />
         {screening.status === 'error' ? (
-          <div role="alert" className="screen-error">
-            <p>
-              <strong>The shortlist cannot be screened yet:</strong> {screening.error}
-            </p>
-            <p>
-              Fix it in the{' '}
-              <a href="#/compound" onClick={(e) => (e.preventDefault(), goTo('compound'))}>
-                Compound
-              </a>{' '}
-              area (an intrinsic solubility, or a melting point with log P, and a dose are needed).
-            </p>
-          </div>
+          <ScreenErrorNote error={screening.error} goTo={goTo} />
         ) : null}
         {!data && screening.status === 'loading' ? (
           <p className="loading" role="status">
@@ -230,27 +191,13 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
         ) : null}
         {data ? (
           <>
-            {data.missing.length ? (
-              <ul className="missing">
-                {data.missing.map((m) => (
-                  <li key={m.candidateId}>
-                    {m.ionId}: not screened — {m.reason}
-                  </li>
-                ))}
-              </ul>
-            ) : null}
-            <p className="legend muted">
-              <span className="origin origin-estimated">est.</span> estimate from the models;{' '}
-              <span className="origin origin-measured">meas.</span> rests on your bench data. Dose
-              number D₀ = (dose / 250 mL) / solubility; above 1 the dose does not dissolve (ICH M9).
-              ±1σ ranges come from each estimate’s stated uncertainty.
-            </p>
+            <TableNotes missing={data.missing} />
             <SeparationLine summary={separation} />
             <div className="ranking-grid">
               <WeightSliders
                 weights={weights}
                 onChange={setWeights}
-                onReset={() => (setWeights(screeningWeightsSchema.parse({})), onSettle())}
+                onReset={onReset}
                 onSettle={onSettle}
               />
               <RankingTable
@@ -264,24 +211,7 @@ export function RankingArea({ project }: { project: ProjectRecord }) {
         ) : null}
       </section>
       {data ? (
-        <>
-          <ScreeningConditions project={project} settings={data.settings} />
-          <BufferMedia project={project} media={mediaView.media} rows={mediaView.rows} />
-          <ExcipientMatrix
-            project={project}
-            chosen={data.settings.excipients}
-            rows={mediaView.rows}
-          />
-          <RobustnessPanel robustness={robustness} labels={labels} />
-          <MeasureNextPanel data={data} weights={deferredWeights} labels={labels} />
-          <SolubilityPanel
-            data={data}
-            labels={labels}
-            topKey={topKey}
-            doseMg={project.compound.doseMg}
-          />
-          <ScreenAssumptions data={data} />
-        </>
+        <RankingPanels project={project} data={data} settled={settled} labels={labels} />
       ) : null}
     </div>
   );

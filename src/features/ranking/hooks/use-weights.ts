@@ -30,9 +30,11 @@ export function useWeights(project: ProjectRecord): {
   useEffect(() => {
     const fresh = JSON.parse(storedKey) as ScreeningWeights;
     // Another tab's move of a slider not being moved here is taken over at once.
+    // The same values keep the same object: the ranking, robustness and "Measure next" restart on a
+    // new object (this effect runs on opening too, and a restart cost a whole second run).
     if (!timer.current) {
       base.current = fresh;
-      setLocal(fresh);
+      setLocal((w) => (JSON.stringify(w) === storedKey ? w : fresh));
     }
   }, [storedKey, project.id]);
 
