@@ -1,6 +1,11 @@
 import { phSolubilityProfile, solubilityAtPh, type PhProfile } from '../ph-profile';
 import { doseNumber } from '../dose-number';
-import type { HydrochlorideReference, ScreenMedium } from './media';
+import {
+  hydrochlorideBelow,
+  mediumActivity,
+  type HydrochlorideReference,
+  type ScreenMedium,
+} from './media';
 import { gridFromPoints } from '../ph-grid-solubility';
 import { screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
@@ -45,25 +50,11 @@ export function freeFormGastric(
   hcl: HydrochlorideReference | null,
 ): MediumResult | null {
   if (!gastric) return null;
-  const logS0 = ctx.log10IntrinsicM.value;
-  const activity =
-    ctx.activity?.model === 'davies'
-      ? { ...ctx.activity, backgroundIonicStrengthM: gastric.ionicStrengthM }
-      : ctx.activity;
-  const own = solubilityAtPh(ctx.drug, logS0, null, gastric.pH, { activity });
-  let solubilityM = own.solubilityM;
-  let convertsTo: string | null = null;
-  const chlorideM = gastric.ions.chloride ?? 0;
-  if (hcl && chlorideM > 0) {
-    const h = solubilityAtPh(ctx.drug, logS0, hcl.salt, gastric.pH, {
-      activity,
-      commonIonM: chlorideM,
-    });
-    if (h.solid === 'salt' && h.solubilityM < solubilityM) {
-      solubilityM = h.solubilityM;
-      convertsTo = hcl.cand.stoichiometry.label ?? 'hydrochloride';
-    }
-  }
+  const activity = mediumActivity(ctx, gastric);
+  const own = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, null, gastric.pH, { activity });
+  const toHcl = hcl ? hydrochlorideBelow(ctx, hcl, gastric, activity, own.solubilityM) : null;
+  const solubilityM = toHcl?.solubilityM ?? own.solubilityM;
+  const convertsTo = toHcl?.convertsTo ?? null;
   const mg = freeFormMgPerMl(ctx, solubilityM);
   return {
     id: gastric.id,

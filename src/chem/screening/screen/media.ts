@@ -75,24 +75,12 @@ export function mediumResults(
   const dose = ctx.doseMg;
   return media.map((m) => {
     const commonIonM = m.ions[cand.counterIon.id] ?? 0;
-    const activity: ProfileOptions['activity'] =
-      ctx.activity?.model === 'davies'
-        ? { ...ctx.activity, backgroundIonicStrengthM: m.ionicStrengthM }
-        : ctx.activity;
+    const activity = mediumActivity(ctx, m);
     const pt = solubilityAtPh(ctx.drug, logS0, salt, m.pH, { activity, commonIonM });
-    let solubilityM = pt.solubilityM;
-    let convertsTo: string | null = null;
-    const chlorideM = m.ions.chloride ?? 0;
-    if (hcl && hcl.cand.id !== cand.id && cand.counterIon.id !== 'chloride' && chlorideM > 0) {
-      const h = solubilityAtPh(ctx.drug, logS0, hcl.salt, m.pH, {
-        activity,
-        commonIonM: chlorideM,
-      });
-      if (h.solid === 'salt' && h.solubilityM < solubilityM) {
-        solubilityM = h.solubilityM;
-        convertsTo = hcl.cand.stoichiometry.label ?? 'hydrochloride';
-      }
-    }
+    const otherThanHcl = hcl && hcl.cand.id !== cand.id && cand.counterIon.id !== 'chloride';
+    const toHcl = otherThanHcl ? hydrochlorideBelow(ctx, hcl, m, activity, pt.solubilityM) : null;
+    const solubilityM = toHcl?.solubilityM ?? pt.solubilityM;
+    const convertsTo = toHcl?.convertsTo ?? null;
     const mg = freeFormMgPerMl(ctx, solubilityM);
     return {
       id: m.id,
@@ -105,4 +93,36 @@ export function mediumResults(
       convertsTo,
     };
   });
+}
+
+/** The activity model in a medium: Davies takes the medium's own background ionic strength. */
+export function mediumActivity(
+  ctx: ScreenContext,
+  m: Pick<ScreeningMedium, 'ionicStrengthM'>,
+): ProfileOptions['activity'] {
+  return ctx.activity?.model === 'davies'
+    ? { ...ctx.activity, backgroundIonicStrengthM: m.ionicStrengthM }
+    : ctx.activity;
+}
+
+/**
+ * The hydrochloride a base converts to in a chloride medium, when it is less soluble there than
+ * `solubilityM` (the form's own solubility in that medium): its solubility and label, else null.
+ */
+export function hydrochlorideBelow(
+  ctx: ScreenContext,
+  hcl: HydrochlorideReference,
+  m: Pick<ScreeningMedium, 'pH' | 'ions'>,
+  activity: ProfileOptions['activity'],
+  solubilityM: number,
+): { solubilityM: number; convertsTo: string } | null {
+  const chlorideM = m.ions.chloride ?? 0;
+  if (chlorideM <= 0) return null;
+  const h = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, hcl.salt, m.pH, {
+    activity,
+    commonIonM: chlorideM,
+  });
+  return h.solid === 'salt' && h.solubilityM < solubilityM
+    ? { solubilityM: h.solubilityM, convertsTo: hcl.cand.stoichiometry.label ?? 'hydrochloride' }
+    : null;
 }
