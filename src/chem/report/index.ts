@@ -3,3 +3,4 @@ export * from './cautions';
 export * from './csv-cell-guard';
 export * from './precision';
 export * from './shown-numbers';
+export * from './superscript';

@@ -1,4 +1,5 @@
 import { sig } from './chart-format';
+import { superscript } from '@/chem';
 
 export interface SolubilitySeries {
   id: string;
@@ -14,28 +15,11 @@ export interface SolubilitySeries {
 /** ICH M9 (2019) pH range for the solubility class: 1.2–6.8. */
 export const ICH_M9_BAND: [number, number] = [1.2, 6.8];
 
-const SUPERSCRIPT: Record<string, string> = {
-  '-': '⁻',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
-
 /** Tick label of a log axis: plain numbers from 0.001 to 1000, powers of ten beyond ("2×10⁴"). */
 export function logTick(v: number): string {
   const k = Math.floor(Math.log10(v) + 1e-9);
   if (k >= -3 && k <= 3) return String(Number(v.toPrecision(2)));
-  const power = `10${String(k)
-    .split('')
-    .map((c) => SUPERSCRIPT[c] ?? c)
-    .join('')}`;
+  const power = `10${superscript(String(k))}`;
   const mantissa = Number((v / 10 ** k).toPrecision(2));
   return mantissa === 1 ? power : `${mantissa}×${power}`;
 }

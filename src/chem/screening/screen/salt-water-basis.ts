@@ -1,4 +1,5 @@
 import { SALT_SOLUBILITY_MODEL } from '../salt-solubility/salt-solubility-model.data';
+import { superscript } from '../../report/superscript';
 
 /**
  * What a salt's water solubility actually rests on, as data: the one source every explanation of it
@@ -115,20 +116,7 @@ export function saltSolubilityBasis(
   };
 }
 
-const SUPERSCRIPT: Record<string, string> = {
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-  '.': '·',
-};
-const tenTo = (d: number) => `10${String(d).replace(/[0-9.]/g, (c) => SUPERSCRIPT[c] ?? c)}`;
+const tenTo = (d: number) => `10${superscript(String(d), /[0-9.]/g)}`;
 
 /** The fitted model in words, from its own description (which predictors, which data, which error). */
 export function modelWords(m: NonNullable<SaltSolubilityBasis['model']>): string {
