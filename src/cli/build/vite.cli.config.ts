@@ -8,7 +8,11 @@ import { defineConfig } from 'vite';
  * Output: dist-cli/ (git-ignored), written by `npm run build:cli`, which `prepare` runs after `npm ci`.
  * Dependencies (zod, papaparse, openchemlib) stay in node_modules and are imported from there;
  * openchemlib is imported only when a SMILES is parsed.
+ *
+ * For profiling: SALTSMITH_CLI_PLAIN=1 keeps function names (no minifying) and SALTSMITH_CLI_OUT=<dir>
+ * writes the build elsewhere (see DEVELOPERS.md, "Profiling the batch").
  */
+const plain = process.env['SALTSMITH_CLI_PLAIN'] === '1';
 const root = fileURLToPath(new URL('../../..', import.meta.url));
 
 export default defineConfig({
@@ -20,10 +24,10 @@ export default defineConfig({
   ssr: { noExternal: true, external: ['openchemlib'] },
   resolve: { alias: { '@': fileURLToPath(new URL('../..', import.meta.url)) } },
   build: {
-    outDir: 'dist-cli',
+    outDir: process.env['SALTSMITH_CLI_OUT'] ?? 'dist-cli',
     emptyOutDir: true,
     target: 'node20',
-    minify: true,
+    minify: !plain,
     sourcemap: false,
     copyPublicDir: false,
     reportCompressedSize: false,
