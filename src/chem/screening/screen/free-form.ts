@@ -1,4 +1,9 @@
-import { phSolubilityProfile, solubilityAtPh, type PhProfile } from '../ph-profile';
+import {
+  checkProfileInput,
+  PROFILE_ASSUMPTIONS,
+  solubilityAtPh,
+  type PhProfile,
+} from '../ph-profile';
 import { doseNumber } from '../dose-number';
 import {
   hydrochlorideBelow,
@@ -6,16 +11,25 @@ import {
   type HydrochlorideReference,
   type ScreenMedium,
 } from './media';
-import { gridFromPoints } from '../ph-grid-solubility';
+import { freeFormOnGrid } from '../ph-grid-solubility';
 import { screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import { freeFormPoorlySolubleFlag } from './screen-reasons';
 import type { FreeFormResult, MediumResult, ScreenFlag } from './screen.types';
 
-/** The free form on its own: its pH–solubility profile, dose numbers across ICH M9 pH and its flag. */
-export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; profile: PhProfile } {
-  const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, null, ctx.grid);
-  const { doses, worst } = screenDoseNumbers(ctx, null, gridFromPoints(profile.points));
+/**
+ * The free form on its own: its pH–solubility profile, dose numbers across ICH M9 pH and its flag.
+ * The profile is the context's free-form grid (ctx.grids.profile: the pH list phSolubilityProfile
+ * builds and, at each pH, the 10^(log₁₀ S_free) its points hold — the free form alone needs no activity
+ * model), after phSolubilityProfile's input checks.
+ */
+export function screenFreeForm(ctx: ScreenContext): {
+  result: FreeFormResult;
+  profile: Pick<PhProfile, 'assumptions'>;
+} {
+  checkProfileInput(ctx.drug, ctx.log10IntrinsicM.value, null, ctx.grid);
+  const grid = freeFormOnGrid(ctx.grids.profile);
+  const { doses, worst } = screenDoseNumbers(ctx, null, grid);
   const flags: ScreenFlag[] = [];
   if (worst.doseNumber !== null && worst.doseNumber > 1) {
     flags.push(freeFormPoorlySolubleFlag({ ...worst, doseNumber: worst.doseNumber }));
@@ -26,9 +40,9 @@ export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; pr
     profile:
       ctx.profiles === 'none'
         ? []
-        : profile.points.map((p) => ({
-            pH: p.pH,
-            solubilityMgPerMl: freeFormMgPerMl(ctx, p.solubilityM),
+        : grid.phs.map((pH, k) => ({
+            pH,
+            solubilityMgPerMl: freeFormMgPerMl(ctx, grid.solubilityM[k]!),
           })),
     doseNumbers: doses,
     worst,
@@ -36,7 +50,7 @@ export function screenFreeForm(ctx: ScreenContext): { result: FreeFormResult; pr
     gastric: null,
     flags,
   };
-  return { result, profile };
+  return { result, profile: { assumptions: [...PROFILE_ASSUMPTIONS] } };
 }
 
 /**
@@ -52,7 +66,7 @@ export function freeFormGastric(
   if (!gastric) return null;
   const activity = mediumActivity(ctx, gastric);
   const own = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, null, gastric.pH, { activity });
-  const toHcl = hcl ? hydrochlorideBelow(ctx, hcl, gastric, activity, own.solubilityM) : null;
+  const toHcl = hcl ? hydrochlorideBelow(ctx, hcl, gastric, own.solubilityM) : null;
   const solubilityM = toHcl?.solubilityM ?? own.solubilityM;
   const convertsTo = toHcl?.convertsTo ?? null;
   const mg = freeFormMgPerMl(ctx, solubilityM);

@@ -1,13 +1,16 @@
 import { doseNumber } from '../dose-number';
-import { solubilityAtPh, type ProfileOptions, type ProfileSalt } from '../ph-profile';
+import { solubilityAtPh, type ProfilePoint, type ProfileSalt } from '../ph-profile';
 import type { ScreeningMedium, ScreeningSettings } from '../settings';
 import type { KspChoice } from './ksp-choice';
+import { mediumActivity, saltInMedium } from './medium-solubility';
 import { isPrepared, type PreparedCandidate, type PreparedOrError } from './prepare-candidate';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import type { MediumResult, ScreeningCandidate } from './screen.types';
 
 /** Sodium in USP simulated gastric fluid: 2.0 g/L NaCl → 0.034 mol/L (composition from memory of the USP text). */
 export const GASTRIC_SODIUM_M = 2.0 / 58.44;
+
+export { mediumActivity };
 
 export type ScreenMedium = ScreeningMedium & { gastric: boolean };
 
@@ -28,6 +31,11 @@ export function screeningMedia(settings: ScreeningSettings): ScreenMedium[] {
 export interface HydrochlorideReference {
   cand: ScreeningCandidate;
   salt: ProfileSalt;
+  /**
+   * Its point in each chloride medium of the screen, solved once: it depends on the compound, the
+   * hydrochloride and the medium only, and every other salt of the screen asks for it.
+   */
+  inMedium: Map<object, ProfilePoint>;
 }
 
 /**
@@ -60,10 +68,14 @@ export function hydrochlorideReference(
       counterIonPerSalt: st.counterIonPerSalt,
       log10Ksp: ksps.get(hcl.cand.id)!.log10Ksp.value,
     },
+    inMedium: new Map(),
   };
 }
 
-/** A candidate's solubility and dose number in each medium, with the common-ion effect and conversion. */
+/**
+ * A candidate's solubility and dose number in each medium, with the common-ion effect and conversion.
+ * The salt has passed the profile's checks (the row computes its profile first).
+ */
 export function mediumResults(
   ctx: ScreenContext,
   cand: ScreeningCandidate,
@@ -71,18 +83,20 @@ export function mediumResults(
   media: readonly ScreenMedium[],
   hcl: HydrochlorideReference | null,
 ): MediumResult[] {
-  const logS0 = ctx.log10IntrinsicM.value;
   const dose = ctx.doseMg;
-  return media.map((m) => {
-    const commonIonM = m.ions[cand.counterIon.id] ?? 0;
-    const activity = mediumActivity(ctx, m);
-    const pt = solubilityAtPh(ctx.drug, logS0, salt, m.pH, { activity, commonIonM });
-    const otherThanHcl = hcl && hcl.cand.id !== cand.id && cand.counterIon.id !== 'chloride';
-    const toHcl = otherThanHcl ? hydrochlorideBelow(ctx, hcl, m, activity, pt.solubilityM) : null;
-    const solubilityM = toHcl?.solubilityM ?? pt.solubilityM;
+  const counterIonId = cand.counterIon.id;
+  const otherThanHcl = hcl !== null && hcl.cand.id !== cand.id && counterIonId !== 'chloride';
+  const out: MediumResult[] = new Array<MediumResult>(media.length);
+  for (let i = 0; i < media.length; i++) {
+    const m = media[i]!;
+    const commonIonM = m.ions[counterIonId] ?? 0;
+    const pt = saltInMedium(ctx, salt, media, i, commonIonM);
+    const ownM = pt.solubilityM;
+    const toHcl = otherThanHcl ? hydrochlorideBelow(ctx, hcl, m, ownM) : null;
+    const solubilityM = toHcl?.solubilityM ?? ownM;
     const convertsTo = toHcl?.convertsTo ?? null;
     const mg = freeFormMgPerMl(ctx, solubilityM);
-    return {
+    out[i] = {
       id: m.id,
       label: m.label,
       pH: m.pH,
@@ -92,36 +106,31 @@ export function mediumResults(
       solid: convertsTo ? 'salt' : pt.solid,
       convertsTo,
     };
-  });
-}
-
-/** The activity model in a medium: Davies takes the medium's own background ionic strength. */
-export function mediumActivity(
-  ctx: ScreenContext,
-  m: Pick<ScreeningMedium, 'ionicStrengthM'>,
-): ProfileOptions['activity'] {
-  return ctx.activity?.model === 'davies'
-    ? { ...ctx.activity, backgroundIonicStrengthM: m.ionicStrengthM }
-    : ctx.activity;
+  }
+  return out;
 }
 
 /**
  * The hydrochloride a base converts to in a chloride medium, when it is less soluble there than
  * `solubilityM` (the form's own solubility in that medium): its solubility and label, else null.
+ * The hydrochloride's own point is solved once per medium object of the screen (`hcl.inMedium`).
  */
 export function hydrochlorideBelow(
   ctx: ScreenContext,
   hcl: HydrochlorideReference,
-  m: Pick<ScreeningMedium, 'pH' | 'ions'>,
-  activity: ProfileOptions['activity'],
+  m: Pick<ScreeningMedium, 'pH' | 'ions' | 'ionicStrengthM'>,
   solubilityM: number,
 ): { solubilityM: number; convertsTo: string } | null {
   const chlorideM = m.ions.chloride ?? 0;
   if (chlorideM <= 0) return null;
-  const h = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, hcl.salt, m.pH, {
-    activity,
-    commonIonM: chlorideM,
-  });
+  let h = hcl.inMedium.get(m);
+  if (h === undefined) {
+    h = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, hcl.salt, m.pH, {
+      activity: mediumActivity(ctx, m),
+      commonIonM: chlorideM,
+    });
+    hcl.inMedium.set(m, h);
+  }
   return h.solid === 'salt' && h.solubilityM < solubilityM
     ? { solubilityM: h.solubilityM, convertsTo: hcl.cand.stoichiometry.label ?? 'hydrochloride' }
     : null;
