@@ -54,13 +54,27 @@ function excipientsBeyond(phMax: number, kind: 'base' | 'acid'): string {
   return `${beyond.length} of ${EXCIPIENTS.length} bundled excipients have a slurry pH ${side(kind)} it (e.g. ${eg})`;
 }
 
+/**
+ * The margin disproportionationRisk reports (its `marginPh`), after the same input check, without its
+ * words: what a ranking scores, for rows that may never be written.
+ */
+export function disproportionationMarginPh(
+  phMax: number | null,
+  microenvironmentPh: number,
+  drugKind: 'base' | 'acid',
+): number | null {
+  requireFiniteInRange('microenvironmentPh', microenvironmentPh, 0, 14);
+  if (phMax === null) return null;
+  return drugKind === 'base' ? phMax - microenvironmentPh : microenvironmentPh - phMax;
+}
+
 export function disproportionationRisk(
   phMax: number | null,
   microenvironmentPh: number,
   drugKind: 'base' | 'acid',
   basis: 'stated' | 'assumed' = 'stated',
 ): DisproportionationResult {
-  requireFiniteInRange('microenvironmentPh', microenvironmentPh, 0, 14);
+  const margin = disproportionationMarginPh(phMax, microenvironmentPh, drugKind);
   const common = {
     basis,
     thresholdPh: phMax,
@@ -69,7 +83,7 @@ export function disproportionationRisk(
     worstExcipientId: null,
     probability: null,
   } as const;
-  if (phMax === null) {
+  if (phMax === null || margin === null) {
     return {
       ...common,
       risk: 'unknown',
@@ -77,7 +91,6 @@ export function disproportionationRisk(
       reason: 'pH_max lies outside pH 0–14, so no disproportionation check was possible',
     };
   }
-  const margin = drugKind === 'base' ? phMax - microenvironmentPh : microenvironmentPh - phMax;
   const risk = margin < 0 ? 'high' : margin < 1 ? 'watch' : 'low';
   return {
     ...common,

@@ -1,4 +1,5 @@
 import {
+  disproportionationMarginPh,
   disproportionationRisk,
   excipientDisproportionation,
   type DisproportionationResult,
@@ -14,6 +15,43 @@ export function chosenExcipients(settings: ScreeningSettings): ExcipientRecord[]
     .filter((e): e is ExcipientRecord => e !== undefined);
 }
 
+/** A salt judged against the microenvironment of its dose form (see microenvironmentJudgement). */
+export interface MicroenvironmentJudgement {
+  /** The disproportionation margin the ranking scores: `disproportionation.marginPh`, without words. */
+  readonly marginPh: number | null;
+  readonly disproportionation: DisproportionationResult;
+  readonly excipientRisks: ExcipientRisk[];
+}
+
+/**
+ * The judgement against the stated or the assumed microenvironment pH: its margin now (with the input
+ * check), its result and reason words when first read — a ranking reads every salt's margin but the
+ * words of the rows it writes only. The result is disproportionationRisk's, built from the same inputs.
+ */
+class JudgementAtPh implements MicroenvironmentJudgement {
+  readonly marginPh: number | null;
+  readonly excipientRisks: ExcipientRisk[] = [];
+  private result: DisproportionationResult | null = null;
+
+  constructor(
+    private readonly phMax: number | null,
+    private readonly microenvironmentPh: number,
+    private readonly drugKind: 'base' | 'acid',
+    private readonly basis: 'stated' | 'assumed',
+  ) {
+    this.marginPh = disproportionationMarginPh(phMax, microenvironmentPh, drugKind);
+  }
+
+  get disproportionation(): DisproportionationResult {
+    return (this.result ??= disproportionationRisk(
+      this.phMax,
+      this.microenvironmentPh,
+      this.drugKind,
+      this.basis,
+    ));
+  }
+}
+
 /**
  * A salt against the microenvironment of its dose form: against every chosen excipient when there are
  * any (they replace the single pH), else against the stated or the assumed microenvironment pH.
@@ -23,20 +61,15 @@ export function microenvironmentJudgement(
   phMax: number | null,
   phMaxSigma: number,
   drugKind: 'base' | 'acid',
-): { disproportionation: DisproportionationResult; excipientRisks: ExcipientRisk[] } {
-  const excipients = chosenExcipients(settings);
+): MicroenvironmentJudgement {
+  const excipients = settings.excipients.length > 0 ? chosenExcipients(settings) : [];
   if (excipients.length > 0) {
     const risks = excipientRisks(phMax, phMaxSigma, excipients, drugKind);
-    return {
-      disproportionation: excipientDisproportionation(phMax, phMaxSigma, risks, drugKind),
-      excipientRisks: risks,
-    };
+    const disproportionation = excipientDisproportionation(phMax, phMaxSigma, risks, drugKind);
+    return { marginPh: disproportionation.marginPh, disproportionation, excipientRisks: risks };
   }
   const basis = settings.microenvironmentPhStated ? 'stated' : 'assumed';
-  return {
-    disproportionation: disproportionationRisk(phMax, settings.microenvironmentPh, drugKind, basis),
-    excipientRisks: [],
-  };
+  return new JudgementAtPh(phMax, settings.microenvironmentPh, drugKind, basis);
 }
 
 /** The line of the screen's assumptions that says what the disproportionation criterion rests on. */

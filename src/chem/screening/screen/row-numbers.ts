@@ -102,7 +102,7 @@ export function rowNumbers(
     saltProbability: verdict?.saltProbability ?? null,
     log10WorstDoseNumber: worst.doseNumber === null ? null : Math.log10(worst.doseNumber),
     log10GastricDoseNumber: gastric?.doseNumber == null ? null : Math.log10(gastric.doseNumber),
-    phMaxMarginPh: micro.disproportionation.marginPh,
+    phMaxMarginPh: micro.marginPh,
     activeFraction: f,
     acceptabilityClass: cand.counterIon.acceptabilityClass,
     hygroscopicity: measured?.hygroscopicity ?? null,
