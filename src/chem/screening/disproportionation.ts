@@ -40,10 +40,13 @@ export interface DisproportionationResult {
 
 const side = (kind: 'base' | 'acid'): 'above' | 'below' => (kind === 'base' ? 'above' : 'below');
 
+/** Each bundled excipient's midpoint slurry pH (excipientPhEstimate), taken once. */
+const EXCIPIENT_MIDPOINT_PH: readonly number[] = EXCIPIENTS.map((e) => excipientPhEstimate(e).ph);
+
 /** "below the slurry pH of 14 of 27 bundled excipients (e.g. …)": what an unknown pH could meet. */
 function excipientsBeyond(phMax: number, kind: 'base' | 'acid'): string {
-  const beyond = EXCIPIENTS.filter((e) => {
-    const ph = excipientPhEstimate(e).ph;
+  const beyond = EXCIPIENTS.filter((_, k) => {
+    const ph = EXCIPIENT_MIDPOINT_PH[k]!;
     return kind === 'base' ? ph > phMax : ph < phMax;
   });
   if (beyond.length === 0) return `no bundled excipient's slurry pH lies ${side(kind)} it`;
@@ -75,28 +78,22 @@ export function disproportionationRisk(
   basis: 'stated' | 'assumed' = 'stated',
 ): DisproportionationResult {
   const margin = disproportionationMarginPh(phMax, microenvironmentPh, drugKind);
-  const common = {
+  const noPhMax = phMax === null || margin === null;
+  const risk = noPhMax ? 'unknown' : margin < 0 ? 'high' : margin < 1 ? 'watch' : 'low';
+  // one literal, its keys in the order the result always had (serialised rows keep their bytes)
+  return {
     basis,
     thresholdPh: phMax,
     conversionSide: side(drugKind),
     judgedAtPh: microenvironmentPh,
     worstExcipientId: null,
     probability: null,
-  } as const;
-  if (phMax === null || margin === null) {
-    return {
-      ...common,
-      risk: 'unknown',
-      marginPh: null,
-      reason: 'pH_max lies outside pH 0–14, so no disproportionation check was possible',
-    };
-  }
-  const risk = margin < 0 ? 'high' : margin < 1 ? 'watch' : 'low';
-  return {
-    ...common,
     risk,
-    marginPh: margin,
-    reason: reasonFor(risk, margin, phMax, microenvironmentPh, drugKind, basis),
+    marginPh: noPhMax ? null : margin,
+    reason:
+      noPhMax || risk === 'unknown'
+        ? 'pH_max lies outside pH 0–14, so no disproportionation check was possible'
+        : reasonFor(risk, margin, phMax, microenvironmentPh, drugKind, basis),
   };
 }
 

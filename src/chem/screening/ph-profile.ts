@@ -88,7 +88,7 @@ export const PROFILE_ASSUMPTIONS: readonly string[] = [
 ];
 
 /** The salt system of a profile (everything but the pH), checked once by checkSaltSystem. */
-function checkedSystem(
+export function checkedSystem(
   d: Protolyte,
   drugIonCharge: number,
   salt: ProfileSalt,
@@ -122,8 +122,11 @@ export function solubilityAtPh(
   return pointAt(p, log10IntrinsicM, system, pH);
 }
 
-/** One point of a profile from checked inputs (pH within 0–14); no check is repeated here. */
-function pointAt(
+/**
+ * One point of a profile from checked inputs: `p` from drugProtolyte, `system` from checkedSystem,
+ * pH within 0–14 (requirePh). No check is repeated here.
+ */
+export function pointAt(
   p: Protolyte,
   log10IntrinsicM: number,
   system: CheckedSaltSystem | null,

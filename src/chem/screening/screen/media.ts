@@ -2,7 +2,7 @@ import { doseNumber } from '../dose-number';
 import { solubilityAtPh, type ProfilePoint, type ProfileSalt } from '../ph-profile';
 import type { ScreeningMedium, ScreeningSettings } from '../settings';
 import type { KspChoice } from './ksp-choice';
-import { mediumActivity, saltInMedium } from './medium-solubility';
+import { commonIonIn, mediumActivity, saltInMedium } from './medium-solubility';
 import { isPrepared, type PreparedCandidate, type PreparedOrError } from './prepare-candidate';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import type { MediumResult, ScreeningCandidate } from './screen.types';
@@ -89,7 +89,7 @@ export function mediumResults(
   const out: MediumResult[] = new Array<MediumResult>(media.length);
   for (let i = 0; i < media.length; i++) {
     const m = media[i]!;
-    const commonIonM = m.ions[counterIonId] ?? 0;
+    const commonIonM = commonIonIn(ctx, media, i, counterIonId);
     const pt = saltInMedium(ctx, salt, media, i, commonIonM);
     const ownM = pt.solubilityM;
     const toHcl = otherThanHcl ? hydrochlorideBelow(ctx, hcl, m, ownM) : null;

@@ -1,4 +1,4 @@
-import { solubilityAtPh, type ProfileOptions, type ProfileSalt } from '../ph-profile';
+import { checkedSystem, pointAt, type ProfileOptions, type ProfileSalt } from '../ph-profile';
 import {
   log10FreeFormSolubilityM,
   requirePh,
@@ -17,7 +17,7 @@ import type { ScreenContext } from './screen-context';
  * With ideal activities and none of the salt's counter-ion in the medium, the general solver
  * (salt-equilibrium.ts solveCheckedSalt) takes its closed form, and so does this file, with the same
  * operations in the same order (tests/chem/screening/screen/medium-solubility.test.ts compares both
- * with Object.is over random inputs). Every other case calls solubilityAtPh itself.
+ * with Object.is over random inputs). Every other case takes solubilityAtPh's own steps.
  */
 
 /** The drug's side of one medium, the same for every salt of a screen. */
@@ -29,6 +29,8 @@ interface DrugInMedium {
   laD: number;
   /** The free form's solubility at the medium's pH, mol/L. */
   freeM: number;
+  /** The medium's own ions by id (its `ions` record's own entries), read for every salt. */
+  ions: Map<string, number>;
 }
 
 /** The activity model in a medium: Davies takes the medium's own background ionic strength. */
@@ -41,10 +43,9 @@ export function mediumActivity(
     : ctx.activity;
 }
 
-function drugInMedium(
-  ctx: ScreenContext,
-  m: Pick<ScreeningMedium, 'pH' | 'ionicStrengthM'>,
-): DrugInMedium {
+type MediumOfScreen = Pick<ScreeningMedium, 'pH' | 'ionicStrengthM' | 'ions'>;
+
+function drugInMedium(ctx: ScreenContext, m: MediumOfScreen): DrugInMedium {
   const activity = mediumActivity(ctx, m);
   // solubilityAtPh's checks for what is new here: the drug was checked by the context, the salt by the
   // row's profile; the pH of the medium is checked where it enters, as solubilityAtPh checks it
@@ -55,6 +56,7 @@ function drugInMedium(
     ideal: activity === undefined || activity.model === 'ideal',
     laD: log10ChargeFraction(p, m.pH, ctx.drug.ionCharge),
     freeM: 10 ** log10FreeFormSolubilityM(p, ctx.log10IntrinsicM.value, m.pH),
+    ions: new Map(Object.entries(m.ions)),
   };
 }
 
@@ -67,17 +69,31 @@ let cachedCtx: ScreenContext | null = null;
 let cachedMedia: readonly unknown[] | null = null;
 let cachedSides: (DrugInMedium | undefined)[] = [];
 
-function drugSide(
-  ctx: ScreenContext,
-  media: readonly Pick<ScreeningMedium, 'pH' | 'ionicStrengthM'>[],
-  i: number,
-): DrugInMedium {
+function drugSide(ctx: ScreenContext, media: readonly MediumOfScreen[], i: number): DrugInMedium {
   if (ctx !== cachedCtx || media !== cachedMedia) {
     cachedCtx = ctx;
     cachedMedia = media;
     cachedSides = new Array<DrugInMedium | undefined>(media.length);
   }
   return (cachedSides[i] ??= drugInMedium(ctx, media[i]!));
+}
+
+/** Names an object inherits from Object.prototype: `ions[id]` reads them when the record lacks id. */
+const INHERITED = new Set(Object.getOwnPropertyNames(Object.prototype));
+
+/**
+ * The counter-ion `counterIonId` already in medium `i` of `media`, mol/L: `ions[counterIonId] ?? 0`
+ * (a keyed read of a record by every salt's id is slow; the record's own entries are a Map per screen).
+ */
+export function commonIonIn(
+  ctx: ScreenContext,
+  media: readonly MediumOfScreen[],
+  i: number,
+  counterIonId: string,
+): number {
+  const own = drugSide(ctx, media, i).ions.get(counterIonId);
+  if (own !== undefined && own !== null) return own;
+  return INHERITED.has(counterIonId) ? (media[i]!.ions[counterIonId] ?? 0) : 0;
 }
 
 /** The point read from a medium; one object reused (the caller reads it before the next call). */
@@ -96,17 +112,18 @@ const point: MediumPoint = { solubilityM: 0, solid: 'free-form' };
 export function saltInMedium(
   ctx: ScreenContext,
   salt: ProfileSalt,
-  media: readonly Pick<ScreeningMedium, 'pH' | 'ionicStrengthM'>[],
+  media: readonly MediumOfScreen[],
   i: number,
   commonIonM: number,
 ): MediumPoint {
   const side = drugSide(ctx, media, i);
   const pH = media[i]!.pH;
   if (!side.ideal || commonIonM !== 0) {
-    const pt = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, salt, pH, {
-      activity: side.activity,
-      commonIonM,
-    });
+    // solubilityAtPh's steps: the drug and the pH are checked already (context, drugSide)
+    const o = { activity: side.activity, commonIonM };
+    const p = ctx.drugProtolyte;
+    const system = checkedSystem(p, ctx.drug.ionCharge, salt, o);
+    const pt = pointAt(p, ctx.log10IntrinsicM.value, system, pH);
     point.solubilityM = pt.solubilityM;
     point.solid = pt.solid;
     return point;

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { drugProtolyte, solubilityAtPh, type ProfileSalt } from '@/chem/screening/ph-profile';
-import { saltInMedium } from '@/chem/screening/screen/medium-solubility';
+import { commonIonIn, saltInMedium } from '@/chem/screening/screen/medium-solubility';
 import type { ScreenContext } from '@/chem/screening/screen/screen-context';
 
 // Issue 20: a salt's solubility in each medium of a screen is read by saltInMedium, which takes the
@@ -73,7 +73,7 @@ describe('saltInMedium gives solubilityAtPh’s numbers', () => {
     fc.assert(
       fc.property(system, (r) => {
         const ctx = toCtxInput(r);
-        const media = r.pHs.map((pH, k) => ({ pH, ionicStrengthM: 0.05 * (k + 1) }));
+        const media = r.pHs.map((pH, k) => ({ pH, ionicStrengthM: 0.05 * (k + 1), ions: {} }));
         media.forEach((m, i) => {
           const activity =
             ctx.activity?.model === 'davies'
@@ -105,8 +105,8 @@ describe('saltInMedium gives solubilityAtPh’s numbers', () => {
       log10Ksp: -4,
     };
     const media = [
-      { pH: 2, ionicStrengthM: 0 },
-      { pH: 12, ionicStrengthM: 0 },
+      { pH: 2, ionicStrengthM: 0, ions: {} },
+      { pH: 12, ionicStrengthM: 0, ions: {} },
     ];
     // pH 2: S_free = 10⁻⁴·(1 + 10⁷) ≫ √K_sp = 10⁻² M, so the salt limits at ~0.01 M
     const low = saltInMedium(ctx, salt, media, 0, 0);
@@ -127,7 +127,7 @@ describe('saltInMedium gives solubilityAtPh’s numbers', () => {
       counterIonPerSalt: 1,
       log10Ksp: -4,
     };
-    const media = [{ pH: 15, ionicStrengthM: 0 }];
+    const media = [{ pH: 15, ionicStrengthM: 0, ions: {} }];
     const ref = () => solubilityAtPh(drug, -4, salt, 15);
     expect(ref).toThrow();
     const message = (() => {
@@ -138,5 +138,29 @@ describe('saltInMedium gives solubilityAtPh’s numbers', () => {
       }
     })();
     for (let k = 0; k < 2; k++) expect(() => saltInMedium(ctx, salt, media, 0, 0)).toThrow(message);
+  });
+});
+
+describe('commonIonIn reads a medium’s ion record as `ions[id] ?? 0` does', () => {
+  it('for own, missing and inherited names alike', () => {
+    const ctx = toCtxInput({
+      drug: { kind: 'base', pKas: [7], ionCharge: 1 },
+      log10IntrinsicM: -4,
+      davies: false,
+    });
+    const ids = ['chloride', 'sodium', 'mesylate', 'constructor', 'toString', 'valueOf', 'x'];
+    fc.assert(
+      fc.property(
+        fc.dictionary(
+          fc.constantFrom('chloride', 'sodium', 'mesylate', 'toString'),
+          fc.double({ min: 0, max: 20, noNaN: true }),
+        ),
+        fc.constantFrom(...ids),
+        (ions, id) => {
+          const media = [{ pH: 3, ionicStrengthM: 0, ions }];
+          expect(Object.is(commonIonIn(ctx, media, 0, id), ions[id] ?? 0)).toBe(true);
+        },
+      ),
+    );
   });
 });
