@@ -2,6 +2,7 @@ import { brentRoot } from '../numerics/root-finding';
 import { ChemInputError, requireFiniteInRange } from '../result';
 import {
   checkSaltSystem,
+  finiteWithin,
   log10FreeFormSolubilityM,
   requirePh,
   solveCheckedSalt,
@@ -26,6 +27,10 @@ export interface DrugAcidBase {
  * covered: state it as a base or an acid by the group that forms the salt.)
  */
 export function drugProtolyte(d: DrugAcidBase): Protolyte {
+  // every screen step asks again for the same drug: when it plainly passes every check below, the
+  // checks (which build their field names and messages as they go) are not run again
+  if (plainlyValidDrug(d))
+    return { pKas: d.pKas, mostProtonatedCharge: d.kind === 'base' ? d.pKas.length : 0 };
   requireAscendingPkas('pKas', d.pKas);
   if (d.pKas.length < 1) throw new ChemInputError('pKas', 'no pKa given', 'one to four pKa values');
   const sign = d.kind === 'base' ? 1 : -1;
@@ -41,6 +46,20 @@ export function drugProtolyte(d: DrugAcidBase): Protolyte {
     );
   }
   return { pKas: d.pKas, mostProtonatedCharge: d.kind === 'base' ? d.pKas.length : 0 };
+}
+
+/** True when drugProtolyte's checks all pass (false: they run and throw their own error). */
+function plainlyValidDrug(d: DrugAcidBase): boolean {
+  const pKas = d.pKas;
+  if (pKas.length < 1) return false;
+  for (let i = 0; i < pKas.length; i++) {
+    if (!finiteWithin(pKas[i], -10, 20)) return false;
+    if (i > 0 && !(pKas[i]! > pKas[i - 1]!)) return false;
+  }
+  const sign = d.kind === 'base' ? 1 : -1;
+  return (
+    Number.isInteger(d.ionCharge) && d.ionCharge * sign >= 1 && Math.abs(d.ionCharge) <= pKas.length
+  );
 }
 
 export interface ProfileSalt {
@@ -194,12 +213,24 @@ export function checkProfileInput(
   salt: ProfileSalt | null,
   o: ProfileOptions = {},
 ): { from: number; to: number; step: number; p: Protolyte; system: CheckedSaltSystem | null } {
-  const from = requirePh(o.phFrom ?? 1, 'phFrom');
-  const to = requirePh(o.phTo ?? 8, 'phTo');
-  const step = requireFiniteInRange('phStep', o.phStep ?? 0.1, 0.001, 14);
-  if (!(to >= from))
-    throw new ChemInputError('phTo', `${to} is below phFrom ${from}`, 'phTo ≥ phFrom');
-  requireFiniteInRange('log10IntrinsicSolubility', log10IntrinsicM, -20, 2, 'log₁₀ mol/L');
+  const from = o.phFrom ?? 1;
+  const to = o.phTo ?? 8;
+  const step = o.phStep ?? 0.1;
+  // the checks below, in their order, run (and throw their own error) only when one would fail
+  const plain =
+    finiteWithin(from, 0, 14) &&
+    finiteWithin(to, 0, 14) &&
+    finiteWithin(step, 0.001, 14) &&
+    to >= from &&
+    finiteWithin(log10IntrinsicM, -20, 2);
+  if (!plain) {
+    requirePh(from, 'phFrom');
+    requirePh(to, 'phTo');
+    requireFiniteInRange('phStep', step, 0.001, 14);
+    if (!(to >= from))
+      throw new ChemInputError('phTo', `${to} is below phFrom ${from}`, 'phTo ≥ phFrom');
+    requireFiniteInRange('log10IntrinsicSolubility', log10IntrinsicM, -20, 2, 'log₁₀ mol/L');
+  }
   const p = drugProtolyte(drug);
   const system = salt ? checkedSystem(p, drug.ionCharge, salt, o) : null;
   return { from, to, step, p, system };

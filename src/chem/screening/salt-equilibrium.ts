@@ -67,6 +67,9 @@ export type CheckedSaltSystem = SaltSystem & { readonly [checkedSaltSystem]: tru
  * the common ion's concentration and the Davies background ionic strength in range.
  */
 export function checkSaltSystem(i: SaltSystem): CheckedSaltSystem {
+  // every salt of a screen is checked several times: when it plainly passes, the checks below (which
+  // build their messages as they go) are not run; when any would fail, they run in order and throw
+  if (plainlyValidSystem(i)) return i as CheckedSaltSystem;
   for (const [f, v] of [
     ['drugPerSalt', i.drugPerSalt],
     ['counterIonPerSalt', i.counterIonPerSalt],
@@ -94,9 +97,27 @@ export function checkSaltSystem(i: SaltSystem): CheckedSaltSystem {
   return i as CheckedSaltSystem;
 }
 
+/** A finite number within [min, max]: exactly when requireFiniteInRange would not throw. */
+export const finiteWithin = (x: unknown, min: number, max: number): x is number =>
+  typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
+
+const wholeCount = (v: number) => Number.isInteger(v) && v >= 1 && v <= 4;
+
+/** True exactly when checkSaltSystem's checks all pass. */
+function plainlyValidSystem(i: SaltSystem): boolean {
+  return (
+    wholeCount(i.drugPerSalt) &&
+    wholeCount(i.counterIonPerSalt) &&
+    i.drugPerSalt * i.drugIonCharge + i.counterIonPerSalt * i.counterIonCharge === 0 &&
+    finiteWithin(i.log10Ksp, -200, 20) &&
+    finiteWithin(i.commonIonM ?? 0, 0, 20) &&
+    (i.activity?.model !== 'davies' || finiteWithin(i.activity.backgroundIonicStrengthM, 0, 5))
+  );
+}
+
 /** The pH a solver accepts, 0–14 (checked where a pH enters: a single point or a grid's ends). */
 export function requirePh(pH: number, field = 'pH'): number {
-  return requireFiniteInRange(field, pH, 0, 14);
+  return finiteWithin(pH, 0, 14) ? pH : requireFiniteInRange(field, pH, 0, 14);
 }
 
 /** Check a salt system and its pH; returns the checked system. */
