@@ -29,6 +29,10 @@ export class ChemInputError extends Error {
 }
 
 /** Throw a {@link ChemInputError} unless `x` is a finite number within [min, max]. */
+/** A finite number within [min, max]: exactly when requireFiniteInRange would not throw. */
+export const finiteWithin = (x: unknown, min: number, max: number): x is number =>
+  typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
+
 export function requireFiniteInRange(
   field: string,
   x: unknown,

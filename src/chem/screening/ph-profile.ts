@@ -1,8 +1,7 @@
 import { brentRoot } from '../numerics/root-finding';
-import { ChemInputError, requireFiniteInRange } from '../result';
+import { ChemInputError, finiteWithin, requireFiniteInRange } from '../result';
 import {
   checkSaltSystem,
-  finiteWithin,
   log10FreeFormSolubilityM,
   requirePh,
   solveCheckedSalt,

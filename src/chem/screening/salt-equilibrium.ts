@@ -1,5 +1,5 @@
 import { brentRoot } from '../numerics/root-finding';
-import { ChemInputError, requireFiniteInRange } from '../result';
+import { ChemInputError, finiteWithin, requireFiniteInRange } from '../result';
 import { daviesLog10Gamma } from './activity';
 import { log10ChargeFraction, log10SpeciesFractions, type Protolyte } from './speciation';
 
@@ -96,10 +96,6 @@ export function checkSaltSystem(i: SaltSystem): CheckedSaltSystem {
     );
   return i as CheckedSaltSystem;
 }
-
-/** A finite number within [min, max]: exactly when requireFiniteInRange would not throw. */
-export const finiteWithin = (x: unknown, min: number, max: number): x is number =>
-  typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
 
 const wholeCount = (v: number) => Number.isInteger(v) && v >= 1 && v <= 4;
 
