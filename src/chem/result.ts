@@ -28,11 +28,14 @@ export class ChemInputError extends Error {
   }
 }
 
-/** Throw a {@link ChemInputError} unless `x` is a finite number within [min, max]. */
 /** A finite number within [min, max]: exactly when requireFiniteInRange would not throw. */
 export const finiteWithin = (x: unknown, min: number, max: number): x is number =>
   typeof x === 'number' && Number.isFinite(x) && x >= min && x <= max;
 
+const acceptedRange = (min: number, max: number, unit: string) =>
+  `a finite number from ${min} to ${max}${unit ? ' ' + unit : ''}`;
+
+/** Throw a {@link ChemInputError} unless `x` is a finite number within [min, max]. */
 export function requireFiniteInRange(
   field: string,
   x: unknown,
@@ -40,12 +43,16 @@ export function requireFiniteInRange(
   max: number,
   unit = '',
 ): number {
-  const accepted = `a finite number from ${min} to ${max}${unit ? ' ' + unit : ''}`;
+  // the accepted range is put in words only when the check fails (hot loops call this)
   if (typeof x !== 'number' || !Number.isFinite(x)) {
-    throw new ChemInputError(field, `expected a number, got ${String(x)}`, accepted);
+    throw new ChemInputError(
+      field,
+      `expected a number, got ${String(x)}`,
+      acceptedRange(min, max, unit),
+    );
   }
   if (x < min || x > max) {
-    throw new ChemInputError(field, `${x} is out of range`, accepted);
+    throw new ChemInputError(field, `${x} is out of range`, acceptedRange(min, max, unit));
   }
   return x;
 }
