@@ -184,3 +184,15 @@ describe('the input checks skip only what would pass', () => {
     );
   });
 });
+
+describe('requireFiniteInRange words its refusal as before', () => {
+  it('names the field, the value and the accepted range (written out here)', () => {
+    expect(() => requireFiniteInRange('commonIonConcentration', 21, 0, 20, 'mol/L')).toThrow(
+      'commonIonConcentration: 21 is out of range (accepted: a finite number from 0 to 20 mol/L)',
+    );
+    expect(() => requireFiniteInRange('pH', NaN, 0, 14)).toThrow(
+      'pH: expected a number, got NaN (accepted: a finite number from 0 to 14)',
+    );
+    expect(requireFiniteInRange('pH', 14, 0, 14)).toBe(14);
+  });
+});
