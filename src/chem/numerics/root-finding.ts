@@ -21,8 +21,25 @@ export function brentRoot(
   tol = 1e-12,
   maxIterations = 200,
 ): RootResult {
-  let fa = f(a);
-  let fb = f(b);
+  return brentRootFrom(f, a, b, f(a), f(b), tol, maxIterations);
+}
+
+/**
+ * brentRoot with f(a) and f(b) already known (a caller that bracketed the root by evaluating f at
+ * both ends passes those values instead of having them computed again). Given the values f returns
+ * there, the iterations and the root are brentRoot's exactly.
+ */
+export function brentRootFrom(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  fAtA: number,
+  fAtB: number,
+  tol = 1e-12,
+  maxIterations = 200,
+): RootResult {
+  let fa = fAtA;
+  let fb = fAtB;
   if (!Number.isFinite(fa) || !Number.isFinite(fb))
     throw new RangeError('brentRoot: f is not finite at the bracket');
   if (fa === 0) return { root: a, iterations: 0, converged: true };

@@ -1,11 +1,13 @@
-import { brentRoot } from '../numerics/root-finding';
+import { brentRootFrom } from '../numerics/root-finding';
 import type { ProfileOptions, ProfilePoint, ProfileSalt } from './ph-profile';
+import { SALT_LOG10_S_LIMITS } from './salt-equilibrium';
+import { chargeFractionsOn } from './counter-ion-grid-cache';
 import {
-  log10FreeFormSolubilityM,
-  SALT_LOG10_S_LIMITS,
-  saltLog10FormulaUnitsRaw,
-} from './salt-equilibrium';
-import { log10ChargeFraction, type Protolyte } from './speciation';
+  log10ChargeFraction,
+  log10SpeciesSum,
+  log10UnnormalisedFraction,
+  type Protolyte,
+} from './speciation';
 
 /**
  * The pH–solubility model of ph-profile.ts evaluated fast on fixed pH lists, for the screen: the same
@@ -32,26 +34,6 @@ const SCAN_PHS: readonly number[] = (() => {
   return out;
 })();
 
-/** Counter-ion speciation per pH list; bounded so that a long batch of custom ions cannot grow it. */
-const ION_CACHE_LIMIT = 512;
-const ionCache = new Map<string, Float64Array>();
-
-function chargeFractionsOn(
-  p: Protolyte,
-  charge: number,
-  phs: readonly number[],
-  gridKey: string,
-): Float64Array {
-  const key = `${p.pKas.join(',')}|${p.mostProtonatedCharge}|${charge}|${gridKey}`;
-  let v = ionCache.get(key);
-  if (!v) {
-    v = Float64Array.from(phs, (pH) => log10ChargeFraction(p, pH, charge));
-    if (ionCache.size >= ION_CACHE_LIMIT) ionCache.clear();
-    ionCache.set(key, v);
-  }
-  return v;
-}
-
 /** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
 export interface DrugOnGrid {
   phs: readonly number[];
@@ -74,9 +56,20 @@ export function drugOnGrid(
   const laD = new Float64Array(phs.length);
   const log10FreeM = new Float64Array(phs.length);
   const freeM = new Float64Array(phs.length);
+  // the charges checked once (log10ChargeFraction throws as it would per point), then each point's
+  // two fractions from one sum of species terms: log10ChargeFraction's and
+  // log10FreeFormSolubilityM's values, the same bits
+  if (phs.length > 0) {
+    log10ChargeFraction(drug, phs[0]!, ionCharge);
+    log10ChargeFraction(drug, phs[0]!, 0);
+  }
+  const iSalt = drug.mostProtonatedCharge - ionCharge;
+  const iFree = drug.mostProtonatedCharge;
   for (let k = 0; k < phs.length; k++) {
-    laD[k] = log10ChargeFraction(drug, phs[k]!, ionCharge);
-    log10FreeM[k] = log10FreeFormSolubilityM(drug, log10IntrinsicM, phs[k]!);
+    const pH = phs[k]!;
+    const logSum = log10SpeciesSum(drug, pH);
+    laD[k] = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
+    log10FreeM[k] = log10IntrinsicM - (log10UnnormalisedFraction(drug, pH, iFree) - logSum);
     freeM[k] = 10 ** log10FreeM[k]!;
   }
   return { phs, gridKey, laD, log10FreeM, freeM };
@@ -142,34 +135,114 @@ export function gridFromPoints(points: readonly ProfilePoint[]): GridSolubility 
 }
 
 /**
- * The salt on the grid (ideal activities, no common ion): at each pH the value pointAt in
- * ph-profile.ts gives, with the same arithmetic. The caller checks the salt input first.
+ * Margin, in decades, within which the logarithms below do not decide an order and the exact values
+ * are taken. The logarithms differ from log₁₀ of the exact values by rounding of a few 1e-15 decade
+ * (a sum of terms ≤ ~30 and one power good to an ulp); 1e-11 is over a thousand times that, and
+ * also above the screen's tie tolerance (a relative 1e-12, 4.3e-13 decade: SOLUBILITY_TIE_REL), so a
+ * difference beyond the margin is one the exact values and the tie rule decide the same way.
  */
+export const LOG_ORDER_MARGIN = 1e-11;
+
+/**
+ * One salt's points on a drug grid (ideal activities, no common ion), one point at a time and without
+ * arrays: the value at a point is exactly saltOnGrid's (`exactAt`, which takes the power), and its
+ * log₁₀ (`log10At`) is found from the exponent alone wherever the margin decides which solid limits.
+ * A screen that reduces the grid (the worst ICH M9 point) compares the logarithms and takes powers
+ * only for the few points it keeps or cannot order otherwise. The caller checks the salt input first.
+ */
+export class SaltGridPoints {
+  private readonly laX: Float64Array;
+  private readonly m: number;
+  private readonly n: number;
+  private readonly lm: number;
+  private readonly ln: number;
+  private readonly K: number;
+  /** Whether the salt was the limiting solid at the point `exactAt` last evaluated. */
+  salt = false;
+
+  constructor(
+    readonly g: DrugOnGrid,
+    s: ProfileSalt,
+  ) {
+    this.laX = chargeFractionsOn(s.counterIon, s.counterIonCharge, g.phs, g.gridKey);
+    this.m = s.drugPerSalt;
+    this.n = s.counterIonPerSalt;
+    // saltLog10FormulaUnitsRaw with its logarithms taken once (the same values, so the same bits)
+    this.lm = Math.log10(this.m);
+    this.ln = Math.log10(this.n);
+    this.K = s.log10Ksp;
+  }
+
+  /** log₁₀ formula units dissolved with the salt as the solid, unclamped (the solver's u). */
+  private u(k: number): number {
+    const { m, n } = this;
+    return (this.K - m * (this.g.laD[k]! + this.lm) - n * (this.laX[k]! + this.ln)) / (m + n);
+  }
+
+  /** Total dissolved drug at point k, mol/L: pointAt's value in ph-profile.ts, same arithmetic. */
+  exactAt(k: number): number {
+    const g = this.g;
+    const u = this.u(k);
+    this.salt = false;
+    // above the upper limit the salt does not limit (the solver's `unbounded`); far above the free
+    // form (a thousandth of a decade) it does not either, and no power needs taking to see it
+    if (u > SALT_LOG10_S_LIMITS.max || this.lm + u > g.log10FreeM[k]! + 1e-3) return g.freeM[k]!;
+    const saltM = this.m * 10 ** Math.max(u, SALT_LOG10_S_LIMITS.min);
+    if (!(saltM < g.freeM[k]!)) return g.freeM[k]!;
+    this.salt = true;
+    return saltM;
+  }
+
+  /** log₁₀ of exactAt(k) to within ~1e-14 decade; the exact value is taken only near a tie of solids. */
+  log10At(k: number): number {
+    const logFree = this.g.log10FreeM[k]!;
+    const u = this.u(k);
+    if (u > SALT_LOG10_S_LIMITS.max) return logFree;
+    const logSalt = this.lm + Math.max(u, SALT_LOG10_S_LIMITS.min);
+    if (logSalt < logFree - LOG_ORDER_MARGIN) return logSalt;
+    if (logSalt > logFree + LOG_ORDER_MARGIN) return logFree;
+    return Math.log10(this.exactAt(k));
+  }
+}
+
+/**
+ * The salt on the grid as arrays, made when first read: for a screen that reads the arrays only for
+ * the rows it writes (their words), while its ranking needs only a few points (SaltGridPoints).
+ */
+class SaltGridWhenRead implements GridSolubility {
+  readonly phs: readonly number[];
+  private made: GridSolubility | undefined;
+
+  constructor(
+    private readonly g: DrugOnGrid,
+    private readonly salt: ProfileSalt,
+  ) {
+    this.phs = g.phs;
+  }
+
+  get solubilityM(): Float64Array {
+    return (this.made ??= saltOnGrid(this.g, this.salt)).solubilityM;
+  }
+
+  get saltSolid(): Uint8Array {
+    return (this.made ??= saltOnGrid(this.g, this.salt)).saltSolid;
+  }
+}
+
+/** saltOnGrid's arrays, made only if read (the same values). */
+export function saltOnGridWhenRead(g: DrugOnGrid, salt: ProfileSalt): GridSolubility {
+  return new SaltGridWhenRead(g, salt);
+}
+
+/** The salt on the grid as arrays: at each pH the value pointAt in ph-profile.ts gives. */
 export function saltOnGrid(g: DrugOnGrid, salt: ProfileSalt): GridSolubility {
-  const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, g.phs, g.gridKey);
-  const m = salt.drugPerSalt;
-  const n = salt.counterIonPerSalt;
+  const points = new SaltGridPoints(g, salt);
   const len = g.phs.length;
   const solubilityM = new Float64Array(len);
   const saltSolid = new Uint8Array(len);
-  // saltLog10FormulaUnitsRaw with its logarithms taken once (the same values, so the same bits)
-  const lm = Math.log10(m);
-  const ln = Math.log10(n);
-  const K = salt.log10Ksp;
   for (let k = 0; k < len; k++) {
-    const free = g.freeM[k]!;
-    const u = (K - m * (g.laD[k]! + lm) - n * (laX[k]! + ln)) / (m + n);
-    // above the upper limit the salt does not limit (the solver's `unbounded`); far above the free
-    // form (a thousandth of a decade) it does not either, and no power needs taking to see it
-    if (u > SALT_LOG10_S_LIMITS.max || lm + u > g.log10FreeM[k]! + 1e-3) {
-      solubilityM[k] = free;
-      continue;
-    }
-    const saltM = m * 10 ** Math.max(u, SALT_LOG10_S_LIMITS.min);
-    if (saltM < free) {
-      solubilityM[k] = saltM;
-      saltSolid[k] = 1;
-    } else solubilityM[k] = free;
+    solubilityM[k] = points.exactAt(k);
+    if (points.salt) saltSolid[k] = 1;
   }
   return { phs: g.phs, solubilityM, saltSolid };
 }
@@ -184,15 +257,14 @@ export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
   const m = salt.drugPerSalt;
   const n = salt.counterIonPerSalt;
   const { min, max } = SALT_LOG10_S_LIMITS;
-  // log₁₀(m·s) as log₁₀ m + log₁₀ s: numericalPhMax takes log₁₀ of m·10^u, equal but for rounding
-  const log10M = Math.log10(m);
+  // log₁₀(m·s) as log₁₀ m + log₁₀ s: numericalPhMax takes log₁₀ of m·10^u, equal but for rounding;
+  // saltLog10FormulaUnitsRaw with its logarithms taken once (the same values, so the same bits)
+  const lm = Math.log10(m);
+  const ln = Math.log10(n);
+  const K = salt.log10Ksp;
   const logSaltOf = (laD: number, laX: number) =>
-    log10M + Math.min(max, Math.max(min, saltLog10FormulaUnitsRaw(m, n, laD, laX, salt.log10Ksp)));
-  const h = (pH: number) =>
-    logSaltOf(
-      log10ChargeFraction(g.drug, pH, g.ionCharge),
-      log10ChargeFraction(salt.counterIon, pH, salt.counterIonCharge),
-    ) - log10FreeFormSolubilityM(g.drug, g.log10IntrinsicM, pH);
+    lm + Math.min(max, Math.max(min, (K - m * (laD + lm) - n * (laX + ln)) / (m + n)));
+  const h = brentFunction(g, salt, logSaltOf);
   const s = g.scan;
   const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, s.phs, s.gridKey);
   const crossings: number[] = [];
@@ -200,11 +272,39 @@ export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
   for (let k = 1; k < s.phs.length; k++) {
     const cur = logSaltOf(s.laD[k]!, laX[k]!) - s.log10FreeM[k]!;
     if (prev === 0) crossings.push(s.phs[k - 1]!);
-    else if (prev * cur < 0) crossings.push(brentRoot(h, s.phs[k - 1]!, s.phs[k]!, 1e-12).root);
+    // h at the scan points is prev and cur, the same bits (the same fractions from the same sums)
+    else if (prev * cur < 0)
+      crossings.push(brentRootFrom(h, s.phs[k - 1]!, s.phs[k]!, prev, cur, 1e-12).root);
     prev = cur;
   }
   if (crossings.length === 0) return null;
   const p = g.drug;
   const ref = p.pKas[p.mostProtonatedCharge - g.ionCharge] ?? p.pKas[0]!;
   return crossings.reduce((best, x) => (Math.abs(x - ref) < Math.abs(best - ref) ? x : best));
+}
+
+/**
+ * log S_salt − log S_free at any pH, as numericalPhMax's function: the drug's salt-state fraction and
+ * its neutral fraction (log10FreeFormSolubilityM) share one sum of species terms, taken once (each
+ * fraction is its term minus that sum, as log10ChargeFraction computes it: the same bits). The drug's
+ * two charges were checked when its grids were made (drugOnGrid) and the counter-ion's when its scan
+ * fractions were (chargeFractionsOn, before any call), so no check is repeated per evaluation.
+ */
+function brentFunction(
+  g: DrugGrids,
+  salt: ProfileSalt,
+  logSaltOf: (laD: number, laX: number) => number,
+): (pH: number) => number {
+  const drug = g.drug;
+  const iSalt = drug.mostProtonatedCharge - g.ionCharge;
+  const iFree = drug.mostProtonatedCharge;
+  const log10S0 = g.log10IntrinsicM;
+  const ion = salt.counterIon;
+  const iIon = ion.mostProtonatedCharge - salt.counterIonCharge;
+  return (pH: number) => {
+    const logSum = log10SpeciesSum(drug, pH);
+    const laD = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
+    const laX = log10UnnormalisedFraction(ion, pH, iIon) - log10SpeciesSum(ion, pH);
+    return logSaltOf(laD, laX) - (log10S0 - (log10UnnormalisedFraction(drug, pH, iFree) - logSum));
+  };
 }

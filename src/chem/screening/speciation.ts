@@ -60,24 +60,41 @@ export function log10ChargeFraction(p: Protolyte, pH: number, charge: number): n
       `a charge from ${p.mostProtonatedCharge - p.pKas.length} to ${p.mostProtonatedCharge}`,
     );
   }
-  // The same sums as log10SpeciesFractions, in the same order (so the same bits), without the arrays:
-  // this runs hundreds of times per candidate in a screen.
+  return log10UnnormalisedFraction(p, pH, i) - log10SpeciesSum(p, pH);
+}
+
+/**
+ * The two halves of {@link log10ChargeFraction} (species index i = protons lost): log₁₀ of the
+ * species' unnormalised term (the running sum of pH − pKa) and log₁₀ of the sum of all terms. Their
+ * difference is the fraction, bit for bit (the same sums as log10SpeciesFractions, in the same order,
+ * without the arrays). Apart so that a caller wanting two fractions of one protolyte at one pH (the
+ * pH_max search: the drug's salt-state and neutral fractions) takes the sum, with its powers, once.
+ * The index is not checked here: log10ChargeFraction checks it.
+ */
+export function log10UnnormalisedFraction(p: Protolyte, pH: number, i: number): number {
+  const pKas = p.pKas;
+  let acc = 0;
+  for (let k = 0; k < i; k++) acc += pH - pKas[k]!;
+  return acc;
+}
+
+export function log10SpeciesSum(p: Protolyte, pH: number): number {
   const pKas = p.pKas;
   let acc = 0;
   let max = 0;
-  let mine = 0;
   for (let k = 0; k < pKas.length; k++) {
     acc += pH - pKas[k]!;
     if (acc > max) max = acc;
-    if (k + 1 === i) mine = acc;
   }
-  let sum = 10 ** (0 - max);
+  // One term is the largest, 10⁰ = 1 exactly: no power is taken for it (the same sum, bit for bit).
+  let sum = max === 0 ? 1 : 10 ** (0 - max);
   acc = 0;
   for (let k = 0; k < pKas.length; k++) {
     acc += pH - pKas[k]!;
-    sum += 10 ** (acc - max);
+    const t = acc - max;
+    sum += t === 0 ? 1 : 10 ** t;
   }
-  return mine - (max + Math.log10(sum));
+  return max + Math.log10(sum);
 }
 
 /**

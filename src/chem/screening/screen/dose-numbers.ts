@@ -1,5 +1,5 @@
 import { doseNumber } from '../dose-number';
-import type { GridSolubility } from '../ph-grid-solubility';
+import { LOG_ORDER_MARGIN, type GridSolubility, type SaltGridPoints } from '../ph-grid-solubility';
 import { solubilityAtPh, type ProfileSalt } from '../ph-profile';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
 import { ICH_M9_POINTS_PH, type IchM9PlanPoint } from './ich-m9-plan';
@@ -95,6 +95,74 @@ export function ichM9WorstAndNamed(
     doses.push(d);
   }
   return { doses, worst: worst! };
+}
+
+/**
+ * ichM9WorstAndNamed for a salt's points taken one at a time (SaltGridPoints: ideal activities, no
+ * common ion), with no array of the grid made. The worst point is found by the same scan, where each
+ * comparison is decided from the logarithms when they are more than a margin apart (the exact values
+ * would decide it the same way: see LOG_ORDER_MARGIN) and from the exact values otherwise (ties, near
+ * ties), so the same point is chosen; the points kept are then evaluated exactly, as the grid has them.
+ */
+export function ichM9WorstAndNamedOnPoints(
+  ctx: ScreenContext,
+  salt: ProfileSalt,
+  points: SaltGridPoints,
+  plan: readonly IchM9PlanPoint[],
+): { doses: DoseNumberAt[]; worst: DoseNumberAt } {
+  const off = new Map<number, DoseNumberAt>();
+  const offDose = (i: number): DoseNumberAt => {
+    let d = off.get(i);
+    if (!d) off.set(i, (d = doseNumberAt(ctx, salt, plan[i]!.pH)));
+    return d;
+  };
+  const log10Of = (i: number): number => {
+    const k = plan[i]!.k;
+    return k >= 0
+      ? points.log10At(k)
+      : Math.log10(offDose(i).solubilityMgPerMl / ctx.freeFormMolarMassGPerMol);
+  };
+  const mgAt = (i: number): number => {
+    const k = plan[i]!.k;
+    return k >= 0 ? freeFormMgPerMl(ctx, points.exactAt(k)) : offDose(i).solubilityMgPerMl;
+  };
+  const doseOf = (i: number): DoseNumberAt => {
+    const { pH, k } = plan[i]!;
+    if (k < 0) return offDose(i);
+    const solubilityM = points.exactAt(k);
+    return doseAt(ctx, pH, solubilityM, points.salt);
+  };
+  let w = 0;
+  let wLog = log10Of(0);
+  for (let i = 1; i < plan.length; i++) {
+    const l = log10Of(i);
+    if (l > wLog) continue; // not lower at all, so not clearly lower
+    if (l < wLog - LOG_ORDER_MARGIN || clearlyLower(mgAt(i), mgAt(w))) {
+      w = i;
+      wLog = l;
+    }
+  }
+  const named = namedPointsOf(plan);
+  const doses: DoseNumberAt[] = [];
+  let worst: DoseNumberAt | null = null;
+  for (let i = 0; i < plan.length; i++) {
+    if (i !== w && named[i] !== 1) continue;
+    const d = doseOf(i);
+    if (i === w) worst = d;
+    doses.push(d);
+  }
+  return { doses, worst: worst! };
+}
+
+/** Which points of a plan are ICH M9's named pH values (1 = named): once per plan (per compound). */
+const namedByPlan = new WeakMap<readonly IchM9PlanPoint[], Uint8Array>();
+function namedPointsOf(plan: readonly IchM9PlanPoint[]): Uint8Array {
+  let named = namedByPlan.get(plan);
+  if (!named) {
+    named = Uint8Array.from(plan, (q) => (ICH_M9_POINTS_PH.includes(q.pH) ? 1 : 0));
+    namedByPlan.set(plan, named);
+  }
+  return named;
 }
 
 /** The full series and its worst point ('full'), or the named points and the worst ('none'). */

@@ -5,12 +5,14 @@ import {
   gridFromPoints,
   gridPhMax,
   saltOnGrid,
+  saltOnGridWhenRead,
+  SaltGridPoints,
   type GridSolubility,
 } from '../ph-grid-solubility';
 import { checkProfileInput, phSolubilityProfile, type ProfileSalt } from '../ph-profile';
 import type { RobustnessShared } from '../rank-robustness';
 import type { CriterionInputs } from '../ranking';
-import { screenDoseNumbers } from './dose-numbers';
+import { ichM9WorstAndNamedOnPoints, screenDoseNumbers } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
 import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
 import { microenvironmentJudgement } from './microenvironment';
@@ -42,21 +44,37 @@ export interface RowNumbers {
   criteria: CriterionInputs;
 }
 
+/** The salt on the pH grid, its pH_max and its dose numbers (the series' worst and named points). */
+interface SaltProfileNumbers {
+  /** The grid (its arrays made when first read, in a screen without profiles: written rows only). */
+  grid: GridSolubility;
+  phMax: number | null;
+  doses: DoseNumberAt[];
+  worst: DoseNumberAt;
+}
+
 /**
- * The salt's points on the pH grid and its pH_max. With ideal activities the fast grid evaluation
- * (ph-grid-solubility.ts) gives the numbers phSolubilityProfile gives, after the same input checks;
- * the Davies option takes the general solver.
+ * The salt's points on the pH grid, its pH_max and dose numbers. With ideal activities the fast grid
+ * evaluation (ph-grid-solubility.ts) gives the numbers phSolubilityProfile gives, after the same
+ * input checks; the Davies option takes the general solver. A screen without profiles needs of the
+ * grid only its worst and named ICH M9 points, found without making the grid's arrays
+ * (ichM9WorstAndNamedOnPoints); the arrays are made, the same values, if a row's words read them.
  */
-function saltProfile(
-  ctx: ScreenContext,
-  salt: ProfileSalt,
-): { grid: GridSolubility; phMax: number | null } {
+function saltProfile(ctx: ScreenContext, salt: ProfileSalt): SaltProfileNumbers {
   if (!fastPathApplies(ctx.grid)) {
     const profile = phSolubilityProfile(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-    return { grid: gridFromPoints(profile.points), phMax: profile.phMax };
+    const grid = gridFromPoints(profile.points);
+    return { grid, phMax: profile.phMax, ...screenDoseNumbers(ctx, salt, grid) };
   }
   checkProfileInput(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-  return { grid: saltOnGrid(ctx.grids.profile, salt), phMax: gridPhMax(ctx.grids, salt) };
+  const phMax = gridPhMax(ctx.grids, salt);
+  if (ctx.profiles !== 'none') {
+    const grid = saltOnGrid(ctx.grids.profile, salt);
+    return { grid, phMax, ...screenDoseNumbers(ctx, salt, grid) };
+  }
+  const points = new SaltGridPoints(ctx.grids.profile, salt);
+  const { doses, worst } = ichM9WorstAndNamedOnPoints(ctx, salt, points, ctx.ichM9Plan);
+  return { grid: saltOnGridWhenRead(ctx.grids.profile, salt), phMax, doses, worst };
 }
 
 /** The numbers of one candidate's row (K_sp asked for after ΔpKa and mass cost, as the row did). */
@@ -84,7 +102,7 @@ export function rowNumbers(
     log10Ksp: ksp.log10Ksp.value,
   };
   const profile = saltProfile(ctx, salt);
-  const { doses, worst } = screenDoseNumbers(ctx, salt, profile.grid);
+  const { doses, worst } = profile;
   const mediaResults = mediumResults(ctx, cand, salt, media, hcl);
   const gastric = mediaResults[0] ?? null;
   const { phMaxSigma } = uncertaintiesOf(
