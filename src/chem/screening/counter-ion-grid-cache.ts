@@ -20,7 +20,7 @@ let ionCacheSize = 0;
 function ionHash(p: Protolyte, charge: number): number {
   let h = Math.imul(p.mostProtonatedCharge, 31) + charge;
   for (let k = 0; k < p.pKas.length; k++) h = (Math.imul(h, 31) + Math.round(p.pKas[k]! * 1e6)) | 0;
-  return h;
+  return h & 0x3fffffff; // a small integer key: the map's fast path
 }
 
 function sameIon(e: IonEntry, p: Protolyte, charge: number, gridKey: string): boolean {

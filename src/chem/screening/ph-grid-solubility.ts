@@ -1,13 +1,22 @@
 import { brentRootFrom } from '../numerics/root-finding';
-import type { ProfileOptions, ProfilePoint, ProfileSalt } from './ph-profile';
-import { SALT_LOG10_S_LIMITS } from './salt-equilibrium';
 import { chargeFractionsOn } from './counter-ion-grid-cache';
-import {
-  log10ChargeFraction,
-  log10SpeciesSum,
-  log10UnnormalisedFraction,
-  type Protolyte,
-} from './speciation';
+import type { DrugGrids, DrugOnGrid, GridSolubility } from './drug-grid';
+import type { ProfileSalt } from './ph-profile';
+import { SALT_LOG10_S_LIMITS } from './salt-equilibrium';
+import { log10SpeciesSum, log10UnnormalisedFraction } from './speciation';
+
+export {
+  drugGrids,
+  drugOnGrid,
+  fastPathApplies,
+  freeFormOnGrid,
+  gridFromPoints,
+  PH_MAX_SCAN_STEP,
+  profilePhs,
+  type DrugGrids,
+  type DrugOnGrid,
+  type GridSolubility,
+} from './drug-grid';
 
 /**
  * The pH–solubility model of ph-profile.ts evaluated fast on fixed pH lists, for the screen: the same
@@ -17,122 +26,6 @@ import {
  * Only the ideal-activity, no-common-ion case is taken here; every other case goes to the general
  * solver (salt-equilibrium.ts) point by point.
  */
-
-/** The pH values of a profile grid, built exactly as phSolubilityProfile builds them. */
-export function profilePhs(from: number, to: number, step: number): number[] {
-  const n = Math.round((to - from) / step);
-  const out: number[] = [];
-  for (let k = 0; k <= n; k++) out.push(Number(Math.min(to, from + k * step).toFixed(10)));
-  return out;
-}
-
-/** The scan points of the pH_max search, 0 to 14 in steps of 0.25 (as numericalPhMax takes them). */
-export const PH_MAX_SCAN_STEP = 0.25;
-const SCAN_PHS: readonly number[] = (() => {
-  const out = [0];
-  for (let pH = PH_MAX_SCAN_STEP; pH <= 14 + 1e-9; pH += PH_MAX_SCAN_STEP) out.push(pH);
-  return out;
-})();
-
-/** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
-export interface DrugOnGrid {
-  phs: readonly number[];
-  gridKey: string;
-  /** log₁₀ fraction of the drug in its salt charge state. */
-  laD: Float64Array;
-  /** log₁₀ free-form solubility, mol/L. */
-  log10FreeM: Float64Array;
-  /** Free-form solubility, mol/L (10 to the power above). */
-  freeM: Float64Array;
-}
-
-export function drugOnGrid(
-  drug: Protolyte,
-  ionCharge: number,
-  log10IntrinsicM: number,
-  phs: readonly number[],
-  gridKey = phs.join(','),
-): DrugOnGrid {
-  const laD = new Float64Array(phs.length);
-  const log10FreeM = new Float64Array(phs.length);
-  const freeM = new Float64Array(phs.length);
-  // the charges checked once (log10ChargeFraction throws as it would per point), then each point's
-  // two fractions from one sum of species terms: log10ChargeFraction's and
-  // log10FreeFormSolubilityM's values, the same bits
-  if (phs.length > 0) {
-    log10ChargeFraction(drug, phs[0]!, ionCharge);
-    log10ChargeFraction(drug, phs[0]!, 0);
-  }
-  const iSalt = drug.mostProtonatedCharge - ionCharge;
-  const iFree = drug.mostProtonatedCharge;
-  for (let k = 0; k < phs.length; k++) {
-    const pH = phs[k]!;
-    const logSum = log10SpeciesSum(drug, pH);
-    laD[k] = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
-    log10FreeM[k] = log10IntrinsicM - (log10UnnormalisedFraction(drug, pH, iFree) - logSum);
-    freeM[k] = 10 ** log10FreeM[k]!;
-  }
-  return { phs, gridKey, laD, log10FreeM, freeM };
-}
-
-/** Per compound: the drug on the profile grid and on the pH_max scan points. */
-export interface DrugGrids {
-  drug: Protolyte;
-  ionCharge: number;
-  log10IntrinsicM: number;
-  profile: DrugOnGrid;
-  scan: DrugOnGrid;
-}
-
-export function drugGrids(
-  drug: Protolyte,
-  ionCharge: number,
-  log10IntrinsicM: number,
-  grid: { phFrom: number; phTo: number; phStep: number },
-): DrugGrids {
-  const phs = profilePhs(grid.phFrom, grid.phTo, grid.phStep);
-  return {
-    drug,
-    ionCharge,
-    log10IntrinsicM,
-    profile: drugOnGrid(
-      drug,
-      ionCharge,
-      log10IntrinsicM,
-      phs,
-      `${grid.phFrom}:${grid.phTo}:${grid.phStep}`,
-    ),
-    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
-  };
-}
-
-/** True when the fast path applies: ideal activities and no counter-ion in the medium. */
-export function fastPathApplies(o: ProfileOptions): boolean {
-  return (o.activity === undefined || o.activity.model === 'ideal') && (o.commonIonM ?? 0) === 0;
-}
-
-/** A solubility curve on a pH list as arrays (no object per point): what a screen reads from it. */
-export interface GridSolubility {
-  phs: readonly number[];
-  /** Total dissolved drug, mol/L. */
-  solubilityM: Float64Array;
-  /** 1 where the salt is the solid in equilibrium, 0 where the free form is. */
-  saltSolid: Uint8Array;
-}
-
-/** The free form alone on the grid. */
-export function freeFormOnGrid(g: DrugOnGrid): GridSolubility {
-  return { phs: g.phs, solubilityM: g.freeM, saltSolid: new Uint8Array(g.phs.length) };
-}
-
-/** A curve from profile points (the general solver's output) as arrays. */
-export function gridFromPoints(points: readonly ProfilePoint[]): GridSolubility {
-  return {
-    phs: points.map((p) => p.pH),
-    solubilityM: Float64Array.from(points, (p) => p.solubilityM),
-    saltSolid: Uint8Array.from(points, (p) => (p.solid === 'salt' ? 1 : 0)),
-  };
-}
 
 /**
  * Margin, in decades, within which the logarithms below do not decide an order and the exact values
@@ -203,6 +96,27 @@ export class SaltGridPoints {
     if (logSalt > logFree + LOG_ORDER_MARGIN) return logFree;
     return Math.log10(this.exactAt(k));
   }
+
+  /**
+   * The position in `ks` (grid indices, in order) of the point a scan keeping the current lowest and
+   * moving on to a point only where `lower(value, lowest)` says so would end on — with each step
+   * decided from log10At's logarithms where they are more than the margin apart (not lower at all;
+   * far lower, beyond the tie tolerance `lower` applies) and by `lower` on exact values otherwise.
+   * `lower` must be a "lower by more than a relative tolerance ≤ 1e-12" test, as clearlyLower is.
+   */
+  lowestOf(ks: Int32Array, lower: (b: number, a: number) => boolean): number {
+    let w = 0;
+    let wLog = this.log10At(ks[0]!);
+    for (let i = 1; i < ks.length; i++) {
+      const l = this.log10At(ks[i]!);
+      if (l > wLog) continue; // not lower at all, so not lower beyond the tolerance
+      if (l < wLog - LOG_ORDER_MARGIN || lower(this.exactAt(ks[i]!), this.exactAt(ks[w]!))) {
+        w = i;
+        wLog = l;
+      }
+    }
+    return w;
+  }
 }
 
 /**
@@ -264,23 +178,28 @@ export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
   const K = salt.log10Ksp;
   const logSaltOf = (laD: number, laX: number) =>
     lm + Math.min(max, Math.max(min, (K - m * (laD + lm) - n * (laX + ln)) / (m + n)));
-  const h = brentFunction(g, salt, logSaltOf);
   const s = g.scan;
   const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, s.phs, s.gridKey);
-  const crossings: number[] = [];
+  const p = g.drug;
+  const ref = p.pKas[p.mostProtonatedCharge - g.ionCharge] ?? p.pKas[0]!;
+  // the crossing nearest ref, the first of equals (as reducing the list of crossings picks it)
+  let best: number | null = null;
+  const take = (x: number) => {
+    if (best === null || Math.abs(x - ref) < Math.abs(best - ref)) best = x;
+  };
+  let h: ((pH: number) => number) | null = null;
   let prev = logSaltOf(s.laD[0]!, laX[0]!) - s.log10FreeM[0]!;
   for (let k = 1; k < s.phs.length; k++) {
     const cur = logSaltOf(s.laD[k]!, laX[k]!) - s.log10FreeM[k]!;
-    if (prev === 0) crossings.push(s.phs[k - 1]!);
+    if (prev === 0) take(s.phs[k - 1]!);
     // h at the scan points is prev and cur, the same bits (the same fractions from the same sums)
-    else if (prev * cur < 0)
-      crossings.push(brentRootFrom(h, s.phs[k - 1]!, s.phs[k]!, prev, cur, 1e-12).root);
+    else if (prev * cur < 0) {
+      h ??= brentFunction(g, salt, logSaltOf);
+      take(brentRootFrom(h, s.phs[k - 1]!, s.phs[k]!, prev, cur, 1e-12).root);
+    }
     prev = cur;
   }
-  if (crossings.length === 0) return null;
-  const p = g.drug;
-  const ref = p.pKas[p.mostProtonatedCharge - g.ionCharge] ?? p.pKas[0]!;
-  return crossings.reduce((best, x) => (Math.abs(x - ref) < Math.abs(best - ref) ? x : best));
+  return best;
 }
 
 /**

@@ -110,8 +110,9 @@ export function ichM9WorstAndNamedOnPoints(
   points: SaltGridPoints,
   plan: readonly IchM9PlanPoint[],
 ): { doses: DoseNumberAt[]; worst: DoseNumberAt } {
-  const off = new Map<number, DoseNumberAt>();
+  let off: Map<number, DoseNumberAt> | undefined; // points off the grid, solved once each
   const offDose = (i: number): DoseNumberAt => {
+    off ??= new Map();
     let d = off.get(i);
     if (!d) off.set(i, (d = doseNumberAt(ctx, salt, plan[i]!.pH)));
     return d;
@@ -132,17 +133,24 @@ export function ichM9WorstAndNamedOnPoints(
     const solubilityM = points.exactAt(k);
     return doseAt(ctx, pH, solubilityM, points.salt);
   };
+  const { named, ks } = planIndicesOf(plan);
   let w = 0;
-  let wLog = log10Of(0);
-  for (let i = 1; i < plan.length; i++) {
-    const l = log10Of(i);
-    if (l > wLog) continue; // not lower at all, so not clearly lower
-    if (l < wLog - LOG_ORDER_MARGIN || clearlyLower(mgAt(i), mgAt(w))) {
-      w = i;
-      wLog = l;
+  if (ks)
+    w = points.lowestOf(ks, (b, a) =>
+      clearlyLower(freeFormMgPerMl(ctx, b), freeFormMgPerMl(ctx, a)),
+    );
+  else {
+    // a point off the grid (a grid not through 1.2, 4.5 or 6.8): the same scan, point by point
+    let wLog = log10Of(0);
+    for (let i = 1; i < plan.length; i++) {
+      const l = log10Of(i);
+      if (l > wLog) continue; // not lower at all, so not clearly lower
+      if (l < wLog - LOG_ORDER_MARGIN || clearlyLower(mgAt(i), mgAt(w))) {
+        w = i;
+        wLog = l;
+      }
     }
   }
-  const named = namedPointsOf(plan);
   const doses: DoseNumberAt[] = [];
   let worst: DoseNumberAt | null = null;
   for (let i = 0; i < plan.length; i++) {
@@ -154,15 +162,29 @@ export function ichM9WorstAndNamedOnPoints(
   return { doses, worst: worst! };
 }
 
-/** Which points of a plan are ICH M9's named pH values (1 = named): once per plan (per compound). */
-const namedByPlan = new WeakMap<readonly IchM9PlanPoint[], Uint8Array>();
-function namedPointsOf(plan: readonly IchM9PlanPoint[]): Uint8Array {
-  let named = namedByPlan.get(plan);
-  if (!named) {
-    named = Uint8Array.from(plan, (q) => (ICH_M9_POINTS_PH.includes(q.pH) ? 1 : 0));
-    namedByPlan.set(plan, named);
+/**
+ * Per plan, once: which points are ICH M9's named pH values (1 = named), and the grid index of every
+ * point when all are grid points (null otherwise). The plan is made once per compound and read for
+ * each of its candidates in turn, so the last plan's indices are kept (one entry, by identity).
+ */
+type PlanIndices = { named: Uint8Array; ks: Int32Array | null };
+let lastPlan: readonly IchM9PlanPoint[] | null = null;
+let lastIndices: PlanIndices = { named: new Uint8Array(0), ks: null };
+function planIndicesOf(plan: readonly IchM9PlanPoint[]): PlanIndices {
+  if (plan !== lastPlan) {
+    // plain loops: a typed array's from() with a mapping function is slow in V8
+    const named = new Uint8Array(plan.length);
+    const ks = new Int32Array(plan.length);
+    let onGrid = plan.length > 0;
+    for (let i = 0; i < plan.length; i++) {
+      if (ICH_M9_POINTS_PH.includes(plan[i]!.pH)) named[i] = 1;
+      ks[i] = plan[i]!.k;
+      if (ks[i]! < 0) onGrid = false;
+    }
+    lastIndices = { named, ks: onGrid ? ks : null };
+    lastPlan = plan;
   }
-  return named;
+  return lastIndices;
 }
 
 /** The full series and its worst point ('full'), or the named points and the worst ('none'). */

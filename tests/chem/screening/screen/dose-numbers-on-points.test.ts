@@ -21,7 +21,10 @@ import { screenContext } from '@/chem/screening/screen/screen-context';
  */
 const di = drugIon({ kind: 'base', ionCharge: 1, formula: 'C18H22N2O2' });
 
-function contextFor(pKa: number, s0MgPerMl: number, doseMg: number) {
+/** The default grid (1–8, step 0.1: the ICH M9 pH values are grid points) or one through none of them. */
+const GRIDS = [{}, { phGrid: { from: 1.05, to: 8, step: 0.1 } }];
+
+function contextFor(pKa: number, s0MgPerMl: number, doseMg: number, settings: object = {}) {
   return screenContext({
     compound: {
       name: 'test base',
@@ -35,7 +38,7 @@ function contextFor(pKa: number, s0MgPerMl: number, doseMg: number) {
     },
     drugIon: di,
     candidates: [],
-    settings: {},
+    settings,
     profiles: 'none',
   });
 }
@@ -49,8 +52,14 @@ const saltOf = (ionPka: number, log10Ksp: number): ProfileSalt => ({
   log10Ksp,
 });
 
-function expectSameReduction(pKa: number, ionPka: number, log10Ksp: number, s0: number) {
-  const ctx = contextFor(pKa, s0, 100);
+function expectSameReduction(
+  pKa: number,
+  ionPka: number,
+  log10Ksp: number,
+  s0: number,
+  settings: object = {},
+) {
+  const ctx = contextFor(pKa, s0, 100, settings);
   const salt = saltOf(ionPka, log10Ksp);
   const arrays = saltOnGrid(ctx.grids.profile, salt);
   const reference = ichM9WorstAndNamed(ctx, salt, arrays, ctx.ichM9Plan);
@@ -70,6 +79,7 @@ describe('the worst and named ICH M9 points without the grid arrays (SaltGridPoi
         fc.double({ min: -8, max: 9, noNaN: true }),
         fc.double({ min: -12, max: 1, noNaN: true }),
         fc.double({ min: 1e-4, max: 10, noNaN: true }),
+        fc.constantFrom(...GRIDS),
         expectSameReduction,
       ),
       { numRuns: 400, seed: 20 },

@@ -1,0 +1,128 @@
+import type { ProfileOptions, ProfilePoint } from './ph-profile';
+import {
+  log10ChargeFraction,
+  log10SpeciesSum,
+  log10UnnormalisedFraction,
+  type Protolyte,
+} from './speciation';
+
+/**
+ * The drug's side of the fast pH-grid evaluation (ph-grid-solubility.ts): the pH lists, the drug's
+ * speciation and free-form solubility on them (once per compound), and the arrays a screen reads.
+ */
+
+/** The pH values of a profile grid, built exactly as phSolubilityProfile builds them. */
+export function profilePhs(from: number, to: number, step: number): number[] {
+  const n = Math.round((to - from) / step);
+  const out: number[] = [];
+  for (let k = 0; k <= n; k++) out.push(Number(Math.min(to, from + k * step).toFixed(10)));
+  return out;
+}
+
+/** The scan points of the pH_max search, 0 to 14 in steps of 0.25 (as numericalPhMax takes them). */
+export const PH_MAX_SCAN_STEP = 0.25;
+const SCAN_PHS: readonly number[] = (() => {
+  const out = [0];
+  for (let pH = PH_MAX_SCAN_STEP; pH <= 14 + 1e-9; pH += PH_MAX_SCAN_STEP) out.push(pH);
+  return out;
+})();
+
+/** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
+export interface DrugOnGrid {
+  phs: readonly number[];
+  gridKey: string;
+  /** log₁₀ fraction of the drug in its salt charge state. */
+  laD: Float64Array;
+  /** log₁₀ free-form solubility, mol/L. */
+  log10FreeM: Float64Array;
+  /** Free-form solubility, mol/L (10 to the power above). */
+  freeM: Float64Array;
+}
+
+export function drugOnGrid(
+  drug: Protolyte,
+  ionCharge: number,
+  log10IntrinsicM: number,
+  phs: readonly number[],
+  gridKey = phs.join(','),
+): DrugOnGrid {
+  const laD = new Float64Array(phs.length);
+  const log10FreeM = new Float64Array(phs.length);
+  const freeM = new Float64Array(phs.length);
+  // the charges checked once (log10ChargeFraction throws as it would per point), then each point's
+  // two fractions from one sum of species terms: log10ChargeFraction's and
+  // log10FreeFormSolubilityM's values, the same bits
+  if (phs.length > 0) {
+    log10ChargeFraction(drug, phs[0]!, ionCharge);
+    log10ChargeFraction(drug, phs[0]!, 0);
+  }
+  const iSalt = drug.mostProtonatedCharge - ionCharge;
+  const iFree = drug.mostProtonatedCharge;
+  for (let k = 0; k < phs.length; k++) {
+    const pH = phs[k]!;
+    const logSum = log10SpeciesSum(drug, pH);
+    laD[k] = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
+    log10FreeM[k] = log10IntrinsicM - (log10UnnormalisedFraction(drug, pH, iFree) - logSum);
+    freeM[k] = 10 ** log10FreeM[k]!;
+  }
+  return { phs, gridKey, laD, log10FreeM, freeM };
+}
+
+/** Per compound: the drug on the profile grid and on the pH_max scan points. */
+export interface DrugGrids {
+  drug: Protolyte;
+  ionCharge: number;
+  log10IntrinsicM: number;
+  profile: DrugOnGrid;
+  scan: DrugOnGrid;
+}
+
+export function drugGrids(
+  drug: Protolyte,
+  ionCharge: number,
+  log10IntrinsicM: number,
+  grid: { phFrom: number; phTo: number; phStep: number },
+): DrugGrids {
+  const phs = profilePhs(grid.phFrom, grid.phTo, grid.phStep);
+  return {
+    drug,
+    ionCharge,
+    log10IntrinsicM,
+    profile: drugOnGrid(
+      drug,
+      ionCharge,
+      log10IntrinsicM,
+      phs,
+      `${grid.phFrom}:${grid.phTo}:${grid.phStep}`,
+    ),
+    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
+  };
+}
+
+/** True when the fast path applies: ideal activities and no counter-ion in the medium. */
+export function fastPathApplies(o: ProfileOptions): boolean {
+  return (o.activity === undefined || o.activity.model === 'ideal') && (o.commonIonM ?? 0) === 0;
+}
+
+/** A solubility curve on a pH list as arrays (no object per point): what a screen reads from it. */
+export interface GridSolubility {
+  phs: readonly number[];
+  /** Total dissolved drug, mol/L. */
+  solubilityM: Float64Array;
+  /** 1 where the salt is the solid in equilibrium, 0 where the free form is. */
+  saltSolid: Uint8Array;
+}
+
+/** The free form alone on the grid. */
+export function freeFormOnGrid(g: DrugOnGrid): GridSolubility {
+  return { phs: g.phs, solubilityM: g.freeM, saltSolid: new Uint8Array(g.phs.length) };
+}
+
+/** A curve from profile points (the general solver's output) as arrays. */
+export function gridFromPoints(points: readonly ProfilePoint[]): GridSolubility {
+  return {
+    phs: points.map((p) => p.pH),
+    solubilityM: Float64Array.from(points, (p) => p.solubilityM),
+    saltSolid: Uint8Array.from(points, (p) => (p.solid === 'salt' ? 1 : 0)),
+  };
+}
