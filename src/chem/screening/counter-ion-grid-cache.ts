@@ -17,8 +17,9 @@ const ION_CACHE_LIMIT = 512;
 const ionCache = new Map<number, IonEntry>();
 let ionCacheSize = 0;
 
-function ionHash(p: Protolyte, charge: number): number {
-  let h = Math.imul(p.mostProtonatedCharge, 31) + charge;
+function ionHash(p: Protolyte, charge: number, gridKey: string): number {
+  // the key's length tells the usual two lists apart (the profile grid's and the pH_max scan's)
+  let h = Math.imul(Math.imul(p.mostProtonatedCharge, 31) + charge, 31) + gridKey.length;
   for (let k = 0; k < p.pKas.length; k++) h = (Math.imul(h, 31) + Math.round(p.pKas[k]! * 1e6)) | 0;
   return h & 0x3fffffff; // a small integer key: the map's fast path
 }
@@ -37,7 +38,7 @@ export function chargeFractionsOn(
   phs: readonly number[],
   gridKey: string,
 ): Float64Array {
-  const h = ionHash(p, charge);
+  const h = ionHash(p, charge, gridKey);
   const first = ionCache.get(h);
   for (let e = first; e; e = e.next) if (sameIon(e, p, charge, gridKey)) return e.v;
   const v = Float64Array.from(phs, (pH) => log10ChargeFraction(p, pH, charge));

@@ -105,10 +105,21 @@ export class SaltGridPoints {
    * `lower` must be a "lower by more than a relative tolerance ≤ 1e-12" test, as clearlyLower is.
    */
   lowestOf(ks: Int32Array, lower: (b: number, a: number) => boolean): number {
+    const { laD, log10FreeM } = this.g;
+    const { laX, m, n, lm, ln, K } = this;
+    const { min, max } = SALT_LOG10_S_LIMITS;
     let w = 0;
     let wLog = this.log10At(ks[0]!);
     for (let i = 1; i < ks.length; i++) {
-      const l = this.log10At(ks[i]!);
+      const k = ks[i]!;
+      // log10At(k) written out (the same operations): the hot loop of the reduction
+      const u = (K - m * (laD[k]! + lm) - n * (laX[k]! + ln)) / (m + n);
+      let l = log10FreeM[k]!;
+      if (!(u > max)) {
+        const logSalt = lm + Math.max(u, min);
+        if (logSalt < l - LOG_ORDER_MARGIN) l = logSalt;
+        else if (!(logSalt > l + LOG_ORDER_MARGIN)) l = Math.log10(this.exactAt(k));
+      }
       if (l > wLog) continue; // not lower at all, so not lower beyond the tolerance
       if (l < wLog - LOG_ORDER_MARGIN || lower(this.exactAt(ks[i]!), this.exactAt(ks[w]!))) {
         w = i;
@@ -188,14 +199,17 @@ export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
     if (best === null || Math.abs(x - ref) < Math.abs(best - ref)) best = x;
   };
   let h: ((pH: number) => number) | null = null;
-  let prev = logSaltOf(s.laD[0]!, laX[0]!) - s.log10FreeM[0]!;
-  for (let k = 1; k < s.phs.length; k++) {
-    const cur = logSaltOf(s.laD[k]!, laX[k]!) - s.log10FreeM[k]!;
-    if (prev === 0) take(s.phs[k - 1]!);
+  const { laD, log10FreeM, phs } = s;
+  let prev = logSaltOf(laD[0]!, laX[0]!) - log10FreeM[0]!;
+  for (let k = 1; k < phs.length; k++) {
+    // logSaltOf written out (the same operations in the same order): the hot loop of pH_max
+    const u = (K - m * (laD[k]! + lm) - n * (laX[k]! + ln)) / (m + n);
+    const cur = lm + Math.min(max, Math.max(min, u)) - log10FreeM[k]!;
+    if (prev === 0) take(phs[k - 1]!);
     // h at the scan points is prev and cur, the same bits (the same fractions from the same sums)
     else if (prev * cur < 0) {
       h ??= brentFunction(g, salt, logSaltOf);
-      take(brentRootFrom(h, s.phs[k - 1]!, s.phs[k]!, prev, cur, 1e-12).root);
+      take(brentRootFrom(h, phs[k - 1]!, phs[k]!, prev, cur, 1e-12).root);
     }
     prev = cur;
   }
