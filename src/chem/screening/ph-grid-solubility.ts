@@ -1,9 +1,8 @@
 import { brentRootFrom } from '../numerics/root-finding';
-import { chargeFractionsOn } from './counter-ion-grid-cache';
 import type { DrugGrids, DrugOnGrid, GridSolubility } from './drug-grid';
 import type { ProfileSalt } from './ph-profile';
 import { SALT_LOG10_S_LIMITS } from './salt-equilibrium';
-import { log10SpeciesSum, log10UnnormalisedFraction } from './speciation';
+import { chargeFractionsOn, log10SpeciesSum, log10UnnormalisedFraction } from './speciation';
 
 export {
   drugGrids,
@@ -136,7 +135,6 @@ export class SaltGridPoints {
  */
 class SaltGridWhenRead implements GridSolubility {
   readonly phs: readonly number[];
-  private made: GridSolubility | undefined;
 
   constructor(
     private readonly g: DrugOnGrid,
@@ -146,11 +144,19 @@ class SaltGridWhenRead implements GridSolubility {
   }
 
   get solubilityM(): Float64Array {
-    return (this.made ??= saltOnGrid(this.g, this.salt)).solubilityM;
+    return this.make().solubilityM;
   }
 
   get saltSolid(): Uint8Array {
-    return (this.made ??= saltOnGrid(this.g, this.salt)).saltSolid;
+    return this.make().saltSolid;
+  }
+
+  /** The arrays, set on the object itself: later reads (a row's words loop over them) are plain. */
+  private make(): GridSolubility {
+    const made = saltOnGrid(this.g, this.salt);
+    Object.defineProperty(this, 'solubilityM', { value: made.solubilityM });
+    Object.defineProperty(this, 'saltSolid', { value: made.saltSolid });
+    return made;
   }
 }
 
