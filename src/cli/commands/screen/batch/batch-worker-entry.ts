@@ -1,6 +1,11 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import type { CompoundSpec } from '../screen-input';
-import { screenOne, type BatchSettings, type ScreenOneResult } from './screen-one';
+import {
+  screenOne,
+  withCheckedSettings,
+  type BatchSettings,
+  type ScreenOneResult,
+} from './screen-one';
 
 /**
  * Entry file of the worker threads of `saltsmith screen --batch` (an entry, like src/cli/entry.ts: it
@@ -16,7 +21,7 @@ export type WorkerAnswer = { seq: number; result: ScreenOneResult }[];
 export function startBatchWorker(): void {
   const port = parentPort;
   if (!port) throw new Error('batch-worker runs only as a worker thread');
-  const settings = workerData as BatchSettings;
+  const settings = withCheckedSettings(workerData as BatchSettings);
   port.on('message', (jobs: WorkerRequest) => {
     void Promise.all(
       jobs.map(async (j) => ({ seq: j.seq, result: await screenOne(j.spec, settings, j.id) })),

@@ -1,7 +1,7 @@
 import { describeFailure } from '../../../define-command';
 import { prepareScreen, type CompoundSpec } from '../screen-input';
 import { runScreen, runScreenTop, type ScreenTableRow } from '../screen-table';
-import { safeCsvCell } from '@/chem';
+import { checkScreeningSettings, safeCsvCell } from '@/chem';
 import { COLUMN_NAMES } from './batch-row';
 
 /** The settings shared by every compound of a batch (the same as one `screen` takes from its flags). */
@@ -24,6 +24,19 @@ export interface BatchSettings {
 export type ScreenOneResult =
   | { ok: true; rowCount: number; columns: string[]; text: string; skipped: number }
   | { ok: false; error: string };
+
+/**
+ * The batch's settings checked once per thread instead of once per compound (prepareScreen passes
+ * checked settings through). Settings that fail the check are left as they are, so that every compound
+ * reports the failure as a single screen would.
+ */
+export function withCheckedSettings(s: BatchSettings): BatchSettings {
+  try {
+    return { ...s, settings: checkScreeningSettings(s.settings) };
+  } catch {
+    return s;
+  }
+}
 
 /** The rows of one compound as output text, each with the compound's id and name first. */
 export function encodeRows(

@@ -3,7 +3,12 @@ import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CompoundSpec } from '../screen-input';
 import type { WorkerAnswer, WorkerJob } from './batch-worker-entry';
-import { screenOne, type BatchSettings, type ScreenOneResult } from './screen-one';
+import {
+  screenOne,
+  withCheckedSettings,
+  type BatchSettings,
+  type ScreenOneResult,
+} from './screen-one';
 
 /**
  * Screens compounds on worker threads (node:worker_threads), or in this thread when one job is asked
@@ -67,7 +72,8 @@ function queue<T>() {
   };
 }
 
-function inThreadScreener(settings: BatchSettings): Screener {
+function inThreadScreener(batch: BatchSettings): Screener {
+  const settings = withCheckedSettings(batch);
   const done = queue<Done>();
   return {
     threads: 1,
