@@ -105,10 +105,19 @@ function threadScreener(url: URL, jobs: number, settings: BatchSettings): Screen
       }),
   );
   const load = workers.map(() => 0);
+  // each thread sends the column names with its first rows only (batch-worker-entry.ts)
+  const columns: string[][] = workers.map(() => []);
   for (const [i, w] of workers.entries()) {
     w.on('message', (answer: WorkerAnswer) => {
       load[i]! -= answer.length;
-      for (const a of answer) done.push(a);
+      for (const a of answer) {
+        const r = a.result;
+        if (r.ok && r.rowCount > 0) {
+          if (r.columns.length > 0) columns[i] = r.columns;
+          else r.columns = columns[i]!;
+        }
+        done.push(a);
+      }
     });
     w.on('error', (err) =>
       done.push({ failure: new Error(`a screening thread failed: ${err.message}`) }),
