@@ -1,10 +1,12 @@
-import { saltStoichiometryFromCharges } from '../compound/salt-stoichiometry';
 import type { CounterIon } from '../library/counter-ion.types';
 import type { ThermoIon } from '../thermo';
 import { DEFAULT_DELTA_PKA_BANDS, saltDeltaPka, type DeltaPkaBands } from './delta-pka';
 import { drugProtolyte } from './ph-profile';
-import { saltLabel } from './salt-label';
-import { counterIonProtolyte } from './screen/counter-ion-protolyte';
+import {
+  candidateSkeletons,
+  type CandidateSkeleton,
+  type LibraryStoichiometry,
+} from './candidate-skeletons';
 import type { ScreeningCandidate, ScreeningStoichiometry } from './screen/screen.types';
 import type { Estimate } from '../result';
 import type { Protolyte } from './speciation';
@@ -43,9 +45,14 @@ export function candidatesFromLibrary(
   const out: ScreeningCandidate[] = [];
   for (const ion of ions) {
     if (ion.kind !== want) continue;
-    for (const { id, label, st, stoich } of stoichiometriesFor(ion, drug.ionCharge, opts)) {
+    for (const sk of candidateSkeletons(
+      ion,
+      drug.ionCharge,
+      opts.firstStoichiometryOnly === true,
+    )) {
+      const { id, label, st, stoich } = sk;
       if (drugP && !opts.keepCocrystalBand) {
-        const d = deltaPkaOrNull(drugP, drug.ionCharge, ion, stoich);
+        const d = deltaPkaOrNull(drugP, drug.ionCharge, sk);
         if (d !== null && d < bands.cocrystalBelow) {
           opts.skipped?.push({ id, label, deltaPka: d });
           continue;
@@ -84,60 +91,15 @@ function drugThermoIonOrNull(thermo: ThermoDrugIon | null | undefined): ThermoIo
   }
 }
 
-type LibraryStoichiometry = CounterIon['stoichiometries'][number];
-type StoichiometryFor = {
-  id: string;
-  label: string;
-  st: LibraryStoichiometry;
-  stoich: ScreeningStoichiometry;
-};
-
-/**
- * An ion's stoichiometries re-balanced for the drug ion's charge (at most 4 of either ion), each
- * charge once, with the candidate id and label.
- */
-function stoichiometriesFor(
-  ion: CounterIon,
-  drugCharge: number,
-  opts: { firstStoichiometryOnly?: boolean },
-): StoichiometryFor[] {
-  const seen = new Set<string>();
-  const list = opts.firstStoichiometryOnly ? ion.stoichiometries.slice(0, 1) : ion.stoichiometries;
-  const out: StoichiometryFor[] = [];
-  for (const st of list) {
-    const { drugPerSalt: m, counterIonPerSalt: n } = saltStoichiometryFromCharges(
-      drugCharge,
-      st.ionCharge,
-    );
-    if (m > 4 || n > 4) continue;
-    const key = `${m}:${n}:${st.ionCharge}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    const own = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : undefined;
-    const label = saltLabel(ion.name, { label: own, drugPerSalt: m, counterIonPerSalt: n });
-    const stoich = {
-      label,
-      drugPerSalt: m,
-      counterIonPerSalt: n,
-      ionCharge: st.ionCharge,
-      ionMolarMassGPerMol: st.ionMolarMassGPerMol,
-      pKaIndex: st.pKaIndex,
-    };
-    const id = `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`;
-    out.push({ id, label, st, stoich });
-  }
-  return out;
-}
-
 /** ΔpKa of the salt, or null when it cannot be formed from the pKa values. */
 function deltaPkaOrNull(
   drugP: Protolyte,
   drugCharge: number,
-  ion: CounterIon,
-  stoich: ScreeningStoichiometry,
+  sk: CandidateSkeleton,
 ): number | null {
+  if (!sk.protolyte.ok) return null;
   try {
-    return saltDeltaPka(drugP, drugCharge, counterIonProtolyte(ion, stoich), stoich.ionCharge);
+    return saltDeltaPka(drugP, drugCharge, sk.protolyte.value, sk.stoich.ionCharge);
   } catch {
     return null;
   }

@@ -117,3 +117,67 @@ export function rankCandidates(
   let rank = 0;
   return scored.map(({ out }) => (out.score === null ? out : { ...out, rank: ++rank }));
 }
+
+/** The ranked entry of a scored row (rank given), as rankCandidates builds it. */
+function rankedEntry(
+  r: RankableRow,
+  kept: { score: number; scores: CriterionScores },
+  weights: ScreeningWeights,
+  den: number,
+  rank: number,
+): RankedRow {
+  const { score, scores } = kept;
+  const contributions: Partial<Record<CriterionKey, number>> = {};
+  for (const k of CRITERIA) contributions[k] = den > 0 ? (weights[k] * scores[k]) / den : 0;
+  return { id: r.id, rank, score, scores, contributions };
+}
+
+/**
+ * The first `top` entries of {@link rankCandidates} — the same entries, numbers and order — each with
+ * the index of its row, for a caller that writes only those (a batch with --top N): every row is
+ * scored, but only the best are kept (ties keep input order, errors last), without a sort of all rows
+ * or an entry object for each.
+ */
+export function rankTop(
+  rows: readonly RankableRow[],
+  weights: ScreeningWeights,
+  top: number,
+): { index: number; ranked: RankedRow }[] {
+  let den = 0;
+  for (const k of CRITERIA) den += weights[k];
+  const best: { index: number; score: number; scores: CriterionScores }[] = [];
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i]!;
+    if (r.error) continue;
+    const scores = criterionScores(r.criteria);
+    const score = weightedScore(scores, weights);
+    // a NaN score has no place in an order: the full ranking decides, as it always did
+    if (Number.isNaN(score)) return fullRankTop(rows, weights, top);
+    // insert after every kept row with a score at least as high (an earlier row wins a tie)
+    let at = best.length;
+    while (at > 0 && best[at - 1]!.score < score) at--;
+    if (at >= top) continue;
+    best.splice(at, 0, { index: i, score, scores });
+    if (best.length > top) best.pop();
+  }
+  const out = best.map((b, k) => ({
+    index: b.index,
+    ranked: rankedEntry(rows[b.index]!, b, weights, den, k + 1),
+  }));
+  for (let i = 0; i < rows.length && out.length < top; i++) {
+    const r = rows[i]!;
+    if (r.error)
+      out.push({
+        index: i,
+        ranked: { id: r.id, rank: null, score: null, scores: null, contributions: {} },
+      });
+  }
+  return out;
+}
+
+/** rankCandidates cut to `top`, each entry with its row's index (ids are unique within a screen). */
+function fullRankTop(rows: readonly RankableRow[], weights: ScreeningWeights, top: number) {
+  return rankCandidates(rows, weights)
+    .slice(0, top)
+    .map((ranked) => ({ index: rows.findIndex((r) => r.id === ranked.id), ranked }));
+}

@@ -109,6 +109,8 @@ const parsedSettingsMemo = new Map<string, string>();
  * (e.g. `temperatureK` below 273.15 K), so callers see one error type for bad input.
  */
 export function parseScreeningSettings(input: unknown): ScreeningSettings {
+  // Settings already checked (checkScreeningSettings) are frozen: passed through, not parsed again.
+  if (isCheckedScreeningSettings(input)) return input;
   // Memoised by the input's JSON text (settings are plain data): a batch parses the same settings for
   // every compound. Each call gets its own copy, so a caller that edits the result changes nothing else.
   let key: string | null = null;
@@ -135,4 +137,39 @@ export function parseScreeningSettings(input: unknown): ScreeningSettings {
     issue.message,
     'see screeningSettingsSchema (settings.ts) for each field’s range',
   );
+}
+
+declare const checkedScreeningSettings: unique symbol;
+
+/**
+ * Screening settings checked once by {@link checkScreeningSettings}: deep-frozen, so one value can be
+ * shared by every screen that reads it (a batch screens thousands of compounds with the same settings),
+ * and {@link parseScreeningSettings} passes it through instead of parsing it again.
+ */
+export type CheckedScreeningSettings = ScreeningSettings & {
+  readonly [checkedScreeningSettings]: true;
+};
+
+const checkedSettings = new WeakSet<object>();
+
+function isCheckedScreeningSettings(input: unknown): input is CheckedScreeningSettings {
+  return typeof input === 'object' && input !== null && checkedSettings.has(input);
+}
+
+function deepFreeze(value: unknown): void {
+  if (typeof value !== 'object' || value === null || Object.isFrozen(value)) return;
+  Object.freeze(value);
+  for (const v of Object.values(value)) deepFreeze(v);
+}
+
+/**
+ * The one check of screening settings at an edge (the CLI's flags or input file, a batch's settings):
+ * parsed as {@link parseScreeningSettings} does (same errors), then frozen and marked as checked.
+ */
+export function checkScreeningSettings(input: unknown): CheckedScreeningSettings {
+  if (isCheckedScreeningSettings(input)) return input;
+  const settings = parseScreeningSettings(input);
+  deepFreeze(settings);
+  checkedSettings.add(settings);
+  return settings as CheckedScreeningSettings;
 }

@@ -21,6 +21,13 @@ export interface CalibratedSaltThermoResult extends SaltThermoResult {
 export const SIGN_CONVENTION =
   'ΔH_L is the lattice dissociation enthalpy, > 0 for MₚXq(s) → p Mᶻ⁺(g) + q Xᶻ⁻(g) (the lattice formation enthalpy is the same number with a minus sign); ΔH_hyd < 0 for one gaseous ion → aqueous ion, absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); ΔH_sol = ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− at infinite dilution, 298.15 K, kJ/mol per formula unit.';
 
+/** The entries of the lists in order, each once (as [...new Set([...a, ...b, ...c])], without the copies). */
+function uniqueInOrder(...lists: readonly (readonly string[])[]): string[] {
+  const out: string[] = [];
+  for (const list of lists) for (const x of list) if (!out.includes(x)) out.push(x);
+  return out;
+}
+
 /**
  * ΔH_sol = ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− for M_pX_q from the chosen lattice estimate, and the full
  * result around it (hydration enthalpies, calibration figures, formula-unit volume when one was used).
@@ -44,7 +51,7 @@ export function assembleSaltThermo(
     value: solValue,
     uncertainty: solU,
     method: 'hess-law',
-    sources: [...new Set([...lat.sources, ...hc.sources, ...ha.sources])],
+    sources: uniqueInOrder(lat.sources, hc.sources, ha.sources),
     notes: [
       `ΔH_sol = ΔH_L + ${p}·ΔH_hyd(${req.cation.label}) + ${q}·ΔH_hyd(${req.anion.label}): a small difference of large numbers (${lat.value.toFixed(0)} vs ${(-(p * hc.value + q * ha.value)).toFixed(0)} kJ/mol)`,
       'uncertainties combined in quadrature as if independent; differences between counter-ions for one drug ion are better determined than this absolute value',

@@ -30,6 +30,35 @@ function applicableMethods(c: CheckedSaltRequest): LatticeMethod[] {
   return out;
 }
 
+type RankedEstimate = { m: LatticeMethod; r: ChosenLattice; rel: number };
+
+/**
+ * Each applicable method's estimate, lowest relative uncertainty first (ties in the order of
+ * preference); a method that fails is left out, and when every one fails the first error is thrown.
+ * A plain loop: a request runs this for every written candidate of a batch.
+ */
+function rankedEstimates(
+  c: CheckedSaltRequest,
+  methods: readonly LatticeMethod[],
+  calOpts: LatticeCalibrationOptions,
+): RankedEstimate[] {
+  let firstError: unknown;
+  let failed = false;
+  const ranked: RankedEstimate[] = [];
+  for (const m of methods) {
+    try {
+      const r = latticeEnthalpyEstimate(c, m, calOpts);
+      ranked.push({ m, r, rel: r.estimate.uncertainty / r.estimate.value });
+    } catch (err) {
+      if (!failed) firstError = err;
+      failed = true;
+    }
+  }
+  if (ranked.length === 0) throw firstError;
+  if (ranked.length > 1) ranked.sort((a, b) => a.rel - b.rel);
+  return ranked;
+}
+
 /**
  * The lattice estimate for the requested method (`auto` when none is given) and the reason stated for
  * it. `auto` ranks the applicable methods by relative uncertainty on the bundled reference salts of
@@ -51,20 +80,8 @@ export function chooseLatticeEstimate(
       );
     }
     const group = groupOf(req);
-    const errors: unknown[] = [];
-    const ranked = methods
-      .flatMap((m) => {
-        try {
-          const r = latticeEnthalpyEstimate(c, m, calOpts);
-          return [{ m, r, rel: r.estimate.uncertainty / r.estimate.value }];
-        } catch (err) {
-          errors.push(err);
-          return [];
-        }
-      })
-      .sort((a, b) => a.rel - b.rel);
-    const best = ranked[0];
-    if (!best) throw errors[0];
+    const ranked = rankedEstimates(c, methods, calOpts);
+    const best = ranked[0]!;
     return {
       chosen: best.r,
       reason: `auto: ${best.m} has the lowest ${calOpts.calibrate === false ? 'measured' : 'stated (cross-validated where calibrated)'} uncertainty (${(best.rel * 100).toFixed(1)} %) among the methods these inputs allow (${ranked.map((r) => `${r.m} ${(r.rel * 100).toFixed(1)} %`).join(', ')}), measured on the bundled ${group === 'halides' ? 'monatomic-ion' : 'polyatomic-ion'} reference salts`,

@@ -2,7 +2,7 @@ import type { Estimate } from '../../result';
 import { saltMolarMassGPerMol } from '../mass-cost';
 import { interpretMeasurements, type InterpretedMeasurements } from '../measurements';
 import type { Protolyte } from '../speciation';
-import { counterIonProtolyte } from './counter-ion-protolyte';
+import { candidateProtolyte } from '../candidate-skeletons';
 import { saltMassInput, type ScreenContext } from './screen-context';
 import type { ScreeningCandidate } from './screen.types';
 
@@ -32,7 +32,8 @@ export const isPrepared = (p: PreparedOrError): p is PreparedCandidate => !('err
 export function prepareCandidate(ctx: ScreenContext, cand: ScreeningCandidate): PreparedOrError {
   try {
     const st = cand.stoichiometry;
-    const protolyte = counterIonProtolyte(cand.counterIon, st);
+    // a library candidate's protolyte was built with its skeleton (candidate-skeletons.ts)
+    const protolyte = candidateProtolyte(cand.counterIon, st);
     const saltGPerMol = saltMolarMassGPerMol(saltMassInput(ctx, cand));
     const measured = cand.measurements?.length
       ? interpretMeasurements(cand.measurements, {

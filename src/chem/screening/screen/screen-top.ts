@@ -1,5 +1,5 @@
 import type { Estimate } from '../../result';
-import { rankCandidates, type RankableRow, type RankedRow } from '../ranking';
+import { rankCandidates, rankTop, type RankableRow, type RankedRow } from '../ranking';
 import { SALT_SOLUBILITY_MODEL } from '../salt-solubility/salt-solubility-model.data';
 import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 import type { ScreeningSettings } from '../settings';
@@ -17,13 +17,14 @@ import type { ScreenCompoundInput, ScreeningCandidate, ScreenRow } from './scree
  *
  * 1. the numbers of every candidate (row-numbers.ts: K_sp, pH_max, dose numbers, media,
  *    microenvironment — the same function the full row calls), ranked by the same `rankCandidates`;
- * 2. the words, reasons, flags and ΔH_sol per drug ion of the N rows that are written only.
+ * 2. the words, reasons, flags and ΔH_sol per drug ion of the N rows that are written only, on the
+ *    numbers of pass 1.
  *
  * ΔH_sol is left out of pass 1 when no ranked number can depend on it (`solutionEnthalpyRanks`): the
  * shipped salt-solubility model has no ΔH_sol predictor, every candidate has counter-ion descriptors (so
  * no anchor estimate shifts by the relative ΔH_sol) and none carries measurements. The rows written are
- * then rebuilt with it; if their criteria differ from pass 1's in any way, or a row fails only in its
- * words, the whole screen is run the full way and ranked (so the result never depends on the shortcut).
+ * then given their ΔH_sol and words on pass 1's numbers (which the ΔH_sol cannot move then); if a row
+ * fails only in its words, the whole screen is run the full way and ranked.
  * tests/chem/screening/screen/screen-top.test.ts compares both ways field by field.
  */
 export interface ScreenTopOptions {
@@ -71,31 +72,27 @@ const withLater = (
   return f ? { ...c, solutionEnthalpyKJ: f() } : c;
 };
 
-/** Pass 1: every candidate's numbers, and the ranking they give. */
+/** Pass 1: every candidate's numbers (by the candidate's index), and the ranking they give. */
 function rankByNumbers(setup: ScreenSetup, top: number) {
-  const numbers = new Map<string, RowNumbers>();
-  const rankable: RankableRow[] = setup.prepared.map((p) => {
+  const numbers: (RowNumbers | undefined)[] = new Array(setup.prepared.length);
+  const rankable: RankableRow[] = setup.prepared.map((p, i) => {
     if (!isPrepared(p)) return { id: p.cand.id, criteria: NO_CRITERIA, error: p.error };
     try {
       const kspOf = () => setup.ksps.get(p.cand.id) ?? chooseAgain();
       const n = rowNumbers(setup.ctx, p, kspOf, setup.media, setup.hcl, setup.shared);
-      numbers.set(p.cand.id, n);
+      numbers[i] = n;
       return { id: p.cand.id, criteria: n.criteria, error: null };
     } catch (err) {
       return { id: p.cand.id, criteria: NO_CRITERIA, error: String(err) || 'failed' };
     }
   });
-  const ranked = rankCandidates(rankable, setup.ctx.settings.weights).slice(0, top);
-  return { ranked, numbers };
+  return { ranked: rankTop(rankable, setup.ctx.settings.weights, top), numbers };
 }
 
 /** K_sp that failed in the setup fails again (the row turns it into its error). */
 function chooseAgain(): never {
   throw new Error('K_sp could not be chosen');
 }
-
-const sameCriteria = (a: RankableRow['criteria'], b: RankableRow['criteria']) =>
-  (Object.keys(a) as (keyof typeof a)[]).every((k) => Object.is(a[k], b[k]));
 
 /** The N best rows of a screen, exactly as the full screen ranks them (see above). */
 export function screenCompoundTop(
@@ -108,25 +105,28 @@ export function screenCompoundTop(
   const setup = screenSetup({ ...input, candidates });
   freeFormGastric(setup.ctx, setup.media[0], setup.hcl); // fails where the full screen fails
   const { ranked, numbers } = rankByNumbers(setup, opts.top);
-  const byId = new Map(setup.prepared.map((p) => [p.cand.id, p]));
   const rows: ScreenRow[] = [];
-  for (const k of ranked) {
-    const p = byId.get(k.id)!;
-    const n = numbers.get(k.id);
+  for (const { index } of ranked) {
+    const p = setup.prepared[index]!;
+    const n = numbers[index];
     if (!defer || !n || !isPrepared(p)) {
       const row = screenRowOf(setup, p, n);
       if ((row.error === null) !== (n !== undefined)) return fullScreenTop(input, opts.top, later);
       rows.push(row);
       continue;
     }
-    // ΔH_sol now, for a written row: prepared again and screened the full way with its own K_sp.
-    const p2 = prepareCandidate(setup.ctx, withLater(p.cand, later));
-    const row = screenRowOf({ ...setup, ksps: new Map() }, p2);
-    if (row.error !== null || !sameCriteria(row.criteria, n.criteria))
-      return fullScreenTop(input, opts.top, later);
+    // ΔH_sol now, for a written row: prepared again with it, its numbers those of pass 1 (when
+    // `defer` holds no number reads ΔH_sol, see above); its words and ΔH_sol per drug ion are new.
+    const row = screenRowOf(setup, prepareCandidate(setup.ctx, withLater(p.cand, later)), n);
+    if (row.error !== null) return fullScreenTop(input, opts.top, later);
     rows.push(row);
   }
-  return { settings: setup.ctx.settings, ranked, rows, robustnessShared: setup.shared };
+  return {
+    settings: setup.ctx.settings,
+    ranked: ranked.map((r) => r.ranked),
+    rows,
+    robustnessShared: setup.shared,
+  };
 }
 
 /** The full screen, ranked, its first N: the way back when the shortcut's check fails. */

@@ -9,7 +9,7 @@ import {
   intrinsicSolubilityOriginSchema,
   parseFormula,
   pkaOriginSchema,
-  parseScreeningSettings,
+  checkScreeningSettings,
   resolveExcipients,
   parseStructure,
   sameElements,
@@ -241,7 +241,8 @@ export async function prepareScreen(
   const di = drugIon({ kind: spec.kind, ionCharge, formula }, structure);
   const custom = await buildCustomIons(opts.customIons ?? [], spec.kind);
   const ions = resolveCounterIons(spec.ions, spec.kind, name(n, 'ions'), custom.ions);
-  const settings = parseScreeningSettings(opts.settings);
+  // checked once at an edge: a batch passes the same checked settings for every compound
+  const settings = checkScreeningSettings(opts.settings);
   resolveExcipients(settings.excipients, 'settings.excipients');
   const skipped: { id: string; label: string; deltaPka: number }[] = [];
   const solutionEnthalpyLater = opts.deferSolutionEnthalpy

@@ -47,12 +47,13 @@ function tableRow(
     // Precision that follows each number's 1σ, as the app and the sheet show it (src/chem/report).
     const shown = shownRowNumbers(row, shared);
     const u = uncertaintiesOf(row, shared);
-    const doseAt = (pH: number) => {
-      const d = at(pH);
-      return d && d.doseNumber !== null
+    const d12 = at(1.2);
+    const w = worst(row);
+    // each looked up once (a row writes the pH 1.2 point twice and the excipient four times)
+    const doseAt = (d: ReturnType<typeof at>) =>
+      d && d.doseNumber !== null
         ? roundLogNormal(d.doseNumber, d.solid === 'salt' ? u.saltLogSigma : u.freeLogSigma).value
         : '';
-    };
     return {
       rank: k.rank ?? '',
       candidate: row.label,
@@ -80,9 +81,9 @@ function tableRow(
       log10_ksp_sd: sig(row.log10Ksp?.uncertainty, 2),
       ksp_origin: row.kspOrigin ?? '',
       ph_max: shown.phMax?.value ?? '',
-      solubility_ph_1_2_mg_per_ml: sig(at(1.2)?.solubilityMgPerMl),
-      dose_number_ph_1_2: doseAt(1.2),
-      dose_number_ph_6_8: doseAt(6.8),
+      solubility_ph_1_2_mg_per_ml: sig(d12?.solubilityMgPerMl),
+      dose_number_ph_1_2: doseAt(d12),
+      dose_number_ph_6_8: doseAt(at(6.8)),
       gastric_dose_number: shown.gastricDoseNumber?.value ?? '',
       worst_ph: row.worst?.pH ?? '',
       worst_dose_number: shown.worstDoseNumber?.value ?? '',
@@ -107,10 +108,9 @@ function tableRow(
       gastric_dose_number_high: shown.gastricDoseNumber?.high ?? '',
       // added last so every earlier column keeps its place: the chosen excipient most likely to
       // convert the salt (empty without --excipients) and P(conversion), with its band in words
-      worst_excipient: worst(row)?.excipientId ?? '',
-      worst_excipient_p_conversion:
-        worst(row)?.probability == null ? '' : Number(worst(row)!.probability!.toFixed(3)),
-      worst_excipient_risk: worst(row) ? worst(row)!.band : '',
+      worst_excipient: w?.excipientId ?? '',
+      worst_excipient_p_conversion: w?.probability == null ? '' : Number(w.probability.toFixed(3)),
+      worst_excipient_risk: w ? w.band : '',
     };
   }
 }

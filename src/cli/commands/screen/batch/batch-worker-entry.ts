@@ -1,6 +1,11 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import type { CompoundSpec } from '../screen-input';
-import { screenOne, type BatchSettings, type ScreenOneResult } from './screen-one';
+import {
+  screenOne,
+  withCheckedSettings,
+  type BatchSettings,
+  type ScreenOneResult,
+} from './screen-one';
 
 /**
  * Entry file of the worker threads of `saltsmith screen --batch` (an entry, like src/cli/entry.ts: it
@@ -16,11 +21,26 @@ export type WorkerAnswer = { seq: number; result: ScreenOneResult }[];
 export function startBatchWorker(): void {
   const port = parentPort;
   if (!port) throw new Error('batch-worker runs only as a worker thread');
-  const settings = workerData as BatchSettings;
+  const settings = withCheckedSettings(workerData as BatchSettings);
+  // The column names are the same for every compound: they travel once, with this thread's first
+  // rows, and the pool gives them to the later results (worker-pool.ts).
+  let columnsSent = false;
+  const lean = (result: ScreenOneResult): ScreenOneResult => {
+    if (!result.ok || result.rowCount === 0) return result;
+    if (!columnsSent) {
+      columnsSent = true;
+      return result;
+    }
+    return { ...result, columns: [] };
+  };
   port.on('message', (jobs: WorkerRequest) => {
     void Promise.all(
       jobs.map(async (j) => ({ seq: j.seq, result: await screenOne(j.spec, settings, j.id) })),
-    ).then((answer: WorkerAnswer) => port.postMessage(answer));
+    ).then((answer: WorkerAnswer) => {
+      // in message order, so that the columns come with the first rows the pool reads
+      for (const a of answer) a.result = lean(a.result);
+      port.postMessage(answer);
+    });
   });
 }
 

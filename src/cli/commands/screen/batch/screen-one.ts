@@ -1,7 +1,7 @@
 import { describeFailure } from '../../../define-command';
 import { prepareScreen, type CompoundSpec } from '../screen-input';
 import { runScreen, runScreenTop, type ScreenTableRow } from '../screen-table';
-import { safeCsvCell } from '@/chem';
+import { checkScreeningSettings, safeCsvCell } from '@/chem';
 import { COLUMN_NAMES } from './batch-row';
 
 /** The settings shared by every compound of a batch (the same as one `screen` takes from its flags). */
@@ -25,6 +25,40 @@ export type ScreenOneResult =
   | { ok: true; rowCount: number; columns: string[]; text: string; skipped: number }
   | { ok: false; error: string };
 
+/**
+ * The batch's settings checked once per thread instead of once per compound (prepareScreen passes
+ * checked settings through). Settings that fail the check are left as they are, so that every compound
+ * reports the failure as a single screen would.
+ */
+export function withCheckedSettings(s: BatchSettings): BatchSettings {
+  try {
+    return { ...s, settings: checkScreeningSettings(s.settings) };
+  } catch {
+    return s;
+  }
+}
+
+/** The output columns for a table's keys, built once while the keys stay the same. */
+let columnsMemo: { keys: readonly string[]; columns: string[] } | null = null;
+
+function columnsFor(keys: readonly string[]): string[] {
+  const m = columnsMemo;
+  if (m && m.keys.length === keys.length && m.keys.every((k, i) => k === keys[i])) return m.columns;
+  const columns = ['compound_id', 'compound_name', ...keys];
+  columnsMemo = { keys, columns };
+  return columns;
+}
+
+/**
+ * One cell as csvField(safeCsvCell(v)) writes it, the common cells first: a number's text never
+ * needs quotes or the formula guard (papaparse writes String(v) too), an empty text stays empty.
+ */
+function csvCell(v: unknown): string {
+  if (typeof v === 'number') return String(v);
+  if (v === '') return '';
+  return csvField(safeCsvCell(v));
+}
+
 /** The rows of one compound as output text, each with the compound's id and name first. */
 export function encodeRows(
   id: string,
@@ -33,21 +67,21 @@ export function encodeRows(
   format: 'csv' | 'jsonl',
 ): { rowCount: number; columns: string[]; text: string } {
   if (table.length === 0) return { rowCount: 0, columns: [], text: '' };
-  const keys = Object.keys(table[0]!) as (keyof ScreenTableRow)[];
-  const columns = ['compound_id', 'compound_name', ...keys];
+  const columns = columnsFor(Object.keys(table[0]!));
+  let text = '';
   if (format === 'jsonl') {
-    const text = table
-      .map((row) => JSON.stringify({ compound_id: id, compound_name: name, ...row }))
-      .join('\n');
-    return { rowCount: table.length, columns, text: text + '\n' };
+    // The bytes of JSON.stringify({ compound_id, compound_name, ...row }) without building that
+    // object: the two leading members, then the row's own members (no row key is one of theirs).
+    const lead = `{"compound_id":${JSON.stringify(id)},"compound_name":${JSON.stringify(name)},`;
+    for (const row of table) text += lead + JSON.stringify(row).slice(1) + '\n';
+    return { rowCount: table.length, columns, text };
   }
   // CSV as Papa.unparse writes it (the header line comes from the caller), each cell through the
   // spreadsheet-formula guard, without building an object per row.
-  const lead = `${csvField(safeCsvCell(id))},${csvField(safeCsvCell(name))}`;
-  let text = '';
+  const lead = `${csvCell(id)},${csvCell(name)}`;
   for (const row of table) {
     text += lead;
-    for (const k of keys) text += ',' + csvField(safeCsvCell(row[k]));
+    for (const v of Object.values(row)) text += ',' + csvCell(v);
     text += '\n';
   }
   return { rowCount: table.length, columns, text };

@@ -3,7 +3,12 @@ import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CompoundSpec } from '../screen-input';
 import type { WorkerAnswer, WorkerJob } from './batch-worker-entry';
-import { screenOne, type BatchSettings, type ScreenOneResult } from './screen-one';
+import {
+  screenOne,
+  withCheckedSettings,
+  type BatchSettings,
+  type ScreenOneResult,
+} from './screen-one';
 
 /**
  * Screens compounds on worker threads (node:worker_threads), or in this thread when one job is asked
@@ -67,7 +72,8 @@ function queue<T>() {
   };
 }
 
-function inThreadScreener(settings: BatchSettings): Screener {
+function inThreadScreener(batch: BatchSettings): Screener {
+  const settings = withCheckedSettings(batch);
   const done = queue<Done>();
   return {
     threads: 1,
@@ -89,7 +95,12 @@ function threadScreener(url: URL, jobs: number, settings: BatchSettings): Screen
   // V8 collect early instead of growing each thread's heap towards the default size. Measured on
   // 10,000 generated compounds, JSON Lines, 2 cores, load ~2: old 128 MB / default young 337–339 MB
   // peak, 24.3 s CPU; old 64 MB / young 16 MB 270–291 MB, 25.7–27.5 s CPU (the < 300 MB goal
-  // of the batch costs about 5 % CPU). Output is the same bytes.
+  // of the batch costs about 5 % CPU). Output is the same bytes. Measured again (2 cores, load ~9,
+  // --trace-gc on 2,000 compounds): young 24 MB scavenges as often as 16 MB (336 times each; V8
+  // sizes its semi-spaces in steps); 32 MB halves the scavenges but peaked at 298–302 MB on 10,000
+  // compounds as JSON Lines, over the goal; 32 MB young with 48 MB old stayed at 248–249 MB but its
+  // CPU per compound was within the noise of this setting, and a lower old-space ceiling risks a
+  // thread running out of memory on heavier input. So these limits stay.
   const workers = Array.from(
     { length: jobs },
     () =>
@@ -99,10 +110,19 @@ function threadScreener(url: URL, jobs: number, settings: BatchSettings): Screen
       }),
   );
   const load = workers.map(() => 0);
+  // each thread sends the column names with its first rows only (batch-worker-entry.ts)
+  const columns: string[][] = workers.map(() => []);
   for (const [i, w] of workers.entries()) {
     w.on('message', (answer: WorkerAnswer) => {
       load[i]! -= answer.length;
-      for (const a of answer) done.push(a);
+      for (const a of answer) {
+        const r = a.result;
+        if (r.ok && r.rowCount > 0) {
+          if (r.columns.length > 0) columns[i] = r.columns;
+          else r.columns = columns[i]!;
+        }
+        done.push(a);
+      }
     });
     w.on('error', (err) =>
       done.push({ failure: new Error(`a screening thread failed: ${err.message}`) }),
