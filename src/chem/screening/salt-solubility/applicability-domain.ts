@@ -34,23 +34,68 @@ export interface DomainVerdict {
   outside: string[];
 }
 
-export function applicabilityDomain(input: SaltSolubilityInput): DomainVerdict {
-  const row = featureRow(input);
+/** Each domain descriptor with its predictor and training range, looked up once. */
+const DOMAIN_CHECKS = SALT_SOLUBILITY_DOMAIN.map((r) => ({
+  name: r.name,
+  feature: SALT_SOLUBILITY_FEATURES.find((f) => f.name === r.name),
+  min: r.min ?? 0,
+  max: r.max ?? 0,
+  sd: r.sd ?? 1,
+}));
+
+const FEATURE_NAMES = SALT_SOLUBILITY_FEATURES.map((f) => f.name);
+
+/** The column of each domain descriptor in a feature row with these names (−1: not among them). */
+let columnsFor: { names: readonly string[]; columns: number[] } | null = null;
+function domainColumns(names: readonly string[]): number[] {
+  if (columnsFor?.names !== names)
+    columnsFor = { names, columns: DOMAIN_CHECKS.map((c) => names.indexOf(c.name)) };
+  return columnsFor.columns;
+}
+
+/**
+ * The largest distance outside the training range, in training SDs (0 inside), read from a feature
+ * row already computed (columns named by `names`); `outside` (when given) receives one phrase per
+ * descriptor outside. One loop for the verdict and for the factor alone, so both widen the 1σ by
+ * the same number.
+ */
+function domainExcess(
+  input: SaltSolubilityInput,
+  row: readonly number[],
+  names: readonly string[],
+  outside?: string[],
+): number {
+  const columns = domainColumns(names);
   let d = 0;
-  const outside: string[] = [];
-  for (const r of SALT_SOLUBILITY_DOMAIN) {
-    const j = SALT_SOLUBILITY_FEATURES.findIndex((f) => f.name === r.name);
-    const x = row[j]!;
-    const min = r.min ?? 0;
-    const max = r.max ?? 0;
-    const sd = r.sd ?? 1;
+  for (let k = 0; k < DOMAIN_CHECKS.length; k++) {
+    const { name, feature, min, max, sd } = DOMAIN_CHECKS[k]!;
+    const j = columns[k]!;
+    const x = j >= 0 ? row[j]! : feature!.value(input);
     const excess = Math.max(0, x - max, min - x) / sd;
     if (excess > 0) {
-      outside.push(`${WORDS[r.name] ?? r.name} ${fmt(x)} (training ${fmt(min)}–${fmt(max)})`);
+      outside?.push(`${WORDS[name] ?? name} ${fmt(x)} (training ${fmt(min)}–${fmt(max)})`);
       d = Math.max(d, excess);
     }
   }
+  return d;
+}
+
+export function applicabilityDomain(input: SaltSolubilityInput): DomainVerdict {
+  const outside: string[] = [];
+  const d = domainExcess(input, featureRow(input), FEATURE_NAMES, outside);
   return { sigmaFactor: Math.min(1 + d, DOMAIN_MAX_SIGMA_FACTOR), outside };
+}
+
+/**
+ * applicabilityDomain's σ factor without its words, from the model's feature row of the same input
+ * (`names` its columns; a descriptor the model does not read is computed from the input).
+ */
+export function domainSigmaFactor(
+  input: SaltSolubilityInput,
+  row: readonly number[],
+  names: readonly string[],
+): number {
+  return Math.min(1 + domainExcess(input, row, names), DOMAIN_MAX_SIGMA_FACTOR);
 }
 
 /** A salt of an acidic drug with a cation of charge ≥ 2 (calcium, magnesium, zinc …). */

@@ -4,6 +4,7 @@ import type { Estimate } from '../../result';
 import {
   applicabilityDomain,
   divalentCationAdjustment,
+  domainSigmaFactor,
   isDivalentCationInput,
   type DomainVerdict,
 } from './applicability-domain';
@@ -156,81 +157,138 @@ function fusionNote(input: SaltSolubilityInput, shift: number, applied: boolean)
     : `bench fusion data: T_m ${kelvinToCelsius(input.meltingPointK!).toFixed(1)} °C, ${dh}; the ideal solubility (Schröder–van Laar, ΔC_p = 0) would move the estimate by ${sign}${shift.toFixed(2)} decades against the typical published salt — shown as information, NOT applied: ${check}`;
 }
 
-export function estimateSaltWaterSolubility(
+/**
+ * The estimate's numbers alone: what a ranking reads of every candidate (value and 1σ), and what the
+ * words need to be written later for the rows that are shown. estimateSaltWaterSolubility is
+ * saltWaterEstimateOf(saltWaterNumbers(…)): the same operations in the same order either way.
+ */
+export interface SaltWaterNumbers {
+  /** log₁₀ of the drug's molar solubility from the salt, mol/L of drug. */
+  value: number;
+  /** Its total 1σ, decades (shared ⊕ within ⊕ S₀'s part). */
+  uncertainty: number;
+  withinLog10Sd: number;
+  /** The predictors of this salt, in the shipped model's column order. */
+  row: number[];
+  /** An acid's salt with a cation of charge ≥ 2 (isDivalentCationInput). */
+  divalent: boolean;
+  /** The crystal term from the bench melting data (null without), and whether it was applied. */
+  shift: number | null;
+  applied: boolean;
+}
+
+/** The divalent-cation adjustment: data constants only, so made once. */
+let divalentOnce: ReturnType<typeof divalentCationAdjustment> | null = null;
+const divalent = () => (divalentOnce ??= divalentCationAdjustment());
+
+/** Slope of the estimate on log₁₀ S₀ (how much of S₀'s 1σ it carries): a model constant. */
+const SLOPE_S0 = ((): number => {
+  const { model } = SHIPPED;
+  const s0Index = model.ridge.featureNames.indexOf('drugLog10IntrinsicM');
+  return model.kind === 'within-series'
+    ? 1
+    : s0Index >= 0
+      ? model.ridge.coefficients[s0Index]! / model.ridge.featureScales[s0Index]!
+      : 0;
+})();
+
+export function saltWaterNumbers(
   input: SaltSolubilityInput,
   opts: SaltSolubilityOptions = {},
-): SaltWaterSolubilityEstimate {
-  const { model, features, literal } = SHIPPED;
+): SaltWaterNumbers {
+  const { model, features } = SHIPPED;
   const row = featureRow(input, features);
   let value = predictSaltSolubility(model, row, input.drug.log10IntrinsicM);
+  let within = SALT_SOLUBILITY_WITHIN_LOG10_SD;
+  const sigmaFactor = domainSigmaFactor(input, row, model.ridge.featureNames);
+  if (sigmaFactor > 1) within *= sigmaFactor;
+  const isDivalent = isDivalentCationInput(input);
+  if (isDivalent) {
+    const adj = divalent();
+    value += adj.offsetDecades;
+    within = Math.hypot(within, adj.extraWithinLog10Sd);
+  }
+  const shift = crystalShiftDecades(input, opts.temperatureK ?? STANDARD_TEMPERATURE_K);
+  const applied = shift !== null && SALT_SOLUBILITY_FUSION_CHECK.fusionCorrectionApplies;
+  if (applied) value += shift;
+  const s0Part = SLOPE_S0 * (opts.log10IntrinsicSigma ?? 0);
+  const uncertainty = Math.sqrt(SALT_SOLUBILITY_SHARED_LOG10_SD ** 2 + within ** 2 + s0Part ** 2);
+  return { value, uncertainty, withinLog10Sd: within, row, divalent: isDivalent, shift, applied };
+}
+
+/** The words that do not depend on the salt: written once. */
+let ridgeNoteOnce: string | null = null;
+const ridgeNote = () =>
+  (ridgeNoteOnce ??= `ridge regression on ${SHIPPED.literal.nSalts} published salts of ${SHIPPED.literal.nDrugs} drugs; 1σ from leaving whole drugs out: ${SALT_SOLUBILITY_SHARED_LOG10_SD.toFixed(2)} decades shared by every salt of the drug ⊕ ${SALT_SOLUBILITY_WITHIN_LOG10_SD.toFixed(2)} for this salt`);
+
+/** What drives the estimate (predictors moving it by ≥ the threshold, then the class terms), largest first. */
+function driversOf(num: SaltWaterNumbers): SolubilityDriver[] {
+  const { model } = SHIPPED;
   const drivers: SolubilityDriver[] = [];
-  ridgeContributions(model.ridge, row).forEach((c, j) => {
+  ridgeContributions(model.ridge, num.row).forEach((c, j) => {
     if (Math.abs(c) < DRIVER_THRESHOLD_DECADES) return;
     const id = driverFor(model.ridge.featureNames[j]!, c);
     if (id) drivers.push({ id, decades: c });
   });
-  const notes = [
-    `ridge regression on ${literal.nSalts} published salts of ${literal.nDrugs} drugs; 1σ from leaving whole drugs out: ${SALT_SOLUBILITY_SHARED_LOG10_SD.toFixed(2)} decades shared by every salt of the drug ⊕ ${SALT_SOLUBILITY_WITHIN_LOG10_SD.toFixed(2)} for this salt`,
-  ];
+  const offset = num.divalent ? divalent().offsetDecades : 0;
+  if (num.divalent && Math.abs(offset) >= DRIVER_THRESHOLD_DECADES)
+    drivers.push({ id: 'divalent-cation', decades: offset });
+  const shift = num.shift;
+  if (shift !== null && num.applied && Math.abs(shift) >= DRIVER_THRESHOLD_DECADES)
+    drivers.push({ id: shift < 0 ? 'high-melting-salt' : 'low-melting-salt', decades: shift });
+  return drivers.sort((a, b) => Math.abs(b.decades) - Math.abs(a.decades));
+}
+
+/** The estimate with its words, from its numbers (`sources` is the array its Estimate carries). */
+export function saltWaterEstimateOf(
+  input: SaltSolubilityInput,
+  opts: SaltSolubilityOptions,
+  num: SaltWaterNumbers,
+  sources: string[] = [SALT_SOLUBILITY_MODEL_SOURCE],
+): SaltWaterSolubilityEstimate {
   const remarks: string[] = [];
-  let within = SALT_SOLUBILITY_WITHIN_LOG10_SD;
   const domain = applicabilityDomain(input);
   if (domain.sigmaFactor > 1) {
-    within *= domain.sigmaFactor;
     remarks.push(
       `counter-ion outside the training data's range (${domain.outside.join('; ')}): within-series 1σ widened ×${domain.sigmaFactor.toFixed(1)} (applicability domain, OECD QSAR principle 3; the factor is common practice)`,
     );
   }
-  if (isDivalentCationInput(input)) {
-    const adj = divalentCationAdjustment();
-    value += adj.offsetDecades;
-    within = Math.hypot(within, adj.extraWithinLog10Sd);
-    if (Math.abs(adj.offsetDecades) >= DRIVER_THRESHOLD_DECADES)
-      drivers.push({ id: 'divalent-cation', decades: adj.offsetDecades });
-    remarks.push(adj.note);
-  }
-  const shift = crystalShiftDecades(input, opts.temperatureK ?? STANDARD_TEMPERATURE_K);
-  const applied = shift !== null && SALT_SOLUBILITY_FUSION_CHECK.fusionCorrectionApplies;
-  if (shift !== null) {
-    if (applied) value += shift;
-    if (applied && Math.abs(shift) >= DRIVER_THRESHOLD_DECADES)
-      drivers.push({ id: shift < 0 ? 'high-melting-salt' : 'low-melting-salt', decades: shift });
-    remarks.push(fusionNote(input, shift, applied));
-  }
-  drivers.sort((a, b) => Math.abs(b.decades) - Math.abs(a.decades));
-  notes.push(...remarks);
-  const s0Index = model.ridge.featureNames.indexOf('drugLog10IntrinsicM');
-  const slopeS0 =
-    model.kind === 'within-series'
-      ? 1
-      : s0Index >= 0
-        ? model.ridge.coefficients[s0Index]! / model.ridge.featureScales[s0Index]!
-        : 0;
-  const s0Part = slopeS0 * (opts.log10IntrinsicSigma ?? 0);
+  if (num.divalent) remarks.push(divalent().note);
+  if (num.shift !== null) remarks.push(fusionNote(input, num.shift, num.applied));
+  const notes = [ridgeNote(), ...remarks];
   if (opts.log10IntrinsicSigma)
     notes.push(`combined with S₀'s ${opts.log10IntrinsicSigma.toFixed(2)}`);
   if (
-    model.ridge.featureNames.includes('thermoShiftDecades') &&
+    SHIPPED.model.ridge.featureNames.includes('thermoShiftDecades') &&
     (input.thermoShiftDecades === null || input.thermoShiftDecades === undefined)
   ) {
     notes.push('no ΔH_sol for this salt: the thermochemical term is taken as the average');
   }
   return {
     log10DrugM: {
-      value,
-      uncertainty: Math.sqrt(SALT_SOLUBILITY_SHARED_LOG10_SD ** 2 + within ** 2 + s0Part ** 2),
-      method: applied ? 'salt-solubility-ridge-fusion' : 'salt-solubility-ridge',
-      sources: [
-        'Saltsmith salt-solubility model (published series in fixtures/reference/salt-solubility.csv)',
-      ],
+      value: num.value,
+      uncertainty: num.uncertainty,
+      method: num.applied ? 'salt-solubility-ridge-fusion' : 'salt-solubility-ridge',
+      sources,
       notes,
     },
     sharedLog10Sd: SALT_SOLUBILITY_SHARED_LOG10_SD,
-    withinLog10Sd: within,
-    origin: applied ? 'model+fusion' : 'model',
-    fusion: shift === null ? null : { crystalShiftDecades: shift, applied },
+    withinLog10Sd: num.withinLog10Sd,
+    origin: num.applied ? 'model+fusion' : 'model',
+    fusion: num.shift === null ? null : { crystalShiftDecades: num.shift, applied: num.applied },
     domain,
     remarks,
-    drivers,
+    drivers: driversOf(num),
   };
+}
+
+/** Where the estimate comes from, as its Estimate names it. */
+export const SALT_SOLUBILITY_MODEL_SOURCE =
+  'Saltsmith salt-solubility model (published series in fixtures/reference/salt-solubility.csv)';
+
+export function estimateSaltWaterSolubility(
+  input: SaltSolubilityInput,
+  opts: SaltSolubilityOptions = {},
+): SaltWaterSolubilityEstimate {
+  return saltWaterEstimateOf(input, opts, saltWaterNumbers(input, opts));
 }
