@@ -3,8 +3,6 @@ import type { Estimate } from '../../result';
 import { estimateKsp, log10KspFromFormulaUnits } from '../ksp-estimate';
 import type { PreparedCandidate } from './prepare-candidate';
 import type { ScreenContext } from './screen-context';
-import { estimatedKspFlag, measuredEnthalpyReason } from './screen-reasons';
-import { saltWaterReason } from './salt-water-words';
 import type { Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
 import { benchKspChoice } from './bench-ksp';
 import { saltWaterOf, type KspChoice } from './ksp-choice-parts';
@@ -12,11 +10,15 @@ import { GAS_CONSTANT_KJ_PER_MOL_K } from '../../constants/physical';
 import {
   SALT_SOLUBILITY_MODEL_SOURCE,
   SALT_SOLUBILITY_SHARED_LOG10_SD,
-  saltWaterEstimateOf,
   saltWaterNumbers,
   type SaltSolubilityOptions,
-  type SaltWaterNumbers,
 } from '../salt-solubility/estimate-salt-solubility';
+import {
+  enthalpyReasons,
+  estimatedChoiceWords,
+  modelWords,
+  type ChoiceWords,
+} from './salt-water-words';
 import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 import type { CounterIonDescriptors } from '../salt-solubility/counter-ion-descriptors';
 import type { SaltSolubilityInput } from '../salt-solubility/salt-solubility-features';
@@ -35,9 +37,22 @@ export function chooseKsp(
   p: PreparedCandidate,
   referenceSolutionEnthalpyPerDrugKJ: number | null,
 ): KspChoice {
+  return kspWithWords(chooseKspNumbers(ctx, p, referenceSolutionEnthalpyPerDrugKJ));
+}
+
+/**
+ * The same choice with an estimate's words left to be written when first read (EstimatedKsp): what a
+ * screen computes for every candidate before it knows which rows it builds. A row takes
+ * kspWithWords of it (screen-compound.ts).
+ */
+export function chooseKspNumbers(
+  ctx: ScreenContext,
+  p: PreparedCandidate,
+  referenceSolutionEnthalpyPerDrugKJ: number | null,
+): KspChoice {
   const estimate = estimatedKsp(ctx, p, referenceSolutionEnthalpyPerDrugKJ);
   if (!p.measured?.allSolubilities.length) return estimate;
-  return benchKspChoice(ctx, p, estimate);
+  return benchKspChoice(ctx, p, kspWithWords(estimate));
 }
 
 /** The estimate without any measured solubility: also "the rest of the evidence" a value is read against. */
@@ -48,12 +63,9 @@ function estimatedKsp(
 ): KspChoice {
   const descriptors =
     p.cand.counterIonDescriptors ?? LIBRARY_COUNTER_ION_DESCRIPTORS[p.cand.counterIon.id] ?? null;
-  const origin = p.solutionEnthalpyOrigin;
-  const enthalpyReasons = (): Reason[] =>
-    origin?.startsWith('measured') ? [measuredEnthalpyReason(origin)] : [];
   return descriptors
-    ? modelKsp(ctx, p, referenceSolutionEnthalpyPerDrugKJ, descriptors, enthalpyReasons)
-    : anchorKsp(ctx, p, referenceSolutionEnthalpyPerDrugKJ, enthalpyReasons);
+    ? modelKsp(ctx, p, referenceSolutionEnthalpyPerDrugKJ, descriptors)
+    : anchorKsp(ctx, p, referenceSolutionEnthalpyPerDrugKJ);
 }
 
 /**
@@ -65,7 +77,6 @@ function anchorKsp(
   ctx: ScreenContext,
   p: PreparedCandidate,
   referenceSolutionEnthalpyPerDrugKJ: number | null,
-  enthalpyReasons: () => Reason[],
 ): KspChoice {
   const st = p.cand.stoichiometry;
   const logS0 = ctx.log10IntrinsicM;
@@ -84,9 +95,9 @@ function anchorKsp(
   const log10DrugM = k.log10SaltLimitedDrugM;
   const sigma = log10DrugM.uncertainty;
   const words = () =>
-    estimatedChoiceWords(sigma, saltWaterOf(p, ctx, log10DrugM, 'anchor', []), enthalpyReasons());
+    estimatedChoiceWords(sigma, saltWaterOf(p, ctx, log10DrugM, 'anchor', []), enthalpyReasons(p));
   const saltLog10Sigma = Math.sqrt(Math.max(0, sigma ** 2 - logS0.uncertainty ** 2));
-  return lazyChoice(log10Ksp, saltLog10Sigma, words);
+  return new EstimatedKsp(log10Ksp, saltLog10Sigma, words);
 }
 
 /**
@@ -155,7 +166,6 @@ function modelKsp(
   p: PreparedCandidate,
   referenceSolutionEnthalpyPerDrugKJ: number | null,
   descriptors: CounterIonDescriptors,
-  enthalpyReasons: () => Reason[],
 ): KspChoice {
   const st = p.cand.stoichiometry;
   const m = st.drugPerSalt;
@@ -167,120 +177,73 @@ function modelKsp(
   };
   const num = saltWaterNumbers(input, opts);
   const sources = [SALT_SOLUBILITY_MODEL_SOURCE];
-  let words: (ChoiceWords & { kspNotes: string[] | undefined }) | null = null;
-  const wordsOf = () => (words ??= modelWords(ctx, p, input, opts, num, sources, enthalpyReasons));
   const log10Ksp: Estimate = {
     value: log10KspFromFormulaUnits(num.value - Math.log10(m), m, n),
     uncertainty: (m + n) * num.uncertainty,
     method: num.applied ? 'salt-solubility-ridge-fusion' : 'salt-solubility-ridge',
     sources,
-    get notes() {
-      return wordsOf().kspNotes;
-    },
-    set notes(v) {
-      wordsOf().kspNotes = v;
-    },
+    notes: undefined, // written with the words (the key keeps its place)
+  };
+  const words = () => {
+    const w = modelWords(ctx, p, input, opts, num, sources);
+    log10Ksp.notes = w.kspNotes;
+    return w;
   };
   // The shared per-drug level is drawn once per drug by the robustness Monte Carlo, the rest per salt.
-  return lazyChoice(log10Ksp, num.withinLog10Sd, wordsOf, SALT_SOLUBILITY_SHARED_LOG10_SD);
-}
-
-/** The words of a model estimate: the estimate with its words, the salt's water solubility, reasons, flag. */
-function modelWords(
-  ctx: ScreenContext,
-  p: PreparedCandidate,
-  input: SaltSolubilityInput,
-  opts: SaltSolubilityOptions,
-  num: SaltWaterNumbers,
-  sources: string[],
-  enthalpyReasons: () => Reason[],
-): ChoiceWords & { kspNotes: string[] | undefined } {
-  const est = saltWaterEstimateOf(input, opts, num, sources);
-  const kspNotes = ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])];
-  const base = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers);
-  // Melting data that the check did not let shift the estimate are shown beside it, not applied.
-  if (est.fusion && !est.fusion.applied) base.basis = { ...base.basis, fusion: 'shown' };
-  const saltWater: SaltWaterSolubility = {
-    ...base,
-    sharedLog10Sd: est.sharedLog10Sd,
-    withinLog10Sd: est.withinLog10Sd,
-    outsideTrainingRange: est.domain.outside,
-  };
-  // The estimate's remarks (outside the training range, divalent cation, melting data) as reasons.
-  const remarks: Reason[] = est.remarks.map((text) => ({
-    kind: 'note',
-    criterion: 'solubility',
-    text,
-  }));
-  return {
-    kspNotes,
-    ...estimatedChoiceWords(est.log10DrugM.uncertainty, saltWater, [
-      ...remarks,
-      ...enthalpyReasons(),
-    ]),
-  };
-}
-
-/** What an estimated K_sp says about itself: the salt's water solubility, the reasons, the flag. */
-interface ChoiceWords {
-  reasons: Reason[];
-  flags: ScreenFlag[];
-  saltWater: SaltWaterSolubility;
-}
-
-/** An estimate's words: its water solubility as a reason, the other reasons, the "estimated" flag. */
-function estimatedChoiceWords(
-  sigma: number,
-  saltWater: SaltWaterSolubility,
-  otherReasons: Reason[],
-): ChoiceWords {
-  return {
-    reasons: [saltWaterReason(saltWater), ...otherReasons],
-    flags: [estimatedKspFlag(sigma, saltWater.basis)],
-    saltWater,
-  };
+  return new EstimatedKsp(log10Ksp, num.withinLog10Sd, words, SALT_SOLUBILITY_SHARED_LOG10_SD);
 }
 
 /**
- * An estimated K_sp whose words are written when first read. The screen ranks every candidate on the
- * numbers (log10Ksp.value, the σ split, anchored) and reads the words of the rows it shows only; the
- * words are own enumerable properties (getters, kept once written), so a spread, structured clone,
- * JSON or deep equality sees the same object, with the same keys in the same order, as when they were
- * written at once. Only words are deferred: they throw for no input that the numbers accepted.
+ * An estimated K_sp whose words are written when first read: the screen ranks every candidate on the
+ * numbers (log10Ksp.value, the σ split, anchored) and builds rows for some only. The words are read
+ * through the class's getters (an object literal with its own accessors costs V8 about 2 µs, a class
+ * getter nothing); a row, chooseKsp and the bench path take the plain object of kspWithWords, so what
+ * they read is what was written at once before. Only words are deferred: they throw for no input that
+ * the numbers accepted.
  */
-function lazyChoice(
-  log10Ksp: Estimate,
-  saltLog10Sigma: number,
-  words: () => ChoiceWords,
-  saltSharedLog10Sigma?: number,
-): KspChoice {
-  let w: ChoiceWords | null = null;
-  const get = () => (w ??= words());
-  const choice: KspChoice = {
-    log10Ksp,
-    kspOrigin: 'estimated',
-    saltLog10Sigma,
-    anchored: true,
-    get reasons() {
-      return get().reasons;
-    },
-    set reasons(v) {
-      get().reasons = v;
-    },
-    get flags() {
-      return get().flags;
-    },
-    set flags(v) {
-      get().flags = v;
-    },
-    get saltWater() {
-      return get().saltWater;
-    },
-    set saltWater(v) {
-      get().saltWater = v;
-    },
-    benchSolubility: null,
+class EstimatedKsp implements KspChoice {
+  kspOrigin = 'estimated' as const;
+  anchored = true;
+  benchSolubility = null;
+  saltSharedLog10Sigma?: number;
+  private words: ChoiceWords | null = null;
+  constructor(
+    public log10Ksp: Estimate,
+    public saltLog10Sigma: number,
+    private readonly write: () => ChoiceWords,
+    saltSharedLog10Sigma?: number,
+  ) {
+    if (saltSharedLog10Sigma !== undefined) this.saltSharedLog10Sigma = saltSharedLog10Sigma;
+  }
+  /** The words, written once. */
+  written(): ChoiceWords {
+    return (this.words ??= this.write());
+  }
+  get reasons(): Reason[] {
+    return this.written().reasons;
+  }
+  get flags(): ScreenFlag[] {
+    return this.written().flags;
+  }
+  get saltWater(): SaltWaterSolubility {
+    return this.written().saltWater;
+  }
+}
+
+/** A choice as a plain object with its words (the keys in the order an estimate always had). */
+export function kspWithWords(k: KspChoice): KspChoice {
+  if (!(k instanceof EstimatedKsp)) return k;
+  const w = k.written();
+  const plain: KspChoice = {
+    log10Ksp: k.log10Ksp,
+    kspOrigin: k.kspOrigin,
+    saltLog10Sigma: k.saltLog10Sigma,
+    anchored: k.anchored,
+    reasons: w.reasons,
+    flags: w.flags,
+    saltWater: w.saltWater,
+    benchSolubility: k.benchSolubility,
   };
-  if (saltSharedLog10Sigma !== undefined) choice.saltSharedLog10Sigma = saltSharedLog10Sigma;
-  return choice;
+  if (k.saltSharedLog10Sigma !== undefined) plain.saltSharedLog10Sigma = k.saltSharedLog10Sigma;
+  return plain;
 }

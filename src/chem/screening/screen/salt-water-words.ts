@@ -1,12 +1,22 @@
-import type { SolubilityDriverId } from '../salt-solubility/estimate-salt-solubility';
-import { fmt } from './screen-reasons';
+import {
+  saltWaterEstimateOf,
+  type SaltSolubilityOptions,
+  type SaltWaterNumbers,
+  type SolubilityDriverId,
+} from '../salt-solubility/estimate-salt-solubility';
+import type { SaltSolubilityInput } from '../salt-solubility/salt-solubility-features';
+import { estimatedKspFlag, fmt, measuredEnthalpyReason } from './screen-reasons';
 import type { Reason, SaltWaterSolubility, ScreenFlag } from './screen.types';
 import { basisShortWords, basisWords } from './salt-water-basis';
+import { saltWaterOf } from './ksp-choice-parts';
+import type { PreparedCandidate } from './prepare-candidate';
+import type { ScreenContext } from './screen-context';
 
 /**
  * The words for the salt's own solubility in water (the salt-solubility estimate): what drives it,
- * where it came from, and the "likely poorly soluble" flag it raises. Words only; the numbers come
- * from ksp-choice.ts.
+ * where it came from, and the "likely poorly soluble" flag it raises; and the words of an estimated
+ * K_sp, which ksp-choice.ts asks for only when a row is built. Words only; the numbers come from
+ * ksp-choice.ts.
  */
 
 /** What each driver of the salt-solubility estimate is called in words. */
@@ -72,4 +82,65 @@ export function poorlySolubleFlag(s: SaltWaterSolubility, doseNumberInWater: num
     text: `likely poorly soluble salt: ${fmt(s.mgPerMlAsFreeForm)} mg/mL in water as free form, D₀ ${fmt(doseNumberInWater)}${why}`,
     rule: `the salt's own solubility in water (${basisWords(s.basis)}) below the highest dose in 250 mL, the ICH M9 (2019) volume (D₀ > 1)`,
   };
+}
+
+/** The words of a model estimate: the estimate with its words, the salt's water solubility, reasons, flag. */
+export function modelWords(
+  ctx: ScreenContext,
+  p: PreparedCandidate,
+  input: SaltSolubilityInput,
+  opts: SaltSolubilityOptions,
+  num: SaltWaterNumbers,
+  sources: string[],
+): ChoiceWords & { kspNotes: string[] } {
+  const est = saltWaterEstimateOf(input, opts, num, sources);
+  const kspNotes = ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])];
+  const base = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers);
+  // Melting data that the check did not let shift the estimate are shown beside it, not applied.
+  if (est.fusion && !est.fusion.applied) base.basis = { ...base.basis, fusion: 'shown' };
+  const saltWater: SaltWaterSolubility = {
+    ...base,
+    sharedLog10Sd: est.sharedLog10Sd,
+    withinLog10Sd: est.withinLog10Sd,
+    outsideTrainingRange: est.domain.outside,
+  };
+  // The estimate's remarks (outside the training range, divalent cation, melting data) as reasons.
+  const remarks: Reason[] = est.remarks.map((text) => ({
+    kind: 'note',
+    criterion: 'solubility',
+    text,
+  }));
+  return {
+    kspNotes,
+    ...estimatedChoiceWords(est.log10DrugM.uncertainty, saltWater, [
+      ...remarks,
+      ...enthalpyReasons(p),
+    ]),
+  };
+}
+
+/** What an estimated K_sp says about itself: the salt's water solubility, the reasons, the flag. */
+export interface ChoiceWords {
+  reasons: Reason[];
+  flags: ScreenFlag[];
+  saltWater: SaltWaterSolubility;
+}
+
+/** An estimate's words: its water solubility as a reason, the other reasons, the "estimated" flag. */
+export function estimatedChoiceWords(
+  sigma: number,
+  saltWater: SaltWaterSolubility,
+  otherReasons: Reason[],
+): ChoiceWords {
+  return {
+    reasons: [saltWaterReason(saltWater), ...otherReasons],
+    flags: [estimatedKspFlag(sigma, saltWater.basis)],
+    saltWater,
+  };
+}
+
+/** A measured ΔH_sol used in place of the estimate, as a reason of the estimated K_sp. */
+export function enthalpyReasons(p: PreparedCandidate): Reason[] {
+  const origin = p.solutionEnthalpyOrigin;
+  return origin?.startsWith('measured') ? [measuredEnthalpyReason(origin)] : [];
 }

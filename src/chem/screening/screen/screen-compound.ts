@@ -1,6 +1,6 @@
 import { kelvinToCelsius } from '../../units/temperature';
 import { SCREENING_CAUTIONS } from '../../report/cautions';
-import { chooseKsp, type KspChoice } from './ksp-choice';
+import { chooseKsp, chooseKspNumbers, kspWithWords, type KspChoice } from './ksp-choice';
 import {
   hydrochlorideReference,
   screeningMedia,
@@ -75,7 +75,8 @@ export interface ScreenSetup {
 
 /**
  * The steps before the rows: the context, each candidate prepared, the reference ΔH_sol, each K_sp
- * (a failure is left to the row, which reports it when it recomputes) and the hydrochloride.
+ * (a failure is left to the row, which reports it when it recomputes) and the hydrochloride. A K_sp
+ * here is its numbers; its words are written when a row is built (screenRowOf).
  */
 export function screenSetup(input: ScreenCompoundInput): ScreenSetup {
   const ctx = screenContext(input);
@@ -89,7 +90,7 @@ export function screenSetup(input: ScreenCompoundInput): ScreenSetup {
   for (const p of prepared) {
     if (!isPrepared(p)) continue;
     try {
-      ksps.set(p.cand.id, chooseKsp(ctx, p, refPerDrugKJ));
+      ksps.set(p.cand.id, chooseKspNumbers(ctx, p, refPerDrugKJ));
     } catch {
       /* the row reports the error when it recomputes */
     }
@@ -104,13 +105,18 @@ export function screenSetup(input: ScreenCompoundInput): ScreenSetup {
   return { ctx, media, prepared, refPerDrugKJ, ksps, hcl, shared, freeForm };
 }
 
-/** One candidate's row: its error, or its numbers and words (a failing step becomes the error). */
+/**
+ * One candidate's row: its error, or its numbers and words (a failing step becomes the error). The
+ * row reads its K_sp with the words written (kspWithWords), also from numbers computed before.
+ */
 export function screenRowOf(s: ScreenSetup, p: PreparedOrError, numbers?: RowNumbers): ScreenRow {
   const label = rowLabel(p.cand.counterIon.name, p.cand.stoichiometry);
   if (!isPrepared(p)) return errorRow(p.cand, label, p.error);
   try {
-    const kspOf = () => s.ksps.get(p.cand.id) ?? chooseKsp(s.ctx, p, s.refPerDrugKJ);
-    return candidateRow(s.ctx, p, label, kspOf, s.media, s.hcl, s.shared, numbers);
+    const setupKsp = s.ksps.get(p.cand.id);
+    const kspOf = () => (setupKsp ? kspWithWords(setupKsp) : chooseKsp(s.ctx, p, s.refPerDrugKJ));
+    const n = numbers && { ...numbers, ksp: kspWithWords(numbers.ksp) };
+    return candidateRow(s.ctx, p, label, kspOf, s.media, s.hcl, s.shared, n);
   } catch (err) {
     return errorRow(p.cand, label, err instanceof Error ? err.message : String(err));
   }
