@@ -25,7 +25,15 @@ export interface KspChoice {
   benchSolubility: BenchSolubilityUse | null;
 }
 
-/** The salt's water solubility in the three units the workbench shows. */
+/** What a model estimate adds to the salt's water solubility (its σ split, the domain check). */
+export type ModelSaltWaterFields = Required<
+  Pick<SaltWaterSolubility, 'sharedLog10Sd' | 'withinLog10Sd' | 'outsideTrainingRange'>
+>;
+
+/**
+ * The salt's water solubility in the three units the workbench shows (with a model estimate's own
+ * fields after the others; one object literal each way, no spread: a row's words are built here).
+ */
 export function saltWaterOf(
   p: PreparedCandidate,
   ctx: ScreenContext,
@@ -33,15 +41,23 @@ export function saltWaterOf(
   origin: SaltWaterSolubility['origin'],
   drivers: SaltWaterSolubility['drivers'],
   bench?: BenchReadingFields,
+  model?: ModelSaltWaterFields,
 ): SaltWaterSolubility {
   const drugM = 10 ** log10DrugM.value;
   const anchorDecades = ctx.settings.saltAnchorLog10;
+  const mgPerMlAsSalt = (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol;
+  const mgPerMlAsFreeForm = drugM * ctx.freeFormMolarMassGPerMol;
+  const basis = saltSolubilityBasis({ origin, log10DrugM }, { anchorDecades, bench });
+  if (!model) return { log10DrugM, mgPerMlAsSalt, mgPerMlAsFreeForm, origin, drivers, basis };
   return {
     log10DrugM,
-    mgPerMlAsSalt: (drugM / p.cand.stoichiometry.drugPerSalt) * p.saltMolarMassGPerMol,
-    mgPerMlAsFreeForm: drugM * ctx.freeFormMolarMassGPerMol,
+    mgPerMlAsSalt,
+    mgPerMlAsFreeForm,
     origin,
     drivers,
-    basis: saltSolubilityBasis({ origin, log10DrugM }, { anchorDecades, bench }),
+    basis,
+    sharedLog10Sd: model.sharedLog10Sd,
+    withinLog10Sd: model.withinLog10Sd,
+    outsideTrainingRange: model.outsideTrainingRange,
   };
 }

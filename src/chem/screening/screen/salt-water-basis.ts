@@ -74,6 +74,13 @@ function modelOf(literal: ModelLiteral): NonNullable<SaltSolubilityBasis['model'
   };
 }
 
+/**
+ * The shipped model as a basis names it: one object for every estimate (the model file is fixed), so
+ * its words (modelWords) are written once too. Read-only: a reader that wants to change it copies it.
+ */
+let shippedBasis: NonNullable<SaltSolubilityBasis['model']> | null = null;
+const shippedModelBasis = () => (shippedBasis ??= modelOf(SALT_SOLUBILITY_MODEL as ModelLiteral));
+
 /** A hook for the bench reading's structured fields: each known field becomes one phrase. */
 export type BenchReadingFields = Partial<{
   limitedBy: 'salt' | 'free-form' | 'unknown';
@@ -103,7 +110,7 @@ export function saltSolubilityBasis(
   const fitted = s.origin === 'model' || s.origin === 'model+fusion';
   return {
     origin: s.origin,
-    model: fitted ? modelOf(SALT_SOLUBILITY_MODEL as ModelLiteral) : null,
+    model: fitted ? shippedModelBasis() : null,
     anchor:
       s.origin === 'anchor'
         ? {
@@ -120,6 +127,12 @@ const tenTo = (d: number) => `10${superscript(String(d), /[0-9.]/g)}`;
 
 /** The fitted model in words, from its own description (which predictors, which data, which error). */
 export function modelWords(m: NonNullable<SaltSolubilityBasis['model']>): string {
+  if (m === shippedBasis) return (shippedWords ??= modelWordsOf(m));
+  return modelWordsOf(m);
+}
+let shippedWords: string | null = null;
+
+function modelWordsOf(m: NonNullable<SaltSolubilityBasis['model']>): string {
   const others = m.predictors
     .filter((p) => p !== 'drugLog10IntrinsicM' && p !== 'thermoShiftDecades')
     .map((p) => PREDICTOR_WORDS[p] ?? p);

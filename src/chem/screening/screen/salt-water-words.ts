@@ -95,28 +95,24 @@ export function modelWords(
 ): ChoiceWords & { kspNotes: string[] } {
   const est = saltWaterEstimateOf(input, opts, num, sources);
   const kspNotes = ['ESTIMATE — no salt solubility measured', ...(est.log10DrugM.notes ?? [])];
-  const base = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers);
-  // Melting data that the check did not let shift the estimate are shown beside it, not applied.
-  if (est.fusion && !est.fusion.applied) base.basis = { ...base.basis, fusion: 'shown' };
-  const saltWater: SaltWaterSolubility = {
-    ...base,
+  const saltWater = saltWaterOf(p, ctx, est.log10DrugM, est.origin, est.drivers, undefined, {
     sharedLog10Sd: est.sharedLog10Sd,
     withinLog10Sd: est.withinLog10Sd,
     outsideTrainingRange: est.domain.outside,
-  };
+  });
+  // Melting data that the check did not let shift the estimate are shown beside it, not applied.
+  if (est.fusion && !est.fusion.applied) saltWater.basis.fusion = 'shown';
   // The estimate's remarks (outside the training range, divalent cation, melting data) as reasons.
   const remarks: Reason[] = est.remarks.map((text) => ({
     kind: 'note',
     criterion: 'solubility',
     text,
   }));
-  return {
-    kspNotes,
-    ...estimatedChoiceWords(est.log10DrugM.uncertainty, saltWater, [
-      ...remarks,
-      ...enthalpyReasons(p),
-    ]),
-  };
+  const words = estimatedChoiceWords(est.log10DrugM.uncertainty, saltWater, [
+    ...remarks,
+    ...enthalpyReasons(p),
+  ]);
+  return { kspNotes, reasons: words.reasons, flags: words.flags, saltWater };
 }
 
 /** What an estimated K_sp says about itself: the salt's water solubility, the reasons, the flag. */
