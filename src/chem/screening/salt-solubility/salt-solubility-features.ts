@@ -37,6 +37,12 @@ export interface SaltSolubilityFeature {
   /** What it is, with its unit, for the Model check and the docs. */
   description: string;
   value: (input: SaltSolubilityInput) => number;
+  /**
+   * True when `value` reads `input.counterIon` alone (its descriptors and charge): for a fixed
+   * counter-ion (fixedCounterIon) featureRow computes it once. tests/chem/screening/salt-solubility/
+   * feature-row-cache.test.ts checks the claim.
+   */
+  counterIonOnly?: true;
 }
 
 /** log P used when a drug's log P is unknown: the feature then carries no information (0 after centring is not guaranteed, so the model notes it). */
@@ -62,31 +68,37 @@ export const SALT_SOLUBILITY_FEATURES: readonly SaltSolubilityFeature[] = [
   },
   {
     name: 'counterIonLogPParent',
+    counterIonOnly: true,
     description: "counter-ion's parent log P (openchemlib), clipped to −4…6",
     value: (i) => (i.counterIon.inorganic ? 0 : i.counterIon.logPParent),
   },
   {
     name: 'counterIonAromaticRings',
+    counterIonOnly: true,
     description: "aromatic rings of the counter-ion's parent",
     value: (i) => i.counterIon.aromaticRings,
   },
   {
     name: 'counterIonHBondDonorsAcceptors',
+    counterIonOnly: true,
     description: "H-bond donors + acceptors of the counter-ion's parent",
     value: (i) => i.counterIon.hBondDonors + i.counterIon.hBondAcceptors,
   },
   {
     name: 'counterIonHeavyAtoms',
+    counterIonOnly: true,
     description: "heavy atoms of the counter-ion's parent",
     value: (i) => i.counterIon.heavyAtoms,
   },
   {
     name: 'counterIonInorganic',
+    counterIonOnly: true,
     description: 'counter-ion without carbon (1) or organic (0)',
     value: (i) => (i.counterIon.inorganic ? 1 : 0),
   },
   {
     name: 'multivalentSalt',
+    counterIonOnly: true,
     description: 'counter-ion charge of 2 or more (1) or singly charged (0)',
     value: (i) => (Math.abs(i.counterIon.charge) >= 2 ? 1 : 0),
   },
@@ -97,11 +109,49 @@ export const SALT_SOLUBILITY_FEATURES: readonly SaltSolubilityFeature[] = [
   },
 ];
 
+/**
+ * The counter-ion with its charge as the model reads it, one object per descriptor record and charge,
+ * for a record that never changes (the library's, module constants): featureRow then computes its
+ * counterIonOnly columns once. Weak maps, so nothing outlives the record.
+ */
+const fixedByRecord = new WeakMap<CounterIonDescriptors, Map<number, FixedCounterIon>>();
+type FixedCounterIon = SaltSolubilityInput['counterIon'];
+/** Per fixed counter-ion: its first row for each feature list asked for (the model's, the domain's). */
+const fixedRows = new WeakMap<
+  FixedCounterIon,
+  { features: readonly SaltSolubilityFeature[]; row: number[] }[]
+>();
+const MAX_FEATURE_LISTS = 4;
+export function fixedCounterIon(d: CounterIonDescriptors, charge: number): FixedCounterIon {
+  let byCharge = fixedByRecord.get(d);
+  if (!byCharge) fixedByRecord.set(d, (byCharge = new Map()));
+  let c = byCharge.get(charge);
+  if (!c) {
+    byCharge.set(charge, (c = { ...d, charge }));
+    fixedRows.set(c, []);
+  }
+  return c;
+}
+
 export function featureRow(
   input: SaltSolubilityInput,
   features: readonly SaltSolubilityFeature[] = SALT_SOLUBILITY_FEATURES,
 ): number[] {
-  return features.map((f) => f.value(input));
+  const rows = fixedRows.get(input.counterIon);
+  let fixed: { features: readonly SaltSolubilityFeature[]; row: number[] } | undefined;
+  for (const r of rows ?? []) if (r.features === features) fixed = r;
+  if (!fixed) {
+    const row = features.map((f) => f.value(input));
+    if (rows && rows.length < MAX_FEATURE_LISTS) rows.push({ features, row: row.slice() });
+    return row;
+  }
+  // The counter-ion's own columns as first computed (same function, same fixed object), the rest now.
+  const row = fixed.row.slice();
+  for (let j = 0; j < features.length; j++) {
+    const f = features[j]!;
+    if (!f.counterIonOnly) row[j] = f.value(input);
+  }
+  return row;
 }
 
 /** The thermochemical predictor, tried by cross-validation and kept only if it helps (see the model data). */

@@ -21,7 +21,10 @@ import {
 } from './salt-water-words';
 import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-descriptors.data';
 import type { CounterIonDescriptors } from '../salt-solubility/counter-ion-descriptors';
-import type { SaltSolubilityInput } from '../salt-solubility/salt-solubility-features';
+import {
+  fixedCounterIon,
+  type SaltSolubilityInput,
+} from '../salt-solubility/salt-solubility-features';
 
 export type { KspChoice } from './ksp-choice-parts';
 
@@ -71,7 +74,7 @@ function estimatedKsp(
 /**
  * The common-practice anchor above S₀ (moved by the relative ΔH_sol), for a counter-ion without
  * descriptors; an estimated K_sp carries the salt's own spread beyond S₀'s (the robustness draw moves
- * S₀ separately), and its words are written when a row reads them (lazyChoice).
+ * S₀ separately), and its words are written when a row reads them (EstimatedKsp).
  */
 function anchorKsp(
   ctx: ScreenContext,
@@ -100,27 +103,6 @@ function anchorKsp(
   return new EstimatedKsp(log10Ksp, saltLog10Sigma, words);
 }
 
-/**
- * The counter-ion as the salt-solubility model reads it (its descriptors and its charge in this salt),
- * one object per descriptor record and charge: the descriptors are fixed, so every candidate salt of
- * every compound with that counter-ion reads the same object (a weak map, so a custom counter-ion's
- * record is let go with it).
- */
-const withCharge = new WeakMap<
-  CounterIonDescriptors,
-  Map<number, SaltSolubilityInput['counterIon']>
->();
-function counterIonWithCharge(
-  d: CounterIonDescriptors,
-  charge: number,
-): SaltSolubilityInput['counterIon'] {
-  let byCharge = withCharge.get(d);
-  if (!byCharge) withCharge.set(d, (byCharge = new Map()));
-  let c = byCharge.get(charge);
-  if (!c) byCharge.set(charge, (c = { ...d, charge }));
-  return c;
-}
-
 /** What the model reads of one candidate salt. */
 function modelInput(
   ctx: ScreenContext,
@@ -145,7 +127,12 @@ function modelInput(
       log10IntrinsicM: ctx.log10IntrinsicM.value,
       logP: ctx.compound.logP,
     },
-    counterIon: counterIonWithCharge(descriptors, st.ionCharge),
+    // The library's records are module constants: one object per record and charge, whose own
+    // feature columns the model computes once. A candidate's own descriptors are read as given.
+    counterIon:
+      p.cand.counterIonDescriptors == null
+        ? fixedCounterIon(descriptors, st.ionCharge)
+        : { ...descriptors, charge: st.ionCharge },
     drugPerSalt: m,
     counterIonPerSalt: n,
     meltingPointK: meltingPointC === null ? null : celsiusToKelvin(meltingPointC),
@@ -158,7 +145,7 @@ function modelInput(
  * The calibrated salt-solubility model's estimate, for a counter-ion with descriptors. The numbers
  * (K_sp, its σ, the σ split) are computed now: every candidate is ranked on them. The words — the
  * estimate's notes, the salt's water solubility with its basis, the reasons and the flag — are written
- * the first time a row reads them (lazyChoice), so a batch writing its best rows only does not
+ * the first time a row reads them (EstimatedKsp), so a batch writing its best rows only does not
  * write them for every candidate. The object reads the same either way.
  */
 function modelKsp(
