@@ -36,8 +36,9 @@ export function shownRowNumbers(
     | 'solutionEnthalpyPerDrugIon'
   >,
   shared: Shared,
+  /** uncertaintiesOf(row, shared), when the caller has it already (the same numbers). */
+  u: ReturnType<typeof uncertaintiesOf> = uncertaintiesOf(row, shared),
 ): ShownRowNumbers {
-  const u = uncertaintiesOf(row, shared);
   const logSigmaOf = (solid: 'salt' | 'free-form') =>
     solid === 'salt' ? u.saltLogSigma : u.freeLogSigma;
   const dose = (d: { doseNumber: number | null; solid: 'salt' | 'free-form' } | null) =>

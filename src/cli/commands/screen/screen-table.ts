@@ -20,6 +20,32 @@ const sig = (x: number | null | undefined, digits = 3) =>
 
 const worst = (row: ScreenRow) => worstExcipient(row.excipientRisks);
 
+type DosePoint = ScreenRow['doseNumbers'][number];
+
+/** The dose point at `pH` (a loop, not a closure per row: this runs for every written row). */
+function doseAt(row: ScreenRow, pH: number): DosePoint | undefined {
+  for (const d of row.doseNumbers) if (Math.abs(d.pH - pH) < 1e-9) return d;
+  return undefined;
+}
+
+/** The texts joined by '; ', as map(text).join('; ') gives them, without the array in between. */
+function textsJoined(items: readonly { text: string }[]): string {
+  let s = '';
+  for (let i = 0; i < items.length; i++) s += i === 0 ? items[i]!.text : '; ' + items[i]!.text;
+  return s;
+}
+
+/** The salt solubility's drivers as 'id +0.12; id -0.30' (empty without a salt solubility). */
+function driversText(sw: ScreenRow['saltWaterSolubility']): string {
+  if (!sw) return '';
+  let s = '';
+  for (const d of sw.drivers) {
+    if (s !== '') s += '; ';
+    s += `${d.id} ${d.decades > 0 ? '+' : ''}${d.decades.toFixed(2)}`;
+  }
+  return s;
+}
+
 /** One row of the ranked table (the CSV rows, the JSON rows, the batch rows). */
 export type ScreenTableRow = ReturnType<typeof tableRow>;
 
@@ -43,14 +69,14 @@ function tableRow(
   shared: ScreenResult['robustnessShared'],
 ) {
   {
-    const at = (pH: number) => row.doseNumbers.find((d) => Math.abs(d.pH - pH) < 1e-9);
-    // Precision that follows each number's 1σ, as the app and the sheet show it (src/chem/report).
-    const shown = shownRowNumbers(row, shared);
+    // Precision that follows each number's 1σ, as the app and the sheet show it (src/chem/report);
+    // the 1σ worked out once for both.
     const u = uncertaintiesOf(row, shared);
-    const d12 = at(1.2);
+    const shown = shownRowNumbers(row, shared, u);
+    const d12 = doseAt(row, 1.2);
     const w = worst(row);
     // each looked up once (a row writes the pH 1.2 point twice and the excipient four times)
-    const doseAt = (d: ReturnType<typeof at>) =>
+    const roundedDose = (d: DosePoint | undefined) =>
       d && d.doseNumber !== null
         ? roundLogNormal(d.doseNumber, d.solid === 'salt' ? u.saltLogSigma : u.freeLogSigma).value
         : '';
@@ -73,17 +99,14 @@ function tableRow(
       salt_solubility_water_mg_per_ml: shown.saltWaterMgPerMl?.value ?? '',
       salt_solubility_origin: row.saltWaterSolubility?.origin ?? '',
       bench_solubility_limited_by: row.benchSolubility?.limitedBy ?? '',
-      salt_solubility_drivers:
-        row.saltWaterSolubility?.drivers
-          .map((d) => `${d.id} ${d.decades > 0 ? '+' : ''}${d.decades.toFixed(2)}`)
-          .join('; ') ?? '',
+      salt_solubility_drivers: driversText(row.saltWaterSolubility),
       log10_ksp: sig(row.log10Ksp?.value),
       log10_ksp_sd: sig(row.log10Ksp?.uncertainty, 2),
       ksp_origin: row.kspOrigin ?? '',
       ph_max: shown.phMax?.value ?? '',
       solubility_ph_1_2_mg_per_ml: sig(d12?.solubilityMgPerMl),
-      dose_number_ph_1_2: doseAt(d12),
-      dose_number_ph_6_8: doseAt(at(6.8)),
+      dose_number_ph_1_2: roundedDose(d12),
+      dose_number_ph_6_8: roundedDose(doseAt(row, 6.8)),
       gastric_dose_number: shown.gastricDoseNumber?.value ?? '',
       worst_ph: row.worst?.pH ?? '',
       worst_dose_number: shown.worstDoseNumber?.value ?? '',
@@ -93,8 +116,8 @@ function tableRow(
       solution_enthalpy_kj_per_mol_drug_ion: shown.solutionEnthalpyKJPerMolDrugIon?.value ?? '',
       solution_enthalpy_kj_per_mol_drug_ion_sd: shown.solutionEnthalpyKJPerMolDrugIon?.sigma ?? '',
       solution_enthalpy_not_informative: row.solutionEnthalpyPerDrugIon?.notInformative ?? '',
-      flags: row.flags.map((f) => f.text).join('; '),
-      reasons: row.reasons.map((r) => r.text).join('; '),
+      flags: textsJoined(row.flags),
+      reasons: textsJoined(row.reasons),
       error: row.error ?? '',
       // every ±1σ the app shows (pH_max's 1σ; the ±1σ ranges of the salt's
       // solubility and of the dose numbers, from the limiting solid's log σ), before the excipient

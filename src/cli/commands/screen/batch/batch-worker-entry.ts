@@ -31,7 +31,9 @@ export function startBatchWorker(): void {
       columnsSent = true;
       return result;
     }
-    return { ...result, columns: [] };
+    // screenOne's result is this thread's own fresh object: emptied in place, not copied
+    result.columns = [];
+    return result;
   };
   port.on('message', (jobs: WorkerRequest) => {
     void Promise.all(

@@ -81,7 +81,8 @@ export function encodeRows(
   const lead = `${csvCell(id)},${csvCell(name)}`;
   for (const row of table) {
     text += lead;
-    for (const v of Object.values(row)) text += ',' + csvCell(v);
+    // for…in visits a plain object's (non-numeric) keys in Object.values' order, without its array
+    for (const k in row) text += ',' + csvCell(row[k as keyof ScreenTableRow]);
     text += '\n';
   }
   return { rowCount: table.length, columns, text };
