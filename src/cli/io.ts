@@ -24,7 +24,7 @@ export const writeLine = (w: Writable, line: string): boolean => w.write(line + 
  * instead of the output piling up in memory. Resolves early if the stream closes or fails (a closed pipe
  * is handled where the process streams are set up).
  */
-export function writeText(w: Writable, text: string): Promise<void> {
+export function writeText(w: Writable, text: string | Uint8Array): Promise<void> {
   if (w.write(text)) return Promise.resolve();
   if (w.destroyed || w.writableEnded) return Promise.resolve();
   return new Promise((resolve) => {

@@ -78,7 +78,7 @@ export async function writeFileAtomic(target: Target, text: string, flag = '--ou
 
 /** A streamed output file with the same guarantee. */
 export interface AtomicOutput {
-  write(text: string): Promise<void>;
+  write(data: string | Uint8Array): Promise<void>;
   /** Flush and rename over the target. */
   commit(): Promise<void>;
   /** Remove the temporary file (safe to call more than once, and after a failed commit). */
@@ -97,9 +97,9 @@ export async function openAtomicOutput(target: Target, flag = '--out'): Promise<
     untrackTempFile(tmp);
   };
   return {
-    write: async (text: string) => {
+    write: async (data: string | Uint8Array) => {
       try {
-        await fh.write(text, null, 'utf8');
+        await (typeof data === 'string' ? fh.write(data, null, 'utf8') : fh.write(data));
       } catch (err) {
         throw writeFailure(t, err);
       }

@@ -8,39 +8,40 @@ import { KSP_NOTE } from '../screen-writers';
 import type { ScreenOneResult } from './screen-one';
 
 /**
- * The output side of `saltsmith screen --batch`: a sink that gathers the rows' text into blocks of
- * {@link BLOCK_CHARS} before each write (one system call per block, not per compound), and the writer
+ * The output side of `saltsmith screen --batch`: a sink that gathers the rows' UTF-8 bytes into blocks
+ * of {@link BLOCK_BYTES} before each write (one system call per block, not per compound), and the writer
  * that puts the compounds' results out in input order, with the CSV header before the first rows and
  * the cautions last.
  */
 export type Sink = {
-  write: (text: string) => Promise<void>;
+  write: (data: string | Uint8Array) => Promise<void>;
   commit: () => Promise<void>;
   abort: () => Promise<void>;
 };
 
 /**
- * Characters gathered before a write. 64 Ki characters keeps the sink's memory small and a write's
- * fixed cost (a system call, a promise) far below the cost of the text it carries — common practice
- * for stream buffers (Node's own default highWaterMark for file streams is 64 KiB).
+ * Bytes gathered before a write. 64 KiB keeps the sink's memory small and a write's fixed cost (a
+ * system call, a promise) far below the cost of the bytes it carries — common practice for stream
+ * buffers (Node's own default highWaterMark for file streams is 64 KiB).
  */
-export const BLOCK_CHARS = 64 * 1024;
+export const BLOCK_BYTES = 64 * 1024;
 
 function blockSink(inner: Sink): Sink {
-  let parts: string[] = [];
+  let parts: Uint8Array[] = [];
   let size = 0;
   const flush = async () => {
     if (size === 0) return;
-    const text = parts.join('');
+    const block = Buffer.concat(parts, size);
     parts = [];
     size = 0;
-    await inner.write(text);
+    await inner.write(block);
   };
   return {
-    write: async (text) => {
-      parts.push(text);
-      size += text.length;
-      if (size >= BLOCK_CHARS) await flush();
+    write: async (data) => {
+      const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+      parts.push(bytes);
+      size += bytes.length;
+      if (size >= BLOCK_BYTES) await flush();
     },
     commit: async () => {
       await flush();
@@ -95,8 +96,9 @@ export function orderedWriter(
     if (r.rowCount === 0) return;
     if (outFormat === 'csv' && columns === null) {
       columns = r.columns;
-      await out.write(Papa.unparse({ fields: columns, data: [] }, { newline: '\n' }) + r.text);
-    } else await out.write(r.text);
+      await out.write(Papa.unparse({ fields: columns, data: [] }, { newline: '\n' }));
+    }
+    await out.write(r.bytes);
     counts.rowsOut += r.rowCount;
   };
   const flush = async () => {

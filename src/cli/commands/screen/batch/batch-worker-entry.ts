@@ -40,8 +40,13 @@ export function startBatchWorker(): void {
       jobs.map(async (j) => ({ seq: j.seq, result: await screenOne(j.spec, settings, j.id) })),
     ).then((answer: WorkerAnswer) => {
       // in message order, so that the columns come with the first rows the pool reads
-      for (const a of answer) a.result = lean(a.result);
-      port.postMessage(answer);
+      // the rows' bytes are handed over, not copied (each is its own buffer: TextEncoder.encode)
+      const transfer: ArrayBuffer[] = [];
+      for (const a of answer) {
+        a.result = lean(a.result);
+        if (a.result.ok) transfer.push(a.result.bytes.buffer as ArrayBuffer);
+      }
+      port.postMessage(answer, transfer);
     });
   });
 }

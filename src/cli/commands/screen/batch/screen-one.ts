@@ -18,12 +18,17 @@ export interface BatchSettings {
 }
 
 /**
- * A screened compound, its rows already written out as text (CSV without the header line, or JSON
- * Lines) where it was screened: on a worker thread, so that the main thread only copies text out.
+ * A screened compound, its rows already written out (CSV without the header line, or JSON Lines) as
+ * UTF-8 bytes where it was screened: on a worker thread, so that the main thread only writes the
+ * bytes out. Bytes rather than text: the worker hands their memory over to the main thread instead
+ * of copying a string (postMessage's transfer list), and the text built from many small pieces dies
+ * young instead of being kept (and moved by each collection) until its chunk is answered.
  */
 export type ScreenOneResult =
-  | { ok: true; rowCount: number; columns: string[]; text: string; skipped: number }
+  | { ok: true; rowCount: number; columns: string[]; bytes: Uint8Array; skipped: number }
   | { ok: false; error: string };
+
+const UTF8 = new TextEncoder();
 
 /**
  * The batch's settings checked once per thread instead of once per compound (prepareScreen passes
@@ -122,10 +127,13 @@ export async function screenOne(
       topOnly && s.top !== undefined
         ? runScreenTop(prepared, s.top)
         : runScreen(prepared, { iterations: s.iterations, seed: s.seed, top: s.top }).table;
+    const rows = encodeRows(id, spec.name, table, s.outFormat);
     return {
       ok: true,
       skipped: prepared.skipped.length,
-      ...encodeRows(id, spec.name, table, s.outFormat),
+      rowCount: rows.rowCount,
+      columns: rows.columns,
+      bytes: UTF8.encode(rows.text),
     };
   } catch (err) {
     return { ok: false, error: describeFailure(err).message };
