@@ -58,10 +58,20 @@ function columnsFor(keys: readonly string[]): string[] {
  * One cell as csvField(safeCsvCell(v)) writes it, the common cells first: a number's text never
  * needs quotes or the formula guard (papaparse writes String(v) too), an empty text stays empty.
  */
-function csvCell(v: unknown): string {
+export function csvCell(v: unknown): string {
   if (typeof v === 'number') return String(v);
   if (v === '') return '';
+  if (typeof v === 'string' && plainStart(v.charCodeAt(0))) return csvField(v);
   return csvField(safeCsvCell(v));
+}
+
+/**
+ * A first character after which the formula guard never changes a text: printable ASCII other than
+ * the triggers = + - @ (neither white space nor a format character, so the guard has nothing to look
+ * through either). Most cells start so; the guard's look-through expression is skipped for them.
+ */
+function plainStart(c: number): boolean {
+  return c > 0x20 && c < 0x7f && c !== 0x3d && c !== 0x2b && c !== 0x2d && c !== 0x40;
 }
 
 /** The rows of one compound as output text, each with the compound's id and name first. */
