@@ -15,7 +15,13 @@ import type { CriterionInputs } from '../ranking';
 import { ichM9WorstAndNamedOnPoints, screenDoseNumbers } from './dose-numbers';
 import type { KspChoice } from './ksp-choice';
 import { mediumResults, type HydrochlorideReference, type ScreenMedium } from './media';
-import { judgedAtOnePh, microenvironmentJudgement, saturatedMarginOver } from './microenvironment';
+import type { ExcipientRisk } from '../excipients/excipient-risk';
+import {
+  judgedAtOnePh,
+  microenvironmentJudgement,
+  saturatedMarginOver,
+  type MicroenvironmentJudgement,
+} from './microenvironment';
 import { uncertaintiesOf } from './row-uncertainty';
 import type { PreparedCandidate } from './prepare-candidate';
 import { saltMassInput, type ScreenContext } from './screen-context';
@@ -48,7 +54,7 @@ export interface RowNumbers {
   worst: DoseNumberAt;
   media: MediumResult[];
   gastric: MediumResult | null;
-  micro: ReturnType<typeof microenvironmentJudgement>;
+  micro: MicroenvironmentJudgement;
   criteria: CriterionInputs;
 }
 
@@ -109,6 +115,18 @@ function saltProfile(
   return { grid: saltOnGridWhenRead(ctx.grids.profile, salt), phMax, marginPh, doses, worst };
 }
 
+/**
+ * The judgement of numbers whose pH_max pass 1 left unrefined: no reader may take it (refinedRowNumbers
+ * replaces it first); one shared object, so a skipped root costs no allocation here either.
+ */
+const UNREFINED_JUDGEMENT: MicroenvironmentJudgement = Object.freeze({
+  marginPh: null,
+  get disproportionation(): never {
+    throw new Error('pH_max was not refined: take refinedRowNumbers first');
+  },
+  excipientRisks: Object.freeze([]) as unknown as ExcipientRisk[],
+});
+
 /** The numbers of one candidate's row (K_sp asked for after ΔpKa and mass cost, as the row did). */
 export function rowNumbers(
   ctx: ScreenContext,
@@ -147,7 +165,7 @@ export function rowNumbers(
           phMaxSigmaOf(ctx, ksp, shared),
           c.kind,
         )
-      : microenvironmentJudgement(ctx.settings, null, NaN, c.kind);
+      : UNREFINED_JUDGEMENT;
   const criteria: CriterionInputs = {
     saltProbability: verdict?.saltProbability ?? null,
     log10WorstDoseNumber: worst.doseNumber === null ? null : Math.log10(worst.doseNumber),
