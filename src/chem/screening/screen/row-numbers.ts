@@ -71,13 +71,13 @@ interface SaltProfileNumbers {
 }
 
 /**
- * The margin that stands for pH_max's in a ranking's pass 1 (`scoreOnly`) when the disproportionation
+ * The margin that stands for pH_max's in a ranking's pass 1 (`scoreOnly`), after its scan, when the disproportionation
  * score is saturated over the whole span of the scan's crossings — the root cannot move the score
  * (saturatedMarginOver) —, else null (the roots are refined). Brent cannot fail inside a bracket (a
  * finite function, grid-ph-max.ts), so skipping it skips no error either.
  */
-function saturatedMargin(ctx: ScreenContext, count: number, scoreOnly: boolean): number | null {
-  if (!scoreOnly || count === 0) return null;
+function saturatedMargin(ctx: ScreenContext, count: number): number | null {
+  if (count === 0) return null;
   const { lo, hi } = phMaxCrossingSpan(ctx.grids, count);
   return saturatedMarginOver(ctx.settings, lo, hi, ctx.compound.kind);
 }
@@ -101,10 +101,15 @@ function saltProfile(
     return { grid, phMax: profile.phMax, marginPh: null, doses, worst };
   }
   checkProfileInput(ctx.drug, ctx.log10IntrinsicM.value, salt, ctx.grid);
-  const count = scanPhMaxCrossings(ctx.grids, salt);
-  const marginPh = saturatedMargin(ctx, count, scoreOnly);
-  // refined straight after its scan (the crossings live in the scan's buffers until the next scan)
-  const phMax = count === 0 ? null : marginPh !== null ? NaN : refinePhMax(ctx.grids, salt, count);
+  let phMax: number | null;
+  let marginPh: number | null = null;
+  if (!scoreOnly) phMax = gridPhMax(ctx.grids, salt);
+  else {
+    const count = scanPhMaxCrossings(ctx.grids, salt);
+    marginPh = saturatedMargin(ctx, count);
+    // refined straight after its scan (the crossings live in the scan's buffers until the next scan)
+    phMax = count === 0 ? null : marginPh !== null ? NaN : refinePhMax(ctx.grids, salt, count);
+  }
   if (ctx.profiles !== 'none') {
     const grid = saltOnGrid(ctx.grids.profile, salt);
     const { doses, worst } = screenDoseNumbers(ctx, salt, grid);
