@@ -1,8 +1,7 @@
-import { brentRootFrom } from '../numerics/root-finding';
-import type { DrugGrids, DrugOnGrid, GridSolubility } from './drug-grid';
+import type { DrugOnGrid, GridSolubility } from './drug-grid';
 import type { ProfileSalt } from './ph-profile';
 import { SALT_LOG10_S_LIMITS } from './salt-equilibrium';
-import { chargeFractionsOn, log10SpeciesSum, log10UnnormalisedFraction } from './speciation';
+import { chargeFractionsOn } from './speciation';
 
 export {
   drugGrids,
@@ -16,6 +15,7 @@ export {
   type DrugOnGrid,
   type GridSolubility,
 } from './drug-grid';
+export { gridPhMax } from './grid-ph-max';
 
 /**
  * The pH–solubility model of ph-profile.ts evaluated fast on fixed pH lists, for the screen: the same
@@ -176,74 +176,4 @@ export function saltOnGrid(g: DrugOnGrid, salt: ProfileSalt): GridSolubility {
     if (points.salt) saltSolid[k] = 1;
   }
   return { phs: g.phs, solubilityM, saltSolid };
-}
-
-/**
- * pH_max without a profile (ideal activities, no common ion): log S_salt − log S_free scanned at the
- * 0.25-step points from cached speciation, each sign change refined by Brent's method on the same
- * function, and the crossing nearest the drug's salt-forming pKa returned — the algorithm and the
- * function of numericalPhMax (ph-profile.ts), so the two agree to the root tolerance.
- */
-export function gridPhMax(g: DrugGrids, salt: ProfileSalt): number | null {
-  const m = salt.drugPerSalt;
-  const n = salt.counterIonPerSalt;
-  const { min, max } = SALT_LOG10_S_LIMITS;
-  // log₁₀(m·s) as log₁₀ m + log₁₀ s: numericalPhMax takes log₁₀ of m·10^u, equal but for rounding;
-  // saltLog10FormulaUnitsRaw with its logarithms taken once (the same values, so the same bits)
-  const lm = Math.log10(m);
-  const ln = Math.log10(n);
-  const K = salt.log10Ksp;
-  const logSaltOf = (laD: number, laX: number) =>
-    lm + Math.min(max, Math.max(min, (K - m * (laD + lm) - n * (laX + ln)) / (m + n)));
-  const s = g.scan;
-  const laX = chargeFractionsOn(salt.counterIon, salt.counterIonCharge, s.phs, s.gridKey);
-  const p = g.drug;
-  const ref = p.pKas[p.mostProtonatedCharge - g.ionCharge] ?? p.pKas[0]!;
-  // the crossing nearest ref, the first of equals (as reducing the list of crossings picks it)
-  let best: number | null = null;
-  const take = (x: number) => {
-    if (best === null || Math.abs(x - ref) < Math.abs(best - ref)) best = x;
-  };
-  let h: ((pH: number) => number) | null = null;
-  const { laD, log10FreeM, phs } = s;
-  let prev = logSaltOf(laD[0]!, laX[0]!) - log10FreeM[0]!;
-  for (let k = 1; k < phs.length; k++) {
-    // logSaltOf written out (the same operations in the same order): the hot loop of pH_max
-    const u = (K - m * (laD[k]! + lm) - n * (laX[k]! + ln)) / (m + n);
-    const cur = lm + Math.min(max, Math.max(min, u)) - log10FreeM[k]!;
-    if (prev === 0) take(phs[k - 1]!);
-    // h at the scan points is prev and cur, the same bits (the same fractions from the same sums)
-    else if (prev * cur < 0) {
-      h ??= brentFunction(g, salt, logSaltOf);
-      take(brentRootFrom(h, phs[k - 1]!, phs[k]!, prev, cur, 1e-12).root);
-    }
-    prev = cur;
-  }
-  return best;
-}
-
-/**
- * log S_salt − log S_free at any pH, as numericalPhMax's function: the drug's salt-state fraction and
- * its neutral fraction (log10FreeFormSolubilityM) share one sum of species terms, taken once (each
- * fraction is its term minus that sum, as log10ChargeFraction computes it: the same bits). The drug's
- * two charges were checked when its grids were made (drugOnGrid) and the counter-ion's when its scan
- * fractions were (chargeFractionsOn, before any call), so no check is repeated per evaluation.
- */
-function brentFunction(
-  g: DrugGrids,
-  salt: ProfileSalt,
-  logSaltOf: (laD: number, laX: number) => number,
-): (pH: number) => number {
-  const drug = g.drug;
-  const iSalt = drug.mostProtonatedCharge - g.ionCharge;
-  const iFree = drug.mostProtonatedCharge;
-  const log10S0 = g.log10IntrinsicM;
-  const ion = salt.counterIon;
-  const iIon = ion.mostProtonatedCharge - salt.counterIonCharge;
-  return (pH: number) => {
-    const logSum = log10SpeciesSum(drug, pH);
-    const laD = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
-    const laX = log10UnnormalisedFraction(ion, pH, iIon) - log10SpeciesSum(ion, pH);
-    return logSaltOf(laD, laX) - (log10S0 - (log10UnnormalisedFraction(drug, pH, iFree) - logSum));
-  };
 }

@@ -110,6 +110,8 @@ export function ichM9WorstAndNamedOnPoints(
   points: SaltGridPoints,
   plan: readonly IchM9PlanPoint[],
 ): { doses: DoseNumberAt[]; worst: DoseNumberAt } {
+  const { named, ks } = planIndicesOf(plan);
+  if (ks) return worstAndNamedOnGrid(ctx, points, plan, named, ks);
   let off: Map<number, DoseNumberAt> | undefined; // points off the grid, solved once each
   const offDose = (i: number): DoseNumberAt => {
     off ??= new Map();
@@ -133,22 +135,15 @@ export function ichM9WorstAndNamedOnPoints(
     const solubilityM = points.exactAt(k);
     return doseAt(ctx, pH, solubilityM, points.salt);
   };
-  const { named, ks } = planIndicesOf(plan);
+  // a point off the grid (a grid not through 1.2, 4.5 or 6.8): the same scan, point by point
   let w = 0;
-  if (ks)
-    w = points.lowestOf(ks, (b, a) =>
-      clearlyLower(freeFormMgPerMl(ctx, b), freeFormMgPerMl(ctx, a)),
-    );
-  else {
-    // a point off the grid (a grid not through 1.2, 4.5 or 6.8): the same scan, point by point
-    let wLog = log10Of(0);
-    for (let i = 1; i < plan.length; i++) {
-      const l = log10Of(i);
-      if (l > wLog) continue; // not lower at all, so not clearly lower
-      if (l < wLog - LOG_ORDER_MARGIN || clearlyLower(mgAt(i), mgAt(w))) {
-        w = i;
-        wLog = l;
-      }
+  let wLog = log10Of(0);
+  for (let i = 1; i < plan.length; i++) {
+    const l = log10Of(i);
+    if (l > wLog) continue; // not lower at all, so not clearly lower
+    if (l < wLog - LOG_ORDER_MARGIN || clearlyLower(mgAt(i), mgAt(w))) {
+      w = i;
+      wLog = l;
     }
   }
   const doses: DoseNumberAt[] = [];
@@ -156,6 +151,38 @@ export function ichM9WorstAndNamedOnPoints(
   for (let i = 0; i < plan.length; i++) {
     if (i !== w && named[i] !== 1) continue;
     const d = doseOf(i);
+    if (i === w) worst = d;
+    doses.push(d);
+  }
+  return { doses, worst: worst! };
+}
+
+/** The context lowerMg compares in (set just before each use: the calls are synchronous). */
+let lowerMgCtx: ScreenContext | null = null;
+const lowerMg = (b: number, a: number): boolean =>
+  clearlyLower(freeFormMgPerMl(lowerMgCtx!, b), freeFormMgPerMl(lowerMgCtx!, a));
+
+/**
+ * ichM9WorstAndNamedOnPoints when every plan point is a grid point (the usual grid): the same scan
+ * and the same exact values in the same order, without a closure made per salt (the screen calls it
+ * for every candidate of every compound).
+ */
+function worstAndNamedOnGrid(
+  ctx: ScreenContext,
+  points: SaltGridPoints,
+  plan: readonly IchM9PlanPoint[],
+  named: Uint8Array,
+  ks: Int32Array,
+): { doses: DoseNumberAt[]; worst: DoseNumberAt } {
+  lowerMgCtx = ctx;
+  const w = points.lowestOf(ks, lowerMg);
+  lowerMgCtx = null;
+  const doses: DoseNumberAt[] = [];
+  let worst: DoseNumberAt | null = null;
+  for (let i = 0; i < plan.length; i++) {
+    if (i !== w && named[i] !== 1) continue;
+    const solubilityM = points.exactAt(ks[i]!);
+    const d = doseAt(ctx, plan[i]!.pH, solubilityM, points.salt);
     if (i === w) worst = d;
     doses.push(d);
   }

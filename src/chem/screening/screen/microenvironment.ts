@@ -72,6 +72,31 @@ export function microenvironmentJudgement(
   return new JudgementAtPh(phMax, settings.microenvironmentPh, drugKind, basis);
 }
 
+/** Whether the judgement is against one pH (no chosen excipient the bundled table knows), as above. */
+export function judgedAtOnePh(settings: ScreeningSettings): boolean {
+  return settings.excipients.length === 0 || chosenExcipients(settings).length === 0;
+}
+
+/**
+ * The margin at `lo` when the disproportionation score, clamp01(0.5 + margin/2) (ranking.ts), is the
+ * same for every pH_max in [lo, hi]; else null. Against one pH the margin is pH_max − pH (base) or
+ * pH − pH_max (acid): a rounded subtraction, monotone in pH_max, so between its values at lo and hi.
+ * Both ≥ 1: 0.5 + margin/2 ≥ 1 rounds to ≥ 1 and the clamp gives 1; both ≤ −1: it rounds to ≤ 0 and
+ * the clamp gives 0 (+0 when the sum is 0) — whatever pH_max in the span, the same bits. Against
+ * excipients the score is a smooth probability: never saturated here.
+ */
+export function saturatedMarginOver(
+  settings: ScreeningSettings,
+  lo: number,
+  hi: number,
+  drugKind: 'base' | 'acid',
+): number | null {
+  if (!judgedAtOnePh(settings)) return null;
+  const atLo = disproportionationMarginPh(lo, settings.microenvironmentPh, drugKind)!;
+  const atHi = disproportionationMarginPh(hi, settings.microenvironmentPh, drugKind)!;
+  return (atLo >= 1 && atHi >= 1) || (atLo <= -1 && atHi <= -1) ? atLo : null;
+}
+
 /** The line of the screen's assumptions that says what the disproportionation criterion rests on. */
 export function microenvironmentAssumption(settings: ScreeningSettings): string {
   const excipients = chosenExcipients(settings);

@@ -5,7 +5,7 @@ import { LIBRARY_COUNTER_ION_DESCRIPTORS } from '../salt-solubility/library-desc
 import type { ScreeningSettings } from '../settings';
 import type { RobustnessShared } from '../rank-robustness';
 import { isPrepared, prepareCandidate } from './prepare-candidate';
-import { rowNumbers, type RowNumbers } from './row-numbers';
+import { refinedRowNumbers, rowNumbers, type RowNumbers } from './row-numbers';
 import { freeFormGastric } from './free-form';
 import { screenCompound, screenRowOf, screenSetup, type ScreenSetup } from './screen-compound';
 import type { ScreenCompoundInput, ScreeningCandidate, ScreenRow } from './screen.types';
@@ -79,7 +79,8 @@ function rankByNumbers(setup: ScreenSetup, top: number) {
     if (!isPrepared(p)) return { id: p.cand.id, criteria: NO_CRITERIA, error: p.error };
     try {
       const kspOf = () => setup.ksps.get(p.cand.id) ?? chooseAgain();
-      const n = rowNumbers(setup.ctx, p, kspOf, setup.media, setup.hcl, setup.shared);
+      // scores only: pH_max may be left unrefined where its score is saturated (row-numbers.ts)
+      const n = rowNumbers(setup.ctx, p, kspOf, setup.media, setup.hcl, setup.shared, true);
       numbers[i] = n;
       return { id: p.cand.id, criteria: n.criteria, error: null };
     } catch (err) {
@@ -108,7 +109,9 @@ export function screenCompoundTop(
   const rows: ScreenRow[] = [];
   for (const { index } of ranked) {
     const p = setup.prepared[index]!;
-    const n = numbers[index];
+    const pass1 = numbers[index];
+    // a written row reads pH_max (its words, columns, σ): refined now if pass 1 left it
+    const n = pass1 && refinedRowNumbers(setup.ctx, pass1, setup.shared);
     if (!defer || !n || !isPrepared(p)) {
       const row = screenRowOf(setup, p, n);
       if ((row.error === null) !== (n !== undefined)) return fullScreenTop(input, opts.top, later);
