@@ -57,9 +57,12 @@ describe('the path of the screen’s input through the core', () => {
       expect(c.returns, phase).toBeLessThanOrEqual(BOUNDS[phase].returns);
     }
     // a salt request is checked once, at the engine's edge: the formula-unit check runs once per
-    // estimateSaltThermo call, however many lattice methods 'auto' then tries
+    // ΔH_sol asked for (solutionEnthalpyNumbersKJ, the screen's numbers-first estimateSaltThermo),
+    // however many lattice methods 'auto' then tries
     const e = t.candidates.edges;
-    const salts = e.get('src/chem/screening/thermo-link.ts → src/chem/thermo/estimate-salt.ts');
+    const salts = e.get(
+      'src/chem/screening/thermo-link.ts → src/chem/thermo/solution-enthalpy-numbers.ts',
+    );
     expect(salts).toBeGreaterThan(0);
     expect(
       e.get('src/chem/thermo/lattice-inputs.ts → src/chem/thermo/models/formula-unit.ts'),

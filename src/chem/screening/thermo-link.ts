@@ -1,5 +1,5 @@
 import type { Estimate } from '../result';
-import { estimateSaltThermo, getThermoIon, organicIonFromFormula } from '../thermo';
+import { getThermoIon, organicIonFromFormula, solutionEnthalpyNumbersKJ } from '../thermo';
 import type { ThermoIon } from '../thermo';
 
 /**
@@ -49,7 +49,10 @@ function counterThermoIon(c: ThermoCounterIon, ionCharge: number, ionFormula: st
   return ion;
 }
 
-/** ΔH_sol per formula unit (kJ/mol) of D_m X_n, or null with the reason the engine gave. */
+/**
+ * ΔH_sol per formula unit (kJ/mol) of D_m X_n — value, 1σ, method and sources as estimateSaltThermo
+ * with `method: 'auto'` gives them, without the cycle's notes — or null with the reason the engine gave.
+ */
 export function candidateSolutionEnthalpyKJ(
   drug: ThermoDrugIon | ThermoIon,
   counterIon: ThermoCounterIon,
@@ -68,14 +71,14 @@ export function candidateSolutionEnthalpyKJ(
       stoichiometry.ionFormula ?? counterIon.formula,
     );
     const drugIsCation = drug.charge > 0;
-    const r = estimateSaltThermo({
+    // the value, 1σ and sources of estimateSaltThermo(…, method 'auto').solutionEnthalpyKJ, without
+    // the cycle's notes (a screen reads the numbers; the Energetics area runs estimateSaltThermo)
+    const e = solutionEnthalpyNumbersKJ({
       cation: drugIsCation ? d : x,
       anion: drugIsCation ? x : d,
       cationsPerFormula: drugIsCation ? stoichiometry.drugPerSalt : stoichiometry.counterIonPerSalt,
       anionsPerFormula: drugIsCation ? stoichiometry.counterIonPerSalt : stoichiometry.drugPerSalt,
-      method: 'auto',
     });
-    const e = r.solutionEnthalpyKJ;
     if (!Number.isFinite(e.value) || !Number.isFinite(e.uncertainty))
       return { solutionEnthalpyKJ: null, reason: 'the thermochemistry gave no finite ΔH_sol' };
     return { solutionEnthalpyKJ: e, reason: null };

@@ -3,7 +3,7 @@
  * enthalpies give the solution enthalpy, with uncertainties in quadrature and the sign convention stated.
  */
 import type { Estimate } from '../result';
-import { hydrationEnthalpyKJ } from './models/hydration/hydration';
+import { hydrationEnthalpyKJ } from './models/hydration/hydration-enthalpy';
 import type { SaltThermoResult } from './thermo.types';
 import type { CheckedSaltRequest } from './lattice-inputs';
 import { publishedHydrationClosure } from './validation/validation';
@@ -22,7 +22,7 @@ export const SIGN_CONVENTION =
   'ΔH_L is the lattice dissociation enthalpy, > 0 for MₚXq(s) → p Mᶻ⁺(g) + q Xᶻ⁻(g) (the lattice formation enthalpy is the same number with a minus sign); ΔH_hyd < 0 for one gaseous ion → aqueous ion, absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); ΔH_sol = ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− at infinite dilution, 298.15 K, kJ/mol per formula unit.';
 
 /** The entries of the lists in order, each once (as [...new Set([...a, ...b, ...c])], without the copies). */
-function uniqueInOrder(...lists: readonly (readonly string[])[]): string[] {
+export function uniqueInOrder(...lists: readonly (readonly string[])[]): string[] {
   const out: string[] = [];
   for (const list of lists) for (const x of list) if (!out.includes(x)) out.push(x);
   return out;

@@ -53,9 +53,9 @@ export {
   bornHydrationEnthalpyKJ,
   bornEnthalpyFactor,
   fitBornOffsets,
-  hydrationEnthalpyKJ,
   type BornOffsetFit,
 } from './models/hydration/hydration';
+export { hydrationEnthalpyKJ } from './models/hydration/hydration-enthalpy';
 export {
   solveCycle,
   bornHaberCycle,
@@ -67,6 +67,7 @@ export { latticeFromSolutionEnthalpy } from './models/solution/solution';
 export { solutionEnthalpiesRelativeToMedianKJ } from './models/solution/relative';
 export { estimateSaltThermo, latticeEnthalpyEstimate, SIGN_CONVENTION } from './estimate-salt';
 export { calibratedMethodName } from './lattice-estimate';
+export { solutionEnthalpyNumbersKJ } from './solution-enthalpy-numbers';
 export type { CalibratedSaltThermoResult, LatticeCalibrationOptions } from './estimate-salt';
 export {
   validationReport,

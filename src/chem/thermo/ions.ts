@@ -128,11 +128,25 @@ function recordToIon(r: ThermoIonRecord): ThermoIon {
 
 const cache = new Map<string, ThermoIon>();
 
+/**
+ * The bundled records by id (the first of an id, as a search from the start finds it), made once: an
+ * id that is not bundled (most library counter-ions, asked for each salt of a screen) is one lookup
+ * instead of a search through the whole table.
+ */
+let recordsById: Map<string, (typeof THERMO_IONS)[number]> | undefined;
+function recordById(id: string): (typeof THERMO_IONS)[number] | undefined {
+  if (!recordsById) {
+    recordsById = new Map();
+    for (const r of THERMO_IONS) if (!recordsById.has(r.id)) recordsById.set(r.id, r);
+  }
+  return recordsById.get(id);
+}
+
 /** A bundled reference ion by its shared id (`sodium`, `sulfate`, …) or undefined. */
 export function getThermoIon(id: string): ThermoIon | undefined {
   const hit = cache.get(id);
   if (hit) return hit;
-  const r = THERMO_IONS.find((i) => i.id === id);
+  const r = recordById(id);
   if (!r) return undefined;
   const ion = recordToIon(r);
   cache.set(id, ion);

@@ -23,7 +23,7 @@ export interface LatticeCalibrationOptions {
 }
 
 /** Where the calibration factors come from. */
-const CALIBRATION_SOURCE =
+export const CALIBRATION_SOURCE =
   'calibration factor fitted on the bundled lattice reference salts (Born–Haber halides from the NBS tables of Wagman et al. 1982 and CRC/NIST ionisation energies and electron affinities; solution-cycle salts from NBS ΔfH° and Marcus hydration enthalpies) by calibration/fit-calibration.ts';
 
 /**

@@ -13,7 +13,7 @@ import { groupOf } from './lattice-uncertainty';
 export type ChosenLattice = ReturnType<typeof latticeEnthalpyEstimate>;
 
 /** The methods that can run on a request, in order of preference for ties. */
-function applicableMethods(c: CheckedSaltRequest): LatticeMethod[] {
+export function applicableMethods(c: CheckedSaltRequest): LatticeMethod[] {
   const { req } = c;
   const out: LatticeMethod[] = [];
   const vol = (() => {
@@ -28,6 +28,15 @@ function applicableMethods(c: CheckedSaltRequest): LatticeMethod[] {
   if (req.structureType && isStructureType(req.structureType) && vol && vol.from !== 'ion-volumes')
     out.push('born-mayer');
   return out;
+}
+
+/** The error when no lattice method applies to a request. */
+export function noLatticeMethod(): ChemInputError {
+  return new ChemInputError(
+    'cation/anion',
+    'no lattice method applies: give ions with radii or volumes, or a formula-unit volume or density',
+    'bundled ions, formula or SMILES ions, formulaUnitVolumeNm3 or densityGPerCm3',
+  );
 }
 
 type RankedEstimate = { m: LatticeMethod; r: ChosenLattice; rel: number };
@@ -72,13 +81,7 @@ export function chooseLatticeEstimate(
   const requested = req.method ?? 'auto';
   if (requested === 'auto') {
     const methods = applicableMethods(c);
-    if (methods.length === 0) {
-      throw new ChemInputError(
-        'cation/anion',
-        'no lattice method applies: give ions with radii or volumes, or a formula-unit volume or density',
-        'bundled ions, formula or SMILES ions, formulaUnitVolumeNm3 or densityGPerCm3',
-      );
-    }
+    if (methods.length === 0) throw noLatticeMethod();
     const group = groupOf(req);
     const ranked = rankedEstimates(c, methods, calOpts);
     const best = ranked[0]!;

@@ -7,7 +7,7 @@ import type { Estimate } from '../result';
 import { BORN_LANDE_SOURCES, BORN_MAYER_SOURCES } from './models/born-mayer/born-mayer';
 import { KAPUSTINSKII_SOURCES } from './models/kapustinskii/kapustinskii';
 import { VBT_SOURCES } from './models/vbt/vbt';
-import type { RawLattice } from './lattice';
+import type { RawLattice, RawLatticeNumbers } from './lattice';
 import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
 import { latticeStats, type LatticeVariant } from './validation/validation';
 
@@ -23,7 +23,7 @@ export const METHOD_SOURCES: Record<LatticeMethod, string[]> = {
 };
 
 /** Which validation variant measures the error of a raw lattice computation. */
-export function variantOf(raw: RawLattice): LatticeVariant {
+export function variantOf(raw: RawLatticeNumbers): LatticeVariant {
   if (raw.method === 'vbt') return raw.volumeFrom === 'ion-volumes' ? 'vbt-ion-volumes' : 'vbt';
   return raw.method;
 }
@@ -53,8 +53,31 @@ function modelRelU(raw: RawLattice, group: ReferenceGroup): { rel: number; basis
   };
 }
 
+/** modelRelFraction's figures, filled on first use. */
+const MODEL_REL_MEMO: Partial<Record<LatticeVariant, Partial<Record<ReferenceGroup, number>>>> = {};
+
+/**
+ * {@link modelRelU}'s fraction alone, memoised per variant and group (the validation figures are fixed
+ * once computed): the numbers-first ΔH_sol (solution-enthalpy-numbers.ts) reads it for every method tried.
+ */
+export function modelRelFraction(variant: LatticeVariant, group: ReferenceGroup): number {
+  const byGroup = (MODEL_REL_MEMO[variant] ??= {});
+  let rel = byGroup[group];
+  if (rel === undefined) {
+    let stats;
+    try {
+      stats = latticeStats(variant, group);
+    } catch {
+      stats = latticeStats(variant, 'all');
+    }
+    rel = stats.rmsPercentError / 100;
+    byGroup[group] = rel;
+  }
+  return rel;
+}
+
 /** Extra relative uncertainty from ion sizes that are themselves estimates (organic ions). */
-export function sizeRelU(raw: RawLattice, req: SaltThermoRequest): number {
+export function sizeRelU(raw: RawLatticeNumbers, req: SaltThermoRequest): number {
   const { cation: c, anion: a } = req;
   if (!c.estimatedSize && !a.estimatedSize) return 0;
   if (raw.method === 'vbt' && raw.volumeFrom === 'ion-volumes') return (raw.volumeRelU ?? 0) / 3;

@@ -11,7 +11,7 @@ import {
   kapustinskiiPotentialKJ,
 } from './models/kapustinskii/kapustinskii';
 import { latticeEnthalpyCorrectionKJ } from './models/lattice-correction';
-import { vbtPotentialKJ } from './models/vbt/vbt';
+import { vbtPotentialKJ, vbtPotentialValueKJ } from './models/vbt/vbt';
 import { checkSaltRequest, formulaUnitVolume, type CheckedSaltRequest } from './lattice-inputs';
 import type { LatticeMethod, SaltThermoRequest } from './thermo.types';
 
@@ -37,7 +37,11 @@ type LatticeOptions = {
 };
 type PotentialPart = Omit<RawLattice, 'enthalpyKJ' | 'method'>;
 
-function kapustinskiiPart(c: CheckedSaltRequest, opts: LatticeOptions): PotentialPart {
+/** The radii Kapustinskii uses (the options' or the ions'); throws when an ion has none. */
+function kapustinskiiRadii(
+  c: CheckedSaltRequest,
+  opts: LatticeOptions,
+): { rcA: number; raA: number } {
   const { cation, anion } = c;
   const rcA = opts.kapustinskiiRadii?.cation ?? cation.radiusA?.value;
   const raA = opts.kapustinskiiRadii?.anion ?? anion.radiusA?.value;
@@ -53,14 +57,27 @@ function kapustinskiiPart(c: CheckedSaltRequest, opts: LatticeOptions): Potentia
       `${anion.label} has no radius`,
       'an ion with a radius or volume',
     );
-  const potentialKJ = kapustinskiiPotentialKJ({
+  return { rcA, raA };
+}
+
+function kapustinskiiPotential(
+  c: CheckedSaltRequest,
+  opts: LatticeOptions,
+  rcA: number,
+  raA: number,
+): number {
+  return kapustinskiiPotentialKJ({
     formulaUnit: c.formulaUnit,
     cationRadiusA: rcA,
     anionRadiusA: raA,
     constantKJA: opts.kapustinskiiK ?? KAPUSTINSKII_K_KJ_A_PER_MOL,
   });
+}
+
+function kapustinskiiPart(c: CheckedSaltRequest, opts: LatticeOptions): PotentialPart {
+  const { rcA, raA } = kapustinskiiRadii(c, opts);
   return {
-    potentialKJ,
+    potentialKJ: kapustinskiiPotential(c, opts, rcA, raA),
     detail: `r₊ = ${rcA.toFixed(3)} Å, r₋ = ${raA.toFixed(3)} Å, ν = ${c.p + c.q}`,
   };
 }
@@ -125,7 +142,8 @@ function bornPart(c: CheckedSaltRequest, method: 'born-mayer' | 'born-lande'): P
   };
 }
 
-function vbtPart(c: CheckedSaltRequest): PotentialPart {
+/** The formula-unit volume VBT needs; throws when the request gives none. */
+function vbtVolume(c: CheckedSaltRequest): NonNullable<ReturnType<typeof formulaUnitVolume>> {
   const vol = formulaUnitVolume(c);
   if (!vol)
     throw new ChemInputError(
@@ -133,6 +151,11 @@ function vbtPart(c: CheckedSaltRequest): PotentialPart {
       'VBT needs a formula-unit volume, a density, or ions with volumes',
       '0.005–10 nm³',
     );
+  return vol;
+}
+
+function vbtPart(c: CheckedSaltRequest): PotentialPart {
+  const vol = vbtVolume(c);
   const r = vbtPotentialKJ({
     formulaUnit: c.formulaUnit,
     formulaUnitVolumeNm3: vol.volumeNm3,
@@ -187,6 +210,46 @@ export function rawLatticeOf(
     c.temperatureK,
   );
   return { method, ...part, enthalpyKJ: part.potentialKJ + correctionKJ };
+}
+
+/** What a calibrated figure and its uncertainty read of a raw lattice computation (no words). */
+export type RawLatticeNumbers = Pick<
+  RawLattice,
+  'method' | 'enthalpyKJ' | 'volumeFrom' | 'volumeRelU'
+>;
+
+/**
+ * {@link rawLatticeOf}'s numbers without its `detail` words, by the same operations in the same order
+ * and with the same errors (default options): for a ΔH_sol whose notes nobody reads (a batch's
+ * written rows, solution-enthalpy-numbers.ts). Born–Mayer and Born–Landé go through rawLatticeOf.
+ */
+export function rawLatticeNumbersOf(
+  c: CheckedSaltRequest,
+  method: LatticeMethod,
+): RawLatticeNumbers {
+  let potentialKJ: number;
+  let volumeFrom: RawLattice['volumeFrom'];
+  let volumeRelU: number | undefined;
+  if (method === 'kapustinskii') {
+    const { rcA, raA } = kapustinskiiRadii(c, {});
+    potentialKJ = kapustinskiiPotential(c, {}, rcA, raA);
+  } else if (method === 'vbt') {
+    const vol = vbtVolume(c);
+    potentialKJ = vbtPotentialValueKJ({
+      formulaUnit: c.formulaUnit,
+      formulaUnitVolumeNm3: vol.volumeNm3,
+    });
+    volumeFrom = vol.from;
+    volumeRelU = vol.relativeSigma;
+  } else return rawLatticeOf(c, method);
+  const correctionKJ = latticeEnthalpyCorrectionKJ(
+    c.p,
+    c.cation.shape,
+    c.q,
+    c.anion.shape,
+    c.temperatureK,
+  );
+  return { method, enthalpyKJ: potentialKJ + correctionKJ, volumeFrom, volumeRelU };
 }
 
 /** rawLatticeOf for an unchecked request: the request is checked first (an edge, e.g. the validation). */

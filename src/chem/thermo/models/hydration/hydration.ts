@@ -4,8 +4,7 @@ import {
   WATER_RELATIVE_PERMITTIVITY_298K,
 } from '../../../constants/water';
 import { THERMO_IONS } from '../../../data/thermo-ions';
-import { SRC } from '../../../data/thermo-sources';
-import { ChemInputError, requireFiniteInRange, type Estimate } from '../../../result';
+import { ChemInputError, requireFiniteInRange } from '../../../result';
 import { getThermoIon } from '../../ions';
 import type { ThermoIon } from '../../thermo.types';
 import { organicIonFromFormula } from '../ion-volume/ion-volume';
@@ -194,93 +193,4 @@ export function fitBornOffsets(): BornOffsetFit {
     organicRmsFraction: organicRms,
   };
   return fitCache;
-}
-
-/**
- * Relative uncertainty floor for published hydration enthalpies of polyatomic ions, which the halide
- * closure test cannot check — common practice, not a measured figure.
- */
-export const POLYATOMIC_PUBLISHED_REL_U = 0.03;
-
-/** Uncertainty of a published single-ion value: the closure of the solution cycle (`publishedHydrationClosure`). */
-export const PUBLISHED_HYDRATION_SOURCES = [SRC.marcusHydration];
-
-/**
- * Hydration enthalpy of one ion, kJ/mol (< 0): the published value where the ion has one; otherwise the
- * Born enthalpy with the fitted effective-radius offset. Uncertainty: for published values, the per-ion
- * share of the measured closure of the solution cycle (`perIonPublishedUncertaintyKJ`); for the Born
- * estimate, the fit's RMS relative residual for that charge sign, or — for ions whose size is itself an
- * estimate (organic ions) — the larger of that and the RMS error on the organic check ions, plus the radius's
- * own uncertainty carried through the 1/r dependence.
- */
-export function hydrationEnthalpyKJ(
-  ion: ThermoIon,
-  opts: { temperatureK?: number; forceBorn?: boolean; perIonPublishedUncertaintyKJ?: number } = {},
-): Estimate {
-  const z = ion.charge;
-  if (!Number.isInteger(z) || z === 0 || Math.abs(z) > 4)
-    throw new ChemInputError(
-      'charge',
-      `charge ${z} is not a non-zero whole number`,
-      'whole numbers −4…−1 or +1…+4',
-    );
-  if (ion.hydrationEnthalpyKJ && !opts.forceBorn) {
-    const pub = ion.hydrationEnthalpyKJ;
-    const closure = (opts.perIonPublishedUncertaintyKJ ?? 0) * Math.abs(z);
-    const polyFloor =
-      ion.shape === 'monatomic' ? 0 : POLYATOMIC_PUBLISHED_REL_U * Math.abs(pub.value);
-    const notes = [
-      'absolute scale of Marcus (ΔH_hyd(H⁺) = −1103 kJ/mol as implied by his Na⁺ value and the NBS tables); sums over a neutral salt do not depend on it',
-    ];
-    if (closure > 0)
-      notes.push(
-        `uncertainty at least ${closure.toFixed(1)} kJ/mol: the RMS closure of the solution cycle on the bundled halides, per ion`,
-      );
-    if (polyFloor > 0)
-      notes.push(
-        `polyatomic ion: at least ${(POLYATOMIC_PUBLISHED_REL_U * 100).toFixed(0)} % (common practice; the halide closure does not test it)`,
-      );
-    return {
-      value: pub.value,
-      uncertainty: Math.max(pub.uncertainty, closure, polyFloor),
-      method: 'published',
-      sources: pub.sources,
-      notes,
-    };
-  }
-  const r = bornRadiusA(ion);
-  if (r === undefined)
-    throw new ChemInputError(
-      'ion',
-      `${ion.label} has no radius or volume for the Born model`,
-      'an ion with a radius, volume, formula or SMILES',
-    );
-  const fit = fitBornOffsets();
-  const delta = z > 0 ? fit.cationOffsetA : fit.anionOffsetA;
-  const value = bornHydrationEnthalpyKJ(z, r + delta, opts.temperatureK);
-  const fitRel = z > 0 ? fit.cationRmsFraction : fit.anionRmsFraction;
-  const radiusRel =
-    ion.radiusA && ion.shape !== 'monatomic' ? ion.radiusA.uncertainty / (r + delta) : 0;
-  const modelRel = ion.estimatedSize ? Math.max(fitRel, fit.organicRmsFraction) : fitRel;
-  const rel = Math.sqrt(modelRel ** 2 + radiusRel ** 2);
-  const notes = [
-    `r_eff = r + ${delta.toFixed(2)} Å (offset fitted on published ${z > 0 ? 'cations' : 'anions'})`,
-  ];
-  if (ion.estimatedSize) {
-    notes.push(
-      'organic ion: the Born term misses cavity and hydrophobic-hydration terms; uncertainty widened to the error measured on tetraalkylammonium and acetate ions',
-    );
-  }
-  return {
-    value,
-    uncertainty: Math.abs(value) * rel,
-    method: 'born-fitted',
-    sources: [
-      SRC.born1920,
-      SRC.latimer1939,
-      SRC.waterDielectric,
-      `offsets fitted on ${SRC.marcusHydration}`,
-    ],
-    notes,
-  };
 }

@@ -67,6 +67,29 @@ export interface VbtInput {
  * recommend for highly charged lattices.
  */
 export function vbtPotentialKJ(input: VbtInput): { valueKJ: number; form: string } {
+  const t = vbtTerms(input);
+  if (t.glasser) return { valueKJ: t.valueKJ, form: 'Glasser A·I·(2I/V_m)^(1/3)' };
+  const c = t.constants;
+  return {
+    valueKJ: t.valueKJ,
+    form: `2I(α/V_m^(1/3) + β), ${c.key} constants α = ${c.alphaKJNm}, β = ${c.betaKJ}`,
+  };
+}
+
+/**
+ * {@link vbtPotentialKJ}'s value alone (the same operations, without the words of its form): what a
+ * ΔH_sol needs when its cycle's notes are not shown (solution-enthalpy-numbers.ts).
+ */
+export function vbtPotentialValueKJ(input: VbtInput): number {
+  return vbtTerms(input).valueKJ;
+}
+
+/** U_POT and which form gave it (see vbtPotentialKJ). */
+function vbtTerms(input: VbtInput): {
+  valueKJ: number;
+  glasser: boolean;
+  constants: ReturnType<typeof vbtConstantsFor>;
+} {
   const {
     cationCharge: zc,
     anionCharge: za,
@@ -84,15 +107,10 @@ export function vbtPotentialKJ(input: VbtInput): { valueKJ: number; form: string
   const c = vbtConstantsFor(zc, za, p, q);
   const potentialKJ = 2 * i * (c.alphaKJNm / Math.cbrt(volumeNm3) + c.betaKJ);
   if (potentialKJ > 5000) {
-    return {
-      valueKJ: GLASSER_A_KJ_NM * i * Math.cbrt((2 * i) / volumeNm3),
-      form: 'Glasser A·I·(2I/V_m)^(1/3)',
-    };
+    const valueKJ = GLASSER_A_KJ_NM * i * Math.cbrt((2 * i) / volumeNm3);
+    return { valueKJ, glasser: true, constants: c };
   }
-  return {
-    valueKJ: potentialKJ,
-    form: `2I(α/V_m^(1/3) + β), ${c.key} constants α = ${c.alphaKJNm}, β = ${c.betaKJ}`,
-  };
+  return { valueKJ: potentialKJ, glasser: false, constants: c };
 }
 
 /** Formula-unit volume from density: V_m = M / (ρ·N_A), nm³ (M in g/mol, ρ in g/cm³). */
