@@ -14,7 +14,11 @@ import {
   findLatticeFactor,
   SHIPPED_LATTICE_CALIBRATION,
 } from './calibration/calibration';
-import type { CalibratedVariant } from './calibration/calibration.types';
+import type {
+  CalibratedVariant,
+  ChargeClass,
+  LatticeFactor,
+} from './calibration/calibration.types';
 import { uniqueInOrder } from './hess-law-assembly';
 import { rawLatticeNumbersOf } from './lattice';
 import { CALIBRATION_SOURCE } from './lattice-estimate';
@@ -49,6 +53,28 @@ function calibratedSources(method: LatticeMethod): readonly string[] {
   return s;
 }
 
+/** findLatticeFactor on the shipped calibration, memoised per cell (variant × charge class × group). */
+const SHIPPED_FACTOR_CELLS: Partial<
+  Record<
+    CalibratedVariant,
+    Partial<Record<ChargeClass, Partial<Record<ReferenceGroup, LatticeFactor | null>>>>
+  >
+> = {};
+function shippedFactor(
+  variant: CalibratedVariant,
+  cls: ChargeClass,
+  group: ReferenceGroup,
+): LatticeFactor | undefined {
+  const byClass = (SHIPPED_FACTOR_CELLS[variant] ??= {});
+  const byGroup = (byClass[cls] ??= {});
+  let f = byGroup[group];
+  if (f === undefined) {
+    f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, variant, cls, group) ?? null;
+    byGroup[group] = f;
+  }
+  return f ?? undefined;
+}
+
 /** latticeEnthalpyEstimate(c, method)'s value, 1σ and sources (shipped calibration), same doubles. */
 function latticeNumbers(
   c: CheckedSaltRequest,
@@ -57,12 +83,14 @@ function latticeNumbers(
 ): LatticeNumbers {
   const { req } = c;
   const raw = rawLatticeNumbersOf(c, method);
-  // the raw estimate (rawEstimate in lattice-uncertainty.ts): asked first, as it fails first there
-  const rawRel = Math.hypot(modelRelFraction(variantOf(raw), group), sizeRelU(raw, req));
   const variant = variantOf(raw) as CalibratedVariant;
   const cls = chargeClassOf(req.cation.charge, req.anion.charge);
-  const f = findLatticeFactor(SHIPPED_LATTICE_CALIBRATION, variant, cls, group);
+  const f = shippedFactor(variant, cls, group);
   if (!f) {
+    // the raw estimate (rawEstimate in lattice-uncertainty.ts). Where a factor applies it is not
+    // needed: the validation behind it (computed once per thread, ~40 ms) is then never built; it
+    // cannot fail for a known variant (latticeStats falls back to the variant's 'all' figures)
+    const rawRel = Math.hypot(modelRelFraction(variantOf(raw), group), sizeRelU(raw, req));
     const uncertainty = raw.enthalpyKJ * rawRel;
     const value = raw.enthalpyKJ;
     return { value, uncertainty, sources: METHOD_SOURCES[method], rel: uncertainty / value };

@@ -41,17 +41,22 @@ export function ionicStrengthFactor(
   return 0.5 * (p * cationCharge ** 2 + q * anionCharge ** 2);
 }
 
+/** Each α, β row with its key, made once (frozen: every salt of a kind shares it). */
+const VBT_ROWS = {
+  '1:1': Object.freeze({ key: '1:1' as const, ...VBT_CONSTANTS['1:1'] }),
+  '2:1': Object.freeze({ key: '2:1' as const, ...VBT_CONSTANTS['2:1'] }),
+  '1:2': Object.freeze({ key: '1:2' as const, ...VBT_CONSTANTS['1:2'] }),
+  general: Object.freeze({ key: 'general' as const, ...VBT_CONSTANTS.general }),
+};
+
 /** Which α, β row applies to a salt. */
 export function vbtConstantsFor(cationCharge: number, anionCharge: number, p: number, q: number) {
   const zc = Math.abs(cationCharge);
   const za = Math.abs(anionCharge);
-  if (p === 1 && q === 1 && zc === 1 && za === 1)
-    return { key: '1:1' as const, ...VBT_CONSTANTS['1:1'] };
-  if (p === 1 && q === 2 && zc === 2 && za === 1)
-    return { key: '2:1' as const, ...VBT_CONSTANTS['2:1'] };
-  if (p === 2 && q === 1 && zc === 1 && za === 2)
-    return { key: '1:2' as const, ...VBT_CONSTANTS['1:2'] };
-  return { key: 'general' as const, ...VBT_CONSTANTS.general };
+  if (p === 1 && q === 1 && zc === 1 && za === 1) return VBT_ROWS['1:1'];
+  if (p === 1 && q === 2 && zc === 2 && za === 1) return VBT_ROWS['2:1'];
+  if (p === 2 && q === 1 && zc === 1 && za === 2) return VBT_ROWS['1:2'];
+  return VBT_ROWS.general;
 }
 
 export interface VbtInput {
