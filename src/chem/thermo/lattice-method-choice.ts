@@ -16,18 +16,21 @@ export type ChosenLattice = ReturnType<typeof latticeEnthalpyEstimate>;
 export function applicableMethods(c: CheckedSaltRequest): LatticeMethod[] {
   const { req } = c;
   const out: LatticeMethod[] = [];
-  const vol = (() => {
-    try {
-      return formulaUnitVolume(c);
-    } catch {
-      return undefined;
-    }
-  })();
+  const vol = volumeOrUndefined(c);
   if (vol) out.push('vbt');
   if (req.cation.radiusA && req.anion.radiusA) out.push('kapustinskii');
   if (req.structureType && isStructureType(req.structureType) && vol && vol.from !== 'ion-volumes')
     out.push('born-mayer');
   return out;
+}
+
+/** The request's formula-unit volume, or undefined when it has none or it cannot be found. */
+function volumeOrUndefined(c: CheckedSaltRequest): ReturnType<typeof formulaUnitVolume> {
+  try {
+    return formulaUnitVolume(c);
+  } catch {
+    return undefined;
+  }
 }
 
 /** The error when no lattice method applies to a request. */

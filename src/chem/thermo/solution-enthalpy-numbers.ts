@@ -130,6 +130,27 @@ function autoLattice(c: CheckedSaltRequest): LatticeNumbers {
 }
 
 /**
+ * One ion's hydration numbers at 298.15 K, memoised per ion record in a WeakMap (bounded by the ions
+ * alive: a screen's counter-ions are shared records, its drug ion serves every salt of one compound);
+ * at another temperature, computed each time (the published values' closure share is the one fixed
+ * figure of publishedHydrationClosure). Failures are not kept: they are thrown again.
+ */
+type HydrationFigures = ReturnType<typeof hydrationNumbersKJ>;
+const HYDRATION_AT_298K = new WeakMap<object, HydrationFigures>();
+function hydrationOf(
+  ion: SaltThermoRequest['cation'],
+  opts: { temperatureK?: number; perIonPublishedUncertaintyKJ: number },
+): HydrationFigures {
+  if (opts.temperatureK !== undefined) return hydrationNumbersKJ(ion, opts);
+  let h = HYDRATION_AT_298K.get(ion);
+  if (h === undefined) {
+    h = hydrationNumbersKJ(ion, opts);
+    HYDRATION_AT_298K.set(ion, h);
+  }
+  return h;
+}
+
+/**
  * ΔH_sol = ΔH_L + p·ΔH_hyd,+ + q·ΔH_hyd,− of M_pX_q (kJ/mol per formula unit) with its 1σ, as
  * `estimateSaltThermo({ ...req, method: 'auto' }).solutionEnthalpyKJ` gives them (same doubles, same
  * sources, same errors), without its notes.
@@ -143,8 +164,8 @@ export function solutionEnthalpyNumbersKJ(req: Omit<SaltThermoRequest, 'method'>
     req.temperatureK !== undefined
       ? { temperatureK: req.temperatureK, perIonPublishedUncertaintyKJ }
       : { perIonPublishedUncertaintyKJ };
-  const hc = hydrationNumbersKJ(req.cation, hydrationOpts);
-  const ha = hydrationNumbersKJ(req.anion, hydrationOpts);
+  const hc = hydrationOf(req.cation, hydrationOpts);
+  const ha = hydrationOf(req.anion, hydrationOpts);
   return {
     value: lat.value + p * hc.value + q * ha.value,
     uncertainty: Math.sqrt(
