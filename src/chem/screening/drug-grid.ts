@@ -19,12 +19,40 @@ export function profilePhs(from: number, to: number, step: number): number[] {
   return out;
 }
 
+/** One grid's pH list (frozen: shared by every screen on that grid) and its key. */
+interface ProfileGridEntry {
+  from: number;
+  to: number;
+  step: number;
+  phs: readonly number[];
+  key: string;
+}
+
+/**
+ * The pH lists of the last few grids: the list depends on the grid settings alone, and a batch
+ * screens every compound on the same grid, so it is built (with its toFixed per point) once rather
+ * than per compound. Bounded (a handful of grids; the oldest is dropped), compared by the three numbers
+ * (Object.is: -0 and NaN are grids of their own, never another grid's list).
+ */
+const PROFILE_GRIDS: ProfileGridEntry[] = [];
+const PROFILE_GRIDS_MAX = 8;
+
+function profileGrid(from: number, to: number, step: number): ProfileGridEntry {
+  for (const e of PROFILE_GRIDS) {
+    if (Object.is(e.from, from) && Object.is(e.to, to) && Object.is(e.step, step)) return e;
+  }
+  const phs = Object.freeze(profilePhs(from, to, step));
+  const e = { from, to, step, phs, key: `${from}:${to}:${step}` };
+  if (PROFILE_GRIDS.unshift(e) > PROFILE_GRIDS_MAX) PROFILE_GRIDS.pop();
+  return e;
+}
+
 /** The scan points of the pH_max search, 0 to 14 in steps of 0.25 (as numericalPhMax takes them). */
 export const PH_MAX_SCAN_STEP = 0.25;
 const SCAN_PHS: readonly number[] = (() => {
   const out = [0];
   for (let pH = PH_MAX_SCAN_STEP; pH <= 14 + 1e-9; pH += PH_MAX_SCAN_STEP) out.push(pH);
-  return out;
+  return Object.freeze(out);
 })();
 
 /** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
@@ -83,18 +111,12 @@ export function drugGrids(
   log10IntrinsicM: number,
   grid: { phFrom: number; phTo: number; phStep: number },
 ): DrugGrids {
-  const phs = profilePhs(grid.phFrom, grid.phTo, grid.phStep);
+  const g = profileGrid(grid.phFrom, grid.phTo, grid.phStep);
   return {
     drug,
     ionCharge,
     log10IntrinsicM,
-    profile: drugOnGrid(
-      drug,
-      ionCharge,
-      log10IntrinsicM,
-      phs,
-      `${grid.phFrom}:${grid.phTo}:${grid.phStep}`,
-    ),
+    profile: drugOnGrid(drug, ionCharge, log10IntrinsicM, g.phs, g.key),
     scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
   };
 }
