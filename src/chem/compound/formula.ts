@@ -88,54 +88,72 @@ function readChargeSuffix(text: string): { body: string; charge: number } {
   return { body: text, charge: 0 };
 }
 
+/**
+ * One hydrate part's atoms. Read by character codes (no slice and regular expression per token): every
+ * compound of a batch reads its formula here, and its drug ion again for the thermochemistry. The same
+ * tokens as the patterns `^\d+` (ASCII digits) and `^[A-Z][a-z]?`, counts added in the same order.
+ */
 function parseGroup(body: string, field: string): ElementCounts {
   const stack: ElementCounts[] = [{}];
   let i = 0;
   const readCount = (): number => {
-    const m = /^\d+/.exec(body.slice(i));
-    if (!m) return 1;
-    i += m[0].length;
-    const n = Number(m[0]);
+    let j = i;
+    while (j < body.length && isDigit(body.charCodeAt(j))) j++;
+    if (j === i) return 1;
+    const n = Number(body.slice(i, j));
+    i = j;
     if (n > 10000) throw new ChemInputError(field, `count ${n} is too large`, ACCEPTED);
     return n;
   };
   while (i < body.length) {
-    const c = body[i]!;
-    if (c === '(' || c === '[') {
+    const c = body.charCodeAt(i);
+    if (c === 40 || c === 91) {
+      // '(' or '['
       stack.push({});
       i++;
-    } else if (c === ')' || c === ']') {
-      if (stack.length < 2) throw new ChemInputError(field, `unmatched '${c}'`, ACCEPTED);
+    } else if (c === 41 || c === 93) {
+      // ')' or ']'
+      if (stack.length < 2) throw new ChemInputError(field, `unmatched '${body[i]!}'`, ACCEPTED);
       i++;
       const n = readCount();
       const inner = stack.pop()!;
       const outer = stack[stack.length - 1]!;
       for (const [el, k] of Object.entries(inner)) outer[el] = (outer[el] ?? 0) + k * n;
-    } else if (/[A-Z]/.test(c)) {
-      const m = /^[A-Z][a-z]?/.exec(body.slice(i))!;
-      let sym = m[0];
-      // Prefer a two-letter symbol only when it is a real element (e.g. "Co" vs "C"+"o" is invalid anyway).
-      if (sym.length === 2 && !ELEMENT_SYMBOLS.has(sym)) sym = sym[0]!;
-      if (!ELEMENT_SYMBOLS.has(sym)) {
-        throw new ChemInputError(field, `unknown element '${m[0]}'`, ACCEPTED);
-      }
-      if (ATOMIC_WEIGHTS_G_PER_MOL[sym] === undefined) {
-        throw new ChemInputError(
-          field,
-          `element ${sym} has no bundled standard atomic weight`,
-          `elements ${Object.keys(ATOMIC_WEIGHTS_G_PER_MOL).join(' ')}`,
-        );
-      }
+    } else if (c >= 65 && c <= 90) {
+      // an upper-case letter, with the lower-case letter after it when there is one
+      const next = i + 1 < body.length ? body.charCodeAt(i + 1) : 0;
+      const written = body.slice(i, next >= 97 && next <= 122 ? i + 2 : i + 1);
+      const sym = elementSymbolOf(written, field);
       i += sym.length;
       const n = readCount();
       const top = stack[stack.length - 1]!;
       top[sym] = (top[sym] ?? 0) + n;
     } else {
-      throw new ChemInputError(field, `unexpected '${c}' at position ${i + 1}`, ACCEPTED);
+      throw new ChemInputError(field, `unexpected '${body[i]!}' at position ${i + 1}`, ACCEPTED);
     }
   }
   if (stack.length !== 1) throw new ChemInputError(field, "unmatched '('", ACCEPTED);
   return stack[0]!;
+}
+
+const isDigit = (code: number) => code >= 48 && code <= 57;
+
+/** The element a written symbol names (one or two letters); refused when unknown or weightless. */
+function elementSymbolOf(written: string, field: string): string {
+  let sym = written;
+  // Prefer a two-letter symbol only when it is a real element (e.g. "Co" vs "C"+"o" is invalid anyway).
+  if (sym.length === 2 && !ELEMENT_SYMBOLS.has(sym)) sym = sym[0]!;
+  if (!ELEMENT_SYMBOLS.has(sym)) {
+    throw new ChemInputError(field, `unknown element '${written}'`, ACCEPTED);
+  }
+  if (ATOMIC_WEIGHTS_G_PER_MOL[sym] === undefined) {
+    throw new ChemInputError(
+      field,
+      `element ${sym} has no bundled standard atomic weight`,
+      `elements ${Object.keys(ATOMIC_WEIGHTS_G_PER_MOL).join(' ')}`,
+    );
+  }
+  return sym;
 }
 
 /** Hill order: C first, then H, then the rest alphabetically; with no carbon, all alphabetically. */
