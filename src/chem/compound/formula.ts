@@ -158,17 +158,25 @@ function elementSymbolOf(written: string, field: string): string {
 
 /** Hill order: C first, then H, then the rest alphabetically; with no carbon, all alphabetically. */
 export function hillFormula(elements: ElementCounts): string {
-  const syms = Object.keys(elements).filter((s) => (elements[s] ?? 0) > 0);
-  const hasC = syms.includes('C');
-  const ordered = hasC
-    ? [
-        'C',
-        ...(syms.includes('H') ? ['H'] : []),
-        ...syms.filter((s) => s !== 'C' && s !== 'H').sort(),
-      ]
-    : [...syms].sort();
-  return ordered.map((s) => (elements[s] === 1 ? s : `${s}${elements[s]}`)).join('');
+  // one pass over the symbols and one sort (every compound's formula and drug ion come here)
+  let hasC = false;
+  let hasH = false;
+  const rest: string[] = [];
+  for (const s of Object.keys(elements)) {
+    if (!((elements[s] ?? 0) > 0)) continue;
+    if (s === 'C') hasC = true;
+    else if (s === 'H') hasH = true;
+    else rest.push(s);
+  }
+  if (!hasC && hasH) rest.push('H');
+  rest.sort();
+  let out = hasC ? hillPart(elements, 'C') + (hasH ? hillPart(elements, 'H') : '') : '';
+  for (const s of rest) out += hillPart(elements, s);
+  return out;
 }
+
+const hillPart = (elements: ElementCounts, s: string) =>
+  elements[s] === 1 ? s : `${s}${elements[s]}`;
 
 /**
  * Molar mass from atom counts, g/mol, with IUPAC 2021 abridged standard atomic weights
