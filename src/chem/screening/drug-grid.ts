@@ -26,6 +26,8 @@ interface ProfileGridEntry {
   step: number;
   phs: readonly number[];
   key: string;
+  /** For each pH_max scan point, the index of the same pH (Object.is) on this grid, else −1. */
+  scanAt: Int32Array;
 }
 
 /**
@@ -42,7 +44,14 @@ function profileGrid(from: number, to: number, step: number): ProfileGridEntry {
     if (Object.is(e.from, from) && Object.is(e.to, to) && Object.is(e.step, step)) return e;
   }
   const phs = Object.freeze(profilePhs(from, to, step));
-  const e = { from, to, step, phs, key: `${from}:${to}:${step}` };
+  const e = {
+    from,
+    to,
+    step,
+    phs,
+    key: `${from}:${to}:${step}`,
+    scanAt: sameFirstPh(SCAN_PHS, phs),
+  };
   if (PROFILE_GRIDS.unshift(e) > PROFILE_GRIDS_MAX) PROFILE_GRIDS.pop();
   return e;
 }
@@ -54,6 +63,16 @@ const SCAN_PHS: readonly number[] = (() => {
   for (let pH = PH_MAX_SCAN_STEP; pH <= 14 + 1e-9; pH += PH_MAX_SCAN_STEP) out.push(pH);
   return Object.freeze(out);
 })();
+
+/** For each pH of `a`, the index of the first equal pH (Object.is) in `b`, else −1. */
+function sameFirstPh(a: readonly number[], b: readonly number[]): Int32Array {
+  const first = new Map<number, number>();
+  for (let j = b.length - 1; j >= 0; j--) first.set(b[j]!, j);
+  return Int32Array.from(a, (pH) => {
+    const j = first.get(pH);
+    return j !== undefined && Object.is(b[j], pH) ? j : -1;
+  });
+}
 
 /** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
 export interface DrugOnGrid {
@@ -73,6 +92,7 @@ export function drugOnGrid(
   log10IntrinsicM: number,
   phs: readonly number[],
   gridKey = phs.join(','),
+  known?: { grid: DrugOnGrid; at: Int32Array },
 ): DrugOnGrid {
   const laD = new Float64Array(phs.length);
   const log10FreeM = new Float64Array(phs.length);
@@ -87,6 +107,15 @@ export function drugOnGrid(
   const iSalt = drug.mostProtonatedCharge - ionCharge;
   const iFree = drug.mostProtonatedCharge;
   for (let k = 0; k < phs.length; k++) {
+    // a pH the same drug was already evaluated at (`known`, for this drug, charge and S₀): the
+    // values computed there, which this point's arithmetic would repeat bit for bit
+    const j = known ? known.at[k]! : -1;
+    if (j >= 0) {
+      laD[k] = known!.grid.laD[j]!;
+      log10FreeM[k] = known!.grid.log10FreeM[j]!;
+      freeM[k] = known!.grid.freeM[j]!;
+      continue;
+    }
     const pH = phs[k]!;
     const logSum = log10SpeciesSum(drug, pH);
     laD[k] = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
@@ -112,12 +141,16 @@ export function drugGrids(
   grid: { phFrom: number; phTo: number; phStep: number },
 ): DrugGrids {
   const g = profileGrid(grid.phFrom, grid.phTo, grid.phStep);
+  const profile = drugOnGrid(drug, ionCharge, log10IntrinsicM, g.phs, g.key);
+  // the scan points the profile grid shares (pH 1 to 8 in steps of 0.25 on the default grid) are
+  // taken from it
+  const known = { grid: profile, at: g.scanAt };
   return {
     drug,
     ionCharge,
     log10IntrinsicM,
-    profile: drugOnGrid(drug, ionCharge, log10IntrinsicM, g.phs, g.key),
-    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
+    profile,
+    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan', known),
   };
 }
 
