@@ -94,9 +94,12 @@ export function drugOnGrid(
   gridKey = phs.join(','),
   known?: { grid: DrugOnGrid; at: Int32Array },
 ): DrugOnGrid {
-  const laD = new Float64Array(phs.length);
-  const log10FreeM = new Float64Array(phs.length);
-  const freeM = new Float64Array(phs.length);
+  // the three arrays as views of one buffer: one allocation per list instead of three
+  const n = phs.length;
+  const buffer = new Float64Array(3 * n);
+  const laD = buffer.subarray(0, n);
+  const log10FreeM = buffer.subarray(n, 2 * n);
+  const freeM = buffer.subarray(2 * n, 3 * n);
   // the charges checked once (log10ChargeFraction throws as it would per point), then each point's
   // two fractions from one sum of species terms: log10ChargeFraction's and
   // log10FreeFormSolubilityM's values, the same bits
