@@ -28,21 +28,28 @@ const ACCEPTED =
  */
 export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   if (typeof text !== 'string') throw new ChemInputError(field, 'a formula is text', ACCEPTED);
-  const suffix = readChargeSuffix(text.trim());
-  let t = suffix.body.replace(/\s+/g, '');
-  const charge = suffix.charge;
-  if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
-  if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
-  t = t.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT.indexOf(c)));
-  if (Math.abs(charge) > 6)
-    throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
+  // a formula of letters, digits and brackets only (C14H22N2O): no charge, space, superscript or
+  // hydrate part for the steps below to find, so they are skipped (the same result)
+  const plain = isPlainFormula(text);
+  let t = text;
+  let charge = 0;
+  if (!plain) {
+    const suffix = readChargeSuffix(text.trim());
+    t = suffix.body.replace(/\s+/g, '');
+    charge = suffix.charge;
+    if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
+    if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
+    t = t.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT.indexOf(c)));
+    if (Math.abs(charge) > 6)
+      throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
+  }
 
   const elements: ElementCounts = {};
-  const parts = t.split(/[·.*•]/);
+  const parts = plain ? [t] : t.split(/[·.*•]/);
   for (const part of parts) {
     if (part === '')
       throw new ChemInputError(field, 'an empty part around a hydrate dot', ACCEPTED);
-    const lead = /^(\d+)(.*)$/.exec(part);
+    const lead = plain ? null : /^(\d+)(.*)$/.exec(part);
     const multiplier = lead ? Number(lead[1]) : 1;
     const body = lead ? lead[2]! : part;
     const counts = parseGroup(body, field);
@@ -55,6 +62,23 @@ export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   if (Object.keys(elements).length === 0)
     throw new ChemInputError(field, 'no atoms found', ACCEPTED);
   return { elements, charge, hill: hillFormula(elements) };
+}
+
+/**
+ * 1 to 200 characters, each an ASCII letter, digit or bracket, the first not a digit: what
+ * readChargeSuffix leaves whole with charge 0, with no space, superscript, hydrate dot or leading
+ * multiplier in it.
+ */
+function isPlainFormula(text: string): boolean {
+  const n = text.length;
+  if (n < 1 || n > 200) return false;
+  for (let i = 0; i < n; i++) {
+    const c = text.charCodeAt(i);
+    const letter = (c >= 65 && c <= 90) || (c >= 97 && c <= 122);
+    const bracket = c === 40 || c === 41 || c === 91 || c === 93;
+    if (!(letter || bracket || (i > 0 && isDigit(c)))) return false;
+  }
+  return true;
 }
 
 /** Minus signs people type for a charge: hyphen-minus, U+2212 minus, en dash, superscript minus. */
