@@ -48,6 +48,7 @@ export function drugIon(
   }
   const notes: string[] = [];
   let free: ElementCounts;
+  let freeHill: string | null = null;
   let formulaFrom: DrugIon['formulaFrom'];
   if (structure) {
     free = structure.elements;
@@ -72,7 +73,9 @@ export function drugIon(
         'a molecular formula such as C18H20ClN3O',
       );
     }
-    free = parseFormula(compound.formula, 'formula').elements;
+    const parsed = parseFormula(compound.formula, 'formula');
+    free = parsed.elements;
+    freeHill = parsed.hill; // hillFormula(free), made by the parse
     formulaFrom = 'formula';
   }
   const charge = compound.kind === 'base' ? n : -n;
@@ -82,7 +85,7 @@ export function drugIon(
     elements: ion,
     charge,
     molarMassGPerMol: molarMassGPerMol(ion),
-    freeFormFormula: hillFormula(free),
+    freeFormFormula: freeHill ?? hillFormula(free),
     freeFormMolarMassGPerMol: molarMassGPerMol(free),
     rings: structure ? { ...structure.rings } : { aromatic: 0, nonAromatic: 0 },
     ringsKnown: Boolean(structure),

@@ -28,21 +28,28 @@ const ACCEPTED =
  */
 export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   if (typeof text !== 'string') throw new ChemInputError(field, 'a formula is text', ACCEPTED);
-  const suffix = readChargeSuffix(text.trim());
-  let t = suffix.body.replace(/\s+/g, '');
-  const charge = suffix.charge;
-  if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
-  if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
-  t = t.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT.indexOf(c)));
-  if (Math.abs(charge) > 6)
-    throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
+  // a formula of letters, digits and brackets only (C14H22N2O): no charge, space, superscript or
+  // hydrate part for the steps below to find, so they are skipped (the same result)
+  const plain = isPlainFormula(text);
+  let t = text;
+  let charge = 0;
+  if (!plain) {
+    const suffix = readChargeSuffix(text.trim());
+    t = suffix.body.replace(/\s+/g, '');
+    charge = suffix.charge;
+    if (t === '') throw new ChemInputError(field, 'the formula is empty', ACCEPTED);
+    if (t.length > 200) throw new ChemInputError(field, 'the formula is too long', ACCEPTED);
+    t = t.replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹]/g, (c) => String(SUPERSCRIPT.indexOf(c)));
+    if (Math.abs(charge) > 6)
+      throw new ChemInputError(field, `charge ${charge} is not plausible`, ACCEPTED);
+  }
 
   const elements: ElementCounts = {};
-  const parts = t.split(/[·.*•]/);
+  const parts = plain ? [t] : t.split(/[·.*•]/);
   for (const part of parts) {
     if (part === '')
       throw new ChemInputError(field, 'an empty part around a hydrate dot', ACCEPTED);
-    const lead = /^(\d+)(.*)$/.exec(part);
+    const lead = plain ? null : /^(\d+)(.*)$/.exec(part);
     const multiplier = lead ? Number(lead[1]) : 1;
     const body = lead ? lead[2]! : part;
     const counts = parseGroup(body, field);
@@ -55,6 +62,23 @@ export function parseFormula(text: string, field = 'formula'): ParsedFormula {
   if (Object.keys(elements).length === 0)
     throw new ChemInputError(field, 'no atoms found', ACCEPTED);
   return { elements, charge, hill: hillFormula(elements) };
+}
+
+/**
+ * 1 to 200 characters, each an ASCII letter, digit or bracket, the first not a digit: what
+ * readChargeSuffix leaves whole with charge 0, with no space, superscript, hydrate dot or leading
+ * multiplier in it.
+ */
+function isPlainFormula(text: string): boolean {
+  const n = text.length;
+  if (n < 1 || n > 200) return false;
+  for (let i = 0; i < n; i++) {
+    const c = text.charCodeAt(i);
+    const letter = (c >= 65 && c <= 90) || (c >= 97 && c <= 122);
+    const bracket = c === 40 || c === 41 || c === 91 || c === 93;
+    if (!(letter || bracket || (i > 0 && isDigit(c)))) return false;
+  }
+  return true;
 }
 
 /** Minus signs people type for a charge: hyphen-minus, U+2212 minus, en dash, superscript minus. */
@@ -88,69 +112,95 @@ function readChargeSuffix(text: string): { body: string; charge: number } {
   return { body: text, charge: 0 };
 }
 
+/**
+ * One hydrate part's atoms. Read by character codes (no slice and regular expression per token): every
+ * compound of a batch reads its formula here, and its drug ion again for the thermochemistry. The same
+ * tokens as the patterns `^\d+` (ASCII digits) and `^[A-Z][a-z]?`, counts added in the same order.
+ */
 function parseGroup(body: string, field: string): ElementCounts {
   const stack: ElementCounts[] = [{}];
   let i = 0;
   const readCount = (): number => {
-    const m = /^\d+/.exec(body.slice(i));
-    if (!m) return 1;
-    i += m[0].length;
-    const n = Number(m[0]);
+    let j = i;
+    while (j < body.length && isDigit(body.charCodeAt(j))) j++;
+    if (j === i) return 1;
+    const n = Number(body.slice(i, j));
+    i = j;
     if (n > 10000) throw new ChemInputError(field, `count ${n} is too large`, ACCEPTED);
     return n;
   };
   while (i < body.length) {
-    const c = body[i]!;
-    if (c === '(' || c === '[') {
+    const c = body.charCodeAt(i);
+    if (c === 40 || c === 91) {
+      // '(' or '['
       stack.push({});
       i++;
-    } else if (c === ')' || c === ']') {
-      if (stack.length < 2) throw new ChemInputError(field, `unmatched '${c}'`, ACCEPTED);
+    } else if (c === 41 || c === 93) {
+      // ')' or ']'
+      if (stack.length < 2) throw new ChemInputError(field, `unmatched '${body[i]!}'`, ACCEPTED);
       i++;
       const n = readCount();
       const inner = stack.pop()!;
       const outer = stack[stack.length - 1]!;
       for (const [el, k] of Object.entries(inner)) outer[el] = (outer[el] ?? 0) + k * n;
-    } else if (/[A-Z]/.test(c)) {
-      const m = /^[A-Z][a-z]?/.exec(body.slice(i))!;
-      let sym = m[0];
-      // Prefer a two-letter symbol only when it is a real element (e.g. "Co" vs "C"+"o" is invalid anyway).
-      if (sym.length === 2 && !ELEMENT_SYMBOLS.has(sym)) sym = sym[0]!;
-      if (!ELEMENT_SYMBOLS.has(sym)) {
-        throw new ChemInputError(field, `unknown element '${m[0]}'`, ACCEPTED);
-      }
-      if (ATOMIC_WEIGHTS_G_PER_MOL[sym] === undefined) {
-        throw new ChemInputError(
-          field,
-          `element ${sym} has no bundled standard atomic weight`,
-          `elements ${Object.keys(ATOMIC_WEIGHTS_G_PER_MOL).join(' ')}`,
-        );
-      }
+    } else if (c >= 65 && c <= 90) {
+      // an upper-case letter, with the lower-case letter after it when there is one
+      const next = i + 1 < body.length ? body.charCodeAt(i + 1) : 0;
+      const written = body.slice(i, next >= 97 && next <= 122 ? i + 2 : i + 1);
+      const sym = elementSymbolOf(written, field);
       i += sym.length;
       const n = readCount();
       const top = stack[stack.length - 1]!;
       top[sym] = (top[sym] ?? 0) + n;
     } else {
-      throw new ChemInputError(field, `unexpected '${c}' at position ${i + 1}`, ACCEPTED);
+      throw new ChemInputError(field, `unexpected '${body[i]!}' at position ${i + 1}`, ACCEPTED);
     }
   }
   if (stack.length !== 1) throw new ChemInputError(field, "unmatched '('", ACCEPTED);
   return stack[0]!;
 }
 
+const isDigit = (code: number) => code >= 48 && code <= 57;
+
+/** The element a written symbol names (one or two letters); refused when unknown or weightless. */
+function elementSymbolOf(written: string, field: string): string {
+  let sym = written;
+  // Prefer a two-letter symbol only when it is a real element (e.g. "Co" vs "C"+"o" is invalid anyway).
+  if (sym.length === 2 && !ELEMENT_SYMBOLS.has(sym)) sym = sym[0]!;
+  if (!ELEMENT_SYMBOLS.has(sym)) {
+    throw new ChemInputError(field, `unknown element '${written}'`, ACCEPTED);
+  }
+  if (ATOMIC_WEIGHTS_G_PER_MOL[sym] === undefined) {
+    throw new ChemInputError(
+      field,
+      `element ${sym} has no bundled standard atomic weight`,
+      `elements ${Object.keys(ATOMIC_WEIGHTS_G_PER_MOL).join(' ')}`,
+    );
+  }
+  return sym;
+}
+
 /** Hill order: C first, then H, then the rest alphabetically; with no carbon, all alphabetically. */
 export function hillFormula(elements: ElementCounts): string {
-  const syms = Object.keys(elements).filter((s) => (elements[s] ?? 0) > 0);
-  const hasC = syms.includes('C');
-  const ordered = hasC
-    ? [
-        'C',
-        ...(syms.includes('H') ? ['H'] : []),
-        ...syms.filter((s) => s !== 'C' && s !== 'H').sort(),
-      ]
-    : [...syms].sort();
-  return ordered.map((s) => (elements[s] === 1 ? s : `${s}${elements[s]}`)).join('');
+  // one pass over the symbols and one sort (every compound's formula and drug ion come here)
+  let hasC = false;
+  let hasH = false;
+  const rest: string[] = [];
+  for (const s of Object.keys(elements)) {
+    if (!((elements[s] ?? 0) > 0)) continue;
+    if (s === 'C') hasC = true;
+    else if (s === 'H') hasH = true;
+    else rest.push(s);
+  }
+  if (!hasC && hasH) rest.push('H');
+  rest.sort();
+  let out = hasC ? hillPart(elements, 'C') + (hasH ? hillPart(elements, 'H') : '') : '';
+  for (const s of rest) out += hillPart(elements, s);
+  return out;
 }
+
+const hillPart = (elements: ElementCounts, s: string) =>
+  elements[s] === 1 ? s : `${s}${elements[s]}`;
 
 /**
  * Molar mass from atom counts, g/mol, with IUPAC 2021 abridged standard atomic weights

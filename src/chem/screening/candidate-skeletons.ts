@@ -26,8 +26,17 @@ export interface CandidateSkeleton {
 export type LibraryStoichiometry = CounterIon['stoichiometries'][number];
 
 const skeletonMemo = new WeakMap<CounterIon, Map<number, readonly CandidateSkeleton[]>>();
-/** The protolyte of a skeleton's (frozen) stoichiometry object, with the ion it belongs to. */
-const protolyteMemo = new WeakMap<object, { ion: CounterIon; skeleton: CandidateSkeleton }>();
+/**
+ * A bundled skeleton's (frozen) stoichiometry object carries, under this symbol (not enumerable: no
+ * copy, key list or JSON shows it), the ion and skeleton it belongs to — read for every candidate of
+ * every screen, a property is cheaper to find than a WeakMap entry.
+ */
+const SKELETON_OF = Symbol('candidate skeleton');
+interface SkeletonTag {
+  ion: CounterIon;
+  skeleton: CandidateSkeleton;
+}
+type Tagged = { [SKELETON_OF]?: SkeletonTag };
 
 /**
  * An ion's stoichiometries re-balanced for the drug ion's charge (at most 4 of either ion), each
@@ -38,14 +47,14 @@ export function candidateSkeletons(
   drugCharge: number,
   firstStoichiometryOnly: boolean,
 ): readonly CandidateSkeleton[] {
-  if (getCounterIon(ion.id) !== ion) return buildSkeletons(ion, drugCharge, firstStoichiometryOnly);
+  if (getCounterIon(ion.id) !== ion)
+    return buildSkeletons(ion, drugCharge, firstStoichiometryOnly, false);
   let byCharge = skeletonMemo.get(ion);
   if (!byCharge) skeletonMemo.set(ion, (byCharge = new Map()));
   const key = drugCharge * 2 + (firstStoichiometryOnly ? 1 : 0);
   let out = byCharge.get(key);
   if (!out) {
-    out = Object.freeze(buildSkeletons(ion, drugCharge, firstStoichiometryOnly));
-    for (const s of out) protolyteMemo.set(s.stoich, { ion, skeleton: s });
+    out = Object.freeze(buildSkeletons(ion, drugCharge, firstStoichiometryOnly, true));
     byCharge.set(key, out);
   }
   return out;
@@ -55,6 +64,7 @@ function buildSkeletons(
   ion: CounterIon,
   drugCharge: number,
   firstStoichiometryOnly: boolean,
+  tagged: boolean,
 ): CandidateSkeleton[] {
   const seen = new Set<string>();
   const list = firstStoichiometryOnly ? ion.stoichiometries.slice(0, 1) : ion.stoichiometries;
@@ -70,16 +80,22 @@ function buildSkeletons(
     seen.add(key);
     const own = m === st.drugPerSalt && n === st.counterIonPerSalt ? st.label : undefined;
     const label = saltLabel(ion.name, { label: own, drugPerSalt: m, counterIonPerSalt: n });
-    const stoich = Object.freeze({
+    const stoich: ScreeningStoichiometry = {
       label,
       drugPerSalt: m,
       counterIonPerSalt: n,
       ionCharge: st.ionCharge,
       ionMolarMassGPerMol: st.ionMolarMassGPerMol,
       pKaIndex: st.pKaIndex,
-    });
+    };
     const id = `${ion.id}:${m}:${n}${ion.stoichiometries.length > 1 && seen.size > 1 ? `:${st.ionCharge}` : ''}`;
-    out.push({ id, label, st, stoich, protolyte: protolyteOf(ion, stoich) });
+    const skeleton = { id, label, st, stoich, protolyte: protolyteOf(ion, stoich) };
+    if (tagged) {
+      const tag: SkeletonTag = { ion, skeleton };
+      Object.defineProperty(stoich, SKELETON_OF, { value: tag, enumerable: false });
+    }
+    Object.freeze(stoich);
+    out.push(skeleton);
   }
   return out;
 }
@@ -106,7 +122,7 @@ export function candidateProtolyte(
   ion: CounterIon | Parameters<typeof counterIonProtolyte>[0],
   stoich: ScreeningStoichiometry,
 ): Protolyte {
-  const hit = protolyteMemo.get(stoich);
+  const hit = (stoich as Tagged)[SKELETON_OF];
   if (!hit || hit.ion !== ion) return counterIonProtolyte(ion, stoich);
   const p = hit.skeleton.protolyte;
   if (p.ok) return p.value;

@@ -19,13 +19,60 @@ export function profilePhs(from: number, to: number, step: number): number[] {
   return out;
 }
 
+/** One grid's pH list (frozen: shared by every screen on that grid) and its key. */
+interface ProfileGridEntry {
+  from: number;
+  to: number;
+  step: number;
+  phs: readonly number[];
+  key: string;
+  /** For each pH_max scan point, the index of the same pH (Object.is) on this grid, else −1. */
+  scanAt: Int32Array;
+}
+
+/**
+ * The pH lists of the last few grids: the list depends on the grid settings alone, and a batch
+ * screens every compound on the same grid, so it is built (with its toFixed per point) once rather
+ * than per compound. Bounded (a handful of grids; the oldest is dropped), compared by the three numbers
+ * (Object.is: -0 and NaN are grids of their own, never another grid's list).
+ */
+const PROFILE_GRIDS: ProfileGridEntry[] = [];
+const PROFILE_GRIDS_MAX = 8;
+
+function profileGrid(from: number, to: number, step: number): ProfileGridEntry {
+  for (const e of PROFILE_GRIDS) {
+    if (Object.is(e.from, from) && Object.is(e.to, to) && Object.is(e.step, step)) return e;
+  }
+  const phs = Object.freeze(profilePhs(from, to, step));
+  const e = {
+    from,
+    to,
+    step,
+    phs,
+    key: `${from}:${to}:${step}`,
+    scanAt: sameFirstPh(SCAN_PHS, phs),
+  };
+  if (PROFILE_GRIDS.unshift(e) > PROFILE_GRIDS_MAX) PROFILE_GRIDS.pop();
+  return e;
+}
+
 /** The scan points of the pH_max search, 0 to 14 in steps of 0.25 (as numericalPhMax takes them). */
 export const PH_MAX_SCAN_STEP = 0.25;
 const SCAN_PHS: readonly number[] = (() => {
   const out = [0];
   for (let pH = PH_MAX_SCAN_STEP; pH <= 14 + 1e-9; pH += PH_MAX_SCAN_STEP) out.push(pH);
-  return out;
+  return Object.freeze(out);
 })();
+
+/** For each pH of `a`, the index of the first equal pH (Object.is) in `b`, else −1. */
+function sameFirstPh(a: readonly number[], b: readonly number[]): Int32Array {
+  const first = new Map<number, number>();
+  for (let j = b.length - 1; j >= 0; j--) first.set(b[j]!, j);
+  return Int32Array.from(a, (pH) => {
+    const j = first.get(pH);
+    return j !== undefined && Object.is(b[j], pH) ? j : -1;
+  });
+}
 
 /** The drug's side of the model on one pH list: the salt-state fraction and the free-form solubility. */
 export interface DrugOnGrid {
@@ -45,10 +92,14 @@ export function drugOnGrid(
   log10IntrinsicM: number,
   phs: readonly number[],
   gridKey = phs.join(','),
+  known?: { grid: DrugOnGrid; at: Int32Array },
 ): DrugOnGrid {
-  const laD = new Float64Array(phs.length);
-  const log10FreeM = new Float64Array(phs.length);
-  const freeM = new Float64Array(phs.length);
+  // the three arrays as views of one buffer: one allocation per list instead of three
+  const n = phs.length;
+  const buffer = new Float64Array(3 * n);
+  const laD = buffer.subarray(0, n);
+  const log10FreeM = buffer.subarray(n, 2 * n);
+  const freeM = buffer.subarray(2 * n, 3 * n);
   // the charges checked once (log10ChargeFraction throws as it would per point), then each point's
   // two fractions from one sum of species terms: log10ChargeFraction's and
   // log10FreeFormSolubilityM's values, the same bits
@@ -59,6 +110,15 @@ export function drugOnGrid(
   const iSalt = drug.mostProtonatedCharge - ionCharge;
   const iFree = drug.mostProtonatedCharge;
   for (let k = 0; k < phs.length; k++) {
+    // a pH the same drug was already evaluated at (`known`, for this drug, charge and S₀): the
+    // values computed there, which this point's arithmetic would repeat bit for bit
+    const j = known ? known.at[k]! : -1;
+    if (j >= 0) {
+      laD[k] = known!.grid.laD[j]!;
+      log10FreeM[k] = known!.grid.log10FreeM[j]!;
+      freeM[k] = known!.grid.freeM[j]!;
+      continue;
+    }
     const pH = phs[k]!;
     const logSum = log10SpeciesSum(drug, pH);
     laD[k] = log10UnnormalisedFraction(drug, pH, iSalt) - logSum;
@@ -83,19 +143,17 @@ export function drugGrids(
   log10IntrinsicM: number,
   grid: { phFrom: number; phTo: number; phStep: number },
 ): DrugGrids {
-  const phs = profilePhs(grid.phFrom, grid.phTo, grid.phStep);
+  const g = profileGrid(grid.phFrom, grid.phTo, grid.phStep);
+  const profile = drugOnGrid(drug, ionCharge, log10IntrinsicM, g.phs, g.key);
+  // the scan points the profile grid shares (pH 1 to 8 in steps of 0.25 on the default grid) are
+  // taken from it
+  const known = { grid: profile, at: g.scanAt };
   return {
     drug,
     ionCharge,
     log10IntrinsicM,
-    profile: drugOnGrid(
-      drug,
-      ionCharge,
-      log10IntrinsicM,
-      phs,
-      `${grid.phFrom}:${grid.phTo}:${grid.phStep}`,
-    ),
-    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan'),
+    profile,
+    scan: drugOnGrid(drug, ionCharge, log10IntrinsicM, SCAN_PHS, 'scan', known),
   };
 }
 

@@ -20,13 +20,9 @@ export function saltMolarMassGPerMol(i: SaltMassInput): number {
   requireFiniteInRange('freeFormMolarMass', i.freeFormMolarMassGPerMol, 1, 1e5, 'g/mol');
   requireFiniteInRange('drugIonMolarMass', i.drugIonMolarMassGPerMol, 1, 1e5, 'g/mol');
   requireFiniteInRange('counterIonMolarMass', i.counterIonMolarMassGPerMol, 1, 1e5, 'g/mol');
-  for (const [f, v] of [
-    ['drugPerSalt', i.drugPerSalt],
-    ['counterIonPerSalt', i.counterIonPerSalt],
-  ] as const) {
-    if (!Number.isInteger(v) || v < 1 || v > 4)
-      throw new ChemInputError(f, `${v} is not allowed`, 'an integer from 1 to 4');
-  }
+  // in this order (every candidate of every screen comes here: no pair arrays built per call)
+  requireCount('drugPerSalt', i.drugPerSalt);
+  requireCount('counterIonPerSalt', i.counterIonPerSalt);
   const w = requireFiniteInRange(
     'hydrateWater',
     i.hydrateWater ?? 0,
@@ -39,6 +35,12 @@ export function saltMolarMassGPerMol(i: SaltMassInput): number {
     i.counterIonPerSalt * i.counterIonMolarMassGPerMol +
     w * WATER_MOLAR_MASS_G_PER_MOL
   );
+}
+
+/** A count of ions per formula unit: an integer from 1 to 4. */
+function requireCount(field: string, v: number): void {
+  if (!Number.isInteger(v) || v < 1 || v > 4)
+    throw new ChemInputError(field, `${v} is not allowed`, 'an integer from 1 to 4');
 }
 
 /**

@@ -1,16 +1,7 @@
-import {
-  checkProfileInput,
-  PROFILE_ASSUMPTIONS,
-  solubilityAtPh,
-  type PhProfile,
-} from '../ph-profile';
+import { checkProfileInput, PROFILE_ASSUMPTIONS, type PhProfile } from '../ph-profile';
+import { log10FreeFormSolubilityM, requirePh } from '../salt-equilibrium';
 import { doseNumber } from '../dose-number';
-import {
-  hydrochlorideBelow,
-  mediumActivity,
-  type HydrochlorideReference,
-  type ScreenMedium,
-} from './media';
+import { hydrochlorideBelow, type HydrochlorideReference, type ScreenMedium } from './media';
 import { freeFormOnGrid } from '../ph-grid-solubility';
 import { screenDoseNumbers, solubilityClassOf } from './dose-numbers';
 import { freeFormMgPerMl, type ScreenContext } from './screen-context';
@@ -64,10 +55,14 @@ export function freeFormGastric(
   hcl: HydrochlorideReference | null,
 ): MediumResult | null {
   if (!gastric) return null;
-  const activity = mediumActivity(ctx, gastric);
-  const own = solubilityAtPh(ctx.drug, ctx.log10IntrinsicM.value, null, gastric.pH, { activity });
-  const toHcl = hcl ? hydrochlorideBelow(ctx, hcl, gastric, own.solubilityM) : null;
-  const solubilityM = toHcl?.solubilityM ?? own.solubilityM;
+  // solubilityAtPh(ctx.drug, S₀, null, pH) without what it repeats: the drug's checks passed when the
+  // context made ctx.drugProtolyte from the same ctx.drug, and with no salt the activity model plays no
+  // part (pointAt: 10 to the free form's log₁₀ solubility)
+  requirePh(gastric.pH);
+  const ownM =
+    10 ** log10FreeFormSolubilityM(ctx.drugProtolyte, ctx.log10IntrinsicM.value, gastric.pH);
+  const toHcl = hcl ? hydrochlorideBelow(ctx, hcl, gastric, ownM) : null;
+  const solubilityM = toHcl?.solubilityM ?? ownM;
   const convertsTo = toHcl?.convertsTo ?? null;
   const mg = freeFormMgPerMl(ctx, solubilityM);
   return {

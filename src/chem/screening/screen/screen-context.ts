@@ -49,7 +49,7 @@ export interface ScreenContext {
   /** Whether rows and the free form carry their profile (ScreenCompoundInput.profiles). */
   profiles: 'full' | 'none';
   /** The ICH M9 pH series on the grid, with grid indices (dose-numbers.ts). */
-  ichM9Plan: IchM9PlanPoint[];
+  ichM9Plan: readonly IchM9PlanPoint[];
 }
 
 /**
@@ -95,6 +95,22 @@ export function intrinsicSolubility(
     'no intrinsic solubility and no melting point with log P',
     'S₀ in mg/mL, or melting point (°C) and log P for the General Solubility Equation',
   );
+}
+
+/**
+ * The ICH M9 series of a grid's pH list, frozen, once per list: drugGrids hands every screen on the
+ * same grid settings the same frozen list, so a batch builds the series once, not per compound (a
+ * WeakMap on the list: nothing kept once no screen holds it).
+ */
+const PLAN_BY_PHS = new WeakMap<readonly number[], readonly IchM9PlanPoint[]>();
+
+function planOf(phs: readonly number[]): readonly IchM9PlanPoint[] {
+  let plan = PLAN_BY_PHS.get(phs);
+  if (plan === undefined) {
+    plan = Object.freeze(ichM9Plan(phs).map((p) => Object.freeze(p)));
+    PLAN_BY_PHS.set(phs, plan);
+  }
+  return plan;
 }
 
 /** Check the compound-level inputs and derive what every step shares. Throws ChemInputError. */
@@ -153,7 +169,7 @@ export function screenContext(input: ScreenCompoundInput): ScreenContext {
     grid,
     grids,
     profiles: input.profiles ?? 'full',
-    ichM9Plan: ichM9Plan(grids.profile.phs),
+    ichM9Plan: planOf(grids.profile.phs),
   };
 }
 

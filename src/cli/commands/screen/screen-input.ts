@@ -202,8 +202,17 @@ function checkedCompound(spec: CompoundSpec, ionCharge: number, formula: string,
     logP: spec.logP,
     doseMg: spec.doseMg,
   };
+  // the record as the schema reads it, written out (no spread copy per compound)
   const checked = compoundSchema.safeParse({
-    ...compound,
+    name: compound.name,
+    kind: compound.kind,
+    pKas: compound.pKas,
+    ionCharge,
+    intrinsicSolubilityMgPerMl: compound.intrinsicSolubilityMgPerMl,
+    intrinsicSolubilityOrigin: compound.intrinsicSolubilityOrigin,
+    meltingPointC: compound.meltingPointC,
+    logP: compound.logP,
+    doseMg: compound.doseMg,
     smiles: spec.smiles,
     formula,
     logPOrigin: null,
