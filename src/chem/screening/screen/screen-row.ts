@@ -180,16 +180,19 @@ function profilePoints(ctx: ScreenContext, grid: GridSolubility) {
 }
 
 /** The row of a candidate that could not be screened: its error in words, every number empty. */
+/** The criterion inputs of a candidate that failed: nothing known (the ranking scores it last). */
+export const NO_CRITERIA: Readonly<CriterionInputs> = Object.freeze({
+  saltProbability: null,
+  log10WorstDoseNumber: null,
+  log10GastricDoseNumber: null,
+  phMaxMarginPh: null,
+  activeFraction: 0,
+  acceptabilityClass: null,
+  hygroscopicity: null,
+});
+
 export function errorRow(cand: ScreeningCandidate, label: string, error: string): ScreenRow {
-  const criteria: CriterionInputs = {
-    saltProbability: null,
-    log10WorstDoseNumber: null,
-    log10GastricDoseNumber: null,
-    phMaxMarginPh: null,
-    activeFraction: 0,
-    acceptabilityClass: null,
-    hygroscopicity: null,
-  };
+  const criteria: CriterionInputs = { ...NO_CRITERIA };
   return {
     id: cand.id,
     label,

@@ -8,6 +8,7 @@ import { isPrepared, prepareCandidate } from './prepare-candidate';
 import { refinedRowNumbers, rowNumbers, type RowNumbers } from './row-numbers';
 import { freeFormGastric } from './free-form';
 import { screenCompound, screenRowOf, screenSetup, type ScreenSetup } from './screen-compound';
+import { NO_CRITERIA } from './screen-row';
 import type { ScreenCompoundInput, ScreeningCandidate, ScreenRow } from './screen.types';
 
 /**
@@ -42,16 +43,6 @@ export interface ScreenTopResult {
   /** What the rank-robustness draw and the shown precision share (as ScreenResult carries it). */
   robustnessShared: RobustnessShared;
 }
-
-const NO_CRITERIA: RankableRow['criteria'] = {
-  saltProbability: null,
-  log10WorstDoseNumber: null,
-  log10GastricDoseNumber: null,
-  phMaxMarginPh: null,
-  activeFraction: 0,
-  acceptabilityClass: null,
-  hygroscopicity: null,
-};
 
 /** Whether a candidate's ΔH_sol can move a ranked number (see screenCompoundTop). */
 export function solutionEnthalpyRanks(candidates: readonly ScreeningCandidate[]): boolean {
