@@ -51,7 +51,10 @@ export const MeasureNextPanel = memo(function MeasureNextPanelView({
         <p role="alert">The list could not be computed: {state.error}</p>
       ) : null}
       {r ? (
-        <div className={state.status === 'running' ? 'stale' : undefined}>
+        <div
+          className={state.status === 'running' ? 'stale' : undefined}
+          aria-busy={state.status === 'running'}
+        >
           {r.leaderId ? (
             <p>
               Now <strong>{labels[r.leaderId] ?? r.leaderId}</strong> is first in {pct(1 - r.doubt)}{' '}

@@ -90,7 +90,10 @@ export const RobustnessPanel = memo(function RobustnessPanelView({
         <p role="alert">Robustness could not be computed: {robustness.error}</p>
       ) : null}
       {robustness.results ? (
-        <div className={robustness.status === 'running' ? 'stale' : undefined}>
+        <div
+          className={robustness.status === 'running' ? 'stale' : undefined}
+          aria-busy={robustness.status === 'running'}
+        >
           <RobustnessBars results={robustness.results} labels={labels} />
         </div>
       ) : robustness.status === 'running' ? (
