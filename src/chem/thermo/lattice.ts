@@ -191,6 +191,10 @@ function potentialPart(
   }
 }
 
+/** The potential-to-enthalpy correction of a checked request (both raw paths add the same one). */
+const correctionOf = (c: CheckedSaltRequest): number =>
+  latticeEnthalpyCorrectionKJ(c.p, c.cation.shape, c.q, c.anion.shape, c.temperatureK);
+
 /**
  * Compute the lattice by one named method, without calibration, from a request checked at the edge
  * (checkSaltRequest): nothing is checked again here but what the method itself needs (radii, a
@@ -202,13 +206,7 @@ export function rawLatticeOf(
   opts: LatticeOptions = {},
 ): RawLattice {
   const part = potentialPart(c, method, opts);
-  const correctionKJ = latticeEnthalpyCorrectionKJ(
-    c.p,
-    c.cation.shape,
-    c.q,
-    c.anion.shape,
-    c.temperatureK,
-  );
+  const correctionKJ = correctionOf(c);
   return { method, ...part, enthalpyKJ: part.potentialKJ + correctionKJ };
 }
 
@@ -242,13 +240,7 @@ export function rawLatticeNumbersOf(
     volumeFrom = vol.from;
     volumeRelU = vol.relativeSigma;
   } else return rawLatticeOf(c, method);
-  const correctionKJ = latticeEnthalpyCorrectionKJ(
-    c.p,
-    c.cation.shape,
-    c.q,
-    c.anion.shape,
-    c.temperatureK,
-  );
+  const correctionKJ = correctionOf(c);
   return { method, enthalpyKJ: potentialKJ + correctionKJ, volumeFrom, volumeRelU };
 }
 
